@@ -1,0 +1,31 @@
+// Where the embedded setup keeps its data and secrets, and the settings the
+// server gets from it. Shared by `npm start`, `npm run dev` and the migration script.
+import { createHash, randomBytes } from 'node:crypto';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { reachableByServerUser } from './postgres.mjs';
+
+export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
+export const LOCAL_PG_PORT = Number(process.env.NESTKEEPER_PG_PORT ?? 4632);
+
+/** `.data/` in the checkout, or — when the postgres user cannot reach the
+ * checkout — a folder under /var/lib named after the checkout's path. */
+export function localDataDir() {
+  const inCheckout = path.join(projectRoot, '.data');
+  fs.mkdirSync(inCheckout, { recursive: true });
+  if (reachableByServerUser(inCheckout)) return inCheckout;
+  const tag = createHash('sha256').update(projectRoot).digest('hex').slice(0, 12);
+  const fallback = path.join(fs.existsSync('/var/lib/postgresql') ? '/var/lib/postgresql' : os.tmpdir(), `nestkeeper-${tag}`);
+  fs.mkdirSync(fallback, { recursive: true });
+  fs.writeFileSync(path.join(inCheckout, 'WHERE-THE-DATA-IS.txt'), `The database cluster lives in ${fallback} because the postgres user cannot reach this folder.\n`);
+  return fallback;
+}
+
+/** The signing secret, created once beside the data and kept across restarts. */
+export function localJwtSecret(dataDir) {
+  const file = path.join(dataDir, 'jwt-secret');
+  if (!fs.existsSync(file)) fs.writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
+  return fs.readFileSync(file, 'utf8').trim();
+}

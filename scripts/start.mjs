@@ -1,0 +1,86 @@
+// `npm start`: everything from a fresh clone to a running Nestkeeper.
+// `npm run dev` (--dev): the same database, Vite with hot reload, server in watch mode.
+import { spawn } from 'node:child_process';
+import path from 'node:path';
+import { LOCAL_PG_PORT, localDataDir, localJwtSecret, projectRoot } from './lib/local-env.mjs';
+import { ensurePostgresInstalled, startCluster, stopCluster } from './lib/postgres.mjs';
+import { ensureClientBuild, ensureDatabase, ensureDependencies, log, runTs } from './lib/steps.mjs';
+
+const dev = process.argv.includes('--dev');
+const port = Number(process.env.PORT ?? 4600);
+const children = [];
+let clusterDir = null;
+
+async function main() {
+  ensureDependencies();
+  const env = { ...process.env, PORT: String(port), NODE_ENV: dev ? 'development' : 'production' };
+  if (!env.DATABASE_URL) {
+    ensurePostgresInstalled(log);
+    clusterDir = localDataDir();
+    const serverUrl = startCluster({ dataDir: clusterDir, port: LOCAL_PG_PORT, log });
+    log(`PostgreSQL is running on 127.0.0.1:${LOCAL_PG_PORT} (data in ${path.join(clusterDir, 'pgdata')}).`);
+    env.DATABASE_URL = await ensureDatabase(serverUrl, 'nestkeeper');
+    env.JWT_SECRET ??= localJwtSecret(clusterDir);
+  }
+  if (!env.JWT_SECRET) throw new Error('Set JWT_SECRET (32+ characters) when DATABASE_URL points at your own PostgreSQL.');
+  runTs('server/db/prepare.ts', env);
+
+  const tsx = ['--import', 'tsx'];
+  if (dev) {
+    children.push(spawn(process.execPath, [...tsx, '--watch', 'server/index.ts'], { cwd: projectRoot, stdio: 'inherit', env }));
+    children.push(spawn(process.execPath, ['node_modules/vite/bin/vite.js'], { cwd: projectRoot, stdio: 'inherit', env: { ...env, API_PORT: String(port) } }));
+  } else {
+    ensureClientBuild();
+    children.push(spawn(process.execPath, [...tsx, 'server/index.ts'], { cwd: projectRoot, stdio: 'inherit', env }));
+  }
+  for (const child of children) child.on('exit', (code) => !stopping && void shutdown(`a server process ended (exit ${code})`, code ?? 1));
+  await waitForHealth(port);
+  const url = dev ? 'http://127.0.0.1:5173' : `http://127.0.0.1:${port}`;
+  console.log(`
+  Nestkeeper is running at ${url}
+
+  Demo sign-ins (password for all: nestkeeper-demo)
+    owner@demo.test     owner — overview, users, mailbox, scheduled jobs
+    manager@demo.test   shop manager — fleet, bookings, checkout and return
+    tech@demo.test      field technician — my kit, checks, damage reports
+    billing@demo.test   billing clerk — rentals, deposits, invoices
+    owner@other.test    owner of a second firm (shows that firms are kept apart)
+
+  Press Ctrl-C to stop; your data stays for the next start.
+`);
+}
+
+async function waitForHealth(webPort) {
+  for (let i = 0; i < 120; i += 1) {
+    try {
+      const res = await fetch(`http://127.0.0.1:${webPort}/api/health`);
+      if (res.ok) return;
+    } catch {
+      /* not listening yet */
+    }
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error('The server did not answer within a minute.');
+}
+
+let stopping = false;
+async function shutdown(reason, code = 0) {
+  if (stopping) return;
+  stopping = true;
+  log(`Stopping (${reason})…`);
+  await Promise.all(
+    children.map((c) => (c.exitCode !== null ? null : new Promise((resolve) => { c.once('exit', resolve); c.kill('SIGTERM'); }))),
+  );
+  if (clusterDir) {
+    stopCluster(clusterDir);
+    log('PostgreSQL stopped.');
+  }
+  process.exit(code);
+}
+
+process.on('SIGINT', () => void shutdown('Ctrl-C'));
+process.on('SIGTERM', () => void shutdown('SIGTERM'));
+main().catch((err) => {
+  console.error(`\n[nestkeeper] ${err.message}\n`);
+  void shutdown('start-up failed', 1);
+});

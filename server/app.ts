@@ -1,0 +1,61 @@
+import path from 'node:path';
+import cookieParser from 'cookie-parser';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import type { Transporter } from 'nodemailer';
+import type { DataSource } from 'typeorm';
+import { AuthService } from './auth/auth.service';
+import { authRoutes } from './auth/auth.routes';
+import { csrfGuard } from './auth/csrf';
+import { createPassport } from './auth/passport';
+import type { Config } from './config';
+import { healthRoutes } from './health/health.routes';
+import { errorHandler, unknownApiRoute } from './http/error-handler';
+import { JobsService } from './jobs/jobs.service';
+import { jobsRoutes } from './jobs/jobs.routes';
+import { notificationsRoutes } from './notifications/notifications.routes';
+import { outboxJob } from './notifications/outbox-job';
+import { UsersService } from './users/users.service';
+import { usersRoutes } from './users/users.routes';
+
+export type AppDeps = { config: Config; db: DataSource; mail: Transporter };
+
+/** Builds the Express app and its services; `index.ts` decides when to listen. */
+export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: JobsService } {
+  const users = new UsersService(db, config.BCRYPT_COST);
+  const auth = new AuthService(db, users, config.JWT_SECRET);
+  const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM)]);
+
+  const app = express();
+  app.set('trust proxy', 'loopback');
+  app.disable('x-powered-by');
+  app.locals.passport = createPassport(db, config.JWT_SECRET);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'frame-src': ["'self'"],
+          'upgrade-insecure-requests': null,
+        },
+      },
+    }),
+  );
+  app.use(cookieParser());
+  app.use('/api', express.json({ limit: '1mb' }), csrfGuard);
+
+  app.use('/api', healthRoutes(db));
+  app.use('/api/auth', authRoutes(auth, { secureCookies: (config.PUBLIC_URL ?? '').startsWith('https:'), attemptsPer10Min: config.LOGIN_ATTEMPTS_PER_10_MIN }));
+  app.use('/api/users', usersRoutes(users));
+  app.use('/api/mailbox', notificationsRoutes(db));
+  app.use('/api/admin/jobs', jobsRoutes(jobs));
+  app.use('/api', unknownApiRoute);
+
+  const clientDir = path.resolve(config.CLIENT_DIR);
+  app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+  app.get(/^\/(?!api\/).*/, (_req, res, next) => res.sendFile(path.join(clientDir, 'index.html'), (err) => err && next()));
+  app.use(errorHandler);
+  return { app, jobs };
+}

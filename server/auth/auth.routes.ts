@@ -1,0 +1,50 @@
+import { randomBytes } from 'node:crypto';
+import { Router, type CookieOptions, type Response } from 'express';
+import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { changeOwnPasswordPayload, loginPayload } from '../../shared/schemas/users';
+import { endpoint } from '../http/endpoint';
+import { AppError } from '../http/errors';
+import type { AuthService } from './auth.service';
+import { CSRF_COOKIE, SESSION_COOKIE, TOKEN_LIFETIME_SECONDS } from './tokens';
+
+export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; attemptsPer10Min: number }): Router {
+  const router = Router();
+  const at = '/api/auth';
+  const cookieBase: CookieOptions = { sameSite: 'lax', secure: opts.secureCookies, path: '/', maxAge: TOKEN_LIFETIME_SECONDS * 1000 };
+
+  const startSession = (res: Response, token: string) => {
+    res.cookie(SESSION_COOKIE, token, { ...cookieBase, httpOnly: true });
+    res.cookie(CSRF_COOKIE, randomBytes(24).toString('base64url'), { ...cookieBase, httpOnly: false });
+  };
+
+  // Per address and e-mail, so one person's typos do not lock out the whole office.
+  router.post(
+    '/login',
+    rateLimit({
+      windowMs: 10 * 60 * 1000,
+      limit: opts.attemptsPer10Min,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      skipSuccessfulRequests: true,
+      keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
+      handler: (_req, _res, next) => next(new AppError(429, 'rate_limited', 'Too many sign-in attempts; wait a few minutes and try again.')),
+    }),
+  );
+  endpoint(router, at, { method: 'post', path: '/login', summary: 'Sign in; returns a token and sets the session cookie', access: 'public', body: loginPayload }, async ({ body, res }) => {
+    const session = await auth.login(body.email, body.password);
+    startSession(res, session.token);
+    return session;
+  });
+  endpoint(router, at, { method: 'get', path: '/me', summary: 'The signed-in user and their organization', access: 'signed-in' }, ({ actor }) => auth.me(actor));
+  endpoint(router, at, { method: 'post', path: '/logout', summary: 'Sign out (clears the session cookie)', access: 'public' }, ({ res }) => {
+    res.clearCookie(SESSION_COOKIE, { path: '/' });
+    res.clearCookie(CSRF_COOKIE, { path: '/' });
+    return undefined;
+  });
+  endpoint(router, at, { method: 'post', path: '/password', summary: 'Change your own password', access: 'signed-in', body: changeOwnPasswordPayload }, async ({ actor, body, res }) => {
+    // Older tokens stop working; this browser keeps going with a fresh one.
+    startSession(res, await auth.changeOwnPassword(actor, body.currentPassword, body.newPassword));
+    return undefined;
+  });
+  return router;
+}

@@ -1,0 +1,22 @@
+import type { RequestHandler } from 'express';
+import type { Passport } from 'passport';
+import { can, type Capability } from '../../shared/auth/roles';
+import type { Actor } from '../db/transaction';
+import { AppError, forbidden } from '../http/errors';
+
+export const requireSignIn: RequestHandler = (req, res, next) => {
+  const passport = req.app.locals.passport as Passport;
+  passport.authenticate('jwt', { session: false }, (err: unknown, actor: Actor | false) => {
+    if (err) return next(err);
+    if (!actor) return next(new AppError(401, 'unauthenticated', 'Please sign in again.'));
+    req.user = actor;
+    next();
+  })(req, res, next);
+};
+
+export const requireCapability =
+  (capability: Capability): RequestHandler =>
+  (req, _res, next) => {
+    const actor = req.user as Actor;
+    next(can(actor.role, capability) ? undefined : forbidden());
+  };

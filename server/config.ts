@@ -1,0 +1,36 @@
+import { z } from 'zod';
+
+/** The environment, read and validated once at start. A bad value stops the
+ * server with a message naming the variable instead of failing later. */
+const environment = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(4600),
+  HOST: z.string().default('127.0.0.1'),
+  DATABASE_URL: z.string().url(),
+  JWT_SECRET: z.string().min(32, 'must be at least 32 characters'),
+  PUBLIC_URL: z.string().url().optional(),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(4625),
+  MAIL_FROM: z.string().default('Nestkeeper <no-reply@nestkeeper.test>'),
+  PAYMENT_API_KEY: z.string().default('sk_test_nestkeeper_local'),
+  PAYMENT_API_HOST: z.string().default('127.0.0.1'),
+  PAYMENT_API_PORT: z.coerce.number().int().min(0).max(65535).default(4610),
+  PAYMENT_API_PROTOCOL: z.enum(['http', 'https']).default('http'),
+  PAYMENT_WEBHOOK_SECRET: z.string().default('whsec_nestkeeper_local'),
+  START_LOCAL_FAKES: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
+  RUN_SCHEDULER: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
+  CLIENT_DIR: z.string().default('dist/client'),
+  BCRYPT_COST: z.coerce.number().int().min(12).max(15).default(12),
+  LOGIN_ATTEMPTS_PER_10_MIN: z.coerce.number().int().min(1).default(10),
+});
+
+export type Config = z.infer<typeof environment>;
+
+export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = environment.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Nestkeeper cannot start; fix these settings:\n${lines.join('\n')}`);
+  }
+  return parsed.data;
+}

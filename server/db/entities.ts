@@ -1,0 +1,9 @@
+import { AuditEvent } from '../audit/audit-event.entity';
+import { JobLease, JobRun } from '../jobs/job-run.entity';
+import { OutboxMessage } from '../notifications/outbox-message.entity';
+import { SinkMessage } from '../notifications/sink-message.entity';
+import { Organization } from '../organizations/organization.entity';
+import { User } from '../users/user.entity';
+
+/** Every entity the data source knows; a new component adds its own here. */
+export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease];

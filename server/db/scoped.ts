@@ -1,0 +1,60 @@
+import type { DeepPartial, EntityManager, EntityTarget, FindManyOptions, FindOptionsWhere, ObjectLiteral } from 'typeorm';
+import { notFound } from '../http/errors';
+import type { OrgOwned } from './org-owned';
+
+/**
+ * The one way services touch organization-owned rows. It adds the signed-in
+ * user's organization to every read and stamps it on every write, so a
+ * feature cannot forget it. Raw SQL goes through `sql`, where `$1` is always
+ * the organization id.
+ */
+export class Scoped {
+  constructor(
+    readonly manager: EntityManager,
+    readonly organizationId: string,
+  ) {}
+
+  private where<T extends OrgOwned>(where?: FindOptionsWhere<T> | FindOptionsWhere<T>[]) {
+    const org = { organizationId: this.organizationId } as FindOptionsWhere<T>;
+    if (Array.isArray(where)) return where.map((w) => ({ ...w, ...org }));
+    return { ...(where ?? {}), ...org };
+  }
+
+  find<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, options: FindManyOptions<T> = {}) {
+    return this.manager.find(entity, { ...options, where: this.where(options.where) });
+  }
+
+  findAndCount<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, options: FindManyOptions<T> = {}) {
+    return this.manager.findAndCount(entity, { ...options, where: this.where(options.where) });
+  }
+
+  findOne<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, where: FindOptionsWhere<T>, options: Omit<FindManyOptions<T>, 'where'> = {}) {
+    return this.manager.findOne(entity, { ...options, where: this.where(where) });
+  }
+
+  /** The row, or the API's 404 naming `what` — another organization's row is simply not found. */
+  async get<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, where: FindOptionsWhere<T>, what: string, options: Omit<FindManyOptions<T>, 'where'> = {}) {
+    const row = await this.findOne(entity, where, options);
+    if (!row) throw notFound(what);
+    return row;
+  }
+
+  async insert<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, values: DeepPartial<Omit<T, 'organizationId'>>): Promise<T> {
+    const row = this.manager.create(entity, { ...values, organizationId: this.organizationId } as DeepPartial<T>);
+    return this.manager.save(entity, row);
+  }
+
+  /** Save changes to a row this scope loaded; refuses a row of another organization. */
+  save<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, row: T): Promise<T> {
+    if (row.organizationId !== this.organizationId) throw notFound('That record');
+    return this.manager.save(entity, row);
+  }
+
+  count<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, where: FindOptionsWhere<T> = {}) {
+    return this.manager.count(entity, { where: this.where(where) });
+  }
+
+  sql<R = Record<string, unknown>>(text: string, params: unknown[] = []): Promise<R[]> {
+    return this.manager.query(text, [this.organizationId, ...params]);
+  }
+}

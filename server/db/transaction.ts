@@ -1,0 +1,11 @@
+import type { DataSource } from 'typeorm';
+import { Scoped } from './scoped';
+
+/** Who is acting: every service call carries it, so rules can be checked and
+ * records can say who did what. */
+export type Actor = { userId: string; organizationId: string; role: import('../../shared/auth/roles').Role };
+
+/** Run `work` in one transaction, scoped to the actor's organization. */
+export function inOrganization<T>(db: DataSource, organizationId: string, work: (tx: Scoped) => Promise<T>): Promise<T> {
+  return db.transaction((manager) => work(new Scoped(manager, organizationId)));
+}

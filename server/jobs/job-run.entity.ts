@@ -1,0 +1,55 @@
+import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+export type JobRunStatus = 'running' | 'succeeded' | 'failed';
+
+/** One execution of a scheduled job, on whichever instance won the fire. */
+@Entity({ name: 'job_runs' })
+@Index(['jobName', 'startedAt'])
+export class JobRun {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'job_name', type: 'text' })
+  jobName: string;
+
+  @Column({ type: 'text' })
+  trigger: 'schedule' | 'manual';
+
+  /** The cron slot this run answers; null for a manual run. */
+  @Column({ name: 'scheduled_for', type: 'timestamptz', nullable: true })
+  scheduledFor: Date | null;
+
+  @Column({ name: 'instance_id', type: 'text' })
+  instanceId: string;
+
+  @Column({ name: 'started_at', type: 'timestamptz' })
+  startedAt: Date;
+
+  @Column({ name: 'finished_at', type: 'timestamptz', nullable: true })
+  finishedAt: Date | null;
+
+  @Column({ type: 'text' })
+  status: JobRunStatus;
+
+  @Column({ type: 'jsonb', nullable: true })
+  summary: Record<string, unknown> | null;
+
+  @Column({ type: 'text', nullable: true })
+  error: string | null;
+}
+
+/** A claim on one cron slot: the first instance to insert the key runs it. */
+@Entity({ name: 'job_leases' })
+export class JobLease {
+  @Column({ type: 'text', primary: true })
+  key: string;
+
+  @Column({ name: 'instance_id', type: 'text' })
+  instanceId: string;
+
+  @Column({ name: 'claimed_at', type: 'timestamptz' })
+  claimedAt: Date;
+
+  @Column({ name: 'expires_at', type: 'timestamptz' })
+  expiresAt: Date;
+}

@@ -1,0 +1,87 @@
+import { hostname } from 'node:os';
+import { randomUUID } from 'node:crypto';
+import cron, { type ScheduledTask } from 'node-cron';
+import type { DataSource } from 'typeorm';
+import { notFound } from '../http/errors';
+import type { JobDefinition } from './job';
+import { JobRun } from './job-run.entity';
+import { pgRunCoordinator } from './pg-run-coordinator';
+
+const publicRun = (r: JobRun) => ({
+  id: r.id,
+  trigger: r.trigger,
+  scheduledFor: r.scheduledFor,
+  startedAt: r.startedAt,
+  finishedAt: r.finishedAt,
+  status: r.status,
+  summary: r.summary,
+  error: r.error,
+});
+
+export class JobsService {
+  readonly instanceId = `${hostname()}:${process.pid}:${randomUUID().slice(0, 8)}`;
+  private tasks: ScheduledTask[] = [];
+
+  constructor(
+    private readonly db: DataSource,
+    private readonly jobs: JobDefinition[],
+  ) {}
+
+  private find(name: string) {
+    const job = this.jobs.find((j) => j.name === name);
+    if (!job) throw notFound(`The scheduled job "${name}"`);
+    return job;
+  }
+
+  /** Run one job now and log it; failures are logged, not thrown, so the schedule carries on. */
+  async run(name: string, trigger: 'schedule' | 'manual', scheduledFor: Date | null = null) {
+    const job = this.find(name);
+    const repo = this.db.getRepository(JobRun);
+    const run = await repo.save(repo.create({ jobName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running' }));
+    try {
+      run.summary = await job.run({ db: this.db, now: new Date() });
+      run.status = 'succeeded';
+    } catch (err) {
+      run.status = 'failed';
+      run.error = err instanceof Error ? err.message : String(err);
+    }
+    run.finishedAt = new Date();
+    return publicRun(await repo.save(run));
+  }
+
+  async list() {
+    const last: JobRun[] = await this.db
+      .getRepository(JobRun)
+      .createQueryBuilder('r')
+      .distinctOn(['r.job_name'])
+      .orderBy('r.job_name')
+      .addOrderBy('r.started_at', 'DESC')
+      .getMany();
+    return {
+      items: this.jobs.map((j) => {
+        const lastRun = last.find((r) => r.jobName === j.name);
+        return { name: j.name, description: j.description, schedule: j.schedule, lastRun: lastRun ? publicRun(lastRun) : null };
+      }),
+    };
+  }
+
+  /** Start every job's cron; each fire runs on exactly one instance (pgRunCoordinator). */
+  start() {
+    const runCoordinator = pgRunCoordinator(this.db, this.instanceId);
+    this.tasks = this.jobs.map((job) =>
+      cron.schedule(job.schedule, (ctx) => this.run(job.name, 'schedule', ctx.date).then(() => undefined), {
+        name: job.name,
+        timezone: job.timeZone,
+        noOverlap: true,
+        distributed: true,
+        runCoordinator,
+        distributedLease: 60 * 60 * 1000,
+      }),
+    );
+  }
+
+  async stop() {
+    await Promise.all(this.tasks.map((t) => t.destroy()));
+    this.tasks = [];
+  }
+}

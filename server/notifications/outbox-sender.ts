@@ -1,0 +1,58 @@
+import type { Transporter } from 'nodemailer';
+import type { DataSource } from 'typeorm';
+import { OutboxMessage } from './outbox-message.entity';
+
+const BATCH = 25;
+const MAX_BACKOFF_SECONDS = 60 * 60;
+
+/** 30 s, 1 min, 2 min … capped at an hour: an outage delays mail, never drops it. */
+export const backoffSeconds = (attempts: number) => Math.min(30 * 2 ** Math.max(0, attempts - 1), MAX_BACKOFF_SECONDS);
+
+/**
+ * Deliver due outbox messages. Rows are locked with SKIP LOCKED so two
+ * instances never take the same message, and a message is marked sent in the
+ * transaction that held its lock. The fixed Message-ID lets the receiving end
+ * recognise a repeat should a commit fail after the SMTP server accepted.
+ */
+export async function deliverOutbox(db: DataSource, transport: Transporter, from: string) {
+  let sent = 0;
+  let deferred = 0;
+  for (;;) {
+    const batch = await db.transaction(async (manager) => {
+      const due = await manager
+        .createQueryBuilder(OutboxMessage, 'm')
+        .where("m.status = 'pending' AND m.next_attempt_at <= now()")
+        .orderBy('m.created_at', 'ASC')
+        .limit(BATCH)
+        .setLock('pessimistic_write')
+        .setOnLocked('skip_locked')
+        .getMany();
+      for (const message of due) {
+        message.attempts += 1;
+        try {
+          await transport.sendMail({
+            from,
+            to: message.recipients,
+            subject: message.subject,
+            text: message.textBody,
+            html: message.htmlBody,
+            messageId: message.messageId,
+          });
+          message.status = 'sent';
+          message.sentAt = new Date();
+          message.lastError = null;
+          sent += 1;
+        } catch (err) {
+          message.lastError = err instanceof Error ? err.message.slice(0, 500) : String(err);
+          message.nextAttemptAt = new Date(Date.now() + backoffSeconds(message.attempts) * 1000);
+          deferred += 1;
+        }
+        await manager.save(OutboxMessage, message);
+      }
+      return due.length;
+    });
+    if (batch < BATCH || deferred > 0) break;
+  }
+  const [{ pending }] = await db.query(`SELECT count(*)::int AS pending FROM outbox_messages WHERE status = 'pending'`);
+  return { sent, deferred, pending };
+}

@@ -1,0 +1,31 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+export type OrganizationSettings = {
+  dueSoonDays: number;
+  decisionRule: 'simple' | 'guarded';
+};
+
+export const defaultOrganizationSettings: OrganizationSettings = { dueSoonDays: 30, decisionRule: 'simple' };
+
+@Entity({ name: 'organizations' })
+export class Organization {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ type: 'text' })
+  name: string;
+
+  /** IANA zone; dates are calendar dates in this zone (DESIGN.md §5). */
+  @Column({ name: 'time_zone', type: 'text', default: 'UTC' })
+  timeZone: string;
+
+  /** ISO 4217 code. */
+  @Column({ type: 'char', length: 3, default: 'EUR' })
+  currency: string;
+
+  @Column({ type: 'jsonb', default: () => `'{}'::jsonb` })
+  settings: Partial<OrganizationSettings>;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+}

@@ -1,0 +1,31 @@
+import bcrypt from 'bcrypt';
+import type { DataSource } from 'typeorm';
+import { Scoped } from '../db/scoped';
+import { enqueueMail } from '../notifications/outbox';
+import { Organization } from '../organizations/organization.entity';
+import { User } from '../users/user.entity';
+import { DEMO_PASSWORD, demoFirm, otherFirm } from './demo-people';
+
+/** Fill an empty database with the invented demo firms. Does nothing when any
+ * organization exists, so a restart never duplicates or overwrites data. */
+export async function seedDemoIfEmpty(db: DataSource, bcryptCost = 12): Promise<boolean> {
+  if ((await db.getRepository(Organization).count()) > 0) return false;
+  const passwordHash = await bcrypt.hash(DEMO_PASSWORD, bcryptCost);
+  await db.transaction(async (manager) => {
+    for (const firm of [demoFirm, otherFirm]) {
+      const org = await manager.save(Organization, manager.create(Organization, { name: firm.name, timeZone: firm.timeZone, currency: firm.currency }));
+      const tx = new Scoped(manager, org.id);
+      for (const person of firm.people) await tx.insert(User, { ...person, passwordHash });
+      const owner = firm.people.find((p) => p.role === 'owner')!;
+      await enqueueMail(tx, [owner.email], {
+        subject: `Welcome to Nestkeeper, ${firm.name}`,
+        heading: `${firm.name} is set up`,
+        paragraphs: [
+          `Your firm's Nestkeeper is ready. Everyone you add signs in with their own e-mail address and a password you give them; they can change it under "My password".`,
+          `This mailbox shows every e-mail Nestkeeper sends for ${firm.name}, so you can see what your team and customers receive.`,
+        ],
+      });
+    }
+  });
+  return true;
+}

@@ -1,0 +1,36 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { Role } from '../../shared/auth/roles';
+import { OrgOwned } from '../db/org-owned';
+
+@Entity({ name: 'users' })
+export class User extends OrgOwned {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  /** Sign-in name; unique across organizations because sign-in asks no firm. */
+  @Index({ unique: true })
+  @Column({ type: 'text' })
+  email: string;
+
+  @Column({ type: 'text' })
+  name: string;
+
+  @Column({ type: 'text' })
+  role: Role;
+
+  @Column({ name: 'password_hash', type: 'text', select: false })
+  passwordHash: string;
+
+  @Column({ type: 'boolean', default: false })
+  disabled: boolean;
+
+  /** Bumped on disable and password change so tokens issued before stop working. */
+  @Column({ name: 'token_version', type: 'integer', default: 0 })
+  tokenVersion: number;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
+  updatedAt: Date;
+}

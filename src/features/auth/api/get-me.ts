@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { authKeys } from './keys';
+import type { Session } from './types';
+
+export function getMe(signal?: AbortSignal): Promise<Session> {
+  return apiClient.get<Session>('/auth/me', { signal });
+}
+
+export const meQueryOptions = () =>
+  queryOptions({
+    queryKey: authKeys.me(),
+    queryFn: ({ signal }) => getMe(signal),
+    staleTime: 5 * 60_000,
+  });
+
+export function useMe() {
+  return useQuery(meQueryOptions());
+}

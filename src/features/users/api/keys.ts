@@ -1,0 +1,4 @@
+export const usersKeys = {
+  all: ['users'] as const,
+  list: () => [...usersKeys.all, 'list'] as const,
+};

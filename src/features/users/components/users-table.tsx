@@ -1,0 +1,126 @@
+import type { ColDef } from 'ag-grid-community';
+import type { CustomCellRendererProps } from 'ag-grid-react';
+import { useMemo } from 'react';
+import { Button } from '../../../components/button';
+import { actionsColumnType, DataGrid } from '../../../components/data-grid';
+import { StatusChip } from '../../../components/status-chip';
+import { formatDate, isoTimestamp } from '../../../lib/format';
+import { roleTitles } from '../../../lib/roles';
+import type { User } from '../api/types';
+
+export interface UserRowActions {
+  onChangeRole: (user: User) => void;
+  onToggleDisabled: (user: User) => void;
+  onResetPassword: (user: User) => void;
+  /** The row whose disable/enable is in flight. */
+  busyUserId?: string;
+}
+
+const statusWord = (user: User) => (user.disabled ? 'Disabled' : 'Active');
+
+export function UsersTable({
+  users,
+  currentUserId,
+  timeZone,
+  actions,
+}: {
+  users: User[] | undefined;
+  currentUserId: string;
+  timeZone?: string;
+  actions: UserRowActions;
+}) {
+  const columns = useMemo<ColDef<User>[]>(
+    () => [
+      {
+        headerName: 'Name',
+        field: 'name',
+        minWidth: 160,
+        cellRenderer: (p: CustomCellRendererProps<User, string>) =>
+          p.data ? (
+            <span>
+              {p.data.name}
+              {p.data.id === currentUserId ? <span className="ml-1 text-sm text-ink-500">(you)</span> : null}
+            </span>
+          ) : null,
+      },
+      {
+        headerName: 'E-mail',
+        field: 'email',
+        minWidth: 200,
+        cellClass: 'font-mono text-[0.85rem]',
+      },
+      {
+        headerName: 'Role',
+        colId: 'role',
+        minWidth: 130,
+        valueGetter: (p) => (p.data ? roleTitles[p.data.role] : ''),
+      },
+      {
+        headerName: 'Status',
+        colId: 'status',
+        minWidth: 120,
+        maxWidth: 150,
+        valueGetter: (p) => (p.data ? statusWord(p.data) : ''),
+        cellRenderer: (p: CustomCellRendererProps<User>) =>
+          p.data ? (
+            <StatusChip tone={p.data.disabled ? 'paused' : 'ok'} label={statusWord(p.data)} />
+          ) : null,
+      },
+      {
+        headerName: 'Added',
+        colId: 'createdAt',
+        field: 'createdAt',
+        minWidth: 120,
+        maxWidth: 160,
+        valueFormatter: (p) => formatDate(p.value as string, timeZone),
+        // CSV gets the exact timestamp, the screen a readable date.
+        useValueFormatterForExport: false,
+        comparator: (a: string, b: string) => isoTimestamp(a).localeCompare(isoTimestamp(b)),
+      },
+      {
+        headerName: 'Actions',
+        colId: 'actions',
+        type: actionsColumnType,
+        minWidth: 300,
+        flex: 1.6,
+        cellRenderer: (p: CustomCellRendererProps<User>) => {
+          const user = p.data;
+          if (!user) return null;
+          if (user.id === currentUserId) {
+            return <span className="text-sm text-ink-500">Change your own password under “My password”.</span>;
+          }
+          return (
+            <div className="flex h-full items-center gap-1.5">
+              <Button size="sm" onClick={() => actions.onChangeRole(user)}>
+                Change role
+              </Button>
+              <Button
+                size="sm"
+                variant={user.disabled ? 'secondary' : 'danger'}
+                busy={actions.busyUserId === user.id}
+                onClick={() => actions.onToggleDisabled(user)}
+              >
+                {user.disabled ? 'Enable' : 'Disable'}
+              </Button>
+              <Button size="sm" onClick={() => actions.onResetPassword(user)}>
+                Reset password
+              </Button>
+            </div>
+          );
+        },
+      },
+    ],
+    [currentUserId, timeZone, actions],
+  );
+
+  return (
+    <DataGrid<User>
+      label="Users"
+      rows={users}
+      columns={columns}
+      rowId={(u) => u.id}
+      exportFileName="nestkeeper-users.csv"
+      emptyMessage="No users yet."
+    />
+  );
+}

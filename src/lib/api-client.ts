@@ -1,0 +1,146 @@
+/**
+ * The one way the client talks to the Nestkeeper API: same-origin fetch with
+ * the session cookie, JSON in and out, the CSRF header on every write, and the
+ * server's error body `{error:{code,message,details}}` turned into an ApiError.
+ */
+
+export type FieldErrors = Record<string, string>;
+
+export class ApiError extends Error {
+  readonly status: number;
+  readonly code: string;
+  readonly details: unknown;
+  /** Per-field messages from `details.fields`, keyed by the payload's field name. */
+  readonly fieldErrors: FieldErrors;
+
+  constructor(init: { status: number; code: string; message: string; details?: unknown }) {
+    super(init.message);
+    this.name = 'ApiError';
+    this.status = init.status;
+    this.code = init.code;
+    this.details = init.details;
+    this.fieldErrors = readFieldErrors(init.details);
+  }
+
+  get isClientError(): boolean {
+    return this.status >= 400 && this.status < 500;
+  }
+}
+
+export function isApiError(error: unknown): error is ApiError {
+  return error instanceof ApiError;
+}
+
+/** Accepts `{fields: {name: "msg"}}` or `{fields: {name: ["msg", …]}}`. */
+function readFieldErrors(details: unknown): FieldErrors {
+  if (!details || typeof details !== 'object' || !('fields' in details)) return {};
+  const fields = (details as { fields: unknown }).fields;
+  if (!fields || typeof fields !== 'object') return {};
+  const out: FieldErrors = {};
+  for (const [name, value] of Object.entries(fields as Record<string, unknown>)) {
+    const message = Array.isArray(value) ? value.find((v) => typeof v === 'string') : value;
+    if (typeof message === 'string' && message) out[name] = message;
+  }
+  return out;
+}
+
+export const csrfCookieName = 'nk_csrf';
+
+function readCookie(name: string): string | undefined {
+  if (typeof document === 'undefined') return undefined;
+  for (const part of document.cookie.split(';')) {
+    const [key, ...rest] = part.trim().split('=');
+    if (key === name) return decodeURIComponent(rest.join('='));
+  }
+  return undefined;
+}
+
+type Query = Record<string, string | number | boolean | null | undefined>;
+
+export interface RequestOptions {
+  query?: Query;
+  body?: unknown;
+  signal?: AbortSignal;
+}
+
+function buildUrl(path: string, query?: Query): string {
+  const url = path.startsWith('/api') ? path : `/api${path.startsWith('/') ? '' : '/'}${path}`;
+  if (!query) return url;
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) {
+    if (value !== undefined && value !== null) params.set(key, String(value));
+  }
+  const qs = params.toString();
+  return qs ? `${url}?${qs}` : url;
+}
+
+async function readErrorBody(response: Response): Promise<ApiError> {
+  let body: unknown;
+  try {
+    body = await response.json();
+  } catch {
+    body = undefined;
+  }
+  const error = (body as { error?: { code?: unknown; message?: unknown; details?: unknown } } | undefined)?.error;
+  if (error && typeof error.code === 'string') {
+    return new ApiError({
+      status: response.status,
+      code: error.code,
+      message: typeof error.message === 'string' && error.message ? error.message : fallbackMessage(response.status),
+      details: error.details,
+    });
+  }
+  return new ApiError({ status: response.status, code: 'http_error', message: fallbackMessage(response.status) });
+}
+
+function fallbackMessage(status: number): string {
+  if (status === 401) return 'You are not signed in.';
+  if (status === 403) return 'Your role does not allow this.';
+  if (status === 404) return 'That was not found.';
+  if (status === 429) return 'Too many attempts. Wait a minute and try again.';
+  if (status >= 500) return 'The server could not finish that. Try again in a moment.';
+  return `The request failed (HTTP ${status}).`;
+}
+
+export async function request<T>(method: string, path: string, options: RequestOptions = {}): Promise<T> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (method !== 'GET' && method !== 'HEAD') {
+    const csrf = readCookie(csrfCookieName);
+    if (csrf) headers['X-CSRF-Token'] = csrf;
+  }
+
+  let response: Response;
+  try {
+    response = await fetch(buildUrl(path, options.query), {
+      method,
+      headers,
+      credentials: 'include',
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      signal: options.signal,
+    });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
+    throw new ApiError({
+      status: 0,
+      code: 'network_error',
+      message: 'Could not reach the Nestkeeper server. Check the connection and try again.',
+    });
+  }
+
+  if (!response.ok) throw await readErrorBody(response);
+  if (response.status === 204) return undefined as T;
+  const text = await response.text();
+  return (text ? JSON.parse(text) : undefined) as T;
+}
+
+export const apiClient = {
+  get: <T>(path: string, options?: Omit<RequestOptions, 'body'>) => request<T>('GET', path, options),
+  post: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) =>
+    request<T>('POST', path, { ...options, body }),
+  patch: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) =>
+    request<T>('PATCH', path, { ...options, body }),
+  put: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) =>
+    request<T>('PUT', path, { ...options, body }),
+  delete: <T>(path: string, options?: Omit<RequestOptions, 'body'>) => request<T>('DELETE', path, options),
+};

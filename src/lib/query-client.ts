@@ -1,0 +1,33 @@
+import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
+import { isApiError } from './api-client';
+
+type SessionEndedHandler = (key: readonly unknown[] | undefined) => void;
+
+/** Called when any read or write comes back 401 (the session has ended), with that query's or mutation's key. */
+let onSessionEnded: SessionEndedHandler | undefined;
+export function setSessionEndedHandler(handler: SessionEndedHandler | undefined): void {
+  onSessionEnded = handler;
+}
+
+function noticeSessionEnd(error: unknown, key: readonly unknown[] | undefined): void {
+  if (isApiError(error) && error.status === 401) onSessionEnded?.(key);
+}
+
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    queryCache: new QueryCache({ onError: (error, query) => noticeSessionEnd(error, query.queryKey) }),
+    mutationCache: new MutationCache({
+      onError: (error, _vars, _ctx, mutation) => noticeSessionEnd(error, mutation.options.mutationKey),
+    }),
+    defaultOptions: {
+      queries: {
+        staleTime: 30_000,
+        // A 4xx will not change by asking again; network and 5xx get two more tries.
+        retry: (failureCount, error) => !(isApiError(error) && error.isClientError) && failureCount < 2,
+      },
+      mutations: { retry: false },
+    },
+  });
+}
+
+export const queryClient = createQueryClient();

@@ -13,7 +13,7 @@ export class Foundation1796161079468 implements MigrationInterface {
                 "name" text NOT NULL,
                 "time_zone" text NOT NULL DEFAULT 'UTC',
                 "currency" character(3) NOT NULL DEFAULT 'EUR',
-                "settings" jsonb NOT NULL DEFAULT '{}'::jsonb,
+                "settings" jsonb NOT NULL,
                 "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(),
                 CONSTRAINT "PK_6b031fcd0863e3f6b44230163f9" PRIMARY KEY ("id")
             )
@@ -26,7 +26,7 @@ export class Foundation1796161079468 implements MigrationInterface {
                 "action" text NOT NULL,
                 "subject_type" text NOT NULL,
                 "subject_id" text NOT NULL,
-                "details" jsonb NOT NULL DEFAULT '{}'::jsonb,
+                "details" jsonb NOT NULL,
                 "at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(),
                 CONSTRAINT "PK_910f64d901a5c3e9878f0d4a407" PRIMARY KEY ("id")
             )

@@ -21,8 +21,8 @@ export class AuditEvent extends OrgOwned {
   @Column({ name: 'subject_id', type: 'text' })
   subjectId: string;
 
-  @Column({ type: 'jsonb', default: () => `'{}'::jsonb` })
-  details: Record<string, unknown>;
+  @Column({ type: 'jsonb' })
+  details: Record<string, unknown> = {};
 
   @CreateDateColumn({ name: 'at', type: 'timestamptz' })
   at: Date;

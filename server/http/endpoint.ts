@@ -42,7 +42,7 @@ export function endpoint<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
   spec: EndpointSpec<B, Q>,
   handler: (input: Input<B, Q>) => Promise<unknown> | unknown,
 ): void {
-  documentedEndpoints.push({ ...spec, path: mountedAt + spec.path });
+  documentedEndpoints.push({ ...spec, path: mountedAt + (spec.path === '/' ? '' : spec.path) });
   const guards =
     spec.access === 'public' ? [] : spec.access === 'signed-in' ? [requireSignIn] : [requireSignIn, requireCapability(spec.access)];
   router[spec.method](spec.path, ...guards, async (req: Request, res: Response, next: NextFunction) => {

@@ -23,8 +23,8 @@ export class Organization {
   @Column({ type: 'char', length: 3, default: 'EUR' })
   currency: string;
 
-  @Column({ type: 'jsonb', default: () => `'{}'::jsonb` })
-  settings: Partial<OrganizationSettings>;
+  @Column({ type: 'jsonb' })
+  settings: Partial<OrganizationSettings> = {};
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;

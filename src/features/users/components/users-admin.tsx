@@ -57,7 +57,6 @@ export function UsersAdmin({ currentUserId }: { currentUserId: string }) {
       busyUserId,
     }),
     // `update.mutate` is stable; busyUserId changes re-render the buttons.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
     [busyUserId],
   );
 

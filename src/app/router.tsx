@@ -1,0 +1,55 @@
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import type { ComponentType } from 'react';
+import { RequireSession } from '../features/auth/components/require-session';
+import type { Capability } from '../lib/roles';
+import { AppShell } from './shell/app-shell';
+import { RequireCapability } from './shell/require-capability';
+import { RouteError } from './shell/route-error';
+import { Splash } from './shell/splash';
+
+/** Every screen is its own chunk; its module's default export is the screen. */
+function screen(load: () => Promise<{ default: ComponentType }>): RouteObject['lazy'] {
+  return { Component: async () => (await load()).default };
+}
+
+/** Screens only some roles may open (same capability as their nav entry). */
+function gated(capability: Capability, children: RouteObject[]): RouteObject {
+  return { element: <RequireCapability capability={capability} />, children };
+}
+
+export const routes: RouteObject[] = [
+  {
+    path: '/sign-in',
+    lazy: screen(() => import('./routes/sign-in')),
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Splash />,
+  },
+  {
+    path: '/',
+    element: (
+      <RequireSession>
+        <AppShell />
+      </RequireSession>
+    ),
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Splash />,
+    children: [
+      {
+        // Errors inside a screen keep the shell (and its way out) on screen.
+        errorElement: <RouteError />,
+        children: [
+          { index: true, lazy: screen(() => import('./routes/home')) },
+          gated('users.manage', [{ path: 'users', lazy: screen(() => import('./routes/users')) }]),
+          gated('mailbox.read', [{ path: 'mailbox', lazy: screen(() => import('./routes/mailbox')) }]),
+          gated('jobs.run', [{ path: 'admin/jobs', lazy: screen(() => import('./routes/jobs')) }]),
+          { path: 'account/password', lazy: screen(() => import('./routes/account-password')) },
+          { path: '*', lazy: screen(() => import('./routes/not-found')) },
+        ],
+      },
+    ],
+  },
+];
+
+export function createRouter() {
+  return createBrowserRouter(routes);
+}

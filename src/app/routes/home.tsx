@@ -1,0 +1,137 @@
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import { EmptyState } from '../../components/empty-state';
+import { PageHeader } from '../../components/page-header';
+import { useSession } from '../../features/auth/components/session-context';
+import type { Role } from '../../lib/roles';
+
+interface Panel {
+  title: string;
+  body: ReactNode;
+}
+
+interface RoleHome {
+  title: string;
+  description: string;
+  panels: Panel[];
+  /** Pages that already exist and help this role get started. */
+  links?: { to: string; label: string; note: string }[];
+}
+
+/** Each role's home. Panels say what will appear once the feature behind them lands — no invented numbers. */
+const homes: Record<Role, RoleHome> = {
+  owner: {
+    title: "Owner's overview",
+    description: 'What needs your decision across the fleet, the calendar and the books.',
+    panels: [
+      {
+        title: 'Recalibrations due',
+        body: 'Overdue and due-soon recalibrations will appear here once the fleet register is set up, with the bookings each one puts at risk.',
+      },
+      {
+        title: 'Out-of-tolerance reviews',
+        body: 'When a calibration comes back out of tolerance as found, or a field check fails, the jobs and rentals to re-assess will be listed here.',
+      },
+      {
+        title: 'Use and revenue per kit',
+        body: 'Days booked and rental revenue per kit will appear here once bookings and rentals are being recorded.',
+      },
+    ],
+    links: [
+      { to: '/users', label: 'Users', note: 'Add the people in your firm and give each a role.' },
+      { to: '/mailbox', label: 'Mailbox', note: 'Read every e-mail Nestkeeper has sent.' },
+      { to: '/admin/jobs', label: 'Scheduled jobs', note: 'See when the daily scans last ran, or run one now.' },
+    ],
+  },
+  manager: {
+    title: 'Shop floor today',
+    description: 'What goes out, what comes back and what is waiting on you today.',
+    panels: [
+      {
+        title: 'Going out today',
+        body: 'Bookings that start today will appear here once the booking board is in use, each with its packing list to check out.',
+      },
+      {
+        title: 'Coming back today',
+        body: 'Kit due back today, and anything returned late, will appear here once bookings are checked out.',
+      },
+      {
+        title: 'Held items',
+        body: 'Items taken out of service after an incident or a failed check will wait here until a passing check or a new calibration lets you release them.',
+      },
+    ],
+  },
+  technician: {
+    title: 'My kit',
+    description: 'The kit in your care and the checks it needs.',
+    panels: [
+      {
+        title: 'Kit with me',
+        body: 'The trackers, probes, tips and batteries booked out to you will appear here, each with its calibration status.',
+      },
+      {
+        title: 'Checks to do',
+        body: 'Probe tips that need a validation before their next job, and other field checks, will be listed here.',
+      },
+      {
+        title: 'Report damage',
+        body: 'Reporting a dropped tip or other damage from this phone, with photos, will start here. Until then, tell your shop manager straight away and do not use the item.',
+      },
+    ],
+  },
+  billing: {
+    title: 'Billing desk',
+    description: 'Rentals to price, deposits to handle and invoices to issue.',
+    panels: [
+      {
+        title: 'Rentals to price',
+        body: 'Rental bookings waiting for a quote will appear here once customers and the rate card are set up.',
+      },
+      {
+        title: 'Deposit holds',
+        body: 'Card holds taken at checkout, and holds close to lapsing, will be listed here with what can still be captured.',
+      },
+      {
+        title: 'Invoices to issue',
+        body: 'Returned rentals ready to invoice will appear here, with any damage or late charges.',
+      },
+    ],
+  },
+};
+
+export default function HomeRoute() {
+  const { user } = useSession();
+  const home = homes[user.role];
+  return (
+    <>
+      <PageHeader title={home.title} description={home.description} />
+      <div className="grid gap-3 md:grid-cols-2 xl:grid-cols-3">
+        {home.panels.map((panel) => (
+          <EmptyState key={panel.title} title={panel.title}>
+            {panel.body}
+          </EmptyState>
+        ))}
+      </div>
+      {home.links ? (
+        <section aria-labelledby="ready-now" className="mt-8">
+          <h2 id="ready-now" className="mb-2 text-lg font-bold">
+            Ready now
+          </h2>
+          <ul className="grid gap-2 md:grid-cols-3">
+            {home.links.map((link) => (
+              <li key={link.to}>
+                <Link
+                  to={link.to}
+                  className="block rounded-lg border border-paper-line bg-card px-4 py-3 hover:border-brass-deep hover:bg-brass-wash"
+                >
+                  <span className="block font-semibold text-ink-900">{link.label}</span>
+                  <span className="block text-sm text-ink-700">{link.note}</span>
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,120 @@
+import { useState } from 'react';
+import { NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
+import { Wordmark } from '../../components/brand-mark';
+import { CrossIcon, MenuIcon } from '../../components/icons';
+import { useSignOut } from '../../features/auth/api/sign-out';
+import { useSession } from '../../features/auth/components/session-context';
+import { can, roleTitles } from '../../lib/roles';
+import { navItems } from './nav-items';
+
+const navId = 'main-navigation';
+
+/** Page frame: ink top bar, navigation by role (side rail; a bottom-sheet menu on phones), content. */
+export function AppShell() {
+  const { user, organization } = useSession();
+  const location = useLocation();
+  const navigation = useNavigation();
+  const navigate = useNavigate();
+  const signOut = useSignOut({ onSignedOut: () => navigate('/sign-in', { replace: true }) });
+  // The phone menu is open only on the page where it was opened, so following a link closes it.
+  const [menuOpenAt, setMenuOpenAt] = useState<string | null>(null);
+  const menuOpen = menuOpenAt === location.pathname;
+
+  const items = navItems.filter((item) => !item.capability || can(user.role, item.capability));
+  const loadingPage = navigation.state === 'loading';
+
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-card focus:px-3 focus:py-2"
+      >
+        Skip to content
+      </a>
+
+      <header className="on-ink sticky top-0 z-30 bg-ink-900 text-paper">
+        <div className="flex h-14 items-center gap-3 px-3 sm:px-5">
+          <NavLink to="/" className="rounded text-paper" aria-label="Nestkeeper home">
+            <Wordmark size={26} />
+          </NavLink>
+          <span className="hidden truncate text-sm text-ink-300 md:inline">{organization.name}</span>
+          <div className="ml-auto flex min-w-0 items-center gap-3">
+            <p className="min-w-0 truncate text-right text-sm leading-tight">
+              <span className="block truncate font-semibold">{user.name}</span>
+              <span className="block truncate text-brass-soft">{roleTitles[user.role]}</span>
+            </p>
+            <button
+              type="button"
+              onClick={() => signOut.mutate()}
+              disabled={signOut.isPending}
+              className="min-h-9 shrink-0 rounded-md border border-ink-700 px-3 text-sm font-semibold text-paper hover:bg-ink-800"
+            >
+              Sign out
+            </button>
+          </div>
+        </div>
+        <div
+          aria-hidden="true"
+          className={`h-0.5 bg-brass transition-opacity ${loadingPage ? 'animate-pulse opacity-100' : 'opacity-0'}`}
+        />
+        {loadingPage ? (
+          <span role="status" className="sr-only">
+            Loading page…
+          </span>
+        ) : null}
+      </header>
+
+      <div className="flex flex-1">
+        <nav
+          id={navId}
+          aria-label="Main navigation"
+          className={`${menuOpen ? 'fixed inset-x-0 bottom-14 z-40 rounded-t-xl shadow-2xl' : 'hidden'} on-ink bg-ink-900 p-3 sm:static sm:block sm:w-52 sm:shrink-0 sm:rounded-none sm:bg-ink-800 sm:p-3 sm:shadow-none`}
+        >
+          <ul className="flex flex-col gap-1">
+            {items.map((item) => (
+              <li key={item.to}>
+                <NavLink
+                  to={item.to}
+                  end={item.end}
+                  className={({ isActive }) =>
+                    `flex min-h-11 items-center rounded-md border-l-4 px-3 text-base sm:min-h-9 ${
+                      isActive
+                        ? 'border-brass bg-ink-700 font-semibold text-paper'
+                        : 'border-transparent text-ink-100 hover:bg-ink-700'
+                    }`
+                  }
+                >
+                  {item.label}
+                </NavLink>
+              </li>
+            ))}
+          </ul>
+        </nav>
+
+        <main id="main" tabIndex={-1} className="min-w-0 flex-1 px-3 pt-5 pb-24 outline-none sm:px-6 sm:pb-10">
+          <div className="mx-auto max-w-6xl">
+            <Outlet />
+          </div>
+        </main>
+      </div>
+
+      {/* Phones: the menu button sits at the bottom, under the thumb. */}
+      {menuOpen ? (
+        <div aria-hidden="true" className="fixed inset-0 z-30 bg-ink-950/50 sm:hidden" onClick={() => setMenuOpenAt(null)} />
+      ) : null}
+      <div className="on-ink fixed inset-x-0 bottom-0 z-40 flex h-14 items-center border-t border-ink-700 bg-ink-900 px-3 sm:hidden">
+        <button
+          type="button"
+          aria-expanded={menuOpen}
+          aria-controls={navId}
+          onClick={() => setMenuOpenAt(menuOpen ? null : location.pathname)}
+          className="flex min-h-11 flex-1 items-center justify-center gap-2 rounded-md font-semibold text-paper hover:bg-ink-800"
+        >
+          {menuOpen ? <CrossIcon size={20} /> : <MenuIcon size={20} />}
+          {menuOpen ? 'Close menu' : 'Menu'}
+        </button>
+      </div>
+    </div>
+  );
+}
+

@@ -1,0 +1,4 @@
+export const jobsKeys = {
+  all: ['jobs'] as const,
+  list: () => [...jobsKeys.all, 'list'] as const,
+};

@@ -1,0 +1,127 @@
+import { useState } from 'react';
+import { Button } from '../../../components/button';
+import { EmptyState } from '../../../components/empty-state';
+import { LoadingPanel } from '../../../components/loading-panel';
+import { Notice } from '../../../components/notice';
+import { isApiError } from '../../../lib/api-client';
+import { useDateFormat } from '../../../lib/format';
+import { useJobs } from '../api/get-jobs';
+import { useRunJob } from '../api/run-job';
+import type { JobRun, ScheduledJob } from '../api/types';
+import { JobRunStatus } from './job-run-status';
+
+type RunOutcome = { run?: JobRun; error?: string };
+
+/** Scheduled jobs, their last run, and a "Run now" per job. Few rows, so a plain table. */
+export function JobsTable() {
+  const jobs = useJobs();
+  const runJob = useRunJob();
+  const [outcomes, setOutcomes] = useState<Record<string, RunOutcome>>({});
+  const fmt = useDateFormat();
+
+  if (jobs.isPending) return <LoadingPanel label="Loading scheduled jobs…" />;
+  if (jobs.isError) {
+    return (
+      <Notice tone="error" title="The job list could not be loaded">
+        {jobs.error.message}
+      </Notice>
+    );
+  }
+  if (jobs.data.items.length === 0) {
+    return <EmptyState title="No scheduled jobs">The server has no scheduled jobs registered.</EmptyState>;
+  }
+
+  const runNow = (job: ScheduledJob) => {
+    setOutcomes((o) => ({ ...o, [job.name]: {} }));
+    runJob.mutate(job.name, {
+      onSuccess: ({ run }) => setOutcomes((o) => ({ ...o, [job.name]: { run } })),
+      onError: (error) =>
+        setOutcomes((o) => ({
+          ...o,
+          [job.name]: { error: isApiError(error) ? error.message : 'The job could not be started.' },
+        })),
+    });
+  };
+
+  return (
+    <div className="overflow-x-auto rounded-lg border border-paper-line bg-card">
+      <table className="w-full min-w-[40rem] border-collapse text-left">
+        <caption className="sr-only">Scheduled jobs and their last run</caption>
+        <thead className="bg-paper-deep text-sm">
+          <tr>
+            <th scope="col" className="px-3 py-2 font-semibold">Job</th>
+            <th scope="col" className="px-3 py-2 font-semibold">Schedule</th>
+            <th scope="col" className="px-3 py-2 font-semibold">Last run</th>
+            <th scope="col" className="px-3 py-2 font-semibold"><span className="sr-only">Actions</span></th>
+          </tr>
+        </thead>
+        <tbody className="divide-y divide-paper-line">
+          {jobs.data.items.map((job) => {
+            const outcome = outcomes[job.name];
+            const running = runJob.isPending && runJob.variables === job.name;
+            const last = job.lastRun;
+            return (
+              <tr key={job.name} className="align-top">
+                <th scope="row" className="px-3 py-3 font-normal">
+                  <span className="block font-mono text-sm font-semibold">{job.name}</span>
+                  <span className="block text-sm text-ink-700">{job.description}</span>
+                </th>
+                <td className="px-3 py-3">
+                  <code className="rounded bg-paper-deep px-1.5 py-0.5 text-sm">{job.schedule}</code>
+                </td>
+                <td className="px-3 py-3 text-sm">
+                  <div className="flex flex-col items-start gap-1">
+                    <JobRunStatus run={last} />
+                    {last ? (
+                      <>
+                        <span className="text-ink-700">
+                          Started <time dateTime={last.startedAt}>{fmt.dateTime(last.startedAt)}</time>
+                          {last.finishedAt ? (
+                            <>
+                              , finished <time dateTime={last.finishedAt}>{fmt.dateTime(last.finishedAt)}</time>
+                            </>
+                          ) : null}
+                        </span>
+                        {last.summary ? <span>{last.summary}</span> : null}
+                        {last.error ? <span className="text-bad">{last.error}</span> : null}
+                      </>
+                    ) : null}
+                  </div>
+                </td>
+                <td className="px-3 py-3">
+                  <div className="flex flex-col items-end gap-2">
+                    <Button size="sm" variant="primary" busy={running} onClick={() => runNow(job)}>
+                      Run now
+                    </Button>
+                  </div>
+                  {outcome && (outcome.run || outcome.error) ? (
+                    <RunOutcomeNote outcome={outcome} />
+                  ) : null}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}
+
+function RunOutcomeNote({ outcome }: { outcome: RunOutcome }) {
+  if (outcome.error) {
+    return (
+      <Notice tone="error" className="mt-2 max-w-xs">
+        {outcome.error}
+      </Notice>
+    );
+  }
+  const run = outcome.run!;
+  const tone = run.status === 'failed' ? 'error' : run.status === 'running' ? 'info' : 'success';
+  const title =
+    run.status === 'failed' ? 'This run failed' : run.status === 'running' ? 'Started; still running' : 'Run finished';
+  return (
+    <Notice tone={tone} title={title} className="mt-2 max-w-xs">
+      {run.status === 'failed' ? run.error || run.summary : run.summary || 'No summary was given.'}
+    </Notice>
+  );
+}

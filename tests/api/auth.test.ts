@@ -1,0 +1,95 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { bearer, createTestApp, type TestApp } from '../support/test-app';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp({ LOGIN_ATTEMPTS_PER_10_MIN: '5' });
+});
+afterAll(() => t.close());
+
+describe('sign-in', () => {
+  it.each([
+    ['owner@demo.test', 'owner'],
+    ['manager@demo.test', 'manager'],
+    ['tech@demo.test', 'technician'],
+    ['billing@demo.test', 'billing'],
+  ])('%s signs in as %s and gets a token plus an httpOnly SameSite=Lax session cookie', async (email, role) => {
+    const res = await t.api.post('/api/auth/login').send({ email, password: 'nestkeeper-demo' });
+    expect(res.status).toBe(200);
+    expect(res.body.user).toMatchObject({ email, role });
+    expect(Object.keys(res.body.user)).toEqual(expect.arrayContaining(['id', 'email', 'name', 'role', 'organizationId']));
+    expect(res.body.token).toMatch(/^[\w-]+\.[\w-]+\.[\w-]+$/);
+    const cookies = ([] as string[]).concat(res.headers['set-cookie'] ?? []);
+    const session = cookies.find((c) => c.startsWith('nk_session='))!;
+    expect(session).toMatch(/HttpOnly/i);
+    expect(session).toMatch(/SameSite=Lax/i);
+    expect(session).toMatch(/Max-Age=43200/); // 12 h
+  });
+
+  it('answers a wrong password and an unknown e-mail with the same 401', async () => {
+    const wrong = await t.api.post('/api/auth/login').send({ email: 'owner@demo.test', password: 'not-the-password' });
+    const unknown = await t.api.post('/api/auth/login').send({ email: 'nobody@demo.test', password: 'not-the-password' });
+    expect(wrong.status).toBe(401);
+    expect(unknown.status).toBe(401);
+    expect(wrong.body).toEqual(unknown.body);
+    expect(wrong.body.error.code).toBe('unauthenticated');
+  });
+
+  it('rate-limits repeated failed sign-ins for one address with 429', async () => {
+    const attempt = () => t.api.post('/api/auth/login').send({ email: 'billing@demo.test', password: 'guessing-again' });
+    const statuses: number[] = [];
+    for (let i = 0; i < 6; i += 1) statuses.push((await attempt()).status);
+    expect(statuses.slice(0, 5)).toEqual([401, 401, 401, 401, 401]);
+    expect(statuses[5]).toBe(429);
+    expect((await attempt()).body.error.code).toBe('rate_limited');
+  });
+
+  it('refuses anonymous callers on a protected route with 401', async () => {
+    const res = await t.api.get('/api/auth/me');
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe('unauthenticated');
+  });
+
+  it('accepts the Bearer token and the cookie alike', async () => {
+    const token = await t.tokenFor('tech@demo.test');
+    expect((await t.api.get('/api/auth/me').set(bearer(token))).body.user.email).toBe('tech@demo.test');
+    const agent = (await import('supertest')).default.agent(t.app);
+    await agent.post('/api/auth/login').send({ email: 'tech@demo.test', password: 'nestkeeper-demo' });
+    expect((await agent.get('/api/auth/me')).body.organization.name).toBe('Brackenmoor Dimensional Works');
+  });
+
+  it('refuses a cookie-borne change without the CSRF header, allows it with the header', async () => {
+    const agent = (await import('supertest')).default.agent(t.app);
+    const login = await agent.post('/api/auth/login').send({ email: 'owner@demo.test', password: 'nestkeeper-demo' });
+    const csrf = ([] as string[]).concat(login.headers['set-cookie']).find((c) => c.startsWith('nk_csrf='))!.split(';')[0].split('=')[1];
+    const body = { email: 'csrf.check@demo.test', name: 'Csrf Check', role: 'technician', password: 'long-enough-pw' };
+    const refused = await agent.post('/api/users').send(body);
+    expect(refused.status).toBe(403);
+    const allowed = await agent.post('/api/users').set('X-CSRF-Token', csrf).send(body);
+    expect(allowed.status).toBe(201);
+  });
+
+  it('rejects a tampered token', async () => {
+    const token = await t.tokenFor('owner@demo.test');
+    const [h, p] = token.split('.');
+    const res = await t.api.get('/api/auth/me').set(bearer(`${h}.${p}.forged-signature`));
+    expect(res.status).toBe(401);
+  });
+});
+
+describe('own password', () => {
+  it('changes the password; the old token and old password stop working', async () => {
+    const token = await t.tokenFor('manager@demo.test');
+    const wrong = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nope-nope-nope', newPassword: 'a-new-long-password' });
+    expect(wrong.status).toBe(422);
+    expect(wrong.body.error.code).toBe('wrong_password');
+    const short = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'short' });
+    expect(short.status).toBe(400);
+    expect(short.body.error.details.fields.newPassword).toMatch(/at least 10/);
+    const ok = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'a-new-long-password' });
+    expect(ok.status).toBe(204);
+    expect((await t.api.get('/api/auth/me').set(bearer(token))).status).toBe(401);
+    expect((await t.api.post('/api/auth/login').send({ email: 'manager@demo.test', password: 'nestkeeper-demo' })).status).toBe(401);
+    expect(await t.tokenFor('manager@demo.test', 'a-new-long-password')).toBeTruthy();
+  });
+});

@@ -1,0 +1,19 @@
+import 'reflect-metadata';
+import pg from 'pg';
+import { createDataSource } from '../../server/db/data-source';
+
+export const TEMPLATE_DB = 'nk_template';
+
+/** Migrate one template database; each test file clones it (fast, isolated). */
+export default async function setup() {
+  const server = process.env.TEST_PG_URL;
+  if (!server) throw new Error('TEST_PG_URL is not set: run the suite with `npm test`, which starts a throwaway PostgreSQL.');
+  const admin = new pg.Client({ connectionString: `${server}/postgres` });
+  await admin.connect();
+  await admin.query(`DROP DATABASE IF EXISTS ${TEMPLATE_DB}`);
+  await admin.query(`CREATE DATABASE ${TEMPLATE_DB}`);
+  await admin.end();
+  const db = await createDataSource(`${server}/${TEMPLATE_DB}`, 1).initialize();
+  await db.runMigrations({ transaction: 'each' });
+  await db.destroy();
+}

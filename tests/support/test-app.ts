@@ -1,0 +1,34 @@
+import nodemailer from 'nodemailer';
+import request from 'supertest';
+import { buildApp } from '../../server/app';
+import { readConfig, type Config } from '../../server/config';
+import { DEMO_PASSWORD } from '../../server/seed/demo-people';
+import { createTestDatabase } from './test-db';
+
+/** The real app on a fresh seeded database, with supertest and sign-in helpers. */
+export async function createTestApp(overrides: Partial<Record<keyof Config, string>> = {}) {
+  const database = await createTestDatabase({ seed: true });
+  const config = readConfig({
+    NODE_ENV: 'test',
+    DATABASE_URL: database.url,
+    JWT_SECRET: 'test-secret-that-is-long-enough-for-hs256-signing',
+    START_LOCAL_FAKES: 'false',
+    RUN_SCHEDULER: 'false',
+    SMTP_PORT: '9', // nothing listens: tests that send mail start their own sink
+    ...overrides,
+  });
+  const mail = nodemailer.createTransport({ host: '127.0.0.1', port: config.SMTP_PORT, secure: false, ignoreTLS: true });
+  const { app, jobs } = buildApp({ config, db: database.db, mail });
+  const api = request(app);
+
+  async function tokenFor(email: string, password = DEMO_PASSWORD): Promise<string> {
+    const res = await api.post('/api/auth/login').send({ email, password });
+    if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+    return res.body.token as string;
+  }
+
+  return { app, api, jobs, db: database.db, config, tokenFor, close: () => database.drop() };
+}
+
+export type TestApp = Awaited<ReturnType<typeof createTestApp>>;
+export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });

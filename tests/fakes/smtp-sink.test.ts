@@ -124,28 +124,19 @@ describe('SMTP sink lifecycle', () => {
   });
 });
 
-// Runs against a real PostgreSQL when DATABASE_URL is set, in a throwaway schema.
-describe.skipIf(!process.env.DATABASE_URL)('pgSinkStore', () => {
-  const schema = `sink_test_${process.pid}_${Date.now()}`;
+// Against the real migrated schema, in a throwaway database (`npm test` sets TEST_PG_URL).
+describe.skipIf(!process.env.TEST_PG_URL)('pgSinkStore', () => {
+  let database: Awaited<ReturnType<typeof import('../support/test-db').createTestDatabase>>;
   let pool: pg.Pool;
 
   beforeAll(async () => {
-    pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 2, options: `-c search_path=${schema},public` });
-    await pool.query(`CREATE SCHEMA ${schema}`);
-    await pool.query(`CREATE TABLE ${schema}.mail_sink_messages (
-      id uuid DEFAULT gen_random_uuid() PRIMARY KEY,
-      message_id text UNIQUE NULL,
-      envelope_from text NOT NULL,
-      recipients text[] NOT NULL,
-      subject text NOT NULL,
-      text_body text NOT NULL,
-      html_body text NULL,
-      headers jsonb NOT NULL,
-      received_at timestamptz NOT NULL)`);
+    const { createTestDatabase } = await import('../support/test-db');
+    database = await createTestDatabase();
+    pool = new pg.Pool({ connectionString: database.url, max: 2 });
   });
   afterAll(async () => {
-    await pool.query(`DROP SCHEMA ${schema} CASCADE`);
-    await pool.end();
+    await pool?.end();
+    await database?.drop();
   });
 
   it('stores each message once, even when the same Message-ID is delivered twice', async () => {

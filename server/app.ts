@@ -27,7 +27,7 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM)]);
 
   const app = express();
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', config.TRUST_PROXY);
   app.disable('x-powered-by');
   app.locals.passport = createPassport(db, config.JWT_SECRET);
   app.use(

@@ -160,7 +160,7 @@ export function DataGrid<T>({
           </div>
         </div>
       ) : null}
-      <div style={height === 'auto' ? undefined : { height }}>
+      <div className="nk-grid relative" style={height === 'auto' ? undefined : { height }}>
         <AgGridReact<T>
           theme={nestkeeperGridTheme}
           rowData={rows}

@@ -1,6 +1,7 @@
 import Stripe from 'stripe';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createPaymentClient } from '../../server/billing/payment-client';
 import { startPaymentFake, type PaymentFake } from '../../server/fakes/payment-fake';
 
 const SECRET_KEY = 'sk_test_nestkeeper';
@@ -11,7 +12,8 @@ describe('payment-provider fake, driven by the official SDK', () => {
 
   beforeAll(async () => {
     fake = await startPaymentFake({ port: 0 });
-    stripe = new Stripe(SECRET_KEY, { host: '127.0.0.1', port: fake.port, protocol: 'http', maxNetworkRetries: 0 });
+    // The app's own client factory, pointed at the fake by host, port and protocol.
+    stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http' });
   });
   afterAll(async () => {
     await fake.close();

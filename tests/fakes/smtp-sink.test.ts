@@ -1,6 +1,6 @@
 import nodemailer from 'nodemailer';
 import pg from 'pg';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { pgSinkStore, startSmtpSink, type SinkMessage, type SmtpSink } from '../../server/fakes/smtp-sink';
 
 const transportTo = (port: number) =>
@@ -94,12 +94,15 @@ describe('SMTP sink', () => {
   });
 
   it('answers 451 and keeps nothing when the store fails, so the sender retries', async () => {
+    const quiet = vi.spyOn(console, 'error').mockImplementation(() => undefined);
     const failing = await startSmtpSink({ port: 0, store: async () => Promise.reject(new Error('database down')) });
     const error = await transportTo(failing.port)
       .sendMail({ from: 'no-reply@nestkeeper.test', to: 'c@fernbrook-metrology.test', subject: 's', text: 'x' })
       .catch((e: unknown) => e as { responseCode?: number });
     await failing.close();
     expect(error.responseCode).toBe(451);
+    expect(quiet).toHaveBeenCalled();
+    quiet.mockRestore();
   });
 });
 

@@ -34,7 +34,7 @@ export function UsersTable({
       {
         headerName: 'Name',
         field: 'name',
-        minWidth: 160,
+        minWidth: 140,
         cellRenderer: (p: CustomCellRendererProps<User, string>) =>
           p.data ? (
             <span>
@@ -46,20 +46,20 @@ export function UsersTable({
       {
         headerName: 'E-mail',
         field: 'email',
-        minWidth: 200,
+        minWidth: 190,
         cellClass: 'font-mono text-[0.85rem]',
       },
       {
         headerName: 'Role',
         colId: 'role',
-        minWidth: 130,
+        minWidth: 120,
         valueGetter: (p) => (p.data ? roleTitles[p.data.role] : ''),
       },
       {
         headerName: 'Status',
         colId: 'status',
-        minWidth: 120,
-        maxWidth: 150,
+        minWidth: 110,
+        maxWidth: 140,
         valueGetter: (p) => (p.data ? statusWord(p.data) : ''),
         cellRenderer: (p: CustomCellRendererProps<User>) =>
           p.data ? (
@@ -70,8 +70,8 @@ export function UsersTable({
         headerName: 'Added',
         colId: 'createdAt',
         field: 'createdAt',
-        minWidth: 120,
-        maxWidth: 160,
+        minWidth: 110,
+        maxWidth: 150,
         valueFormatter: (p) => formatDate(p.value as string, timeZone),
         // CSV gets the exact timestamp, the screen a readable date.
         useValueFormatterForExport: false,
@@ -81,8 +81,8 @@ export function UsersTable({
         headerName: 'Actions',
         colId: 'actions',
         type: actionsColumnType,
-        minWidth: 300,
-        flex: 1.6,
+        minWidth: 340,
+        flex: 2,
         cellRenderer: (p: CustomCellRendererProps<User>) => {
           const user = p.data;
           if (!user) return null;
@@ -90,7 +90,7 @@ export function UsersTable({
             return <span className="text-sm text-ink-500">Change your own password under “My password”.</span>;
           }
           return (
-            <div className="flex h-full items-center gap-1.5">
+            <div className="flex h-full flex-nowrap items-center gap-1.5">
               <Button size="sm" onClick={() => actions.onChangeRole(user)}>
                 Change role
               </Button>

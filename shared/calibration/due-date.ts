@@ -1,0 +1,46 @@
+import { addMonths, differenceInCalendarDays, format, parseISO } from 'date-fns';
+
+/** DESIGN.md §5 "Due date". Dates are calendar dates (`YYYY-MM-DD`) in the organization's time zone. */
+export type CalibrationState = 'current' | 'due_soon' | 'overdue' | 'not_required';
+export const calibrationStates: readonly CalibrationState[] = ['current', 'due_soon', 'overdue', 'not_required'];
+export const DEFAULT_DUE_SOON_DAYS = 30;
+
+export type CalibrationPlan = { required: boolean; intervalMonths: number | null; lastCalibratedOn: string | null };
+
+/** Last calibration + interval in calendar months; a day past the month's end
+ * clamps to its last day (31 Jan + 1 month = 28/29 Feb) — date-fns addMonths does exactly that. */
+export function dueDate(lastCalibratedOn: string, intervalMonths: number): string {
+  return format(addMonths(parseISO(lastCalibratedOn), intervalMonths), 'yyyy-MM-dd');
+}
+
+/** The plan's due date, or null when not required or never calibrated. */
+export function dueOnForPlan(plan: CalibrationPlan): string | null {
+  if (!plan.required || !plan.lastCalibratedOn || !plan.intervalMonths) return null;
+  return dueDate(plan.lastCalibratedOn, plan.intervalMonths);
+}
+
+/**
+ * An item is valid through its due date: overdue only once today is after it.
+ * A required item with no calibration on record counts as overdue — nothing
+ * shows it is fit for use.
+ */
+export function calibrationState(required: boolean, dueOn: string | null, today: string, dueSoonDays = DEFAULT_DUE_SOON_DAYS): CalibrationState {
+  if (!required) return 'not_required';
+  if (!dueOn) return 'overdue';
+  const daysLeft = differenceInCalendarDays(parseISO(dueOn), parseISO(today));
+  if (daysLeft < 0) return 'overdue';
+  return daysLeft <= dueSoonDays ? 'due_soon' : 'current';
+}
+
+/** Today's calendar date in an IANA time zone. */
+export function todayIn(timeZone: string, now: Date = new Date()): string {
+  // en-CA formats as YYYY-MM-DD.
+  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
+}
+
+/** The date `days` after `date` (negative for before). */
+export function addDays(date: string, days: number): string {
+  const d = parseISO(date);
+  d.setDate(d.getDate() + days);
+  return format(d, 'yyyy-MM-dd');
+}

@@ -75,7 +75,7 @@ const homes: Record<Role, RoleHome> = {
       },
       {
         title: 'Report damage',
-        body: 'Reporting a dropped tip or other damage from this phone, with photos, will start here. Until then, tell your shop manager straight away and do not use the item.',
+        body: 'Reporting a dropped tip or other damage from this phone, with photos, will start here. Until then, tell your shop manager straight away and do not use the item. A dropped, swollen or damaged battery is a fire risk: do not charge it or pack it for a flight.',
       },
     ],
   },

@@ -79,7 +79,10 @@ describe('signing in, in a real browser', () => {
     await expect.poll(() => page.getByRole('heading', { level: 1 }).first().innerText()).toBe('My kit');
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
+    const nav = page.getByRole('navigation', { name: 'Main navigation' });
     await page.getByRole('button', { name: 'Menu' }).click();
+    await nav.getByRole('link', { name: 'My password' }).click();
+    await page.getByRole('heading', { level: 1, name: 'My password' }).waitFor();
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL(/\/sign-in/);
     await context.close();
@@ -89,9 +92,9 @@ describe('signing in, in a real browser', () => {
     const context = await rig.browser.newContext();
     const page = await context.newPage();
     await signIn(page, 'manager@demo.test');
-    await page.getByRole('heading', { level: 1 }).first().waitFor();
+    await page.getByRole('heading', { level: 1, name: 'Shop floor today' }).waitFor();
     await page.goto(`${rig.baseUrl}/no/such/page`);
-    await expect.poll(() => page.locator('body').innerText()).toMatch(/not found|no page/i);
+    await expect.poll(() => page.locator('body').innerText()).toMatch(/Page not found/);
     await context.close();
   });
 });

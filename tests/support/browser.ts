@@ -1,6 +1,5 @@
 import fs from 'node:fs';
 import type { Server } from 'node:http';
-import os from 'node:os';
 import path from 'node:path';
 import nodemailer from 'nodemailer';
 import { chromium, type Browser } from 'playwright-core';
@@ -9,7 +8,8 @@ import { readConfig } from '../../server/config';
 import { createTestDatabase } from './test-db';
 
 /** The real server with the built client on a free loopback port, a seeded
- * database, and Debian's Chromium driven by playwright-core. */
+ * database, and Debian's Chromium driven by playwright-core (which gives each
+ * launch a fresh, throwaway user-data directory). */
 export async function startBrowserRig() {
   const database = await createTestDatabase({ seed: true });
   const config = readConfig({
@@ -28,7 +28,6 @@ export async function startBrowserRig() {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
   const { port } = server.address() as { port: number };
-  const userDataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'nestkeeper-chromium-'));
   const browser: Browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: [
@@ -40,7 +39,6 @@ export async function startBrowserRig() {
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
-      `--user-data-dir=${userDataDir}`,
     ],
   });
   return {
@@ -52,7 +50,6 @@ export async function startBrowserRig() {
       server.closeAllConnections();
       await new Promise((r) => server.close(r));
       await database.drop();
-      fs.rmSync(userDataDir, { recursive: true, force: true });
     },
   };
 }

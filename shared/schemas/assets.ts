@@ -1,0 +1,208 @@
+import { z } from 'zod';
+import { calibrationStates } from '../calibration/due-date';
+
+/** DESIGN.md §3 "Asset". Names are the project's own; keep them. */
+export const assetTypes = [
+  'tracker',
+  'controller',
+  'probe',
+  'tip',
+  'battery',
+  'smr',
+  'reference_sphere',
+  'nest',
+  'scale_bar',
+  'weather_station',
+  'case',
+  'accessory',
+] as const;
+export type AssetType = (typeof assetTypes)[number];
+
+export const assetTypeTitles: Record<AssetType, string> = {
+  tracker: 'Laser tracker',
+  controller: 'Controller',
+  probe: '6DoF probe',
+  tip: 'Probe tip',
+  battery: 'Battery',
+  smr: 'SMR',
+  reference_sphere: 'Reference sphere',
+  nest: 'Nest',
+  scale_bar: 'Scale bar',
+  weather_station: 'Weather station',
+  case: 'Case',
+  accessory: 'Accessory',
+};
+
+/** Types that carry firmware (DESIGN.md §3). */
+export const typesWithFirmware: readonly AssetType[] = ['tracker', 'controller', 'probe'];
+
+export const assetStatuses = ['ready', 'out', 'at_lab', 'held', 'retired'] as const;
+export type AssetStatus = (typeof assetStatuses)[number];
+
+export const tipPositions = ['vertical', 'horizontal'] as const;
+export type TipPosition = (typeof tipPositions)[number];
+
+const positiveMm = z.number({ message: 'must be a number' }).positive('must be more than 0').max(100_000, 'is implausibly large');
+
+/** Type-specific facts, validated per type. Unknown keys are refused so typos do not pass silently. */
+export const specsByType = {
+  tip: z.object({ lengthMm: positiveMm, positions: z.array(z.enum(tipPositions)).min(1, 'needs at least one mounting position').refine((p) => new Set(p).size === p.length, 'lists a position twice') }).strict(),
+  battery: z
+    .object({
+      nominalVoltageV: z.number({ message: 'must be a number' }).positive('must be more than 0').max(1000, 'is implausibly high'),
+      ratedCapacityAh: z.number({ message: 'must be a number' }).positive('must be more than 0').max(1000, 'is implausibly high'),
+      chargeCycles: z.number({ message: 'must be a number' }).int('must be a whole number').min(0, 'cannot be negative').optional(),
+      damaged: z.boolean().optional(),
+    })
+    .strict(),
+  smr: z.object({ diameterMm: positiveMm }).strict(),
+  reference_sphere: z.object({ diameterMm: positiveMm }).strict(),
+  scale_bar: z
+    .object({
+      certifiedLengthMm: positiveMm,
+      expansionPpmPerK: z.number({ message: 'must be a number' }).min(-50, 'is outside −50…100 µm/(m·K)').max(100, 'is outside −50…100 µm/(m·K)'),
+    })
+    .strict(),
+  tracker: z.object({ laserClass: z.string().max(20).optional(), maxRangeM: z.number().positive().optional() }).strict(),
+  controller: z.object({}).strict(),
+  probe: z.object({}).strict(),
+  nest: z.object({ sizeMm: positiveMm.optional() }).strict(),
+  weather_station: z.object({}).strict(),
+  case: z.object({ massKg: z.number().positive().max(500).optional() }).strict(),
+  accessory: z.object({}).strict(),
+} satisfies Record<AssetType, z.ZodType>;
+
+export type AssetSpecs = { [T in AssetType]: z.infer<(typeof specsByType)[T]> };
+
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD').refine((s) => !Number.isNaN(Date.parse(s)), 'is not a real date');
+const optionalText = (max: number) => z.string().trim().max(max, `must be at most ${max} characters`).nullable().optional();
+
+export const calibrationPlanPayload = z
+  .object({
+    required: z.boolean(),
+    intervalMonths: z.number().int('must be a whole number of months').min(1, 'must be at least 1 month').max(120, 'must be at most 120 months').nullable().optional(),
+    provider: optionalText(120),
+    lastCalibratedOn: isoDate.nullable().optional(),
+  })
+  .refine((p) => !p.required || !!p.intervalMonths, { message: 'is needed when calibration is required', path: ['intervalMonths'] });
+
+const assetFields = {
+  assetTag: z.string().trim().min(1, 'is required').max(40, 'must be at most 40 characters').regex(/^[A-Za-z0-9][A-Za-z0-9._\-/]*$/, 'may use letters, digits and . _ - / only'),
+  serialNumber: z.string().trim().min(1, 'is required').max(80),
+  manufacturer: optionalText(80),
+  model: optionalText(80),
+  firmwareVersion: optionalText(40),
+  rfidTag: z.string().trim().max(64).regex(/^[A-Za-z0-9:\-]*$/, 'may use letters, digits, : and - only').nullable().optional(),
+  location: optionalText(120),
+  replacementValueMinor: z.number().int('must be whole minor units').min(0, 'cannot be negative').max(1e12).nullable().optional(),
+  notes: optionalText(4000),
+  calibration: calibrationPlanPayload.optional(),
+  specs: z.record(z.string(), z.unknown()).optional(),
+};
+
+/** Checks across fields: specs per type, RFID only on tips, firmware only where it exists. */
+function checkTypeRules(value: { type: AssetType; specs?: Record<string, unknown>; rfidTag?: string | null; firmwareVersion?: string | null }, ctx: z.RefinementCtx) {
+  const specs = specsByType[value.type].safeParse(value.specs ?? {});
+  if (!specs.success) for (const issue of specs.error.issues) ctx.addIssue({ code: 'custom', message: issue.message, path: ['specs', ...issue.path] });
+  if (value.rfidTag && value.type !== 'tip') ctx.addIssue({ code: 'custom', message: 'is only for probe tips', path: ['rfidTag'] });
+  if (value.firmwareVersion && !typesWithFirmware.includes(value.type)) ctx.addIssue({ code: 'custom', message: 'is only for trackers, controllers and probes', path: ['firmwareVersion'] });
+}
+
+export const createAssetPayload = z.object({ type: z.enum(assetTypes, { message: `must be one of ${assetTypes.join(', ')}` }), ...assetFields }).superRefine(checkTypeRules);
+export type CreateAssetPayload = z.infer<typeof createAssetPayload>;
+
+/** Every field optional; the type of an asset does not change once registered. */
+export const updateAssetPayload = z
+  .object({ ...assetFields, assetTag: assetFields.assetTag.optional(), serialNumber: assetFields.serialNumber.optional() })
+  .strict();
+export type UpdateAssetPayload = z.infer<typeof updateAssetPayload>;
+
+export const retireAssetPayload = z.object({ reason: z.string().trim().min(3, 'say briefly why').max(500) });
+
+const listOf = <T extends z.ZodType>(item: T) =>
+  z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(item)).optional();
+
+export const assetSortFields = ['assetTag', 'type', 'serialNumber', 'manufacturer', 'model', 'location', 'status', 'dueOn', 'updatedAt'] as const;
+
+export const assetListQuery = z.object({
+  q: z.string().trim().max(100).optional(),
+  type: listOf(z.enum(assetTypes)),
+  status: listOf(z.enum(assetStatuses)),
+  calibration: listOf(z.enum(calibrationStates as [string, ...string[]])),
+  kitId: z.union([z.uuid('is not a kit id'), z.literal('none')]).optional(),
+  sort: z
+    .string()
+    .regex(new RegExp(`^-?(${assetSortFields.join('|')})$`), `must be one of ${assetSortFields.join(', ')} (prefix - for descending)`)
+    .optional(),
+  limit: z.coerce.number().int().min(1).max(500).default(50),
+  offset: z.coerce.number().int().min(0).default(0),
+});
+export type AssetListQuery = z.infer<typeof assetListQuery>;
+
+export const kitPayload = z.object({
+  name: z.string().trim().min(1, 'is required').max(80),
+  notes: optionalText(2000),
+  memberIds: z.array(z.uuid('is not an asset id')).max(200).optional(),
+});
+export const updateKitPayload = kitPayload.partial().strict();
+
+export const organizationSettingsPayload = z
+  .object({
+    dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
+    timeZone: z.string().refine((tz) => {
+      try {
+        new Intl.DateTimeFormat('en', { timeZone: tz });
+        return true;
+      } catch {
+        return false;
+      }
+    }, 'is not a time zone name like Europe/Berlin'),
+  })
+  .partial()
+  .strict();
+
+/** An asset as the API returns it. */
+export type AssetView = {
+  id: string;
+  type: AssetType;
+  assetTag: string;
+  serialNumber: string;
+  manufacturer: string | null;
+  model: string | null;
+  firmwareVersion: string | null;
+  rfidTag: string | null;
+  location: string | null;
+  replacementValueMinor: number | null;
+  currency: string;
+  notes: string | null;
+  status: AssetStatus;
+  specs: Record<string, unknown>;
+  kit: { id: string; name: string } | null;
+  calibration: {
+    required: boolean;
+    intervalMonths: number | null;
+    provider: string | null;
+    lastCalibratedOn: string | null;
+    dueOn: string | null;
+    state: import('../calibration/due-date').CalibrationState;
+  };
+  /** What the QR label encodes; `GET /api/assets/lookup?code=` resolves it. */
+  qrPayload: string;
+  retiredAt: string | null;
+  retiredReason: string | null;
+  createdAt: string;
+  updatedAt: string;
+};
+
+export type KitReadiness = { ready: boolean; reasons: { assetId: string; assetTag: string; reason: 'not_ready' | 'calibration_overdue' }[] };
+
+export type KitView = {
+  id: string;
+  name: string;
+  notes: string | null;
+  memberCount: number;
+  readiness: KitReadiness;
+  members?: AssetView[];
+  createdAt: string;
+  updatedAt: string;
+};

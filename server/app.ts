@@ -15,6 +15,12 @@ import { JobsService } from './jobs/jobs.service';
 import { jobsRoutes } from './jobs/jobs.routes';
 import { notificationsRoutes } from './notifications/notifications.routes';
 import { outboxJob } from './notifications/outbox-job';
+import { AssetsService } from './fleet/assets.service';
+import { FleetDocumentsService } from './fleet/fleet-documents.service';
+import { fleetRoutes } from './fleet/fleet.routes';
+import { KitsService } from './fleet/kits.service';
+import { kitsRoutes } from './fleet/kits.routes';
+import { settingsRoutes } from './organizations/settings.routes';
 import { UsersService } from './users/users.service';
 import { usersRoutes } from './users/users.routes';
 
@@ -25,6 +31,10 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   const users = new UsersService(db, config.BCRYPT_COST);
   const auth = new AuthService(db, users, config.JWT_SECRET);
   const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM)]);
+  const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
+  const assets = new AssetsService(db, publicUrl);
+  const kits = new KitsService(db, publicUrl);
+  const fleetDocuments = new FleetDocumentsService(db, publicUrl);
 
   const app = express();
   app.set('trust proxy', config.TRUST_PROXY);
@@ -51,6 +61,9 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use('/api/users', usersRoutes(users));
   app.use('/api/mailbox', notificationsRoutes(db));
   app.use('/api/admin/jobs', jobsRoutes(jobs));
+  app.use('/api/settings', settingsRoutes(db));
+  app.use('/api/assets', fleetRoutes(db, assets, fleetDocuments));
+  app.use('/api/kits', kitsRoutes(kits, fleetDocuments));
   app.use('/api', unknownApiRoute);
 
   const clientDir = path.resolve(config.CLIENT_DIR);

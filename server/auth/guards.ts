@@ -1,11 +1,11 @@
 import type { RequestHandler } from 'express';
-import type { Passport } from 'passport';
+import type { PassportStatic } from 'passport';
 import { can, type Capability } from '../../shared/auth/roles';
 import type { Actor } from '../db/transaction';
 import { AppError, forbidden } from '../http/errors';
 
 export const requireSignIn: RequestHandler = (req, res, next) => {
-  const passport = req.app.locals.passport as Passport;
+  const passport = req.app.locals.passport as PassportStatic;
   passport.authenticate('jwt', { session: false }, (err: unknown, actor: Actor | false) => {
     if (err) return next(err);
     if (!actor) return next(new AppError(401, 'unauthenticated', 'Please sign in again.'));

@@ -1,5 +1,5 @@
 import type { Request } from 'express';
-import { Passport } from 'passport';
+import { Passport, type PassportStatic } from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { DataSource } from 'typeorm';
 import type { Actor } from '../db/transaction';
@@ -10,8 +10,8 @@ const fromSessionCookie = (req: Request) => (req.cookies?.[SESSION_COOKIE] as st
 
 /** A token stops working when its user is disabled or changes password
  * (the token version moves on), not only when it expires. */
-export function createPassport(db: DataSource, secret: string): Passport {
-  const passport = new Passport();
+export function createPassport(db: DataSource, secret: string): PassportStatic {
+  const passport = new Passport() as PassportStatic;
   passport.use(
     'jwt',
     new JwtStrategy(

@@ -1,4 +1,7 @@
 import { AuditEvent } from '../audit/audit-event.entity';
+import { Asset } from '../fleet/asset.entity';
+import { CustodyEvent } from '../fleet/custody-event.entity';
+import { Kit } from '../fleet/kit.entity';
 import { JobLease, JobRun } from '../jobs/job-run.entity';
 import { OutboxMessage } from '../notifications/outbox-message.entity';
 import { SinkMessage } from '../notifications/sink-message.entity';
@@ -6,4 +9,4 @@ import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity the data source knows; a new component adds its own here. */
-export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease];
+export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent];

@@ -1,4 +1,4 @@
-import type { DeepPartial, EntityManager, EntityTarget, FindManyOptions, FindOptionsWhere, ObjectLiteral } from 'typeorm';
+import type { DeepPartial, EntityManager, EntityTarget, FindManyOptions, FindOptionsWhere, ObjectLiteral, QueryDeepPartialEntity } from 'typeorm';
 import { notFound } from '../http/errors';
 import type { OrgOwned } from './org-owned';
 
@@ -44,14 +44,36 @@ export class Scoped {
     return this.manager.save(entity, row);
   }
 
+  /** Insert many rows in chunks (one statement per chunk); returns the generated ids in order. */
+  async insertMany<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, rows: QueryDeepPartialEntity<Omit<T, 'organizationId'>>[], chunk = 1000): Promise<string[]> {
+    const ids: string[] = [];
+    for (let i = 0; i < rows.length; i += chunk) {
+      const values = rows.slice(i, i + chunk).map((r) => ({ ...r, organizationId: this.organizationId }) as QueryDeepPartialEntity<T>);
+      const result = await this.manager.createQueryBuilder().insert().into(entity).values(values).returning('id').execute();
+      ids.push(...result.raw.map((r: { id: string }) => String(r.id)));
+    }
+    return ids;
+  }
+
   /** Save changes to a row this scope loaded; refuses a row of another organization. */
   save<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, row: T): Promise<T> {
     if (row.organizationId !== this.organizationId) throw notFound('That record');
     return this.manager.save(entity, row);
   }
 
+  /** Update every row of this organization that matches `where`. */
+  updateWhere<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, where: FindOptionsWhere<T>, values: QueryDeepPartialEntity<T>) {
+    return this.manager.update(entity, this.where(where), values);
+  }
+
   count<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, where: FindOptionsWhere<T> = {}) {
     return this.manager.count(entity, { where: this.where(where) });
+  }
+
+  /** A query builder already limited to this organization. Add conditions with
+   * `andWhere` — a later `where` would replace the organization condition. */
+  select<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, alias: string) {
+    return this.manager.createQueryBuilder(entity, alias).where(`${alias}.organization_id = :scopeOrganizationId`, { scopeOrganizationId: this.organizationId });
   }
 
   sql<R = Record<string, unknown>>(text: string, params: unknown[] = []): Promise<R[]> {

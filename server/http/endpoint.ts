@@ -48,8 +48,8 @@ export function endpoint<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
   router[spec.method](spec.path, ...guards, async (req: Request, res: Response, next: NextFunction) => {
     try {
       assertIdParams(req.params as Record<string, string>);
-      const body = spec.body ? parse(spec.body, req.body) : req.body;
-      const query = spec.query ? parse(spec.query, req.query) : req.query;
+      const body = (spec.body ? parse(spec.body, req.body) : req.body) as z.infer<B>;
+      const query = (spec.query ? parse(spec.query, req.query) : req.query) as z.infer<Q>;
       const result = await handler({ body, query, params: req.params as Record<string, string>, actor: req.user as Actor, req, res });
       if (res.headersSent) return;
       if (result === undefined) res.status(204).end();

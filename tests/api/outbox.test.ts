@@ -11,7 +11,7 @@ import { bearer, createTestApp, type TestApp } from '../support/test-app';
 let t: TestApp;
 let pool: pg.Pool;
 let sink: SmtpSink;
-let transport: nodemailer.Transporter;
+let transport: ReturnType<typeof nodemailer.createTransport>;
 const FROM = 'Nestkeeper <no-reply@nestkeeper.test>';
 
 beforeAll(async () => {

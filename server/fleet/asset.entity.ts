@@ -1,0 +1,91 @@
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { AssetStatus, AssetType } from '../../shared/schemas/assets';
+import { OrgOwned } from '../db/org-owned';
+import { Kit } from './kit.entity';
+
+/** bigint columns come back from pg as strings; money in minor units fits a JS number. */
+const bigintAsNumber = { to: (v: number | null) => v, from: (v: string | null) => (v === null ? null : Number(v)) };
+
+/** One serialized item of the fleet (DESIGN.md §3). */
+@Entity({ name: 'assets' })
+@Index(['organizationId', 'assetTag'], { unique: true })
+@Index(['organizationId', 'rfidTag'], { unique: true, where: '"rfid_tag" IS NOT NULL' })
+@Index(['organizationId', 'dueOn'])
+@Index(['organizationId', 'type', 'status'])
+export class Asset extends OrgOwned {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ type: 'text' })
+  type: AssetType;
+
+  @Column({ name: 'asset_tag', type: 'text' })
+  assetTag: string;
+
+  @Column({ name: 'serial_number', type: 'text' })
+  serialNumber: string;
+
+  @Column({ type: 'text', nullable: true })
+  manufacturer: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  model: string | null;
+
+  @Column({ name: 'firmware_version', type: 'text', nullable: true })
+  firmwareVersion: string | null;
+
+  @Column({ name: 'rfid_tag', type: 'text', nullable: true })
+  rfidTag: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  location: string | null;
+
+  @Column({ name: 'replacement_value_minor', type: 'bigint', nullable: true, transformer: bigintAsNumber })
+  replacementValueMinor: number | null;
+
+  @Column({ type: 'text', nullable: true })
+  notes: string | null;
+
+  @Column({ type: 'text', default: 'ready' })
+  status: AssetStatus;
+
+  /** Type-specific facts, validated per type by shared/schemas/assets.ts. */
+  @Column({ type: 'jsonb' })
+  specs: Record<string, unknown> = {};
+
+  @Index()
+  @Column({ name: 'kit_id', type: 'uuid', nullable: true })
+  kitId: string | null;
+
+  @ManyToOne(() => Kit, { onDelete: 'SET NULL', nullable: true })
+  @JoinColumn({ name: 'kit_id' })
+  kit?: Kit | null;
+
+  @Column({ name: 'calibration_required', type: 'boolean', default: false })
+  calibrationRequired: boolean;
+
+  @Column({ name: 'calibration_interval_months', type: 'integer', nullable: true })
+  calibrationIntervalMonths: number | null;
+
+  @Column({ name: 'calibration_provider', type: 'text', nullable: true })
+  calibrationProvider: string | null;
+
+  @Column({ name: 'last_calibrated_on', type: 'date', nullable: true })
+  lastCalibratedOn: string | null;
+
+  /** Kept with the plan (and later set by calibration events) so lists can filter and sort by it. */
+  @Column({ name: 'due_on', type: 'date', nullable: true })
+  dueOn: string | null;
+
+  @Column({ name: 'retired_at', type: 'timestamptz', nullable: true })
+  retiredAt: Date | null;
+
+  @Column({ name: 'retired_reason', type: 'text', nullable: true })
+  retiredReason: string | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
+  updatedAt: Date;
+}

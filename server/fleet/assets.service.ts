@@ -1,0 +1,225 @@
+import type { DataSource } from 'typeorm';
+import { dueOnForPlan } from '../../shared/calibration/due-date';
+import {
+  specsByType,
+  typesWithFirmware,
+  type AssetListQuery,
+  type CreateAssetPayload,
+  type UpdateAssetPayload,
+} from '../../shared/schemas/assets';
+import { recordAudit } from '../audit/audit.service';
+import type { Scoped } from '../db/scoped';
+import { inOrganization, type Actor } from '../db/transaction';
+import { AppError, conflict, ruleBroken } from '../http/errors';
+import { loadOrgContext } from '../organizations/org-context';
+import { Asset } from './asset.entity';
+import { filteredAssets } from './asset-list';
+import { toAssetView } from './asset-view';
+import { CustodyEvent } from './custody-event.entity';
+
+const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
+const isUniqueViolation = (err: unknown) => (err as { code?: string })?.code === '23505';
+
+/** Fields the person edits directly (the rest are derived or belong to other flows). */
+const editableFields = ['assetTag', 'serialNumber', 'manufacturer', 'model', 'firmwareVersion', 'rfidTag', 'location', 'replacementValueMinor', 'notes'] as const;
+
+export class AssetsService {
+  constructor(
+    private readonly db: DataSource,
+    private readonly publicUrl: string,
+  ) {}
+
+  list(actor: Actor, query: AssetListQuery) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      const [rows, total] = await filteredAssets(tx, ctx, query).take(query.limit).skip(query.offset).getManyAndCount();
+      return { items: rows.map((a) => toAssetView(a, ctx, this.publicUrl)), total };
+    });
+  }
+
+  get(actor: Actor, id: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      return toAssetView(await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } }), ctx, this.publicUrl);
+    });
+  }
+
+  /** Asset tag, RFID tag, or a QR label's payload (which ends in the asset's id). */
+  lookup(actor: Actor, code: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      const trimmed = code.trim();
+      const id = trimmed.match(UUID)?.[0];
+      const qb = tx.select(Asset, 'a').leftJoinAndSelect('a.kit', 'k');
+      const asset = id
+        ? await qb.andWhere('a.id = :id', { id }).getOne()
+        : await qb
+            .andWhere('(upper(a.asset_tag) = upper(:code) OR upper(a.rfid_tag) = upper(:code))', { code: trimmed })
+            .orderBy('a.asset_tag = :code', 'DESC')
+            .getOne();
+      if (!asset) throw new AppError(404, 'not_found', `Nothing in your fleet matches "${trimmed}".`);
+      return toAssetView(asset, ctx, this.publicUrl);
+    });
+  }
+
+  create(actor: Actor, input: CreateAssetPayload) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      await this.assertIdentityFree(tx, input.assetTag, input.rfidTag ?? null);
+      const plan = input.calibration ?? { required: false };
+      const asset = await this.saving(() =>
+        tx.insert(Asset, {
+          type: input.type,
+          assetTag: input.assetTag,
+          serialNumber: input.serialNumber,
+          manufacturer: input.manufacturer ?? null,
+          model: input.model ?? null,
+          firmwareVersion: input.firmwareVersion ?? null,
+          rfidTag: input.rfidTag || null,
+          location: input.location ?? null,
+          replacementValueMinor: input.replacementValueMinor ?? null,
+          notes: input.notes ?? null,
+          specs: specsByType[input.type].parse(input.specs ?? {}),
+          calibrationRequired: plan.required,
+          calibrationIntervalMonths: plan.intervalMonths ?? null,
+          calibrationProvider: plan.provider ?? null,
+          lastCalibratedOn: plan.lastCalibratedOn ?? null,
+          dueOn: dueOnForPlan({ required: plan.required, intervalMonths: plan.intervalMonths ?? null, lastCalibratedOn: plan.lastCalibratedOn ?? null }),
+        }),
+      );
+      await tx.insert(CustodyEvent, { assetId: asset.id, kind: 'registered', actorUserId: actor.userId, location: asset.location, holder: ctx.name, bookingId: null, note: null });
+      await recordAudit(tx, actor, 'asset.created', { type: 'asset', id: asset.id }, { assetTag: asset.assetTag, type: asset.type });
+      return toAssetView(asset, ctx, this.publicUrl);
+    });
+  }
+
+  update(actor: Actor, id: string, patch: UpdateAssetPayload) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      const asset = await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } });
+      if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired; its record can no longer be changed.`);
+      const changes: Record<string, { from: unknown; to: unknown }> = {};
+      const change = <K extends keyof Asset>(key: K, value: Asset[K]) => {
+        if (JSON.stringify(asset[key]) === JSON.stringify(value)) return;
+        changes[key] = { from: asset[key], to: value };
+        asset[key] = value;
+      };
+      for (const field of editableFields) if (patch[field] !== undefined) change(field, (patch[field] === '' ? null : patch[field]) as never);
+      if (patch.specs !== undefined) change('specs', this.validSpecs(asset, patch.specs));
+      this.assertTypeRules(asset);
+      if (patch.calibration) {
+        const plan = patch.calibration;
+        change('calibrationRequired', plan.required);
+        if (plan.intervalMonths !== undefined) change('calibrationIntervalMonths', plan.intervalMonths);
+        if (plan.provider !== undefined) change('calibrationProvider', plan.provider);
+        if (plan.lastCalibratedOn !== undefined) change('lastCalibratedOn', plan.lastCalibratedOn);
+        change('dueOn', dueOnForPlan({ required: asset.calibrationRequired, intervalMonths: asset.calibrationIntervalMonths, lastCalibratedOn: asset.lastCalibratedOn }));
+      }
+      if (changes.assetTag || changes.rfidTag) await this.assertIdentityFree(tx, changes.assetTag ? asset.assetTag : null, changes.rfidTag ? asset.rfidTag : null, asset.id);
+      if (Object.keys(changes).length === 0) return toAssetView(asset, ctx, this.publicUrl);
+      const saved = await this.saving(() => tx.save(Asset, asset));
+      if (changes.location) await tx.insert(CustodyEvent, { assetId: id, kind: 'moved', actorUserId: actor.userId, location: asset.location, holder: null, bookingId: null, note: null });
+      await recordAudit(tx, actor, 'asset.updated', { type: 'asset', id }, { changes });
+      return toAssetView(saved, ctx, this.publicUrl);
+    });
+  }
+
+  retire(actor: Actor, id: string, reason: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      const asset = await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } });
+      if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is already retired.`);
+      if (asset.status === 'out') throw ruleBroken('asset_out', `${asset.assetTag} is out on a job or rental; take it back in before retiring it.`);
+      const formerKit = asset.kit?.name ?? null;
+      Object.assign(asset, { status: 'retired', retiredAt: new Date(), retiredReason: reason, kitId: null, kit: null });
+      const saved = await tx.save(Asset, asset);
+      await tx.insert(CustodyEvent, { assetId: id, kind: 'retired', actorUserId: actor.userId, location: asset.location, holder: null, bookingId: null, note: reason });
+      await recordAudit(tx, actor, 'asset.retired', { type: 'asset', id }, { reason, formerKit });
+      return toAssetView(saved, ctx, this.publicUrl);
+    });
+  }
+
+  /** Audit trail and chain of custody together, newest first. */
+  history(actor: Actor, id: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      await tx.get(Asset, { id }, 'That asset');
+      const rows = await tx.sql<{ at: Date; source: string; action: string; actorName: string | null; details: Record<string, unknown> }>(
+        `SELECT e.at, 'audit' AS source, e.action, u.name AS "actorName", e.details
+           FROM audit_events e LEFT JOIN users u ON u.id = e.actor_user_id
+          WHERE e.organization_id = $1 AND e.subject_type = 'asset' AND e.subject_id = $2
+         UNION ALL
+         SELECT c.at, 'custody', c.kind, u.name, jsonb_strip_nulls(jsonb_build_object('holder', c.holder, 'location', c.location, 'bookingId', c.booking_id, 'note', c.note))
+           FROM custody_events c LEFT JOIN users u ON u.id = c.actor_user_id
+          WHERE c.organization_id = $1 AND c.asset_id = $2::uuid
+         ORDER BY at DESC LIMIT 500`,
+        [id],
+      );
+      return { items: rows.map((r) => ({ ...r, summary: describeHistory(r.action, r.details) })) };
+    });
+  }
+
+  private validSpecs(asset: Asset, specs: Record<string, unknown>) {
+    const parsed = specsByType[asset.type].safeParse(specs);
+    if (parsed.success) return parsed.data;
+    const fields = Object.fromEntries(parsed.error.issues.map((i) => [['specs', ...i.path].join('.'), i.message]));
+    throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields });
+  }
+
+  private assertTypeRules(asset: Asset) {
+    const fields: Record<string, string> = {};
+    if (asset.rfidTag && asset.type !== 'tip') fields.rfidTag = 'is only for probe tips';
+    if (asset.firmwareVersion && !typesWithFirmware.includes(asset.type)) fields.firmwareVersion = 'is only for trackers, controllers and probes';
+    if (Object.keys(fields).length) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields });
+  }
+
+  /** 409 naming the clash; the unique indexes catch a race between two requests. */
+  private async assertIdentityFree(tx: Scoped, assetTag: string | null, rfidTag: string | null, exceptId?: string) {
+    const clash = async (column: string, value: string) =>
+      (await tx.select(Asset, 'a').andWhere(`a.${column} = :value`, { value }).andWhere(exceptId ? 'a.id <> :exceptId' : 'TRUE', { exceptId }).getOne()) ?? null;
+    const fields: Record<string, string> = {};
+    const messages: string[] = [];
+    if (assetTag) {
+      const other = await clash('asset_tag', assetTag);
+      if (other) {
+        fields.assetTag = `is already used by ${other.assetTag} (${other.type})`;
+        messages.push(`Asset tag ${assetTag} is already in use.`);
+      }
+    }
+    if (rfidTag) {
+      const other = await clash('rfid_tag', rfidTag);
+      if (other) {
+        fields.rfidTag = `is already on ${other.assetTag}`;
+        messages.push(`RFID tag ${rfidTag} is already on ${other.assetTag}.`);
+      }
+    }
+    if (messages.length) throw conflict(messages.join(' '), { fields });
+  }
+
+  private async saving<T>(work: () => Promise<T>): Promise<T> {
+    try {
+      return await work();
+    } catch (err) {
+      if (isUniqueViolation(err)) throw conflict('Another asset took that asset tag or RFID tag a moment ago.');
+      throw err;
+    }
+  }
+}
+
+function describeHistory(action: string, details: Record<string, unknown>): string {
+  switch (action) {
+    case 'asset.created':
+      return 'Registered in the fleet';
+    case 'asset.updated':
+      return `Changed ${Object.keys((details.changes as object) ?? {}).join(', ')}`;
+    case 'asset.retired':
+      return `Retired: ${details.reason}`;
+    case 'registered':
+      return `Taken into the fleet${details.location ? ` at ${details.location}` : ''}`;
+    case 'moved':
+      return `Moved to ${details.location ?? 'no recorded location'}`;
+    case 'retired':
+      return 'Taken out of service for good';
+    default:
+      return action.replace(/[._]/g, ' ');
+  }
+}

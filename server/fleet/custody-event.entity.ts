@@ -1,0 +1,43 @@
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { OrgOwned } from '../db/org-owned';
+import { Asset } from './asset.entity';
+
+export type CustodyKind = 'registered' | 'checked_out' | 'returned' | 'sent_to_lab' | 'back_from_lab' | 'held' | 'released' | 'retired' | 'moved';
+
+/** Append-only chain of custody: who had an item, where, from when (DESIGN.md §3).
+ * The database refuses UPDATE and DELETE on this table. */
+@Entity({ name: 'custody_events' })
+@Index(['organizationId', 'assetId', 'at'])
+export class CustodyEvent extends OrgOwned {
+  @PrimaryGeneratedColumn('identity', { type: 'bigint' })
+  id: string;
+
+  @Column({ name: 'asset_id', type: 'uuid' })
+  assetId: string;
+
+  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'asset_id' })
+  asset?: Asset;
+
+  @Column({ type: 'text' })
+  kind: CustodyKind;
+
+  @Column({ name: 'actor_user_id', type: 'uuid', nullable: true })
+  actorUserId: string | null;
+
+  /** Who holds the item after this event (a person, a customer, a lab). */
+  @Column({ name: 'holder', type: 'text', nullable: true })
+  holder: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  location: string | null;
+
+  @Column({ name: 'booking_id', type: 'uuid', nullable: true })
+  bookingId: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  note: string | null;
+
+  @CreateDateColumn({ name: 'at', type: 'timestamptz' })
+  at: Date;
+}

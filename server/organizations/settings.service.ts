@@ -1,0 +1,23 @@
+import type { DataSource } from 'typeorm';
+import type { z } from 'zod';
+import type { organizationSettingsPayload } from '../../shared/schemas/assets';
+import { recordAudit } from '../audit/audit.service';
+import { inOrganization, type Actor } from '../db/transaction';
+import { loadOrgContext } from './org-context';
+import { Organization } from './organization.entity';
+
+const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>) => ({ name: ctx.name, timeZone: ctx.timeZone, currency: ctx.currency, dueSoonDays: ctx.dueSoonDays });
+
+export const getSettings = (db: DataSource, actor: Actor) => inOrganization(db, actor.organizationId, async (tx) => view(await loadOrgContext(tx)));
+
+export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<typeof organizationSettingsPayload>) {
+  return inOrganization(db, actor.organizationId, async (tx) => {
+    const org = await tx.manager.findOneByOrFail(Organization, { id: actor.organizationId });
+    const before = { timeZone: org.timeZone, ...org.settings };
+    if (patch.timeZone) org.timeZone = patch.timeZone;
+    if (patch.dueSoonDays !== undefined) org.settings = { ...org.settings, dueSoonDays: patch.dueSoonDays };
+    await tx.manager.save(Organization, org);
+    await recordAudit(tx, actor, 'settings.updated', { type: 'organization', id: org.id }, { before, after: patch });
+    return view(await loadOrgContext(tx));
+  });
+}

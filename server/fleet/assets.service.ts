@@ -9,11 +9,11 @@ import {
 } from '../../shared/schemas/assets';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
-import { inOrganization, type Actor } from '../db/transaction';
+import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { Asset } from './asset.entity';
-import { filteredAssets } from './asset-list';
+import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
 import { CustodyEvent } from './custody-event.entity';
 
@@ -30,10 +30,10 @@ export class AssetsService {
   ) {}
 
   list(actor: Actor, query: AssetListQuery) {
-    return inOrganization(this.db, actor.organizationId, async (tx) => {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const [rows, total] = await filteredAssets(tx, ctx, query).take(query.limit).skip(query.offset).getManyAndCount();
-      return { items: rows.map((a) => toAssetView(a, ctx, this.publicUrl)), total };
+      const { assets, total } = await findAssets(tx, ctx, query, query);
+      return { items: assets.map((a) => toAssetView(a, ctx, this.publicUrl)), total };
     });
   }
 

@@ -8,7 +8,7 @@ import { shippingSheetPdf } from '../documents/shipping-sheet-pdf';
 import { loadOrgContext } from '../organizations/org-context';
 import { Asset } from './asset.entity';
 import { assetsToCsv } from './asset-csv';
-import { filteredAssets } from './asset-list';
+import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
 import { equipmentRecordItems } from './equipment-record';
 import { Kit } from './kit.entity';
@@ -45,7 +45,7 @@ export class FleetDocumentsService {
   exportCsv(actor: Actor, filter: Omit<AssetListQuery, 'limit' | 'offset'>) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const assets = await filteredAssets(tx, ctx, filter).take(EXPORT_LIMIT).getMany();
+      const { assets } = await findAssets(tx, ctx, filter, { limit: EXPORT_LIMIT, offset: 0 });
       return assetsToCsv(assets.map((a) => toAssetView(a, ctx, this.publicUrl)));
     });
   }

@@ -1,18 +1,20 @@
 import { DEFAULT_DUE_SOON_DAYS, todayIn } from '../../shared/calibration/due-date';
 import type { Scoped } from '../db/scoped';
-import { Organization } from './organization.entity';
+import type { Organization } from './organization.entity';
 
 /** The organization facts most rules need: its calendar "today", due-soon window, currency. */
 export type OrgContext = { id: string; name: string; timeZone: string; currency: string; dueSoonDays: number; today: string };
 
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
-  const org = await tx.manager.findOneByOrFail(Organization, { id: tx.organizationId });
+  const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(
+    `SELECT name, time_zone, currency, settings FROM organizations WHERE id = $1`,
+  );
   return {
-    id: org.id,
+    id: tx.organizationId,
     name: org.name,
-    timeZone: org.timeZone,
+    timeZone: org.time_zone,
     currency: org.currency,
     dueSoonDays: org.settings.dueSoonDays ?? DEFAULT_DUE_SOON_DAYS,
-    today: todayIn(org.timeZone, now),
+    today: todayIn(org.time_zone, now),
   };
 }

@@ -21,6 +21,12 @@ import { fleetRoutes } from './fleet/fleet.routes';
 import { KitsService } from './fleet/kits.service';
 import { kitsRoutes } from './fleet/kits.routes';
 import { settingsRoutes } from './organizations/settings.routes';
+import { ChecksService } from './checks/checks.service';
+import { checksRoutes } from './checks/checks.routes';
+import { HoldsService } from './holds/holds.service';
+import { holdsRoutes } from './holds/holds.routes';
+import { IncidentsService } from './incidents/incidents.service';
+import { incidentsRoutes } from './incidents/incidents.routes';
 import { UsersService } from './users/users.service';
 import { usersRoutes } from './users/users.routes';
 
@@ -64,6 +70,9 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use('/api/settings', settingsRoutes(db));
   app.use('/api/assets', fleetRoutes(db, assets, fleetDocuments));
   app.use('/api/kits', kitsRoutes(kits, fleetDocuments));
+  app.use('/api', checksRoutes(new ChecksService(db)));
+  app.use('/api/assets', holdsRoutes(new HoldsService(db)));
+  app.use('/api/incidents', incidentsRoutes(new IncidentsService(db)));
   app.use('/api', unknownApiRoute);
 
   const clientDir = path.resolve(config.CLIENT_DIR);

@@ -2,6 +2,9 @@ import { AuditEvent } from '../audit/audit-event.entity';
 import { Asset } from '../fleet/asset.entity';
 import { CustodyEvent } from '../fleet/custody-event.entity';
 import { Kit } from '../fleet/kit.entity';
+import { FieldCheck } from '../checks/field-check.entity';
+import { Hold } from '../holds/hold.entity';
+import { Incident, IncidentPhoto } from '../incidents/incident.entity';
 import { JobLease, JobRun } from '../jobs/job-run.entity';
 import { OutboxMessage } from '../notifications/outbox-message.entity';
 import { SinkMessage } from '../notifications/sink-message.entity';
@@ -9,4 +12,4 @@ import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity the data source knows; a new component adds its own here. */
-export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent];
+export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto];

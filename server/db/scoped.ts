@@ -45,7 +45,7 @@ export class Scoped {
   }
 
   /** Insert many rows in chunks (one statement per chunk); returns the generated ids in order. */
-  async insertMany<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, rows: QueryDeepPartialEntity<Omit<T, 'organizationId'>>[], chunk = 1000): Promise<string[]> {
+  async insertMany<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, rows: DeepPartial<Omit<T, 'organizationId'>>[], chunk = 1000): Promise<string[]> {
     const ids: string[] = [];
     for (let i = 0; i < rows.length; i += chunk) {
       const values = rows.slice(i, i + chunk).map((r) => ({ ...r, organizationId: this.organizationId }) as QueryDeepPartialEntity<T>);

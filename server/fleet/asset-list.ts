@@ -30,7 +30,7 @@ const stateConditions: Record<string, (today: Placeholder, soonEnd: Placeholder)
 
 const COLUMNS = `a.id, a.organization_id AS "organizationId", a.type, a.asset_tag AS "assetTag", a.serial_number AS "serialNumber",
   a.manufacturer, a.model, a.firmware_version AS "firmwareVersion", a.rfid_tag AS "rfidTag", a.location,
-  a.replacement_value_minor::float8 AS "replacementValueMinor", a.notes, a.status, a.specs, a.kit_id AS "kitId",
+  a.replacement_value_minor::float8 AS "replacementValueMinor", a.notes, a.status, a.specs, a.tolerance_overrides AS "toleranceOverrides", a.kit_id AS "kitId",
   a.calibration_required AS "calibrationRequired", a.calibration_interval_months AS "calibrationIntervalMonths",
   a.calibration_provider AS "calibrationProvider", to_char(a.last_calibrated_on, 'YYYY-MM-DD') AS "lastCalibratedOn",
   to_char(a.due_on, 'YYYY-MM-DD') AS "dueOn", a.retired_at AS "retiredAt", a.retired_reason AS "retiredReason",

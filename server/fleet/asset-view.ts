@@ -31,6 +31,7 @@ export function toAssetView(a: Asset, ctx: OrgContext, publicUrl: string): Asset
       dueOn: a.dueOn,
       state: calibrationState(a.calibrationRequired, a.dueOn, ctx.today, ctx.dueSoonDays),
     },
+    toleranceOverrides: a.toleranceOverrides ?? null,
     qrPayload: qrPayloadFor(publicUrl, a.id),
     retiredAt: a.retiredAt?.toISOString() ?? null,
     retiredReason: a.retiredReason,

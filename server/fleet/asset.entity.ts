@@ -1,5 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { Tolerance } from '../../shared/checks/tolerance';
 import type { AssetStatus, AssetType } from '../../shared/schemas/assets';
+import type { CheckKind } from '../../shared/schemas/check-kinds';
 import { OrgOwned } from '../db/org-owned';
 import { Kit } from './kit.entity';
 
@@ -52,6 +54,10 @@ export class Asset extends OrgOwned {
   /** Type-specific facts, validated per type by shared/schemas/assets.ts. */
   @Column({ type: 'jsonb' })
   specs: Record<string, unknown> = {};
+
+  /** Check tolerances for this item, replacing the firm's defaults (by check kind). */
+  @Column({ name: 'tolerance_overrides', type: 'jsonb', nullable: true })
+  toleranceOverrides: Partial<Record<CheckKind, Tolerance>> | null;
 
   @Index()
   @Column({ name: 'kit_id', type: 'uuid', nullable: true })

@@ -79,6 +79,7 @@ export class AssetsService {
           location: input.location ?? null,
           replacementValueMinor: input.replacementValueMinor ?? null,
           notes: input.notes ?? null,
+          toleranceOverrides: input.toleranceOverrides ?? null,
           specs: specsByType[input.type].parse(input.specs ?? {}),
           calibrationRequired: plan.required,
           calibrationIntervalMonths: plan.intervalMonths ?? null,
@@ -106,6 +107,7 @@ export class AssetsService {
       };
       for (const field of editableFields) if (patch[field] !== undefined) change(field, (patch[field] === '' ? null : patch[field]) as never);
       if (patch.specs !== undefined) change('specs', this.validSpecs(asset, patch.specs));
+      if (patch.toleranceOverrides !== undefined) change('toleranceOverrides', patch.toleranceOverrides);
       this.assertTypeRules(asset);
       if (patch.calibration) {
         const plan = patch.calibration;

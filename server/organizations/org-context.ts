@@ -1,9 +1,21 @@
 import { DEFAULT_DUE_SOON_DAYS, todayIn } from '../../shared/calibration/due-date';
+import type { DecisionRule } from '../../shared/checks/decision';
+import type { Tolerance } from '../../shared/checks/tolerance';
+import { defaultTolerances, type CheckKind } from '../../shared/schemas/checks';
 import type { Scoped } from '../db/scoped';
 import type { Organization } from './organization.entity';
 
 /** The organization facts most rules need: its calendar "today", due-soon window, currency. */
-export type OrgContext = { id: string; name: string; timeZone: string; currency: string; dueSoonDays: number; today: string };
+export type OrgContext = {
+  id: string;
+  name: string;
+  timeZone: string;
+  currency: string;
+  dueSoonDays: number;
+  today: string;
+  decisionRule: DecisionRule;
+  tolerances: Record<CheckKind, Tolerance>;
+};
 
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
   const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(
@@ -16,5 +28,7 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
     currency: org.currency,
     dueSoonDays: org.settings.dueSoonDays ?? DEFAULT_DUE_SOON_DAYS,
     today: todayIn(org.time_zone, now),
+    decisionRule: org.settings.decisionRule ?? 'simple',
+    tolerances: { ...defaultTolerances, ...org.settings.tolerances },
   };
 }

@@ -1,11 +1,15 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
+import type { DecisionRule } from '../../shared/checks/decision';
+import type { Tolerance } from '../../shared/checks/tolerance';
+import type { CheckKind } from '../../shared/schemas/checks';
+
 export type OrganizationSettings = {
   dueSoonDays: number;
-  decisionRule: 'simple' | 'guarded';
+  decisionRule: DecisionRule;
+  /** Default tolerance per check kind; an asset may override it. */
+  tolerances: Partial<Record<CheckKind, Tolerance>>;
 };
-
-export const defaultOrganizationSettings: OrganizationSettings = { dueSoonDays: 30, decisionRule: 'simple' };
 
 @Entity({ name: 'organizations' })
 export class Organization {

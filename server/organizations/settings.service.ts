@@ -6,7 +6,14 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from './org-context';
 import { Organization } from './organization.entity';
 
-const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>) => ({ name: ctx.name, timeZone: ctx.timeZone, currency: ctx.currency, dueSoonDays: ctx.dueSoonDays });
+const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>) => ({
+  name: ctx.name,
+  timeZone: ctx.timeZone,
+  currency: ctx.currency,
+  dueSoonDays: ctx.dueSoonDays,
+  decisionRule: ctx.decisionRule,
+  tolerances: ctx.tolerances,
+});
 
 export const getSettings = (db: DataSource, actor: Actor) => inOrganization(db, actor.organizationId, async (tx) => view(await loadOrgContext(tx)));
 
@@ -16,6 +23,8 @@ export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<type
     const before = { timeZone: org.timeZone, ...org.settings };
     if (patch.timeZone) org.timeZone = patch.timeZone;
     if (patch.dueSoonDays !== undefined) org.settings = { ...org.settings, dueSoonDays: patch.dueSoonDays };
+    if (patch.decisionRule) org.settings = { ...org.settings, decisionRule: patch.decisionRule };
+    if (patch.tolerances) org.settings = { ...org.settings, tolerances: { ...org.settings.tolerances, ...patch.tolerances } };
     await tx.manager.save(Organization, org);
     await recordAudit(tx, actor, 'settings.updated', { type: 'organization', id: org.id }, { before, after: patch });
     return view(await loadOrgContext(tx));

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { calibrationStates } from '../calibration/due-date';
+import { checkKinds, tolerancePayload } from './check-kinds';
 
 /** DESIGN.md §3 "Asset". Names are the project's own; keep them. */
 export const assetTypes = [
@@ -98,6 +99,8 @@ const assetFields = {
   notes: optionalText(4000),
   calibration: calibrationPlanPayload.optional(),
   specs: z.record(z.string(), z.unknown()).optional(),
+  /** Tolerances for this item's checks, replacing the firm's defaults. */
+  toleranceOverrides: z.partialRecord(z.enum(checkKinds), tolerancePayload).nullable().optional(),
 };
 
 /** Checks across fields: specs per type, RFID only on tips, firmware only where it exists. */
@@ -148,6 +151,8 @@ export const updateKitPayload = kitPayload.partial().strict();
 
 export const organizationSettingsPayload = z
   .object({
+    decisionRule: z.enum(['simple', 'guarded'], { message: 'must be simple or guarded' }),
+    tolerances: z.partialRecord(z.enum(checkKinds), tolerancePayload),
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
     timeZone: z.string().refine((tz) => {
       try {
@@ -186,6 +191,7 @@ export type AssetView = {
     dueOn: string | null;
     state: import('../calibration/due-date').CalibrationState;
   };
+  toleranceOverrides: Record<string, unknown> | null;
   /** What the QR label encodes; `GET /api/assets/lookup?code=` resolves it. */
   qrPayload: string;
   retiredAt: string | null;

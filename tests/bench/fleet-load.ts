@@ -15,12 +15,13 @@ const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.lengt
 async function load(name: string, pathAndQuery: string) {
   const times: number[] = [];
   let non2xx = 0;
-  const instance = autocannon({ url: `${base}${pathAndQuery}`, connections: 20, duration: 15, headers: { authorization: `Bearer ${token}` } });
-  instance.on('response', (_client: unknown, status: number, _bytes: number, ms: number) => {
-    times.push(ms);
-    if (status >= 300) non2xx += 1;
+  const result = await new Promise<autocannon.Result>((resolve, reject) => {
+    const instance = autocannon({ url: `${base}${pathAndQuery}`, connections: 20, duration: 15, headers: { authorization: `Bearer ${token}` } }, (err, r) => (err ? reject(err) : resolve(r)));
+    instance.on('response', (_client, status, _bytes, ms) => {
+      times.push(ms);
+      if (status >= 300) non2xx += 1;
+    });
   });
-  const result = await instance;
   times.sort((a, b) => a - b);
   console.log(
     `${name.padEnd(44)} ${String(result.requests.total).padStart(6)} req  ${(result.requests.average).toFixed(0).padStart(5)} req/s  p50 ${percentile(times, 50).toFixed(1)} ms  p95 ${percentile(times, 95).toFixed(1)} ms  p99 ${percentile(times, 99).toFixed(1)} ms${non2xx ? `  (${non2xx} non-2xx!)` : ''}`,

@@ -22,7 +22,7 @@ export function decodeQrFromPdf(pdf: Buffer, region?: Region, dpi = 300): string
 export function pdfText(pdf: Buffer): string {
   const doc = mupdf.Document.openDocument(pdf, 'application/pdf');
   const pages: string[] = [];
-  for (let i = 0; i < doc.countPages(); i += 1) pages.push(doc.loadPage(i).toStructuredText().asText());
+  for (let i = 0; i < doc.countPages(); i += 1) pages.push(doc.loadPage(i).toStructuredText('preserve-whitespace').asText());
   return pages.join('\n').replace(/\s+/g, ' ');
 }
 

@@ -1,0 +1,153 @@
+import type { DataSource } from 'typeorm';
+import { decide } from '../../shared/checks/decision';
+import { lengthCheck } from '../../shared/checks/length-check';
+import { tipValidation } from '../../shared/checks/tip-validation';
+import { toleranceUm } from '../../shared/checks/tolerance';
+import { twoFaceErrorUm } from '../../shared/checks/two-face';
+import { expandedUncertainty } from '../../shared/checks/uncertainty';
+import { assetTypeTitles, type AssetType, type TipPosition } from '../../shared/schemas/assets';
+import { checkKindTitles, checkSubjectType, type CheckPayload } from '../../shared/schemas/checks';
+import { recordAudit } from '../audit/audit.service';
+import type { Scoped } from '../db/scoped';
+import { inOrganization, type Actor } from '../db/transaction';
+import { Asset } from '../fleet/asset.entity';
+import { AppError, ruleBroken } from '../http/errors';
+import { placeHold } from '../holds/holds.service';
+import { enqueueMail } from '../notifications/outbox';
+import { staffAddresses } from '../notifications/staff';
+import { loadOrgContext } from '../organizations/org-context';
+import { FieldCheck } from './field-check.entity';
+
+const badField = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { [field]: message } });
+
+async function assetOfType(tx: Scoped, id: string, type: AssetType, field: string) {
+  const asset = await tx.findOne(Asset, { id });
+  if (!asset) throw badField(field, 'is not an asset of your fleet');
+  if (asset.type !== type) throw badField(field, `is a ${assetTypeTitles[asset.type].toLowerCase()}, not a ${assetTypeTitles[type].toLowerCase()}`);
+  if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
+  return asset;
+}
+
+/** The computation for each kind: results to store, the number the decision judges, and inputs worth keeping. */
+async function compute(tx: Scoped, input: CheckPayload, subject: Asset) {
+  switch (input.kind) {
+    case 'tip_validation': {
+      const positions = (subject.specs.positions as TipPosition[] | undefined) ?? [];
+      if (!positions.includes(input.position)) throw badField('position', `${subject.assetTag} is not used in the ${input.position} position (it is used: ${positions.join(', ') || 'none recorded'})`);
+      if (input.probeId) await assetOfType(tx, input.probeId, 'probe', 'probeId');
+      const result = tipValidation(input.reference, input.readings);
+      return { result, judged: result.maxDeviationUm, related: input.probeId ?? null, inputs: { reference: input.reference, readings: input.readings } };
+    }
+    case 'two_face': {
+      const errorUm = twoFaceErrorUm(input.front, input.back);
+      return { result: { errorUm }, judged: errorUm, related: null, inputs: { front: input.front, back: input.back } };
+    }
+    case 'length_check': {
+      const bar = await assetOfType(tx, input.scaleBarId, 'scale_bar', 'scaleBarId');
+      const certifiedLengthMm = Number(bar.specs.certifiedLengthMm);
+      const expansionPpmPerK = Number(bar.specs.expansionPpmPerK);
+      const r = lengthCheck(input.endA, input.endB, certifiedLengthMm, expansionPpmPerK, input.temperatureC);
+      return {
+        result: { measuredMm: r.measuredMm, expectedMm: r.expectedMm, errorUm: r.errorUm },
+        judged: r.errorUm,
+        related: bar.id,
+        inputs: { endA: input.endA, endB: input.endB, temperatureC: input.temperatureC, scaleBar: { assetTag: bar.assetTag, certifiedLengthMm, expansionPpmPerK } },
+      };
+    }
+  }
+}
+
+export const checkView = (c: FieldCheck) => ({
+  id: c.id,
+  kind: c.kind,
+  assetId: c.assetId,
+  relatedAssetId: c.relatedAssetId,
+  position: c.position,
+  inputs: c.inputs,
+  result: { ...c.result, toleranceUm: c.toleranceUm, guardBandUm: c.guardBandUm, expandedUncertaintyUm: c.expandedUncertaintyUm, decisionRule: c.decisionRule, decision: c.decision },
+  performedAt: c.performedAt.toISOString(),
+  performedBy: c.performedBy,
+  note: c.note,
+});
+
+export class ChecksService {
+  constructor(private readonly db: DataSource) {}
+
+  record(actor: Actor, input: CheckPayload) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      const subject = await assetOfType(tx, input.assetId, checkSubjectType[input.kind], 'assetId');
+      const { result, judged, related, inputs } = await compute(tx, input, subject);
+
+      const tolerance = input.toleranceUm ? { kind: 'fixed' as const, um: input.toleranceUm } : (subject.toleranceOverrides?.[input.kind] ?? ctx.tolerances[input.kind]);
+      if (tolerance.kind === 'range' && input.distanceM == null) throw badField('distanceM', 'is needed: the tolerance for this check depends on the distance from the tracker');
+      const limitUm = toleranceUm(tolerance, input.distanceM);
+      const uUm = input.uncertaintyUm ?? (input.uncertaintyComponentsUm?.length ? expandedUncertainty(input.uncertaintyComponentsUm) : 0);
+      const { decision, guardBandUm } = decide(judged, limitUm, ctx.decisionRule, uUm);
+
+      const check = await tx.insert(FieldCheck, {
+        kind: input.kind,
+        assetId: subject.id,
+        relatedAssetId: related,
+        position: input.kind === 'tip_validation' ? input.position : null,
+        inputs: { ...inputs, distanceM: input.distanceM ?? null, tolerance, uncertaintyComponentsUm: input.uncertaintyComponentsUm ?? null },
+        result,
+        toleranceUm: Math.round(limitUm * 10) / 10,
+        expandedUncertaintyUm: Math.round(uUm * 10) / 10,
+        guardBandUm: Math.round(guardBandUm * 10) / 10,
+        decisionRule: ctx.decisionRule,
+        decision,
+        performedAt: input.performedAt ? new Date(input.performedAt) : new Date(),
+        performedBy: actor.userId,
+        note: input.note ?? null,
+      });
+      await recordAudit(tx, actor, 'check.recorded', { type: 'asset', id: subject.id }, { checkId: check.id, kind: check.kind, decision, position: check.position });
+      if (decision === 'fail') {
+        const what = `${checkKindTitles[input.kind]}${check.position ? ` (${check.position})` : ''} failed: ${judged.toFixed(1)} µm against ${limitUm.toFixed(1)} µm`;
+        await placeHold(tx, actor, subject, { reason: 'failed_check', summary: what, checkId: check.id });
+        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
+          subject: `${subject.assetTag} is on hold: ${checkKindTitles[input.kind].toLowerCase()} failed`,
+          heading: `${subject.assetTag} failed a field check and is on hold`,
+          paragraphs: [what + '.', 'It cannot be booked or checked out until it is recalibrated or passes the check again and someone releases it. Jobs it measured since its last good check may need a look.'],
+        });
+      }
+      return checkView(check);
+    });
+  }
+
+  list(actor: Actor, query: { assetId?: string; kind?: CheckPayload['kind']; limit: number; offset: number }) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const [rows, total] = await tx.findAndCount(FieldCheck, {
+        where: { ...(query.assetId ? { assetId: query.assetId } : {}), ...(query.kind ? { kind: query.kind } : {}) },
+        order: { performedAt: 'DESC' },
+        take: query.limit,
+        skip: query.offset,
+      });
+      return { items: rows.map(checkView), total };
+    });
+  }
+
+  get(actor: Actor, id: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => checkView(await tx.get(FieldCheck, { id }, 'That check')));
+  }
+
+  /** Per mounting position: validated only when the latest validation in that position passed. */
+  tipStatus(actor: Actor, assetId: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => tipValidationStatus(tx, await tx.get(Asset, { id: assetId }, 'That asset')));
+  }
+}
+
+export async function tipValidationStatus(tx: Scoped, tip: Asset) {
+  const positions = (tip.specs.positions as TipPosition[] | undefined) ?? [];
+  const latest = await tx.sql<{ position: string; decision: string; performedAt: Date; id: string }>(
+    `SELECT DISTINCT ON (position) position, decision, performed_at AS "performedAt", id FROM field_checks
+      WHERE organization_id = $1 AND asset_id = $2 AND kind = 'tip_validation' ORDER BY position, performed_at DESC, created_at DESC`,
+    [tip.id],
+  );
+  return {
+    positions: positions.map((position) => {
+      const last = latest.find((l) => l.position === position);
+      return { position, state: !last ? 'not_validated' : last.decision === 'pass' ? 'validated' : 'failed', lastCheckId: last?.id ?? null, lastPerformedAt: last?.performedAt ?? null };
+    }),
+  };
+}

@@ -1,0 +1,120 @@
+import { IsNull, type DataSource } from 'typeorm';
+import { assetTypeTitles, type TipPosition } from '../../shared/schemas/assets';
+import { recordAudit } from '../audit/audit.service';
+import type { Scoped } from '../db/scoped';
+import { inOrganization, type Actor } from '../db/transaction';
+import { ruleBroken } from '../http/errors';
+import { Asset } from '../fleet/asset.entity';
+import { CustodyEvent } from '../fleet/custody-event.entity';
+import { Hold, type HoldReason } from './hold.entity';
+
+/** Take an asset out of service inside the caller's transaction. A second
+ * reason while already held is recorded on the audit trail, not as a new hold. */
+export async function placeHold(tx: Scoped, actor: Actor, asset: Asset, hold: { reason: HoldReason; summary: string; incidentId?: string; checkId?: string }) {
+  const current = await tx.findOne(Hold, { assetId: asset.id, releasedAt: IsNull() });
+  if (current) {
+    await recordAudit(tx, actor, 'asset.hold_reason_added', { type: 'asset', id: asset.id }, { holdId: current.id, ...hold });
+    return current;
+  }
+  const created = await tx.insert(Hold, {
+    assetId: asset.id,
+    reason: hold.reason,
+    summary: hold.summary,
+    incidentId: hold.incidentId ?? null,
+    checkId: hold.checkId ?? null,
+    startedAt: new Date(),
+    startedBy: actor.userId,
+    releasedAt: null,
+    releasedBy: null,
+    releaseEvidence: null,
+  });
+  await tx.updateWhere(Asset, { id: asset.id }, { status: 'held' });
+  await tx.insert(CustodyEvent, { assetId: asset.id, kind: 'held', actorUserId: actor.userId, holder: null, location: asset.location, bookingId: null, note: hold.summary });
+  await recordAudit(tx, actor, 'asset.held', { type: 'asset', id: asset.id }, { holdId: created.id, reason: hold.reason, summary: hold.summary });
+  return created;
+}
+
+type Evidence = { kind: string; id: string; performedAt: string; position?: string | null };
+
+export class HoldsService {
+  constructor(private readonly db: DataSource) {}
+
+  hold(actor: Actor, assetId: string, summary: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const asset = await tx.get(Asset, { id: assetId }, 'That asset');
+      if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
+      return this.view(await placeHold(tx, actor, asset, { reason: 'manual', summary }));
+    });
+  }
+
+  current(actor: Actor, assetId: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      await tx.get(Asset, { id: assetId }, 'That asset');
+      const holds = await tx.find(Hold, { where: { assetId }, order: { startedAt: 'DESC' }, take: 20 });
+      return { items: holds.map((h) => this.view(h)) };
+    });
+  }
+
+  /** Release only on evidence recorded after the hold began (DESIGN.md §3 "Hold"). */
+  release(actor: Actor, assetId: string, note?: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const asset = await tx.get(Asset, { id: assetId }, 'That asset');
+      const hold = await tx.findOne(Hold, { assetId, releasedAt: IsNull() });
+      if (!hold) throw ruleBroken('not_held', `${asset.assetTag} is not on hold.`);
+      const { evidence, missing } = await this.evidenceSince(tx, asset, hold.startedAt);
+      if (missing.length) {
+        throw ruleBroken('release_needs_evidence', `${asset.assetTag} stays on hold: ${missing.join('; ')}.`, { missing, holdStartedAt: hold.startedAt.toISOString() });
+      }
+      hold.releasedAt = new Date();
+      hold.releasedBy = actor.userId;
+      hold.releaseEvidence = { evidence, note: note ?? null };
+      await tx.save(Hold, hold);
+      await tx.updateWhere(Asset, { id: assetId }, { status: 'ready' });
+      await tx.insert(CustodyEvent, { assetId, kind: 'released', actorUserId: actor.userId, holder: null, location: asset.location, bookingId: null, note: note ?? null });
+      await recordAudit(tx, actor, 'asset.released', { type: 'asset', id: assetId }, { holdId: hold.id, evidence });
+      return this.view(hold);
+    });
+  }
+
+  /**
+   * What clears a hold: for a tip, a passing validation in every position it is
+   * used in; for a tracker, a passing two-face or length check; for any item,
+   * a calibration recorded after the hold began.
+   */
+  private async evidenceSince(tx: Scoped, asset: Asset, since: Date): Promise<{ evidence: Evidence[]; missing: string[] }> {
+    const passing = await tx.sql<{ id: string; kind: string; position: string | null; performedAt: string }>(
+      `SELECT id, kind, position, performed_at AS "performedAt" FROM field_checks
+        WHERE organization_id = $1 AND asset_id = $2 AND decision = 'pass' AND performed_at >= $3 AND created_at > $3
+        ORDER BY performed_at`,
+      [asset.id, since],
+    );
+    // Until calibration certificates are recorded as events, the plan's last calibration date stands for one.
+    const calibrated = asset.lastCalibratedOn !== null && asset.lastCalibratedOn >= since.toISOString().slice(0, 10);
+    if (calibrated) return { evidence: [{ kind: 'calibration', id: asset.id, performedAt: asset.lastCalibratedOn! }], missing: [] };
+    if (asset.type === 'tip') {
+      const positions = ((asset.specs.positions as TipPosition[] | undefined) ?? ['vertical']);
+      const found = positions.map((p) => passing.find((c) => c.kind === 'tip_validation' && c.position === p));
+      const missing = positions.filter((_, i) => !found[i]).map((p) => `no passing ${p} tip validation since the hold began`);
+      return { evidence: found.filter((f): f is (typeof passing)[number] => !!f), missing };
+    }
+    if (asset.type === 'tracker') {
+      const check = passing.find((c) => c.kind === 'two_face' || c.kind === 'length_check');
+      return check ? { evidence: [check], missing: [] } : { evidence: [], missing: ['no passing two-face or length check since the hold began'] };
+    }
+    return { evidence: [], missing: [`a ${assetTypeTitles[asset.type].toLowerCase()} needs a calibration recorded after the hold began`] };
+  }
+
+  private view(h: Hold) {
+    return {
+      id: h.id,
+      assetId: h.assetId,
+      reason: h.reason,
+      summary: h.summary,
+      incidentId: h.incidentId,
+      checkId: h.checkId,
+      startedAt: h.startedAt.toISOString(),
+      releasedAt: h.releasedAt?.toISOString() ?? null,
+      releaseEvidence: h.releaseEvidence,
+    };
+  }
+}

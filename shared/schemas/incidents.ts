@@ -1,0 +1,46 @@
+import { z } from 'zod';
+
+export const incidentKinds = ['dropped', 'impact', 'missing', 'malfunction', 'other'] as const;
+export type IncidentKind = (typeof incidentKinds)[number];
+export const incidentKindTitles: Record<IncidentKind, string> = {
+  dropped: 'Dropped',
+  impact: 'Knocked or hit',
+  missing: 'Missing',
+  malfunction: 'Not working right',
+  other: 'Something else',
+};
+
+export const incidentStates = ['reported', 'reviewing', 'resolved'] as const;
+export type IncidentState = (typeof incidentStates)[number];
+
+export const MAX_INCIDENT_PHOTOS = 6;
+export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
+export const photoTypes = ['image/jpeg', 'image/png', 'image/heic', 'image/heif'] as const;
+
+/** Multipart text fields arrive as strings. */
+export const incidentPayload = z.object({
+  assetId: z.uuid('is not an asset id'),
+  kind: z.enum(incidentKinds, { message: `must be one of ${incidentKinds.join(', ')}` }),
+  description: z.string().trim().min(3, 'say briefly what happened').max(4000),
+  occurredAt: z.iso.datetime({ offset: true, message: 'must be a date and time' }),
+  location: z.string().trim().max(200).optional().transform((v) => v || null),
+  bookingId: z.uuid('is not a booking id').optional().or(z.literal('').transform(() => undefined)),
+});
+
+export const incidentUpdatePayload = z
+  .object({
+    state: z.enum(incidentStates).optional(),
+    resolution: z.string().trim().max(4000).nullable().optional(),
+    chargeAmountMinor: z.number().int('must be whole minor units').min(0, 'cannot be negative').max(1e9).nullable().optional(),
+  })
+  .strict();
+
+export const incidentListQuery = z.object({
+  assetId: z.uuid().optional(),
+  state: z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(z.enum(incidentStates))).optional(),
+  limit: z.coerce.number().int().min(1).max(500).default(50),
+  offset: z.coerce.number().int().min(0).default(0),
+});
+
+export const releasePayload = z.object({ note: z.string().trim().max(2000).optional() });
+export const holdPayload = z.object({ summary: z.string().trim().min(3, 'say why the item is held').max(500) });

@@ -1,47 +1,9 @@
 import { z } from 'zod';
 import { calibrationStates } from '../calibration/due-date';
 import { checkKinds, tolerancePayload } from './check-kinds';
+import { assetSortFields, assetStatuses, assetTypes, tipPositions, typesWithFirmware, type AssetStatus, type AssetType } from '../assets/vocabulary';
 
-/** DESIGN.md §3 "Asset". Names are the project's own; keep them. */
-export const assetTypes = [
-  'tracker',
-  'controller',
-  'probe',
-  'tip',
-  'battery',
-  'smr',
-  'reference_sphere',
-  'nest',
-  'scale_bar',
-  'weather_station',
-  'case',
-  'accessory',
-] as const;
-export type AssetType = (typeof assetTypes)[number];
-
-export const assetTypeTitles: Record<AssetType, string> = {
-  tracker: 'Laser tracker',
-  controller: 'Controller',
-  probe: '6DoF probe',
-  tip: 'Probe tip',
-  battery: 'Battery',
-  smr: 'SMR',
-  reference_sphere: 'Reference sphere',
-  nest: 'Nest',
-  scale_bar: 'Scale bar',
-  weather_station: 'Weather station',
-  case: 'Case',
-  accessory: 'Accessory',
-};
-
-/** Types that carry firmware (DESIGN.md §3). */
-export const typesWithFirmware: readonly AssetType[] = ['tracker', 'controller', 'probe'];
-
-export const assetStatuses = ['ready', 'out', 'at_lab', 'held', 'retired'] as const;
-export type AssetStatus = (typeof assetStatuses)[number];
-
-export const tipPositions = ['vertical', 'horizontal'] as const;
-export type TipPosition = (typeof tipPositions)[number];
+export * from '../assets/vocabulary';
 
 const positiveMm = z.number({ message: 'must be a number' }).positive('must be more than 0').max(100_000, 'is implausibly large');
 
@@ -125,7 +87,6 @@ export const retireAssetPayload = z.object({ reason: z.string().trim().min(3, 's
 const listOf = <T extends z.ZodType>(item: T) =>
   z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(item)).optional();
 
-export const assetSortFields = ['assetTag', 'type', 'serialNumber', 'manufacturer', 'model', 'location', 'status', 'dueOn', 'updatedAt'] as const;
 
 export const assetListQuery = z.object({
   q: z.string().trim().max(100).optional(),

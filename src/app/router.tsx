@@ -39,6 +39,20 @@ export const routes: RouteObject[] = [
         errorElement: <RouteError />,
         children: [
           { index: true, lazy: screen(() => import('./routes/home')) },
+          gated('fleet.read', [
+            { path: 'fleet', lazy: screen(() => import('./routes/fleet')) },
+            { path: 'fleet/:id', lazy: screen(() => import('./routes/asset')) },
+            { path: 'fleet/:id/record', lazy: screen(() => import('./routes/asset-record')) },
+            { path: 'kits', lazy: screen(() => import('./routes/kits')) },
+            { path: 'kits/:id', lazy: screen(() => import('./routes/kit')) },
+            { path: 'scan', lazy: screen(() => import('./routes/scan')) },
+            { path: 'scan/:code', lazy: screen(() => import('./routes/scan')) },
+          ]),
+          gated('fleet.write', [
+            { path: 'fleet/new', lazy: screen(() => import('./routes/asset-form')) },
+            { path: 'fleet/:id/edit', lazy: screen(() => import('./routes/asset-form')) },
+          ]),
+          gated('settings.manage', [{ path: 'settings', lazy: screen(() => import('./routes/settings')) }]),
           gated('users.manage', [{ path: 'users', lazy: screen(() => import('./routes/users')) }]),
           gated('mailbox.read', [{ path: 'mailbox', lazy: screen(() => import('./routes/mailbox')) }]),
           gated('jobs.run', [{ path: 'admin/jobs', lazy: screen(() => import('./routes/jobs')) }]),

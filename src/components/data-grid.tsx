@@ -1,55 +1,11 @@
-import {
-  AllCommunityModule,
-  ModuleRegistry,
-  themeQuartz,
-  type ColDef,
-  type ColTypeDef,
-  type GetRowIdParams,
-  type GridApi,
-  type GridReadyEvent,
-  type RowClickedEvent,
-} from 'ag-grid-community';
+import type { ColDef, GetRowIdParams, GridApi, GridReadyEvent, RowClickedEvent } from 'ag-grid-community';
 import { AgGridReact } from 'ag-grid-react';
 import { useCallback, useId, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Button } from './button';
+import { actionsColumnType, columnTypes, escapeHtml, nestkeeperGridTheme } from './grid-setup';
 import { DownloadIcon } from './icons';
 
-// Registered once, when the first page with a table is loaded (this module is only
-// imported by lazily loaded screens, so ag-grid stays out of the initial bundle).
-ModuleRegistry.registerModules([AllCommunityModule]);
-
-/** Nestkeeper's grid look: paper rows, ink header, brass focus, bundled fonts only. */
-export const nestkeeperGridTheme = themeQuartz.withParams({
-  fontFamily: ['Source Sans 3', 'system-ui', 'sans-serif'],
-  headerFontFamily: ['Source Sans 3', 'system-ui', 'sans-serif'],
-  fontSize: 15,
-  headerFontSize: 14,
-  headerFontWeight: 600,
-  backgroundColor: '#fffdf8',
-  foregroundColor: '#1c2536',
-  textColor: '#1c2536',
-  subtleTextColor: '#5b6474',
-  headerBackgroundColor: '#ebe3d3',
-  headerTextColor: '#1c2536',
-  oddRowBackgroundColor: '#fbf8f1',
-  rowHoverColor: '#f1e6c9',
-  selectedRowBackgroundColor: '#f1e6c9',
-  borderColor: '#d9cfbb',
-  accentColor: '#7a5f22',
-  chromeBackgroundColor: '#ebe3d3',
-  wrapperBorderRadius: 8,
-  borderRadius: 4,
-  spacing: 6,
-  rowHeight: 40,
-  headerHeight: 38,
-  iconSize: 14,
-});
-
-/** Column type for per-row buttons: not sortable, not filterable, left out of CSV. */
-export const actionsColumnType = 'nkActions';
-const columnTypes: Record<string, ColTypeDef> = {
-  [actionsColumnType]: { sortable: false, filter: false, resizable: false, suppressHeaderMenuButton: true },
-};
+export { actionsColumnType, nestkeeperGridTheme } from './grid-setup';
 
 export interface DataGridProps<T> {
   /** Rows to show; `undefined` while loading. */
@@ -72,10 +28,6 @@ export interface DataGridProps<T> {
   /** Extra toolbar content (right side). */
   toolbar?: ReactNode;
   className?: string;
-}
-
-function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 }
 
 /** The one ag-grid wrapper: sort, filter, export; a feature supplies column definitions only. */

@@ -12,7 +12,9 @@ export function Dialog({
   title,
   description,
   children,
+  size = 'md',
 }: {
+  size?: 'md' | 'lg';
   open: boolean;
   onClose: () => void;
   title: string;
@@ -40,7 +42,7 @@ export function Dialog({
         e.preventDefault();
         onClose();
       }}
-      className="m-auto w-[min(32rem,calc(100vw-1.5rem))] rounded-lg border border-paper-line bg-card p-0 text-ink-900 shadow-xl"
+      className={`m-auto ${size === 'lg' ? 'w-[min(56rem,calc(100vw-1.5rem))]' : 'w-[min(32rem,calc(100vw-1.5rem))]'} rounded-lg border border-paper-line bg-card p-0 text-ink-900 shadow-xl`}
     >
       {open ? (
         <div className="p-5">

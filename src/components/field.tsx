@@ -113,3 +113,82 @@ export function SelectField({ name, label, hint, options, id, className, ...rest
     </FieldFrame>
   );
 }
+
+export interface CheckboxFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 'name' | 'id' | 'type'> {
+  /** Formik field name. A boolean field, or (with `value`) an array the value is added to and removed from. */
+  name: string;
+  label: ReactNode;
+  value?: string;
+  hint?: ReactNode;
+  /** Show the field's error under this box (set on one box of a group, or leave to CheckboxGroup). */
+  showError?: boolean;
+  className?: string;
+}
+
+/** A labelled checkbox with a comfortable touch target. */
+export function CheckboxField({ name, label, value, hint, showError = true, className = '', ...rest }: CheckboxFieldProps) {
+  const autoId = useId();
+  const inputId = `f-${name}-${value ?? ''}-${autoId}`;
+  const [field] = useField({ name, type: 'checkbox', value });
+  const error = useVisibleError(name);
+  return (
+    <div className={`flex flex-col gap-1 ${className}`}>
+      <label htmlFor={inputId} className="flex min-h-10 cursor-pointer items-center gap-2 text-base text-ink-900">
+        <input
+          id={inputId}
+          type="checkbox"
+          {...field}
+          value={value}
+          aria-invalid={showError && error ? true : undefined}
+          aria-describedby={showError && error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined}
+          className="size-5 accent-brass-deep"
+          {...rest}
+        />
+        <span>{label}</span>
+      </label>
+      {hint && !(showError && error) ? (
+        <p id={`${inputId}-hint`} className="text-sm text-ink-500">
+          {hint}
+        </p>
+      ) : null}
+      {showError && error ? (
+        <p id={`${inputId}-error`} className="flex items-start gap-1 text-sm text-bad">
+          <AlertIcon size={14} className="mt-0.5 shrink-0" />
+          <span>{error}</span>
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+/** A group of checkboxes bound to one array field, with one legend and one error. */
+export function CheckboxGroup({
+  name,
+  legend,
+  options,
+  className = '',
+}: {
+  name: string;
+  legend: ReactNode;
+  options: readonly { value: string; label: string }[];
+  className?: string;
+}) {
+  const error = useVisibleError(name);
+  const errorId = useId();
+  return (
+    <fieldset className={`flex flex-col gap-1 ${className}`} aria-describedby={error ? errorId : undefined}>
+      <legend className="text-sm font-semibold text-ink-800">{legend}</legend>
+      <div className="flex flex-wrap gap-x-5">
+        {options.map((o) => (
+          <CheckboxField key={o.value} name={name} value={o.value} label={o.label} showError={false} />
+        ))}
+      </div>
+      {error ? (
+        <p id={errorId} className="flex items-start gap-1 text-sm text-bad">
+          <AlertIcon size={14} className="mt-0.5 shrink-0" />
+          <span>{error}</span>
+        </p>
+      ) : null}
+    </fieldset>
+  );
+}

@@ -81,6 +81,11 @@ async function readErrorBody(response: Response): Promise<ApiError> {
   } catch {
     body = undefined;
   }
+  return apiErrorFromBody(response.status, body);
+}
+
+function apiErrorFromBody(status: number, body: unknown): ApiError {
+  const response = { status };
   const error = (body as { error?: { code?: unknown; message?: unknown; details?: unknown } } | undefined)?.error;
   if (error && typeof error.code === 'string') {
     return new ApiError({
@@ -144,3 +149,60 @@ export const apiClient = {
     request<T>('PUT', path, { ...options, body }),
   delete: <T>(path: string, options?: Omit<RequestOptions, 'body'>) => request<T>('DELETE', path, options),
 };
+
+export interface UploadOptions {
+  query?: Query;
+  /** Sent as the request's Content-Type (the file is the raw body). */
+  contentType?: string;
+  /** Called with 0…1 as the body goes up. */
+  onProgress?: (fraction: number) => void;
+  signal?: AbortSignal;
+}
+
+/**
+ * POSTs a file as the raw request body with upload progress (fetch cannot
+ * report upload progress, XMLHttpRequest can). Same cookie, CSRF header and
+ * error shape as `request`.
+ */
+export function uploadFile<T>(path: string, file: Blob, options: UploadOptions = {}): Promise<T> {
+  return new Promise<T>((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', buildUrl(path, options.query));
+    xhr.withCredentials = true;
+    xhr.setRequestHeader('Accept', 'application/json');
+    xhr.setRequestHeader('Content-Type', options.contentType ?? (file.type || 'application/octet-stream'));
+    const csrf = readCookie(csrfCookieName);
+    if (csrf) xhr.setRequestHeader('X-CSRF-Token', csrf);
+    xhr.upload.onprogress = (event) => {
+      if (event.lengthComputable) options.onProgress?.(event.loaded / event.total);
+    };
+    xhr.onload = () => {
+      let body: unknown;
+      try {
+        body = xhr.responseText ? JSON.parse(xhr.responseText) : undefined;
+      } catch {
+        body = undefined;
+      }
+      if (xhr.status >= 200 && xhr.status < 300) {
+        options.onProgress?.(1);
+        resolve(body as T);
+      } else reject(apiErrorFromBody(xhr.status, body));
+    };
+    xhr.onerror = () =>
+      reject(
+        new ApiError({
+          status: 0,
+          code: 'network_error',
+          message: 'Could not reach the Nestkeeper server. Check the connection and try again.',
+        }),
+      );
+    xhr.onabort = () => reject(new DOMException('Upload cancelled', 'AbortError'));
+    options.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+    xhr.send(file);
+  });
+}
+
+/** A same-origin API address with a query string (for links: CSV exports, PDFs). */
+export function apiUrl(path: string, query?: Query): string {
+  return buildUrl(path, query);
+}

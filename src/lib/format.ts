@@ -48,3 +48,36 @@ export function useDateFormat() {
     [timeZone],
   );
 }
+
+/** Digits after the decimal point for an ISO 4217 currency (EUR 2, JPY 0). */
+export function currencyDigits(currency: string): number {
+  try {
+    return new Intl.NumberFormat(locale, { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
+  } catch {
+    return 2;
+  }
+}
+
+/** Integer minor units (cents) as money in the given currency. */
+export function formatMoney(minor: number | null | undefined, currency: string): string {
+  if (minor === null || minor === undefined) return '—';
+  const digits = currencyDigits(currency);
+  try {
+    return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(minor / 10 ** digits);
+  } catch {
+    return `${(minor / 10 ** digits).toFixed(digits)} ${currency}`;
+  }
+}
+
+/** A plain number with at most `digits` decimals, in the browser's locale. */
+export function formatNumber(value: number, digits = 1): string {
+  return new Intl.NumberFormat(locale, { maximumFractionDigits: digits }).format(value);
+}
+
+/** A calendar date `YYYY-MM-DD` (no time zone shift: it already is the organization's date). */
+export function formatCalendarDate(value: string | null | undefined): string {
+  if (!value) return '—';
+  const [y, m, d] = value.split('-').map(Number);
+  if (!y || !m || !d) return value;
+  return new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)));
+}

@@ -1,13 +1,17 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { EmptyState } from '../../components/empty-state';
+import { ScanIcon } from '../../components/icons';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
+import { RecalibrationsDue } from '../../features/fleet/components/due-list';
 import type { Role } from '../../lib/roles';
 
 interface Panel {
   title: string;
   body: ReactNode;
+  /** A live panel drawn by a feature instead of the "will appear here" text. */
+  live?: () => ReactNode;
 }
 
 interface RoleHome {
@@ -24,10 +28,7 @@ const homes: Record<Role, RoleHome> = {
     title: "Owner's overview",
     description: 'What needs your decision across the fleet, the calendar and the books.',
     panels: [
-      {
-        title: 'Recalibrations due',
-        body: 'Overdue and due-soon recalibrations will appear here once the fleet register is set up, with the bookings each one puts at risk.',
-      },
+      { title: 'Recalibrations due', body: null, live: () => <RecalibrationsDue /> },
       {
         title: 'Out-of-tolerance reviews',
         body: 'When a calibration comes back out of tolerance as found, or a field check fails, the jobs and rentals to re-assess will be listed here.',
@@ -47,6 +48,7 @@ const homes: Record<Role, RoleHome> = {
     title: 'Shop floor today',
     description: 'What goes out, what comes back and what is waiting on you today.',
     panels: [
+      { title: 'Recalibrations due', body: null, live: () => <RecalibrationsDue /> },
       {
         title: 'Going out today',
         body: 'Bookings that start today will appear here once the booking board is in use, each with its packing list to check out.',
@@ -105,12 +107,27 @@ export default function HomeRoute() {
   return (
     <>
       <PageHeader title={home.title} description={home.description} />
-      <div className="grid gap-3 md:grid-cols-2 xl:grid-cols-3">
-        {home.panels.map((panel) => (
-          <EmptyState key={panel.title} title={panel.title}>
-            {panel.body}
-          </EmptyState>
-        ))}
+      {user.role === 'technician' ? (
+        <Link
+          to="/scan"
+          className="mb-4 flex min-h-16 items-center gap-3 rounded-lg border-2 border-brass-deep bg-brass-wash px-4 py-3 text-lg font-bold text-ink-900 hover:bg-brass/30"
+        >
+          <ScanIcon size={28} className="shrink-0 text-brass-deep" />
+          Find an item by its label
+        </Link>
+      ) : null}
+      <div className="grid items-start gap-3 md:grid-cols-2 xl:grid-cols-3">
+        {home.panels.map((panel) =>
+          panel.live ? (
+            <div key={panel.title} className="contents">
+              {panel.live()}
+            </div>
+          ) : (
+            <EmptyState key={panel.title} title={panel.title}>
+              {panel.body}
+            </EmptyState>
+          ),
+        )}
       </div>
       {home.links ? (
         <section aria-labelledby="ready-now" className="mt-8">

@@ -32,7 +32,7 @@ export function AppShell() {
         Skip to content
       </a>
 
-      <header className="on-ink sticky top-0 z-30 bg-ink-900 text-paper">
+      <header className="on-ink sticky top-0 z-30 bg-ink-900 text-paper print:hidden">
         <div className="flex h-14 items-center gap-3 px-3 sm:px-5">
           <NavLink to="/" className="rounded text-paper" aria-label="Nestkeeper home">
             <Wordmark size={26} />
@@ -68,7 +68,7 @@ export function AppShell() {
         <nav
           id={navId}
           aria-label="Main navigation"
-          className={`${menuOpen ? 'fixed inset-x-0 bottom-14 z-40 rounded-t-xl shadow-2xl' : 'hidden'} on-ink bg-ink-900 p-3 sm:static sm:block sm:w-52 sm:shrink-0 sm:rounded-none sm:bg-ink-800 sm:p-3 sm:shadow-none`}
+          className={`${menuOpen ? 'fixed inset-x-0 bottom-14 z-40 rounded-t-xl shadow-2xl' : 'hidden'} print:hidden on-ink bg-ink-900 p-3 sm:static sm:block sm:w-52 sm:shrink-0 sm:rounded-none sm:bg-ink-800 sm:p-3 sm:shadow-none`}
         >
           <ul className="flex flex-col gap-1">
             {items.map((item) => (
@@ -91,7 +91,7 @@ export function AppShell() {
           </ul>
         </nav>
 
-        <main id="main" tabIndex={-1} className="min-w-0 flex-1 px-3 pt-5 pb-24 outline-none sm:px-6 sm:pb-10">
+        <main id="main" tabIndex={-1} className="min-w-0 flex-1 px-3 pt-5 pb-24 outline-none sm:px-6 sm:pb-10 print:p-0">
           <div className="mx-auto max-w-6xl">
             <Outlet />
           </div>
@@ -102,7 +102,7 @@ export function AppShell() {
       {menuOpen ? (
         <div aria-hidden="true" className="fixed inset-0 z-30 bg-ink-950/50 sm:hidden" onClick={() => setMenuOpenAt(null)} />
       ) : null}
-      <div className="on-ink fixed inset-x-0 bottom-0 z-40 flex h-14 items-center border-t border-ink-700 bg-ink-900 px-3 sm:hidden">
+      <div className="on-ink fixed inset-x-0 bottom-0 z-40 flex h-14 items-center border-t border-ink-700 bg-ink-900 px-3 sm:hidden print:hidden">
         <button
           type="button"
           aria-expanded={menuOpen}

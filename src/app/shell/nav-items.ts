@@ -2,7 +2,7 @@ import type { Capability } from '../../lib/roles';
 
 /**
  * The main navigation, in order. An entry without `capability` is for every
- * role. Add a screen here when it exists (Fleet, Bookings, Checks, Incidents,
+ * role. Add a screen here when it exists (Bookings, Checks, Incidents,
  * Calibration, Rentals come with their features).
  */
 export interface NavItem {
@@ -15,8 +15,12 @@ export interface NavItem {
 
 export const navItems: readonly NavItem[] = [
   { to: '/', label: 'Home', end: true },
+  { to: '/fleet', label: 'Fleet', capability: 'fleet.read' },
+  { to: '/kits', label: 'Kits', capability: 'fleet.read' },
+  { to: '/scan', label: 'Find by label', capability: 'fleet.read' },
   { to: '/users', label: 'Users', capability: 'users.manage' },
   { to: '/mailbox', label: 'Mailbox', capability: 'mailbox.read' },
   { to: '/admin/jobs', label: 'Scheduled jobs', capability: 'jobs.run' },
+  { to: '/settings', label: 'Settings', capability: 'settings.manage' },
   { to: '/account/password', label: 'My password' },
 ];

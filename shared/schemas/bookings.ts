@@ -1,0 +1,75 @@
+import { z } from 'zod';
+
+export const bookingStates = ['reserved', 'out', 'returned', 'cancelled'] as const;
+export type BookingState = (typeof bookingStates)[number];
+/** `internal`: the firm's own use without a job record (training, demos). */
+export const bookingPurposes = ['job', 'rental', 'lab', 'internal'] as const;
+export type BookingPurpose = (typeof bookingPurposes)[number];
+
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD').refine((s) => !Number.isNaN(Date.parse(s)), 'is not a real date');
+const MAX_DAYS = 400;
+
+type DateRange = { startsOn: string; endsOn: string };
+const dates = <T extends z.ZodRawShape>(shape: T) =>
+  z
+    .object({ startsOn: isoDate, endsOn: isoDate, ...shape })
+    .refine((b) => (b as DateRange).startsOn <= (b as DateRange).endsOn, { message: 'must be on or after the start', path: ['endsOn'] })
+    .refine((b) => (Date.parse((b as DateRange).endsOn) - Date.parse((b as DateRange).startsOn)) / 86_400_000 < MAX_DAYS, {
+      message: `a booking may span at most ${MAX_DAYS} days`,
+      path: ['endsOn'],
+    });
+
+export const bookingPayload = dates({
+  assetIds: z.array(z.uuid('is not an asset id')).max(200).optional(),
+  kitId: z.uuid('is not a kit id').optional(),
+  jobId: z.uuid('is not a job id').optional(),
+  rentalId: z.uuid('is not a rental id').optional(),
+  note: z.string().trim().max(2000).optional(),
+}).refine((b) => (b.assetIds?.length ?? 0) > 0 || !!b.kitId, { message: 'pick a kit or at least one asset', path: ['assetIds'] });
+export type BookingPayload = z.infer<typeof bookingPayload>;
+
+export const bookingDatesPayload = dates({ note: z.string().trim().max(2000).optional() });
+
+export const checklistPayload = z.object({
+  checklist: z
+    .array(
+      z.object({
+        assetId: z.uuid('is not an asset id'),
+        present: z.boolean({ message: 'tick present or not' }),
+        condition: z.enum(['good', 'worn', 'damaged'], { message: 'must be good, worn or damaged' }),
+        note: z.string().trim().max(1000).optional(),
+      }),
+    )
+    .min(1, 'walk the packing list'),
+  /** Who takes the kit (checkout) or brings it back (return): a person's name or a user id. */
+  counterpart: z.string().trim().min(2, 'say who takes or brings the kit').max(120),
+});
+
+export const bookingListQuery = z.object({
+  from: isoDate.optional(),
+  to: isoDate.optional(),
+  assetId: z.uuid().optional(),
+  kitId: z.uuid().optional(),
+  jobId: z.uuid().optional(),
+  state: z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(z.enum(bookingStates))).optional(),
+  limit: z.coerce.number().int().min(1).max(500).default(200),
+  offset: z.coerce.number().int().min(0).default(0),
+});
+
+export const availabilityQuery = z
+  .object({ type: z.string().optional(), startsOn: isoDate, endsOn: isoDate, limit: z.coerce.number().int().min(1).max(500).default(100) })
+  .refine((b) => b.startsOn <= b.endsOn, { message: 'must be on or after the start', path: ['endsOn'] });
+
+export const jobPayload = z
+  .object({
+    reference: z.string().trim().min(1, 'is required').max(40),
+    customerName: z.string().trim().min(1, 'is required').max(120),
+    contactName: z.string().trim().max(120).nullable().optional(),
+    contactEmail: z.string().trim().email('is not an e-mail address').nullable().optional().or(z.literal('').transform(() => null)),
+    siteAddress: z.string().trim().max(400).nullable().optional(),
+    startsOn: isoDate,
+    endsOn: isoDate,
+    leadTechnicianId: z.uuid('is not a user id').nullable().optional(),
+    notes: z.string().trim().max(4000).nullable().optional(),
+  })
+  .refine((b) => b.startsOn <= b.endsOn, { message: 'must be on or after the start', path: ['endsOn'] });

@@ -1,0 +1,52 @@
+import { Link, useParams } from 'react-router-dom';
+import { buttonClasses } from '../../components/button';
+import { ArrowLeftIcon, DownloadIcon } from '../../components/icons';
+import { LoadingPanel } from '../../components/loading-panel';
+import { Notice } from '../../components/notice';
+import { PageHeader } from '../../components/page-header';
+import { assetRecordPdfUrl, useAssetRecord } from '../../features/fleet/api/get-asset-record';
+import { EquipmentRecordTable } from '../../features/fleet/components/equipment-record-table';
+import { useDateFormat } from '../../lib/format';
+
+export default function AssetRecordRoute() {
+  const { id = '' } = useParams();
+  const record = useAssetRecord(id);
+  const { dateTime } = useDateFormat();
+
+  if (record.isPending) return <LoadingPanel label="Putting the record together…" />;
+  if (record.isError) {
+    return (
+      <>
+        <PageHeader title="Equipment record" />
+        <Notice tone="error" title="The record could not be loaded">
+          {record.error.message}
+        </Notice>
+      </>
+    );
+  }
+  const { asset, organization, items, generatedAt } = record.data;
+  return (
+    <>
+      <Link to={`/fleet/${asset.id}`} className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
+        <ArrowLeftIcon size={14} />
+        {asset.assetTag}
+      </Link>
+      <PageHeader
+        title={`Equipment record · ${asset.assetTag}`}
+        description={
+          <>
+            What {organization.name} holds on this item, item by item as ISO/IEC 17025:2017 §6.4.13 asks. Put together{' '}
+            {dateTime(generatedAt)}.
+          </>
+        }
+        actions={
+          <a href={assetRecordPdfUrl(asset.id)} className={buttonClasses('primary')} target="_blank" rel="noopener">
+            <DownloadIcon size={16} />
+            Download PDF
+          </a>
+        }
+      />
+      <EquipmentRecordTable items={items} />
+    </>
+  );
+}

@@ -1,0 +1,115 @@
+import { useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Button, buttonClasses } from '../../components/button';
+import { EmptyState } from '../../components/empty-state';
+import { ArrowLeftIcon, PrintIcon } from '../../components/icons';
+import { LoadingPanel } from '../../components/loading-panel';
+import { Notice } from '../../components/notice';
+import { PageHeader } from '../../components/page-header';
+import { useSession } from '../../features/auth/components/session-context';
+import { useAsset } from '../../features/fleet/api/get-asset';
+import { assetLabelUrl } from '../../features/fleet/api/get-asset-label';
+import { AssetCalibration, AssetIdentity, AssetSpecs } from '../../features/fleet/components/asset-facts';
+import { AssetHistory } from '../../features/fleet/components/asset-history';
+import { RetireDialog } from '../../features/fleet/components/retire-dialog';
+import { kitsKeys } from '../../features/kits/api/keys';
+import { isApiError } from '../../lib/api-client';
+import { assetTypeTitles } from '../../lib/assets';
+import { can } from '../../lib/roles';
+
+export default function AssetRoute() {
+  const { id = '' } = useParams();
+  const { user } = useSession();
+  const navigate = useNavigate();
+  const asset = useAsset(id);
+  const [retiring, setRetiring] = useState(false);
+  const queryClient = useQueryClient();
+
+  if (asset.isPending) return <LoadingPanel label="Loading the asset…" />;
+  if (asset.isError) {
+    const notFound = isApiError(asset.error) && asset.error.status === 404;
+    return (
+      <>
+        <PageHeader title={notFound ? 'Asset not found' : 'The asset could not be loaded'} />
+        <Notice tone="error">{notFound ? 'No asset in your fleet has this address. It may have been mistyped.' : asset.error.message}</Notice>
+        <Link to="/fleet" className={`${buttonClasses('secondary')} mt-4`}>
+          Back to all assets
+        </Link>
+      </>
+    );
+  }
+
+  const a = asset.data;
+  const canWrite = can(user.role, 'fleet.write') && a.status !== 'retired';
+  const description = [assetTypeTitles[a.type], a.manufacturer, a.model].filter(Boolean).join(' · ');
+
+  return (
+    <>
+      <Link to="/fleet" className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
+        <ArrowLeftIcon size={14} />
+        All assets
+      </Link>
+      <PageHeader title={a.assetTag} description={description} />
+      {a.status === 'retired' ? (
+        <Notice tone="info" title="Retired" className="mb-4">
+          This item has left the fleet{a.retiredReason ? `: ${a.retiredReason}` : ''}. Its record is kept.
+        </Notice>
+      ) : null}
+
+      {/* Phones: the actions sit at the bottom, above the menu bar, under the thumb. */}
+      <div
+        aria-label="Asset actions"
+        role="group"
+        className="fixed inset-x-0 bottom-14 z-20 flex gap-2 overflow-x-auto border-t border-paper-line bg-card/95 px-3 py-2 backdrop-blur sm:static sm:mb-5 sm:flex-wrap sm:overflow-visible sm:border-0 sm:bg-transparent sm:p-0"
+      >
+        {canWrite ? (
+          <Button variant="primary" className="min-h-11 shrink-0 sm:min-h-10" onClick={() => navigate(`/fleet/${a.id}/edit`)}>
+            Edit
+          </Button>
+        ) : null}
+        <a href={assetLabelUrl(a.id)} target="_blank" rel="noopener" className={buttonClasses('secondary', 'md', 'min-h-11 shrink-0 sm:min-h-10')}>
+          <PrintIcon size={16} />
+          Print label
+        </a>
+        <Link to={`/fleet/${a.id}/record`} className={buttonClasses('secondary', 'md', 'min-h-11 shrink-0 sm:min-h-10')}>
+          Equipment record
+        </Link>
+        {canWrite ? (
+          <Button variant="danger" className="min-h-11 shrink-0 sm:min-h-10" onClick={() => setRetiring(true)}>
+            Retire
+          </Button>
+        ) : null}
+      </div>
+
+      <div className="grid gap-4 pb-16 sm:pb-0 lg:grid-cols-2">
+        <AssetIdentity asset={a} />
+        <div className="flex flex-col gap-4">
+          <AssetCalibration asset={a} />
+          <AssetSpecs asset={a} />
+        </div>
+        <EmptyState title="Bookings">
+          Jobs and rentals that use this item will be listed here once the booking board arrives.
+        </EmptyState>
+        <EmptyState title="Field checks">
+          Tip validations, two-face and length checks for this item will be listed here once field checks arrive.
+        </EmptyState>
+        <EmptyState title="Incidents">
+          Damage and loss reports for this item will be listed here once incident reporting arrives. Until then, tell your
+          shop manager straight away and do not use a damaged item.
+        </EmptyState>
+        <div className="lg:col-span-2">
+          <AssetHistory assetId={a.id} />
+        </div>
+      </div>
+
+      {canWrite ? <RetireDialog
+          asset={a}
+          open={retiring}
+          onClose={() => setRetiring(false)}
+          // A retired member changes its kit's readiness.
+          onRetired={() => void queryClient.invalidateQueries({ queryKey: kitsKeys.all })}
+        /> : null}
+    </>
+  );
+}

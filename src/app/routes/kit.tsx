@@ -1,0 +1,82 @@
+import { useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { Button, buttonClasses } from '../../components/button';
+import { ArrowLeftIcon, PrintIcon } from '../../components/icons';
+import { LoadingPanel } from '../../components/loading-panel';
+import { Notice } from '../../components/notice';
+import { PageHeader } from '../../components/page-header';
+import { HeavyCaseCaution } from '../../components/safety-cautions';
+import { useSession } from '../../features/auth/components/session-context';
+import { fleetKeys } from '../../features/fleet/api/keys';
+import { useKit } from '../../features/kits/api/get-kit';
+import { kitLabelsUrl } from '../../features/kits/api/get-kit-labels';
+import { KitFormDialog } from '../../features/kits/components/kit-form-dialog';
+import { KitMembers } from '../../features/kits/components/kit-members';
+import { PackingList } from '../../features/kits/components/packing-list';
+import { ReadinessSummary } from '../../features/kits/components/readiness';
+import { ShippingSheetPanel } from '../../features/kits/components/shipping-sheet-panel';
+import { isApiError } from '../../lib/api-client';
+import { can } from '../../lib/roles';
+
+export default function KitRoute() {
+  const { id = '' } = useParams();
+  const { user, organization } = useSession();
+  const canWrite = can(user.role, 'fleet.write');
+  const kit = useKit(id);
+  const [renaming, setRenaming] = useState(false);
+  const queryClient = useQueryClient();
+
+  if (kit.isPending) return <LoadingPanel label="Loading the kit…" />;
+  if (kit.isError) {
+    const notFound = isApiError(kit.error) && kit.error.status === 404;
+    return (
+      <>
+        <PageHeader title={notFound ? 'Kit not found' : 'The kit could not be loaded'} />
+        <Notice tone="error">{notFound ? 'No kit of your firm has this address.' : kit.error.message}</Notice>
+      </>
+    );
+  }
+  const k = kit.data;
+  const hasCase = k.members.some((m) => m.type === 'case' || m.type === 'tracker');
+
+  return (
+    <>
+      <div className="print:hidden">
+        <Link to="/kits" className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
+          <ArrowLeftIcon size={14} />
+          Back to the kit list
+        </Link>
+        <PageHeader
+          title={k.name}
+          description={k.notes ?? undefined}
+          actions={
+            <>
+              {canWrite ? <Button onClick={() => setRenaming(true)}>Rename</Button> : null}
+              <Button icon={<PrintIcon size={16} />} onClick={() => window.print()} disabled={k.members.length === 0}>
+                Packing list
+              </Button>
+              <a href={kitLabelsUrl(k.id)} target="_blank" rel="noopener" className={buttonClasses('secondary')}>
+                Label sheet
+              </a>
+            </>
+          }
+        />
+        <div className="flex flex-col gap-4">
+          <ReadinessSummary readiness={k.readiness} memberCount={k.members.length} />
+          <KitMembers
+            kit={k}
+            canWrite={canWrite}
+            onMembersChanged={() => void queryClient.invalidateQueries({ queryKey: fleetKeys.all })}
+          />
+          {hasCase ? <HeavyCaseCaution /> : null}
+          <ShippingSheetPanel kitId={k.id} />
+        </div>
+      </div>
+      <PackingList kit={k} organizationName={organization.name} />
+      {canWrite ? (
+        <KitFormDialog key={k.updatedAt} open={renaming} kit={k} onClose={() => setRenaming(false)} onSaved={() => setRenaming(false)} />
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,24 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { fleetKeys } from './keys';
+import type { AssetView } from './types';
+
+export interface RetireAssetInput {
+  id: string;
+  reason: string;
+}
+
+export function retireAsset({ id, reason }: RetireAssetInput): Promise<AssetView> {
+  return apiClient.post<AssetView>(`/assets/${encodeURIComponent(id)}/retire`, { reason });
+}
+
+export function useRetireAsset() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: retireAsset,
+    onSuccess: (asset) => {
+      queryClient.setQueryData(fleetKeys.one(asset.id), asset);
+      return queryClient.invalidateQueries({ queryKey: fleetKeys.all });
+    },
+  });
+}

@@ -1,0 +1,20 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, apiUrl } from '../../../lib/api-client';
+import { kitsKeys } from './keys';
+import type { ShippingSheet } from './types';
+
+export function getShippingSheet(id: string, signal?: AbortSignal): Promise<ShippingSheet> {
+  return apiClient.get<ShippingSheet>(`/kits/${encodeURIComponent(id)}/shipping-sheet`, { signal });
+}
+
+export const shippingSheetPdfUrl = (id: string) => apiUrl(`/kits/${encodeURIComponent(id)}/shipping-sheet.pdf`);
+
+export const shippingSheetQueryOptions = (id: string) =>
+  queryOptions({
+    queryKey: kitsKeys.shippingSheet(id),
+    queryFn: ({ signal }) => getShippingSheet(id, signal),
+  });
+
+export function useShippingSheet(id: string) {
+  return useQuery(shippingSheetQueryOptions(id));
+}

@@ -1,0 +1,31 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient, isApiError } from '../../../lib/api-client';
+import { kitsKeys } from './keys';
+import type { KitInput, KitMemberConflict, KitView } from './types';
+
+export interface UpdateKitInput {
+  id: string;
+  /** `memberIds` replaces the whole member list. */
+  changes: Partial<KitInput>;
+}
+
+export function updateKit({ id, changes }: UpdateKitInput): Promise<KitView> {
+  return apiClient.patch<KitView>(`/kits/${encodeURIComponent(id)}`, changes);
+}
+
+/** The assets a 409 names as already belonging to another kit. */
+export function memberConflicts(error: unknown): KitMemberConflict[] {
+  if (!isApiError(error) || error.code !== 'conflict') return [];
+  const details = error.details as { conflicts?: unknown } | undefined;
+  return Array.isArray(details?.conflicts) ? (details.conflicts as KitMemberConflict[]) : [];
+}
+
+export function useUpdateKit() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateKit,
+    // Membership shows on the fleet list too (its "Kit" column); that feature's
+    // lists refetch when next shown (staleTime), so only kits are invalidated here.
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: kitsKeys.all }),
+  });
+}

@@ -1,0 +1,25 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { settingsKeys } from './keys';
+import type { OrganizationSettings } from './types';
+
+export interface UpdateSettingsInput {
+  dueSoonDays?: number;
+  timeZone?: string;
+}
+
+export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettings> {
+  return apiClient.patch<OrganizationSettings>('/settings', input);
+}
+
+/** Everything else that shows dates or due states reads the session and lists again. */
+export function useUpdateSettings() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateSettings,
+    onSuccess: (settings) => {
+      queryClient.setQueryData(settingsKeys.current(), settings);
+      return queryClient.invalidateQueries();
+    },
+  });
+}

@@ -21,6 +21,13 @@ import { fleetRoutes } from './fleet/fleet.routes';
 import { KitsService } from './fleet/kits.service';
 import { kitsRoutes } from './fleet/kits.routes';
 import { settingsRoutes } from './organizations/settings.routes';
+import { BookingsService } from './bookings/bookings.service';
+import { bookingsRoutes } from './bookings/bookings.routes';
+import { CalendarService } from './bookings/calendar';
+import { DeskService } from './bookings/desk.service';
+import { HandoverService } from './bookings/handover.service';
+import { JobsRegisterService } from './bookings/jobs.service';
+import { lateReturnsJob } from './bookings/late-returns.job';
 import { ChecksService } from './checks/checks.service';
 import { checksRoutes } from './checks/checks.routes';
 import { HoldsService } from './holds/holds.service';
@@ -36,7 +43,7 @@ export type AppDeps = { config: Config; db: DataSource; mail: Transporter };
 export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: JobsService } {
   const users = new UsersService(db, config.BCRYPT_COST);
   const auth = new AuthService(db, users, config.JWT_SECRET);
-  const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM)]);
+  const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM), lateReturnsJob()]);
   const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
   const assets = new AssetsService(db, publicUrl);
   const kits = new KitsService(db, publicUrl);
@@ -73,6 +80,11 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use('/api', checksRoutes(new ChecksService(db)));
   app.use('/api/assets', holdsRoutes(new HoldsService(db)));
   app.use('/api/incidents', incidentsRoutes(new IncidentsService(db)));
+  const bookings = new BookingsService(db);
+  app.use(
+    '/api',
+    bookingsRoutes({ bookings, handover: new HandoverService(db, bookings), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
+  );
   app.use('/api', unknownApiRoute);
 
   const clientDir = path.resolve(config.CLIENT_DIR);

@@ -3,6 +3,8 @@ import { Asset } from '../fleet/asset.entity';
 import { CustodyEvent } from '../fleet/custody-event.entity';
 import { Kit } from '../fleet/kit.entity';
 import { FieldCheck } from '../checks/field-check.entity';
+import { Booking, BookingItem } from '../bookings/booking.entity';
+import { Job } from '../bookings/job.entity';
 import { Hold } from '../holds/hold.entity';
 import { Incident, IncidentPhoto } from '../incidents/incident.entity';
 import { JobLease, JobRun } from '../jobs/job-run.entity';
@@ -12,4 +14,4 @@ import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity the data source knows; a new component adds its own here. */
-export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto];
+export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto, Job, Booking, BookingItem];

@@ -1,7 +1,8 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { incidentKindTitles, type incidentListQuery, type incidentPayload, type IncidentState, type incidentUpdatePayload } from '../../shared/schemas/incidents';
+import { incidentKindTitles, type IncidentKind, type incidentListQuery, type incidentPayload, type IncidentState, type incidentUpdatePayload } from '../../shared/schemas/incidents';
 import { recordAudit } from '../audit/audit.service';
+import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { Asset } from '../fleet/asset.entity';
 import { AppError, ruleBroken } from '../http/errors';
@@ -42,6 +43,44 @@ const view = (i: Incident, photos: PhotoRow[], asset?: Asset) => ({
   })),
 });
 
+type IncidentFields = { kind: IncidentKind; description: string; occurredAt: string; location: string | null; bookingId: string | null };
+
+/**
+ * Record an incident inside the caller's transaction: hold the asset, flag a
+ * knocked lithium battery as damaged, and queue the e-mail to the manager and
+ * owner. Also used by the return desk for missing or damaged items.
+ */
+export async function openIncident(tx: Scoped, actor: Actor, asset: Asset, input: IncidentFields, photos: Awaited<ReturnType<typeof preparePhoto>>[] = []) {
+  const incident = await tx.insert(Incident, {
+    assetId: asset.id,
+    kind: input.kind,
+    description: input.description,
+    occurredAt: new Date(input.occurredAt),
+    location: input.location,
+    bookingId: input.bookingId,
+    state: 'reported',
+    resolution: null,
+    chargeAmountMinor: null,
+    reportedBy: actor.userId,
+  });
+  const saved = [];
+  for (const p of photos) saved.push(await tx.insert(IncidentPhoto, { incidentId: incident.id, ...p }));
+  const flagBattery = asset.type === 'battery' && batteryDamageKinds.has(input.kind);
+  if (flagBattery) await tx.updateWhere(Asset, { id: asset.id }, { specs: { ...asset.specs, damaged: true } });
+  await placeHold(tx, actor, asset, { reason: 'incident', summary: `${incidentKindTitles[input.kind]}: ${input.description.slice(0, 200)}`, incidentId: incident.id });
+  await recordAudit(tx, actor, 'incident.reported', { type: 'asset', id: asset.id }, { incidentId: incident.id, kind: input.kind, photos: saved.length, batteryFlaggedDamaged: flagBattery });
+  await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
+    subject: `${asset.assetTag} reported ${incidentKindTitles[input.kind].toLowerCase()} — now on hold`,
+    heading: `${asset.assetTag}: ${incidentKindTitles[input.kind].toLowerCase()}`,
+    paragraphs: [
+      input.description,
+      `Reported for ${input.occurredAt.slice(0, 16).replace('T', ' ')} UTC${input.location ? ` at ${input.location}` : ''}, with ${saved.length} photo(s). The item is on hold and cannot be booked until it is checked or recalibrated and released.`,
+      ...(flagBattery ? ["This is a lithium-ion battery: treat it as damaged. Do not charge it and do not ship it by air; keep it apart in a fire-safe place and follow local rules and the maker's instructions for disposal."] : []),
+    ],
+  });
+  return { incident, photos: saved };
+}
+
 export class IncidentsService {
   constructor(private readonly db: DataSource) {}
 
@@ -51,33 +90,7 @@ export class IncidentsService {
       const asset = await tx.findOne(Asset, { id: input.assetId });
       if (!asset) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { assetId: 'is not an asset of your fleet' } });
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
-      const incident = await tx.insert(Incident, {
-        assetId: asset.id,
-        kind: input.kind,
-        description: input.description,
-        occurredAt: new Date(input.occurredAt),
-        location: input.location,
-        bookingId: input.bookingId ?? null,
-        state: 'reported',
-        resolution: null,
-        chargeAmountMinor: null,
-        reportedBy: actor.userId,
-      });
-      const saved = [];
-      for (const p of photos) saved.push(await tx.insert(IncidentPhoto, { incidentId: incident.id, ...p }));
-      const flagBattery = asset.type === 'battery' && batteryDamageKinds.has(input.kind);
-      if (flagBattery) await tx.updateWhere(Asset, { id: asset.id }, { specs: { ...asset.specs, damaged: true } });
-      await placeHold(tx, actor, asset, { reason: 'incident', summary: `${incidentKindTitles[input.kind]}: ${input.description.slice(0, 200)}`, incidentId: incident.id });
-      await recordAudit(tx, actor, 'incident.reported', { type: 'asset', id: asset.id }, { incidentId: incident.id, kind: input.kind, photos: saved.length, batteryFlaggedDamaged: flagBattery });
-      await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
-        subject: `${asset.assetTag} reported ${incidentKindTitles[input.kind].toLowerCase()} — now on hold`,
-        heading: `${asset.assetTag}: ${incidentKindTitles[input.kind].toLowerCase()}`,
-        paragraphs: [
-          input.description,
-          `Reported for ${input.occurredAt.slice(0, 16).replace('T', ' ')} UTC${input.location ? ` at ${input.location}` : ''}, with ${saved.length} photo(s). The item is on hold and cannot be booked until it is checked or recalibrated and released.`,
-          ...(flagBattery ? ['This is a lithium-ion battery: treat it as damaged. Do not charge it and do not ship it by air; keep it apart in a fire-safe place and follow local rules and the maker\'s instructions for disposal.'] : []),
-        ],
-      });
+      const { incident, photos: saved } = await openIncident(tx, actor, asset, { ...input, bookingId: input.bookingId ?? null }, photos);
       const refreshed = await tx.get(Asset, { id: asset.id }, 'That asset');
       return view(incident, saved.map((p) => ({ ...p, hasThumbnail: !!p.thumbnail })), refreshed);
     });
@@ -132,7 +145,7 @@ export class IncidentsService {
     });
   }
 
-  private photoRows(tx: import('../db/scoped').Scoped, incidentIds: string[]) {
+  private photoRows(tx: Scoped, incidentIds: string[]) {
     return tx.sql<PhotoRow & { incidentId: string }>(
       `SELECT id, incident_id AS "incidentId", content_type AS "contentType", file_name AS "fileName", size_bytes AS "sizeBytes", thumbnail IS NOT NULL AS "hasThumbnail"
          FROM incident_photos WHERE organization_id = $1 AND incident_id = ANY($2) ORDER BY created_at`,

@@ -28,6 +28,11 @@ export class User extends OrgOwned {
   @Column({ name: 'token_version', type: 'integer', default: 0 })
   tokenVersion: number;
 
+  /** Secret for this person's calendar feed (`/api/calendar.ics?token=`); replaced on request. */
+  @Index({ unique: true })
+  @Column({ name: 'calendar_token', type: 'text', nullable: true, select: false })
+  calendarToken: string | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 

@@ -1,0 +1,61 @@
+import type { BlockReason } from '../../shared/bookings/rules';
+import type { Scoped } from '../db/scoped';
+
+/** True when a tip (alias `a`) has a mounting position whose latest validation did not pass. */
+export const TIP_NOT_VALIDATED = (a: string) => `(${a}.type = 'tip' AND EXISTS (
+  SELECT 1 FROM jsonb_array_elements_text(coalesce(${a}.specs->'positions', '[]'::jsonb)) AS pos(position)
+   WHERE coalesce((SELECT fc.decision FROM field_checks fc
+                    WHERE fc.organization_id = ${a}.organization_id AND fc.asset_id = ${a}.id AND fc.kind = 'tip_validation' AND fc.position = pos.position
+                    ORDER BY fc.performed_at DESC, fc.created_at DESC LIMIT 1), 'none') <> 'pass'))`;
+
+/** The booking rules of shared/bookings/rules.ts as one set-based query over the requested items. */
+export function blockedItems(tx: Scoped, assetIds: string[], endsOn: string) {
+  return tx.sql<{ assetId: string; assetTag: string; type: string; reason: BlockReason }>(
+    `SELECT a.id AS "assetId", a.asset_tag AS "assetTag", a.type,
+            CASE WHEN a.status = 'retired' THEN 'retired'
+                 WHEN a.status = 'held' THEN 'held'
+                 WHEN a.status = 'at_lab' THEN 'at_lab'
+                 WHEN a.calibration_required AND (a.due_on IS NULL OR a.due_on < $3::date) THEN 'calibration_expires'
+                 ELSE 'tip_not_validated' END AS reason
+       FROM assets a
+      WHERE a.organization_id = $1 AND a.id = ANY($2)
+        AND (a.status IN ('retired', 'held', 'at_lab')
+             OR (a.calibration_required AND (a.due_on IS NULL OR a.due_on < $3::date))
+             OR ${TIP_NOT_VALIDATED('a')})
+      ORDER BY a.asset_tag`,
+    [assetIds, endsOn],
+  );
+}
+
+/** Active bookings that hold any of these assets on any day of the window. */
+export function conflictingItems(tx: Scoped, assetIds: string[], startsOn: string, endsOn: string, exceptBookingId: string | null = null) {
+  return tx.sql<{ assetId: string; assetTag: string; bookingId: string; startsOn: string; endsOn: string }>(
+    `SELECT bi.asset_id AS "assetId", a.asset_tag AS "assetTag", bi.booking_id AS "bookingId",
+            to_char(bi.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(bi.ends_on, 'YYYY-MM-DD') AS "endsOn"
+       FROM booking_items bi JOIN assets a ON a.id = bi.asset_id
+      WHERE bi.organization_id = $1 AND bi.active AND bi.asset_id = ANY($2)
+        AND daterange(bi.starts_on, bi.ends_on, '[]') && daterange($3::date, $4::date, '[]')
+        AND ($5::uuid IS NULL OR bi.booking_id <> $5::uuid)
+      ORDER BY a.asset_tag, bi.starts_on`,
+    [assetIds, startsOn, endsOn, exceptBookingId],
+  );
+}
+
+/** Assets of a type that are free and valid for the whole window (GET /api/availability). */
+export function availableAssets(tx: Scoped, opts: { type?: string; startsOn: string; endsOn: string; exclude?: string[]; limit: number }) {
+  return tx.sql<{ id: string; assetTag: string; type: string; model: string | null; dueOn: string | null; kitName: string | null }>(
+    `SELECT a.id, a.asset_tag AS "assetTag", a.type, a.model, to_char(a.due_on, 'YYYY-MM-DD') AS "dueOn", k.name AS "kitName"
+       FROM assets a LEFT JOIN kits k ON k.id = a.kit_id
+      WHERE a.organization_id = $1 AND ($2::text IS NULL OR a.type = $2)
+        AND a.status NOT IN ('retired', 'held', 'at_lab')
+        AND (NOT a.calibration_required OR a.due_on >= $4::date)
+        AND NOT (a.id = ANY($5))
+        AND NOT EXISTS (SELECT 1 FROM booking_items bi
+                         WHERE bi.asset_id = a.id AND bi.active
+                           AND daterange(bi.starts_on, bi.ends_on, '[]') && daterange($3::date, $4::date, '[]'))
+        AND NOT ${TIP_NOT_VALIDATED('a')}
+      ORDER BY a.kit_id IS NOT NULL, a.asset_tag
+      LIMIT $6`,
+    [opts.type ?? null, opts.startsOn, opts.endsOn, opts.exclude ?? [], opts.limit],
+  );
+}

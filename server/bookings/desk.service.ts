@@ -1,0 +1,57 @@
+import type { DataSource } from 'typeorm';
+import { readInOrganization, type Actor } from '../db/transaction';
+import { loadOrgContext } from '../organizations/org-context';
+import { blockedItems } from './booking-queries';
+import { Booking } from './booking.entity';
+import { bookingAssets, bookingView } from './bookings.service';
+import type { Scoped } from '../db/scoped';
+
+/** What the manager's and the technician's home pages show about bookings. */
+export class DeskService {
+  constructor(private readonly db: DataSource) {}
+
+  private async views(tx: Scoped, where: string, params: unknown[]) {
+    const rows = await tx
+      .select(Booking, 'b')
+      .leftJoinAndSelect('b.job', 'j')
+      .leftJoinAndSelect('b.kit', 'k')
+      .andWhere(where, Object.fromEntries(params.map((p, i) => [`p${i}`, p])))
+      .orderBy('b.starts_on')
+      .take(100)
+      .getMany();
+    const items = await bookingAssets(tx, rows.map((r) => r.id));
+    return rows.map((b) => bookingView(b, items.filter((i) => i.bookingId === b.id)));
+  }
+
+  /** Today's checkouts and returns, late returns, and reserved bookings an item no longer qualifies for. */
+  today(actor: Actor) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const { today } = await loadOrgContext(tx);
+      const [checkouts, returns, late, upcoming] = await Promise.all([
+        this.views(tx, "b.state = 'reserved' AND b.starts_on <= :p0", [today]),
+        this.views(tx, "b.state = 'out' AND b.ends_on = :p0", [today]),
+        this.views(tx, "b.state = 'out' AND b.ends_on < :p0", [today]),
+        this.views(tx, "b.state = 'reserved' AND b.ends_on >= :p0", [today]),
+      ]);
+      const blocked = [];
+      for (const b of upcoming) {
+        const problems = await blockedItems(tx, b.assetIds, b.endsOn);
+        if (problems.length) blocked.push({ ...b, blocked: problems });
+      }
+      return { today, checkouts, returns, late, blocked };
+    });
+  }
+
+  /** Kit a technician carries now and next: taken by them, or on jobs they lead. */
+  mine(actor: Actor) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const { today } = await loadOrgContext(tx);
+      const mine = "(b.taken_by_user_id = :p0 OR j.lead_technician_id = :p0) AND b.ends_on >= :p1";
+      const [now, next] = await Promise.all([
+        this.views(tx, `${mine} AND b.state = 'out'`, [actor.userId, '0001-01-01']),
+        this.views(tx, `${mine} AND b.state = 'reserved'`, [actor.userId, today]),
+      ]);
+      return { now, next };
+    });
+  }
+}

@@ -1,0 +1,39 @@
+import type { JobDefinition } from '../jobs/job';
+import { Scoped } from '../db/scoped';
+import { enqueueMail } from '../notifications/outbox';
+import { staffAddresses } from '../notifications/staff';
+import { todayIn } from '../../shared/calibration/due-date';
+
+type LateRow = { organization_id: string; time_zone: string; id: string; starts_on: string; ends_on: string; taken_by: string | null; reference: string | null; tags: string };
+
+/** Once a day: one e-mail per firm listing bookings past their end date and not back. Set-based, one query. */
+export const lateReturnsJob = (): JobDefinition => ({
+  name: 'late-returns',
+  description: 'E-mails each firm one list of bookings that are past their end date and not returned.',
+  schedule: '0 7 * * *',
+  run: async ({ db, now }) => {
+    const rows: LateRow[] = await db.query(
+      `SELECT b.organization_id, o.time_zone, b.id, to_char(b.starts_on, 'YYYY-MM-DD') AS starts_on, to_char(b.ends_on, 'YYYY-MM-DD') AS ends_on,
+              b.taken_by, j.reference, string_agg(a.asset_tag, ', ' ORDER BY a.asset_tag) AS tags
+         FROM bookings b JOIN organizations o ON o.id = b.organization_id
+         LEFT JOIN jobs j ON j.id = b.job_id
+         JOIN booking_items bi ON bi.booking_id = b.id JOIN assets a ON a.id = bi.asset_id
+        WHERE b.state = 'out' AND b.ends_on < (now() AT TIME ZONE o.time_zone)::date
+        GROUP BY b.organization_id, o.time_zone, b.id, j.reference ORDER BY b.ends_on`,
+    );
+    const byOrg = new Map<string, LateRow[]>();
+    for (const r of rows) byOrg.set(r.organization_id, [...(byOrg.get(r.organization_id) ?? []), r]);
+    for (const [organizationId, late] of byOrg) {
+      await db.transaction(async (manager) => {
+        const tx = new Scoped(manager, organizationId);
+        const today = todayIn(late[0].time_zone, now);
+        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
+          subject: `${late.length} late return${late.length === 1 ? '' : 's'} on ${today}`,
+          heading: 'Kit that should be back by now',
+          paragraphs: late.map((r) => `${r.reference ? `Job ${r.reference}` : 'Booking'} ${r.starts_on} to ${r.ends_on}${r.taken_by ? `, taken by ${r.taken_by}` : ''}: ${r.tags}.`),
+        });
+      });
+    }
+    return { firms: byOrg.size, lateBookings: rows.length };
+  },
+});

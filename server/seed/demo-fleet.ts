@@ -40,12 +40,22 @@ export async function seedDemoFleet(tx: Scoped, timeZone: string, firm: string) 
   const today = todayIn(timeZone);
   const counters = new Map<AssetType, number>();
   const plan: SeedAsset[] = [];
-  // Days since last calibration, cycled so every state shows up (12-month interval ≈ 365 days).
-  const ages = [40, 120, 200, 300, 345, 352, 372, 90, 10, 250, 400, 160];
+  // Days since last calibration (12-month interval ≈ 365 days). Kit members are mostly current; the spares
+  // carry the overdue and due-soon spread; Kit Damson's tracker falls due during its second booking.
+  const kitAges = [40, 120, 200, 90, 10, 250, 160, 60, 280, 30];
+  const spareAges = [345, 352, 372, 400, 300, 20, 180, 358, 390, 230];
   let n = 0;
-  for (const kit of kitNames) for (const [type, count] of kitContents) for (let i = 0; i < count; i += 1) plan.push({ type, kit, lastCalibratedDaysAgo: ages[n++ % ages.length] });
+  for (const kit of kitNames) {
+    for (const [type, count] of kitContents) {
+      for (let i = 0; i < count; i += 1) {
+        const threatened = kit === 'Kit Damson' && type === 'tracker';
+        plan.push({ type, kit, lastCalibratedDaysAgo: threatened ? 350 : kitAges[n++ % kitAges.length] });
+      }
+    }
+  }
+  let m = 0;
   for (const [type, count] of [['tip', 4], ['battery', 3], ['smr', 2], ['scale_bar', 2], ['weather_station', 2], ['nest', 2], ['accessory', 2]] as [AssetType, number][]) {
-    for (let i = 0; i < count; i += 1) plan.push({ type, kit: null, lastCalibratedDaysAgo: ages[n++ % ages.length] });
+    for (let i = 0; i < count; i += 1) plan.push({ type, kit: null, lastCalibratedDaysAgo: spareAges[m++ % spareAges.length] });
   }
   // A large pack that needs carrier approval, and one that was dropped.
   plan.push({ type: 'battery', kit: null, lastCalibratedDaysAgo: null, extra: { model: 'Pack 14V10', specs: { nominalVoltageV: 14.4, ratedCapacityAh: 10.4, chargeCycles: 48 } } });

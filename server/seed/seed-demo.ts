@@ -5,6 +5,7 @@ import { enqueueMail } from '../notifications/outbox';
 import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 import { DEMO_PASSWORD, demoFirm, otherFirm } from './demo-people';
+import { seedDemoActivity } from './demo-activity';
 import { seedDemoFleet } from './demo-fleet';
 
 /** Fill an empty database with the invented demo firms. Does nothing when any
@@ -17,7 +18,10 @@ export async function seedDemoIfEmpty(db: DataSource, bcryptCost = 12): Promise<
       const org = await manager.save(Organization, manager.create(Organization, { name: firm.name, timeZone: firm.timeZone, currency: firm.currency }));
       const tx = new Scoped(manager, org.id);
       for (const person of firm.people) await tx.insert(User, { ...person, passwordHash });
-      if (firm === demoFirm) await seedDemoFleet(tx, firm.timeZone, firm.name);
+      if (firm === demoFirm) {
+        await seedDemoFleet(tx, firm.timeZone, firm.name);
+        await seedDemoActivity(tx, firm.timeZone);
+      }
       const owner = firm.people.find((p) => p.role === 'owner')!;
       await enqueueMail(tx, [owner.email], {
         subject: `Welcome to Nestkeeper, ${firm.name}`,

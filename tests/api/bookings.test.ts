@@ -1,4 +1,5 @@
 import ICAL from 'ical.js';
+import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
@@ -84,8 +85,10 @@ describe('booking whole days (inclusive)', () => {
     const free = await t.api.get('/api/availability?type=smr&startsOn=2027-06-01&endsOn=2027-06-14').set(bearer(tech));
     expect(free.status).toBe(200);
     expect(free.body.items.every((a: { type: string }) => a.type === 'smr')).toBe(true);
+    expect(kit).not.toBeNull();
     if (kit) {
-      const res = await book(manager, { kitId: kit.id, startsOn: '2027-06-01', endsOn: '2027-06-02' });
+      const soon = addDays(todayIn('Europe/Berlin'), 1);
+      const res = await book(manager, { kitId: kit.id, startsOn: soon, endsOn: addDays(soon, 1) });
       expect(res.status).toBe(201);
       expect(res.body.assetIds).toHaveLength(kit.memberCount);
     }

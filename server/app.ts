@@ -8,6 +8,7 @@ import { AuthService } from './auth/auth.service';
 import { authRoutes } from './auth/auth.routes';
 import { csrfGuard } from './auth/csrf';
 import { createPassport } from './auth/passport';
+import { signingKey } from './auth/tokens';
 import type { Config } from './config';
 import { healthRoutes } from './health/health.routes';
 import { errorHandler, unknownApiRoute } from './http/error-handler';
@@ -42,7 +43,8 @@ export type AppDeps = { config: Config; db: DataSource; mail: Transporter };
 /** Builds the Express app and its services; `index.ts` decides when to listen. */
 export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: JobsService } {
   const users = new UsersService(db, config.BCRYPT_COST);
-  const auth = new AuthService(db, users, config.JWT_SECRET);
+  const key = signingKey(config.JWT_SECRET);
+  const auth = new AuthService(db, users, key);
   const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM), lateReturnsJob()]);
   const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
   const assets = new AssetsService(db, publicUrl);
@@ -52,7 +54,7 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   const app = express();
   app.set('trust proxy', config.TRUST_PROXY);
   app.disable('x-powered-by');
-  app.locals.passport = createPassport(db, config.JWT_SECRET);
+  app.locals.passport = createPassport(db, key);
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -1,3 +1,4 @@
+import type { KeyObject } from 'node:crypto';
 import bcrypt from 'bcrypt';
 import type { DataSource } from 'typeorm';
 import { recordAudit } from '../audit/audit.service';
@@ -17,7 +18,7 @@ export class AuthService {
   constructor(
     private readonly db: DataSource,
     private readonly users: UsersService,
-    private readonly secret: string,
+    private readonly key: KeyObject,
   ) {
     this.decoyHash = users.hashPassword('decoy-password-never-used');
   }
@@ -31,7 +32,7 @@ export class AuthService {
       .getOne();
     const matches = await bcrypt.compare(password, user?.passwordHash ?? (await this.decoyHash));
     if (!user || !matches || user.disabled) throw wrongCredentials();
-    const token = signSessionToken(this.secret, { sub: user.id, org: user.organizationId, ver: user.tokenVersion });
+    const token = signSessionToken(this.key, { sub: user.id, org: user.organizationId, ver: user.tokenVersion });
     await inOrganization(this.db, user.organizationId, (tx) => recordAudit(tx, { userId: user.id }, 'user.signed_in', { type: 'user', id: user.id }));
     return { token, user: publicUser(user) };
   }
@@ -60,7 +61,7 @@ export class AuthService {
       user.tokenVersion += 1;
       await tx.save(User, user);
       await recordAudit(tx, actor, 'user.password_changed', { type: 'user', id: user.id });
-      return signSessionToken(this.secret, { sub: user.id, org: user.organizationId, ver: user.tokenVersion });
+      return signSessionToken(this.key, { sub: user.id, org: user.organizationId, ver: user.tokenVersion });
     });
   }
 }

@@ -1,3 +1,4 @@
+import type { KeyObject } from 'node:crypto';
 import type { Request } from 'express';
 import { Passport, type PassportStatic } from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
@@ -9,13 +10,14 @@ const fromSessionCookie = (req: Request) => (req.cookies?.[SESSION_COOKIE] as st
 
 /** A token stops working when its user is disabled or changes password
  * (the token version moves on), not only when it expires. */
-export function createPassport(db: DataSource, secret: string): PassportStatic {
+export function createPassport(db: DataSource, key: KeyObject): PassportStatic {
   const passport = new Passport() as PassportStatic;
   passport.use(
     'jwt',
     new JwtStrategy(
       {
-        secretOrKey: secret,
+        // jsonwebtoken accepts a KeyObject; the typings only know strings and buffers.
+        secretOrKey: key as unknown as string,
         algorithms: ['HS256'],
         jwtFromRequest: ExtractJwt.fromExtractors([ExtractJwt.fromAuthHeaderAsBearerToken(), fromSessionCookie]),
       },

@@ -32,10 +32,18 @@ export function calibrationState(required: boolean, dueOn: string | null, today:
   return daysLeft <= dueSoonDays ? 'due_soon' : 'current';
 }
 
+// Building an Intl formatter is far costlier than using one; keep one per zone.
+const isoDateFormatters = new Map<string, Intl.DateTimeFormat>();
+
 /** Today's calendar date in an IANA time zone. */
 export function todayIn(timeZone: string, now: Date = new Date()): string {
-  // en-CA formats as YYYY-MM-DD.
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
+  let formatter = isoDateFormatters.get(timeZone);
+  if (!formatter) {
+    // en-CA formats as YYYY-MM-DD.
+    formatter = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
+    isoDateFormatters.set(timeZone, formatter);
+  }
+  return formatter.format(now);
 }
 
 /** The date `days` after `date` (negative for before). */

@@ -4,7 +4,7 @@ import { spawn } from 'node:child_process';
 import path from 'node:path';
 import { LOCAL_PG_PORT, localDataDir, localJwtSecret, projectRoot } from './lib/local-env.mjs';
 import { ensurePostgresInstalled, startCluster, stopCluster } from './lib/postgres.mjs';
-import { ensureClientBuild, ensureDatabase, ensureDependencies, log, runTs } from './lib/steps.mjs';
+import { ensureClientBuild, ensureDatabase, ensureDependencies, log, runTs, waitForHealth } from './lib/steps.mjs';
 
 const dev = process.argv.includes('--dev');
 const port = Number(process.env.PORT ?? 4600);
@@ -48,19 +48,6 @@ async function main() {
 
   Press Ctrl-C to stop; your data stays for the next start.
 `);
-}
-
-async function waitForHealth(webPort) {
-  for (let i = 0; i < 120; i += 1) {
-    try {
-      const res = await fetch(`http://127.0.0.1:${webPort}/api/health`);
-      if (res.ok) return;
-    } catch {
-      /* not listening yet */
-    }
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error('The server did not answer within a minute.');
 }
 
 let stopping = false;

@@ -6,6 +6,8 @@ const environment = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   PORT: z.coerce.number().int().min(0).max(65535).default(4600),
   HOST: z.string().default('127.0.0.1'),
+  /** Server processes sharing the port (1 = no workers). */
+  WEB_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(1),
   /** Express `trust proxy`: which hops may set X-Forwarded-For (the load balancer in docker/). */
   TRUST_PROXY: z.string().default('loopback'),
   DATABASE_URL: z.string().url(),

@@ -1,14 +1,18 @@
 import 'reflect-metadata';
+import cluster from 'node:cluster';
 import type { Server } from 'node:http';
 import { buildApp } from './app';
-import { readConfig } from './config';
+import { readConfig, type Config } from './config';
 import { createDataSource } from './db/data-source';
 import { startLocalFakes } from './fakes/local-fakes';
 import { createMailTransport } from './notifications/mail-transport';
 
-/** Listens, starts the scheduler and (locally) the fakes; drains on SIGTERM. */
-async function main() {
-  const config = readConfig();
+/**
+ * Listens, starts the scheduler and (locally) the fakes; drains on SIGTERM.
+ * With WEB_CONCURRENCY > 1 the primary process starts the fakes and that many
+ * workers share the port (the app is stateless, so they are interchangeable).
+ */
+async function serve(config: Config) {
   const db = await createDataSource(config.DATABASE_URL).initialize();
   const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config) : null;
   const mail = createMailTransport(config);
@@ -17,26 +21,66 @@ async function main() {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
   if (config.RUN_SCHEDULER) jobs.start();
-  console.log(`Nestkeeper is listening on http://${config.HOST}:${config.PORT}`);
+  if (cluster.isPrimary || cluster.worker?.id === 1) console.log(`Nestkeeper is listening on http://${config.HOST}:${config.PORT}`);
 
-  let stopping = false;
-  const stop = async (signal: string) => {
-    if (stopping) return;
-    stopping = true;
-    console.log(`${signal}: finishing open requests, then stopping.`);
+  onStop(async () => {
     await jobs.stop();
-    await new Promise((resolve) => server.close(resolve));
+    const closed = new Promise((resolve) => server.close(resolve));
+    server.closeIdleConnections();
+    // Requests still running after ten seconds are cut off.
+    await Promise.race([closed, new Promise((resolve) => setTimeout(resolve, 10_000).unref())]);
     server.closeAllConnections();
     await fakes?.close();
     mail.close();
     await db.destroy();
-    process.exit(0);
-  };
-  process.on('SIGTERM', () => void stop('SIGTERM'));
-  process.on('SIGINT', () => void stop('SIGINT'));
+  });
 }
 
-main().catch((err) => {
+async function supervise(config: Config) {
+  const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config) : null;
+  const workerEnv = { START_LOCAL_FAKES: 'false' };
+  let stopping = false;
+  for (let i = 0; i < config.WEB_CONCURRENCY; i += 1) cluster.fork(workerEnv);
+  cluster.on('exit', (worker, code) => {
+    if (stopping) return;
+    console.error(`A server worker stopped (exit ${code}); starting another.`);
+    cluster.fork(workerEnv);
+  });
+  onStop(async () => {
+    stopping = true;
+    const workers = Object.values(cluster.workers ?? {}).filter((w) => !!w);
+    await Promise.all(workers.map((w) => new Promise((resolve) => { w!.once('exit', resolve); w!.process.kill('SIGTERM'); })));
+    await fakes?.close();
+  });
+}
+
+function onStop(stop: () => Promise<void>) {
+  let stopping = false;
+  const handler = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    if (cluster.isPrimary) console.log(`${signal}: finishing open requests, then stopping.`);
+    stop().then(
+      () => process.exit(0),
+      (err) => {
+        console.error(err);
+        process.exit(1);
+      },
+    );
+  };
+  process.on('SIGTERM', () => handler('SIGTERM'));
+  process.on('SIGINT', () => handler('SIGINT'));
+}
+
+const config = (() => {
+  try {
+    return readConfig();
+  } catch (err) {
+    console.error(err instanceof Error ? err.message : err);
+    process.exit(1);
+  }
+})();
+(cluster.isPrimary && config.WEB_CONCURRENCY > 1 ? supervise(config) : serve(config)).catch((err) => {
   console.error(err instanceof Error ? err.message : err);
   process.exit(1);
 });

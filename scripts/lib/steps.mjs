@@ -53,3 +53,17 @@ export function runTs(file, env) {
   const r = spawnSync(process.execPath, ['--import', 'tsx', file], { cwd: projectRoot, stdio: 'inherit', env });
   if (r.status !== 0) throw new Error(`${file} failed (exit ${r.status})`);
 }
+
+/** Wait until the server on this port answers its health check (up to a minute). */
+export async function waitForHealth(webPort) {
+  for (let i = 0; i < 120; i += 1) {
+    try {
+      const res = await fetch(`http://127.0.0.1:${webPort}/api/health`);
+      if (res.ok) return;
+    } catch {
+      /* not listening yet */
+    }
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error('The server did not answer within a minute.');
+}

@@ -1,6 +1,15 @@
-// `npm run bench:fleet`: the fleet register under load, on a throwaway cluster.
-// 20,000 assets; GET /api/assets with a filter and a search term from 20
-// concurrent clients (autocannon); then the fleet page in headless Chromium.
+// `npm run bench:fleet` / `npm run bench:bookings`: load measurements on a throwaway
+// cluster with the benchmark firm (20,000 assets; for bookings also 200,000
+// bookings). Each suite is a script in tests/bench/ run against a live server.
+const suites = {
+  fleet: { seed: [], run: 'tests/bench/fleet-load.ts' },
+  bookings: { seed: ['server/seed/seed-bench-bookings.ts'], run: 'tests/bench/bookings-load.ts' },
+};
+const suite = suites[process.argv[2]];
+if (!suite) {
+  console.error(`Usage: node scripts/bench.mjs ${Object.keys(suites).join('|')}`);
+  process.exit(2);
+}
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
@@ -8,7 +17,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { projectRoot } from './lib/local-env.mjs';
 import { ensurePostgresInstalled, startCluster, stopCluster } from './lib/postgres.mjs';
-import { ensureClientBuild, ensureDatabase, ensureDependencies, log, runTs } from './lib/steps.mjs';
+import { ensureClientBuild, ensureDatabase, ensureDependencies, log, runTs, waitForHealth } from './lib/steps.mjs';
 
 const freePort = () =>
   new Promise((resolve) => {
@@ -36,10 +45,11 @@ try {
   const env = { ...process.env, DATABASE_URL: url, JWT_SECRET: 'bench-secret-bench-secret-bench-secret', PORT: String(port), START_LOCAL_FAKES: 'false', RUN_SCHEDULER: 'false', NODE_ENV: 'production' };
   runTs('server/db/prepare.ts', env);
   runTs('server/seed/seed-bench-fleet.ts', env);
+  for (const seed of suite.seed) runTs(seed, env);
   runTs('tests/bench/analyze.ts', env);
   server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { cwd: projectRoot, env, stdio: 'inherit' });
-  await new Promise((r) => setTimeout(r, 4000));
-  const child = spawn(process.execPath, ['--import', 'tsx', 'tests/bench/fleet-load.ts'], { cwd: projectRoot, env: { ...env, BENCH_URL: `http://127.0.0.1:${port}` }, stdio: 'inherit' });
+  await waitForHealth(port);
+  const child = spawn(process.execPath, ['--import', 'tsx', suite.run], { cwd: projectRoot, env: { ...env, BENCH_URL: `http://127.0.0.1:${port}` }, stdio: 'inherit' });
   const code = await new Promise((r) => child.on('exit', r));
   cleanUp();
   process.exit(code ?? 1);

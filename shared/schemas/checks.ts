@@ -4,15 +4,7 @@ import { tipPositions } from './assets';
 import { checkKinds, type CheckKind } from './check-kinds';
 
 export { checkKinds, defaultTolerances, tolerancePayload, type CheckKind } from './check-kinds';
-
-export const checkKindTitles: Record<CheckKind, string> = {
-  tip_validation: 'Tip validation',
-  two_face: 'Two-face check',
-  length_check: 'Length check',
-};
-
-/** Which asset type each check is about. */
-export const checkSubjectType = { tip_validation: 'tip', two_face: 'tracker', length_check: 'tracker' } as const;
+export * from '../checks/vocabulary';
 
 const coordinate = z.number({ message: 'must be a number (mm)' }).refine(Number.isFinite, 'must be a finite number').refine((v) => Math.abs(v) < 1e6, 'is beyond a kilometre from the tracker');
 export const pointPayload = z.object({ x: coordinate, y: coordinate, z: coordinate });

@@ -47,6 +47,21 @@ export const routes: RouteObject[] = [
             { path: 'kits/:id', lazy: screen(() => import('./routes/kit')) },
             { path: 'scan', lazy: screen(() => import('./routes/scan')) },
             { path: 'scan/:code', lazy: screen(() => import('./routes/scan')) },
+            { path: 'checks/:id', lazy: screen(() => import('./routes/check')) },
+            { path: 'incidents', lazy: screen(() => import('./routes/incidents')) },
+            { path: 'incidents/:id', lazy: screen(() => import('./routes/incident')) },
+          ]),
+          gated('checks.record', [{ path: 'checks/new', lazy: screen(() => import('./routes/check-new')) }]),
+          gated('incidents.report', [{ path: 'incidents/new', lazy: screen(() => import('./routes/incident-new')) }]),
+          gated('bookings.read', [
+            { path: 'board', lazy: screen(() => import('./routes/board')) },
+            { path: 'bookings/:id', lazy: screen(() => import('./routes/booking')) },
+            { path: 'jobs', lazy: screen(() => import('./routes/site-jobs')) },
+          ]),
+          gated('bookings.write', [{ path: 'bookings/new', lazy: screen(() => import('./routes/booking-new')) }]),
+          gated('bookings.hand_over', [
+            { path: 'bookings/:id/checkout', lazy: screen(() => import('./routes/booking-handover')) },
+            { path: 'bookings/:id/return', lazy: screen(() => import('./routes/booking-handover')) },
           ]),
           gated('fleet.write', [
             { path: 'fleet/new', lazy: screen(() => import('./routes/asset-form')) },

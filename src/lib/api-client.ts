@@ -165,28 +165,45 @@ export interface UploadOptions {
  * error shape as `request`.
  */
 export function uploadFile<T>(path: string, file: Blob, options: UploadOptions = {}): Promise<T> {
+  return sendWithProgress<T>(path, file, options.contentType ?? (file.type || 'application/octet-stream'), options);
+}
+
+/**
+ * POSTs a multipart form (text fields and files) with upload progress; the
+ * browser writes the multipart boundary itself.
+ */
+export function uploadForm<T>(path: string, form: FormData, options: Omit<UploadOptions, 'contentType'> = {}): Promise<T> {
+  return sendWithProgress<T>(path, form, undefined, options);
+}
+
+function sendWithProgress<T>(
+  path: string,
+  body: Blob | FormData,
+  contentType: string | undefined,
+  options: Omit<UploadOptions, 'contentType'>,
+): Promise<T> {
   return new Promise<T>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', buildUrl(path, options.query));
     xhr.withCredentials = true;
     xhr.setRequestHeader('Accept', 'application/json');
-    xhr.setRequestHeader('Content-Type', options.contentType ?? (file.type || 'application/octet-stream'));
+    if (contentType) xhr.setRequestHeader('Content-Type', contentType);
     const csrf = readCookie(csrfCookieName);
     if (csrf) xhr.setRequestHeader('X-CSRF-Token', csrf);
     xhr.upload.onprogress = (event) => {
       if (event.lengthComputable) options.onProgress?.(event.loaded / event.total);
     };
     xhr.onload = () => {
-      let body: unknown;
+      let parsed: unknown;
       try {
-        body = xhr.responseText ? JSON.parse(xhr.responseText) : undefined;
+        parsed = xhr.responseText ? JSON.parse(xhr.responseText) : undefined;
       } catch {
-        body = undefined;
+        parsed = undefined;
       }
       if (xhr.status >= 200 && xhr.status < 300) {
         options.onProgress?.(1);
-        resolve(body as T);
-      } else reject(apiErrorFromBody(xhr.status, body));
+        resolve(parsed as T);
+      } else reject(apiErrorFromBody(xhr.status, parsed));
     };
     xhr.onerror = () =>
       reject(
@@ -198,7 +215,7 @@ export function uploadFile<T>(path: string, file: Blob, options: UploadOptions =
       );
     xhr.onabort = () => reject(new DOMException('Upload cancelled', 'AbortError'));
     options.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
-    xhr.send(file);
+    xhr.send(body);
   });
 }
 

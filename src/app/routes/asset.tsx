@@ -2,25 +2,32 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { Button, buttonClasses } from '../../components/button';
-import { EmptyState } from '../../components/empty-state';
-import { ArrowLeftIcon, PrintIcon } from '../../components/icons';
+import { AlertIcon, ArrowLeftIcon, PlusIcon, PrintIcon } from '../../components/icons';
 import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
+import { Panel } from '../../components/panel';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
+import { AssetBookings } from '../../features/bookings/components/asset-bookings';
+import { AssetChecks } from '../../features/checks/components/asset-checks';
+import { checkKindsFor } from '../../features/checks/components/check-words';
 import { useAsset } from '../../features/fleet/api/get-asset';
 import { assetLabelUrl } from '../../features/fleet/api/get-asset-label';
 import { AssetCalibration, AssetIdentity, AssetSpecs } from '../../features/fleet/components/asset-facts';
 import { AssetHistory } from '../../features/fleet/components/asset-history';
 import { RetireDialog } from '../../features/fleet/components/retire-dialog';
+import { HoldPanel } from '../../features/holds/components/hold-panel';
+import { PutOnHoldButton } from '../../features/holds/components/put-on-hold';
+import { IncidentList } from '../../features/incidents/components/incident-list';
 import { kitsKeys } from '../../features/kits/api/keys';
 import { isApiError } from '../../lib/api-client';
 import { assetTypeTitles } from '../../lib/assets';
+import { todayIn } from '../../lib/bookings';
 import { can } from '../../lib/roles';
 
 export default function AssetRoute() {
   const { id = '' } = useParams();
-  const { user } = useSession();
+  const { user, organization } = useSession();
   const navigate = useNavigate();
   const asset = useAsset(id);
   const [retiring, setRetiring] = useState(false);
@@ -43,6 +50,11 @@ export default function AssetRoute() {
   const a = asset.data;
   const canWrite = can(user.role, 'fleet.write') && a.status !== 'retired';
   const description = [assetTypeTitles[a.type], a.manufacturer, a.model].filter(Boolean).join(' · ');
+  const live = a.status !== 'retired';
+  const canCheck = live && can(user.role, 'checks.record') && checkKindsFor(a.type).length > 0;
+  const canReport = live && can(user.role, 'incidents.report');
+  const canHold = can(user.role, 'holds.release');
+  const big = 'min-h-12 shrink-0 text-lg sm:min-h-10 sm:text-base';
 
   return (
     <>
@@ -63,6 +75,19 @@ export default function AssetRoute() {
         role="group"
         className="fixed inset-x-0 bottom-14 z-20 flex gap-2 overflow-x-auto border-t border-paper-line bg-card/95 px-3 py-2 backdrop-blur sm:static sm:mb-5 sm:flex-wrap sm:overflow-visible sm:border-0 sm:bg-transparent sm:p-0"
       >
+        {canCheck ? (
+          <Link to={`/checks/new?assetId=${encodeURIComponent(a.id)}`} className={buttonClasses('primary', 'md', big)}>
+            <PlusIcon size={18} />
+            Record a check
+          </Link>
+        ) : null}
+        {canReport ? (
+          <Link to={`/incidents/new?assetId=${encodeURIComponent(a.id)}`} className={buttonClasses('danger', 'md', big)}>
+            <AlertIcon size={18} />
+            Report damage
+          </Link>
+        ) : null}
+        {canHold && live && a.status !== 'held' ? <PutOnHoldButton assetId={a.id} assetTag={a.assetTag} className="min-h-11 shrink-0 sm:min-h-10" /> : null}
         {canWrite ? (
           <Button variant="primary" className="min-h-11 shrink-0 sm:min-h-10" onClick={() => navigate(`/fleet/${a.id}/edit`)}>
             Edit
@@ -82,22 +107,22 @@ export default function AssetRoute() {
         ) : null}
       </div>
 
-      <div className="grid gap-4 pb-16 sm:pb-0 lg:grid-cols-2">
+      <div className="grid gap-4 pb-20 sm:pb-0 lg:grid-cols-2">
+        {a.status === 'held' ? <HoldPanel assetId={a.id} assetTag={a.assetTag} canRelease={canHold} className="lg:col-span-2" /> : null}
         <AssetIdentity asset={a} />
         <div className="flex flex-col gap-4">
           <AssetCalibration asset={a} />
           <AssetSpecs asset={a} />
         </div>
-        <EmptyState title="Bookings">
-          Jobs and rentals that use this item will be listed here once the booking board arrives.
-        </EmptyState>
-        <EmptyState title="Field checks">
-          Tip validations, two-face and length checks for this item will be listed here once field checks arrive.
-        </EmptyState>
-        <EmptyState title="Incidents">
-          Damage and loss reports for this item will be listed here once incident reporting arrives. Until then, tell your
-          shop manager straight away and do not use a damaged item.
-        </EmptyState>
+        <AssetBookings assetId={a.id} today={todayIn(organization.timeZone)} canBook={live && can(user.role, 'bookings.write')} />
+        <AssetChecks asset={a} />
+        <Panel title="Incidents">
+          <IncidentList
+            params={{ assetId: a.id, limit: 20, offset: 0 }}
+            showAsset={false}
+            empty="No damage or loss has been reported for this item."
+          />
+        </Panel>
         <div className="lg:col-span-2">
           <AssetHistory assetId={a.id} />
         </div>

@@ -4,7 +4,10 @@ import { EmptyState } from '../../components/empty-state';
 import { ScanIcon } from '../../components/icons';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
+import { MyKitPanels, TodayAtCounter } from '../../features/bookings/components/desk-panels';
 import { RecalibrationsDue } from '../../features/fleet/components/due-list';
+import { HeldItems } from '../../features/fleet/components/held-list';
+import { IncidentList } from '../../features/incidents/components/incident-list';
 import type { Role } from '../../lib/roles';
 
 interface Panel {
@@ -29,6 +32,9 @@ const homes: Record<Role, RoleHome> = {
     description: 'What needs your decision across the fleet, the calendar and the books.',
     panels: [
       { title: 'Recalibrations due', body: null, live: () => <RecalibrationsDue /> },
+      { title: 'Today at the counter', body: null, live: () => <TodayAtCounter /> },
+      { title: 'On hold', body: null, live: () => <HeldItems /> },
+      { title: 'Open incidents', body: null, live: () => <OpenIncidents /> },
       {
         title: 'Out-of-tolerance reviews',
         body: 'When a calibration comes back out of tolerance as found, or a field check fails, the jobs and rentals to re-assess will be listed here.',
@@ -49,35 +55,24 @@ const homes: Record<Role, RoleHome> = {
     description: 'What goes out, what comes back and what is waiting on you today.',
     panels: [
       { title: 'Recalibrations due', body: null, live: () => <RecalibrationsDue /> },
-      {
-        title: 'Going out today',
-        body: 'Bookings that start today will appear here once the booking board is in use, each with its packing list to check out.',
-      },
-      {
-        title: 'Coming back today',
-        body: 'Kit due back today, and anything returned late, will appear here once bookings are checked out.',
-      },
-      {
-        title: 'Held items',
-        body: 'Items taken out of service after an incident or a failed check will wait here until a passing check or a new calibration lets you release them.',
-      },
+      { title: 'Today at the counter', body: null, live: () => <TodayAtCounter /> },
+      { title: 'On hold', body: null, live: () => <HeldItems /> },
+      { title: 'Open incidents', body: null, live: () => <OpenIncidents /> },
     ],
   },
   technician: {
     title: 'My kit',
     description: 'The kit in your care and the checks it needs.',
     panels: [
-      {
-        title: 'Kit with me',
-        body: 'The trackers, probes, tips and batteries booked out to you will appear here, each with its calibration status.',
-      },
+      { title: 'Kit I carry now', body: null, live: () => <MyKitPanels /> },
       {
         title: 'Checks to do',
         body: 'Probe tips that need a validation before their next job, and other field checks, will be listed here.',
       },
+      { title: 'Recent incidents', body: null, live: () => <RecentIncidents /> },
       {
         title: 'Report damage',
-        body: 'Reporting a dropped tip or other damage from this phone, with photos, will start here. Until then, tell your shop manager straight away and do not use the item. A dropped, swollen or damaged battery is a fire risk: do not charge it or pack it for a flight.',
+        body: 'Find the item by its label, then choose “Report damage” on its page — from this phone, with photos. Do not use a damaged item. A dropped, swollen or damaged battery is a fire risk: do not charge it or pack it for a flight.',
       },
     ],
   },
@@ -100,6 +95,37 @@ const homes: Record<Role, RoleHome> = {
     ],
   },
 };
+
+function OpenIncidents() {
+  return (
+    <section aria-labelledby="open-incidents-heading" className="rounded-lg border border-paper-line bg-card p-4">
+      <h2 id="open-incidents-heading" className="mb-2 text-base font-semibold text-ink-900">
+        Open incidents
+      </h2>
+      <IncidentList
+        params={{ state: ['reported', 'reviewing'], limit: 8, offset: 0 }}
+        empty="No damage or loss reports are waiting."
+        moreLink={{ to: '/incidents', label: (total) => `See all ${total} open incidents` }}
+      />
+    </section>
+  );
+}
+
+/** The latest reports in the firm, so a technician can follow what happened to the kit. */
+function RecentIncidents() {
+  return (
+    <section aria-labelledby="recent-incidents-heading" className="rounded-lg border border-paper-line bg-card p-4">
+      <h2 id="recent-incidents-heading" className="mb-2 text-base font-semibold text-ink-900">
+        Recent incidents
+      </h2>
+      <IncidentList
+        params={{ limit: 5, offset: 0 }}
+        empty="No damage or loss has been reported."
+        moreLink={{ to: '/incidents?state=all', label: () => 'See all incidents' }}
+      />
+    </section>
+  );
+}
 
 export default function HomeRoute() {
   const { user } = useSession();

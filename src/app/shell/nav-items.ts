@@ -2,8 +2,8 @@ import type { Capability } from '../../lib/roles';
 
 /**
  * The main navigation, in order. An entry without `capability` is for every
- * role. Add a screen here when it exists (Bookings, Checks, Incidents,
- * Calibration, Rentals come with their features).
+ * role. Add a screen here when it exists (Calibration and Rentals
+ * come with their features). Field checks start from an asset: no entry.
  */
 export interface NavItem {
   to: string;
@@ -15,9 +15,12 @@ export interface NavItem {
 
 export const navItems: readonly NavItem[] = [
   { to: '/', label: 'Home', end: true },
+  { to: '/board', label: 'Bookings', capability: 'bookings.read' },
+  { to: '/jobs', label: 'Jobs', capability: 'bookings.read' },
   { to: '/fleet', label: 'Fleet', capability: 'fleet.read' },
   { to: '/kits', label: 'Kits', capability: 'fleet.read' },
   { to: '/scan', label: 'Find by label', capability: 'fleet.read' },
+  { to: '/incidents', label: 'Incidents', capability: 'fleet.read' },
   { to: '/users', label: 'Users', capability: 'users.manage' },
   { to: '/mailbox', label: 'Mailbox', capability: 'mailbox.read' },
   { to: '/admin/jobs', label: 'Scheduled jobs', capability: 'jobs.run' },

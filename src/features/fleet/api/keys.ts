@@ -1,7 +1,8 @@
+import { fleetQueryRoot } from '../../../lib/asset-status';
 import type { AssetFilter, AssetListParams } from './types';
 
 export const fleetKeys = {
-  all: ['fleet'] as const,
+  all: fleetQueryRoot,
   lists: () => [...fleetKeys.all, 'list'] as const,
   list: (params: AssetListParams | AssetFilter) => [...fleetKeys.lists(), params] as const,
   one: (id: string) => [...fleetKeys.all, 'one', id] as const,

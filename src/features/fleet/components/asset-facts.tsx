@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { FactList, Panel } from '../../../components/panel';
 import { Link } from 'react-router-dom';
 import { AssetStatusChip, CalibrationChip } from '../../../components/asset-status';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
@@ -6,32 +7,7 @@ import { assetTypeTitles, typesWithFirmware, type AssetView } from '../../../lib
 import { shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
 import { formatCalendarDate, formatCount, formatMoney, formatNumber } from '../../../lib/format';
 
-export function FactList({ items }: { items: { term: string; value: ReactNode; mono?: boolean }[] }) {
-  return (
-    <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[minmax(9rem,max-content)_1fr]">
-      {items.map((item) => (
-        <div key={item.term} className="contents">
-          <dt className="text-sm font-semibold text-ink-700 sm:pt-0.5">{item.term}</dt>
-          <dd className={`mb-2 min-w-0 break-words text-ink-900 sm:mb-0 ${item.mono ? 'font-mono text-[0.95rem]' : ''}`}>
-            {item.value === null || item.value === undefined || item.value === '' ? '—' : item.value}
-          </dd>
-        </div>
-      ))}
-    </dl>
-  );
-}
-
-export function Panel({ title, children, id }: { title: string; children: ReactNode; id?: string }) {
-  const headingId = id ?? `panel-${title.toLowerCase().replace(/[^a-z0-9]+/g, '-')}`;
-  return (
-    <section aria-labelledby={headingId} className="rounded-lg border border-paper-line bg-card p-4">
-      <h2 id={headingId} className="mb-3 text-lg font-bold text-ink-900">
-        {title}
-      </h2>
-      {children}
-    </section>
-  );
-}
+export { FactList, Panel } from '../../../components/panel';
 
 const num = (v: unknown) => (typeof v === 'number' ? v : null);
 

@@ -1,5 +1,7 @@
+import { kitsQueryRoot } from '../../../lib/asset-status';
+
 export const kitsKeys = {
-  all: ['kits'] as const,
+  all: kitsQueryRoot,
   list: (page: { limit: number; offset: number }) => [...kitsKeys.all, 'list', page] as const,
   one: (id: string) => [...kitsKeys.all, 'one', id] as const,
   shippingSheet: (id: string) => [...kitsKeys.one(id), 'shipping-sheet'] as const,

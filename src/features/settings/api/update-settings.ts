@@ -1,11 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { settingsKeys } from './keys';
+import type { CheckKind, DecisionRule, Tolerance } from '../../../lib/checks';
 import type { OrganizationSettings } from './types';
 
 export interface UpdateSettingsInput {
   dueSoonDays?: number;
   timeZone?: string;
+  decisionRule?: DecisionRule;
+  tolerances?: Partial<Record<CheckKind, Tolerance>>;
 }
 
 export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettings> {

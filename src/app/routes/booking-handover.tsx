@@ -1,0 +1,100 @@
+import { useState } from 'react';
+import { Link, useLocation, useNavigate, useParams } from 'react-router-dom';
+import { buttonClasses } from '../../components/button';
+import { ArrowLeftIcon } from '../../components/icons';
+import { LoadingPanel } from '../../components/loading-panel';
+import { Notice } from '../../components/notice';
+import { PageHeader } from '../../components/page-header';
+import { useSession } from '../../features/auth/components/session-context';
+import { useBooking } from '../../features/bookings/api/get-booking';
+import type { ReturnResult } from '../../features/bookings/api/types';
+import { bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
+import { HandoverForm, ReturnOutcome, type CounterpartSuggestion } from '../../features/bookings/components/handover-form';
+import { useSiteJob } from '../../features/site-jobs/api/get-site-job';
+
+/** Checkout (`/bookings/:id/checkout`) and return (`/bookings/:id/return`) against the packing list. */
+export default function BookingHandoverRoute() {
+  const { id = '' } = useParams();
+  const { pathname } = useLocation();
+  const mode = pathname.endsWith('/return') ? 'return' : 'checkout';
+  const { user } = useSession();
+  const navigate = useNavigate();
+  const booking = useBooking(id);
+  const job = useSiteJob(booking.data?.jobId);
+  const [returned, setReturned] = useState<ReturnResult | null>(null);
+
+  const back = (
+    <Link to={`/bookings/${id}`} className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
+      <ArrowLeftIcon size={14} />
+      The booking
+    </Link>
+  );
+  if (booking.isPending) return <LoadingPanel label="Loading the packing list…" />;
+  if (booking.isError) {
+    return (
+      <>
+        {back}
+        <PageHeader title={mode === 'checkout' ? 'Check out' : 'Take back'} />
+        <Notice tone="error">{booking.error.message}</Notice>
+      </>
+    );
+  }
+  const b = booking.data;
+  const title = `${mode === 'checkout' ? 'Check out' : 'Take back'}: ${bookingTitle(b)}`;
+
+  if (returned) {
+    return (
+      <>
+        {back}
+        <PageHeader title={`Taken back: ${bookingTitle(b)}`} description={dayRange(b.startsOn, b.endsOn)} />
+        <ReturnOutcome result={returned} />
+        <Link to={`/bookings/${b.id}`} className={`${buttonClasses('secondary')} mt-4`}>
+          See the booking
+        </Link>
+      </>
+    );
+  }
+
+  const wanted = mode === 'checkout' ? 'reserved' : 'out';
+  if (b.state !== wanted) {
+    return (
+      <>
+        {back}
+        <PageHeader title={title} />
+        <Notice tone="info">
+          {mode === 'checkout' ? 'Only a reserved booking can be checked out.' : 'Only a booking that is out can be taken back.'} This one is{' '}
+          {b.state}.
+        </Notice>
+      </>
+    );
+  }
+
+  const suggestions: CounterpartSuggestion[] = [];
+  if (mode === 'return' && b.takenBy) {
+    suggestions.push({ label: `${b.takenBy} (took it out)`, name: b.takenBy, userId: b.takenByUserId });
+  }
+  if (!suggestions.some((s) => s.userId === user.id)) suggestions.push({ label: `Me (${user.name})`, name: user.name, userId: user.id });
+  const lead = job.data?.leadTechnicianId;
+  if (lead && !suggestions.some((s) => s.userId === lead)) {
+    suggestions.push({ label: `Lead technician of ${job.data?.reference}`, name: `Lead technician of ${job.data?.reference}`, userId: lead });
+  }
+
+  return (
+    <>
+      {back}
+      <PageHeader
+        title={title}
+        description={`${dayRange(b.startsOn, b.endsOn)}${b.kit ? ` · ${b.kit.name}` : ''}. ${mode === 'checkout' ? 'Walk the packing list with the person taking the kit.' : 'Walk the packing list as the kit comes back.'}`}
+      />
+      <HandoverForm
+        booking={b}
+        mode={mode}
+        suggestions={suggestions}
+        onDone={(result) => {
+          if (mode === 'return') setReturned(result as ReturnResult);
+          else navigate(`/bookings/${b.id}`, { state: { notice: `Handed over to ${result.takenBy ?? 'the taker'}.` } });
+        }}
+      />
+    </>
+  );
+}

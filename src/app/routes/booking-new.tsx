@@ -1,0 +1,61 @@
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { ArrowLeftIcon } from '../../components/icons';
+import { LoadingPanel } from '../../components/loading-panel';
+import { Notice } from '../../components/notice';
+import { PageHeader } from '../../components/page-header';
+import { useSession } from '../../features/auth/components/session-context';
+import { BookForm } from '../../features/bookings/components/book-form';
+import { useAssets } from '../../features/fleet/api/get-assets';
+import { useKits } from '../../features/kits/api/get-kits';
+import { useSiteJobs } from '../../features/site-jobs/api/get-site-jobs';
+import { JobForm } from '../../features/site-jobs/components/job-form';
+
+const isDate = (s: string | null) => (s && /^\d{4}-\d{2}-\d{2}$/.test(s) ? s : undefined);
+
+/** "Book kit": a kit or items, whole days, a job; problems explained before saving. */
+export default function BookingNewRoute() {
+  const { user } = useSession();
+  const navigate = useNavigate();
+  const [params] = useSearchParams();
+  const kits = useKits();
+  // Every item, retired ones too: booking a kit books all its members, and the form explains why one cannot go.
+  const assets = useAssets({ sort: 'assetTag', limit: 500, offset: 0 });
+  const jobs = useSiteJobs();
+
+  const assetId = params.get('assetId');
+  const initial = {
+    kitId: params.get('kitId') ?? undefined,
+    assetIds: assetId ? [assetId] : undefined,
+    startsOn: isDate(params.get('startsOn')),
+    endsOn: isDate(params.get('endsOn')),
+    jobId: params.get('jobId') ?? undefined,
+  };
+
+  const error = kits.error ?? assets.error ?? jobs.error;
+  return (
+    <>
+      <Link to="/board" className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
+        <ArrowLeftIcon size={14} />
+        Booking board
+      </Link>
+      <PageHeader title="Book kit" description="Reserve a kit or separate items for whole days. Nestkeeper checks every item against calibration, holds and other bookings as you choose." />
+      {error ? <Notice tone="error">{error.message}</Notice> : null}
+      {kits.isPending || assets.isPending || jobs.isPending ? (
+        <LoadingPanel label="Loading kits, items and jobs…" />
+      ) : kits.data && assets.data && jobs.data ? (
+        <div className="max-w-3xl">
+          <BookForm
+            kits={kits.data.items}
+            assets={assets.data.items}
+            jobs={jobs.data.items}
+            initial={initial}
+            onBooked={(booking) => navigate(`/bookings/${booking.id}`)}
+            renderNewJob={({ startsOn, endsOn, onCreated, onCancel }) => (
+              <JobForm me={{ id: user.id, name: user.name }} defaults={{ startsOn, endsOn }} onSaved={(job) => onCreated(job.id)} onCancel={onCancel} submitLabel="Add job" />
+            )}
+          />
+        </div>
+      ) : null}
+    </>
+  );
+}

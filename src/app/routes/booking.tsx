@@ -1,0 +1,89 @@
+import { Link, useLocation, useParams } from 'react-router-dom';
+import { buttonClasses } from '../../components/button';
+import { ArrowLeftIcon } from '../../components/icons';
+import { LoadingPanel } from '../../components/loading-panel';
+import { Notice } from '../../components/notice';
+import { FactList, Panel } from '../../components/panel';
+import { PageHeader } from '../../components/page-header';
+import { useSession } from '../../features/auth/components/session-context';
+import { useBooking } from '../../features/bookings/api/get-booking';
+import { BookingFacts, CancelBookingButton, MoveDatesButton, PackingList } from '../../features/bookings/components/booking-summary';
+import { bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
+import { useSiteJob } from '../../features/site-jobs/api/get-site-job';
+import { isApiError } from '../../lib/api-client';
+import { can } from '../../lib/roles';
+
+export default function BookingRoute() {
+  const { id = '' } = useParams();
+  const { user, organization } = useSession();
+  const location = useLocation();
+  const booking = useBooking(id);
+  const job = useSiteJob(booking.data?.jobId);
+  const notice = (location.state as { notice?: string } | null)?.notice;
+
+  if (booking.isPending) return <LoadingPanel label="Loading the booking…" />;
+  if (booking.isError) {
+    const notFound = isApiError(booking.error) && booking.error.status === 404;
+    return (
+      <>
+        <PageHeader title={notFound ? 'Booking not found' : 'The booking could not be loaded'} />
+        <Notice tone="error">{notFound ? 'No booking of your firm has this address.' : booking.error.message}</Notice>
+        <Link to="/board" className={`${buttonClasses('secondary')} mt-4`}>
+          Back to the booking board
+        </Link>
+      </>
+    );
+  }
+
+  const b = booking.data;
+  const handOver = can(user.role, 'bookings.hand_over');
+  const write = can(user.role, 'bookings.write');
+  const actions = [
+    b.state === 'reserved' && handOver ? (
+      <Link key="out" to={`/bookings/${b.id}/checkout`} className={buttonClasses('primary')}>
+        Check out
+      </Link>
+    ) : null,
+    b.state === 'out' && handOver ? (
+      <Link key="back" to={`/bookings/${b.id}/return`} className={buttonClasses('primary')}>
+        Take back
+      </Link>
+    ) : null,
+    b.state === 'reserved' && write ? <MoveDatesButton key="move" booking={b} /> : null,
+    b.state === 'reserved' && write ? <CancelBookingButton key="cancel" booking={b} /> : null,
+  ].filter(Boolean);
+
+  return (
+    <>
+      <Link to={`/board?from=${b.startsOn}`} className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
+        <ArrowLeftIcon size={14} />
+        Booking board
+      </Link>
+      <PageHeader title={bookingTitle(b)} description={dayRange(b.startsOn, b.endsOn)} actions={actions.length ? actions : undefined} />
+      {notice ? (
+        <Notice tone="success" className="mb-4">
+          {notice}
+        </Notice>
+      ) : null}
+      <div className="grid gap-4 lg:grid-cols-2">
+        <BookingFacts booking={b} timeZone={organization.timeZone} />
+        {job.data ? (
+          <Panel title="Job">
+            <FactList
+              items={[
+                { term: 'Reference', value: job.data.reference, mono: true },
+                { term: 'Customer', value: job.data.customerName },
+                { term: 'Site', value: job.data.siteAddress },
+                { term: 'Contact', value: [job.data.contactName, job.data.contactEmail].filter(Boolean).join(', ') },
+                { term: 'On site', value: dayRange(job.data.startsOn, job.data.endsOn) },
+              ]}
+            />
+          </Panel>
+        ) : null}
+        <div className="lg:col-span-2">
+          <PackingList booking={b} />
+        </div>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { bookingsKeys } from './keys';
+import type { Booking } from './types';
+
+export function cancelBooking(id: string): Promise<Booking> {
+  return apiClient.post<Booking>(`/bookings/${encodeURIComponent(id)}/cancel`);
+}
+
+export function useCancelBooking() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: cancelBooking,
+    onSuccess: (booking) => {
+      queryClient.setQueryData(bookingsKeys.one(booking.id), booking);
+      return queryClient.invalidateQueries({ queryKey: bookingsKeys.all });
+    },
+  });
+}

@@ -1,0 +1,18 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { bookingsKeys } from './keys';
+import type { Booking } from './types';
+
+export function getBooking(id: string, signal?: AbortSignal): Promise<Booking> {
+  return apiClient.get<Booking>(`/bookings/${encodeURIComponent(id)}`, { signal });
+}
+
+export const bookingQueryOptions = (id: string) =>
+  queryOptions({
+    queryKey: bookingsKeys.one(id),
+    queryFn: ({ signal }) => getBooking(id, signal),
+  });
+
+export function useBooking(id: string) {
+  return useQuery({ ...bookingQueryOptions(id), enabled: !!id });
+}

@@ -1,0 +1,67 @@
+import { format, parseISO } from 'date-fns';
+import { StatusChip, type StatusTone } from '../../../components/status-chip';
+import { blockReasonText, bookingDays, type BlockReason } from '../../../lib/bookings';
+import type { Booking, BookingPurpose, BookingState, ItemCondition } from '../api/types';
+
+export const bookingStateWords: Record<BookingState, string> = {
+  reserved: 'Reserved',
+  out: 'Out',
+  returned: 'Returned',
+  cancelled: 'Cancelled',
+};
+
+// Reserved reads as a dashed outline, the same as its bar on the board.
+const stateTones: Record<BookingState, StatusTone> = {
+  reserved: 'paused',
+  out: 'info',
+  returned: 'ok',
+  cancelled: 'none',
+};
+
+export function BookingStateChip({ state }: { state: BookingState }) {
+  return <StatusChip tone={stateTones[state]} label={bookingStateWords[state]} />;
+}
+
+export const purposeWords: Record<BookingPurpose, string> = {
+  job: 'Job',
+  rental: 'Rental',
+  lab: 'Lab',
+  internal: 'Internal',
+};
+
+export const conditionWords: Record<ItemCondition, string> = {
+  good: 'Good',
+  worn: 'Worn',
+  damaged: 'Damaged',
+};
+
+/** What a booking is for, in a few words: the job's reference and customer, or the purpose. */
+export function bookingTitle(booking: Pick<Booking, 'job' | 'purpose'>): string {
+  return booking.job ? `${booking.job.reference} ${booking.job.customerName}` : purposeWords[booking.purpose];
+}
+
+/** A short day, "2 Dec" (with the year when asked). */
+export function shortDay(date: string, withYear = false): string {
+  return format(parseISO(date), withYear ? 'd MMM yyyy' : 'd MMM');
+}
+
+/** "2 Dec – 8 Dec"; the year is added when the range crosses one. */
+export function dayRange(startsOn: string, endsOn: string): string {
+  const crossesYear = startsOn.slice(0, 4) !== endsOn.slice(0, 4);
+  return `${shortDay(startsOn, crossesYear)} – ${shortDay(endsOn, crossesYear)}`;
+}
+
+export function dayCount(startsOn: string, endsOn: string): string {
+  const days = bookingDays(startsOn, endsOn);
+  return `${days} ${days === 1 ? 'day' : 'days'}`;
+}
+
+/** "what it's used for" plus the kit or the number of items. */
+export function bookingContents(booking: Pick<Booking, 'kit' | 'items'>): string {
+  const count = `${booking.items.length} ${booking.items.length === 1 ? 'item' : 'items'}`;
+  return booking.kit ? `${booking.kit.name} (${count})` : count;
+}
+
+export function blockSentence(assetTag: string, reason: BlockReason): string {
+  return `${assetTag} cannot go: ${blockReasonText[reason]}.`;
+}

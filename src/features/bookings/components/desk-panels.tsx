@@ -1,0 +1,116 @@
+import { differenceInCalendarDays, parseISO } from 'date-fns';
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import { LoadingPanel } from '../../../components/loading-panel';
+import { Notice } from '../../../components/notice';
+import { useCounterDay } from '../api/get-counter-day';
+import { useMyKit } from '../api/get-my-kit';
+import type { Booking } from '../api/types';
+import { blockReasonText } from '../../../lib/bookings';
+import { BookingStateChip, bookingContents, bookingTitle, dayRange } from './booking-words';
+
+function BookingLine({ booking, extra }: { booking: Booking; extra?: ReactNode }) {
+  return (
+    <li>
+      <Link to={`/bookings/${booking.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-0.5 px-1 py-1.5 hover:bg-brass-wash">
+        <span className="font-semibold text-ink-900">{bookingTitle(booking)}</span>
+        <span className="text-sm text-ink-700">
+          {dayRange(booking.startsOn, booking.endsOn)} · {bookingContents(booking)}
+        </span>
+        {extra ? <span className="ml-auto text-sm">{extra}</span> : null}
+      </Link>
+    </li>
+  );
+}
+
+function Section({ id, title, count, empty, children, level = 2 }: { id: string; title: string; count: number; empty: string; children: ReactNode; level?: 2 | 3 }) {
+  const Heading = level === 2 ? 'h2' : 'h3';
+  return (
+    <section aria-labelledby={id} className="rounded-lg border border-paper-line bg-card p-4">
+      <div className="mb-2 flex items-baseline justify-between gap-2">
+        <Heading id={id} className="text-base font-semibold text-ink-900">
+          {title}
+        </Heading>
+        <span className="text-sm text-ink-700">{count === 0 ? 'none' : count}</span>
+      </div>
+      {count === 0 ? <p className="text-sm text-ink-700">{empty}</p> : <ul className="flex flex-col divide-y divide-paper-line">{children}</ul>}
+    </section>
+  );
+}
+
+/** Manager's and owner's "Today at the counter": what goes out, comes back, is late, or can no longer go. */
+export function TodayAtCounter() {
+  const day = useCounterDay();
+  if (day.isPending) return <LoadingPanel label="Looking at today's bookings…" className="md:col-span-2 xl:col-span-3" />;
+  if (day.isError) return <Notice tone="error" className="md:col-span-2 xl:col-span-3">{day.error.message}</Notice>;
+  const { today, checkouts, returns, late, blocked } = day.data;
+  return (
+    <section aria-labelledby="counter-heading" className="flex flex-col gap-2 md:col-span-2 xl:col-span-3">
+      <h2 id="counter-heading" className="text-lg font-bold text-ink-900">
+        Today at the counter
+      </h2>
+      <div className="grid items-start gap-3 md:grid-cols-2">
+      <Section level={3} id="counter-out" title="Going out today" count={checkouts.length} empty="Nothing is due to be checked out.">
+        {checkouts.map((b) => (
+          <BookingLine key={b.id} booking={b} extra={<span className="font-semibold text-brass-deep">Check out</span>} />
+        ))}
+      </Section>
+      <Section level={3} id="counter-back" title="Coming back today" count={returns.length} empty="Nothing is due back today.">
+        {returns.map((b) => (
+          <BookingLine key={b.id} booking={b} extra={<BookingStateChip state={b.state} />} />
+        ))}
+      </Section>
+      <Section level={3} id="counter-late" title="Late returns" count={late.length} empty="Nothing is overdue back.">
+        {late.map((b) => {
+          const daysLate = differenceInCalendarDays(parseISO(today), parseISO(b.endsOn));
+          return (
+            <BookingLine
+              key={b.id}
+              booking={b}
+              extra={
+                <span className="nk-hatch rounded border border-bad/50 px-1.5 font-semibold text-bad">
+                  {daysLate} {daysLate === 1 ? 'day' : 'days'} late
+                </span>
+              }
+            />
+          );
+        })}
+      </Section>
+      <Section level={3} id="counter-blocked" title="Blocked bookings" count={blocked.length} empty="Every reserved item can still go.">
+        {blocked.map((b) => (
+          <BookingLine
+            key={b.id}
+            booking={b}
+            extra={
+              <span className="text-ink-800">
+                {b.blocked.map((x) => `${x.assetTag}: ${blockReasonText[x.reason]}`).join('; ')}
+              </span>
+            }
+          />
+        ))}
+      </Section>
+      </div>
+    </section>
+  );
+}
+
+/** Technician's "Kit I carry now" and "Next". */
+export function MyKitPanels() {
+  const mine = useMyKit();
+  if (mine.isPending) return <LoadingPanel label="Looking for your kit…" />;
+  if (mine.isError) return <Notice tone="error">{mine.error.message}</Notice>;
+  return (
+    <>
+      <Section id="kit-now" title="Kit I carry now" count={mine.data.now.length} empty="No kit is checked out to you.">
+        {mine.data.now.map((b) => (
+          <BookingLine key={b.id} booking={b} extra={<span className="font-mono text-ink-700">{b.items.map((i) => i.assetTag).join(', ')}</span>} />
+        ))}
+      </Section>
+      <Section id="kit-next" title="Next" count={mine.data.next.length} empty="Nothing is booked for you next.">
+        {mine.data.next.map((b) => (
+          <BookingLine key={b.id} booking={b} extra={<BookingStateChip state={b.state} />} />
+        ))}
+      </Section>
+    </>
+  );
+}

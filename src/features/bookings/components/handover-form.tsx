@@ -1,0 +1,326 @@
+import { Form, Formik, useField, useFormikContext, type FormikHelpers } from 'formik';
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import * as Yup from 'yup';
+import { Button } from '../../../components/button';
+import { Field } from '../../../components/field';
+import { PrintIcon } from '../../../components/icons';
+import { Notice } from '../../../components/notice';
+import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
+import { assetTypeTitles } from '../../../lib/assets';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useCheckOutBooking } from '../api/check-out-booking';
+import { useReturnBooking } from '../api/return-booking';
+import type { Booking, ItemCondition, ReturnResult } from '../api/types';
+import { bookingTitle, conditionWords, dayRange } from './booking-words';
+
+export type HandoverMode = 'checkout' | 'return';
+
+interface Line {
+  assetId: string;
+  assetTag: string;
+  present: boolean;
+  condition: ItemCondition;
+  note: string;
+}
+
+interface HandoverValues {
+  lines: Line[];
+  counterpart: string;
+  /** Set when a suggestion names one of the firm's people: sent instead of the typed name. */
+  counterpartUserId: string;
+}
+
+/** A person to offer as the one who takes or brings back the kit. */
+export interface CounterpartSuggestion {
+  label: string;
+  name: string;
+  userId: string | null;
+}
+
+const words = {
+  checkout: { who: 'Taken by', submit: 'Hand over', list: 'Packing list to hand over' },
+  return: { who: 'Brought back by', submit: 'Take back', list: 'Packing list to take back' },
+} as const;
+
+function schemaFor(mode: HandoverMode) {
+  return Yup.object({
+    counterpart: Yup.string().trim().required(mode === 'checkout' ? 'Say who takes the kit.' : 'Say who brings the kit back.').min(2, 'Write at least two letters of the name.'),
+    lines:
+      mode === 'checkout'
+        ? Yup.array().test('all-present', '', function (lines) {
+            const list = (lines ?? []) as Line[];
+            const missing = list.filter((l) => !l.present).map((l) => l.assetTag);
+            if (missing.length) return this.createError({ message: `Tick every item present to hand over. Not ticked: ${missing.join(', ')}. If something is missing, change the booking first.` });
+            const damaged = list.filter((l) => l.condition === 'damaged').map((l) => l.assetTag);
+            if (damaged.length) return this.createError({ message: `Damaged items must not go out: ${damaged.join(', ')}. Report the damage from the item's page and book a replacement.` });
+            return true;
+          })
+        : Yup.array(),
+  });
+}
+
+/** Checkout or return against the booking's packing list: each item present?, its condition, a note; who takes or brings it. */
+export function HandoverForm({
+  booking,
+  mode,
+  suggestions,
+  onDone,
+}: {
+  booking: Booking;
+  mode: HandoverMode;
+  suggestions: CounterpartSuggestion[];
+  onDone: (result: Booking | ReturnResult) => void;
+}) {
+  const checkout = useCheckOutBooking();
+  const giveBack = useReturnBooking();
+  const [formError, setFormError] = useState<string>();
+  const w = words[mode];
+
+  const initialValues: HandoverValues = {
+    lines: booking.items.map((item) => ({ assetId: item.id, assetTag: item.assetTag, present: false, condition: 'good', note: '' })),
+    counterpart: '',
+    counterpartUserId: '',
+  };
+
+  async function submit(values: HandoverValues, helpers: FormikHelpers<HandoverValues>) {
+    setFormError(undefined);
+    const input = {
+      id: booking.id,
+      counterpart: values.counterpartUserId || values.counterpart.trim(),
+      checklist: values.lines.map((l) => ({
+        assetId: l.assetId,
+        present: l.present,
+        condition: l.condition,
+        ...(l.note.trim() ? { note: l.note.trim() } : {}),
+      })),
+    };
+    try {
+      onDone(mode === 'checkout' ? await checkout.mutateAsync(input) : await giveBack.mutateAsync(input));
+    } catch (error) {
+      setFormError(applyServerErrors(error, helpers, { fields: ['counterpart'], labels: { counterpart: w.who } }));
+    }
+  }
+
+  const types = new Set(booking.items.map((i) => i.type));
+  return (
+    <Formik initialValues={initialValues} validationSchema={schemaFor(mode)} onSubmit={submit}>
+      {({ isSubmitting, values, errors, submitCount }) => (
+        <>
+          <Form noValidate className="flex flex-col gap-4 print:hidden" aria-label={mode === 'checkout' ? 'Check out' : 'Take back'}>
+            {formError ? <Notice tone="error">{formError}</Notice> : null}
+            <section aria-labelledby="handover-list" className="rounded-lg border border-paper-line bg-card p-4">
+              <div className="mb-2 flex flex-wrap items-baseline justify-between gap-2">
+                <h2 id="handover-list" className="text-lg font-bold">
+                  {w.list}
+                </h2>
+                <TickAll />
+              </div>
+              <ul className="flex flex-col divide-y divide-paper-line">
+                {booking.items.map((item, i) => (
+                  <ChecklistRow key={item.id} index={i} assetTag={item.assetTag} type={assetTypeTitles[item.type]} />
+                ))}
+              </ul>
+              {typeof errors.lines === 'string' && (submitCount > 0 || values.lines.every((l) => l.present)) ? (
+                <Notice tone="error" className="mt-3">
+                  {errors.lines}
+                </Notice>
+              ) : null}
+              {mode === 'return' && values.lines.some((l) => !l.present || l.condition === 'damaged') ? (
+                <Notice tone="caution" className="mt-3" title="An incident will be opened">
+                  {values.lines
+                    .filter((l) => !l.present || l.condition === 'damaged')
+                    .map((l) => `${l.assetTag} (${!l.present ? 'missing' : 'damaged'})`)
+                    .join(', ')}{' '}
+                  will each get an incident report and go on hold until someone releases it on evidence.
+                </Notice>
+              ) : null}
+            </section>
+
+            <CounterpartField label={w.who} suggestions={suggestions} />
+
+            {mode === 'checkout' ? <Cautions types={types} /> : null}
+
+            <div className="flex flex-wrap gap-2">
+              <Button type="submit" variant="primary" busy={isSubmitting}>
+                {w.submit}
+              </Button>
+              {mode === 'checkout' ? (
+                <Button icon={<PrintIcon size={16} />} onClick={() => window.print()}>
+                  Print hand-over sheet
+                </Button>
+              ) : null}
+            </div>
+          </Form>
+          {mode === 'checkout' ? <HandoverSheet booking={booking} values={values} types={types} /> : null}
+        </>
+      )}
+    </Formik>
+  );
+}
+
+function TickAll() {
+  const { values, setFieldValue } = useFormikContext<HandoverValues>();
+  const all = values.lines.every((l) => l.present);
+  return (
+    <Button size="sm" variant="quiet" onClick={() => void setFieldValue('lines', values.lines.map((l) => ({ ...l, present: !all })))}>
+      {all ? 'Untick all' : 'Tick all present'}
+    </Button>
+  );
+}
+
+function ChecklistRow({ index, assetTag, type }: { index: number; assetTag: string; type: string }) {
+  const [present] = useField({ name: `lines.${index}.present`, type: 'checkbox' });
+  const [condition] = useField(`lines.${index}.condition`);
+  const [note] = useField(`lines.${index}.note`);
+  const base = `line-${index}`;
+  return (
+    <li className="grid items-center gap-2 py-2 sm:grid-cols-[minmax(10rem,1fr)_auto_10rem_minmax(10rem,1.5fr)]">
+      <span className="min-w-0">
+        <span className="font-mono font-semibold text-ink-900">{assetTag}</span>
+        <span className="ml-2 text-sm text-ink-700">{type}</span>
+      </span>
+      <label htmlFor={`${base}-present`} className="flex min-h-10 items-center gap-2">
+        <input id={`${base}-present`} type="checkbox" {...present} aria-label={`Present: ${assetTag}`} className="size-5 accent-brass-deep" />
+        <span aria-hidden="true">Present</span>
+      </label>
+      <select {...condition} aria-label={`Condition: ${assetTag}`} className="min-h-10 rounded-md border border-paper-line bg-card px-2">
+        {(Object.keys(conditionWords) as ItemCondition[]).map((c) => (
+          <option key={c} value={c}>
+            {conditionWords[c]}
+          </option>
+        ))}
+      </select>
+      <input {...note} aria-label={`Note: ${assetTag}`} placeholder="Note (optional)" autoComplete="off" className="min-h-10 rounded-md border border-paper-line bg-card px-2" />
+    </li>
+  );
+}
+
+function CounterpartField({ label, suggestions }: { label: string; suggestions: CounterpartSuggestion[] }) {
+  const { setFieldValue, values } = useFormikContext<HandoverValues>();
+  return (
+    <div className="flex flex-col gap-2 rounded-lg border border-paper-line bg-card p-4">
+      <Field
+        name="counterpart"
+        label={label}
+        autoComplete="off"
+        hint="A name, or pick one of your people below."
+        onChange={(e) => {
+          void setFieldValue('counterpart', e.target.value);
+          if (values.counterpartUserId) void setFieldValue('counterpartUserId', '');
+        }}
+      />
+      {suggestions.length ? (
+        <div className="flex flex-wrap gap-2" role="group" aria-label={`Suggestions for ${label}`}>
+          {suggestions.map((s) => (
+            <Button
+              key={s.label}
+              size="sm"
+              variant={values.counterpartUserId && values.counterpartUserId === s.userId ? 'primary' : 'secondary'}
+              onClick={() => {
+                void setFieldValue('counterpart', s.name);
+                void setFieldValue('counterpartUserId', s.userId ?? '');
+              }}
+            >
+              {s.label}
+            </Button>
+          ))}
+        </div>
+      ) : null}
+    </div>
+  );
+}
+
+/** DESIGN.md §6: the cautions that apply to what goes out. */
+function Cautions({ types }: { types: Set<string> }) {
+  const laser = types.has('tracker');
+  const heavy = types.has('tracker') || types.has('case');
+  const battery = types.has('battery');
+  return (
+    <section aria-label="Safety cautions" className="flex flex-col gap-2">
+      {laser ? <LaserCaution /> : null}
+      {heavy ? <HeavyCaseCaution /> : null}
+      {battery ? <BatteryCaution /> : null}
+      {!laser && !heavy && !battery ? (
+        <Notice tone="caution" title="Before it goes">
+          Follow local codes, the carrier&rsquo;s rules and the instrument maker&rsquo;s instructions for what is handed over.
+        </Notice>
+      ) : null}
+    </section>
+  );
+}
+
+/** The printed sheet both people sign at the counter (print only). */
+function HandoverSheet({ booking, values, types }: { booking: Booking; values: HandoverValues; types: Set<string> }) {
+  return (
+    <section aria-hidden="true" className="hidden text-black print:block">
+      <h2 className="text-xl font-bold">Hand-over sheet</h2>
+      <p className="mt-1">
+        {bookingTitle(booking)} · {dayRange(booking.startsOn, booking.endsOn)}
+        {booking.kit ? ` · ${booking.kit.name}` : ''}
+      </p>
+      <table className="mt-3 w-full border-collapse text-sm">
+        <thead>
+          <tr>
+            {['Item', 'Type', 'Present', 'Condition', 'Note'].map((h) => (
+              <th key={h} className="border border-black px-2 py-1 text-left">
+                {h}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {booking.items.map((item, i) => {
+            const line = values.lines[i];
+            return (
+              <tr key={item.id}>
+                <td className="border border-black px-2 py-1 font-mono">{item.assetTag}</td>
+                <td className="border border-black px-2 py-1">{assetTypeTitles[item.type]}</td>
+                <td className="border border-black px-2 py-1">{line?.present ? 'Yes' : '☐'}</td>
+                <td className="border border-black px-2 py-1">{line ? conditionWords[line.condition] : ''}</td>
+                <td className="border border-black px-2 py-1">{line?.note}</td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+      <div className="mt-3 flex flex-col gap-1 text-xs">
+        {types.has('tracker') ? <p>Laser beam: commonly IEC 60825-1 Class 2. Do not stare into the beam or point it at anyone&rsquo;s eyes.</p> : null}
+        {types.has('tracker') || types.has('case') ? <p>Tracker cases are heavy: lift with two people or use a trolley.</p> : null}
+        {types.has('battery') ? <p>A dropped, swollen or damaged lithium-ion battery is a fire risk: do not charge it and do not ship it by air.</p> : null}
+        <p>Follow local codes, the carrier&rsquo;s rules and the instrument maker&rsquo;s instructions.</p>
+      </div>
+      <div className="mt-8 grid grid-cols-2 gap-8 text-sm">
+        <p className="border-t border-black pt-1">Handed over by (name, signature, date)</p>
+        <p className="border-t border-black pt-1">Taken by: {values.counterpart || '(name, signature, date)'}</p>
+      </div>
+    </section>
+  );
+}
+
+/** After a return: which items opened incidents (and are on hold), with links. */
+export function ReturnOutcome({ result }: { result: ReturnResult }) {
+  const tagOf = (assetId: string) => result.items.find((i) => i.id === assetId)?.assetTag ?? 'An item';
+  if (!result.incidents.length) {
+    return (
+      <Notice tone="success" title="Taken back">
+        Everything on the packing list came back present and usable.
+      </Notice>
+    );
+  }
+  return (
+    <Notice tone="caution" title="Taken back, with incidents">
+      <p>These items came back missing or damaged. Each has an incident report and is on hold until released on evidence:</p>
+      <ul className="mt-1 list-disc pl-5">
+        {result.incidents.map((i) => (
+          <li key={i.incidentId}>
+            <span className="font-mono font-semibold">{tagOf(i.assetId)}</span> is on hold:{' '}
+            <Link to={`/incidents/${i.incidentId}`} className="font-semibold text-brass-deep underline">
+              open its incident
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </Notice>
+  );
+}

@@ -1,0 +1,9 @@
+import type { CheckListParams } from './types';
+
+export const checksKeys = {
+  all: ['checks'] as const,
+  lists: () => [...checksKeys.all, 'list'] as const,
+  list: (params: CheckListParams) => [...checksKeys.lists(), params] as const,
+  one: (id: string) => [...checksKeys.all, 'one', id] as const,
+  tipValidation: (assetId: string) => [...checksKeys.all, 'tip-validation', assetId] as const,
+};

@@ -1,0 +1,107 @@
+import type { TipPosition } from '../../../lib/assets';
+import { formatDate, formatNumber } from '../../../lib/format';
+import type { CheckView } from '../api/types';
+import { positionWords } from './check-words';
+
+type TipCheck = Extract<CheckView, { kind: 'tip_validation' }>;
+
+const W = 560;
+const H = 200;
+const L = 44;
+const R = 12;
+const T = 12;
+const B = 30;
+
+/** Shape per position, so the two series read apart without colour. */
+function Marker({ x, y, position, fail }: { x: number; y: number; position: TipPosition; fail: boolean }) {
+  if (fail) return <path d={`M${x - 5} ${y - 5} L${x + 5} ${y + 5} M${x - 5} ${y + 5} L${x + 5} ${y - 5}`} stroke="#a23b2c" strokeWidth={2.4} />;
+  return position === 'vertical' ? (
+    <circle cx={x} cy={y} r={3.2} fill="#1c2536" />
+  ) : (
+    <rect x={x - 4.5} y={y - 4.5} width={9} height={9} fill="#fffdf8" stroke="#1c2536" strokeWidth={2} />
+  );
+}
+
+/**
+ * The largest deviation of each tip validation over time, against the dashed
+ * tolerance line, so drift shows before it fails. Vertical: filled dots;
+ * horizontal: open squares; a failed check: ✕.
+ */
+export function ValidationHistoryChart({ checks, timeZone }: { checks: TipCheck[]; timeZone?: string }) {
+  const points = [...checks].sort((a, b) => a.performedAt.localeCompare(b.performedAt));
+  if (points.length < 2) {
+    return <p className="text-sm text-ink-700">The trend appears once the tip has two validations or more.</p>;
+  }
+  const times = points.map((c) => new Date(c.performedAt).getTime());
+  const t0 = times[0];
+  const t1 = Math.max(times[times.length - 1], t0 + 1);
+  const top = Math.max(...points.map((c) => Math.max(c.result.maxDeviationUm, c.result.toleranceUm))) * 1.15;
+  const x = (t: number) => L + ((t - t0) / (t1 - t0)) * (W - L - R);
+  const y = (v: number) => T + (1 - v / top) * (H - T - B);
+  const ticks = [0, top / 3, (2 * top) / 3].map((v) => Math.round(v));
+  // Horizontal (open squares) first, so a vertical dot at the same moment stays visible on top.
+  const positions = [...new Set(points.map((c) => c.position))].sort((a, b) => (a === 'horizontal' ? -1 : b === 'horizontal' ? 1 : 0));
+  const tolerancePath = points.map((c, i) => `${i === 0 ? 'M' : 'L'}${x(times[i])} ${y(c.result.toleranceUm)}`).join(' ');
+  const summary = `Largest deviation per tip validation: ${points
+    .map((c) => `${formatDate(c.performedAt, timeZone)} ${c.position} ${formatNumber(c.result.maxDeviationUm)} µm of ${formatNumber(c.result.toleranceUm)} µm (${c.result.decision})`)
+    .join('; ')}.`;
+
+  return (
+    <figure className="flex flex-col gap-1">
+      <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-label={summary}>
+        {ticks.map((v) => (
+          <g key={v}>
+            <line x1={L} x2={W - R} y1={y(v)} y2={y(v)} stroke="#ebe3d3" />
+            <text x={L - 6} y={y(v) + 4} textAnchor="end" fontSize={11} fill="#3a4660">
+              {v}
+            </text>
+          </g>
+        ))}
+        <text x={4} y={T + 4} fontSize={11} fill="#3a4660">
+          µm
+        </text>
+        <line x1={L} x2={L} y1={T} y2={H - B} stroke="#a7afbd" />
+        <line x1={L} x2={W - R} y1={H - B} y2={H - B} stroke="#a7afbd" />
+        <path d={tolerancePath} fill="none" stroke="#7a5f22" strokeWidth={1.6} strokeDasharray="6 4" />
+        <text x={W - R} y={y(points[points.length - 1].result.toleranceUm) - 5} textAnchor="end" fontSize={11} fill="#7a5f22">
+          tolerance
+        </text>
+        {positions.map((p) => {
+          const series = points.map((c, i) => ({ c, t: times[i] })).filter((s) => s.c.position === p);
+          return (
+            <g key={p}>
+              <path
+                d={series.map((s, i) => `${i === 0 ? 'M' : 'L'}${x(s.t)} ${y(s.c.result.maxDeviationUm)}`).join(' ')}
+                fill="none"
+                stroke="#28334a"
+                strokeWidth={1.2}
+                strokeDasharray={p === 'horizontal' ? '2 2' : undefined}
+              />
+              {series.map((s) => (
+                <Marker key={s.c.id} x={x(s.t)} y={y(s.c.result.maxDeviationUm)} position={p} fail={s.c.result.decision === 'fail'} />
+              ))}
+            </g>
+          );
+        })}
+        <text x={L} y={H - 10} fontSize={11} fill="#3a4660">
+          {formatDate(points[0].performedAt, timeZone)}
+        </text>
+        <text x={W - R} y={H - 10} textAnchor="end" fontSize={11} fill="#3a4660">
+          {formatDate(points[points.length - 1].performedAt, timeZone)}
+        </text>
+      </svg>
+      <figcaption className="flex flex-wrap gap-x-4 text-sm text-ink-700">
+        {positions.map((p) => (
+          <span key={p} className="inline-flex items-center gap-1">
+            <svg width="12" height="12" aria-hidden="true">
+              {p === 'vertical' ? <circle cx="6" cy="6" r="4.5" fill="#1c2536" /> : <rect x="1.5" y="1.5" width="9" height="9" fill="#fffdf8" stroke="#1c2536" strokeWidth="2" />}
+            </svg>
+            {positionWords[p]}
+          </span>
+        ))}
+        <span>✕ failed</span>
+        <span>– – – tolerance</span>
+      </figcaption>
+    </figure>
+  );
+}

@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { holdsKeys } from './keys';
+import type { HoldList } from './types';
+
+/** An item's holds, newest first; the open one has no `releasedAt`. */
+export function getHolds(assetId: string, signal?: AbortSignal): Promise<HoldList> {
+  return apiClient.get<HoldList>(`/assets/${encodeURIComponent(assetId)}/holds`, { signal });
+}
+
+export const holdsQueryOptions = (assetId: string) =>
+  queryOptions({
+    queryKey: holdsKeys.forAsset(assetId),
+    queryFn: ({ signal }) => getHolds(assetId, signal),
+  });
+
+export function useHolds(assetId: string, options: { enabled?: boolean } = {}) {
+  return useQuery({ ...holdsQueryOptions(assetId), enabled: (options.enabled ?? true) && !!assetId });
+}

@@ -1,0 +1,7 @@
+import type { HoldReason } from '../api/types';
+
+export const holdReasonWords: Record<HoldReason, string> = {
+  incident: 'Damage or loss reported',
+  failed_check: 'Failed a field check',
+  manual: 'Taken out of service by hand',
+};

@@ -1,0 +1,158 @@
+import { Form, Formik, type FormikHelpers } from 'formik';
+import { useState } from 'react';
+import * as Yup from 'yup';
+import { Button } from '../../../components/button';
+import { Field, SelectField } from '../../../components/field';
+import { Notice } from '../../../components/notice';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useCreateSiteJob } from '../api/create-site-job';
+import type { SiteJob, SiteJobInput } from '../api/types';
+import { useUpdateSiteJob } from '../api/update-site-job';
+
+interface JobValues {
+  reference: string;
+  customerName: string;
+  contactName: string;
+  contactEmail: string;
+  siteAddress: string;
+  startsOn: string;
+  endsOn: string;
+  leadTechnicianId: string;
+  notes: string;
+}
+
+const fields = Object.keys({
+  reference: 0,
+  customerName: 0,
+  contactName: 0,
+  contactEmail: 0,
+  siteAddress: 0,
+  startsOn: 0,
+  endsOn: 0,
+  leadTechnicianId: 0,
+  notes: 0,
+} satisfies Record<keyof JobValues, 0>);
+
+const labels: Record<string, string> = {
+  reference: 'Reference',
+  customerName: 'Customer',
+  contactEmail: 'E-mail',
+  startsOn: 'Start',
+  endsOn: 'End',
+};
+
+const schema = Yup.object({
+  reference: Yup.string().trim().required('Give the job a reference, e.g. J-2611.').max(40, 'Keep the reference to 40 characters.'),
+  customerName: Yup.string().trim().required('Say who the customer is.').max(120, 'Keep the name to 120 characters.'),
+  contactName: Yup.string().trim().max(120, 'Keep the name to 120 characters.'),
+  contactEmail: Yup.string().trim().email('This is not an e-mail address.'),
+  siteAddress: Yup.string().trim().max(400, 'Keep the address to 400 characters.'),
+  startsOn: Yup.string().required('Pick the first day on site.'),
+  endsOn: Yup.string()
+    .required('Pick the last day on site.')
+    .test('after-start', 'The last day cannot be before the first.', function (value) {
+      const { startsOn } = this.parent as JobValues;
+      return !value || !startsOn || value >= startsOn;
+    }),
+  notes: Yup.string().trim().max(4000, 'Keep the notes to 4000 characters.'),
+});
+
+function toValues(job: SiteJob | undefined, defaults: Partial<JobValues>): JobValues {
+  return {
+    reference: job?.reference ?? '',
+    customerName: job?.customerName ?? '',
+    contactName: job?.contactName ?? '',
+    contactEmail: job?.contactEmail ?? '',
+    siteAddress: job?.siteAddress ?? '',
+    startsOn: job?.startsOn ?? defaults.startsOn ?? '',
+    endsOn: job?.endsOn ?? defaults.endsOn ?? '',
+    leadTechnicianId: job?.leadTechnicianId ?? '',
+    notes: job?.notes ?? '',
+  };
+}
+
+const orNull = (s: string) => (s.trim() ? s.trim() : null);
+
+/**
+ * Add or change a customer site job. The lead technician must be one of the
+ * firm's people; without the user list (owner only) the choice is "me" or nobody.
+ */
+export function JobForm({
+  job,
+  me,
+  defaults = {},
+  onSaved,
+  onCancel,
+  submitLabel,
+}: {
+  job?: SiteJob;
+  me: { id: string; name: string };
+  defaults?: { startsOn?: string; endsOn?: string };
+  onSaved: (job: SiteJob) => void;
+  onCancel?: () => void;
+  submitLabel?: string;
+}) {
+  const create = useCreateSiteJob();
+  const update = useUpdateSiteJob();
+  const [formError, setFormError] = useState<string>();
+
+  const leadOptions = [
+    { value: '', label: 'Nobody yet' },
+    { value: me.id, label: `Me (${me.name})` },
+    ...(job?.leadTechnicianId && job.leadTechnicianId !== me.id
+      ? [{ value: job.leadTechnicianId, label: 'The technician already chosen' }]
+      : []),
+  ];
+
+  async function submit(values: JobValues, helpers: FormikHelpers<JobValues>) {
+    setFormError(undefined);
+    const input: SiteJobInput = {
+      reference: values.reference.trim(),
+      customerName: values.customerName.trim(),
+      contactName: orNull(values.contactName),
+      contactEmail: orNull(values.contactEmail),
+      siteAddress: orNull(values.siteAddress),
+      startsOn: values.startsOn,
+      endsOn: values.endsOn,
+      leadTechnicianId: values.leadTechnicianId || null,
+      notes: orNull(values.notes),
+    };
+    try {
+      const saved = job ? await update.mutateAsync({ id: job.id, ...input }) : await create.mutateAsync(input);
+      onSaved(saved);
+    } catch (error) {
+      setFormError(applyServerErrors(error, helpers, { fields, labels }));
+    }
+  }
+
+  return (
+    <Formik initialValues={toValues(job, defaults)} validationSchema={schema} onSubmit={submit}>
+      {({ isSubmitting }) => (
+        <Form noValidate className="flex flex-col gap-3" aria-label={job ? `Change job ${job.reference}` : 'New job'}>
+          {formError ? <Notice tone="error">{formError}</Notice> : null}
+          <div className="grid gap-3 sm:grid-cols-2">
+            <Field name="reference" label="Reference" mono autoComplete="off" />
+            <Field name="customerName" label="Customer name" autoComplete="off" />
+            <Field name="contactName" label="Contact" autoComplete="off" />
+            <Field name="contactEmail" label="E-mail" type="email" autoComplete="off" />
+            <Field name="siteAddress" label="Site address" className="sm:col-span-2" autoComplete="off" />
+            <Field name="startsOn" label="First day on site" type="date" />
+            <Field name="endsOn" label="Last day on site" type="date" />
+            <SelectField name="leadTechnicianId" label="Lead technician" options={leadOptions} />
+            <Field name="notes" label="Notes" className="sm:col-span-2" autoComplete="off" />
+          </div>
+          <div className="flex flex-wrap gap-2">
+            <Button type="submit" variant="primary" busy={isSubmitting}>
+              {submitLabel ?? (job ? 'Save job' : 'Add job')}
+            </Button>
+            {onCancel ? (
+              <Button variant="quiet" onClick={onCancel}>
+                Cancel
+              </Button>
+            ) : null}
+          </div>
+        </Form>
+      )}
+    </Formik>
+  );
+}

@@ -29,6 +29,12 @@ import { DeskService } from './bookings/desk.service';
 import { HandoverService } from './bookings/handover.service';
 import { JobsRegisterService } from './bookings/jobs.service';
 import { lateReturnsJob } from './bookings/late-returns.job';
+import { CalibrationService } from './calibration/calibration.service';
+import { calibrationRoutes } from './calibration/calibration.routes';
+import { dueScanJob } from './calibration/due-scan.job';
+import { ImpactService } from './calibration/impact.service';
+import { LabService } from './calibration/lab.service';
+import { ReviewService } from './calibration/review.service';
 import { ChecksService } from './checks/checks.service';
 import { checksRoutes } from './checks/checks.routes';
 import { HoldsService } from './holds/holds.service';
@@ -45,7 +51,7 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   const users = new UsersService(db, config.BCRYPT_COST);
   const key = signingKey(config.JWT_SECRET);
   const auth = new AuthService(db, users, key);
-  const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM), lateReturnsJob()]);
+  const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM), lateReturnsJob(), dueScanJob()]);
   const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
   const assets = new AssetsService(db, publicUrl);
   const kits = new KitsService(db, publicUrl);
@@ -86,6 +92,10 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use(
     '/api',
     bookingsRoutes({ bookings, handover: new HandoverService(db, bookings), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
+  );
+  app.use(
+    '/api',
+    calibrationRoutes({ calibration: new CalibrationService(db), impact: new ImpactService(db), lab: new LabService(db), review: new ReviewService(db) }),
   );
   app.use('/api', unknownApiRoute);
 

@@ -13,6 +13,8 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { Asset } from '../fleet/asset.entity';
 import { AppError, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
+import { openImpactReview } from '../calibration/impact.service';
+import { todayIn } from '../../shared/calibration/due-date';
 import { enqueueMail } from '../notifications/outbox';
 import { staffAddresses } from '../notifications/staff';
 import { loadOrgContext } from '../organizations/org-context';
@@ -105,6 +107,7 @@ export class ChecksService {
       if (decision === 'fail') {
         const what = `${checkKindTitles[input.kind]}${check.position ? ` (${check.position})` : ''} failed: ${judged.toFixed(1)} µm against ${limitUm.toFixed(1)} µm`;
         await placeHold(tx, actor, subject, { reason: 'failed_check', summary: what, checkId: check.id });
+        await openImpactReview(tx, actor, subject, { trigger: 'check', triggerId: check.id, foundOn: todayIn(ctx.timeZone, check.performedAt) });
         await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
           subject: `${subject.assetTag} is on hold: ${checkKindTitles[input.kind].toLowerCase()} failed`,
           heading: `${subject.assetTag} failed a field check and is on hold`,

@@ -83,6 +83,10 @@ export class Asset extends OrgOwned {
   @Column({ name: 'due_on', type: 'date', nullable: true })
   dueOn: string | null;
 
+  /** The calibration state last reported by the daily scan, so each change is mailed once. */
+  @Column({ name: 'notified_calibration_state', type: 'text', nullable: true })
+  notifiedCalibrationState: string | null;
+
   @Column({ name: 'retired_at', type: 'timestamptz', nullable: true })
   retiredAt: Date | null;
 

@@ -2,7 +2,7 @@ import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, Primary
 import { OrgOwned } from '../db/org-owned';
 import { Asset } from './asset.entity';
 
-export type CustodyKind = 'registered' | 'checked_out' | 'returned' | 'sent_to_lab' | 'back_from_lab' | 'held' | 'released' | 'retired' | 'moved';
+export type CustodyKind = 'registered' | 'checked_out' | 'returned' | 'sent_to_lab' | 'back_from_lab' | 'held' | 'released' | 'retired' | 'moved' | 'calibrated';
 
 /** Append-only chain of custody: who had an item, where, from when (DESIGN.md §3).
  * The database refuses UPDATE and DELETE on this table. */

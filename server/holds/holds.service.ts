@@ -36,6 +36,18 @@ export async function placeHold(tx: Scoped, actor: Actor, asset: Asset, hold: { 
 
 type Evidence = { kind: string; id: string; performedAt: string; position?: string | null };
 
+/** End a hold on the given evidence, inside the caller's transaction. */
+export async function releaseHold(tx: Scoped, actor: Actor, asset: Asset, hold: Hold, evidence: Evidence[], note?: string) {
+  hold.releasedAt = new Date();
+  hold.releasedBy = actor.userId;
+  hold.releaseEvidence = { evidence, note: note ?? null };
+  await tx.save(Hold, hold);
+  // Still at a customer's site (held from the field): it stays out until it comes back.
+  if (asset.status === 'held') await tx.updateWhere(Asset, { id: asset.id }, { status: 'ready' });
+  await tx.insert(CustodyEvent, { assetId: asset.id, kind: 'released', actorUserId: actor.userId, holder: null, location: asset.location, bookingId: null, note: note ?? null });
+  await recordAudit(tx, actor, 'asset.released', { type: 'asset', id: asset.id }, { holdId: hold.id, evidence });
+}
+
 export class HoldsService {
   constructor(private readonly db: DataSource) {}
 
@@ -65,13 +77,7 @@ export class HoldsService {
       if (missing.length) {
         throw ruleBroken('release_needs_evidence', `${asset.assetTag} stays on hold: ${missing.join('; ')}.`, { missing, holdStartedAt: hold.startedAt.toISOString() });
       }
-      hold.releasedAt = new Date();
-      hold.releasedBy = actor.userId;
-      hold.releaseEvidence = { evidence, note: note ?? null };
-      await tx.save(Hold, hold);
-      await tx.updateWhere(Asset, { id: assetId }, { status: 'ready' });
-      await tx.insert(CustodyEvent, { assetId, kind: 'released', actorUserId: actor.userId, holder: null, location: asset.location, bookingId: null, note: note ?? null });
-      await recordAudit(tx, actor, 'asset.released', { type: 'asset', id: assetId }, { holdId: hold.id, evidence });
+      await releaseHold(tx, actor, asset, hold, evidence, note);
       return this.view(hold);
     });
   }
@@ -88,9 +94,13 @@ export class HoldsService {
         ORDER BY performed_at`,
       [asset.id, since],
     );
-    // Until calibration certificates are recorded as events, the plan's last calibration date stands for one.
-    const calibrated = asset.lastCalibratedOn !== null && asset.lastCalibratedOn >= since.toISOString().slice(0, 10);
-    if (calibrated) return { evidence: [{ kind: 'calibration', id: asset.id, performedAt: asset.lastCalibratedOn! }], missing: [] };
+    const [calibration] = await tx.sql<{ id: string; performedOn: string }>(
+      `SELECT id, to_char(performed_on, 'YYYY-MM-DD') AS "performedOn" FROM calibration_events
+        WHERE organization_id = $1 AND asset_id = $2 AND as_left = 'in_tolerance' AND performed_on >= $3::date AND created_at > $4
+        ORDER BY performed_on DESC LIMIT 1`,
+      [asset.id, since.toISOString().slice(0, 10), since],
+    );
+    if (calibration) return { evidence: [{ kind: 'calibration', id: calibration.id, performedAt: calibration.performedOn }], missing: [] };
     if (asset.type === 'tip') {
       const positions = ((asset.specs.positions as TipPosition[] | undefined) ?? ['vertical']);
       const found = positions.map((p) => passing.find((c) => c.kind === 'tip_validation' && c.position === p));

@@ -1,4 +1,5 @@
 import { DEFAULT_DUE_SOON_DAYS, todayIn } from '../../shared/calibration/due-date';
+import { defaultIntervalPolicy, type IntervalPolicy } from '../../shared/calibration/interval-review';
 import type { DecisionRule } from '../../shared/checks/decision';
 import type { Tolerance } from '../../shared/checks/tolerance';
 import { defaultTolerances, type CheckKind } from '../../shared/schemas/checks';
@@ -15,7 +16,12 @@ export type OrgContext = {
   today: string;
   decisionRule: DecisionRule;
   tolerances: Record<CheckKind, Tolerance>;
+  providers: { name: string; turnaroundDays: number }[];
+  intervalPolicy: IntervalPolicy;
 };
+
+/** Turnaround when a provider is not in the settings (common practice: about two weeks). */
+export const DEFAULT_TURNAROUND_DAYS = 14;
 
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
   const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(
@@ -30,5 +36,7 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
     today: todayIn(org.time_zone, now),
     decisionRule: org.settings.decisionRule ?? 'simple',
     tolerances: { ...defaultTolerances, ...org.settings.tolerances },
+    providers: org.settings.providers ?? [],
+    intervalPolicy: { ...defaultIntervalPolicy, ...org.settings.intervalPolicy },
   };
 }

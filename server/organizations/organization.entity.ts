@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
+import type { IntervalPolicy } from '../../shared/calibration/interval-review';
 import type { DecisionRule } from '../../shared/checks/decision';
 import type { Tolerance } from '../../shared/checks/tolerance';
 import type { CheckKind } from '../../shared/schemas/checks';
@@ -9,6 +10,9 @@ export type OrganizationSettings = {
   decisionRule: DecisionRule;
   /** Default tolerance per check kind; an asset may override it. */
   tolerances: Partial<Record<CheckKind, Tolerance>>;
+  /** Calibration providers and their usual turnaround in days. */
+  providers: { name: string; turnaroundDays: number }[];
+  intervalPolicy: IntervalPolicy;
 };
 
 @Entity({ name: 'organizations' })

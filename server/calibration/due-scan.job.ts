@@ -1,0 +1,62 @@
+import { addDays, todayIn } from '../../shared/calibration/due-date';
+import { Scoped } from '../db/scoped';
+import type { JobDefinition } from '../jobs/job';
+import { enqueueMail } from '../notifications/outbox';
+import { staffAddresses } from '../notifications/staff';
+import { dueItems } from './review.service';
+
+type Changed = { organization_id: string; asset_tag: string; state: string };
+
+/**
+ * The daily due scan. One set-based statement marks every item whose
+ * calibration state became due-soon or overdue since the last scan (so each
+ * change is reported once, however many instances or re-runs), then each
+ * firm's owners and managers get one digest through the outbox.
+ */
+export const dueScanJob = (): JobDefinition => ({
+  name: 'due-scan',
+  description: 'Marks calibration states and e-mails each owner and manager one digest of newly due-soon and overdue items and the bookings they threaten.',
+  schedule: '15 5 * * *',
+  run: async ({ db, now }) => {
+    const changed: Changed[] = await db.query(
+      `WITH states AS (
+         SELECT a.id, a.organization_id, a.asset_tag,
+                CASE WHEN a.due_on IS NULL OR a.due_on < (now() AT TIME ZONE o.time_zone)::date THEN 'overdue' ELSE 'due_soon' END AS state
+           FROM assets a JOIN organizations o ON o.id = a.organization_id
+          WHERE a.calibration_required AND a.status <> 'retired'
+            AND (a.due_on IS NULL OR a.due_on <= (now() AT TIME ZONE o.time_zone)::date + coalesce((o.settings->>'dueSoonDays')::int, 30)))
+       , marked AS (
+         UPDATE assets a SET notified_calibration_state = s.state
+           FROM states s WHERE a.id = s.id AND a.notified_calibration_state IS DISTINCT FROM s.state
+         RETURNING s.organization_id, s.asset_tag, s.state)
+       SELECT * FROM marked`,
+    );
+    const byOrg = new Map<string, Changed[]>();
+    for (const c of changed) byOrg.set(c.organization_id, [...(byOrg.get(c.organization_id) ?? []), c]);
+    let digests = 0;
+    for (const [organizationId, rows] of byOrg) {
+      await db.transaction(async (manager) => {
+        const tx = new Scoped(manager, organizationId);
+        const [org] = await tx.sql<{ time_zone: string; due_soon: number | null }>(`SELECT time_zone, (settings->>'dueSoonDays')::int AS due_soon FROM organizations WHERE id = $1`);
+        const today = todayIn(org.time_zone, now);
+        const tags = new Set(rows.map((r) => r.asset_tag));
+        const details = (await dueItems(tx, today, org.due_soon ?? 30)).filter((d) => tags.has(d.assetTag));
+        const line = (d: (typeof details)[number]) =>
+          `${d.assetTag} (${d.type.replace('_', ' ')}) — ${d.state === 'overdue' ? 'OVERDUE' : 'due'} ${d.dueOn ?? '(no calibration on record)'}${d.threatened.length ? `; threatens ${d.threatened.map((t) => `${t.jobReference ?? 'a booking'} ${t.startsOn}–${t.endsOn}`).join(', ')}` : ''}`;
+        const overdue = details.filter((d) => d.state === 'overdue');
+        const soon = details.filter((d) => d.state === 'due_soon');
+        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
+          subject: `Calibration: ${overdue.length} newly overdue, ${soon.length} newly due soon (${today})`,
+          heading: 'Calibration changes since the last scan',
+          paragraphs: [
+            ...(overdue.length ? ['Overdue now:', ...overdue.map(line)] : []),
+            ...(soon.length ? [`Due within ${org.due_soon ?? 30} days (by ${addDays(today, org.due_soon ?? 30)}):`, ...soon.map(line)] : []),
+            'Plan lab trips from the review page; the window finder shows when each item can go without breaking a booking.',
+          ],
+        });
+        digests += 1;
+      });
+    }
+    return { itemsChanged: changed.length, digests };
+  },
+});

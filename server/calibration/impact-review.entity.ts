@@ -1,0 +1,79 @@
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { OrgOwned } from '../db/org-owned';
+import { Asset } from '../fleet/asset.entity';
+
+export type ImpactAssessment = 'no_effect' | 'customer_notified' | 'remeasure_offered';
+
+/**
+ * The out-of-tolerance impact review (ISO 9001:2015 §7.1.5.2, ISO/IEC
+ * 17025:2017 §7.10): every booking that used the item between its last
+ * passing evidence and the finding, each to be assessed.
+ */
+@Entity({ name: 'impact_reviews' })
+@Index(['organizationId', 'state'])
+@Index(['organizationId', 'assetId'])
+export class ImpactReview extends OrgOwned {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'asset_id', type: 'uuid' })
+  assetId: string;
+
+  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'asset_id' })
+  asset?: Asset;
+
+  @Column({ type: 'text' })
+  trigger: 'calibration' | 'check';
+
+  @Column({ name: 'trigger_id', type: 'uuid' })
+  triggerId: string;
+
+  /** Day of the last passing evidence (null: none on record, so every earlier use counts). */
+  @Column({ type: 'date', nullable: true })
+  since: string | null;
+
+  @Column({ name: 'found_on', type: 'date' })
+  foundOn: string;
+
+  @Column({ type: 'text', default: 'open' })
+  state: 'open' | 'closed';
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @Column({ name: 'closed_at', type: 'timestamptz', nullable: true })
+  closedAt: Date | null;
+}
+
+@Entity({ name: 'impact_review_items' })
+@Index(['reviewId', 'bookingId'], { unique: true })
+export class ImpactReviewItem extends OrgOwned {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'review_id', type: 'uuid' })
+  reviewId: string;
+
+  @ManyToOne(() => ImpactReview, { onDelete: 'CASCADE', nullable: false })
+  @JoinColumn({ name: 'review_id' })
+  review?: ImpactReview;
+
+  @Column({ name: 'booking_id', type: 'uuid' })
+  bookingId: string;
+
+  @Column({ type: 'text', nullable: true })
+  assessment: ImpactAssessment | null;
+
+  @Column({ type: 'text', nullable: true })
+  note: string | null;
+
+  @Column({ name: 'assessed_by', type: 'uuid', nullable: true })
+  assessedBy: string | null;
+
+  @Column({ name: 'assessed_at', type: 'timestamptz', nullable: true })
+  assessedAt: Date | null;
+
+  @Column({ name: 'notice_queued_at', type: 'timestamptz', nullable: true })
+  noticeQueuedAt: Date | null;
+}

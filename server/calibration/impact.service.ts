@@ -1,0 +1,145 @@
+import type { DataSource } from 'typeorm';
+import { recordAudit } from '../audit/audit.service';
+import type { Scoped } from '../db/scoped';
+import { inOrganization, type Actor } from '../db/transaction';
+import { Asset } from '../fleet/asset.entity';
+import { ruleBroken } from '../http/errors';
+import { enqueueMail } from '../notifications/outbox';
+import { staffAddresses } from '../notifications/staff';
+import { ImpactReview, ImpactReviewItem, type ImpactAssessment } from './impact-review.entity';
+
+/** Day of the item's last passing evidence before `foundOn`: an in-tolerance calibration or a passing field check. */
+async function lastPassingEvidence(tx: Scoped, assetId: string, foundOn: string, excludeCheckId?: string) {
+  const [row] = await tx.sql<{ since: string | null }>(
+    `SELECT to_char(greatest(
+        (SELECT max(performed_on) FROM calibration_events WHERE organization_id = $1 AND asset_id = $2 AND as_found = 'in_tolerance' AND performed_on < $3::date),
+        (SELECT max(performed_at)::date FROM field_checks WHERE organization_id = $1 AND asset_id = $2 AND decision = 'pass' AND performed_at::date <= $3::date AND id <> coalesce($4::uuid, '00000000-0000-0000-0000-000000000000'))
+      ), 'YYYY-MM-DD') AS since`,
+    [assetId, foundOn, excludeCheckId ?? null],
+  );
+  return row.since;
+}
+
+/**
+ * Open the review for an item found out of tolerance, inside the caller's
+ * transaction: every booking that took it out between its last passing
+ * evidence and the finding, both days included.
+ */
+export async function openImpactReview(tx: Scoped, actor: Actor, asset: Asset, found: { trigger: 'calibration' | 'check'; triggerId: string; foundOn: string }) {
+  const since = await lastPassingEvidence(tx, asset.id, found.foundOn, found.trigger === 'check' ? found.triggerId : undefined);
+  const review = await tx.insert(ImpactReview, { assetId: asset.id, trigger: found.trigger, triggerId: found.triggerId, since, foundOn: found.foundOn, state: 'open', closedAt: null });
+  const bookings = await tx.sql<{ bookingId: string }>(
+    `SELECT DISTINCT b.id AS "bookingId" FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id
+      WHERE bi.organization_id = $1 AND bi.asset_id = $2 AND b.state IN ('out', 'returned') AND b.purpose <> 'lab'
+        AND b.starts_on <= $4::date AND ($3::date IS NULL OR b.ends_on >= $3::date)`,
+    [asset.id, since, found.foundOn],
+  );
+  await tx.insertMany(ImpactReviewItem, bookings.map((b) => ({ reviewId: review.id, bookingId: b.bookingId, assessment: null, note: null, assessedBy: null, assessedAt: null, noticeQueuedAt: null })));
+  await recordAudit(tx, actor, 'impact_review.opened', { type: 'asset', id: asset.id }, { reviewId: review.id, since, foundOn: found.foundOn, bookings: bookings.length });
+  await enqueueMail(tx, await staffAddresses(tx, ['owner']), {
+    subject: `Impact review opened for ${asset.assetTag}: ${bookings.length} booking(s) to assess`,
+    heading: `${asset.assetTag} was found out of tolerance`,
+    paragraphs: [
+      `Found on ${found.foundOn} (${found.trigger === 'calibration' ? 'as-found calibration result' : 'failed field check'}). Its last passing evidence is ${since ?? 'not on record'}.`,
+      `${bookings.length} booking(s) used it in between. Assess each one and tell the customers concerned (ISO 9001:2015 §7.1.5.2).`,
+    ],
+  });
+  return review;
+}
+
+type ReviewRow = { bookingId: string; jobId: string | null; jobReference: string | null; customerName: string | null; contactEmail: string | null; rentalId: string | null; startsOn: string; endsOn: string; assessment: ImpactAssessment | null; note: string | null; noticeQueuedAt: Date | null };
+
+export class ImpactService {
+  constructor(private readonly db: DataSource) {}
+
+  private async view(tx: Scoped, review: ImpactReview) {
+    const bookings = await tx.sql<ReviewRow>(
+      `SELECT i.booking_id AS "bookingId", b.job_id AS "jobId", j.reference AS "jobReference", j.customer_name AS "customerName", j.contact_email AS "contactEmail",
+              b.rental_id AS "rentalId", to_char(b.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(b.ends_on, 'YYYY-MM-DD') AS "endsOn",
+              i.assessment, i.note, i.notice_queued_at AS "noticeQueuedAt"
+         FROM impact_review_items i JOIN bookings b ON b.id = i.booking_id LEFT JOIN jobs j ON j.id = b.job_id
+        WHERE i.organization_id = $1 AND i.review_id = $2 ORDER BY b.starts_on`,
+      [review.id],
+    );
+    return {
+      id: review.id,
+      assetId: review.assetId,
+      asset: review.asset ? { id: review.asset.id, assetTag: review.asset.assetTag, type: review.asset.type } : undefined,
+      trigger: review.trigger,
+      triggerId: review.triggerId,
+      since: review.since,
+      foundOn: review.foundOn,
+      state: review.state,
+      bookings: bookings.map((b) => ({ ...b, customerId: null })),
+      assessedCount: bookings.filter((b) => b.assessment).length,
+    };
+  }
+
+  /** GET /api/assets/:id/impact — the item's latest review. */
+  forAsset(actor: Actor, assetId: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      await tx.get(Asset, { id: assetId }, 'That asset');
+      const review = await tx.findOne(ImpactReview, { assetId }, { order: { createdAt: 'DESC' }, relations: { asset: true } });
+      if (!review) return { since: null, foundOn: null, state: 'none', bookings: [] };
+      return this.view(tx, review);
+    });
+  }
+
+  list(actor: Actor, state?: 'open' | 'closed') {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const reviews = await tx.find(ImpactReview, { where: state ? { state } : {}, order: { createdAt: 'DESC' }, relations: { asset: true }, take: 200 });
+      return { items: await Promise.all(reviews.map((r) => this.view(tx, r))) };
+    });
+  }
+
+  assess(actor: Actor, reviewId: string, bookingId: string, assessment: ImpactAssessment, note?: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
+      if (review.state === 'closed') throw ruleBroken('review_closed', 'This review is closed.');
+      const item = await tx.get(ImpactReviewItem, { reviewId, bookingId }, 'That booking in the review');
+      Object.assign(item, { assessment, note: note ?? null, assessedBy: actor.userId, assessedAt: new Date() });
+      await tx.save(ImpactReviewItem, item);
+      await recordAudit(tx, actor, 'impact_review.assessed', { type: 'asset', id: review.assetId }, { reviewId, bookingId, assessment, note });
+      return this.view(tx, review);
+    });
+  }
+
+  close(actor: Actor, reviewId: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
+      const [{ n }] = await tx.sql<{ n: number }>(`SELECT count(*)::int AS n FROM impact_review_items WHERE organization_id = $1 AND review_id = $2 AND assessment IS NULL`, [reviewId]);
+      if (n > 0) throw ruleBroken('review_incomplete', `${n} booking(s) still need an assessment before the review can close.`);
+      review.state = 'closed';
+      review.closedAt = new Date();
+      await tx.save(ImpactReview, review);
+      await recordAudit(tx, actor, 'impact_review.closed', { type: 'asset', id: review.assetId }, { reviewId });
+      return this.view(tx, review);
+    });
+  }
+
+  /** One notice per customer with an e-mail address; `send` queues them in the outbox. */
+  notices(actor: Actor, reviewId: string, send: boolean) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
+      const { bookings } = await this.view(tx, review);
+      const byCustomer = new Map<string, ReviewRow[]>();
+      for (const b of bookings) if (b.contactEmail) byCustomer.set(b.contactEmail, [...(byCustomer.get(b.contactEmail) ?? []), b]);
+      const drafts = [...byCustomer.entries()].map(([to, rows]) => ({
+        to,
+        customerName: rows[0].customerName,
+        subject: `About measurements taken with our ${review.asset!.assetTag} (${rows.map((r) => r.jobReference).join(', ')})`,
+        heading: `A note about your measurements, ${rows[0].customerName}`,
+        paragraphs: [
+          `On ${review.foundOn} we found that ${review.asset!.assetTag}, an instrument used on your job(s) ${rows.map((r) => `${r.jobReference} (${r.startsOn} to ${r.endsOn})`).join(', ')}, was out of tolerance.`,
+          `We are reviewing whether this affects the results we gave you and will tell you what we find. If a re-measurement is needed we will arrange it with you.`,
+        ],
+      }));
+      if (send) {
+        for (const d of drafts) await enqueueMail(tx, [d.to], d);
+        await tx.sql(`UPDATE impact_review_items SET notice_queued_at = now() WHERE organization_id = $1 AND review_id = $2 AND booking_id = ANY($3)`, [reviewId, bookings.filter((b) => b.contactEmail).map((b) => b.bookingId)]);
+        await recordAudit(tx, actor, 'impact_review.notices_sent', { type: 'asset', id: review.assetId }, { reviewId, recipients: drafts.map((d) => d.to) });
+      }
+      return { drafts: drafts.map(({ to, customerName, subject, paragraphs }) => ({ to, customerName, subject, text: paragraphs.join('\n\n') })), sent: send };
+    });
+  }
+}

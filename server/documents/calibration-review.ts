@@ -1,0 +1,40 @@
+import Papa from 'papaparse';
+import type { DueRow } from '../calibration/review.service';
+import { INK, MM, MUTED, renderPdf } from './pdf';
+
+const threatenedText = (r: DueRow) => r.threatened.map((t) => `${t.jobReference ?? 'booking'} ${t.startsOn}–${t.endsOn}`).join('; ');
+
+/** The overdue and due-soon list as CSV (RFC 4180, papaparse). */
+export const dueItemsCsv = (rows: DueRow[]) =>
+  Papa.unparse(
+    {
+      fields: ['assetTag', 'type', 'state', 'dueOn', 'provider', 'kit', 'status', 'threatenedBookings'],
+      data: rows.map((r) => [r.assetTag, r.type, r.state, r.dueOn ?? '', r.provider ?? '', r.kitName ?? '', r.status, threatenedText(r)]),
+    },
+    { newline: '\r\n' },
+  );
+
+/** A one-glance PDF of the same list for the owner's meeting or an auditor. */
+export const dueItemsPdf = (firm: string, today: string, rows: DueRow[]) =>
+  renderPdf({ size: 'A4', layout: 'landscape', margin: 14 * MM, info: { Title: `Recalibrations due — ${today}` } }, (doc) => {
+    doc.font('Helvetica').fontSize(9).fillColor(MUTED).text(firm);
+    doc.font('Helvetica-Bold').fontSize(15).fillColor(INK).text(`Recalibrations overdue and due soon — ${today}`);
+    doc.moveDown(0.8);
+    const cols = [0, 32, 62, 84, 106, 150, 185].map((c) => doc.page.margins.left + c * MM);
+    const header = ['Item', 'Type', 'State', 'Due', 'Provider', 'Kit', 'Bookings it threatens'];
+    let y = doc.y;
+    doc.font('Helvetica-Bold').fontSize(8.5);
+    header.forEach((h, i) => doc.text(h, cols[i], y));
+    y += 13;
+    doc.font('Helvetica').fontSize(8.5);
+    for (const r of rows) {
+      if (y > doc.page.height - doc.page.margins.bottom - 14) {
+        doc.addPage();
+        y = doc.page.margins.top;
+      }
+      const cells = [r.assetTag, r.type.replace('_', ' '), r.state === 'overdue' ? 'OVERDUE' : 'due soon', r.dueOn ?? 'none on record', r.provider ?? '', r.kitName ?? '', threatenedText(r) || '—'];
+      cells.forEach((c, i) => doc.font(i === 0 ? 'Courier-Bold' : i === 2 && r.state === 'overdue' ? 'Helvetica-Bold' : 'Helvetica').text(c, cols[i], y, { width: i === 6 ? 90 * MM : 30 * MM, lineBreak: false, ellipsis: true }));
+      y += 13;
+    }
+    if (!rows.length) doc.text('Nothing is overdue or due soon.', cols[0], y);
+  });

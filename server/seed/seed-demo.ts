@@ -6,6 +6,7 @@ import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 import { DEMO_PASSWORD, demoFirm, otherFirm } from './demo-people';
 import { seedDemoActivity } from './demo-activity';
+import { seedDemoCalibration } from './demo-calibration';
 import { seedDemoFleet } from './demo-fleet';
 
 /** Fill an empty database with the invented demo firms. Does nothing when any
@@ -21,6 +22,7 @@ export async function seedDemoIfEmpty(db: DataSource, bcryptCost = 12): Promise<
       if (firm === demoFirm) {
         await seedDemoFleet(tx, firm.timeZone, firm.name);
         await seedDemoActivity(tx, firm.timeZone);
+        await seedDemoCalibration(tx, firm.name, firm.timeZone);
       }
       const owner = firm.people.find((p) => p.role === 'owner')!;
       await enqueueMail(tx, [owner.email], {

@@ -45,7 +45,16 @@ export default function BoardRoute() {
   const jumpId = useId();
 
   const assets = useAssets({ status: liveStatuses, type: type ? [type] : undefined, sort: 'assetTag', limit: 500, offset: 0 });
-  const bookings = useBookings({ from, to, state: boardStates });
+  const windowBookings = useBookings({ from, to, state: boardStates });
+  // Kit still out after its last day is drawn on to today, marked late, even when that day is before the window.
+  const outNow = useBookings({ state: ['out'] });
+  const bookingItems = useMemo(() => {
+    const items = windowBookings.data?.items;
+    if (!items) return undefined;
+    const seen = new Set(items.map((b) => b.id));
+    const late = (outNow.data?.items ?? []).filter((b) => !seen.has(b.id) && b.endsOn < today && today >= from);
+    return late.length ? [...items, ...late] : items;
+  }, [windowBookings.data, outNow.data, today, from]);
 
   const setParam = useCallback(
     (changes: Record<string, string | null>) =>
@@ -70,10 +79,10 @@ export default function BoardRoute() {
 
   // With a type chosen, only bookings that carry an item of that type are listed.
   const shownBookings = useMemo(() => {
-    const items = bookings.data?.items;
+    const items = bookingItems;
     if (!items || !type) return items;
     return items.filter((b) => b.items.some((i) => i.type === type));
-  }, [bookings.data, type]);
+  }, [bookingItems, type]);
 
   return (
     <>
@@ -91,7 +100,7 @@ export default function BoardRoute() {
       />
 
       <div className="mb-3 flex flex-wrap items-end gap-3">
-        <div className="flex items-end gap-1" role="group" aria-label="Weeks shown">
+        <div className="flex items-end gap-1" role="group" aria-label="Change week">
           <Button onClick={() => setParam({ from: addDays(from, -7) })}>Previous week</Button>
           <Button onClick={() => setParam({ from: null })} disabled={from === mondayOf(today)}>
             This week
@@ -112,7 +121,7 @@ export default function BoardRoute() {
         </div>
         <div className="flex flex-col gap-1">
           <label htmlFor={weeksId} className="text-sm font-semibold text-ink-800">
-            Weeks
+            Weeks shown
           </label>
           <select id={weeksId} value={weeks} onChange={(e) => setParam({ weeks: e.target.value === '4' ? null : e.target.value })} className="min-h-10 rounded-md border border-paper-line bg-card px-2">
             {weekChoices.map((w) => (
@@ -142,11 +151,11 @@ export default function BoardRoute() {
 
       <p className="mb-2 text-sm font-semibold text-ink-800" aria-live="polite">
         {dayRange(from, to)}
-        {bookings.data ? ` · ${shownBookings?.length ?? 0} ${shownBookings?.length === 1 ? 'booking' : 'bookings'}` : ''}
+        {windowBookings.data ? ` · ${shownBookings?.length ?? 0} ${shownBookings?.length === 1 ? 'booking' : 'bookings'}` : ''}
       </p>
 
       {assets.isError ? <Notice tone="error" className="mb-3">{assets.error.message}</Notice> : null}
-      {bookings.isError ? <Notice tone="error" className="mb-3">{bookings.error.message}</Notice> : null}
+      {windowBookings.isError ? <Notice tone="error" className="mb-3">{windowBookings.error.message}</Notice> : null}
       {assets.data && assets.data.total > assets.data.items.length ? (
         <Notice tone="info" className="mb-3">
           The board shows the first {assets.data.items.length} of {assets.data.total} items. Choose a type to see the rest.
@@ -154,15 +163,15 @@ export default function BoardRoute() {
       ) : null}
 
       {listView ? (
-        <BookingsList bookings={shownBookings} loading={bookings.isPending} onOpen={(b) => navigate(`/bookings/${b.id}`)} />
-      ) : assets.isPending || bookings.isPending ? (
+        <BookingsList bookings={shownBookings} loading={windowBookings.isPending} onOpen={(b) => navigate(`/bookings/${b.id}`)} />
+      ) : assets.isPending || windowBookings.isPending ? (
         <LoadingPanel label="Drawing the board…" />
       ) : (
         <>
           <BoardLegend />
           <BookingBoard
             assets={assets.data?.items ?? []}
-            bookings={bookings.data?.items ?? []}
+            bookings={shownBookings ?? []}
             from={from}
             days={days}
             today={today}

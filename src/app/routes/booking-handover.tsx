@@ -24,7 +24,7 @@ export default function BookingHandoverRoute() {
   const [returned, setReturned] = useState<ReturnResult | null>(null);
 
   const back = (
-    <Link to={`/bookings/${id}`} className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
+    <Link to={`/bookings/${id}`} className="mb-2 inline-flex min-h-9 print:hidden items-center gap-1 text-sm font-semibold text-brass-deep">
       <ArrowLeftIcon size={14} />
       The booking
     </Link>

@@ -259,11 +259,11 @@ function BookFormBody({
           <Field name="note" label="Note" hint="Anything the person at the counter should know." autoComplete="off" />
         </fieldset>
 
-        {problems.length ? (
+        {problems.length && !trouble ? (
           <Notice tone="caution" title="This booking would be refused as it stands">
             <ul className="mt-1 list-disc pl-5">
               {problems.map((p) => (
-                <li key={`${p.assetId}-${p.bookingId ?? p.kind}`}>
+                <li key={p.key}>
                   {p.sentence}{' '}
                   {p.bookingId ? (
                     <Link to={`/bookings/${p.bookingId}`} className="font-semibold text-brass-deep underline">

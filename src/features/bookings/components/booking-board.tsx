@@ -33,16 +33,23 @@ interface BarModel {
   first: number;
   last: number;
   dueTags: { tag: string; dueOn: string }[];
+  late: boolean;
+  /** The bar goes on past the window's last day. */
+  endsAfter: boolean;
 }
 
 /** Places bars in lanes so bars that share days never cover each other. */
-function layoutBars(bookings: Booking[], from: string, days: number, rowAssets: AssetView[]): { bars: BarModel[]; lanes: number } {
+function layoutBars(bookings: Booking[], from: string, days: number, today: string, rowAssets: AssetView[]): { bars: BarModel[]; lanes: number } {
   const base = parseISO(from);
   const sorted = [...bookings].sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : 0));
   const laneEnds: number[] = [];
-  const bars = sorted.map((booking) => {
+  const bars: BarModel[] = [];
+  for (const booking of sorted) {
+    // Still out after its last day: the bar runs on to today, marked late.
+    const late = booking.state === 'out' && booking.endsOn < today;
     const first = Math.max(0, differenceInCalendarDays(parseISO(booking.startsOn), base));
-    const last = Math.min(days - 1, differenceInCalendarDays(parseISO(booking.endsOn), base));
+    const last = Math.min(days - 1, differenceInCalendarDays(parseISO(late ? today : booking.endsOn), base));
+    if (last < 0 || first > days - 1) continue;
     let lane = laneEnds.findIndex((end) => end < first);
     if (lane < 0) lane = laneEnds.push(last) - 1;
     else laneEnds[lane] = last;
@@ -52,8 +59,9 @@ function layoutBars(bookings: Booking[], from: string, days: number, rowAssets: 
           .filter((a) => booking.assetIds.includes(a.id) && fallsDue(a, booking))
           .map((a) => ({ tag: a.assetTag, dueOn: a.calibration.dueOn ?? '' }))
       : [];
-    return { booking, lane, first, last, dueTags };
-  });
+    const endsAfter = (late ? today : booking.endsOn) > addDays(from, days - 1);
+    bars.push({ booking, lane, first, last, dueTags, late, endsAfter });
+  }
   return { bars, lanes: Math.max(1, laneEnds.length) };
 }
 
@@ -62,7 +70,8 @@ function barName(bar: BarModel): string {
   const due = bar.dueTags.length
     ? `, falls due during this booking (${bar.dueTags.map((d) => `${d.tag} due ${shortDay(d.dueOn)}`).join(', ')})`
     : '';
-  return `${bookingTitle(booking)}, ${dayRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${due}`;
+  const late = bar.late ? `, late: was due back ${shortDay(booking.endsOn)}` : '';
+  return `${bookingTitle(booking)}, ${dayRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${late}${due}`;
 }
 
 interface Pick {
@@ -96,6 +105,8 @@ export interface BookingBoardProps {
 export function BookingBoard({ assets, bookings, from, days, today, canBook, onPick, bookHref }: BookingBoardProps) {
   const [collapsed, setCollapsed] = useState<ReadonlySet<string>>(() => new Set());
   const [pick, setPick] = useState<Pick | null>(null);
+  // The focused bar's words (state included) under the board, for keyboard users who cannot hover.
+  const [focused, setFocused] = useState<string | null>(null);
   const dayPx = days > 35 ? 30 : 36;
 
   const rows = useMemo<Row[]>(() => {
@@ -183,7 +194,12 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
   const spanPx = days * dayPx;
 
   return (
-    <div className="nk-board relative max-h-[72dvh] overflow-auto rounded-lg border border-paper-line bg-card" style={style}>
+    <div
+      className="nk-board relative max-h-[72dvh] overflow-auto rounded-lg border border-paper-line bg-card"
+      style={style}
+      onFocus={(e) => setFocused(e.target instanceof HTMLElement && e.target.hasAttribute('data-bar') ? e.target.getAttribute('aria-label') : null)}
+      onBlur={() => setFocused(null)}
+    >
       <div role="table" aria-label={`Booking board, ${dayRange(from, last)}`} aria-rowcount={rows.length + 1} style={{ width: HEAD_PX + spanPx }} className="relative">
         <div role="rowgroup" className="sticky top-0 z-20">
           <div role="row" aria-rowindex={1} className="flex border-b border-ink-300 bg-paper-deep">
@@ -247,6 +263,11 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
           ))}
         </div>
       </div>
+      {focused && !pick ? (
+        <p aria-hidden="true" className="sticky bottom-0 left-0 z-20 border-t border-ink-300 bg-paper-deep px-3 py-1.5 text-sm font-semibold text-ink-900">
+          {focused}
+        </p>
+      ) : null}
       {pick && !pick.dragging ? (
         <p role="status" className="sticky bottom-0 left-0 z-20 border-t border-brass-deep bg-brass-wash px-3 py-1.5 text-sm font-semibold text-ink-900">
           From {shortDay(addDays(from, pick.anchor))}: click the last day of the booking (the same day again for one day). Escape lets go.
@@ -292,7 +313,7 @@ interface BoardRowProps {
 
 const BoardRow = memo(function BoardRow({ row, rowIndex, bookings, from, days, dayPx, today, canBook, collapsed, onToggle, pick, setPick, finishPick, bookHref }: BoardRowProps) {
   const rowAssets = useMemo(() => (row.kind === 'kit' ? row.members : [row.asset]), [row]);
-  const { bars, lanes } = useMemo(() => layoutBars(bookings, from, days, rowAssets), [bookings, from, days, rowAssets]);
+  const { bars, lanes } = useMemo(() => layoutBars(bookings, from, days, today, rowAssets), [bookings, from, days, today, rowAssets]);
   const height = lanes * LANE_PX + ROW_PAD_PX * 2;
   const last = addDays(from, days - 1);
 
@@ -436,7 +457,7 @@ function Bar({ bar, from, days, dayPx }: { bar: BarModel; from: string; days: nu
   const { booking } = bar;
   const name = barName(bar);
   const startsBefore = booking.startsOn < from;
-  const endsAfter = booking.endsOn > addDays(from, days - 1);
+  const endsAfter = bar.endsAfter;
   const state = booking.state === 'cancelled' ? 'returned' : booking.state;
   return (
     <Link
@@ -450,6 +471,7 @@ function Bar({ bar, from, days, dayPx }: { bar: BarModel; from: string; days: nu
       {startsBefore ? <span aria-hidden="true">◂</span> : null}
       {bar.dueTags.length ? <AlertIcon size={12} className="shrink-0" /> : null}
       <span className="truncate">{bookingTitle(booking)}</span>
+      {bar.late ? <span className="ml-1 shrink-0 rounded-sm bg-bad px-1 text-[10px] tracking-wide text-card uppercase">Late</span> : null}
       {endsAfter ? (
         <span aria-hidden="true" className="ml-auto">
           ▸

@@ -4,8 +4,9 @@ import type { Booking } from '../api/types';
 import { bookingStateWords, bookingTitle, dayRange, shortDay } from './booking-words';
 
 export interface BookingProblem {
-  assetId: string;
-  assetTag: string;
+  key: string;
+  /** The items this sentence is about. */
+  assetTags: string[];
   kind: 'blocked' | 'conflict';
   sentence: string;
   /** The other booking, for a conflict. */
@@ -16,28 +17,36 @@ export interface BookingProblem {
  * Why the server would refuse these items for these dates, in plain words, from
  * what the browser already has: each item's status and due date (the shared
  * rules in shared/bookings/rules.ts) and the other bookings in the window.
- * Tip validations are not known here; the server still checks them.
+ * Items held by the same other booking share one sentence. Tip validations are
+ * not known here; the server still checks them.
  */
 export function bookingProblems(items: AssetView[], startsOn: string, endsOn: string, others: Booking[], exceptBookingId?: string): BookingProblem[] {
   const problems: BookingProblem[] = [];
+  const clashes = new Map<string, { other: Booking; tags: string[] }>();
   const window = { startsOn, endsOn };
   for (const item of items) {
     const reason = blockReason(item, endsOn);
     if (reason) {
-      problems.push({ assetId: item.id, assetTag: item.assetTag, kind: 'blocked', sentence: blockedSentence(item, reason, startsOn, endsOn) });
+      problems.push({ key: `block-${item.id}`, assetTags: [item.assetTag], kind: 'blocked', sentence: blockedSentence(item, reason, startsOn, endsOn) });
       continue;
     }
     for (const other of others) {
       if (other.id === exceptBookingId || (other.state !== 'reserved' && other.state !== 'out')) continue;
       if (!other.assetIds.includes(item.id) || !rangesOverlap(window, other)) continue;
-      problems.push({
-        assetId: item.id,
-        assetTag: item.assetTag,
-        kind: 'conflict',
-        bookingId: other.id,
-        sentence: `${item.assetTag} is already booked ${dayRange(other.startsOn, other.endsOn)} for ${bookingTitle(other)} (${bookingStateWords[other.state].toLowerCase()}).`,
-      });
+      const clash = clashes.get(other.id) ?? { other, tags: [] };
+      clash.tags.push(item.assetTag);
+      clashes.set(other.id, clash);
     }
+  }
+  for (const { other, tags } of clashes.values()) {
+    const who = tags.length === 1 ? `${tags[0]} is` : `${tags.slice(0, -1).join(', ')} and ${tags[tags.length - 1]} are`;
+    problems.push({
+      key: `clash-${other.id}`,
+      assetTags: tags,
+      kind: 'conflict',
+      bookingId: other.id,
+      sentence: `${who} already booked ${dayRange(other.startsOn, other.endsOn)} for ${bookingTitle(other)} (${bookingStateWords[other.state].toLowerCase()}).`,
+    });
   }
   return problems;
 }
@@ -46,7 +55,7 @@ function blockedSentence(item: AssetView, reason: ReturnType<typeof blockReason>
   if (reason === 'calibration_expires') {
     const dueOn = item.calibration.dueOn;
     if (!dueOn) return `${item.assetTag} has no calibration on record, so it cannot go out.`;
-    if (dueOn < startsOn) return `${item.assetTag} fell due for calibration on ${shortDay(dueOn, true)}, before this booking starts: it is overdue.`;
+    if (dueOn < startsOn) return `${item.assetTag} is due for calibration on ${shortDay(dueOn, true)}, before this booking starts.`;
     return `${item.assetTag} falls due on ${shortDay(dueOn)}, during this booking (ends ${shortDay(endsOn)}).`;
   }
   return `${item.assetTag} cannot go: ${blockReasonText[reason]}.`;

@@ -1,13 +1,16 @@
 import { differenceInCalendarDays, parseISO } from 'date-fns';
-import type { ReactNode } from 'react';
+import { useContext, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { useCounterDay } from '../api/get-counter-day';
 import { useMyKit } from '../api/get-my-kit';
 import type { Booking } from '../api/types';
-import { blockReasonText } from '../../../lib/bookings';
+import { blockReasonText, todayIn } from '../../../lib/bookings';
+import { TimeZoneContext } from '../../../lib/format';
 import { BookingStateChip, bookingContents, bookingTitle, dayRange } from './booking-words';
+
+const lateWords = (days: number) => `${days} ${days === 1 ? 'day' : 'days'} late`;
 
 function BookingLine({ booking, extra }: { booking: Booking; extra?: ReactNode }) {
   return (
@@ -69,7 +72,7 @@ export function TodayAtCounter() {
               booking={b}
               extra={
                 <span className="nk-hatch rounded border border-bad/50 px-1.5 font-semibold text-bad">
-                  {daysLate} {daysLate === 1 ? 'day' : 'days'} late
+                  {lateWords(daysLate)}
                 </span>
               }
             />
@@ -97,13 +100,27 @@ export function TodayAtCounter() {
 /** Technician's "Kit I carry now" and "Next". */
 export function MyKitPanels() {
   const mine = useMyKit();
+  const today = todayIn(useContext(TimeZoneContext) ?? 'UTC');
   if (mine.isPending) return <LoadingPanel label="Looking for your kit…" />;
   if (mine.isError) return <Notice tone="error">{mine.error.message}</Notice>;
   return (
     <>
       <Section id="kit-now" title="Kit I carry now" count={mine.data.now.length} empty="No kit is checked out to you.">
         {mine.data.now.map((b) => (
-          <BookingLine key={b.id} booking={b} extra={<span className="font-mono text-ink-700">{b.items.map((i) => i.assetTag).join(', ')}</span>} />
+          <BookingLine
+            key={b.id}
+            booking={b}
+            extra={
+              <>
+                {b.endsOn < today ? (
+                  <span className="nk-hatch mr-2 rounded border border-bad/50 px-1.5 font-semibold text-bad">
+                    {lateWords(differenceInCalendarDays(parseISO(today), parseISO(b.endsOn)))}
+                  </span>
+                ) : null}
+                <span className="font-mono text-ink-700">{b.items.map((i) => i.assetTag).join(', ')}</span>
+              </>
+            }
+          />
         ))}
       </Section>
       <Section id="kit-next" title="Next" count={mine.data.next.length} empty="Nothing is booked for you next.">

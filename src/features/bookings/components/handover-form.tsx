@@ -137,6 +137,8 @@ export function HandoverForm({
               ) : null}
             </section>
 
+            {mode === 'checkout' ? <NotReady booking={booking} /> : null}
+
             <CounterpartField label={w.who} suggestions={suggestions} />
 
             {mode === 'checkout' ? <Cautions types={types} /> : null}
@@ -156,6 +158,23 @@ export function HandoverForm({
         </>
       )}
     </Formik>
+  );
+}
+
+/** Items that cannot go out as things stand (the server refuses the hand-over too). */
+function NotReady({ booking }: { booking: Booking }) {
+  const stillOut = booking.items.filter((i) => i.status === 'out').map((i) => i.assetTag);
+  const blocked = booking.items.filter((i) => i.status === 'held' || i.status === 'at_lab' || i.status === 'retired');
+  if (!stillOut.length && !blocked.length) return null;
+  return (
+    <Notice tone="caution" title="Not everything can go yet">
+      {stillOut.length ? <p>Still out on an earlier booking: {stillOut.join(', ')}. Take them back in first.</p> : null}
+      {blocked.map((i) => (
+        <p key={i.id}>
+          {i.assetTag} is {i.status === 'held' ? 'on hold' : i.status === 'at_lab' ? 'at the calibration lab' : 'retired'}: it cannot go. Change the booking to swap it.
+        </p>
+      ))}
+    </Notice>
   );
 }
 
@@ -211,7 +230,7 @@ function CounterpartField({ label, suggestions }: { label: string; suggestions: 
         }}
       />
       {suggestions.length ? (
-        <div className="flex flex-wrap gap-2" role="group" aria-label={`Suggestions for ${label}`}>
+        <div className="flex flex-wrap gap-2" role="group" aria-label="Suggested people">
           {suggestions.map((s) => (
             <Button
               key={s.label}

@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { AsFound } from '../../shared/calibration/interval-review';
 import { OrgOwned } from '../db/org-owned';
-import { Asset } from '../fleet/asset.entity';
+import { AssetBound } from '../fleet/asset-bound';
 
 /** A certificate PDF, kept in PostgreSQL so every app instance can serve it. */
 @Entity({ name: 'certificate_files' })
@@ -25,16 +25,9 @@ export class CertificateFile extends OrgOwned {
 /** One calibration of one item (DESIGN.md §3): the lab's certificate and what it found. */
 @Entity({ name: 'calibration_events' })
 @Index(['organizationId', 'assetId', 'performedOn'])
-export class CalibrationEvent extends OrgOwned {
+export class CalibrationEvent extends AssetBound {
   @PrimaryGeneratedColumn('uuid')
   id: string;
-
-  @Column({ name: 'asset_id', type: 'uuid' })
-  assetId: string;
-
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
 
   @Column({ name: 'performed_on', type: 'date' })
   performedOn: string;

@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { OrgOwned } from '../db/org-owned';
-import { Asset } from '../fleet/asset.entity';
+import { AssetBound } from '../fleet/asset-bound';
 
 export type ImpactAssessment = 'no_effect' | 'customer_notified' | 'remeasure_offered';
 
@@ -12,16 +12,9 @@ export type ImpactAssessment = 'no_effect' | 'customer_notified' | 'remeasure_of
 @Entity({ name: 'impact_reviews' })
 @Index(['organizationId', 'state'])
 @Index(['organizationId', 'assetId'])
-export class ImpactReview extends OrgOwned {
+export class ImpactReview extends AssetBound {
   @PrimaryGeneratedColumn('uuid')
   id: string;
-
-  @Column({ name: 'asset_id', type: 'uuid' })
-  assetId: string;
-
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
 
   @Column({ type: 'text' })
   trigger: 'calibration' | 'check';

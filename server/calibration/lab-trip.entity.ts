@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { OrgOwned } from '../db/org-owned';
-import { Asset } from '../fleet/asset.entity';
+import { AssetBound } from '../fleet/asset-bound';
 
 export type LabTripState = 'planned' | 'at_lab' | 'back';
 
@@ -36,7 +36,7 @@ export class LabTrip extends OrgOwned {
 
 @Entity({ name: 'lab_trip_items' })
 @Index(['organizationId', 'assetId'])
-export class LabTripItem extends OrgOwned {
+export class LabTripItem extends AssetBound {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
@@ -47,13 +47,6 @@ export class LabTripItem extends OrgOwned {
   @ManyToOne(() => LabTrip, { onDelete: 'CASCADE', nullable: false })
   @JoinColumn({ name: 'lab_trip_id' })
   labTrip?: LabTrip;
-
-  @Column({ name: 'asset_id', type: 'uuid' })
-  assetId: string;
-
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
 
   @Column({ name: 'received_on', type: 'date', nullable: true })
   receivedOn: string | null;

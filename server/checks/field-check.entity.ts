@@ -1,14 +1,14 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { Decision, DecisionRule } from '../../shared/checks/decision';
 import type { CheckKind } from '../../shared/schemas/checks';
-import { OrgOwned } from '../db/org-owned';
+import { AssetBound } from '../fleet/asset-bound';
 import { Asset } from '../fleet/asset.entity';
 
 /** A measurement taken in the field to confirm an item still performs (DESIGN.md §3):
  * its inputs, the computed results and the decision, as recorded. */
 @Entity({ name: 'field_checks' })
 @Index(['organizationId', 'assetId', 'kind', 'performedAt'])
-export class FieldCheck extends OrgOwned {
+export class FieldCheck extends AssetBound {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
@@ -16,13 +16,6 @@ export class FieldCheck extends OrgOwned {
   kind: CheckKind;
 
   /** The item the check is about: the tip, or the tracker. */
-  @Column({ name: 'asset_id', type: 'uuid' })
-  assetId: string;
-
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
-
   /** Tip validation: the probe the tip was on. Length check: the scale bar. */
   @Column({ name: 'related_asset_id', type: 'uuid', nullable: true })
   relatedAssetId: string | null;

@@ -1,6 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import { OrgOwned } from '../db/org-owned';
-import { Asset } from './asset.entity';
+import { AssetBound } from './asset-bound';
 
 export type CustodyKind = 'registered' | 'checked_out' | 'returned' | 'sent_to_lab' | 'back_from_lab' | 'held' | 'released' | 'retired' | 'moved' | 'calibrated';
 
@@ -8,16 +7,9 @@ export type CustodyKind = 'registered' | 'checked_out' | 'returned' | 'sent_to_l
  * The database refuses UPDATE and DELETE on this table. */
 @Entity({ name: 'custody_events' })
 @Index(['organizationId', 'assetId', 'at'])
-export class CustodyEvent extends OrgOwned {
+export class CustodyEvent extends AssetBound {
   @PrimaryGeneratedColumn('identity', { type: 'bigint' })
   id: string;
-
-  @Column({ name: 'asset_id', type: 'uuid' })
-  assetId: string;
-
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
 
   @Column({ type: 'text' })
   kind: CustodyKind;

@@ -1,6 +1,5 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import { OrgOwned } from '../db/org-owned';
-import { Asset } from '../fleet/asset.entity';
+import { AssetBound } from '../fleet/asset-bound';
 
 export type HoldReason = 'incident' | 'failed_check' | 'manual';
 
@@ -8,16 +7,9 @@ export type HoldReason = 'incident' | 'failed_check' | 'manual';
  * release on evidence recorded after it began. */
 @Entity({ name: 'holds' })
 @Index(['organizationId', 'assetId'], { unique: true, where: '"released_at" IS NULL' })
-export class Hold extends OrgOwned {
+export class Hold extends AssetBound {
   @PrimaryGeneratedColumn('uuid')
   id: string;
-
-  @Column({ name: 'asset_id', type: 'uuid' })
-  assetId: string;
-
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
 
   @Column({ type: 'text' })
   reason: HoldReason;

@@ -1,22 +1,15 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import type { IncidentKind, IncidentState } from '../../shared/schemas/incidents';
 import { OrgOwned } from '../db/org-owned';
-import { Asset } from '../fleet/asset.entity';
+import { AssetBound } from '../fleet/asset-bound';
 
 /** A damage or loss report (DESIGN.md §3). Reporting one holds the asset. */
 @Entity({ name: 'incidents' })
 @Index(['organizationId', 'state'])
 @Index(['organizationId', 'assetId'])
-export class Incident extends OrgOwned {
+export class Incident extends AssetBound {
   @PrimaryGeneratedColumn('uuid')
   id: string;
-
-  @Column({ name: 'asset_id', type: 'uuid' })
-  assetId: string;
-
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
 
   @Column({ type: 'text' })
   kind: IncidentKind;

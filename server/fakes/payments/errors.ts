@@ -9,6 +9,11 @@ export type ProviderErrorBody = {
   code?: string;
   param?: string;
   decline_code?: string;
+  /** Card errors and state errors on intents carry the objects involved. */
+  charge?: string;
+  payment_intent?: unknown;
+  payment_method?: unknown;
+  doc_url?: string;
 };
 
 export class ProviderError extends Error {
@@ -24,6 +29,11 @@ export class ProviderError extends Error {
 
 export const invalidRequest = (message: string, extra: Omit<ProviderErrorBody, 'type' | 'message'> = {}) =>
   new ProviderError(400, { type: 'invalid_request_error', message, ...extra });
+
+/** A request that is valid but not allowed in the object's current state
+ * (https://docs.stripe.com/error-codes, e.g. `payment_intent_unexpected_state`). */
+export const stateError = (code: string, message: string, extra: Omit<ProviderErrorBody, 'type' | 'message' | 'code'> = {}) =>
+  new ProviderError(400, { type: 'invalid_request_error', code, message, ...extra });
 
 /** `resource` is the provider's lower-case name, e.g. "customer", "payment_intent". */
 export const resourceMissing = (resource: string, id: string, param = 'id') =>

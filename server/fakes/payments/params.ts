@@ -35,6 +35,18 @@ export const formInt = z
   .regex(/^-?\d+$/, 'expected an integer')
   .transform(Number);
 
+/** Form booleans arrive as "true" / "false". */
+export const formBool = z.enum(['true', 'false']).transform((v) => v === 'true');
+
+/** A positive amount in the currency's smallest unit (https://docs.stripe.com/currencies#zero-decimal). */
+export const formAmount = formInt.pipe(z.number().int().min(1).max(99_999_999));
+
+/** Three-letter ISO currency code, lower-cased as the provider returns it. */
+export const currencyParam = z
+  .string()
+  .regex(/^[A-Za-z]{3}$/, 'expected a three-letter ISO currency code')
+  .transform((c) => c.toLowerCase());
+
 export const listParams = {
   limit: formInt.pipe(z.number().int().min(1).max(100)).optional(),
   starting_after: z.string().optional(),

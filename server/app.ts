@@ -35,6 +35,8 @@ import { dueScanJob } from './calibration/due-scan.job';
 import { ImpactService } from './calibration/impact.service';
 import { LabService } from './calibration/lab.service';
 import { ReviewService } from './calibration/review.service';
+import { RentalsService } from './rentals/rentals.service';
+import { rentalsRoutes } from './rentals/rentals.routes';
 import { ChecksService } from './checks/checks.service';
 import { checksRoutes } from './checks/checks.routes';
 import { HoldsService } from './holds/holds.service';
@@ -97,6 +99,7 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
     '/api',
     calibrationRoutes({ calibration: new CalibrationService(db), impact: new ImpactService(db), lab: new LabService(db), review: new ReviewService(db) }),
   );
+  app.use('/api', rentalsRoutes(new RentalsService(db)));
   app.use('/api', unknownApiRoute);
 
   const clientDir = path.resolve(config.CLIENT_DIR);

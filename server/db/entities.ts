@@ -8,6 +8,8 @@ import { Job } from '../bookings/job.entity';
 import { CalibrationEvent, CertificateFile } from '../calibration/calibration-event.entity';
 import { ImpactReview, ImpactReviewItem } from '../calibration/impact-review.entity';
 import { LabTrip, LabTripItem } from '../calibration/lab-trip.entity';
+import { Customer } from '../rentals/customer.entity';
+import { RateCard } from '../rentals/rate-card.entity';
 import { Hold } from '../holds/hold.entity';
 import { Incident, IncidentPhoto } from '../incidents/incident.entity';
 import { JobLease, JobRun } from '../jobs/job-run.entity';
@@ -17,4 +19,4 @@ import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity the data source knows; a new component adds its own here. */
-export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto, Job, Booking, BookingItem, CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem];
+export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto, Job, Booking, BookingItem, CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem, Customer, RateCard];

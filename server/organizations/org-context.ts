@@ -18,6 +18,8 @@ export type OrgContext = {
   tolerances: Record<CheckKind, Tolerance>;
   providers: { name: string; turnaroundDays: number }[];
   intervalPolicy: IntervalPolicy;
+  taxRateBasisPoints: number;
+  depositPolicy: { percent: number; minMinor: number; maxMinor: number };
 };
 
 /** Turnaround when a provider is not in the settings (common practice: about two weeks). */
@@ -38,5 +40,8 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
     tolerances: { ...defaultTolerances, ...org.settings.tolerances },
     providers: org.settings.providers ?? [],
     intervalPolicy: { ...defaultIntervalPolicy, ...org.settings.intervalPolicy },
+    taxRateBasisPoints: org.settings.taxRateBasisPoints ?? 0,
+    // Common practice starting point: a tenth of the replacement value, within sensible bounds.
+    depositPolicy: org.settings.depositPolicy ?? { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 },
   };
 }

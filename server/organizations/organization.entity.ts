@@ -13,6 +13,9 @@ export type OrganizationSettings = {
   /** Calibration providers and their usual turnaround in days. */
   providers: { name: string; turnaroundDays: number }[];
   intervalPolicy: IntervalPolicy;
+  /** Tax on rentals in basis points (1 900 = 19 %). */
+  taxRateBasisPoints: number;
+  depositPolicy: { percent: number; minMinor: number; maxMinor: number };
 };
 
 @Entity({ name: 'organizations' })

@@ -13,6 +13,8 @@ const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>) => ({
   dueSoonDays: ctx.dueSoonDays,
   decisionRule: ctx.decisionRule,
   tolerances: ctx.tolerances,
+  taxRateBasisPoints: ctx.taxRateBasisPoints,
+  depositPolicy: ctx.depositPolicy,
 });
 
 export const getSettings = (db: DataSource, actor: Actor) => inOrganization(db, actor.organizationId, async (tx) => view(await loadOrgContext(tx)));
@@ -24,6 +26,8 @@ export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<type
     if (patch.timeZone) org.timeZone = patch.timeZone;
     if (patch.dueSoonDays !== undefined) org.settings = { ...org.settings, dueSoonDays: patch.dueSoonDays };
     if (patch.decisionRule) org.settings = { ...org.settings, decisionRule: patch.decisionRule };
+    if (patch.taxRateBasisPoints !== undefined) org.settings = { ...org.settings, taxRateBasisPoints: patch.taxRateBasisPoints };
+    if (patch.depositPolicy) org.settings = { ...org.settings, depositPolicy: patch.depositPolicy };
     if (patch.tolerances) org.settings = { ...org.settings, tolerances: { ...org.settings.tolerances, ...patch.tolerances } };
     await tx.manager.save(Organization, org);
     await recordAudit(tx, actor, 'settings.updated', { type: 'organization', id: org.id }, { before, after: patch });

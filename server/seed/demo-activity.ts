@@ -17,11 +17,11 @@ import { User } from '../users/user.entity';
 
 /** Invented customers of the invented demo firm. */
 const customers = [
-  { reference: 'J-2611', customerName: 'Larkspur Aero Structures', siteAddress: 'Hangar 3, Larkspur Field, Wrenhallow' },
-  { reference: 'J-2614', customerName: 'Hollowmere Turbine Works', siteAddress: 'Bay 7, Hollowmere Road, Ostby' },
-  { reference: 'J-2620', customerName: 'Quarrington Rail Fabrication', siteAddress: 'Shop 2, Quarrington Sidings' },
-  { reference: 'J-2623', customerName: 'Fenwick Yard Shipbuilders', siteAddress: 'Dry dock 1, Fenwick Quay' },
-  { reference: 'J-2630', customerName: 'Larkspur Aero Structures', siteAddress: 'Jig hall, Larkspur Field, Wrenhallow' },
+  { reference: 'J-2611', customerName: 'Larkspur Aero Structures', contactName: 'Quality office', contactEmail: 'quality@larkspur-aero.test', siteAddress: 'Hangar 3, Larkspur Field, Wrenhallow' },
+  { reference: 'J-2614', customerName: 'Hollowmere Turbine Works', contactName: 'Inspection lead', contactEmail: 'inspection@hollowmere.test', siteAddress: 'Bay 7, Hollowmere Road, Ostby' },
+  { reference: 'J-2620', customerName: 'Quarrington Rail Fabrication', contactName: 'Works manager', contactEmail: 'works@quarrington-rail.test', siteAddress: 'Shop 2, Quarrington Sidings' },
+  { reference: 'J-2623', customerName: 'Fenwick Yard Shipbuilders', contactName: 'Hull survey', contactEmail: 'survey@fenwick-yard.test', siteAddress: 'Dry dock 1, Fenwick Quay' },
+  { reference: 'J-2630', customerName: 'Larkspur Aero Structures', contactName: 'Quality office', contactEmail: 'quality@larkspur-aero.test', siteAddress: 'Jig hall, Larkspur Field, Wrenhallow' },
 ];
 
 /** A reading `um` micrometres from the reference along a different axis each time. */
@@ -106,7 +106,7 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   for (const [i, c] of customers.entries()) {
     const start = [-60, -5, -12, 7, 14][i];
     const length = [6, 8, 9, 6, 6][i];
-    jobs.push(await tx.insert(Job, { ...c, contactName: null, contactEmail: null, startsOn: addDays(today, start), endsOn: addDays(today, start + length), leadTechnicianId: tech.id, notes: null }));
+    jobs.push(await tx.insert(Job, { ...c, startsOn: addDays(today, start), endsOn: addDays(today, start + length), leadTechnicianId: tech.id, notes: null }));
   }
   const [alder, birch, cedar, damson] = kits;
   type Plan = { kit: Kit; job: Job; state: 'returned' | 'out' | 'reserved' };

@@ -113,6 +113,10 @@ export const updateKitPayload = kitPayload.partial().strict();
 export const organizationSettingsPayload = z
   .object({
     decisionRule: z.enum(['simple', 'guarded'], { message: 'must be simple or guarded' }),
+    taxRateBasisPoints: z.number().int('must be whole basis points').min(0).max(10_000),
+    depositPolicy: z
+      .object({ percent: z.number().min(0).max(100), minMinor: z.number().int().min(0), maxMinor: z.number().int().min(0) })
+      .refine((p) => p.minMinor <= p.maxMinor, { message: 'the minimum must not exceed the maximum', path: ['maxMinor'] }),
     tolerances: z.partialRecord(z.enum(checkKinds), tolerancePayload),
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
     timeZone: z.string().refine((tz) => {

@@ -50,6 +50,13 @@ export const routes: RouteObject[] = [
             { path: 'checks/:id', lazy: screen(() => import('./routes/check')) },
             { path: 'incidents', lazy: screen(() => import('./routes/incidents')) },
             { path: 'incidents/:id', lazy: screen(() => import('./routes/incident')) },
+            { path: 'calibration/impact/:assetId', lazy: screen(() => import('./routes/impact-review')) },
+          ]),
+          gated('reports.read', [{ path: 'calibration', lazy: screen(() => import('./routes/calibration')) }]),
+          gated('calibration.record', [
+            { path: 'fleet/:id/calibrate', lazy: screen(() => import('./routes/calibration-record')) },
+            { path: 'calibration/plan/:assetId', lazy: screen(() => import('./routes/calibration-plan')) },
+            { path: 'calibration/trips', lazy: screen(() => import('./routes/lab-trips')) },
           ]),
           gated('checks.record', [{ path: 'checks/new', lazy: screen(() => import('./routes/check-new')) }]),
           gated('incidents.report', [{ path: 'incidents/new', lazy: screen(() => import('./routes/incident-new')) }]),

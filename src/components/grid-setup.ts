@@ -6,6 +6,7 @@ import {
   InfiniteRowModelModule,
   ModuleRegistry,
   QuickFilterModule,
+  RowAutoHeightModule,
   TextFilterModule,
   ValidationModule,
   themeQuartz,
@@ -24,6 +25,7 @@ ModuleRegistry.registerModules([
   CsvExportModule, // DataGrid's "Export CSV"
   ColumnApiModule, // column chooser (setColumnsVisible)
   CellStyleModule, // cellClass (mono tags and serials)
+  RowAutoHeightModule, // rows that grow with a list in a cell (autoHeight columns)
   ...(import.meta.env.DEV ? [ValidationModule] : []),
 ]);
 

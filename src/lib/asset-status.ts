@@ -15,3 +15,13 @@ export function invalidateAssetStatus(queryClient: QueryClient): Promise<unknown
     [fleetQueryRoot, kitsQueryRoot, holdsQueryRoot].map((queryKey) => queryClient.invalidateQueries({ queryKey })),
   );
 }
+
+/**
+ * The booking board's root: a lab trip reserves its window as a lab booking,
+ * and sending or receiving it moves that booking along.
+ */
+export const bookingsQueryRoot = ['bookings'] as const;
+
+export function invalidateBookingBoard(queryClient: QueryClient): Promise<unknown> {
+  return queryClient.invalidateQueries({ queryKey: bookingsQueryRoot });
+}

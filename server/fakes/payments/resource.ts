@@ -6,4 +6,7 @@ import type { PaymentStore } from './store';
 export type PaymentResource = {
   name: string;
   router(store: PaymentStore): Router;
+  /** Work the provider does on its own as time passes (e.g. lapsing uncaptured
+   * authorizations); run after a test moves the clock and periodically. */
+  sweep?(store: PaymentStore): void;
 };

@@ -9,6 +9,7 @@ import { Panel } from '../../components/panel';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { AssetBookings } from '../../features/bookings/components/asset-bookings';
+import { AssetImpactPanel, CalibrationHistory } from '../../features/calibration/components/asset-calibration-panels';
 import { AssetChecks } from '../../features/checks/components/asset-checks';
 import { checkKindsFor } from '../../features/checks/components/check-words';
 import { useAsset } from '../../features/fleet/api/get-asset';
@@ -54,6 +55,7 @@ export default function AssetRoute() {
   const canCheck = live && can(user.role, 'checks.record') && checkKindsFor(a.type).length > 0;
   const canReport = live && can(user.role, 'incidents.report');
   const canHold = can(user.role, 'holds.release');
+  const canCalibrate = live && can(user.role, 'calibration.record');
   const big = 'min-h-12 shrink-0 text-lg sm:min-h-10 sm:text-base';
 
   return (
@@ -87,6 +89,16 @@ export default function AssetRoute() {
             Report damage
           </Link>
         ) : null}
+        {canCalibrate ? (
+          <Link to={`/fleet/${a.id}/calibrate`} className={buttonClasses('secondary', 'md', 'min-h-11 shrink-0 sm:min-h-10')}>
+            Record a calibration
+          </Link>
+        ) : null}
+        {canCalibrate && a.calibration.required && a.status !== 'at_lab' ? (
+          <Link to={`/calibration/plan/${a.id}`} className={buttonClasses('secondary', 'md', 'min-h-11 shrink-0 sm:min-h-10')}>
+            Plan lab trip
+          </Link>
+        ) : null}
         {canHold && live && a.status !== 'held' ? <PutOnHoldButton assetId={a.id} assetTag={a.assetTag} className="min-h-11 shrink-0 sm:min-h-10" /> : null}
         {canWrite ? (
           <Button variant="primary" className="min-h-11 shrink-0 sm:min-h-10" onClick={() => navigate(`/fleet/${a.id}/edit`)}>
@@ -109,12 +121,14 @@ export default function AssetRoute() {
 
       <div className="grid gap-4 pb-20 sm:pb-0 lg:grid-cols-2">
         {a.status === 'held' ? <HoldPanel assetId={a.id} assetTag={a.assetTag} canRelease={canHold} className="lg:col-span-2" /> : null}
+        <AssetImpactPanel assetId={a.id} assetTag={a.assetTag} className="lg:col-span-2" />
         <AssetIdentity asset={a} />
         <div className="flex flex-col gap-4">
           <AssetCalibration asset={a} />
           <AssetSpecs asset={a} />
         </div>
         <AssetBookings assetId={a.id} today={todayIn(organization.timeZone)} canBook={live && can(user.role, 'bookings.write')} />
+        <CalibrationHistory assetId={a.id} />
         <AssetChecks asset={a} />
         <Panel title="Incidents">
           <IncidentList

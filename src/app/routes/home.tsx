@@ -5,6 +5,7 @@ import { ScanIcon } from '../../components/icons';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { MyKitPanels, TodayAtCounter } from '../../features/bookings/components/desk-panels';
+import { OpenImpactReviews } from '../../features/calibration/components/impact-review-links';
 import { RecalibrationsDue } from '../../features/fleet/components/due-list';
 import { HeldItems } from '../../features/fleet/components/held-list';
 import { IncidentList } from '../../features/incidents/components/incident-list';
@@ -31,14 +32,23 @@ const homes: Record<Role, RoleHome> = {
     title: "Owner's overview",
     description: 'What needs your decision across the fleet, the calendar and the books.',
     panels: [
-      { title: 'Recalibrations due', body: null, live: () => <RecalibrationsDue /> },
+      {
+        title: 'Recalibrations due',
+        body: null,
+        live: () => (
+          <RecalibrationsDue
+            footer={
+              <Link to="/calibration" className="text-sm font-semibold text-brass-deep underline">
+                Open the calibration review to plan lab trips
+              </Link>
+            }
+          />
+        ),
+      },
       { title: 'Today at the counter', body: null, live: () => <TodayAtCounter /> },
       { title: 'On hold', body: null, live: () => <HeldItems /> },
       { title: 'Open incidents', body: null, live: () => <OpenIncidents /> },
-      {
-        title: 'Out-of-tolerance reviews',
-        body: 'When a calibration comes back out of tolerance as found, or a field check fails, the jobs and rentals to re-assess will be listed here.',
-      },
+      { title: 'Open impact reviews', body: null, live: () => <OpenImpactReviews /> },
       {
         title: 'Use and revenue per kit',
         body: 'Days booked and rental revenue per kit will appear here once bookings and rentals are being recorded.',

@@ -2,8 +2,8 @@ import type { Capability } from '../../lib/roles';
 
 /**
  * The main navigation, in order. An entry without `capability` is for every
- * role. Add a screen here when it exists (Calibration and Rentals
- * come with their features). Field checks start from an asset: no entry.
+ * role. Add a screen here when it exists (Rentals comes with its
+ * feature). Field checks start from an asset: no entry.
  */
 export interface NavItem {
   to: string;
@@ -19,6 +19,7 @@ export const navItems: readonly NavItem[] = [
   { to: '/jobs', label: 'Jobs', capability: 'bookings.read' },
   { to: '/fleet', label: 'Fleet', capability: 'fleet.read' },
   { to: '/kits', label: 'Kits', capability: 'fleet.read' },
+  { to: '/calibration', label: 'Calibration', capability: 'reports.read' },
   { to: '/scan', label: 'Find by label', capability: 'fleet.read' },
   { to: '/incidents', label: 'Incidents', capability: 'fleet.read' },
   { to: '/users', label: 'Users', capability: 'users.manage' },

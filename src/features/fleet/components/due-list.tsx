@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { CalibrationChip } from '../../../components/asset-status';
 import { LoadingPanel } from '../../../components/loading-panel';
@@ -8,8 +9,8 @@ import { useAssets } from '../api/get-assets';
 
 const dueParams = { calibration: ['overdue', 'due_soon'], sort: 'dueOn', limit: 8, offset: 0 } as const;
 
-/** The first few overdue and due-soon recalibrations, soonest first, with the full count. */
-export function RecalibrationsDue() {
+/** The first few overdue and due-soon recalibrations, soonest first, with the full count; `footer` adds a way on (the owner's review). */
+export function RecalibrationsDue({ footer }: { footer?: ReactNode } = {}) {
   const due = useAssets({ ...dueParams, calibration: [...dueParams.calibration] });
   return (
     <section aria-labelledby="recal-due-heading" className="rounded-lg border border-paper-line bg-card p-4 md:col-span-2">
@@ -53,6 +54,7 @@ export function RecalibrationsDue() {
           ) : null}
         </>
       ) : null}
+      {footer ? <div className="mt-2">{footer}</div> : null}
     </section>
   );
 }

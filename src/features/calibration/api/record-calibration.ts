@@ -1,0 +1,37 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { uploadForm } from '../../../lib/api-client';
+import { invalidateAssetStatus, invalidateBookingBoard } from '../../../lib/asset-status';
+import { calibrationKeys } from './keys';
+import type { CalibrationEvent, RecordCalibrationInput } from './types';
+
+/** Multipart: the text fields, then the certificate PDF under "certificate"; progress 0…1 as it goes up. */
+export function recordCalibration(input: RecordCalibrationInput, onProgress?: (fraction: number) => void): Promise<CalibrationEvent> {
+  const form = new FormData();
+  form.set('performedOn', input.performedOn);
+  form.set('provider', input.provider);
+  form.set('certificateNumber', input.certificateNumber);
+  form.set('asFound', input.asFound);
+  form.set('asLeft', input.asLeft);
+  if (input.intervalMonths !== undefined) form.set('intervalMonths', String(input.intervalMonths));
+  if (input.note) form.set('note', input.note);
+  form.set('certificate', input.certificate, input.certificate.name);
+  return uploadForm<CalibrationEvent>(`/assets/${encodeURIComponent(input.assetId)}/calibrations`, form, { onProgress });
+}
+
+/**
+ * Recording moves the due date, brings an item back from the lab (closing its
+ * lab booking), may release a hold and may open an impact review: the asset's
+ * status, the board and every calibration read change.
+ */
+export function useRecordCalibration(onProgress?: (fraction: number) => void) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: RecordCalibrationInput) => recordCalibration(input, onProgress),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: calibrationKeys.all }),
+        invalidateAssetStatus(queryClient),
+        invalidateBookingBoard(queryClient),
+      ]),
+  });
+}

@@ -1,0 +1,51 @@
+import { StatusChip, type StatusTone } from '../../../components/status-chip';
+import { dueDate } from '../../../lib/calibration';
+import { formatCalendarDate } from '../../../lib/format';
+import type { AsFound, CalibrationEvent, ImpactAssessment, LabTripState } from '../api/types';
+
+/** As-found and as-left results in plain words, the order of the choices. */
+export const resultWords: Record<AsFound, string> = {
+  in_tolerance: 'In tolerance',
+  out_of_tolerance: 'Out of tolerance',
+  not_reported: 'Not reported by the lab',
+};
+export const resultChoices = Object.keys(resultWords) as AsFound[];
+const resultTones: Record<AsFound, StatusTone> = { in_tolerance: 'ok', out_of_tolerance: 'bad', not_reported: 'none' };
+
+/** "As found: In tolerance" — the stage is part of the words, so two chips side by side read apart. */
+export function ResultChip({ stage, result }: { stage: 'As found' | 'As left'; result: AsFound }) {
+  return <StatusChip tone={resultTones[result]} label={`${stage}: ${resultWords[result]}`} />;
+}
+
+export const assessmentWords: Record<ImpactAssessment, string> = {
+  no_effect: 'No effect',
+  customer_notified: 'Customer notified',
+  remeasure_offered: 'Re-measure offered',
+};
+export const assessmentChoices = Object.keys(assessmentWords) as ImpactAssessment[];
+
+export const tripStateWords: Record<LabTripState, string> = { planned: 'Planned', at_lab: 'At the lab', back: 'Back' };
+const tripTones: Record<LabTripState, StatusTone> = { planned: 'info', at_lab: 'paused', back: 'ok' };
+
+export function TripStateChip({ state }: { state: LabTripState }) {
+  return <StatusChip tone={tripTones[state]} label={tripStateWords[state]} />;
+}
+
+export function LateChip() {
+  return <StatusChip tone="bad" label="Late" title="Past the day it was expected back" />;
+}
+
+/** "12 Jan 2027 – 2 Feb 2027", both days included. */
+export function dateRange(startsOn: string, endsOn: string): string {
+  return startsOn === endsOn ? formatCalendarDate(startsOn) : `${formatCalendarDate(startsOn)} – ${formatCalendarDate(endsOn)}`;
+}
+
+export const months = (n: number) => `${n} ${n === 1 ? 'month' : 'months'}`;
+export const days = (n: number) => `${n} ${n === 1 ? 'day' : 'days'}`;
+
+/** The due date a calibration leaves the item with: an accepted interval suggestion moves it from the same calibration day. */
+export function effectiveDueOn(event: CalibrationEvent): string {
+  return event.intervalDecision === 'accepted' && event.suggestedIntervalMonths !== event.intervalMonths
+    ? dueDate(event.performedOn, event.suggestedIntervalMonths)
+    : event.dueOn;
+}

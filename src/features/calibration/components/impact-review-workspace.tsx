@@ -1,0 +1,192 @@
+import { useEffect, useId, useState } from 'react';
+import { Link } from 'react-router-dom';
+import { Button } from '../../../components/button';
+import { Notice } from '../../../components/notice';
+import { Panel } from '../../../components/panel';
+import { StatusChip } from '../../../components/status-chip';
+import { formatCalendarDate, formatDateTime } from '../../../lib/format';
+import { useAssessImpactBooking } from '../api/assess-impact-booking';
+import { useCloseImpactReview } from '../api/close-impact-review';
+import { useCreateImpactNotices } from '../api/create-impact-notices';
+import type { ImpactAssessment, ImpactBooking, ImpactNotice, ImpactReview } from '../api/types';
+import { assessmentChoices, assessmentWords, dateRange } from './calibration-words';
+
+/** "Every job that used TRK-001 between its last passing evidence on … and the finding on …" */
+export function impactScope(review: ImpactReview, tag: string): string {
+  const found = formatCalendarDate(review.foundOn);
+  const how = review.trigger === 'calibration' ? 'the lab found it out of tolerance as found' : 'a field check failed';
+  return review.since
+    ? `Every job that used ${tag} between its last passing evidence on ${formatCalendarDate(review.since)} and the finding on ${found} (${how}) is listed below.`
+    : `Every job that used ${tag} up to the finding on ${found} (${how}) is listed below: no earlier passing evidence is on record.`;
+}
+
+function BookingAssessment({ review, booking, canAssess }: { review: ImpactReview; booking: ImpactBooking; canAssess: boolean }) {
+  const assess = useAssessImpactBooking();
+  const selectId = useId();
+  const noteId = useId();
+  const [note, setNote] = useState(booking.note ?? '');
+  useEffect(() => setNote(booking.note ?? ''), [booking.note]);
+  const ref = booking.jobReference ?? dateRange(booking.startsOn, booking.endsOn);
+  const save = (assessment: ImpactAssessment, nextNote: string) =>
+    assess.mutate({ reviewId: review.id, bookingId: booking.bookingId, assessment, note: nextNote.trim() || undefined });
+  const editable = canAssess && review.state === 'open';
+
+  return (
+    <li className="grid gap-3 rounded-lg border border-paper-line bg-card p-3 md:grid-cols-[minmax(0,1fr)_minmax(0,16rem)_minmax(0,18rem)]">
+      <div className="min-w-0">
+        <p className="flex flex-wrap items-center gap-2">
+          <Link to={`/bookings/${booking.bookingId}`} className="font-mono font-semibold text-brass-deep underline">
+            {booking.jobReference ?? 'Booking'}
+          </Link>
+          {booking.assessment ? <StatusChip tone="ok" label="Assessed" /> : <StatusChip tone="warn" label="To assess" />}
+        </p>
+        <p>{booking.customerName ?? (booking.rentalId ? 'Rental customer' : 'In-house')}</p>
+        <p className="text-sm text-ink-700">{dateRange(booking.startsOn, booking.endsOn)}</p>
+        <p className="text-sm text-ink-700">
+          {booking.contactEmail ? `Contact: ${booking.contactEmail}` : 'No contact e-mail on the job: tell the customer another way.'}
+          {booking.noticeQueuedAt ? ` · Notice queued ${formatDateTime(booking.noticeQueuedAt)}` : ''}
+        </p>
+      </div>
+      <div className="flex flex-col gap-1">
+        <label htmlFor={selectId} className="text-sm font-semibold text-ink-800">
+          Assessment: {ref}
+        </label>
+        <select
+          id={selectId}
+          value={booking.assessment ?? ''}
+          disabled={!editable || assess.isPending}
+          onChange={(e) => e.target.value && save(e.target.value as ImpactAssessment, note)}
+          className="min-h-10 rounded-md border border-paper-line bg-card px-3 text-base"
+        >
+          <option value="" disabled>
+            Not assessed yet
+          </option>
+          {assessmentChoices.map((a) => (
+            <option key={a} value={a}>
+              {assessmentWords[a]}
+            </option>
+          ))}
+        </select>
+      </div>
+      <div className="flex flex-col gap-1">
+        <label htmlFor={noteId} className="text-sm font-semibold text-ink-800">
+          Note: {ref}
+        </label>
+        <textarea
+          id={noteId}
+          rows={2}
+          value={note}
+          maxLength={2000}
+          disabled={!editable}
+          onChange={(e) => setNote(e.target.value)}
+          onBlur={() => booking.assessment && note.trim() !== (booking.note ?? '') && save(booking.assessment, note)}
+          className="rounded-md border border-paper-line bg-card px-3 py-1 text-base"
+        />
+        {editable && !booking.assessment ? <p className="text-sm text-ink-500">Saved with the assessment.</p> : null}
+        {assess.isError ? <p className="text-sm text-bad">{assess.error.message}</p> : null}
+      </div>
+    </li>
+  );
+}
+
+function Drafts({ drafts }: { drafts: ImpactNotice[] }) {
+  return (
+    <ul className="flex flex-col gap-3">
+      {drafts.map((d) => (
+        <li key={d.to} className="rounded-md border border-paper-line p-3">
+          <p className="text-sm">
+            <span className="font-semibold">To:</span> {d.customerName ? `${d.customerName} <${d.to}>` : d.to}
+          </p>
+          <p className="text-sm">
+            <span className="font-semibold">Subject:</span> {d.subject}
+          </p>
+          <p className="mt-2 whitespace-pre-line text-sm">{d.text}</p>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+/** Work through an impact review: assess each booking, draft and send the customer notices, close. */
+export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: ImpactReview; tag: string; canAssess: boolean }) {
+  const notices = useCreateImpactNotices(review.assetId);
+  const close = useCloseImpactReview();
+  const total = review.bookings.length;
+  const done = review.assessedCount;
+  const open = review.state === 'open';
+  const result = notices.data;
+
+  return (
+    <div className="flex flex-col gap-4">
+      <Panel
+        title="Bookings to assess"
+        actions={<StatusChip tone={done === total ? 'ok' : 'warn'} label={`${done} of ${total} assessed`} />}
+      >
+        <div className="mb-3 h-2 w-full max-w-md overflow-hidden rounded-full border border-ink-300 bg-card" role="progressbar" aria-label="Assessed" aria-valuemin={0} aria-valuemax={total} aria-valuenow={done}>
+          <div className="h-full bg-ok" style={{ width: `${total ? (done / total) * 100 : 100}%` }} />
+        </div>
+        {total === 0 ? <p className="text-ink-700">No job or rental used it in that time: nothing to assess.</p> : null}
+        <ul className="flex flex-col gap-2">
+          {review.bookings.map((b) => (
+            <BookingAssessment key={b.bookingId} review={review} booking={b} canAssess={canAssess} />
+          ))}
+        </ul>
+      </Panel>
+
+      {canAssess ? (
+        <Panel title="Customer notices">
+          <p className="mb-3 text-sm text-ink-700">One notice per customer with a contact e-mail. Draft them to read first; sending queues them in the outbox.</p>
+          <div className="mb-3 flex flex-wrap gap-2">
+            <Button busy={notices.isPending && notices.variables?.send === false} disabled={notices.isPending} onClick={() => notices.mutate({ reviewId: review.id, send: false })}>
+              Draft notices
+            </Button>
+            <Button
+              variant="primary"
+              busy={notices.isPending && notices.variables?.send === true}
+              disabled={notices.isPending || !open}
+              onClick={() => notices.mutate({ reviewId: review.id, send: true })}
+            >
+              Send notices
+            </Button>
+          </div>
+          {notices.isError ? <Notice tone="error">{notices.error.message}</Notice> : null}
+          {result ? (
+            result.drafts.length === 0 ? (
+              <Notice tone="info" title="No notice to send">
+                None of these bookings has a customer contact e-mail. Tell the customers another way and note it on each booking.
+              </Notice>
+            ) : (
+              <div className="flex flex-col gap-2">
+                {result.sent ? (
+                  <Notice tone="success" title={`${result.drafts.length} ${result.drafts.length === 1 ? 'notice' : 'notices'} queued`}>
+                    They leave with the next outbox run. <Link to="/mailbox" className="font-semibold underline">See the mailbox</Link>
+                  </Notice>
+                ) : (
+                  <p className="font-semibold">
+                    {result.drafts.length} {result.drafts.length === 1 ? 'draft' : 'drafts'} — nothing has been sent yet.
+                  </p>
+                )}
+                <Drafts drafts={result.drafts} />
+              </div>
+            )
+          ) : null}
+        </Panel>
+      ) : null}
+
+      {canAssess && open ? (
+        <div className="flex flex-wrap items-center gap-3">
+          <Button variant="primary" disabled={done < total} busy={close.isPending} onClick={() => close.mutate(review.id)}>
+            Close review
+          </Button>
+          <span className="text-sm text-ink-700">{done < total ? `Assess the ${total - done} remaining ${total - done === 1 ? 'booking' : 'bookings'} first.` : 'Every booking is assessed.'}</span>
+          {close.isError ? <Notice tone="error" className="w-full">{close.error.message}</Notice> : null}
+        </div>
+      ) : null}
+      {!open ? (
+        <Notice tone="success" title="Review closed">
+          Every booking that used {tag} in that time has been assessed.
+        </Notice>
+      ) : null}
+    </div>
+  );
+}

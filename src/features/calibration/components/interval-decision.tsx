@@ -1,0 +1,54 @@
+import { Button } from '../../../components/button';
+import { Notice } from '../../../components/notice';
+import { useDecideInterval } from '../api/decide-interval';
+import type { CalibrationEvent } from '../api/types';
+import { months } from './calibration-words';
+
+const decisionWords = { accepted: 'Accepted', declined: 'Declined' } as const;
+
+/** The interval review's suggestion after a calibration, and the owner's answer (OIML D 10 / ILAC-G24 staircase method). */
+export function IntervalSuggestion({ event, canDecide, onDecided }: { event: CalibrationEvent; canDecide: boolean; onDecided?: (event: CalibrationEvent) => void }) {
+  const decide = useDecideInterval();
+  const change = event.suggestedIntervalMonths - event.intervalMonths;
+  const headline =
+    change === 0
+      ? `Keep the interval at ${months(event.intervalMonths)}`
+      : `${change > 0 ? 'Lengthen' : 'Shorten'} the interval from ${months(event.intervalMonths)} to ${months(event.suggestedIntervalMonths)}`;
+  return (
+    <div className="flex flex-col gap-2">
+      <p>
+        <span className="font-semibold">Suggested: {headline}.</span> <span className="text-ink-700">{event.suggestionReason}</span>
+      </p>
+      {event.intervalDecision ? (
+        <p className="text-sm">
+          <span className="font-semibold">{decisionWords[event.intervalDecision]}</span>
+          {event.intervalDecision === 'accepted' && change !== 0 ? ' — the due date now follows the new interval.' : '.'}
+        </p>
+      ) : canDecide ? (
+        <div className="flex flex-wrap items-center gap-2">
+          <Button
+            variant="primary"
+            size="sm"
+            busy={decide.isPending && decide.variables?.decision === 'accept'}
+            disabled={decide.isPending}
+            onClick={() => decide.mutate({ eventId: event.id, decision: 'accept' }, { onSuccess: onDecided })}
+          >
+            Accept
+          </Button>
+          <Button
+            size="sm"
+            busy={decide.isPending && decide.variables?.decision === 'decline'}
+            disabled={decide.isPending}
+            onClick={() => decide.mutate({ eventId: event.id, decision: 'decline' }, { onSuccess: onDecided })}
+          >
+            Decline
+          </Button>
+          <span className="text-sm text-ink-700">{change !== 0 ? 'Accepting moves the due date.' : ''}</span>
+        </div>
+      ) : (
+        <p className="text-sm text-ink-700">Waiting for the owner to accept or decline.</p>
+      )}
+      {decide.isError ? <Notice tone="error">{decide.error.message}</Notice> : null}
+    </div>
+  );
+}

@@ -1,0 +1,115 @@
+import { useId, useState } from 'react';
+import { Link } from 'react-router-dom';
+import { Button } from '../../../components/button';
+import { Notice } from '../../../components/notice';
+import { isApiError } from '../../../lib/api-client';
+import { formatCalendarDate } from '../../../lib/format';
+import { usePlanLabTrip } from '../api/plan-lab-trip';
+import type { LabTrip, LabWindows } from '../api/types';
+import { dateRange, days } from './calibration-words';
+
+const purposeWords: Record<string, string> = { job: 'Site job', rental: 'Rental', lab: 'Lab trip', internal: 'In-house use' };
+
+/** "Free 12 Jan – 2 Feb (22 days) — back by 25 Jan", or open-ended when no booking follows. */
+export function gapText(gap: LabWindows['gaps'][number]): string {
+  const free = gap.endsOn ? `Free ${dateRange(gap.startsOn, gap.endsOn)} (${days(gap.freeDays ?? 0)})` : `Free from ${formatCalendarDate(gap.startsOn)} on, nothing booked after`;
+  return `${free} — back by ${formatCalendarDate(gap.returnBy)}`;
+}
+
+function conflictText(error: unknown): string {
+  if (!isApiError(error)) return 'The trip could not be planned. Try again.';
+  if (error.code === 'conflict') return `${error.message} Pick a later window.`;
+  return error.message;
+}
+
+/**
+ * The window finder: which bookings sending the item today would break, and
+ * the free gaps long enough for the lab's turnaround, earliest first. "Plan
+ * this trip" reserves the gap on the board from its first day.
+ */
+export function LabWindowFinder({ assetId, assetTag, windows, onPlanned, canPlan }: { assetId: string; assetTag: string; windows: LabWindows; onPlanned: (trip: LabTrip) => void; canPlan: boolean }) {
+  const plan = usePlanLabTrip();
+  const [provider, setProvider] = useState(windows.provider ?? '');
+  const providerId = useId();
+  const [planning, setPlanning] = useState<string | null>(null);
+
+  return (
+    <div className="flex flex-col gap-4">
+      <section aria-labelledby="break-heading" className="rounded-lg border border-paper-line bg-card p-4">
+        <h2 id="break-heading" className="mb-2 text-lg font-bold">
+          Sending it today would break:
+        </h2>
+        {windows.threatenedIfSentNow.length === 0 ? (
+          <p className="text-ink-700">No booking — it can go today and be back before anything needs it.</p>
+        ) : (
+          <ul className="flex flex-col gap-1">
+            {windows.threatenedIfSentNow.map((b) => (
+              <li key={b.bookingId} className="flex flex-wrap items-baseline gap-x-2">
+                <Link to={`/bookings/${b.bookingId}`} className="font-semibold text-brass-deep underline">
+                  {b.jobReference ?? purposeWords[b.purpose] ?? 'Booking'}
+                </Link>
+                <span className="text-sm text-ink-700">
+                  {purposeWords[b.purpose] ?? b.purpose} · {dateRange(b.startsOn, b.endsOn)}
+                </span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+
+      <section aria-labelledby="gaps-heading" className="flex flex-col gap-3">
+        <h2 id="gaps-heading" className="text-lg font-bold">
+          Free windows, earliest first
+        </h2>
+        <p className="text-sm text-ink-700">
+          Gaps between {assetTag}&rsquo;s bookings of at least {days(windows.turnaroundDays)}, the lab&rsquo;s turnaround.
+        </p>
+        {canPlan ? (
+          <div className="flex max-w-sm flex-col gap-1">
+            <label htmlFor={providerId} className="text-sm font-semibold text-ink-800">
+              Lab
+            </label>
+            <input
+              id={providerId}
+              value={provider}
+              onChange={(e) => setProvider(e.target.value)}
+              maxLength={120}
+              className="min-h-10 rounded-md border border-paper-line bg-card px-3 text-base"
+            />
+            {!provider.trim() ? <p className="text-sm text-bad">Name the lab before planning a trip.</p> : null}
+          </div>
+        ) : null}
+        {plan.isError ? (
+          <Notice tone="error" title="Not planned">
+            {conflictText(plan.error)}
+          </Notice>
+        ) : null}
+        {windows.gaps.length === 0 ? <p className="text-ink-700">No gap is long enough in the bookings ahead.</p> : null}
+        <ul className="grid gap-3 md:grid-cols-2">
+          {windows.gaps.map((gap) => (
+            <li key={gap.startsOn} className="flex flex-col gap-2 rounded-lg border border-paper-line bg-card p-4">
+              <p className="font-semibold">{gapText(gap)}</p>
+              {windows.dueOn && gap.startsOn > windows.dueOn ? (
+                <p className="text-sm text-warn">Past its due date ({formatCalendarDate(windows.dueOn)}): it cannot go out on a job until it is back.</p>
+              ) : null}
+              {canPlan ? (
+                <Button
+                  variant="primary"
+                  className="self-start"
+                  disabled={!provider.trim() || plan.isPending}
+                  busy={plan.isPending && planning === gap.startsOn}
+                  onClick={() => {
+                    setPlanning(gap.startsOn);
+                    plan.mutate({ provider: provider.trim(), assetIds: [assetId], sentOn: gap.startsOn }, { onSuccess: onPlanned });
+                  }}
+                >
+                  Plan this trip
+                </Button>
+              ) : null}
+            </li>
+          ))}
+        </ul>
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { bearer, createTestApp, type TestApp } from '../support/test-app';
+
+let t: TestApp;
+let billing: string;
+let tech: string;
+let owner: string;
+let otherOwner: string;
+beforeAll(async () => {
+  t = await createTestApp();
+  [billing, tech, owner, otherOwner] = await Promise.all(['billing@demo.test', 'tech@demo.test', 'owner@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
+});
+afterAll(() => t.close());
+
+describe('customers, rate cards and quotes', () => {
+  it('lets billing add customers and rate cards; technicians may not', async () => {
+    const customer = await t.api.post('/api/customers').set(bearer(billing)).send({ company: 'Larkspur Aero Structures', billingEmail: 'AP@larkspur.test', billingContact: 'Accounts payable' });
+    expect(customer.status).toBe(201);
+    expect(customer.body.billingEmail).toBe('ap@larkspur.test');
+    expect((await t.api.post('/api/customers').set(bearer(billing)).send({ company: 'Larkspur Aero Structures', billingEmail: 'x@y.test' })).status).toBe(409);
+    expect((await t.api.post('/api/customers').set(bearer(tech)).send({ company: 'Nope Ltd', billingEmail: 'n@n.test' })).status).toBe(403);
+    expect((await t.api.get(`/api/customers/${customer.body.id}`).set(bearer(otherOwner))).status).toBe(404);
+    const card = await t.api.post('/api/rate-cards').set(bearer(billing)).send({ assetType: 'smr', dayMinor: 1500, weekMinor: 7500, monthMinor: 24000, lateFeePerDayMinor: 500 });
+    expect(card.status).toBe(201);
+    const bad = await t.api.post('/api/rate-cards').set(bearer(billing)).send({ dayMinor: 1, weekMinor: 1, monthMinor: 1, lateFeePerDayMinor: 0 });
+    expect(bad.body.error.details.fields.assetType).toMatch(/asset type or a kit/);
+  });
+
+  it('quotes the cheapest cover per line, with tax and a deposit within the policy', async () => {
+    await t.api.patch('/api/settings').set(bearer(owner)).send({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 } });
+    const smrs = (await t.api.get('/api/assets?type=smr&limit=2').set(bearer(billing))).body.items;
+    // 13 days of two SMRs: two weeks (15 000) beat a week and six days (16 500), per SMR.
+    const q = await t.api.get('/api/quotes').query({ assetIds: smrs.map((s: { id: string }) => s.id).join(','), startsOn: '2027-03-01', endsOn: '2027-03-13' }).set(bearer(billing));
+    expect(q.status).toBe(200);
+    expect(q.body).toMatchObject({ days: 13, subtotalMinor: 30000, taxMinor: 5700, totalMinor: 35700, currency: 'EUR' });
+    expect(q.body.lines).toEqual([expect.objectContaining({ description: 'SMR', quantity: 2, periods: { months: 0, weeks: 2, days: 0 }, unitMinor: 15000, amountMinor: 30000 })]);
+    // Replacement value 2 × 1 600.00 → 10 % = 320.00, below the 500.00 minimum.
+    expect(q.body.depositMinor).toBe(50_000);
+  });
+
+  it('prices a kit with its own rate card as one line, and names types without a rate card', async () => {
+    const kit = (await t.api.get('/api/kits').set(bearer(billing))).body.items[0];
+    const missing = await t.api.get('/api/quotes').query({ kitId: kit.id, startsOn: '2027-03-01', endsOn: '2027-03-07' }).set(bearer(billing));
+    expect(missing.status).toBe(422);
+    expect(missing.body.error.code).toBe('no_rate');
+    await t.api.post('/api/rate-cards').set(bearer(billing)).send({ kitId: kit.id, dayMinor: 90_000, weekMinor: 400_000, monthMinor: 1_200_000, lateFeePerDayMinor: 20_000 });
+    const q = await t.api.get('/api/quotes').query({ kitId: kit.id, startsOn: '2027-03-01', endsOn: '2027-03-07' }).set(bearer(billing));
+    expect(q.body.lines).toEqual([expect.objectContaining({ description: kit.name, quantity: 1, amountMinor: 400_000 })]);
+  });
+});

@@ -223,7 +223,6 @@ function confirmIntent(store: PaymentStore, intent: PaymentIntent, input: Confir
       charge: charge.id,
       payment_intent: failed,
       payment_method: pm,
-      doc_url: 'https://docs.stripe.com/error-codes/card-declined',
     });
   }
 

@@ -1,9 +1,10 @@
 // `npm run bench:fleet` / `npm run bench:bookings`: load measurements on a throwaway
 // cluster with the benchmark firm (20,000 assets; for bookings also 200,000
-// bookings). Each suite is a script in tests/bench/ run against a live server.
+// bookings; for calibration 100,000 assets and 1,000,000 bookings). Each suite is a script in tests/bench/ run against a live server.
 const suites = {
   fleet: { seed: [], run: 'tests/bench/fleet-load.ts' },
   bookings: { seed: ['server/seed/seed-bench-bookings.ts'], run: 'tests/bench/bookings-load.ts' },
+  calibration: { assets: 100_000, seed: ['server/seed/seed-bench-bookings.ts'], run: 'tests/bench/calibration-load.ts' },
 };
 const suite = suites[process.argv[2]];
 if (!suite) {
@@ -44,6 +45,7 @@ try {
   const port = await freePort();
   const env = { ...process.env, DATABASE_URL: url, JWT_SECRET: 'bench-secret-bench-secret-bench-secret', PORT: String(port), START_LOCAL_FAKES: 'false', RUN_SCHEDULER: 'false', NODE_ENV: 'production' };
   runTs('server/db/prepare.ts', env);
+  env.BENCH_ASSETS = String(suite.assets ?? 20_000);
   runTs('server/seed/seed-bench-fleet.ts', env);
   for (const seed of suite.seed) runTs(seed, env);
   runTs('tests/bench/analyze.ts', env);

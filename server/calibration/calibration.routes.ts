@@ -44,13 +44,13 @@ export function calibrationRoutes({ calibration, impact, lab, review }: Services
     review.due(actor, query.withinDays),
   );
   endpoint(router, at, { method: 'get', path: '/calibration/review', summary: "The owner's review: due items, threatened bookings, timeline, lab, impact reviews", access: 'reports.read' }, ({ actor }) => review.review(actor));
-  endpoint(router, at, { method: 'get', path: '/calibration/review.csv', summary: 'Overdue and due-soon items as CSV', access: 'reports.read' }, async ({ actor, res }) => {
-    const r = await review.review(actor);
-    sendDocument(res, dueItemsCsv([...r.overdue, ...r.dueSoon]), 'text/csv; charset=utf-8', `recalibrations-${r.today}.csv`);
+  endpoint(router, at, { method: 'get', path: '/calibration/review.csv', summary: 'All overdue and due-soon items as CSV', access: 'reports.read' }, async ({ actor, res }) => {
+    const r = await review.dueWithinWindow(actor);
+    sendDocument(res, dueItemsCsv(r.items), 'text/csv; charset=utf-8', `recalibrations-${r.today}.csv`);
   });
   endpoint(router, at, { method: 'get', path: '/calibration/review.pdf', summary: 'Overdue and due-soon items as a PDF report', access: 'reports.read' }, async ({ actor, res }) => {
-    const r = await review.review(actor);
-    sendDocument(res, await dueItemsPdf(r.firm, r.today, [...r.overdue, ...r.dueSoon]), 'application/pdf', `recalibrations-${r.today}.pdf`, true);
+    const r = await review.dueWithinWindow(actor);
+    sendDocument(res, await dueItemsPdf(r.firm, r.today, r.items), 'application/pdf', `recalibrations-${r.today}.pdf`, true);
   });
   endpoint(router, at, { method: 'get', path: '/assets/:id/lab-windows', summary: 'When the item can go to the lab without breaking a booking', access: 'fleet.read' }, ({ actor, params }) => lab.windows(actor, params.id));
   endpoint(router, at, { method: 'get', path: '/lab-trips', summary: 'Lab trips', access: 'fleet.read', query: z.object({ state: z.enum(['planned', 'at_lab', 'back']).optional() }) }, ({ actor, query }) => lab.list(actor, query.state));

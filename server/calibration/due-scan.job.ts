@@ -41,6 +41,8 @@ export const dueScanJob = (): JobDefinition => ({
         const today = todayIn(org.time_zone, now);
         const tags = new Set(rows.map((r) => r.asset_tag));
         const details = (await dueItems(tx, today, org.due_soon ?? 30)).filter((d) => tags.has(d.assetTag));
+        // A long list helps nobody in a mail: the first hundred, then a pointer to the review page.
+        const DIGEST_LINES = 100;
         const line = (d: (typeof details)[number]) =>
           `${d.assetTag} (${d.type.replace('_', ' ')}) — ${d.state === 'overdue' ? 'OVERDUE' : 'due'} ${d.dueOn ?? '(no calibration on record)'}${d.threatened.length ? `; threatens ${d.threatened.map((t) => `${t.jobReference ?? 'a booking'} ${t.startsOn}–${t.endsOn}`).join(', ')}` : ''}`;
         const overdue = details.filter((d) => d.state === 'overdue');
@@ -49,8 +51,10 @@ export const dueScanJob = (): JobDefinition => ({
           subject: `Calibration: ${overdue.length} newly overdue, ${soon.length} newly due soon (${today})`,
           heading: 'Calibration changes since the last scan',
           paragraphs: [
-            ...(overdue.length ? ['Overdue now:', ...overdue.map(line)] : []),
-            ...(soon.length ? [`Due within ${org.due_soon ?? 30} days (by ${addDays(today, org.due_soon ?? 30)}):`, ...soon.map(line)] : []),
+            ...(overdue.length ? ['Overdue now:', ...overdue.slice(0, DIGEST_LINES).map(line)] : []),
+            ...(overdue.length > DIGEST_LINES ? [`…and ${overdue.length - DIGEST_LINES} more overdue.`] : []),
+            ...(soon.length ? [`Due within ${org.due_soon ?? 30} days (by ${addDays(today, org.due_soon ?? 30)}):`, ...soon.slice(0, DIGEST_LINES).map(line)] : []),
+            ...(soon.length > DIGEST_LINES ? [`…and ${soon.length - DIGEST_LINES} more due soon.`] : []),
             'Plan lab trips from the review page; the window finder shows when each item can go without breaking a booking.',
           ],
         });

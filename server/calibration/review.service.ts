@@ -16,23 +16,35 @@ export type DueRow = {
   threatened: { bookingId: string; startsOn: string; endsOn: string; jobReference: string | null; customerName: string | null }[];
 };
 
-/** Items overdue or due within `withinDays`, each with the active bookings that end after its due date. One query. */
-export async function dueItems(tx: import('../db/scoped').Scoped, today: string, withinDays: number) {
+/**
+ * Items overdue or due within `withinDays`, most urgent first, each with the
+ * active bookings that end after its due date. Set-based: the due items once,
+ * their threatened bookings in one join, not a query per item.
+ */
+export async function dueItems(tx: import('../db/scoped').Scoped, today: string, withinDays: number, limit: number | null = null) {
   return tx.sql<DueRow>(
-    `SELECT a.id, a.asset_tag AS "assetTag", a.type, a.status, to_char(a.due_on, 'YYYY-MM-DD') AS "dueOn", a.calibration_provider AS provider,
-            a.kit_id AS "kitId", k.name AS "kitName",
-            CASE WHEN a.due_on IS NULL OR a.due_on < $2::date THEN 'overdue' ELSE 'due_soon' END AS state,
-            coalesce((SELECT json_agg(json_build_object('bookingId', b.id, 'startsOn', to_char(b.starts_on, 'YYYY-MM-DD'), 'endsOn', to_char(b.ends_on, 'YYYY-MM-DD'),
-                                                        'jobReference', j.reference, 'customerName', j.customer_name) ORDER BY b.starts_on)
-                        FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id LEFT JOIN jobs j ON j.id = b.job_id
-                       WHERE bi.asset_id = a.id AND bi.active AND b.purpose <> 'lab' AND (a.due_on IS NULL OR bi.ends_on > a.due_on)), '[]'::json) AS threatened
-       FROM assets a LEFT JOIN kits k ON k.id = a.kit_id
-      WHERE a.organization_id = $1 AND a.calibration_required AND a.status <> 'retired'
-        AND (a.due_on IS NULL OR a.due_on <= $3::date)
-      ORDER BY a.due_on NULLS FIRST, a.asset_tag`,
-    [today, addDays(today, withinDays)],
+    `WITH due AS MATERIALIZED (
+       SELECT a.id, a.asset_tag, a.type, a.status, a.due_on, a.calibration_provider, a.kit_id FROM assets a
+        WHERE a.organization_id = $1 AND a.calibration_required AND a.status <> 'retired' AND coalesce(a.due_on, '-infinity'::date) <= $3::date
+        ORDER BY a.due_on NULLS FIRST, a.asset_tag ${limit ? 'LIMIT $4' : ''}),
+     threats AS (
+       SELECT bi.asset_id, json_agg(json_build_object('bookingId', b.id, 'startsOn', to_char(b.starts_on, 'YYYY-MM-DD'), 'endsOn', to_char(b.ends_on, 'YYYY-MM-DD'),
+                                                     'jobReference', j.reference, 'customerName', j.customer_name) ORDER BY b.starts_on) AS list
+         FROM due d JOIN booking_items bi ON bi.asset_id = d.id AND bi.active AND bi.ends_on > coalesce(d.due_on, '-infinity'::date)
+         JOIN bookings b ON b.id = bi.booking_id AND b.purpose <> 'lab' LEFT JOIN jobs j ON j.id = b.job_id
+        GROUP BY bi.asset_id)
+     SELECT d.id, d.asset_tag AS "assetTag", d.type, d.status, to_char(d.due_on, 'YYYY-MM-DD') AS "dueOn", d.calibration_provider AS provider,
+            d.kit_id AS "kitId", k.name AS "kitName",
+            CASE WHEN d.due_on IS NULL OR d.due_on < $2::date THEN 'overdue' ELSE 'due_soon' END AS state,
+            coalesce(t.list, '[]'::json) AS threatened
+       FROM due d LEFT JOIN threats t ON t.asset_id = d.id LEFT JOIN kits k ON k.id = d.kit_id
+      ORDER BY d.due_on NULLS FIRST, d.asset_tag`,
+    limit ? [today, addDays(today, withinDays), limit] : [today, addDays(today, withinDays)],
   );
 }
+
+/** The review page shows the most urgent items; the CSV has them all. */
+export const REVIEW_LIST_LIMIT = 200;
 
 /** The owner's review page: what is due, what it threatens, what is at the lab, the year ahead, open impact reviews. */
 export class ReviewService {
@@ -45,11 +57,24 @@ export class ReviewService {
     });
   }
 
+  /** Every item in the firm's due-soon window (for the CSV and PDF). */
+  dueWithinWindow(actor: Actor) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      return { firm: ctx.name, today: ctx.today, items: await dueItems(tx, ctx.today, ctx.dueSoonDays) };
+    });
+  }
+
   review(actor: Actor) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const [items, timeline, atLab, reviews] = await Promise.all([
-        dueItems(tx, ctx.today, ctx.dueSoonDays),
+      const [items, [counts], timeline, atLab, reviews] = await Promise.all([
+        dueItems(tx, ctx.today, ctx.dueSoonDays, REVIEW_LIST_LIMIT),
+        tx.sql<{ overdue: number; dueSoon: number }>(
+          `SELECT count(*) FILTER (WHERE due_on IS NULL OR due_on < $2::date)::int AS overdue, count(*) FILTER (WHERE due_on >= $2::date)::int AS "dueSoon"
+             FROM assets WHERE organization_id = $1 AND calibration_required AND status <> 'retired' AND coalesce(due_on, '-infinity'::date) <= $3::date`,
+          [ctx.today, addDays(ctx.today, ctx.dueSoonDays)],
+        ),
         tx.sql<{ weekStart: string; count: number }>(
           `SELECT to_char(w, 'YYYY-MM-DD') AS "weekStart", count(a.id)::int AS count
              FROM generate_series(date_trunc('week', $2::date), date_trunc('week', $2::date) + interval '51 weeks', interval '1 week') AS w
@@ -84,6 +109,9 @@ export class ReviewService {
         dueSoonDays: ctx.dueSoonDays,
         overdue: items.filter((i) => i.state === 'overdue'),
         dueSoon: items.filter((i) => i.state === 'due_soon'),
+        /** Totals, which exceed the lists when more than REVIEW_LIST_LIMIT items are due. */
+        counts,
+        listLimit: REVIEW_LIST_LIMIT,
         byKit: [...kits.values()],
         timeline,
         atLab,

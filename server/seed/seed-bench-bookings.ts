@@ -36,6 +36,7 @@ if (already === 0) {
                          AND daterange(bi.starts_on, bi.ends_on, '[]') && daterange(current_date + 54, current_date + 99, '[]'))
       ORDER BY a.asset_tag LIMIT 20)`, [org, kit]);
   await client.query('COMMIT');
-  console.log('Seeded 200,000-odd benchmark bookings and a 20-item kit.');
+  const [{ n }] = (await client.query(`SELECT count(*)::int AS n FROM bookings WHERE organization_id = $1`, [org])).rows;
+  console.log(`Seeded ${n} benchmark bookings (ten per asset) and a 20-item kit.`);
 }
 await client.end();

@@ -72,7 +72,7 @@ export async function seedBenchFleet(url: string, count: number) {
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
-  const count = Number(process.argv[2] ?? 20_000);
+  const count = Number(process.argv[2] ?? process.env.BENCH_ASSETS ?? 20_000);
   seedBenchFleet(process.env.DATABASE_URL!, count).then(
     (r) => console.log(r.created ? `Seeded ${r.created} benchmark assets (sign in as ${BENCH_EMAIL}).` : 'Benchmark firm already present.'),
     (err) => {

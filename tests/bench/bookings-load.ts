@@ -36,3 +36,12 @@ for (let i = 0; i < 20; i += 1) {
 }
 create.sort((a, b) => a - b);
 console.log(`POST /api/bookings of a ${kit.memberCount}-item kit, 20 in a row: p50 ${percentile(create, 50).toFixed(1)} ms, p95 ${percentile(create, 95).toFixed(1)} ms, max ${create[create.length - 1].toFixed(1)} ms`);
+
+const review: number[] = [];
+for (let i = 0; i < 20; i += 1) {
+  const t0 = performance.now();
+  await (await fetch(`${base}/api/calibration/review`, { headers })).arrayBuffer();
+  review.push(performance.now() - t0);
+}
+review.sort((a, b) => a - b);
+console.log(`GET /api/calibration/review at 20,000 assets, 20 sequential requests: p50 ${percentile(review, 50).toFixed(1)} ms, p95 ${percentile(review, 95).toFixed(1)} ms`);

@@ -91,7 +91,8 @@ export default function CalibrationReviewRoute() {
           By kit
         </label>
         <span className="text-sm text-ink-700">
-          {r.overdue.length} overdue · {r.dueSoon.length} due soon
+          {r.counts.overdue} overdue · {r.counts.dueSoon} due soon
+          {r.counts.overdue + r.counts.dueSoon > r.listLimit ? ` · the ${r.listLimit} most urgent are listed; the CSV has them all` : ''}
         </span>
       </div>
 

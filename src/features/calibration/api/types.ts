@@ -84,6 +84,9 @@ export interface CalibrationReview {
   dueSoonDays: number;
   overdue: DueRow[];
   dueSoon: DueRow[];
+  /** Totals; the lists hold at most `listLimit` of the most urgent items. */
+  counts: { overdue: number; dueSoon: number };
+  listLimit: number;
   byKit: { kitId: string; kitName: string; items: DueRow[] }[];
   /** 52 weeks from this week (weeks start on Monday). */
   timeline: { weekStart: string; count: number }[];

@@ -4,8 +4,6 @@ import type { Scoped } from '../db/scoped';
 import type { OrgContext } from '../organizations/org-context';
 import type { Asset } from './asset.entity';
 
-/** Exactly the expression the trigram index covers (see the FleetSearchText migration). */
-const SEARCH_TEXT = `lower(a.asset_tag || ' ' || a.serial_number || ' ' || coalesce(a.rfid_tag, '') || ' ' || coalesce(a.manufacturer, '') || ' ' || coalesce(a.model, '') || ' ' || coalesce(a.location, ''))`;
 
 const sortColumns: Record<string, string> = {
   assetTag: 'a.asset_tag',
@@ -50,7 +48,8 @@ export async function findAssets(tx: Scoped, ctx: OrgContext, filter: Omit<Asset
   const params: unknown[] = [];
   const where = ['a.organization_id = $1'];
   const param = (v: unknown) => `$${params.push(v) + 1}`;
-  if (filter.q) where.push(`${SEARCH_TEXT} LIKE ${param(`%${escapeLike(filter.q.toLowerCase())}%`)}`);
+  // search_text is kept lower-cased by a trigger and trigram-indexed (FleetSearchColumn migration).
+  if (filter.q) where.push(`a.search_text LIKE ${param(`%${escapeLike(filter.q.toLowerCase())}%`)}`);
   if (filter.type?.length) where.push(`a.type = ANY(${param(filter.type)})`);
   if (filter.status?.length) where.push(`a.status = ANY(${param(filter.status)})`);
   if (filter.calibration?.length) {
@@ -69,8 +68,18 @@ export async function findAssets(tx: Scoped, ctx: OrgContext, filter: Omit<Asset
   const order = `${column} ${sort.startsWith('-') ? 'DESC' : 'ASC'} NULLS LAST${column === 'a.asset_tag' ? '' : ', a.asset_tag'}`;
   const limit = page ? ` LIMIT ${page.limit} OFFSET ${page.offset}` : '';
   const filters = where.join(' AND ');
-  // The page and the total as two statements on two pooled connections, so the
-  // planner can walk the sort index for the page and count from the filter's best index.
+  if (where.length > 1 && page) {
+    // Filtered: gather the matches once (through whichever indexes fit the filters), then count and
+    // sort them. Walking the tag index in order and testing every row can cost far more.
+    const rows = await tx.sql<Row & { total: string }>(
+      `WITH hits AS MATERIALIZED (SELECT a.* FROM assets a WHERE ${filters})
+       SELECT ${COLUMNS}, (SELECT count(*) FROM hits) AS total FROM hits a LEFT JOIN kits k ON k.id = a.kit_id ORDER BY ${order}${limit}`,
+      params,
+    );
+    const total = rows.length ? Number(rows[0].total) : Number((await tx.sql<{ n: string }>(`SELECT count(*) AS n FROM assets a WHERE ${filters}`, params))[0].n);
+    return { assets: rows.map(({ total: _total, ...row }) => toAsset(row as Row)), total };
+  }
+  // Unfiltered: the page straight off the sort index, and the total from the organization index.
   const [rows, [{ total }]] = await Promise.all([
     tx.sql<Row>(`SELECT ${COLUMNS} FROM assets a LEFT JOIN kits k ON k.id = a.kit_id WHERE ${filters} ORDER BY ${order}${limit}`, params),
     page ? tx.sql<{ total: string }>(`SELECT count(*) AS total FROM assets a WHERE ${filters}`, params) : Promise.resolve([{ total: '-1' }]),

@@ -87,6 +87,12 @@ export class Asset extends OrgOwned {
   @Column({ name: 'notified_calibration_state', type: 'text', nullable: true })
   notifiedCalibrationState: string | null;
 
+  /** Lower-cased tag, serial, RFID, maker, model and location, kept by a database
+   * trigger and trigram-indexed for the fleet search (see FleetSearchColumn). */
+  @Index('assets_search_text_trgm', { synchronize: false }) // a GIN trigram index TypeORM cannot describe; made by the migration
+  @Column({ name: 'search_text', type: 'text', default: '', select: false, insert: false, update: false })
+  searchText?: string;
+
   @Column({ name: 'retired_at', type: 'timestamptz', nullable: true })
   retiredAt: Date | null;
 

@@ -16,20 +16,23 @@ type Changed = { organization_id: string; asset_tag: string; state: string };
 export const dueScanJob = (): JobDefinition => ({
   name: 'due-scan',
   description: 'Marks calibration states and e-mails each owner and manager one digest of newly due-soon and overdue items and the bookings they threaten.',
-  schedule: '15 5 * * *',
-  run: async ({ db, now }) => {
+  // Hourly; a firm is scanned in the hour its own clock reads 06:00 (every firm on "run now").
+  schedule: '5 * * * *',
+  run: async ({ db, now, trigger }) => {
     const changed: Changed[] = await db.query(
       `WITH states AS (
          SELECT a.id, a.organization_id, a.asset_tag,
-                CASE WHEN a.due_on IS NULL OR a.due_on < (now() AT TIME ZONE o.time_zone)::date THEN 'overdue' ELSE 'due_soon' END AS state
+                CASE WHEN a.due_on IS NULL OR a.due_on < ($2::timestamptz AT TIME ZONE o.time_zone)::date THEN 'overdue' ELSE 'due_soon' END AS state
            FROM assets a JOIN organizations o ON o.id = a.organization_id
           WHERE a.calibration_required AND a.status <> 'retired'
-            AND (a.due_on IS NULL OR a.due_on <= (now() AT TIME ZONE o.time_zone)::date + coalesce((o.settings->>'dueSoonDays')::int, 30)))
+            AND ($1 OR extract(hour FROM $2::timestamptz AT TIME ZONE o.time_zone) = 6)
+            AND (a.due_on IS NULL OR a.due_on <= ($2::timestamptz AT TIME ZONE o.time_zone)::date + coalesce((o.settings->>'dueSoonDays')::int, 30)))
        , marked AS (
          UPDATE assets a SET notified_calibration_state = s.state
            FROM states s WHERE a.id = s.id AND a.notified_calibration_state IS DISTINCT FROM s.state
          RETURNING s.organization_id, s.asset_tag, s.state)
        SELECT * FROM marked`,
+      [trigger === 'manual', now],
     );
     const byOrg = new Map<string, Changed[]>();
     for (const c of changed) byOrg.set(c.organization_id, [...(byOrg.get(c.organization_id) ?? []), c]);

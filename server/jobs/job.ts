@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 
-export type JobContext = { db: DataSource; now: Date };
+/** `manual` runs come from the owner's "run now" and may ignore time-of-day rules. */
+export type JobContext = { db: DataSource; now: Date; trigger: 'schedule' | 'manual' };
 
 /** A piece of scheduled work: a cron pattern (in `timeZone`) and a run that
  * returns a short summary for the run log. */

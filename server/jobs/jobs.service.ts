@@ -39,7 +39,7 @@ export class JobsService {
     const repo = this.db.getRepository(JobRun);
     const run = await repo.save(repo.create({ jobName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running' }));
     try {
-      run.summary = await job.run({ db: this.db, now: new Date() });
+      run.summary = await job.run({ db: this.db, now: new Date(), trigger });
       run.status = 'succeeded';
     } catch (err) {
       run.status = 'failed';

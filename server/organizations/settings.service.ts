@@ -15,6 +15,8 @@ const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>) => ({
   tolerances: ctx.tolerances,
   taxRateBasisPoints: ctx.taxRateBasisPoints,
   depositPolicy: ctx.depositPolicy,
+  providers: ctx.providers,
+  intervalPolicy: ctx.intervalPolicy,
 });
 
 export const getSettings = (db: DataSource, actor: Actor) => inOrganization(db, actor.organizationId, async (tx) => view(await loadOrgContext(tx)));
@@ -28,6 +30,8 @@ export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<type
     if (patch.decisionRule) org.settings = { ...org.settings, decisionRule: patch.decisionRule };
     if (patch.taxRateBasisPoints !== undefined) org.settings = { ...org.settings, taxRateBasisPoints: patch.taxRateBasisPoints };
     if (patch.depositPolicy) org.settings = { ...org.settings, depositPolicy: patch.depositPolicy };
+    if (patch.providers) org.settings = { ...org.settings, providers: patch.providers };
+    if (patch.intervalPolicy) org.settings = { ...org.settings, intervalPolicy: patch.intervalPolicy };
     if (patch.tolerances) org.settings = { ...org.settings, tolerances: { ...org.settings.tolerances, ...patch.tolerances } };
     await tx.manager.save(Organization, org);
     await recordAudit(tx, actor, 'settings.updated', { type: 'organization', id: org.id }, { before, after: patch });

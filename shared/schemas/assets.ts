@@ -114,6 +114,18 @@ export const organizationSettingsPayload = z
   .object({
     decisionRule: z.enum(['simple', 'guarded'], { message: 'must be simple or guarded' }),
     taxRateBasisPoints: z.number().int('must be whole basis points').min(0).max(10_000),
+    providers: z
+      .array(z.object({ name: z.string().trim().min(1, 'is required').max(120), turnaroundDays: z.number().int('must be whole days').min(1).max(180) }))
+      .max(50),
+    intervalPolicy: z
+      .object({
+        lengthenAfter: z.number().int().min(1).max(10),
+        lengthenFactor: z.number().min(1, 'lengthening needs a factor of at least 1').max(3),
+        shortenFactor: z.number().gt(0).max(1, 'shortening needs a factor of at most 1'),
+        minMonths: z.number().int().min(1).max(120),
+        maxMonths: z.number().int().min(1).max(120),
+      })
+      .refine((p) => p.minMonths <= p.maxMonths, { message: 'the shortest interval must not exceed the longest', path: ['maxMonths'] }),
     depositPolicy: z
       .object({ percent: z.number().min(0).max(100), minMinor: z.number().int().min(0), maxMinor: z.number().int().min(0) })
       .refine((p) => p.minMinor <= p.maxMinor, { message: 'the minimum must not exceed the maximum', path: ['maxMinor'] }),

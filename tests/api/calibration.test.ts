@@ -199,3 +199,29 @@ describe("the owner's review and the daily scan", () => {
     await pool.end();
   });
 });
+
+describe('due scan timing and settings', () => {
+  it("scans a firm on schedule only in the hour its own clock reads six, and every firm on a manual run", async () => {
+    const job = dueScanJob();
+    await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
+    // 03:10 UTC is 04:10 in Wrenhallow (Europe/Berlin): not the demo firm's hour, nothing is scanned.
+    expect(await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule' })).toMatchObject({ itemsChanged: 0, digests: 0 });
+    // 05:10 UTC is 06:10 there (and 05:10 in the London firm, which waits for its own six o'clock).
+    const atSix = await job.run({ db: t.db, now: new Date('2026-12-01T05:10:00Z'), trigger: 'schedule' });
+    expect(atSix.itemsChanged).toBeGreaterThan(0);
+    expect(atSix.digests).toBe(1);
+    await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
+    expect((await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'manual' })).itemsChanged).toBeGreaterThan(0);
+  });
+
+  it('lets the owner set providers with turnarounds and the interval policy', async () => {
+    const res = await t.api.patch('/api/settings').set(bearer(owner)).send({ providers: [{ name: 'Fenmoor Calibration Lab', turnaroundDays: 21 }], intervalPolicy: { lengthenAfter: 3, lengthenFactor: 1.5, shortenFactor: 0.5, minMonths: 3, maxMonths: 24 } });
+    expect(res.status).toBe(200);
+    expect(res.body.providers).toEqual([{ name: 'Fenmoor Calibration Lab', turnaroundDays: 21 }]);
+    const bad = await t.api.patch('/api/settings').set(bearer(owner)).send({ intervalPolicy: { lengthenAfter: 2, lengthenFactor: 0.5, shortenFactor: 2, minMonths: 12, maxMonths: 6 } });
+    expect(Object.keys(bad.body.error.details.fields).sort()).toEqual(['intervalPolicy.lengthenFactor', 'intervalPolicy.maxMonths', 'intervalPolicy.shortenFactor']);
+    const a = await tracker(addDays(today, -300));
+    await t.api.patch(`/api/assets/${a.id}`).set(bearer(manager)).send({ calibration: { required: true, intervalMonths: 12, provider: 'Fenmoor Calibration Lab' } });
+    expect((await t.api.get(`/api/assets/${a.id}/lab-windows`).set(bearer(owner))).body.turnaroundDays).toBe(21);
+  });
+});

@@ -1,7 +1,7 @@
 import pg from 'pg';
 
-/** Fresh planner statistics after the bulk seed, as autovacuum would produce shortly after. */
+/** Statistics and visibility maps after the bulk seed, as autovacuum would leave them shortly after. */
 const client = new pg.Client({ connectionString: process.env.DATABASE_URL });
 await client.connect();
-await client.query('ANALYZE');
+await client.query('VACUUM ANALYZE');
 await client.end();

@@ -11,6 +11,7 @@ import { AppError, conflict, notFound, ruleBroken } from '../http/errors';
 import { availableAssets, blockedItems, conflictingItems } from './booking-queries';
 import { Booking, BookingItem } from './booking.entity';
 import { Job } from './job.entity';
+import { listReply } from '../http/list-reply';
 
 const isExclusionViolation = (err: unknown) => (err as { code?: string })?.code === '23P01';
 
@@ -149,7 +150,7 @@ export class BookingsService {
   }
 
   availability(actor: Actor, q: z.infer<typeof availabilityQuery>) {
-    return readInOrganization(this.db, actor.organizationId, async (tx) => ({ items: await availableAssets(tx, { type: q.type, startsOn: q.startsOn, endsOn: q.endsOn, limit: q.limit }) }));
+    return readInOrganization(this.db, actor.organizationId, async (tx) => listReply(await availableAssets(tx, { type: q.type, startsOn: q.startsOn, endsOn: q.endsOn, limit: q.limit })));
   }
 
   private async resolveAssets(tx: Scoped, assetIds: string[], kitId?: string) {

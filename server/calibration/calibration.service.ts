@@ -15,6 +15,7 @@ import { loadOrgContext } from '../organizations/org-context';
 import { CalibrationEvent, CertificateFile } from './calibration-event.entity';
 import { openImpactReview } from './impact.service';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
+import { listReply } from '../http/list-reply';
 
 export type UploadedCertificate = { originalname: string; buffer: Buffer; size: number };
 
@@ -114,7 +115,7 @@ export class CalibrationService {
   list(actor: Actor, assetId: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await tx.get(Asset, { id: assetId }, 'That asset');
-      return { items: (await tx.find(CalibrationEvent, { where: { assetId }, order: { performedOn: 'DESC', createdAt: 'DESC' } })).map(eventView) };
+      return listReply((await tx.find(CalibrationEvent, { where: { assetId }, order: { performedOn: 'DESC', createdAt: 'DESC' } })).map(eventView));
     });
   }
 

@@ -7,6 +7,7 @@ import { ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications/outbox';
 import { staffAddresses } from '../notifications/staff';
 import { ImpactReview, ImpactReviewItem, type ImpactAssessment } from './impact-review.entity';
+import { listReply } from '../http/list-reply';
 
 /** Day of the item's last passing evidence before `foundOn`: an in-tolerance calibration or a passing field check. */
 async function lastPassingEvidence(tx: Scoped, assetId: string, foundOn: string, excludeCheckId?: string) {
@@ -88,7 +89,7 @@ export class ImpactService {
   list(actor: Actor, state?: 'open' | 'closed') {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const reviews = await tx.find(ImpactReview, { where: state ? { state } : {}, order: { createdAt: 'DESC' }, relations: { asset: true }, take: 200 });
-      return { items: await Promise.all(reviews.map((r) => this.view(tx, r))) };
+      return listReply(await Promise.all(reviews.map((r) => this.view(tx, r))));
     });
   }
 

@@ -13,6 +13,7 @@ import { CustodyEvent } from '../fleet/custody-event.entity';
 import { conflict, ruleBroken } from '../http/errors';
 import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations/org-context';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
+import { listReply } from '../http/list-reply';
 
 /** Whole free days from `from` to `to`, both included. */
 const freeDays = (from: string, to: string) => (to < from ? 0 : bookingDays(from, to));
@@ -94,7 +95,7 @@ export class LabService {
   list(actor: Actor, state?: string) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const trips = await tx.find(LabTrip, { where: state ? { state: state as LabTrip['state'] } : {}, order: { sentOn: 'DESC' }, take: 200 });
-      return { items: await Promise.all(trips.map((t) => this.view(tx, t))) };
+      return listReply(await Promise.all(trips.map((t) => this.view(tx, t))));
     });
   }
 

@@ -16,6 +16,7 @@ import { Asset } from './asset.entity';
 import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
 import { CustodyEvent } from './custody-event.entity';
+import { listReply } from '../http/list-reply';
 
 const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
 const isUniqueViolation = (err: unknown) => (err as { code?: string })?.code === '23505';
@@ -156,7 +157,7 @@ export class AssetsService {
          ORDER BY at DESC LIMIT 500`,
         [id],
       );
-      return { items: rows.map((r) => ({ ...r, summary: describeHistory(r.action, r.details) })) };
+      return listReply(rows.map((r) => ({ ...r, summary: describeHistory(r.action, r.details) })));
     });
   }
 

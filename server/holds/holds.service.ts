@@ -7,6 +7,7 @@ import { ruleBroken } from '../http/errors';
 import { Asset } from '../fleet/asset.entity';
 import { CustodyEvent } from '../fleet/custody-event.entity';
 import { Hold, type HoldReason } from './hold.entity';
+import { listReply } from '../http/list-reply';
 
 /** Take an asset out of service inside the caller's transaction. A second
  * reason while already held is recorded on the audit trail, not as a new hold. */
@@ -63,7 +64,7 @@ export class HoldsService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await tx.get(Asset, { id: assetId }, 'That asset');
       const holds = await tx.find(Hold, { where: { assetId }, order: { startedAt: 'DESC' }, take: 20 });
-      return { items: holds.map((h) => this.view(h)) };
+      return listReply(holds.map((h) => this.view(h)));
     });
   }
 

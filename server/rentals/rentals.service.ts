@@ -12,6 +12,7 @@ import { conflict, ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { Customer } from './customer.entity';
 import { RateCard } from './rate-card.entity';
+import { listReply } from '../http/list-reply';
 
 type CustomerInput = z.infer<typeof customerPayload>;
 type RateCardInput = z.infer<typeof rateCardPayload>;
@@ -44,7 +45,7 @@ export class RentalsService {
   }
 
   listRateCards(actor: Actor) {
-    return inOrganization(this.db, actor.organizationId, async (tx) => ({ items: await tx.find(RateCard, { order: { assetType: 'ASC' } }) }));
+    return inOrganization(this.db, actor.organizationId, async (tx) => listReply(await tx.find(RateCard, { order: { assetType: 'ASC' } })));
   }
 
   saveRateCard(actor: Actor, input: RateCardInput, id?: string) {

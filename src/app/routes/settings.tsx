@@ -3,13 +3,15 @@ import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useSettings } from '../../features/settings/api/get-settings';
 import { CheckRulesForm } from '../../features/settings/components/check-rules-form';
+import { IntervalPolicyForm } from '../../features/settings/components/interval-policy-form';
+import { ProvidersForm } from '../../features/settings/components/providers-form';
 import { SettingsForm } from '../../features/settings/components/settings-form';
 
 export default function SettingsRoute() {
   const settings = useSettings();
   return (
     <>
-      <PageHeader title="Settings" description="Firm-wide choices: how dates and due states are worked out, and how field checks are judged." />
+      <PageHeader title="Settings" description="Firm-wide choices: how dates and due states are worked out, how field checks are judged, which labs calibrate your kit and how calibration intervals are reviewed." />
       {settings.isPending ? <LoadingPanel /> : null}
       {settings.isError ? (
         <Notice tone="error" title="The settings could not be loaded">
@@ -24,6 +26,18 @@ export default function SettingsRoute() {
               Field checks
             </h2>
             <CheckRulesForm settings={settings.data} />
+          </section>
+          <section aria-labelledby="provider-settings-heading" className="flex flex-col gap-2">
+            <h2 id="provider-settings-heading" className="text-lg font-bold">
+              Calibration providers
+            </h2>
+            <ProvidersForm settings={settings.data} />
+          </section>
+          <section aria-labelledby="interval-settings-heading" className="flex flex-col gap-2">
+            <h2 id="interval-settings-heading" className="text-lg font-bold">
+              Interval review
+            </h2>
+            <IntervalPolicyForm settings={settings.data} />
           </section>
         </div>
       ) : null}

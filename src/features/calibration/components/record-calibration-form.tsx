@@ -12,6 +12,7 @@ import { formatCalendarDate } from '../../../lib/format';
 import { useRecordCalibration } from '../api/record-calibration';
 import type { AsFound, CalibrationEvent } from '../api/types';
 import { resultChoices, resultWords } from './calibration-words';
+import { UploadProgress } from '../../../components/upload-progress';
 
 const MAX_CERTIFICATE_BYTES = 20 * 1024 * 1024;
 
@@ -178,23 +179,7 @@ export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetV
           <CertificateInput />
           <DuePreview fallbackMonths={planMonths} />
           <AsFoundWarning tag={asset.assetTag} />
-          {progress !== null ? (
-            <div className="flex flex-col gap-1">
-              <span id="cert-progress-label" className="text-sm font-semibold">
-                {progress < 1 ? `Uploading the certificate… ${Math.round(progress * 100)} %` : 'Uploaded, saving…'}
-              </span>
-              <div
-                role="progressbar"
-                aria-labelledby="cert-progress-label"
-                aria-valuemin={0}
-                aria-valuemax={100}
-                aria-valuenow={Math.round(progress * 100)}
-                className="h-3 w-full overflow-hidden rounded-full border border-ink-700 bg-card"
-              >
-                <div className="h-full bg-ink-800 transition-[width]" style={{ width: `${Math.round(progress * 100)}%` }} />
-              </div>
-            </div>
-          ) : null}
+          {progress !== null ? <UploadProgress progress={progress} sending="Uploading the certificate…" sent="Uploaded, saving…" /> : null}
           <div>
             <Button type="submit" variant="primary" busy={isSubmitting}>
               Save calibration

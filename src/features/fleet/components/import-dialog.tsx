@@ -7,6 +7,7 @@ import { isApiError } from '../../../lib/api-client';
 import { formatCount } from '../../../lib/format';
 import { importTemplateUrl, useImportAssets } from '../api/import-assets';
 import type { ImportProblem, ImportResult } from '../api/types';
+import { UploadProgress } from '../../../components/upload-progress';
 
 type Step =
   | { kind: 'pick' }
@@ -166,18 +167,11 @@ export function ImportDialog({ open, onClose, onImported }: { open: boolean; onC
         </div>
 
         {step.kind === 'uploading' ? (
-          <div role="status" className="flex flex-col gap-1">
-            <span className="text-sm text-ink-800">
-              {step.mode === 'preview' ? 'Sending the file to be checked…' : 'Importing…'} {Math.round(step.progress * 100)}%
-              {step.progress >= 1 ? ' — waiting for the server' : ''}
-            </span>
-            <progress
-              max={1}
-              value={step.progress}
-              aria-label="Upload progress"
-              className="h-2 w-full overflow-hidden rounded [&::-moz-progress-bar]:bg-brass [&::-webkit-progress-bar]:bg-paper-deep [&::-webkit-progress-value]:bg-brass"
-            />
-          </div>
+          <UploadProgress
+            progress={step.progress}
+            sending={step.mode === 'preview' ? 'Sending the file to be checked…' : 'Importing…'}
+            sent={step.mode === 'preview' ? 'Sent; checking every row…' : 'Sent; importing every row…'}
+          />
         ) : null}
 
         {checked ? (

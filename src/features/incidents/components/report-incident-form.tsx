@@ -14,6 +14,7 @@ import type { IncidentKind, IncidentView } from '../api/types';
 import { incidentKindChoices, incidentKindWords } from './incident-words';
 import { PhotoPicker } from './photo-picker';
 import { MAX_PHOTOS, photoProblem } from './photo-rules';
+import { UploadProgress } from '../../../components/upload-progress';
 
 interface Values {
   kind: IncidentKind | '';
@@ -205,23 +206,7 @@ export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; boo
           <BigField name="occurredAt" label="When" type="datetime-local" />
           <BigField name="location" label="Where" hint="Site, building or room." />
           <PhotoPicker files={photos} onChange={setPhotos} problems={photoProblems} />
-          {progress !== null ? (
-            <div className="flex flex-col gap-1">
-              <span id="upload-progress-label" className="text-base font-semibold">
-                {progress < 1 ? `Sending… ${Math.round(progress * 100)} %` : 'Sent, waiting for the server…'}
-              </span>
-              <div
-                role="progressbar"
-                aria-labelledby="upload-progress-label"
-                aria-valuemin={0}
-                aria-valuemax={100}
-                aria-valuenow={Math.round(progress * 100)}
-                className="h-4 w-full overflow-hidden rounded-full border-2 border-ink-900 bg-card"
-              >
-                <div className="h-full bg-ink-900 transition-[width]" style={{ width: `${Math.round(progress * 100)}%` }} />
-              </div>
-            </div>
-          ) : null}
+          {progress !== null ? <UploadProgress progress={progress} sending="Sending…" sent="Sent, waiting for the server…" large /> : null}
           <Button type="submit" variant="primary" busy={isSubmitting} className="min-h-14 w-full text-xl sm:w-auto sm:px-10">
             Send report
           </Button>

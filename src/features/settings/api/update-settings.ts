@@ -2,13 +2,17 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { settingsKeys } from './keys';
 import type { CheckKind, DecisionRule, Tolerance } from '../../../lib/checks';
-import type { OrganizationSettings } from './types';
+import type { CalibrationProvider, IntervalPolicy, OrganizationSettings } from './types';
 
 export interface UpdateSettingsInput {
   dueSoonDays?: number;
   timeZone?: string;
   decisionRule?: DecisionRule;
   tolerances?: Partial<Record<CheckKind, Tolerance>>;
+  /** The whole list; it replaces the saved one. */
+  providers?: CalibrationProvider[];
+  /** The whole policy; it replaces the saved one. */
+  intervalPolicy?: IntervalPolicy;
 }
 
 export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettings> {

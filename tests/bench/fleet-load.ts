@@ -12,11 +12,13 @@ const { token } = (await login.json()) as { token: string };
 
 const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 
-async function load(name: string, pathAndQuery: string) {
+/** `ratePerClient` paces each of the 20 clients (requests per second); without it they fire back to back. */
+async function load(name: string, pathAndQuery: string, ratePerClient?: number) {
   const times: number[] = [];
   let non2xx = 0;
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const instance = autocannon({ url: `${base}${pathAndQuery}`, connections: 20, duration: 15, headers: { authorization: `Bearer ${token}` } }, (err, r) => (err ? reject(err) : resolve(r)));
+    const options = { url: `${base}${pathAndQuery}`, connections: 20, duration: 15, headers: { authorization: `Bearer ${token}` }, ...(ratePerClient ? { connectionRate: ratePerClient } : {}) };
+    const instance = autocannon(options, (err, r) => (err ? reject(err) : resolve(r)));
     instance.on('response', (_client, status, _bytes, ms) => {
       times.push(ms);
       if (status >= 300) non2xx += 1;
@@ -33,6 +35,9 @@ await load('type filter + search "0001" (narrow)', '/api/assets?type=tracker,pro
 await load('type filter + search "shelf" (1 in 3 rows)', '/api/assets?type=tip,smr,battery&q=shelf&limit=50');
 await load('calibration overdue + search "orrin"', '/api/assets?calibration=overdue&q=orrin&sort=dueOn&limit=50');
 await load('no filter, first page', '/api/assets?limit=50');
+console.log('\nThe same, each of the 20 clients paced at 5 requests a second (people clicking, not a loop)');
+await load('type filter + search "0001" (narrow), paced', '/api/assets?type=tracker,probe&q=0001&limit=50', 5);
+await load('type filter + search "shelf", paced', '/api/assets?type=tip,smr,battery&q=shelf&limit=50', 5);
 
 const browser = await chromium.launch({
   executablePath: '/usr/bin/chromium',

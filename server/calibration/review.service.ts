@@ -1,20 +1,10 @@
 import type { DataSource } from 'typeorm';
 import { addDays } from '../../shared/calibration/due-date';
+import type { DueRow } from '../../shared/calibration/review-types';
 import { readInOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from '../organizations/org-context';
 
-export type DueRow = {
-  id: string;
-  assetTag: string;
-  type: string;
-  status: string;
-  dueOn: string | null;
-  provider: string | null;
-  kitId: string | null;
-  kitName: string | null;
-  state: 'overdue' | 'due_soon';
-  threatened: { bookingId: string; startsOn: string; endsOn: string; jobReference: string | null; customerName: string | null }[];
-};
+export type { DueRow };
 
 /**
  * Items overdue or due within `withinDays`, most urgent first, each with the

@@ -1,3 +1,4 @@
+import { useId, type ReactNode } from 'react';
 import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
@@ -21,26 +22,30 @@ export default function SettingsRoute() {
       {settings.data ? (
         <div className="flex flex-col gap-6">
           <SettingsForm settings={settings.data} />
-          <section aria-labelledby="check-settings-heading" className="flex flex-col gap-2">
-            <h2 id="check-settings-heading" className="text-lg font-bold">
-              Field checks
-            </h2>
+          <SettingsSection title="Field checks">
             <CheckRulesForm settings={settings.data} />
-          </section>
-          <section aria-labelledby="provider-settings-heading" className="flex flex-col gap-2">
-            <h2 id="provider-settings-heading" className="text-lg font-bold">
-              Calibration providers
-            </h2>
+          </SettingsSection>
+          <SettingsSection title="Calibration providers">
             <ProvidersForm settings={settings.data} />
-          </section>
-          <section aria-labelledby="interval-settings-heading" className="flex flex-col gap-2">
-            <h2 id="interval-settings-heading" className="text-lg font-bold">
-              Interval review
-            </h2>
+          </SettingsSection>
+          <SettingsSection title="Interval review">
             <IntervalPolicyForm settings={settings.data} />
-          </section>
+          </SettingsSection>
         </div>
       ) : null}
     </>
+  );
+}
+
+/** One titled part of the settings page. */
+function SettingsSection({ title, children }: { title: string; children: ReactNode }) {
+  const headingId = useId();
+  return (
+    <section aria-labelledby={headingId} className="flex flex-col gap-2">
+      <h2 id={headingId} className="text-lg font-bold">
+        {title}
+      </h2>
+      {children}
+    </section>
   );
 }

@@ -1,4 +1,6 @@
 import type { AsFound } from '../../../lib/calibration';
+import type { DueRow, ThreatenedBooking } from '../../../../shared/calibration/review-types';
+export type { DueRow, ThreatenedBooking };
 
 export type { AsFound } from '../../../lib/calibration';
 
@@ -36,27 +38,6 @@ export interface RecordCalibrationInput {
   certificate: File;
 }
 
-export interface ThreatenedBooking {
-  bookingId: string;
-  startsOn: string;
-  endsOn: string;
-  jobReference: string | null;
-  customerName: string | null;
-}
-
-/** An item overdue or due soon, with the bookings that run past its due date. */
-export interface DueRow {
-  id: string;
-  assetTag: string;
-  type: string;
-  status: string;
-  dueOn: string | null;
-  provider: string | null;
-  kitId: string | null;
-  kitName: string | null;
-  state: 'overdue' | 'due_soon';
-  threatened: ThreatenedBooking[];
-}
 
 export interface AtLabRow {
   tripId: string;

@@ -37,6 +37,15 @@ import { LabService } from './calibration/lab.service';
 import { ReviewService } from './calibration/review.service';
 import { RentalsService } from './rentals/rentals.service';
 import { rentalsRoutes } from './rentals/rentals.routes';
+import { RentalRegisterService } from './rentals/rental-register.service';
+import { billingRoutes } from './billing/billing.routes';
+import { BillingReportsService } from './billing/billing-reports.service';
+import { depositRenewalsJob } from './billing/deposit-renewals.job';
+import { DepositsService } from './billing/deposits.service';
+import { InvoicesService } from './billing/invoices.service';
+import { createPaymentClient } from './billing/payment-client';
+import { PaymentGateway } from './billing/payment-gateway';
+import { paymentWebhookRoutes } from './billing/payment-webhooks';
 import { ChecksService } from './checks/checks.service';
 import { checksRoutes } from './checks/checks.routes';
 import { HoldsService } from './holds/holds.service';
@@ -53,7 +62,9 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   const users = new UsersService(db, config.BCRYPT_COST);
   const key = signingKey(config.JWT_SECRET);
   const auth = new AuthService(db, users, key);
-  const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM), lateReturnsJob(), dueScanJob()]);
+  const gateway = new PaymentGateway(createPaymentClient(config));
+  const deposits = new DepositsService(db, gateway);
+  const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM), lateReturnsJob(), dueScanJob(), depositRenewalsJob(deposits)]);
   const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
   const assets = new AssetsService(db, publicUrl);
   const kits = new KitsService(db, publicUrl);
@@ -77,6 +88,8 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
     }),
   );
   app.use(cookieParser());
+  // Before the JSON parser: the signature covers the raw bytes.
+  app.use(paymentWebhookRoutes(db, gateway, config.PAYMENT_WEBHOOK_SECRET));
   app.use('/api', express.json({ limit: '1mb' }), csrfGuard);
 
   app.use('/api', healthRoutes(db));
@@ -91,15 +104,17 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use('/api/assets', holdsRoutes(new HoldsService(db)));
   app.use('/api/incidents', incidentsRoutes(new IncidentsService(db)));
   const bookings = new BookingsService(db);
+  const rentalRegister = new RentalRegisterService(db, bookings);
   app.use(
     '/api',
-    bookingsRoutes({ bookings, handover: new HandoverService(db, bookings), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
+    bookingsRoutes({ bookings, handover: new HandoverService(db, bookings, rentalRegister.handoverGates), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
   );
   app.use(
     '/api',
     calibrationRoutes({ calibration: new CalibrationService(db), impact: new ImpactService(db), lab: new LabService(db), review: new ReviewService(db) }),
   );
-  app.use('/api', rentalsRoutes(new RentalsService(db)));
+  app.use('/api', rentalsRoutes(new RentalsService(db), rentalRegister));
+  app.use('/api', billingRoutes({ deposits, invoices: new InvoicesService(db), reports: new BillingReportsService(db) }));
   app.use('/api', unknownApiRoute);
 
   const clientDir = path.resolve(config.CLIENT_DIR);

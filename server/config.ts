@@ -21,6 +21,8 @@ const environment = z.object({
   PAYMENT_API_PORT: z.coerce.number().int().min(0).max(65535).default(4610),
   PAYMENT_API_PROTOCOL: z.enum(['http', 'https']).default('http'),
   PAYMENT_WEBHOOK_SECRET: z.string().default('whsec_nestkeeper_local'),
+  /** How long one call to the provider may take before the SDK retries it (same idempotency key). */
+  PAYMENT_TIMEOUT_MS: z.coerce.number().int().min(100).max(120_000).default(15_000),
   START_LOCAL_FAKES: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
   RUN_SCHEDULER: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
   CLIENT_DIR: z.string().default('dist/client'),

@@ -14,7 +14,7 @@ import { createMailTransport } from './notifications/mail-transport';
  */
 async function serve(config: Config) {
   const db = await createDataSource(config.DATABASE_URL).initialize();
-  const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config) : null;
+  const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config, { paymentWebhookUrl: webhookUrl(config) }) : null;
   const mail = createMailTransport(config);
   const { app, jobs } = buildApp({ config, db, mail });
   const server: Server = await new Promise((resolve) => {
@@ -37,7 +37,7 @@ async function serve(config: Config) {
 }
 
 async function supervise(config: Config) {
-  const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config) : null;
+  const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config, { paymentWebhookUrl: webhookUrl(config) }) : null;
   const workerEnv = { START_LOCAL_FAKES: 'false' };
   let stopping = false;
   for (let i = 0; i < config.WEB_CONCURRENCY; i += 1) cluster.fork(workerEnv);
@@ -53,6 +53,9 @@ async function supervise(config: Config) {
     await fakes?.close();
   });
 }
+
+/** Where the local payment fake delivers its signed events. */
+const webhookUrl = (config: Config) => `${config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`}/api/webhooks/payments`;
 
 function onStop(stop: () => Promise<void>) {
   let stopping = false;

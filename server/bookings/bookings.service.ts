@@ -55,11 +55,11 @@ export class BookingsService {
   constructor(private readonly db: DataSource) {}
 
   /**
-   * Book whole days. Refuses (422) items that may not go out for the window,
+   * Book whole days; `within` runs in the same transaction once the booking exists. Refuses (422) items that may not go out for the window,
    * then (409) items another booking holds; the exclusion constraint settles
    * any race between two requests. Both answers offer free, valid alternatives.
    */
-  async create(actor: Actor, input: BookingPayload) {
+  async create(actor: Actor, input: BookingPayload, within?: (tx: Scoped, booking: BookingView) => Promise<void>) {
     try {
       return await inOrganization(this.db, actor.organizationId, async (tx) => {
         const assetIds = await this.resolveAssets(tx, input.assetIds ?? [], input.kitId);
@@ -79,7 +79,10 @@ export class BookingsService {
         });
         await tx.insertMany(BookingItem, assetIds.map((assetId) => ({ bookingId: booking.id, assetId, startsOn: input.startsOn, endsOn: input.endsOn, active: true })));
         await recordAudit(tx, actor, 'booking.created', { type: 'booking', id: booking.id }, { assetIds, startsOn: input.startsOn, endsOn: input.endsOn, purpose });
-        return this.load(tx, booking.id);
+        const view = await this.load(tx, booking.id);
+        // What the booking is for (a rental, say) is written in the same transaction.
+        if (within) await within(tx, view);
+        return view;
       });
     } catch (err) {
       if (!isExclusionViolation(err)) throw err;

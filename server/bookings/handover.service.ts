@@ -18,11 +18,18 @@ import type { BookingsService } from './bookings.service';
 type Checklist = z.infer<typeof checklistPayload>;
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
+/** Rules other components add to the counter (rentals: a deposit hold before handing over, papers to the renter after). */
+export type HandoverGates = {
+  beforeCheckout?: (tx: Scoped, booking: Booking) => Promise<void>;
+  afterCheckout?: (tx: Scoped, booking: Booking) => Promise<void>;
+};
+
 /** Checkout and return: the packing list walked at the counter, custody recorded either way. */
 export class HandoverService {
   constructor(
     private readonly db: DataSource,
     private readonly bookings: BookingsService,
+    private readonly gates: HandoverGates = {},
   ) {}
 
   checkout(actor: Actor, id: string, input: Checklist) {
@@ -40,6 +47,7 @@ export class HandoverService {
       }
       const stillOut = assets.filter((a) => a.status === 'out');
       if (stillOut.length) throw ruleBroken('still_out', `Still out on an earlier booking: ${stillOut.map((a) => a.assetTag).join(', ')}. Take them back in first.`);
+      await this.gates.beforeCheckout?.(tx, booking);
       const taker = await this.counterpart(tx, input.counterpart);
       const now = new Date();
       await tx.updateWhere(Asset, { id: In(assets.map((a) => a.id)) }, { status: 'out' });
@@ -47,6 +55,7 @@ export class HandoverService {
       Object.assign(booking, { state: 'out', checkedOutAt: now, handedOverBy: actor.userId, takenBy: taker.name, takenByUserId: taker.userId, checkoutChecklist: input.checklist as ChecklistLine[] });
       await tx.save(Booking, booking);
       await recordAudit(tx, actor, 'booking.checked_out', { type: 'booking', id }, { takenBy: taker.name, items: assets.length });
+      await this.gates.afterCheckout?.(tx, booking);
       return this.bookings.load(tx, id);
     });
   }

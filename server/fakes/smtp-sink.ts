@@ -13,6 +13,8 @@ export type SinkMessage = {
   text: string;
   html: string | null;
   headers: Record<string, string>;
+  /** What was attached (names, types, sizes; the bytes are not kept). */
+  attachments: { fileName: string; contentType: string; sizeBytes: number }[];
   receivedAt: Date;
 };
 
@@ -58,6 +60,7 @@ export function toSinkMessage(mail: ParsedMail, session: SMTPServerSession, rece
     to: envelope.rcptTo.map((r) => r.address),
     subject: mail.subject ?? '',
     text: mail.text ?? '',
+    attachments: mail.attachments.map((a) => ({ fileName: a.filename ?? 'attachment', contentType: a.contentType, sizeBytes: a.size })),
     html: typeof mail.html === 'string' ? mail.html : null,
     headers: headerRecord(mail),
     receivedAt,
@@ -119,10 +122,10 @@ export function pgSinkStore(pool: Pool): (m: SinkMessage) => Promise<void> {
   return async (m) => {
     await pool.query(
       `INSERT INTO mail_sink_messages
-         (message_id, envelope_from, recipients, subject, text_body, html_body, headers, received_at)
-       VALUES ($1, $2, $3, $4, $5, $6, $7, $8)
+         (message_id, envelope_from, recipients, subject, text_body, html_body, headers, attachments, received_at)
+       VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9)
        ON CONFLICT (message_id) DO NOTHING`,
-      [m.messageId, m.from, m.to, m.subject, m.text, m.html, JSON.stringify(m.headers), m.receivedAt],
+      [m.messageId, m.from, m.to, m.subject, m.text, m.html, JSON.stringify(m.headers), JSON.stringify(m.attachments), m.receivedAt],
     );
   };
 }

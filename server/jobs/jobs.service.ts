@@ -24,11 +24,11 @@ export class JobsService {
 
   constructor(
     private readonly db: DataSource,
-    private readonly jobs: JobDefinition[],
+    readonly definitions: JobDefinition[],
   ) {}
 
   private find(name: string) {
-    const job = this.jobs.find((j) => j.name === name);
+    const job = this.definitions.find((j) => j.name === name);
     if (!job) throw notFound(`The scheduled job "${name}"`);
     return job;
   }
@@ -58,7 +58,7 @@ export class JobsService {
       .addOrderBy('r.started_at', 'DESC')
       .getMany();
     return {
-      items: this.jobs.map((j) => {
+      items: this.definitions.map((j) => {
         const lastRun = last.find((r) => r.jobName === j.name);
         return { name: j.name, description: j.description, schedule: j.schedule, lastRun: lastRun ? publicRun(lastRun) : null };
       }),
@@ -68,7 +68,7 @@ export class JobsService {
   /** Start every job's cron; each fire runs on exactly one instance (pgRunCoordinator). */
   start() {
     const runCoordinator = pgRunCoordinator(this.db, this.instanceId);
-    this.tasks = this.jobs.map((job) =>
+    this.tasks = this.definitions.map((job) =>
       cron.schedule(job.schedule, (ctx) => this.run(job.name, 'schedule', ctx.date).then(() => undefined), {
         name: job.name,
         timezone: job.timeZone,

@@ -1,14 +1,14 @@
 import type { DataSource } from 'typeorm';
 import { inOrganization, type Actor } from '../db/transaction';
 
-type MailboxRow = { id: string; messageId: string; from: string; to: string[]; subject: string; text: string; html: string | null; receivedAt: Date };
+type MailboxRow = { id: string; messageId: string; from: string; to: string[]; subject: string; text: string; html: string | null; attachments: { fileName: string; contentType: string; sizeBytes: number }[]; receivedAt: Date };
 
 /** What the local SMTP sink received, limited to mail this organization sent. */
 export function listMailbox(db: DataSource, actor: Actor, paging: { limit: number; offset: number }) {
   return inOrganization(db, actor.organizationId, async (tx) => {
     const items = await tx.sql<MailboxRow>(
       `SELECT s.id, s.message_id AS "messageId", s.envelope_from AS "from", s.recipients AS "to", s.subject,
-              s.text_body AS text, s.html_body AS html, s.received_at AS "receivedAt"
+              s.text_body AS text, s.html_body AS html, coalesce(s.attachments, '[]'::jsonb) AS attachments, s.received_at AS "receivedAt"
          FROM mail_sink_messages s JOIN outbox_messages o ON o.message_id = s.message_id
         WHERE o.organization_id = $1
         ORDER BY s.received_at DESC LIMIT $2 OFFSET $3`,

@@ -1,5 +1,6 @@
 import type { Transporter } from 'nodemailer';
 import type { DataSource } from 'typeorm';
+import { OutboxAttachment } from './outbox-attachment.entity';
 import { OutboxMessage } from './outbox-message.entity';
 
 const BATCH = 25;
@@ -30,7 +31,9 @@ export async function deliverOutbox(db: DataSource, transport: Transporter, from
       for (const message of due) {
         message.attempts += 1;
         try {
+          const attachments = await manager.find(OutboxAttachment, { where: { messageId: message.id }, order: { fileName: 'ASC' } });
           await transport.sendMail({
+            attachments: attachments.map((a) => ({ filename: a.fileName, contentType: a.contentType, content: a.content })),
             from,
             to: message.recipients,
             subject: message.subject,

@@ -1,20 +1,25 @@
 import { randomUUID } from 'node:crypto';
 import type { Scoped } from '../db/scoped';
 import { renderMail, type MailContent } from './mail-template';
+import { OutboxAttachment } from './outbox-attachment.entity';
 import { OutboxMessage } from './outbox-message.entity';
+
+export type MailAttachment = { fileName: string; contentType: string; content: Buffer };
 
 /**
  * Queue an e-mail in the caller's transaction. Nothing is sent from a request:
  * if the change rolls back, so does the mail; if SMTP is down, the sender
  * retries later.
  */
-export function enqueueMail(tx: Scoped, recipients: string[], content: MailContent) {
+export async function enqueueMail(tx: Scoped, recipients: string[], content: MailContent, attachments: MailAttachment[] = []) {
   const { subject, text, html } = renderMail(content);
-  return tx.insert(OutboxMessage, {
+  const message = await tx.insert(OutboxMessage, {
     messageId: `<${randomUUID()}@nestkeeper.local>`,
     recipients,
     subject,
     textBody: text,
     htmlBody: html,
   });
+  if (attachments.length) await tx.manager.insert(OutboxAttachment, attachments.map((a) => ({ ...a, messageId: message.id })));
+  return message;
 }

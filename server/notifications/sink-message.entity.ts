@@ -28,6 +28,9 @@ export class SinkMessage {
   @Column({ type: 'jsonb' })
   headers: Record<string, string>;
 
+  @Column({ type: 'jsonb', nullable: true })
+  attachments: { fileName: string; contentType: string; sizeBytes: number }[] | null;
+
   @Column({ name: 'received_at', type: 'timestamptz' })
   receivedAt: Date;
 }

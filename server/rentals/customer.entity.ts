@@ -26,6 +26,10 @@ export class Customer extends OrgOwned {
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
+  /** The customer's record with the payment provider, made at their first deposit. */
+  @Column({ name: 'payment_customer_id', type: 'text', nullable: true })
+  paymentCustomerId: string | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 

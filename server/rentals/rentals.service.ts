@@ -1,16 +1,12 @@
-import { In, Not, type DataSource } from 'typeorm';
+import { Not, type DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { bookingDays } from '../../shared/bookings/rules';
-import { cheapestCover, depositMinor, taxMinor } from '../../shared/billing/quote';
-import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
 import type { customerPayload, quoteQuery, rateCardPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
-import { inOrganization, type Actor } from '../db/transaction';
-import { Asset } from '../fleet/asset.entity';
+import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { Kit } from '../fleet/kit.entity';
-import { conflict, ruleBroken } from '../http/errors';
-import { loadOrgContext } from '../organizations/org-context';
+import { conflict } from '../http/errors';
 import { Customer } from './customer.entity';
+import { priceRental } from './pricing';
 import { RateCard } from './rate-card.entity';
 import { listReply } from '../http/list-reply';
 
@@ -61,50 +57,10 @@ export class RentalsService {
     });
   }
 
-  /**
-   * Price a rental: a kit with its own rate card rents as one line; other items
-   * rent by their type's card, one line per type. Each line charges the cheapest
-   * cover of the rental days (shared/billing/quote.ts).
-   */
   quote(actor: Actor, q: z.infer<typeof quoteQuery>) {
-    return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const ctx = await loadOrgContext(tx);
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
       if (q.customerId) await tx.get(Customer, { id: q.customerId }, 'That customer');
-      const kit = q.kitId ? await tx.get(Kit, { id: q.kitId }, 'That kit') : null;
-      const kitMembers = kit ? await tx.find(Asset, { where: { kitId: kit.id } }) : [];
-      const loose = q.assetIds?.length ? await tx.find(Asset, { where: { id: In(q.assetIds) } }) : [];
-      if (loose.length !== new Set(q.assetIds ?? []).size) throw ruleBroken('unknown_asset', 'One of those items is not in your fleet.');
-      const cards = await tx.find(RateCard, {});
-      const days = bookingDays(q.startsOn, q.endsOn);
-      const lines: { description: string; assetIds: string[]; quantity: number; periods: ReturnType<typeof cheapestCover>['periods']; unitMinor: number; amountMinor: number }[] = [];
-      const kitCard = kit ? cards.find((c) => c.kitId === kit.id) : undefined;
-      const byType = new Map<AssetType, Asset[]>();
-      for (const a of [...(kitCard ? [] : kitMembers), ...loose.filter((a) => !kitMembers.some((m) => m.id === a.id))]) byType.set(a.type, [...(byType.get(a.type) ?? []), a]);
-      if (kit && kitCard) {
-        const cover = cheapestCover(days, kitCard);
-        lines.push({ description: kit.name, assetIds: kitMembers.map((m) => m.id), quantity: 1, periods: cover.periods, unitMinor: cover.totalMinor, amountMinor: cover.totalMinor });
-      }
-      const unpriced = [...byType.keys()].filter((t) => !cards.some((c) => c.assetType === t));
-      if (unpriced.length) throw ruleBroken('no_rate', `No rate card for: ${unpriced.map((t) => assetTypeTitles[t]).join(', ')}. Add one under rate cards.`, { types: unpriced });
-      for (const [type, assets] of byType) {
-        const cover = cheapestCover(days, cards.find((c) => c.assetType === type)!);
-        lines.push({ description: assetTypeTitles[type], assetIds: assets.map((a) => a.id), quantity: assets.length, periods: cover.periods, unitMinor: cover.totalMinor, amountMinor: cover.totalMinor * assets.length });
-      }
-      const subtotalMinor = lines.reduce((s, l) => s + l.amountMinor, 0);
-      const tax = taxMinor(subtotalMinor, ctx.taxRateBasisPoints);
-      const replacement = [...kitMembers, ...loose].reduce((s, a) => s + (a.replacementValueMinor ?? 0), 0);
-      return {
-        days,
-        startsOn: q.startsOn,
-        endsOn: q.endsOn,
-        lines,
-        subtotalMinor,
-        taxRateBasisPoints: ctx.taxRateBasisPoints,
-        taxMinor: tax,
-        totalMinor: subtotalMinor + tax,
-        depositMinor: depositMinor(replacement, ctx.depositPolicy),
-        currency: ctx.currency,
-      };
+      return priceRental(tx, q);
     });
   }
 }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { cheapestCover, currencyExponent, depositMinor, lateChargeMinor, taxMinor } from './quote';
+import { currencyExponent } from './money';
+import { cheapestCover, depositMinor, lateChargeMinor, taxMinor } from './quote';
 
 // Rates for the worked examples: day 100, week (7 days) 500, month (28 days) 1 600.
 // Each expected value was worked out by hand (common practice: charge the cheapest

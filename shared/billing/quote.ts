@@ -47,6 +47,3 @@ export function depositMinor(replacementValueMinor: number, policy: { percent: n
   const share = Math.round((replacementValueMinor * policy.percent) / 100);
   return Math.min(policy.maxMinor, Math.max(policy.minMinor, share));
 }
-
-/** Digits after the decimal point for an ISO 4217 currency, as the platform's Intl data knows it. */
-export const currencyExponent = (currency: string) => new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;

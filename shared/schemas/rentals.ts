@@ -34,3 +34,53 @@ export const quoteQuery = z
   })
   .refine((q) => q.startsOn <= q.endsOn, { message: 'must be on or after the start', path: ['endsOn'] })
   .refine((q) => (q.assetIds?.length ?? 0) > 0 || !!q.kitId, { message: 'pick a kit or at least one asset', path: ['assetIds'] });
+
+export const rentalPayload = z
+  .object({
+    customerId: z.uuid('pick a customer'),
+    kitId: z.uuid('is not a kit id').optional(),
+    assetIds: z.array(z.uuid('is not an asset id')).max(200).optional(),
+    startsOn: isoDate,
+    endsOn: isoDate,
+    note: z.string().trim().max(2000).optional(),
+  })
+  .refine((q) => q.startsOn <= q.endsOn, { message: 'must be on or after the start', path: ['endsOn'] })
+  .refine((q) => (q.assetIds?.length ?? 0) > 0 || !!q.kitId, { message: 'pick a kit or at least one asset', path: ['assetIds'] });
+
+export const rentalListQuery = z.object({
+  view: z.enum(['open', 'to_settle', 'all']).default('open'),
+  customerId: z.uuid().optional(),
+  limit: z.coerce.number().int().min(1).max(500).default(50),
+  offset: z.coerce.number().int().min(0).default(0),
+});
+
+/** A payment method made by the provider's card form (locally: one of its published test cards). Never a card number. */
+export const depositPayload = z.object({
+  paymentMethod: z
+    .string()
+    .trim()
+    .regex(/^pm_[A-Za-z0-9_]+$/, 'pick a card (a payment method id from the card form)'),
+});
+
+export const capturePayload = z.object({
+  amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing; release the hold instead').max(1e9),
+  reason: z.string().trim().min(3, 'say what the money is for').max(500),
+});
+
+export const chargePayload = z.object({ amountMinor: minor });
+
+export const creditNotePayload = z.object({
+  reason: z.string().trim().min(3, 'say why the invoice is corrected').max(500),
+  amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing').max(1e9).optional(),
+});
+
+export const invoiceListQuery = z.object({
+  kind: z.enum(['invoice', 'credit_note']).optional(),
+  customerId: z.uuid().optional(),
+  limit: z.coerce.number().int().min(1).max(500).default(50),
+  offset: z.coerce.number().int().min(0).default(0),
+});
+
+const month = z.string().regex(/^\d{4}-\d{2}$/, 'must be a month YYYY-MM');
+export const revenueQuery = z.object({ from: month, to: month }).refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });
+export const utilisationQuery = z.object({ from: isoDate, to: isoDate }).refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });

@@ -49,25 +49,8 @@ export function useDateFormat() {
   );
 }
 
-/** Digits after the decimal point for an ISO 4217 currency (EUR 2, JPY 0). */
-export function currencyDigits(currency: string): number {
-  try {
-    return new Intl.NumberFormat(locale, { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
-  } catch {
-    return 2;
-  }
-}
-
-/** Integer minor units (cents) as money in the given currency. */
-export function formatMoney(minor: number | null | undefined, currency: string): string {
-  if (minor === null || minor === undefined) return '—';
-  const digits = currencyDigits(currency);
-  try {
-    return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(minor / 10 ** digits);
-  } catch {
-    return `${(minor / 10 ** digits).toFixed(digits)} ${currency}`;
-  }
-}
+/** Money helpers live in shared/ so invoices and screens print amounts alike. */
+export { currencyExponent as currencyDigits, formatMoney } from '../../shared/billing/money';
 
 /** A plain number with at most `digits` decimals, in the browser's locale. */
 export function formatNumber(value: number, digits = 1): string {

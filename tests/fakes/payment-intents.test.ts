@@ -40,7 +40,7 @@ describe('payment-provider fake: payment methods, manual-capture intents, refund
 
   beforeAll(async () => {
     fake = await startPaymentFake({ port: 0 });
-    stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http' });
+    stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
   });
   afterAll(async () => {
     await fake.close();
@@ -303,7 +303,7 @@ describe('payment-provider fake: authorizations lapse on their own as the clock 
   it('cancels an uncaptured hold when POST /__fake/clock moves past capture_before, with a payment_intent.canceled event', async () => {
     const fake = await startPaymentFake({ port: 0 });
     try {
-      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http' });
+      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
       const pi = await stripe.paymentIntents.create({ amount: 6_000, currency: 'gbp', payment_method: 'pm_card_visa', capture_method: 'manual', confirm: true });
       const before = await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`).then((r) => r.json() as Promise<{ now: number }>);
       const moved = await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, {

@@ -56,7 +56,7 @@ describe('payment-provider fake: signed webhooks and events', () => {
   beforeAll(async () => {
     receiver = await startReceiver();
     fake = await startPaymentFake({ port: 0, webhookUrl: receiver.url, webhookSecret: WEBHOOK_SECRET, webhookRetryDelaysMs: [50, 100, 200] });
-    stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http' });
+    stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
   });
   afterAll(async () => {
     await fake.close();
@@ -149,7 +149,7 @@ describe('payment-provider fake: webhook retries', () => {
     const receiver = await startReceiver(2);
     const fake = await startPaymentFake({ port: 0, webhookUrl: receiver.url, webhookSecret: WEBHOOK_SECRET, webhookRetryDelaysMs: [30, 60, 120] });
     try {
-      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http' });
+      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
       const pi = await stripe.paymentIntents.create({ amount: 1_000, currency: 'gbp' });
       const event = (await stripe.events.list({ type: 'payment_intent.created' })).data[0]!;
       expect((event.data.object as Stripe.PaymentIntent).id).toBe(pi.id);
@@ -177,7 +177,7 @@ describe('payment-provider fake: webhook retries', () => {
   it('sends nothing when no endpoint is configured, but still records events', async () => {
     const fake = await startPaymentFake({ port: 0 });
     try {
-      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http' });
+      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
       await stripe.paymentIntents.create({ amount: 1_000, currency: 'gbp', payment_method: 'pm_card_visa', capture_method: 'manual', confirm: true });
       const list = await stripe.events.list();
       expect(list.data.map((e) => e.type)).toContain('payment_intent.amount_capturable_updated');

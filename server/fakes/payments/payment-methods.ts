@@ -185,9 +185,9 @@ export const paymentMethods: PaymentResource = {
     });
 
     // https://docs.stripe.com/api/payment_methods/attach — a payment method
-    // belongs to at most one customer.
+    // belongs to at most one customer. A published `pm_card_*` id attaches a fresh copy.
     router.post('/v1/payment_methods/:id/attach', (req, res) => {
-      const pm = find(req.params.id);
+      const pm = resolvePaymentMethod(store, req.params.id, 'id');
       const p = parseParams(attachSchema, req.body);
       findCustomer(store, p.customer);
       if (pm.customer && pm.customer !== p.customer) {

@@ -1,0 +1,69 @@
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import type { HoldState } from '../../shared/billing/views';
+import { OrgOwned } from '../db/org-owned';
+import { Rental } from '../rentals/rental.entity';
+
+/**
+ * One PaymentIntent for a rental: a deposit authorization (`hold`, manual
+ * capture) or a charge above the hold (`charge`). Declined attempts stay on
+ * record; a renewal marks the hold it replaced.
+ */
+@Entity({ name: 'deposit_holds' })
+@Index(['organizationId', 'rentalId'])
+@Index(['state', 'captureBefore'])
+export class DepositHold extends OrgOwned {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'rental_id', type: 'uuid' })
+  rentalId: string;
+
+  @ManyToOne(() => Rental, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'rental_id' })
+  rental?: Rental;
+
+  @Column({ type: 'text', default: 'hold' })
+  kind: 'hold' | 'charge';
+
+  @Index({ unique: true, where: '"payment_intent_id" IS NOT NULL' })
+  @Column({ name: 'payment_intent_id', type: 'text', nullable: true })
+  paymentIntentId: string | null;
+
+  /** The Idempotency-Key the provider saw when this was created. */
+  @Index({ unique: true })
+  @Column({ name: 'idempotency_key', type: 'text' })
+  idempotencyKey: string;
+
+  @Column({ type: 'text' })
+  state: HoldState;
+
+  @Column({ name: 'amount_minor', type: 'integer' })
+  amountMinor: number;
+
+  @Column({ name: 'captured_minor', type: 'integer', default: 0 })
+  capturedMinor: number;
+
+  @Column({ name: 'card_brand', type: 'text', nullable: true })
+  cardBrand: string | null;
+
+  @Column({ name: 'card_last4', type: 'text', nullable: true })
+  cardLast4: string | null;
+
+  @Column({ name: 'capture_before', type: 'timestamptz', nullable: true })
+  captureBefore: Date | null;
+
+  @Column({ name: 'initiated_by', type: 'text' })
+  initiatedBy: 'customer' | 'merchant';
+
+  @Column({ name: 'failure_message', type: 'text', nullable: true })
+  failureMessage: string | null;
+
+  @Column({ name: 'capture_reason', type: 'text', nullable: true })
+  captureReason: string | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @Column({ name: 'settled_at', type: 'timestamptz', nullable: true })
+  settledAt: Date | null;
+}

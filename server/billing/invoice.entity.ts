@@ -1,0 +1,102 @@
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import type { InvoiceLine, InvoiceView } from '../../shared/billing/views';
+import { OrgOwned } from '../db/org-owned';
+import { Customer } from '../rentals/customer.entity';
+import { Rental } from '../rentals/rental.entity';
+
+/**
+ * An issued invoice or credit note. Append-only (a database trigger refuses
+ * updates and deletes): a mistake is corrected by a credit note, never by an edit.
+ */
+@Entity({ name: 'invoices' })
+@Index(['organizationId', 'number'], { unique: true })
+@Index(['rentalId'], { unique: true, where: `"kind" = 'invoice'` })
+@Index(['organizationId', 'issuedAt'])
+export class Invoice extends OrgOwned {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ type: 'text' })
+  kind: 'invoice' | 'credit_note';
+
+  @Column({ type: 'text' })
+  number: string;
+
+  @Column({ name: 'rental_id', type: 'uuid' })
+  rentalId: string;
+
+  @ManyToOne(() => Rental, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'rental_id' })
+  rental?: Rental;
+
+  @Column({ name: 'customer_id', type: 'uuid' })
+  customerId: string;
+
+  @ManyToOne(() => Customer, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'customer_id' })
+  customerRow?: Customer;
+
+  @Column({ name: 'corrects_invoice_id', type: 'uuid', nullable: true })
+  correctsInvoiceId: string | null;
+
+  @ManyToOne(() => Invoice, { onDelete: 'RESTRICT', nullable: true })
+  @JoinColumn({ name: 'corrects_invoice_id' })
+  corrects?: Invoice | null;
+
+  @Column({ name: 'issued_on', type: 'date' })
+  issuedOn: string;
+
+  @Column({ name: 'issued_at', type: 'timestamptz' })
+  issuedAt: Date;
+
+  @Column({ name: 'issued_by', type: 'uuid' })
+  issuedBy: string;
+
+  @Column({ type: 'text' })
+  currency: string;
+
+  @Column({ type: 'jsonb' })
+  lines: InvoiceLine[];
+
+  @Column({ name: 'subtotal_minor', type: 'integer' })
+  subtotalMinor: number;
+
+  @Column({ name: 'tax_rate_basis_points', type: 'integer' })
+  taxRateBasisPoints: number;
+
+  @Column({ name: 'tax_minor', type: 'integer' })
+  taxMinor: number;
+
+  @Column({ name: 'total_minor', type: 'integer' })
+  totalMinor: number;
+
+  @Column({ name: 'deposit_captured_minor', type: 'integer' })
+  depositCapturedMinor: number;
+
+  @Column({ name: 'card_charged_minor', type: 'integer' })
+  cardChargedMinor: number;
+
+  @Column({ name: 'balance_minor', type: 'integer' })
+  balanceMinor: number;
+
+  /** The customer's billing details as they were on the day of issue. */
+  @Column({ type: 'jsonb' })
+  customer: InvoiceView['customer'];
+
+  /** Why a credit note was issued. */
+  @Column({ type: 'text', nullable: true })
+  reason: string | null;
+}
+
+/** The last number issued per organization and series; bumped in the issuing transaction, so numbers have no gaps. */
+@Entity({ name: 'document_counters' })
+export class DocumentCounter {
+  @Column({ name: 'organization_id', type: 'uuid', primary: true })
+  organizationId: string;
+
+  @Column({ type: 'text', primary: true })
+  series: string;
+
+  @Column({ name: 'last_number', type: 'integer' })
+  lastNumber: number;
+}

@@ -1,0 +1,197 @@
+import { In, type DataSource } from 'typeorm';
+import type { z } from 'zod';
+import Papa from 'papaparse';
+import { taxMinor } from '../../shared/billing/quote';
+import { formatMoney } from '../../shared/billing/money';
+import type { InvoiceView } from '../../shared/billing/views';
+import type { creditNotePayload, invoiceListQuery } from '../../shared/schemas/rentals';
+import { recordAudit } from '../audit/audit.service';
+import { Booking } from '../bookings/booking.entity';
+import type { Scoped } from '../db/scoped';
+import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
+import { invoicePdf } from '../documents/invoice-pdf';
+import { conflict, ruleBroken } from '../http/errors';
+import { enqueueMail } from '../notifications/outbox';
+import { loadOrgContext } from '../organizations/org-context';
+import { Customer } from '../rentals/customer.entity';
+import { invoiceSummaries, loadRentalView } from '../rentals/rental-view';
+import { lockRental } from './deposits.service';
+import { Invoice } from './invoice.entity';
+import { nextNumber, padded } from './numbering';
+
+/**
+ * Invoices and credit notes: numbered per firm and year without gaps (the
+ * counter is taken in the issuing transaction), never edited, each e-mailed
+ * to the customer's billing contact with its PDF through the outbox.
+ */
+export class InvoicesService {
+  constructor(private readonly db: DataSource) {}
+
+  issue(actor: Actor, rentalId: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const rental = await lockRental(tx, rentalId);
+      const existing = await tx.findOne(Invoice, { rentalId, kind: 'invoice' });
+      if (existing) throw conflict(`Rental ${rental.number} is already invoiced as ${existing.number}; correct it with a credit note.`);
+      const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking');
+      if (booking.state !== 'returned') throw ruleBroken('booking_state', `The invoice is issued once the kit is back; this rental is ${booking.state}.`);
+      const view = await loadRentalView(tx, rental);
+      if (view.deposit.state === 'authorized') throw ruleBroken('deposit_unsettled', 'Capture or release the deposit hold first, so the invoice can show what was taken.');
+      const unpriced = view.charges.filter((c) => c.amountMinor === null);
+      if (unpriced.length) throw ruleBroken('charge_unpriced', `Set a charge (or 0) for: ${unpriced.map((c) => c.assetTag).join(', ')}.`);
+      const customer = await tx.get(Customer, { id: rental.customerId }, 'That customer');
+      const s = view.settlement;
+      return this.write(tx, actor, {
+        kind: 'invoice',
+        number: await this.number(tx, 'invoice'),
+        rentalId,
+        customer,
+        correctsInvoiceId: null,
+        currency: rental.currency,
+        lines: s.lines,
+        subtotalMinor: s.subtotalMinor,
+        taxRateBasisPoints: rental.quote.taxRateBasisPoints,
+        taxMinor: s.taxMinor,
+        totalMinor: s.totalMinor,
+        depositCapturedMinor: s.depositCapturedMinor,
+        cardChargedMinor: s.cardChargedMinor,
+        balanceMinor: s.balanceMinor,
+        reason: null,
+      });
+    });
+  }
+
+  /** Corrects an issued invoice by crediting part or all of its net amount (tax at the invoice's rate). */
+  creditNote(actor: Actor, invoiceId: string, input: z.infer<typeof creditNotePayload>) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const invoice = await tx.get(Invoice, { id: invoiceId, kind: 'invoice' }, 'That invoice');
+      await lockRental(tx, invoice.rentalId);
+      const credited = (await tx.find(Invoice, { where: { correctsInvoiceId: invoice.id } })).reduce((s, c) => s + c.subtotalMinor, 0);
+      const left = invoice.subtotalMinor - credited;
+      const amount = input.amountMinor ?? left;
+      if (amount <= 0 || amount > left) {
+        throw ruleBroken('credit_too_large', `At most ${formatMoney(left, invoice.currency, 'en-GB')} (net) of invoice ${invoice.number} is left to credit.`, { leftMinor: left });
+      }
+      const tax = taxMinor(amount, invoice.taxRateBasisPoints);
+      const customer = await tx.get(Customer, { id: invoice.customerId }, 'That customer');
+      return this.write(tx, actor, {
+        kind: 'credit_note',
+        number: await this.number(tx, 'credit_note'),
+        rentalId: invoice.rentalId,
+        customer,
+        correctsInvoiceId: invoice.id,
+        currency: invoice.currency,
+        lines: [{ kind: 'credit', description: `Credit against invoice ${invoice.number}: ${input.reason}`, quantity: 1, unitMinor: amount, amountMinor: amount }],
+        subtotalMinor: amount,
+        taxRateBasisPoints: invoice.taxRateBasisPoints,
+        taxMinor: tax,
+        totalMinor: amount + tax,
+        depositCapturedMinor: 0,
+        cardChargedMinor: 0,
+        balanceMinor: -(amount + tax),
+        reason: input.reason,
+      });
+    });
+  }
+
+  list(actor: Actor, q: z.infer<typeof invoiceListQuery>) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const qb = tx.select(Invoice, 'i').orderBy('i.issued_at', 'DESC').addOrderBy('i.number', 'DESC');
+      if (q.kind) qb.andWhere('i.kind = :kind', { kind: q.kind });
+      if (q.customerId) qb.andWhere('i.customer_id = :customerId', { customerId: q.customerId });
+      const [rows, total] = await qb.take(q.limit).skip(q.offset).getManyAndCount();
+      return { items: await this.summaries(tx, rows), total };
+    });
+  }
+
+  get(actor: Actor, id: string) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => this.view(tx, await tx.get(Invoice, { id }, 'That invoice')));
+  }
+
+  async pdf(actor: Actor, id: string) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => this.render(tx, await this.view(tx, await tx.get(Invoice, { id }, 'That invoice'))));
+  }
+
+  /** The rental's invoice (its latest document when credit notes followed). */
+  async rentalPdf(actor: Actor, rentalId: string) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const invoice = await tx.findOne(Invoice, { rentalId, kind: 'invoice' });
+      if (!invoice) throw ruleBroken('not_invoiced', 'This rental has no invoice yet.');
+      return this.render(tx, await this.view(tx, invoice));
+    });
+  }
+
+  /** Every invoice and credit note as CSV (RFC 4180 by papaparse), amounts in major units. */
+  async csv(actor: Actor) {
+    const { items } = await this.list(actor, { limit: 100_000, offset: 0 } as z.infer<typeof invoiceListQuery>);
+    return Papa.unparse(
+      items.map((i) => ({
+        number: i.number,
+        kind: i.kind,
+        issued_on: i.issuedOn,
+        customer: i.customerCompany,
+        corrects: i.correctsNumber ?? '',
+        currency: i.currency,
+        subtotal_minor: i.subtotalMinor,
+        tax_minor: i.taxMinor,
+        total_minor: i.totalMinor,
+        deposit_captured_minor: i.depositCapturedMinor,
+        card_charged_minor: i.cardChargedMinor,
+        balance_minor: i.balanceMinor,
+        credited_minor: i.creditedMinor,
+      })),
+    );
+  }
+
+  private async number(tx: Scoped, kind: Invoice['kind']) {
+    const year = (await loadOrgContext(tx)).today.slice(0, 4);
+    const n = await nextNumber(tx, `${kind}:${year}`);
+    return kind === 'invoice' ? `${year}-${padded(n)}` : `CN-${year}-${padded(n)}`;
+  }
+
+  private async write(tx: Scoped, actor: Actor, v: Omit<Invoice, 'id' | 'organizationId' | 'issuedOn' | 'issuedAt' | 'issuedBy' | 'customer' | 'customerId'> & { customer: Customer }) {
+    const ctx = await loadOrgContext(tx);
+    const { customer, ...rest } = v;
+    const invoice = await tx.insert(Invoice, {
+      ...rest,
+      customerId: customer.id,
+      customer: { company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail, address: customer.address, taxNumber: customer.taxNumber },
+      issuedOn: ctx.today,
+      issuedAt: new Date(),
+      issuedBy: actor.userId,
+    });
+    await recordAudit(tx, actor, v.kind === 'invoice' ? 'invoice.issued' : 'credit_note.issued', { type: 'invoice', id: invoice.id }, { number: invoice.number, totalMinor: invoice.totalMinor, rentalId: invoice.rentalId });
+    const view = await this.view(tx, invoice);
+    const title = v.kind === 'invoice' ? `Invoice ${view.number}` : `Credit note ${view.number}`;
+    await enqueueMail(
+      tx,
+      [customer.billingEmail],
+      {
+        subject: `${title} from ${ctx.name}`,
+        heading: title,
+        paragraphs: [
+          `${customer.billingContact ? `Dear ${customer.billingContact}, please` : 'Please'} find ${v.kind === 'invoice' ? 'our invoice' : 'our credit note'} ${view.number} attached (${formatMoney(view.totalMinor, view.currency, 'en-GB')}).`,
+          v.kind === 'invoice' ? (view.balanceMinor > 0 ? `Balance due: ${formatMoney(view.balanceMinor, view.currency, 'en-GB')}.` : 'Nothing is left to pay.') : `It corrects invoice ${view.correctsNumber}: ${view.reason}`,
+        ],
+      },
+      [{ fileName: `${v.kind === 'invoice' ? 'invoice' : 'credit-note'}-${view.number}.pdf`, contentType: 'application/pdf', content: (await this.render(tx, view)).pdf }],
+    );
+    return view;
+  }
+
+  /** Summaries of `rows`, each knowing its corrected invoice's number and what was credited against it. */
+  private async summaries(tx: Scoped, rows: Invoice[]) {
+    if (!rows.length) return [];
+    const siblings = await tx.find(Invoice, { where: { rentalId: In([...new Set(rows.map((r) => r.rentalId))]) } });
+    return rows.map((r) => invoiceSummaries(siblings.filter((i) => i.rentalId === r.rentalId), r.customer.company).find((s) => s.id === r.id)!);
+  }
+
+  private async view(tx: Scoped, invoice: Invoice): Promise<InvoiceView> {
+    const [summary] = await this.summaries(tx, [invoice]);
+    return { ...summary, lines: invoice.lines, taxRateBasisPoints: invoice.taxRateBasisPoints, customer: invoice.customer, issuedAt: invoice.issuedAt.toISOString() };
+  }
+
+  private async render(tx: Scoped, invoice: InvoiceView) {
+    const ctx = await loadOrgContext(tx);
+    return { pdf: await invoicePdf({ firm: { name: ctx.name, timeZone: ctx.timeZone }, invoice }), number: invoice.number, kind: invoice.kind };
+  }
+}

@@ -1,0 +1,104 @@
+import Stripe from 'stripe';
+import { AppError } from '../http/errors';
+
+/** What Nestkeeper needs from a PaymentIntent. */
+export type IntentOutcome =
+  | { ok: true; id: string; status: string; amountMinor: number; capturedMinor: number; captureBefore: Date | null; cardBrand: string | null; cardLast4: string | null }
+  | { ok: false; id: string | null; message: string; declineCode: string | null };
+
+const cardOf = (charge: Stripe.Charge | string | null) => (charge && typeof charge === 'object' ? charge.payment_method_details?.card : undefined);
+
+function outcome(pi: Stripe.PaymentIntent): IntentOutcome {
+  const card = cardOf(pi.latest_charge as Stripe.Charge | string | null);
+  const captureBefore = (card as { capture_before?: number } | undefined)?.capture_before;
+  return {
+    ok: true,
+    id: pi.id,
+    status: pi.status,
+    amountMinor: pi.amount,
+    capturedMinor: pi.amount_received,
+    captureBefore: captureBefore ? new Date(captureBefore * 1000) : null,
+    cardBrand: card?.brand ?? null,
+    cardLast4: card?.last4 ?? null,
+  };
+}
+
+/** The provider could not be reached or failed on its side: nothing to show the customer, try again (same key, no double charge). */
+const unavailable = (err: Error) =>
+  new AppError(502, 'payment_unavailable', `The payment provider did not answer (${err.message}). Try again: a repeated request is recognised, so nothing is charged twice.`);
+
+/** Turns the SDK's errors into the API's: card declines come back as outcomes, outages as 502, the rest as 422 naming the provider's words. */
+async function call<T>(work: () => Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (err) {
+    if (err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError || (err instanceof Stripe.errors.StripeError && (err.statusCode ?? 0) >= 500)) throw unavailable(err);
+    if (err instanceof Stripe.errors.StripeIdempotencyError) throw new AppError(409, 'conflict', 'A different request with the same purpose is already under way at the payment provider; reload and try again.');
+    if (err instanceof Stripe.errors.StripeError) throw new AppError(422, 'payment_refused', `The payment provider refused: ${err.message}`, { providerCode: err.code ?? null });
+    throw err;
+  }
+}
+
+/**
+ * The provider operations behind deposits, each with the idempotency key the
+ * caller derives from the operation (a retry after a timeout replays the
+ * first answer instead of charging again).
+ */
+export class PaymentGateway {
+  constructor(readonly client: Stripe) {}
+
+  /** The provider's customer record for one of our customers. */
+  async ensureCustomer(customer: { id: string; company: string; billingEmail: string }): Promise<string> {
+    const created = await call(() => this.client.customers.create({ name: customer.company, email: customer.billingEmail, metadata: { nestkeeperCustomerId: customer.id } }, { idempotencyKey: `customer:${customer.id}` }));
+    return created.id;
+  }
+
+  /** Saves the card the customer presented (a payment method made by the provider's card form) to their record. */
+  async saveCard(paymentMethod: string, providerCustomer: string, key: string): Promise<string> {
+    const pm = await call(() => this.client.paymentMethods.attach(paymentMethod, { customer: providerCustomer }, { idempotencyKey: key }));
+    return pm.id;
+  }
+
+  /** Places a hold (manual capture) or, with `capture: 'automatic'`, charges at once. Declines come back as `ok: false`. */
+  async confirmIntent(p: { amountMinor: number; currency: string; customer: string; paymentMethod: string; capture: 'manual' | 'automatic'; offSession: boolean; description: string; metadata: Record<string, string>; key: string }): Promise<IntentOutcome> {
+    const create = () =>
+      this.client.paymentIntents.create(
+        {
+          amount: p.amountMinor,
+          currency: p.currency.toLowerCase(),
+          customer: p.customer,
+          payment_method: p.paymentMethod,
+          capture_method: p.capture,
+          confirm: true,
+          ...(p.offSession ? { off_session: true } : {}),
+          description: p.description,
+          metadata: p.metadata,
+          expand: ['latest_charge'],
+        },
+        { idempotencyKey: p.key },
+      );
+    try {
+      return outcome(await create());
+    } catch (err) {
+      if (err instanceof Stripe.errors.StripeCardError) return { ok: false, id: err.payment_intent?.id ?? null, message: err.message, declineCode: err.decline_code ?? null };
+      return call(() => Promise.reject(err));
+    }
+  }
+
+  async capture(intentId: string, amountMinor: number, key: string): Promise<IntentOutcome> {
+    return outcome(await call(() => this.client.paymentIntents.capture(intentId, { amount_to_capture: amountMinor, expand: ['latest_charge'] }, { idempotencyKey: key })));
+  }
+
+  async cancel(intentId: string, key: string): Promise<IntentOutcome> {
+    return outcome(await call(() => this.client.paymentIntents.cancel(intentId, { cancellation_reason: 'requested_by_customer', expand: ['latest_charge'] }, { idempotencyKey: key })));
+  }
+
+  async retrieve(intentId: string): Promise<Stripe.PaymentIntent> {
+    return call(() => this.client.paymentIntents.retrieve(intentId, { expand: ['latest_charge'] }));
+  }
+
+  /** Checks the provider's signature on a webhook delivery (the SDK's own check, tolerance 5 minutes). */
+  verifyEvent(rawBody: Buffer, signature: string, secret: string): Stripe.Event {
+    return this.client.webhooks.constructEvent(rawBody, signature, secret);
+  }
+}

@@ -1,0 +1,84 @@
+import { PDFDocument, type PDFPage } from 'pdf-lib';
+import { calendarDate, heading, table, typeTitle } from './document-layout';
+import { MM, renderPdf } from './pdf';
+
+export type CertificateEntry = {
+  assetTag: string;
+  type: string;
+  serialNumber: string;
+  model: string | null;
+  certificateNumber: string | null;
+  performedOn: string | null;
+  dueOn: string | null;
+  provider: string | null;
+  pdf: Buffer | null;
+};
+
+type PackInput = { firm: { name: string }; rentalNumber: string; customerCompany: string; startsOn: string; endsOn: string; entries: CertificateEntry[] };
+
+/** The certificate's pages copied into `pack`, or why there are none. An unreadable file must not sink the pack. */
+async function certificatePages(pack: PDFDocument, pdf: Buffer | null): Promise<PDFPage[] | 'missing' | 'unreadable'> {
+  if (!pdf) return 'missing';
+  try {
+    const source = await PDFDocument.load(pdf);
+    return await pack.copyPages(source, source.getPageIndices());
+  } catch {
+    return 'unreadable';
+  }
+}
+
+const statusText = { missing: 'no certificate on file', unreadable: 'certificate could not be read' } as const;
+const dateOrDash = (d: string | null) => (d ? calendarDate(d) : '—');
+
+type Found = Awaited<ReturnType<typeof certificatePages>>;
+
+function coverPdf(input: PackInput, found: Found[]) {
+  return renderPdf({ size: 'A4', margin: 18 * MM }, (doc) => {
+    heading(doc, input.firm.name, `Certificate pack — rental ${input.rentalNumber}`, [
+      `${input.customerCompany} · ${calendarDate(input.startsOn)} to ${calendarDate(input.endsOn)}, both days included`,
+      'This pack lets you show your own auditors that the rented kit was in calibration for the rental. The certificates follow this page in the order listed.',
+    ]);
+    table(
+      doc,
+      [
+        { header: 'Tag', share: 0.11, mono: true },
+        { header: 'Type', share: 0.12 },
+        { header: 'Serial', share: 0.13, mono: true },
+        { header: 'Certificate', share: 0.13 },
+        { header: 'Calibrated on', share: 0.11 },
+        { header: 'Due on', share: 0.11 },
+        { header: 'Provider', share: 0.14 },
+        { header: 'File', share: 0.15 },
+      ],
+      input.entries.map((e, i) => {
+        const pages = found[i];
+        return [
+          e.assetTag,
+          [typeTitle(e.type), e.model].filter(Boolean).join(' '),
+          e.serialNumber,
+          e.certificateNumber ?? '—',
+          dateOrDash(e.performedOn),
+          dateOrDash(e.dueOn),
+          e.provider ?? '—',
+          Array.isArray(pages) ? 'certificate attached' : statusText[pages],
+        ];
+      }),
+      8,
+    );
+  });
+}
+
+/** One PDF for the renter: a cover listing every item, then each item's certificate pages in entry order. */
+export async function certificatePackPdf(input: PackInput): Promise<Buffer> {
+  const pack = await PDFDocument.create();
+  const found: Found[] = [];
+  for (const entry of input.entries) found.push(await certificatePages(pack, entry.pdf));
+  const cover = await PDFDocument.load(await coverPdf(input, found));
+  for (const page of await pack.copyPages(cover, cover.getPageIndices())) pack.addPage(page);
+  for (const pages of found) if (Array.isArray(pages)) pages.forEach((p) => pack.addPage(p));
+  pack.setTitle(`Certificate pack ${input.rentalNumber}`);
+  pack.setSubject(`${input.customerCompany}, ${input.startsOn} to ${input.endsOn}`);
+  pack.setProducer('Nestkeeper');
+  pack.setCreator('Nestkeeper');
+  return Buffer.from(await pack.save());
+}

@@ -1,0 +1,127 @@
+/**
+ * Layout pieces shared by the rental documents (agreement, invoice, certificate
+ * pack cover): heading, sections, a paginating table and a totals block, in the
+ * house style of the other Nestkeeper PDFs.
+ */
+import { formatMoney } from '../../shared/billing/money';
+import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
+import { BRASS, INK, MM, MUTED, type Pdf } from './pdf';
+
+/** Printed documents use one locale so a customer's copy reads the same whoever prints it. */
+const LOCALE = 'en-GB';
+const BODY = 9;
+
+export const money = (minor: number, currency: string) => formatMoney(minor, currency, LOCALE);
+
+/** 1 900 basis points → "19 %". */
+export const taxRateText = (basisPoints: number) => `${new Intl.NumberFormat(LOCALE, { maximumFractionDigits: 2 }).format(basisPoints / 100)} %`;
+
+/** A calendar date `YYYY-MM-DD` is already the firm's date: format it in UTC so it does not shift. */
+export const calendarDate = (isoDate: string) => new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
+
+/** A moment (ISO timestamp) as the firm's wall-clock date and time. */
+export const firmDateTime = (iso: string, timeZone: string) => new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeStyle: 'short', timeZone }).format(new Date(iso));
+
+export const typeTitle = (type: string) => assetTypeTitles[type as AssetType] ?? type;
+
+export const contentWidth = (doc: Pdf) => doc.page.width - doc.page.margins.left - doc.page.margins.right;
+const bottom = (doc: Pdf) => doc.page.height - doc.page.margins.bottom;
+
+/** pdfkit breaks pages only for flowing text; anything placed at an explicit y asks here first. */
+export function keepTogether(doc: Pdf, height: number) {
+  if (doc.y + height > bottom(doc)) doc.addPage();
+}
+
+export function heading(doc: Pdf, firm: string, title: string, notes: string[] = []) {
+  doc.font('Helvetica').fontSize(BODY).fillColor(MUTED).text(firm);
+  doc.font('Helvetica-Bold').fontSize(16).fillColor(INK).text(title);
+  doc.font('Helvetica').fontSize(BODY).fillColor(MUTED);
+  for (const note of notes) doc.text(note);
+  doc.fillColor(INK).moveDown(0.8);
+}
+
+/** A brass rule and a title, kept on the page with at least a few lines of what follows. */
+export function section(doc: Pdf, title: string) {
+  keepTogether(doc, 60);
+  const left = doc.page.margins.left;
+  doc.moveDown(0.6);
+  doc.save().rect(left, doc.y, contentWidth(doc), 2).fill(BRASS).restore();
+  doc.moveDown(0.5);
+  doc.font('Helvetica-Bold').fontSize(11).fillColor(INK).text(title, left);
+  doc.font('Helvetica').fontSize(BODY).moveDown(0.3);
+}
+
+/** Label–value lines (a customer block, rental dates); a line whose value is null is left out. */
+export function facts(doc: Pdf, rows: [label: string, value: string | null][]) {
+  const left = doc.page.margins.left;
+  for (const [label, value] of rows) {
+    if (value === null) continue;
+    keepTogether(doc, 14);
+    const y = doc.y;
+    doc.font('Helvetica').fontSize(BODY).fillColor(MUTED).text(label, left, y, { width: 40 * MM });
+    const labelEnd = doc.y;
+    doc.fillColor(INK).text(value, left + 42 * MM, y, { width: contentWidth(doc) - 42 * MM });
+    doc.x = left;
+    doc.y = Math.max(doc.y, labelEnd);
+  }
+}
+
+export function bullets(doc: Pdf, lines: string[]) {
+  const left = doc.page.margins.left;
+  doc.font('Helvetica').fontSize(BODY).fillColor(INK);
+  for (const line of lines) doc.text(`•  ${line}`, left, doc.y, { width: contentWidth(doc), paragraphGap: 2 });
+}
+
+/** `share` is the column's part of the content width; `mono` prints tags and serials in the mono face. */
+export type Column = { header: string; share: number; mono?: boolean; right?: boolean };
+
+const GAP = 2 * MM;
+const cellFont = (column: Column, header: boolean) => (header ? 'Helvetica-Bold' : column.mono ? 'Courier' : 'Helvetica');
+
+/** Rows wrap inside their cells; a new page repeats the header. */
+export function table(doc: Pdf, columns: Column[], rows: string[][], fontSize = BODY) {
+  const left = doc.page.margins.left;
+  const widths = columns.map((c) => c.share * contentWidth(doc));
+  const height = (cells: string[], header: boolean) =>
+    Math.max(...cells.map((text, i) => doc.font(cellFont(columns[i], header)).fontSize(fontSize).heightOfString(text, { width: widths[i] - GAP }))) + 3;
+  const draw = (cells: string[], header: boolean) => {
+    const y = doc.y;
+    let x = left;
+    doc.fillColor(header ? MUTED : INK);
+    cells.forEach((text, i) => {
+      doc.font(cellFont(columns[i], header)).fontSize(fontSize).text(text, x, y, { width: widths[i] - GAP, align: columns[i].right ? 'right' : 'left' });
+      x += widths[i];
+    });
+    doc.x = left;
+    doc.y = y + height(cells, header);
+    if (header) doc.save().strokeColor('#d8d1c2').lineWidth(0.5).moveTo(left, doc.y - 1.5).lineTo(left + contentWidth(doc), doc.y - 1.5).stroke().restore();
+  };
+  const header = columns.map((c) => c.header);
+  keepTogether(doc, height(header, true) + (rows[0] ? height(rows[0], false) : 0));
+  draw(header, true);
+  for (const row of rows) {
+    if (doc.y + height(row, false) > bottom(doc)) {
+      doc.addPage();
+      draw(header, true);
+    }
+    draw(row, false);
+  }
+  doc.font('Helvetica').fontSize(BODY).fillColor(INK);
+}
+
+/** Right-hand money lines under a table; `strong` lines print bold. */
+export function totals(doc: Pdf, rows: { label: string; value: string; strong?: boolean }[]) {
+  const width = contentWidth(doc);
+  const labelX = doc.page.margins.left + width * 0.4;
+  const valueX = doc.page.margins.left + width * 0.75;
+  keepTogether(doc, rows.length * 13 + 8);
+  doc.moveDown(0.4);
+  for (const row of rows) {
+    const y = doc.y;
+    doc.font(row.strong ? 'Helvetica-Bold' : 'Helvetica').fontSize(BODY).fillColor(INK);
+    doc.text(row.label, labelX, y, { width: valueX - labelX - GAP, align: 'right' });
+    doc.text(row.value, valueX, y, { width: width * 0.25 - GAP, align: 'right' });
+    doc.y = Math.max(doc.y, y + 13);
+  }
+  doc.x = doc.page.margins.left;
+}

@@ -1,0 +1,101 @@
+import type { Periods } from '../../shared/billing/quote';
+import { lateChargeMinor } from '../../shared/billing/quote';
+import type { RentalView } from '../../shared/billing/views';
+import { bullets, calendarDate, contentWidth, facts, firmDateTime, heading, keepTogether, money, section, table, taxRateText, totals, typeTitle } from './document-layout';
+import { INK, MM, MUTED, renderPdf, type Pdf } from './pdf';
+import { batteryCautions } from './shipping-sheet-pdf';
+
+/** DESIGN.md §6: the laser line joins the battery and lifting cautions the shipping sheet already prints. */
+export const rentalCautions = [
+  "Laser trackers emit a visible laser beam, commonly IEC 60825-1 Class 2 (the class on the instrument's label applies): do not stare into the beam and do not point it at anyone's eyes.",
+  ...batteryCautions,
+];
+
+/** { months: 1, weeks: 0, days: 2 } → "1 month, 2 days". */
+export const periodsText = (p: Periods) =>
+  (['months', 'weeks', 'days'] as const)
+    .filter((k) => p[k] > 0)
+    .map((k) => `${p[k]} ${p[k] === 1 ? k.slice(0, -1) : k}`)
+    .join(', ');
+
+function terms(rental: RentalView, currency: string) {
+  const late = rental.quote.lines
+    .map((l) => `${l.description}: ${money(l.rates.dayMinor, currency)} day rate + ${money(l.lateFeePerDayMinor, currency)} late fee = ${money(lateChargeMinor(1, l.rates, l.lateFeePerDayMinor), currency)} a day each`)
+    .join('; ');
+  return [
+    `Late return: for every day after ${calendarDate(rental.endsOn)} that an item is not back, it is charged its day rate plus a late fee per day, with tax on top. ${late}.`,
+    `Deposit: ${money(rental.depositMinor, currency)} is held on your card. It is a hold, not a charge; what is not needed is released when the kit is back.`,
+    'Damage or loss: the repair or replacement is charged against the deposit hold; any amount above the hold is charged to the same card.',
+    `Calibration: the kit is rented calibrated. The certificate pack for every item travels by e-mail to ${rental.customer.billingEmail}.`,
+    'Tell us at once about any drop, knock or damage: a knocked item may no longer measure true and must be checked before it is used again.',
+  ];
+}
+
+function signatureLines(doc: Pdf, parties: string[]) {
+  keepTogether(doc, 80);
+  doc.moveDown(3);
+  const y = doc.y;
+  const width = contentWidth(doc) / parties.length;
+  parties.forEach((party, i) => {
+    const x = doc.page.margins.left + i * width;
+    doc.save().strokeColor(INK).lineWidth(0.6).moveTo(x, y).lineTo(x + width - 12 * MM, y).stroke().restore();
+    doc.font('Helvetica-Bold').fontSize(9).fillColor(INK).text(`For ${party}`, x, y + 4, { width: width - 12 * MM });
+    doc.font('Helvetica').fillColor(MUTED).text('Name, signature and date', x, doc.y, { width: width - 12 * MM });
+  });
+  doc.x = doc.page.margins.left;
+}
+
+export function rentalAgreementPdf(input: { firm: { name: string; timeZone: string }; rental: RentalView }): Promise<Buffer> {
+  const { firm, rental } = input;
+  const { quote, currency } = rental;
+  return renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: `Rental agreement ${rental.number}` } }, (doc) => {
+    heading(doc, firm.name, `Rental agreement ${rental.number}`, [
+      `Booked ${firmDateTime(rental.createdAt, firm.timeZone)}${rental.checkedOutAt ? ` · handed over ${firmDateTime(rental.checkedOutAt, firm.timeZone)}` : ''}`,
+    ]);
+    facts(doc, [
+      ['Customer', rental.customer.company],
+      ['Billing contact', rental.customer.billingContact],
+      ['E-mail', rental.customer.billingEmail],
+      ['Rental', `${calendarDate(rental.startsOn)} to ${calendarDate(rental.endsOn)}, both days included: ${quote.days} ${quote.days === 1 ? 'day' : 'days'}`],
+      ['Kit', rental.kit?.name ?? null],
+      ['Note', rental.note || null],
+    ]);
+
+    section(doc, `Items (${rental.items.length})`);
+    table(
+      doc,
+      [
+        { header: 'Tag', share: 0.17, mono: true },
+        { header: 'Type', share: 0.22 },
+        { header: 'Maker and model', share: 0.36 },
+        { header: 'Serial number', share: 0.25, mono: true },
+      ],
+      rental.items.map((i) => [i.assetTag, typeTitle(i.type), [i.manufacturer, i.model].filter(Boolean).join(' ') || '—', i.serialNumber]),
+    );
+
+    section(doc, 'Price');
+    table(
+      doc,
+      [
+        { header: 'Description', share: 0.4 },
+        { header: 'Quantity', share: 0.12, right: true },
+        { header: 'Periods', share: 0.26 },
+        { header: 'Amount', share: 0.22, right: true },
+      ],
+      quote.lines.map((l) => [l.description, String(l.quantity), periodsText(l.periods), money(l.amountMinor, currency)]),
+    );
+    totals(doc, [
+      { label: 'Subtotal', value: money(quote.subtotalMinor, currency) },
+      { label: `Tax ${taxRateText(quote.taxRateBasisPoints)}`, value: money(quote.taxMinor, currency) },
+      { label: 'Total', value: money(quote.totalMinor, currency), strong: true },
+      { label: 'Deposit to be held on the card', value: money(rental.depositMinor, currency) },
+    ]);
+
+    section(doc, 'Terms');
+    bullets(doc, terms(rental, currency));
+    section(doc, 'Cautions');
+    bullets(doc, rentalCautions);
+
+    signatureLines(doc, [firm.name, rental.customer.company]);
+  });
+}

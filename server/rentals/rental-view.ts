@@ -1,0 +1,125 @@
+import { In } from 'typeorm';
+import { settle, lateDaysBetween } from '../../shared/billing/settlement';
+import type { DepositHoldView, DepositState, InvoiceSummary, RentalState, RentalView } from '../../shared/billing/views';
+import { todayIn } from '../../shared/calibration/due-date';
+import { Booking, BookingItem } from '../bookings/booking.entity';
+import { DepositHold } from '../billing/deposit-hold.entity';
+import { Invoice } from '../billing/invoice.entity';
+import type { Scoped } from '../db/scoped';
+import { Asset } from '../fleet/asset.entity';
+import { Incident } from '../incidents/incident.entity';
+import { loadOrgContext } from '../organizations/org-context';
+import { Customer } from './customer.entity';
+import type { Rental } from './rental.entity';
+
+export const holdView = (h: DepositHold): DepositHoldView & { kind: DepositHold['kind'] } => ({
+  id: h.id,
+  kind: h.kind,
+  state: h.state,
+  amountMinor: h.amountMinor,
+  capturedMinor: h.capturedMinor,
+  cardBrand: h.cardBrand,
+  cardLast4: h.cardLast4,
+  captureBefore: h.captureBefore?.toISOString() ?? null,
+  initiatedBy: h.initiatedBy,
+  failureMessage: h.failureMessage,
+  captureReason: h.captureReason,
+  createdAt: h.createdAt.toISOString(),
+  settledAt: h.settledAt?.toISOString() ?? null,
+});
+
+/** The deposit's state is its live hold's, else its newest hold's (a replaced hold no longer counts; a refused renewal leaves the live hold standing). */
+export function depositState(holds: DepositHold[]): { state: DepositState; hold: DepositHold | null } {
+  const candidates = holds.filter((h) => h.kind === 'hold' && h.state !== 'replaced').sort((a, b) => +b.createdAt - +a.createdAt);
+  const current = candidates.find((h) => h.state === 'authorized') ?? candidates[0];
+  if (!current) return { state: 'none', hold: null };
+  return { state: current.state as DepositState, hold: current };
+}
+
+export const invoiceSummary = (i: Invoice, correctsNumber: string | null, creditedMinor: number, customerCompany: string): InvoiceSummary => ({
+  id: i.id,
+  kind: i.kind,
+  number: i.number,
+  issuedOn: i.issuedOn,
+  rentalId: i.rentalId,
+  customerId: i.customerId,
+  customerCompany,
+  correctsInvoiceId: i.correctsInvoiceId,
+  correctsNumber,
+  currency: i.currency,
+  subtotalMinor: i.subtotalMinor,
+  taxMinor: i.taxMinor,
+  totalMinor: i.totalMinor,
+  depositCapturedMinor: i.depositCapturedMinor,
+  cardChargedMinor: i.cardChargedMinor,
+  balanceMinor: i.balanceMinor,
+  creditedMinor,
+  reason: i.reason,
+});
+
+/** Invoices of a rental with their credit notes' totals. */
+export function invoiceSummaries(invoices: Invoice[], customerCompany: string): InvoiceSummary[] {
+  const byId = new Map(invoices.map((i) => [i.id, i]));
+  return invoices.map((i) =>
+    invoiceSummary(
+      i,
+      i.correctsInvoiceId ? (byId.get(i.correctsInvoiceId)?.number ?? null) : null,
+      invoices.filter((c) => c.correctsInvoiceId === i.id).reduce((s, c) => s + c.subtotalMinor, 0),
+      customerCompany,
+    ),
+  );
+}
+
+export const rentalState = (booking: Booking, invoiced: boolean): RentalState => (booking.state === 'cancelled' ? 'cancelled' : invoiced ? 'invoiced' : booking.state);
+
+/** Everything the rental page shows, read in the caller's transaction. */
+export async function loadRentalView(tx: Scoped, rental: Rental): Promise<RentalView> {
+  const ctx = await loadOrgContext(tx);
+  const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking', { relations: { kit: true } });
+  const customer = await tx.get(Customer, { id: rental.customerId }, 'That customer');
+  const itemIds = (await tx.find(BookingItem, { where: { bookingId: booking.id } })).map((i) => i.assetId);
+  const assets = await tx.find(Asset, { where: { id: In(itemIds) }, order: { type: 'ASC', assetTag: 'ASC' } });
+  const holds = await tx.find(DepositHold, { where: { rentalId: rental.id }, order: { createdAt: 'ASC' } });
+  const incidents = await tx.find(Incident, { where: { bookingId: booking.id }, order: { createdAt: 'ASC' } });
+  const invoices = await tx.find(Invoice, { where: { rentalId: rental.id }, order: { issuedAt: 'ASC' } });
+  const deposit = depositState(holds);
+  const returnedOn = booking.returnedAt ? todayIn(ctx.timeZone, booking.returnedAt) : null;
+  const lateDays = booking.state === 'returned' || booking.state === 'out' ? lateDaysBetween(booking.endsOn, returnedOn ?? ctx.today) : 0;
+  const charges = incidents.map((i) => ({
+    incidentId: i.id,
+    assetId: i.assetId,
+    assetTag: assets.find((a) => a.id === i.assetId)?.assetTag ?? '',
+    kind: i.kind,
+    description: i.description,
+    amountMinor: i.chargeAmountMinor,
+  }));
+  const sum = (kind: DepositHold['kind']) => holds.filter((h) => h.kind === kind).reduce((s, h) => s + h.capturedMinor, 0);
+  return {
+    id: rental.id,
+    number: rental.number,
+    state: rentalState(booking, invoices.some((i) => i.kind === 'invoice')),
+    customer: { id: customer.id, company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail },
+    bookingId: booking.id,
+    kit: booking.kit ? { id: booking.kit.id, name: booking.kit.name } : null,
+    items: assets.map((a) => ({ id: a.id, assetTag: a.assetTag, type: a.type, serialNumber: a.serialNumber, model: a.model, manufacturer: a.manufacturer, replacementValueMinor: a.replacementValueMinor })),
+    startsOn: booking.startsOn,
+    endsOn: booking.endsOn,
+    note: rental.note,
+    quote: rental.quote,
+    currency: rental.currency,
+    depositMinor: rental.depositMinor,
+    deposit: { state: deposit.state, hold: deposit.hold ? holdView(deposit.hold) : null, holds: holds.map(holdView) },
+    checkedOutAt: booking.checkedOutAt?.toISOString() ?? null,
+    returnedAt: booking.returnedAt?.toISOString() ?? null,
+    charges,
+    settlement: settle({
+      quote: rental.quote,
+      lateDays,
+      damage: charges.filter((c) => c.amountMinor).map((c) => ({ description: `${c.assetTag} — ${c.kind === 'missing' ? 'not returned' : 'damage'}: ${c.description}`, amountMinor: c.amountMinor! })),
+      depositCapturedMinor: sum('hold'),
+      cardChargedMinor: sum('charge'),
+    }),
+    invoices: invoiceSummaries(invoices, customer.company),
+    createdAt: rental.createdAt.toISOString(),
+  };
+}

@@ -1,0 +1,54 @@
+import { DateTime } from 'luxon';
+import { describe, expect, it } from 'vitest';
+import { lateDaysBetween, settle } from './settlement';
+import type { Quote } from './views';
+
+// Two SMRs for 13 days at day 15.00 / week 75.00 / month 240.00, late fee 5.00 a day, tax 19 %.
+const quote: Quote = {
+  days: 13,
+  startsOn: '2027-03-01',
+  endsOn: '2027-03-13',
+  lines: [{ description: 'SMR', assetIds: ['a', 'b'], kitId: null, quantity: 2, periods: { months: 0, weeks: 2, days: 0 }, unitMinor: 15_000, amountMinor: 30_000, rates: { dayMinor: 1500, weekMinor: 7500, monthMinor: 24_000 }, lateFeePerDayMinor: 500 }],
+  subtotalMinor: 30_000,
+  taxRateBasisPoints: 1900,
+  taxMinor: 5700,
+  totalMinor: 35_700,
+  depositMinor: 50_000,
+  currency: 'EUR',
+};
+
+describe('settling a rental at return', () => {
+  it('adds late days per item and damage, taxes the sum, and subtracts what was taken', () => {
+    // Worked by hand: late 2 days × (15.00 + 5.00) × 2 SMRs = 80.00; damage 180.00;
+    // net 300.00 + 80.00 + 180.00 = 560.00; tax 19 % = 106.40; total 666.40.
+    // Extras 260.00 + 19 % = 309.40 captured from the hold; the balance is the rental's own 357.00.
+    const s = settle({ quote, lateDays: 2, damage: [{ description: 'SMR-004 dented', amountMinor: 18_000 }], depositCapturedMinor: 30_940, cardChargedMinor: 0 });
+    expect(s.lines.map((l) => [l.kind, l.amountMinor])).toEqual([
+      ['rental', 30_000],
+      ['late', 8000],
+      ['damage', 18_000],
+    ]);
+    expect(s).toMatchObject({ subtotalMinor: 56_000, taxMinor: 10_640, totalMinor: 66_640, extrasGrossMinor: 30_940, balanceMinor: 35_700 });
+    expect(s.lines[0].description).toBe('SMR — 2 weeks (2027-03-01 to 2027-03-13)');
+  });
+
+  it('on time and undamaged: the quote is the invoice', () => {
+    const s = settle({ quote, lateDays: 0, damage: [], depositCapturedMinor: 0, cardChargedMinor: 0 });
+    expect(s).toMatchObject({ subtotalMinor: quote.subtotalMinor, taxMinor: quote.taxMinor, totalMinor: quote.totalMinor, extrasGrossMinor: 0, balanceMinor: quote.totalMinor });
+  });
+});
+
+describe('late days', () => {
+  // Checked against luxon's calendar arithmetic (an independent date library).
+  const luxonDays = (a: string, b: string) => Math.max(0, DateTime.fromISO(b, { zone: 'utc' }).diff(DateTime.fromISO(a, { zone: 'utc' }), 'days').days);
+  it.each([
+    ['2027-03-13', '2027-03-13'], // back on the last day: not late (dates inclusive, common practice)
+    ['2027-03-13', '2027-03-15'],
+    ['2028-02-28', '2028-03-01'], // 2028 is a leap year: 29 February counts
+    ['2027-12-30', '2028-01-02'],
+    ['2027-03-13', '2027-03-10'], // early
+  ])('%s → %s', (endsOn, returnedOn) => {
+    expect(lateDaysBetween(endsOn, returnedOn)).toBe(luxonDays(endsOn, returnedOn));
+  });
+  it('counts the leap day', () => expect(lateDaysBetween('2028-02-28', '2028-03-01')).toBe(2));
+});

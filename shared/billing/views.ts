@@ -1,0 +1,165 @@
+/**
+ * What the billing API answers (rentals, deposits, invoices, reports). Plain
+ * types, no zod: the browser imports them as types only.
+ */
+import type { Periods } from './quote';
+
+export type QuoteLine = {
+  description: string;
+  assetIds: string[];
+  /** Set when the line is a kit renting as one (its own rate card). */
+  kitId: string | null;
+  quantity: number;
+  periods: Periods;
+  unitMinor: number;
+  amountMinor: number;
+  rates: { dayMinor: number; weekMinor: number; monthMinor: number };
+  lateFeePerDayMinor: number;
+};
+
+export type Quote = {
+  days: number;
+  startsOn: string;
+  endsOn: string;
+  lines: QuoteLine[];
+  subtotalMinor: number;
+  taxRateBasisPoints: number;
+  taxMinor: number;
+  totalMinor: number;
+  depositMinor: number;
+  currency: string;
+};
+
+/** One card authorization. A renewal replaces a hold with a new one; a declined attempt is kept for the record. */
+export type HoldState = 'authorized' | 'captured' | 'released' | 'lapsed' | 'declined' | 'replaced';
+/** The rental's deposit as a whole: `none` until a hold is taken. */
+export type DepositState = 'none' | 'authorized' | 'captured' | 'released' | 'lapsed' | 'declined';
+
+export type DepositHoldView = {
+  id: string;
+  state: HoldState;
+  amountMinor: number;
+  capturedMinor: number;
+  cardBrand: string | null;
+  cardLast4: string | null;
+  /** When the card network lets the authorization lapse (ISO timestamp). */
+  captureBefore: string | null;
+  /** Customer-initiated at checkout, or merchant-initiated renewal on the saved card. */
+  initiatedBy: 'customer' | 'merchant';
+  failureMessage: string | null;
+  captureReason: string | null;
+  createdAt: string;
+  settledAt: string | null;
+};
+
+/** An incident opened against the rental's booking (damaged or missing at return), with the repair or replacement charge the clerk set (net of tax). */
+export type RentalChargeView = {
+  incidentId: string;
+  assetId: string;
+  assetTag: string;
+  kind: string;
+  description: string;
+  amountMinor: number | null;
+};
+
+export type RentalState = 'reserved' | 'out' | 'returned' | 'invoiced' | 'cancelled';
+
+export type InvoiceLineKind = 'rental' | 'late' | 'damage' | 'credit';
+export type InvoiceLine = { kind: InvoiceLineKind; description: string; quantity: number; unitMinor: number; amountMinor: number };
+
+/** Invoice lines from the rental, its late days and its charges, with tax; what was paid and what is left. */
+export type Settlement = {
+  lateDays: number;
+  lines: InvoiceLine[];
+  subtotalMinor: number;
+  taxMinor: number;
+  totalMinor: number;
+  /** Late days and charges with their tax: what the deposit hold is there to cover. */
+  extrasGrossMinor: number;
+  depositCapturedMinor: number;
+  cardChargedMinor: number;
+  balanceMinor: number;
+};
+
+export type InvoiceSummary = {
+  id: string;
+  kind: 'invoice' | 'credit_note';
+  number: string;
+  issuedOn: string;
+  rentalId: string;
+  customerId: string;
+  customerCompany: string;
+  correctsInvoiceId: string | null;
+  correctsNumber: string | null;
+  currency: string;
+  subtotalMinor: number;
+  taxMinor: number;
+  totalMinor: number;
+  depositCapturedMinor: number;
+  cardChargedMinor: number;
+  balanceMinor: number;
+  /** Credit notes already issued against an invoice (0 for credit notes). */
+  creditedMinor: number;
+  reason: string | null;
+};
+
+export type InvoiceView = InvoiceSummary & {
+  lines: InvoiceLine[];
+  taxRateBasisPoints: number;
+  customer: { company: string; billingContact: string | null; billingEmail: string; address: string | null; taxNumber: string | null };
+  issuedAt: string;
+};
+
+export type RentalItem = { id: string; assetTag: string; type: string; serialNumber: string; model: string | null; manufacturer: string | null; replacementValueMinor: number | null };
+
+export type RentalView = {
+  id: string;
+  number: string;
+  state: RentalState;
+  customer: { id: string; company: string; billingContact: string | null; billingEmail: string };
+  bookingId: string;
+  kit: { id: string; name: string } | null;
+  items: RentalItem[];
+  startsOn: string;
+  endsOn: string;
+  note: string | null;
+  quote: Quote;
+  currency: string;
+  depositMinor: number;
+  deposit: { state: DepositState; hold: DepositHoldView | null; holds: DepositHoldView[] };
+  checkedOutAt: string | null;
+  returnedAt: string | null;
+  charges: RentalChargeView[];
+  settlement: Settlement;
+  invoices: InvoiceSummary[];
+  createdAt: string;
+};
+
+export type RentalSummary = {
+  id: string;
+  number: string;
+  state: RentalState;
+  customerId: string;
+  customerCompany: string;
+  kitName: string | null;
+  itemCount: number;
+  startsOn: string;
+  endsOn: string;
+  currency: string;
+  totalMinor: number;
+  depositMinor: number;
+  depositState: DepositState;
+  holdCaptureBefore: string | null;
+  invoiceNumber: string | null;
+};
+
+export type RevenueRow = { kitId: string | null; kitName: string; month: string; revenueMinor: number };
+export type UtilisationRow = { kitId: string; kitName: string; bookedDays: number; availableDays: number; ratio: number };
+
+/** The local payment fake's test cards the clerk may pick (the provider's published test payment methods). */
+export const testCards = [
+  { paymentMethod: 'pm_card_visa', label: 'Visa ending 4242 — approves' },
+  { paymentMethod: 'pm_card_mastercard', label: 'Mastercard ending 4444 — approves' },
+  { paymentMethod: 'pm_card_chargeDeclined', label: 'Visa ending 0002 — declined' },
+  { paymentMethod: 'pm_card_chargeDeclinedInsufficientFunds', label: 'Visa ending 9995 — insufficient funds' },
+] as const;

@@ -1,0 +1,314 @@
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createPaymentClient } from '../../server/billing/payment-client';
+import { startPaymentFake, type PaymentFake } from '../../server/fakes/payment-fake';
+import { signPayload } from '../../server/fakes/payments/events';
+import type { RentalView } from '../../shared/billing/views';
+import { pdfText } from '../support/pdf';
+import { bearer, createTestApp, type TestApp } from '../support/test-app';
+
+const WEBHOOK_SECRET = 'whsec_deposits_test_secret';
+let t: TestApp;
+let fake: PaymentFake;
+let server: Server;
+let billing: string;
+let manager: string;
+let tech: string;
+let owner: string;
+let otherOwner: string;
+let customerId: string;
+let stripe: ReturnType<typeof createPaymentClient>;
+
+beforeAll(async () => {
+  fake = await startPaymentFake({ port: 0, webhookSecret: WEBHOOK_SECRET, webhookRetryDelaysMs: [100, 100] });
+  // The SDK gives up on a call after 1 s here, so a withheld reply turns into retries quickly.
+  t = await createTestApp({ PAYMENT_API_PORT: String(fake.port), PAYMENT_WEBHOOK_SECRET: WEBHOOK_SECRET, PAYMENT_TIMEOUT_MS: '1000' });
+  server = t.app.listen(0, '127.0.0.1');
+  await new Promise((resolve) => server.once('listening', resolve));
+  fake.store.settings.webhookUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/webhooks/payments`;
+  stripe = createPaymentClient({ PAYMENT_API_KEY: t.config.PAYMENT_API_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 5000 });
+  [billing, manager, tech, owner, otherOwner] = await Promise.all(['billing@demo.test', 'manager@demo.test', 'tech@demo.test', 'owner@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
+  await t.api.patch('/api/settings').set(bearer(owner)).send({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 } });
+  await t.api.post('/api/rate-cards').set(bearer(billing)).send({ assetType: 'smr', dayMinor: 1500, weekMinor: 7500, monthMinor: 24_000, lateFeePerDayMinor: 500 });
+  customerId = (await t.api.post('/api/customers').set(bearer(billing)).send({ company: 'Quillon Test Rigs', billingEmail: 'accounts@quillon.test', billingContact: 'Ines Varga' })).body.id;
+});
+afterAll(async () => {
+  server?.close();
+  server?.closeAllConnections();
+  await fake?.close();
+  await t?.close();
+});
+
+let day = 0;
+/** Two free SMRs for a fresh window each time (rentals in this file never overlap). */
+async function newRental(days = 13): Promise<RentalView> {
+  const start = new Date(Date.UTC(2027, 0, 4 + day));
+  day += days + 1;
+  const startsOn = start.toISOString().slice(0, 10);
+  const endsOn = new Date(start.getTime() + (days - 1) * 86_400_000).toISOString().slice(0, 10);
+  const free = (await t.api.get('/api/availability').query({ type: 'smr', startsOn, endsOn, limit: 2 }).set(bearer(billing))).body.items;
+  const res = await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId, assetIds: free.map((a: { id: string }) => a.id), startsOn, endsOn });
+  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  return res.body;
+}
+const checklist = (r: RentalView, damaged?: string) => ({ counterpart: 'Ines Varga', checklist: r.items.map((i) => ({ assetId: i.id, present: true, condition: i.id === damaged ? 'damaged' : 'good' })) });
+const takeDeposit = (r: RentalView, paymentMethod = 'pm_card_visa') => t.api.post(`/api/rentals/${r.id}/deposit`).set(bearer(billing)).send({ paymentMethod });
+const checkout = (r: RentalView) => t.api.post(`/api/bookings/${r.bookingId}/checkout`).set(bearer(manager)).send(checklist(r));
+const giveBack = (r: RentalView, damaged?: string) => t.api.post(`/api/bookings/${r.bookingId}/return`).set(bearer(manager)).send(checklist(r, damaged));
+const view = async (r: RentalView): Promise<RentalView> => (await t.api.get(`/api/rentals/${r.id}`).set(bearer(billing))).body;
+const mailTo = (address: string) => t.db.query(`SELECT m.subject, array_agg(a.file_name ORDER BY a.file_name) FILTER (WHERE a.id IS NOT NULL) AS files FROM outbox_messages m LEFT JOIN outbox_attachments a ON a.message_id = m.id WHERE $1 = ANY(m.recipients) GROUP BY m.id, m.subject ORDER BY m.created_at`, [address]);
+
+describe('a rental from quote to invoice', () => {
+  let rental: RentalView;
+
+  it('books at quoted prices under the booking rules; technicians may not rent', async () => {
+    rental = await newRental();
+    expect(rental).toMatchObject({ number: 'R-0001', state: 'reserved', currency: 'EUR', depositMinor: 50_000 });
+    // 13 days of two SMRs: two weeks each (common practice: cheapest cover), 300.00 + 19 % tax.
+    expect(rental.quote).toMatchObject({ days: 13, subtotalMinor: 30_000, taxMinor: 5700, totalMinor: 35_700 });
+    const booking = (await t.api.get(`/api/bookings/${rental.bookingId}`).set(bearer(manager))).body;
+    expect(booking).toMatchObject({ purpose: 'rental', rentalId: rental.id });
+    expect((await t.api.post('/api/rentals').set(bearer(tech)).send({ customerId, assetIds: [rental.items[0].id], startsOn: '2027-06-01', endsOn: '2027-06-02' })).status).toBe(403);
+    // The same SMRs for overlapping days: the bookings rules answer, unchanged.
+    const clash = await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId, assetIds: rental.items.map((i) => i.id), startsOn: rental.endsOn, endsOn: rental.endsOn });
+    expect(clash.status).toBe(409);
+    expect(clash.body.error.details.conflicts[0].bookingId).toBe(rental.bookingId);
+  });
+
+  it('refuses checkout until a deposit hold is on the card; a declined card says so and keeps blocking', async () => {
+    const blocked = await checkout(rental);
+    expect(blocked.status).toBe(422);
+    expect(blocked.body.error.code).toBe('deposit_required');
+    const declined = await takeDeposit(rental, 'pm_card_chargeDeclined');
+    expect(declined.status).toBe(422);
+    expect(declined.body.error).toMatchObject({ code: 'card_declined' });
+    expect(declined.body.error.message).toMatch(/declined/);
+    const poor = await takeDeposit(rental, 'pm_card_chargeDeclinedInsufficientFunds');
+    expect(poor.body.error.message).toMatch(/insufficient funds/);
+    expect((await view(rental)).deposit.state).toBe('declined');
+    expect((await checkout(rental)).body.error.code).toBe('deposit_required');
+  });
+
+  it('technicians may not take deposits; another firm cannot see the rental', async () => {
+    expect((await t.api.post(`/api/rentals/${rental.id}/deposit`).set(bearer(tech)).send({ paymentMethod: 'pm_card_visa' })).status).toBe(403);
+    expect((await t.api.get(`/api/rentals/${rental.id}`).set(bearer(otherOwner))).status).toBe(404);
+    expect((await t.api.post(`/api/rentals/${rental.id}/deposit`).set(bearer(otherOwner)).send({ paymentMethod: 'pm_card_visa' })).status).toBe(404);
+  });
+
+  it('authorizes with the success card (manual capture, 7-day window) and hands over with papers mailed', async () => {
+    const held = await takeDeposit(rental);
+    expect(held.status, JSON.stringify(held.body)).toBe(200);
+    const hold = held.body.deposit.hold;
+    expect(hold).toMatchObject({ state: 'authorized', amountMinor: 50_000, cardBrand: 'visa', cardLast4: '4242', initiatedBy: 'customer' });
+    // Provider reference ("Place a hold on a payment method"): 7 days for a customer-initiated online card authorization.
+    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE id = $1`, [hold.id]);
+    const intent = await stripe.paymentIntents.retrieve(payment_intent_id);
+    expect(intent).toMatchObject({ status: 'requires_capture', capture_method: 'manual', amount: 50_000, amount_capturable: 50_000 });
+    expect(Date.parse(hold.captureBefore) / 1000 - intent.created).toBe(7 * 24 * 3600);
+    expect((await checkout(rental)).status).toBe(200);
+    const mails = await mailTo('accounts@quillon.test');
+    expect(mails.at(-1)).toMatchObject({ subject: expect.stringContaining(rental.number), files: [`agreement-${rental.number}.pdf`, `certificates-${rental.number}.pdf`] });
+  });
+
+  it('comes back with a damaged SMR: the repair and tax are captured from the hold, the rest released', async () => {
+    const damaged = rental.items[1];
+    const back = await giveBack(rental, damaged.id);
+    expect(back.status).toBe(200);
+    let r = await view(rental);
+    expect(r.state).toBe('returned');
+    expect(r.charges).toEqual([expect.objectContaining({ assetId: damaged.id, amountMinor: null })]);
+    expect((await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing))).body.error.code).toBe('deposit_unsettled');
+    r = (await t.api.put(`/api/rentals/${rental.id}/charges/${r.charges[0].incidentId}`).set(bearer(billing)).send({ amountMinor: 18_000 })).body;
+    // Worked by hand: repair 180.00 + 19 % = 214.20 to take from the 500.00 hold.
+    expect(r.settlement.extrasGrossMinor).toBe(21_420);
+    expect((await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(tech)).send({ amountMinor: 21_420, reason: 'SMR repair' })).status).toBe(403);
+    const captured = await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 21_420, reason: 'Dented SMR: re-coat and recertify' });
+    expect(captured.status, JSON.stringify(captured.body)).toBe(200);
+    expect(captured.body.deposit).toMatchObject({ state: 'captured', hold: { capturedMinor: 21_420 } });
+    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE id = $1`, [captured.body.deposit.hold.id]);
+    // Provider reference (capture, amount_to_capture): the uncaptured rest is released.
+    expect(await stripe.paymentIntents.retrieve(payment_intent_id)).toMatchObject({ status: 'succeeded', amount_received: 21_420, amount_capturable: 0 });
+    const again = await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 100, reason: 'twice' });
+    expect(again.status).toBe(409);
+  });
+
+  it('issues the invoice with a gapless number, a PDF and an e-mail; a credit note corrects it', async () => {
+    const issued = await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing));
+    expect(issued.status, JSON.stringify(issued.body)).toBe(201);
+    const year = new Date().getUTCFullYear();
+    // 300.00 rental + 180.00 repair = 480.00; tax 91.20; total 571.20; 214.20 taken from the hold → 357.00 due (worked by hand).
+    expect(issued.body).toMatchObject({ number: `${year}-0001`, subtotalMinor: 48_000, taxMinor: 9120, totalMinor: 57_120, depositCapturedMinor: 21_420, balanceMinor: 35_700 });
+    expect((await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing))).status).toBe(409);
+    const pdf = await t.api.get(`/api/rentals/${rental.id}/invoice.pdf`).set(bearer(billing)).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(pdf.headers['content-type']).toBe('application/pdf');
+    const text = pdfText(pdf.body as Buffer);
+    expect(text).toContain(`${year}-0001`);
+    expect(text).toContain('€357.00');
+    expect((await mailTo('accounts@quillon.test')).at(-1).files).toEqual([`invoice-${year}-0001.pdf`]);
+    const tooMuch = await t.api.post(`/api/invoices/${issued.body.id}/credit-note`).set(bearer(billing)).send({ reason: 'Goodwill', amountMinor: 48_001 });
+    expect(tooMuch.status).toBe(422);
+    const credit = await t.api.post(`/api/invoices/${issued.body.id}/credit-note`).set(bearer(billing)).send({ reason: 'Repair cost lower than estimated', amountMinor: 3000 });
+    expect(credit.status).toBe(201);
+    // 30.00 + 19 % = 35.70 credited.
+    expect(credit.body).toMatchObject({ kind: 'credit_note', number: `CN-${year}-0001`, correctsNumber: `${year}-0001`, totalMinor: 3570 });
+    expect((await t.api.get(`/api/invoices/${issued.body.id}`).set(bearer(billing))).body.creditedMinor).toBe(3000);
+    // Invoices are never edited: the database refuses.
+    await expect(t.db.query(`UPDATE invoices SET total_minor = 0 WHERE id = $1`, [issued.body.id])).rejects.toThrow();
+    const csv = await t.api.get('/api/invoices/export.csv').set(bearer(billing));
+    expect(csv.text.split('\r\n')[0]).toContain('number,kind,issued_on');
+    expect(csv.text).toContain(`CN-${year}-0001`);
+  });
+});
+
+describe('when the provider misbehaves', () => {
+  async function returnedWithHold() {
+    const r = await newRental(3);
+    expect((await takeDeposit(r)).status).toBe(200);
+    expect((await checkout(r)).status).toBe(200);
+    expect((await giveBack(r)).status).toBe(200);
+    return r;
+  }
+  const intentOf = async (r: RentalView) => (await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE rental_id = $1 AND kind = 'hold' AND state <> 'declined' ORDER BY created_at DESC LIMIT 1`, [r.id]))[0].payment_intent_id as string;
+  const captureCharges = async (pi: string) => (await stripe.charges.list({ payment_intent: pi })).data.filter((c) => c.captured);
+
+  it('a capture whose reply is lost is retried under the same key: captured exactly once', async () => {
+    const r = await returnedWithHold();
+    // The fake applies the capture but withholds its reply past the SDK's 1 s timeout — once.
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 1, hangMs: 3000 }) });
+    const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 5000, reason: 'Scratched case' });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const pi = await stripe.paymentIntents.retrieve(await intentOf(r));
+    expect(pi).toMatchObject({ status: 'succeeded', amount_received: 5000 });
+    expect(await captureCharges(pi.id)).toHaveLength(1);
+  });
+
+  it('when every attempt times out the clerk is told to retry; the provider\'s event tells the truth and nothing is captured twice', async () => {
+    const r = await returnedWithHold();
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 3, hangMs: 3000 }) });
+    const failed = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 7000, reason: 'Late by two days' });
+    expect(failed.status).toBe(502);
+    expect(failed.body.error.code).toBe('payment_unavailable');
+    // The capture did happen at the provider; its signed payment_intent.succeeded event brings the hold up to date.
+    await expect.poll(async () => (await view(r)).deposit.hold?.capturedMinor, { timeout: 5000 }).toBe(7000);
+    const retried = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 7000, reason: 'Late by two days' });
+    expect(retried.status).toBe(409);
+    const pi = await stripe.paymentIntents.retrieve(await intentOf(r));
+    expect(pi.amount_received).toBe(7000);
+    expect(await captureCharges(pi.id)).toHaveLength(1);
+  }, 30_000);
+
+  it('a charge above the hold: the hold is captured whole and the rest charged to the saved card', async () => {
+    const r = await returnedWithHold();
+    const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 80_000, reason: 'SMR lost' });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body.settlement).toMatchObject({ depositCapturedMinor: 50_000, cardChargedMinor: 30_000 });
+    expect(res.body.deposit.holds.at(-1)).toMatchObject({ kind: 'charge', state: 'captured', capturedMinor: 30_000, initiatedBy: 'merchant' });
+  });
+
+  it('releases a hold in full', async () => {
+    const r = await returnedWithHold();
+    const res = await t.api.post(`/api/rentals/${r.id}/deposit/release`).set(bearer(billing));
+    expect(res.body.deposit.state).toBe('released');
+    expect((await stripe.paymentIntents.retrieve(await intentOf(r))).status).toBe('canceled');
+  });
+});
+
+describe('payment webhooks', () => {
+  const post = (payload: string, signature: string) => t.api.post('/api/webhooks/payments').set('Content-Type', 'application/json').set('Stripe-Signature', signature).send(payload);
+  const event = (id: string) => JSON.stringify({ id, object: 'event', type: 'customer.updated', api_version: '2026-10-28.endive', created: Math.floor(Date.now() / 1000), data: { object: { id: 'cus_x', object: 'customer' } }, livemode: false, pending_webhooks: 1, request: { id: null, idempotency_key: null } });
+
+  it('verifies the signature with the SDK; tampered or stale deliveries are refused', async () => {
+    const body = event('evt_sig_1');
+    const now = Math.floor(Date.now() / 1000);
+    expect((await post(body, signPayload(body, WEBHOOK_SECRET, now))).status).toBe(200);
+    expect((await post(body.replace('cus_x', 'cus_y'), signPayload(body, WEBHOOK_SECRET, now))).status).toBe(400);
+    expect((await post(body, signPayload(body, 'whsec_wrong', now))).status).toBe(400);
+    // The SDK's default tolerance is 300 s (provider reference, "Verify webhook signatures").
+    const stale = await post(event('evt_sig_2'), signPayload(event('evt_sig_2'), WEBHOOK_SECRET, now - 600));
+    expect(stale.status).toBe(400);
+    expect(stale.body.error.code).toBe('invalid_signature');
+  });
+
+  it('processes an event delivered twice only once', async () => {
+    const body = event('evt_twice');
+    const sig = signPayload(body, WEBHOOK_SECRET, Math.floor(Date.now() / 1000));
+    expect((await post(body, sig)).body).toMatchObject({ received: true, duplicate: false });
+    expect((await post(body, sig)).body).toMatchObject({ received: true, duplicate: true });
+    expect((await t.db.query(`SELECT count(*)::int AS n FROM payment_events WHERE event_id = 'evt_twice'`))[0].n).toBe(1);
+  });
+
+  it('a hold the provider lets lapse is marked lapsed from its signed event, and the clerk is told', async () => {
+    const r = await newRental(3);
+    await takeDeposit(r);
+    await checkout(r);
+    // Eight days later at the provider: past the 7-day window, the authorization is released and the event delivered.
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }) });
+    await expect.poll(async () => (await view(r)).deposit.state, { timeout: 5000 }).toBe('lapsed');
+    const mails = await mailTo('billing@demo.test');
+    expect(mails.at(-1).subject).toBe(`Deposit hold lapsed: rental ${r.number}`);
+  });
+});
+
+describe('the daily renewal of holds near lapse', () => {
+  const runRenewals = (now: Date) => t.jobs.definitions.find((j) => j.name === 'deposit-renewals')!.run({ db: t.db, now, trigger: 'manual' });
+
+  it('renews on the saved card (merchant-initiated: Visa 4 days 18 hours) and lets the old hold go', async () => {
+    const r = await newRental(20);
+    await takeDeposit(r);
+    await checkout(r);
+    const first = (await view(r)).deposit.hold!;
+    // Six days on, the hold lapses within 48 hours.
+    const summary = await runRenewals(new Date(Date.parse(first.captureBefore!) - 24 * 3600_000));
+    expect(summary).toMatchObject({ renewed: 1, refused: 0 });
+    const after = await view(r);
+    expect(after.deposit.hold).toMatchObject({ state: 'authorized', initiatedBy: 'merchant', amountMinor: first.amountMinor });
+    expect(after.deposit.holds.find((h) => h.id === first.id)!.state).toBe('replaced');
+    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE id = $1`, [after.deposit.hold!.id]);
+    const pi = await stripe.paymentIntents.retrieve(payment_intent_id);
+    // Provider reference: merchant-initiated authorizations on Visa are held 4 days 18 hours.
+    expect(Date.parse(after.deposit.hold!.captureBefore!) / 1000 - pi.created).toBe(4 * 24 * 3600 + 18 * 3600);
+    const [{ payment_intent_id: old }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE id = $1`, [first.id]);
+    expect((await stripe.paymentIntents.retrieve(old)).status).toBe('canceled');
+  });
+
+  it('tells the clerk when the card refuses the renewal', async () => {
+    const r = await newRental(20);
+    await takeDeposit(r);
+    await checkout(r);
+    const hold = (await view(r)).deposit.hold!;
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents', method: 'POST', mode: 'decline', times: 10 }) });
+    const summary = await runRenewals(new Date(Date.parse(hold.captureBefore!) - 24 * 3600_000));
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'DELETE' });
+    expect(summary.refused).toBeGreaterThanOrEqual(1);
+    const after = await view(r);
+    expect(after.deposit).toMatchObject({ state: 'authorized', hold: { id: hold.id } });
+    expect(after.deposit.holds.at(-1)).toMatchObject({ state: 'declined', initiatedBy: 'merchant' });
+    expect((await mailTo('billing@demo.test')).map((m: { subject: string }) => m.subject)).toContain(`Deposit hold not renewed: rental ${r.number}`);
+  });
+});
+
+describe('invoice numbers under concurrency', () => {
+  it('50 invoices issued at once get 50 consecutive numbers, no gap, no repeat', async () => {
+    await t.api.patch('/api/settings').set(bearer(owner)).send({ depositPolicy: { percent: 0, minMinor: 0, maxMinor: 0 } });
+    const [smr] = (await t.api.get('/api/availability').query({ type: 'smr', startsOn: '2025-01-01', endsOn: '2025-03-31', limit: 1 }).set(bearer(billing))).body.items;
+    const rentals: RentalView[] = [];
+    for (let i = 0; i < 50; i += 1) {
+      const on = new Date(Date.UTC(2025, 0, 1 + i)).toISOString().slice(0, 10);
+      const res = await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId, assetIds: [smr.id], startsOn: on, endsOn: on });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+      expect((await checkout(res.body)).status).toBe(200);
+      expect((await giveBack(res.body)).status).toBe(200);
+      rentals.push(res.body);
+    }
+    const before = (await t.api.get('/api/invoices').query({ kind: 'invoice' }).set(bearer(billing))).body.total;
+    const issued = await Promise.all(rentals.map((r) => t.api.post(`/api/rentals/${r.id}/invoice`).set(bearer(billing))));
+    expect(issued.map((r) => r.status)).toEqual(rentals.map(() => 201));
+    const numbers = issued.map((r) => Number(String(r.body.number).split('-')[1])).sort((a, b) => a - b);
+    expect(numbers).toEqual(Array.from({ length: 50 }, (_, i) => before + 1 + i));
+  }, 120_000);
+});

@@ -6,6 +6,9 @@ import { readConfig, type Config } from './config';
 import { createDataSource } from './db/data-source';
 import { startLocalFakes } from './fakes/local-fakes';
 import { createMailTransport } from './notifications/mail-transport';
+import { createPaymentClient } from './billing/payment-client';
+import { PaymentGateway } from './billing/payment-gateway';
+import { restoreHoldsOnLocalFake } from './seed/demo-holds';
 
 /**
  * Listens, starts the scheduler and (locally) the fakes; drains on SIGTERM.
@@ -20,6 +23,10 @@ async function serve(config: Config) {
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
+  if (fakes) {
+    const restored = await restoreHoldsOnLocalFake(db, new PaymentGateway(createPaymentClient(config)), `http://127.0.0.1:${fakes.paymentPort}`);
+    if (restored) console.log(`Placed ${restored} open deposit hold(s) again on the local payment fake.`);
+  }
   if (config.RUN_SCHEDULER) jobs.start();
   if (cluster.isPrimary || cluster.worker?.id === 1) console.log(`Nestkeeper is listening on http://${config.HOST}:${config.PORT}`);
 

@@ -39,7 +39,8 @@ export class DepositsService {
     const result = await inOrganization(this.db, actor.organizationId, async (tx) => {
       const rental = await lockRental(tx, rentalId);
       const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking');
-      if (booking.state !== 'reserved') throw ruleBroken('booking_state', `The deposit is taken before handing over; this rental is ${booking.state}.`);
+      // Before handing over — or again while out, should a hold have lapsed.
+      if (booking.state !== 'reserved' && booking.state !== 'out') throw ruleBroken('booking_state', `The deposit is taken before handing over; this rental is ${booking.state}.`);
       if (rental.depositMinor <= 0) throw ruleBroken('no_deposit', 'This rental has no deposit to hold (the firm’s deposit policy gave nothing).');
       const holds = await tx.find(DepositHold, { where: { rentalId } });
       if (depositState(holds).state === 'authorized') throw conflict(`A hold of ${money(rental, rental.depositMinor)} is already on the card.`);

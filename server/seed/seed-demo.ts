@@ -8,6 +8,7 @@ import { DEMO_PASSWORD, demoFirm, otherFirm } from './demo-people';
 import { seedDemoActivity } from './demo-activity';
 import { seedDemoCalibration } from './demo-calibration';
 import { seedDemoFleet } from './demo-fleet';
+import { seedDemoRentals } from './demo-rentals';
 
 /** Fill an empty database with the invented demo firms. Does nothing when any
  * organization exists, so a restart never duplicates or overwrites data. */
@@ -23,6 +24,7 @@ export async function seedDemoIfEmpty(db: DataSource, bcryptCost = 12): Promise<
         await seedDemoFleet(tx, firm.timeZone, firm.name);
         await seedDemoActivity(tx, firm.timeZone);
         await seedDemoCalibration(tx, firm.name, firm.timeZone);
+        await seedDemoRentals(tx, firm.timeZone);
       }
       const owner = firm.people.find((p) => p.role === 'owner')!;
       await enqueueMail(tx, [owner.email], {

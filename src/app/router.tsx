@@ -52,7 +52,15 @@ export const routes: RouteObject[] = [
             { path: 'incidents/:id', lazy: screen(() => import('./routes/incident')) },
             { path: 'calibration/impact/:assetId', lazy: screen(() => import('./routes/impact-review')) },
           ]),
-          gated('reports.read', [{ path: 'calibration', lazy: screen(() => import('./routes/calibration')) }]),
+          gated('reports.read', [
+            { path: 'calibration', lazy: screen(() => import('./routes/calibration')) },
+            { path: 'rentals', lazy: screen(() => import('./routes/rentals')) },
+            { path: 'rentals/:id', lazy: screen(() => import('./routes/rental')) },
+            { path: 'invoices', lazy: screen(() => import('./routes/invoices')) },
+            { path: 'customers', lazy: screen(() => import('./routes/customers')) },
+            { path: 'billing/reports', lazy: screen(() => import('./routes/billing-reports')) },
+          ]),
+          gated('rentals.write', [{ path: 'rentals/new', lazy: screen(() => import('./routes/rental-new')) }]),
           gated('calibration.record', [
             { path: 'fleet/:id/calibrate', lazy: screen(() => import('./routes/calibration-record')) },
             { path: 'calibration/plan/:assetId', lazy: screen(() => import('./routes/calibration-plan')) },

@@ -2,10 +2,12 @@ import express, { Router } from 'express';
 import { z } from 'zod';
 import { webhookAttempts } from './events';
 import { addFault, faultSchema, faultTable } from './faults';
+import { ageAuthorization } from './payment-intents';
 import { parseParams } from './params';
 import type { PaymentStore } from './store';
 
 const clockSchema = z.strictObject({ advanceSeconds: z.coerce.number().min(0).max(10 * 365 * 24 * 60 * 60) });
+const ageSchema = z.strictObject({ seconds: z.coerce.number().int().min(0).max(30 * 24 * 60 * 60) });
 
 /**
  * Test-only control endpoints of the payment-provider fake, outside /v1 (the
@@ -15,6 +17,7 @@ const clockSchema = z.strictObject({ advanceSeconds: z.coerce.number().min(0).ma
  *  - POST /__fake/faults {path, mode, times, method?, hangMs?, declineCode?} —
  *    see ./faults.ts; GET lists pending faults, DELETE clears them;
  *  - GET /__fake/webhooks — every webhook delivery attempt so far;
+ *  - POST /__fake/authorizations/:id/age {seconds} — an uncaptured hold started that much earlier;
  *  - POST /__fake/reset — forgets every object, key, fault and clock advance.
  */
 export function controlRouter(store: PaymentStore, sweep: () => void): Router {
@@ -46,6 +49,12 @@ export function controlRouter(store: PaymentStore, sweep: () => void): Router {
 
   router.get('/webhooks', (_req, res) => {
     res.json({ data: [...webhookAttempts(store).values()] });
+  });
+
+  router.post('/authorizations/:id/age', (req, res) => {
+    const intent = ageAuthorization(store, req.params.id, parseParams(ageSchema, req.body).seconds);
+    sweep();
+    res.json(intent);
   });
 
   router.post('/reset', (_req, res) => {

@@ -118,6 +118,20 @@ const captureBeforeOf = (store: PaymentStore, intent: PaymentIntent): number | u
   intent.latest_charge ? chargeTable(store).get(intent.latest_charge)?.payment_method_details.card.capture_before : undefined;
 
 /**
+ * Test-only (POST /__fake/authorizations/:id/age): moves an uncaptured
+ * authorization's start back by `seconds`, so it lapses that much sooner — how
+ * local set-ups re-create holds that were placed days ago.
+ */
+export function ageAuthorization(store: PaymentStore, id: string, seconds: number): PaymentIntent {
+  const intent = findIntent(store, id, 'id');
+  const charge = intent.latest_charge ? chargeTable(store).get(intent.latest_charge) : undefined;
+  if (intent.status !== 'requires_capture' || !charge) return intent;
+  const card = charge.payment_method_details.card;
+  updateCharge(store, charge.id, { created: charge.created - seconds, payment_method_details: { ...charge.payment_method_details, card: { ...card, capture_before: (card.capture_before ?? store.nowSeconds()) - seconds } } });
+  return save(store, { ...intent, created: intent.created - seconds });
+}
+
+/**
  * An uncaptured authorization past its `capture_before` is released and the
  * intent becomes `canceled` (https://docs.stripe.com/payments/place-a-hold-on-a-payment-method:
  * "If the authorization expires before you capture the funds, the funds are

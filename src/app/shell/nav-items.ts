@@ -2,8 +2,8 @@ import type { Capability } from '../../lib/roles';
 
 /**
  * The main navigation, in order. An entry without `capability` is for every
- * role. Add a screen here when it exists (Rentals comes with its
- * feature). Field checks start from an asset: no entry.
+ * role. Add a screen here when it exists. Field checks start from an
+ * asset: no entry; customers, rates and billing reports open from Rentals and Invoices.
  */
 export interface NavItem {
   to: string;
@@ -20,6 +20,8 @@ export const navItems: readonly NavItem[] = [
   { to: '/fleet', label: 'Fleet', capability: 'fleet.read' },
   { to: '/kits', label: 'Kits', capability: 'fleet.read' },
   { to: '/calibration', label: 'Calibration', capability: 'reports.read' },
+  { to: '/rentals', label: 'Rentals', capability: 'reports.read' },
+  { to: '/invoices', label: 'Invoices', capability: 'reports.read' },
   { to: '/scan', label: 'Find by label', capability: 'fleet.read' },
   { to: '/incidents', label: 'Incidents', capability: 'fleet.read' },
   { to: '/users', label: 'Users', capability: 'users.manage' },

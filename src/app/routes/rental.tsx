@@ -1,0 +1,87 @@
+import { Link, useLocation, useParams } from 'react-router-dom';
+import { buttonClasses } from '../../components/button';
+import { ArrowLeftIcon, DownloadIcon } from '../../components/icons';
+import { LoadFailure } from '../../components/load-failure';
+import { LoadingPanel } from '../../components/loading-panel';
+import { Notice } from '../../components/notice';
+import { FactList, Panel } from '../../components/panel';
+import { PageHeader } from '../../components/page-header';
+import { useSession } from '../../features/auth/components/session-context';
+import { rentalDocumentUrl, useRental } from '../../features/billing/api/get-rental';
+import { RentalStateChip } from '../../features/billing/components/billing-words';
+import { DepositPanel } from '../../features/billing/components/deposit-panel';
+import { InvoicePanel } from '../../features/billing/components/invoice-panel';
+import { QuoteLines } from '../../features/billing/components/quote-lines';
+import { RenterCautions, RentalItems } from '../../features/billing/components/rental-items';
+import { formatCalendarDate, useDateFormat } from '../../lib/format';
+import { can } from '../../lib/roles';
+
+/** One rental: what went out, its price, the deposit hold and the invoice. */
+export default function RentalRoute() {
+  const { id = '' } = useParams();
+  const { user } = useSession();
+  const location = useLocation();
+  const { dateTime } = useDateFormat();
+  const rental = useRental(id);
+  const notice = (location.state as { notice?: string } | null)?.notice;
+
+  if (rental.isPending) return <LoadingPanel label="Loading the rental…" />;
+  if (rental.isError) {
+    return <LoadFailure error={rental.error} thing="rental" notFound="No rental of your firm has this address." back={{ to: '/rentals', label: 'Back to rentals' }} />;
+  }
+
+  const r = rental.data;
+  const canCharge = can(user.role, 'rentals.write');
+  const pdf = (document: 'agreement' | 'certificate-pack', label: string) => (
+    <a key={document} href={rentalDocumentUrl(r.id, document)} target="_blank" rel="noopener" className={buttonClasses('secondary', 'sm')}>
+      <DownloadIcon size={14} />
+      {label}
+    </a>
+  );
+
+  return (
+    <>
+      <Link to="/rentals" className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
+        <ArrowLeftIcon size={14} />
+        Rentals
+      </Link>
+      <PageHeader
+        title={`Rental ${r.number}`}
+        description={`${r.customer.company}, ${formatCalendarDate(r.startsOn)} – ${formatCalendarDate(r.endsOn)}`}
+        actions={[pdf('agreement', 'Rental agreement (PDF)'), pdf('certificate-pack', 'Certificate pack (PDF)')]}
+      />
+      {notice ? (
+        <Notice tone="success" className="mb-4">
+          {notice}
+        </Notice>
+      ) : null}
+      <div className="grid gap-4 lg:grid-cols-2">
+        <Panel title="Rental">
+          <FactList
+            items={[
+              { term: 'Number', value: r.number, mono: true },
+              { term: 'State', value: <RentalStateChip state={r.state} /> },
+              { term: 'Customer', value: `${r.customer.company}${r.customer.billingContact ? `, ${r.customer.billingContact}` : ''}` },
+              { term: 'Invoices to', value: r.customer.billingEmail, mono: true },
+              { term: 'Dates', value: `${formatCalendarDate(r.startsOn)} – ${formatCalendarDate(r.endsOn)} (${r.quote.days} ${r.quote.days === 1 ? 'day' : 'days'}, both included)` },
+              { term: 'Kit', value: r.kit ? <Link to={`/kits/${r.kit.id}`} className="text-brass-deep underline">{r.kit.name}</Link> : 'Separate items' },
+              { term: 'Booking', value: <Link to={`/bookings/${r.bookingId}`} className="text-brass-deep underline">Packing list and hand-over</Link> },
+              { term: 'Checked out', value: r.checkedOutAt ? dateTime(r.checkedOutAt) : null },
+              { term: 'Returned', value: r.returnedAt ? dateTime(r.returnedAt) : null },
+              { term: 'Note', value: r.note },
+            ]}
+          />
+        </Panel>
+        <Panel title="Price">
+          <QuoteLines quote={r.quote} />
+        </Panel>
+        <div className="flex flex-col gap-3 lg:col-span-2">
+          {r.state === 'reserved' || r.state === 'out' ? <RenterCautions items={r.items} /> : null}
+          <RentalItems items={r.items} />
+        </div>
+        <DepositPanel rental={r} canManage={can(user.role, 'deposits.manage')} canCharge={canCharge} />
+        <InvoicePanel rental={r} canCharge={canCharge} />
+      </div>
+    </>
+  );
+}

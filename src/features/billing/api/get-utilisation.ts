@@ -1,0 +1,16 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient } from '../../../lib/api-client';
+import { billingKeys } from './keys';
+import type { Page, UtilisationRow } from './types';
+
+/** Booked days against available days per kit; `from` and `to` are dates YYYY-MM-DD, both included. */
+export function getUtilisation(range: { from: string; to: string }, signal?: AbortSignal): Promise<Page<UtilisationRow>> {
+  return apiClient.get<Page<UtilisationRow>>('/billing/utilisation', { query: range, signal });
+}
+
+export const utilisationQueryOptions = (range: { from: string; to: string }) =>
+  queryOptions({ queryKey: billingKeys.utilisation(range), queryFn: ({ signal }) => getUtilisation(range, signal) });
+
+export function useUtilisation(range: { from: string; to: string }) {
+  return useQuery(utilisationQueryOptions(range));
+}

@@ -1,0 +1,66 @@
+import { ClockIcon } from '../../../components/icons';
+import { StatusChip, type StatusTone } from '../../../components/status-chip';
+import { isApiError } from '../../../lib/api-client';
+import type { DepositState, HoldState, Periods, RentalState } from '../api/types';
+
+const rentalStates: Record<RentalState, [string, StatusTone]> = {
+  reserved: ['Reserved', 'paused'],
+  out: ['Out with the renter', 'info'],
+  returned: ['Returned, to settle', 'warn'],
+  invoiced: ['Invoiced', 'ok'],
+  cancelled: ['Cancelled', 'none'],
+};
+export const rentalStateWord = (state: RentalState) => rentalStates[state][0];
+export function RentalStateChip({ state }: { state: RentalState }) {
+  return <StatusChip tone={rentalStates[state][1]} label={rentalStates[state][0]} />;
+}
+
+const holdStates: Record<HoldState, [string, StatusTone]> = {
+  authorized: ['Held on card', 'info'],
+  captured: ['Captured', 'ok'],
+  released: ['Released', 'ok'],
+  lapsed: ['Lapsed', 'warn'],
+  declined: ['Declined', 'bad'],
+  replaced: ['Renewed', 'none'],
+};
+const noDeposit: [string, StatusTone] = ['No hold yet', 'none'];
+const depositEntry = (state: DepositState | HoldState) => (state === 'none' ? noDeposit : holdStates[state]);
+export const depositStateWord = (state: DepositState | HoldState) => depositEntry(state)[0];
+export function DepositStateChip({ state }: { state: DepositState | HoldState }) {
+  const [label, tone] = depositEntry(state);
+  return <StatusChip tone={tone} label={label} />;
+}
+
+const SOON_MS = 48 * 3600 * 1000;
+
+/** When a card hold lapses; within 48 hours it says so in words with a clock, past it says "lapsed". */
+export function HoldLapse({ at, dateTime }: { at: string | null; dateTime: (value: string) => string }) {
+  if (!at) return <span>—</span>;
+  const left = new Date(at).getTime() - Date.now();
+  if (left > SOON_MS) return <time dateTime={at}>{dateTime(at)}</time>;
+  return (
+    <span className="inline-flex items-center gap-1 rounded border border-warn/40 bg-warn-wash px-1.5 font-semibold text-warn">
+      <ClockIcon size={13} />
+      <span>{left > 0 ? 'Lapses soon:' : 'Lapsed:'}</span>
+      <time dateTime={at} className="text-ink-900">
+        {dateTime(at)}
+      </time>
+    </span>
+  );
+}
+
+const unit = (n: number, one: string) => `${n} ${one}${n === 1 ? '' : 's'}`;
+
+/** "1 month, 2 days" (a month is 28 days, a week 7). */
+export function periodWords(p: Periods): string {
+  const parts = [p.months ? unit(p.months, 'month') : '', p.weeks ? unit(p.weeks, 'week') : '', p.days ? unit(p.days, 'day') : ''];
+  return parts.filter(Boolean).join(', ') || '—';
+}
+
+/** A payment call's failure in words; a provider that did not answer can be asked again safely. */
+export function paymentProblem(error: unknown): string {
+  if (isApiError(error) && error.code === 'payment_unavailable') {
+    return 'The payment provider did not answer. Try again; nothing is charged twice.';
+  }
+  return error instanceof Error ? error.message : 'Something went wrong. Try again.';
+}

@@ -1,0 +1,120 @@
+import { Form, Formik } from 'formik';
+import { useState } from 'react';
+import * as Yup from 'yup';
+import { testCards } from '../../../../shared/billing/views';
+import { Button } from '../../../components/button';
+import { SelectField } from '../../../components/field';
+import { Notice } from '../../../components/notice';
+import { FactList, Panel } from '../../../components/panel';
+import { isApiError } from '../../../lib/api-client';
+import { formatMoney, useDateFormat } from '../../../lib/format';
+import { useTakeDeposit } from '../api/take-deposit';
+import type { DepositHoldView, RentalView } from '../api/types';
+import { DepositStateChip, HoldLapse, paymentProblem } from './billing-words';
+import { SettleDeposit } from './settle-deposit';
+import { TableHead } from './table-head';
+
+const brand = (name: string | null) => (name ? name[0].toUpperCase() + name.slice(1) : 'Card');
+const card = (hold: DepositHoldView | null) => (hold?.cardLast4 ? `${brand(hold.cardBrand)} ending ${hold.cardLast4}` : null);
+
+/** The rental's deposit: the hold on the renter's card, taking it, and settling it at return. */
+export function DepositPanel({ rental, canManage, canCharge }: { rental: RentalView; canManage: boolean; canCharge: boolean }) {
+  const { dateTime } = useDateFormat();
+  const { state, hold, holds } = rental.deposit;
+  const money = (minor: number) => formatMoney(minor, rental.currency);
+  const stillOut = rental.state === 'reserved' || rental.state === 'out';
+  const canTake = stillOut && (state === 'none' || state === 'declined' || state === 'lapsed');
+  const authorized = state === 'authorized' && hold;
+  return (
+    <Panel title="Deposit" className="lg:col-span-2">
+      <div className="grid items-start gap-4 lg:grid-cols-2">
+        <div className="flex flex-col gap-4">
+          <FactList
+            items={[
+              { term: 'State', value: <DepositStateChip state={state} /> },
+              { term: 'Deposit asked', value: money(rental.depositMinor) },
+              { term: 'Card', value: card(hold) },
+              ...(authorized ? [{ term: 'Amount held', value: money(hold.amountMinor) }, { term: 'Lapses at', value: <HoldLapse at={hold.captureBefore} dateTime={dateTime} /> }] : []),
+              ...(state === 'declined' && hold?.failureMessage ? [{ term: 'Declined', value: hold.failureMessage }] : []),
+              ...(hold && hold.capturedMinor > 0 ? [{ term: 'Captured', value: `${money(hold.capturedMinor)}${hold.captureReason ? ` — ${hold.captureReason}` : ''}` }] : []),
+            ]}
+          />
+          {canManage && canTake ? <TakeDeposit rentalId={rental.id} amount={money(rental.depositMinor)} /> : null}
+          {authorized && !rental.returnedAt ? (
+            <p className="text-sm text-ink-700">The hold stays on the card until the kit is back. Nestkeeper renews it on the saved card before it would lapse.</p>
+          ) : null}
+          {authorized && rental.returnedAt && canManage ? <SettleDeposit rental={rental} hold={hold} canCharge={canCharge} /> : null}
+        </div>
+        {holds.length ? <HoldHistory holds={holds} currency={rental.currency} dateTime={dateTime} /> : null}
+      </div>
+    </Panel>
+  );
+}
+
+function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string }) {
+  const take = useTakeDeposit();
+  const [problem, setProblem] = useState<{ title: string; text: string }>();
+  return (
+    <Formik
+      initialValues={{ paymentMethod: testCards[0].paymentMethod as string }}
+      validationSchema={Yup.object({ paymentMethod: Yup.string().required('Pick a card.') })}
+      onSubmit={async ({ paymentMethod }) => {
+        setProblem(undefined);
+        try {
+          await take.mutateAsync({ rentalId, paymentMethod });
+        } catch (error) {
+          const declined = isApiError(error) && error.code === 'card_declined';
+          setProblem({ title: declined ? 'The card was declined' : 'No deposit was taken', text: declined ? `${error.message} Try another card.` : paymentProblem(error) });
+        }
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form noValidate className="flex flex-col gap-3 rounded-md border border-paper-line bg-paper p-3" aria-label="Take the deposit">
+          {problem ? (
+            <Notice tone="error" title={problem.title}>
+              {problem.text}
+            </Notice>
+          ) : null}
+          <SelectField
+            name="paymentMethod"
+            label="Test card"
+            options={testCards.map((c) => ({ value: c.paymentMethod, label: c.label }))}
+            hint="Card numbers never reach Nestkeeper. This setup offers the payment provider's test cards; in production the provider's own hosted card form takes the renter's card."
+          />
+          <div>
+            <Button type="submit" variant="primary" busy={isSubmitting}>
+              Take deposit
+            </Button>
+            <span className="ml-3 text-sm text-ink-700">Holds {amount} on the card; nothing is charged yet.</span>
+          </div>
+        </Form>
+      )}
+    </Formik>
+  );
+}
+
+function HoldHistory({ holds, currency, dateTime }: { holds: DepositHoldView[]; currency: string; dateTime: (value: string) => string }) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full text-left text-sm">
+        <caption className="mb-1 text-left font-semibold text-ink-900">Hold history</caption>
+        <TableHead columns={['Taken', 'How', 'Card', 'Held#', 'State', 'Captured#', 'Note']} />
+        <tbody className="divide-y divide-paper-line">
+          {holds.map((h) => (
+            <tr key={h.id}>
+              <td className="py-1.5 pr-2">{dateTime(h.createdAt)}</td>
+              <td className="py-1.5 pr-2">{h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card'}</td>
+              <td className="py-1.5 pr-2 font-mono">{card(h) ?? '—'}</td>
+              <td className="py-1.5 pr-2 text-right tabular-nums">{formatMoney(h.amountMinor, currency)}</td>
+              <td className="py-1.5 pr-2">
+                <DepositStateChip state={h.state} />
+              </td>
+              <td className="py-1.5 pr-2 text-right tabular-nums">{h.capturedMinor ? formatMoney(h.capturedMinor, currency) : '—'}</td>
+              <td className="py-1.5">{h.failureMessage ?? h.captureReason ?? (h.settledAt ? `Settled ${dateTime(h.settledAt)}` : '')}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,105 @@
+import { useState } from 'react';
+import { Button, buttonClasses } from '../../../components/button';
+import { DownloadIcon } from '../../../components/icons';
+import { Notice } from '../../../components/notice';
+import { Panel } from '../../../components/panel';
+import { formatCalendarDate, formatMoney } from '../../../lib/format';
+import { invoiceDocumentUrl } from '../api/get-invoices';
+import { rentalDocumentUrl } from '../api/get-rental';
+import { useIssueInvoice } from '../api/issue-invoice';
+import type { InvoiceLine, InvoiceSummary, RentalView } from '../api/types';
+import { ChargesEditor } from './charges-editor';
+import { CreditNoteDialog } from './credit-note-dialog';
+import { MoneyLines } from './money-lines';
+
+const lineKindWords: Record<InvoiceLine['kind'], string> = { rental: 'Rental', late: 'Late days', damage: 'Damage or loss', credit: 'Credit' };
+
+/** Why the invoice cannot be issued yet, or null when it can. */
+function notReady(rental: RentalView): string | null {
+  if (!rental.returnedAt) return 'The invoice can be issued once the kit is back.';
+  if (rental.deposit.state === 'authorized') return 'Settle the deposit first: capture from the hold or release it.';
+  return null;
+}
+
+/** What the rental comes to, the invoice and its credit notes. */
+export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCharge: boolean }) {
+  const issue = useIssueInvoice();
+  const [creditOpen, setCreditOpen] = useState(false);
+  const { settlement, currency } = rental;
+  const invoice = rental.invoices.find((i) => i.kind === 'invoice');
+  const creditNotes = rental.invoices.filter((i) => i.kind === 'credit_note');
+  const blocker = notReady(rental);
+  const settling = rental.returnedAt && !invoice && rental.deposit.state !== 'authorized';
+  return (
+    <Panel title="Invoice" className="lg:col-span-2">
+      <div className="flex flex-col gap-4">
+        {settling ? <ChargesEditor rental={rental} canCharge={canCharge} /> : null}
+        <MoneyLines
+          caption="What the rental comes to"
+          currency={currency}
+          lines={settlement.lines.map((line, i) => ({ key: `${line.kind}-${i}`, description: line.description, detail: lineKindWords[line.kind], quantity: line.quantity, unitMinor: line.unitMinor, amountMinor: line.amountMinor }))}
+          totals={[
+            { label: 'Subtotal', minor: settlement.subtotalMinor },
+            { label: 'Tax', minor: settlement.taxMinor },
+            { label: 'Total', minor: settlement.totalMinor, strong: true },
+            { label: 'Paid from the deposit', minor: settlement.depositCapturedMinor },
+            { label: 'Charged to the saved card', minor: settlement.cardChargedMinor },
+            { label: 'Balance due', minor: settlement.balanceMinor, strong: true },
+          ]}
+        />
+        {invoice ? (
+          <div className="flex flex-wrap items-center gap-3">
+            <p>
+              Invoice <span className="font-mono font-semibold">{invoice.number}</span>, issued {formatCalendarDate(invoice.issuedOn)}
+              {invoice.creditedMinor ? `; ${formatMoney(invoice.creditedMinor, currency)} credited` : ''}.
+            </p>
+            <a href={rentalDocumentUrl(rental.id, 'invoice')} target="_blank" rel="noopener" className={buttonClasses('secondary', 'sm')}>
+              <DownloadIcon size={14} />
+              Download invoice (PDF)
+            </a>
+            {canCharge ? (
+              <Button size="sm" onClick={() => setCreditOpen(true)}>
+                Credit note
+              </Button>
+            ) : null}
+          </div>
+        ) : canCharge ? (
+          <div className="flex flex-col gap-2">
+            {issue.isError ? <Notice tone="error" title="The invoice was not issued">{issue.error.message}</Notice> : null}
+            <div className="flex flex-wrap items-center gap-3">
+              <Button variant="primary" busy={issue.isPending} disabled={!!blocker} onClick={() => issue.mutate(rental.id)}>
+                Issue invoice
+              </Button>
+              {blocker ? <span className="text-sm text-ink-700">{blocker}</span> : null}
+            </div>
+          </div>
+        ) : null}
+        {creditNotes.length ? <CreditNotes notes={creditNotes} /> : null}
+      </div>
+      {invoice ? <CreditNoteDialog invoice={invoice} open={creditOpen} onClose={() => setCreditOpen(false)} /> : null}
+    </Panel>
+  );
+}
+
+function CreditNotes({ notes }: { notes: InvoiceSummary[] }) {
+  return (
+    <section aria-labelledby="credit-notes-heading">
+      <h3 id="credit-notes-heading" className="mb-1 font-semibold text-ink-900">
+        Credit notes
+      </h3>
+      <ul className="flex flex-col divide-y divide-paper-line">
+        {notes.map((note) => (
+          <li key={note.id} className="flex flex-wrap items-center gap-x-3 gap-y-1 py-1.5 text-sm">
+            <span className="font-mono font-semibold">{note.number}</span>
+            <span>{formatCalendarDate(note.issuedOn)}</span>
+            <span className="tabular-nums">{formatMoney(note.totalMinor, note.currency)}</span>
+            <span className="min-w-0 flex-1 text-ink-700">{note.reason}</span>
+            <a href={invoiceDocumentUrl(note.id)} target="_blank" rel="noopener" className="font-semibold text-brass-deep underline">
+              {`Credit note ${note.number} (PDF)`}
+            </a>
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}

@@ -1,0 +1,76 @@
+import type { ColDef, ICellRendererParams, ValueFormatterParams } from 'ag-grid-community';
+import { useMemo, type ReactNode } from 'react';
+import { Link } from 'react-router-dom';
+import { actionsColumnType, DataGrid } from '../../../components/data-grid';
+import { formatCalendarDate, formatMoney } from '../../../lib/format';
+import { invoiceDocumentUrl } from '../api/get-invoices';
+import type { InvoiceSummary } from '../api/types';
+
+type Cell = ICellRendererParams<InvoiceSummary>;
+const kindWords: Record<InvoiceSummary['kind'], string> = { invoice: 'Invoice', credit_note: 'Credit note' };
+
+/** Invoices and credit notes: sort, filter, export; the number opens the rental, the PDF link the document. */
+export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undefined; toolbar?: ReactNode }) {
+  const columns = useMemo<ColDef<InvoiceSummary>[]>(() => {
+    const money = (field: keyof InvoiceSummary & `${string}Minor`, headerName: string): ColDef<InvoiceSummary> => ({
+      headerName,
+      field,
+      type: 'numericColumn',
+      minWidth: 120,
+      valueFormatter: (p: ValueFormatterParams<InvoiceSummary>) => (p.data ? formatMoney(p.value as number, p.data.currency) : ''),
+    });
+    return [
+      {
+        headerName: 'Number',
+        field: 'number',
+        minWidth: 130,
+        cellClass: 'font-mono font-semibold',
+        cellRenderer: (p: Cell) => (p.data ? <Link to={`/rentals/${p.data.rentalId}`} className="text-ink-900 underline-offset-2 hover:underline">{p.data.number}</Link> : null),
+      },
+      {
+        colId: 'kind',
+        headerName: 'Kind',
+        minWidth: 200,
+        valueGetter: (p) => (p.data ? kindWords[p.data.kind] : ''),
+        cellRenderer: (p: Cell) =>
+          p.data ? (
+            <span>
+              {kindWords[p.data.kind]}
+              {p.data.correctsNumber ? <span className="text-ink-700"> to <span className="font-mono">{p.data.correctsNumber}</span></span> : null}
+            </span>
+          ) : null,
+      },
+      { headerName: 'Issued on', field: 'issuedOn', minWidth: 120, sort: 'desc', valueFormatter: (p) => formatCalendarDate(p.value as string) },
+      { headerName: 'Customer', field: 'customerCompany', minWidth: 170, flex: 2 },
+      money('totalMinor', 'Total'),
+      money('depositCapturedMinor', 'From deposit'),
+      money('cardChargedMinor', 'Charged to card'),
+      money('balanceMinor', 'Balance'),
+      money('creditedMinor', 'Credited'),
+      {
+        colId: 'pdf',
+        headerName: 'Document',
+        type: actionsColumnType,
+        minWidth: 110,
+        maxWidth: 130,
+        cellRenderer: (p: Cell) =>
+          p.data ? (
+            <a href={invoiceDocumentUrl(p.data.id)} target="_blank" rel="noopener" aria-label={`${kindWords[p.data.kind]} ${p.data.number} (PDF)`} className="font-semibold text-brass-deep underline">
+              PDF
+            </a>
+          ) : null,
+      },
+    ];
+  }, []);
+  return (
+    <DataGrid<InvoiceSummary>
+      label="Invoices and credit notes"
+      rows={rows}
+      columns={columns}
+      rowId={(r) => r.id}
+      exportFileName="nestkeeper-invoices.csv"
+      emptyMessage="No invoices yet. An invoice is issued from its rental once the kit is back and the deposit is settled."
+      toolbar={toolbar}
+    />
+  );
+}

@@ -1,0 +1,110 @@
+import { Form, Formik } from 'formik';
+import { useState } from 'react';
+import * as Yup from 'yup';
+import { Button } from '../../../components/button';
+import { Field } from '../../../components/field';
+import { Notice } from '../../../components/notice';
+import { FactList } from '../../../components/panel';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { currencyDigits, formatMoney } from '../../../lib/format';
+import { amountText, parseAmount } from '../../../lib/money';
+import { useCaptureDeposit } from '../api/capture-deposit';
+import { useReleaseDeposit } from '../api/release-deposit';
+import type { DepositHoldView, RentalView } from '../api/types';
+import { paymentProblem } from './billing-words';
+import { ChargesEditor } from './charges-editor';
+
+/** What the hold is there to cover, in words, as the reason the clerk starts from. */
+function suggestedReason(rental: RentalView): string {
+  const late = rental.settlement.lateDays;
+  const parts = [late > 0 ? `Late return, ${late} ${late === 1 ? 'day' : 'days'}` : '', ...rental.charges.filter((c) => c.amountMinor).map((c) => `${c.assetTag} ${c.kind}`)];
+  return parts.filter(Boolean).join('; ');
+}
+
+/** At return: set the charges, then capture what the extras come to (the rest is released) or release the whole hold. */
+export function SettleDeposit({ rental, hold, canCharge }: { rental: RentalView; hold: DepositHoldView; canCharge: boolean }) {
+  const capture = useCaptureDeposit();
+  const release = useReleaseDeposit();
+  const [problem, setProblem] = useState<string>();
+  const { currency, settlement } = rental;
+  const digits = currencyDigits(currency);
+  const money = (minor: number) => formatMoney(minor, currency);
+  const suggested = Math.min(hold.amountMinor, settlement.extrasGrossMinor);
+  const schema = Yup.object({
+    amount: Yup.string()
+      .required('Give the amount to capture.')
+      .test('amount', `Enter an amount in ${currency}, e.g. ${amountText(suggested || 5000, digits)}.`, (v) => !v || parseAmount(v, digits) !== null)
+      .test('some', 'To capture nothing, release the whole hold instead.', (v) => !v || parseAmount(v, digits) !== 0),
+    reason: Yup.string().trim().required('Say what the amount is for; the renter sees it.').max(500, 'Keep the reason to 500 characters.'),
+  });
+
+  async function releaseAll() {
+    setProblem(undefined);
+    try {
+      await release.mutateAsync(rental.id);
+    } catch (error) {
+      setProblem(paymentProblem(error));
+    }
+  }
+
+  return (
+    <section aria-labelledby="settle-heading" className="flex flex-col gap-3 rounded-md border border-brass-deep/40 bg-brass-wash/40 p-3">
+      <h3 id="settle-heading" className="font-semibold text-ink-900">
+        Settle the deposit
+      </h3>
+      <ChargesEditor rental={rental} canCharge={canCharge} />
+      <FactList
+        items={[
+          { term: 'Late days', value: settlement.lateDays ? `${settlement.lateDays} (day rate plus late fee each)` : 'None: back on time' },
+          { term: 'Extras with tax', value: money(settlement.extrasGrossMinor) },
+          { term: 'Held on the card', value: money(hold.amountMinor) },
+        ]}
+      />
+      <Formik
+        initialValues={{ amount: amountText(suggested, digits), reason: suggestedReason(rental) }}
+        enableReinitialize
+        validationSchema={schema}
+        onSubmit={async (values, helpers) => {
+          setProblem(undefined);
+          try {
+            await capture.mutateAsync({ rentalId: rental.id, amountMinor: parseAmount(values.amount, digits) ?? 0, reason: values.reason.trim() });
+          } catch (error) {
+            const unplaced = applyServerErrors(error, helpers, { fields: ['amount', 'reason'], aliases: { amountMinor: 'amount' } });
+            setProblem(unplaced === undefined ? undefined : paymentProblem(error));
+          }
+        }}
+      >
+        {({ isSubmitting, values }) => {
+          const amount = parseAmount(values.amount, digits);
+          return (
+            <Form noValidate className="flex flex-col gap-3" aria-label="Settle the deposit">
+              {problem ? (
+                <Notice tone="error" title="The deposit is not settled yet">
+                  {problem}
+                </Notice>
+              ) : null}
+              <div className="grid gap-3 sm:grid-cols-2">
+                <Field name="amount" label={`Amount to capture (${currency})`} inputMode="decimal" autoComplete="off" hint={captureHint(amount, hold.amountMinor, money)} />
+                <Field name="reason" label="Reason" autoComplete="off" />
+              </div>
+              <div className="flex flex-wrap gap-2">
+                <Button type="submit" variant="primary" busy={isSubmitting} disabled={release.isPending}>
+                  Capture and release the rest
+                </Button>
+                <Button variant="secondary" busy={release.isPending} disabled={isSubmitting} onClick={() => void releaseAll()}>
+                  Release the whole hold
+                </Button>
+              </div>
+            </Form>
+          );
+        }}
+      </Formik>
+    </section>
+  );
+}
+
+function captureHint(amount: number | null, heldMinor: number, money: (minor: number) => string): string | undefined {
+  if (amount === null || amount === 0) return undefined;
+  if (amount > heldMinor) return `The hold covers ${money(heldMinor)}; the other ${money(amount - heldMinor)} is charged to the saved card.`;
+  return `${money(amount)} is captured; the other ${money(heldMinor - amount)} is released to the renter's card.`;
+}

@@ -5,13 +5,16 @@ import nodemailer from 'nodemailer';
 import { chromium, type Browser } from 'playwright-core';
 import { buildApp } from '../../server/app';
 import { readConfig } from '../../server/config';
+import { startPaymentFake } from '../../server/fakes/payment-fake';
 import { createTestDatabase } from './test-db';
 
 /** The real server with the built client on a free loopback port, a seeded
- * database, and Debian's Chromium driven by playwright-core (which gives each
- * launch a fresh, throwaway user-data directory). */
+ * database, the payment-provider fake delivering signed webhooks to it, and
+ * Debian's Chromium driven by playwright-core (which gives each launch a
+ * fresh, throwaway user-data directory). */
 export async function startBrowserRig() {
   const database = await createTestDatabase({ seed: true });
+  const payments = await startPaymentFake({ port: 0, webhookSecret: 'whsec_browser_rig' });
   const config = readConfig({
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
@@ -20,6 +23,8 @@ export async function startBrowserRig() {
     RUN_SCHEDULER: 'false',
     SMTP_PORT: '9',
     CLIENT_DIR: path.resolve('dist/client'),
+    PAYMENT_API_PORT: String(payments.port),
+    PAYMENT_WEBHOOK_SECRET: 'whsec_browser_rig',
   });
   if (!fs.existsSync(path.join(config.CLIENT_DIR, 'index.html'))) throw new Error('The client is not built: run the suite with `npm test`.');
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: 9 });
@@ -28,6 +33,7 @@ export async function startBrowserRig() {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
   const { port } = server.address() as { port: number };
+  payments.store.settings.webhookUrl = `http://127.0.0.1:${port}/api/webhooks/payments`;
   const browser: Browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: [
@@ -49,6 +55,7 @@ export async function startBrowserRig() {
       await browser.close();
       server.closeAllConnections();
       await new Promise((r) => server.close(r));
+      await payments.close();
       await database.drop();
     },
   };

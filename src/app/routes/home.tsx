@@ -8,6 +8,7 @@ import { MyKitPanels, TodayAtCounter } from '../../features/bookings/components/
 import { OpenImpactReviews } from '../../features/calibration/components/impact-review-links';
 import { RecalibrationsDue } from '../../features/fleet/components/due-list';
 import { HeldItems } from '../../features/fleet/components/held-list';
+import { BillingDeskPanels } from '../../features/billing/components/billing-desk-panels';
 import { IncidentList } from '../../features/incidents/components/incident-list';
 import type { Role } from '../../lib/roles';
 
@@ -89,20 +90,7 @@ const homes: Record<Role, RoleHome> = {
   billing: {
     title: 'Billing desk',
     description: 'Rentals to price, deposits to handle and invoices to issue.',
-    panels: [
-      {
-        title: 'Rentals to price',
-        body: 'Rental bookings waiting for a quote will appear here once customers and the rate card are set up.',
-      },
-      {
-        title: 'Deposit holds',
-        body: 'Card holds taken at checkout, and holds close to lapsing, will be listed here with what can still be captured.',
-      },
-      {
-        title: 'Invoices to issue',
-        body: 'Returned rentals ready to invoice will appear here, with any damage or late charges.',
-      },
-    ],
+    panels: [{ title: 'Billing desk', body: null, live: () => <BillingDeskPanels /> }],
   },
 };
 

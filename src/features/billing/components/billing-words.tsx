@@ -32,6 +32,8 @@ export function DepositStateChip({ state }: { state: DepositState | HoldState })
 }
 
 const SOON_MS = 48 * 3600 * 1000;
+/** Within 48 hours of lapsing (or past it): the clerk should act. */
+export const lapsesSoon = (at: string | null) => !!at && new Date(at).getTime() - Date.now() <= SOON_MS;
 
 /** When a card hold lapses; within 48 hours it says so in words with a clock, past it says "lapsed". */
 export function HoldLapse({ at, dateTime }: { at: string | null; dateTime: (value: string) => string }) {

@@ -1,0 +1,80 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { addDays, todayIn } from '../../shared/calibration/due-date';
+import { startBrowserRig } from '../support/browser';
+import { signedIn } from '../support/browser-session';
+import { pdfText } from '../support/pdf';
+
+let rig: Awaited<ReturnType<typeof startBrowserRig>>;
+beforeAll(async () => {
+  rig = await startBrowserRig();
+});
+afterAll(() => rig?.close());
+
+async function apiAs(email: string) {
+  const login = await fetch(`${rig.baseUrl}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password: 'nestkeeper-demo' }) });
+  const { token } = await login.json();
+  return (path: string, body?: unknown) =>
+    fetch(`${rig.baseUrl}/api${path}`, { method: body ? 'POST' : 'GET', headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` }, body: body ? JSON.stringify(body) : undefined }).then(async (r) => ({ status: r.status, body: await r.json() }));
+}
+
+describe('the billing desk in a real browser', () => {
+  it('quotes and creates a rental, takes the deposit, captures a damaged SMR’s repair from the hold, releases the rest and downloads the invoice', async () => {
+    const today = todayIn('Europe/Berlin');
+    const startsOn = addDays(today, 30);
+    const endsOn = addDays(today, 36);
+    const clerkApi = await apiAs('billing@demo.test');
+    const free = (await clerkApi(`/availability?type=smr&startsOn=${startsOn}&endsOn=${endsOn}&limit=2`)).body.items as { id: string; assetTag: string }[];
+    expect(free).toHaveLength(2);
+
+    const { context, page, nav } = await signedIn(rig.browser, rig.baseUrl, 'billing@demo.test', 'Billing desk');
+    await nav.getByRole('link', { name: 'Rentals' }).click();
+    await page.getByRole('link', { name: 'New rental' }).click();
+    await page.getByLabel('Customer', { exact: true }).selectOption({ label: 'Ostby Mould & Die' });
+    await page.getByLabel('Starts on').fill(startsOn);
+    await page.getByLabel('Ends on').fill(endsOn);
+    for (const smr of free) {
+      await page.getByLabel('Add separate items').fill(smr.assetTag);
+      await page.getByRole('button', { name: `Add ${smr.assetTag}` }).click();
+    }
+    // The quote follows the form: 7 days of two SMRs is one week each at 75.00 (demo rate card), + 19 % tax.
+    await expect.poll(() => page.locator('main').innerText(), { timeout: 10_000 }).toMatch(/1 week/);
+    await expect.poll(() => page.locator('main').innerText()).toMatch(/€178\.50/);
+    await page.getByRole('button', { name: 'Create rental' }).click();
+    await page.waitForURL(/\/rentals\/[0-9a-f-]{36}$/, { timeout: 10_000 });
+    const rentalId = page.url().split('/').pop()!;
+    await page.getByRole('heading', { level: 1, name: /^Rental R-\d+$/ }).waitFor();
+
+    await page.getByLabel('Test card').selectOption({ label: 'Visa ending 4242 — approves' });
+    await page.getByRole('button', { name: 'Take deposit' }).click();
+    await expect.poll(() => page.locator('main').innerText(), { timeout: 10_000 }).toMatch(/Visa ending 4242/);
+
+    // At the counter (the shop manager): out, then back with one SMR dented.
+    const managerApi = await apiAs('manager@demo.test');
+    const rental = (await clerkApi(`/rentals/${rentalId}`)).body;
+    const walk = (damaged?: string) => ({ counterpart: 'Purchasing, Ostby Mould & Die', checklist: rental.items.map((i: { id: string }) => ({ assetId: i.id, present: true, condition: i.id === damaged ? 'damaged' : 'good' })) });
+    expect((await managerApi(`/bookings/${rental.bookingId}/checkout`, walk())).status).toBe(200);
+    const dented = rental.items[0];
+    expect((await managerApi(`/bookings/${rental.bookingId}/return`, walk(dented.id))).status).toBe(200);
+
+    await page.reload();
+    await page.getByRole('heading', { name: 'Settle the deposit' }).waitFor({ timeout: 10_000 });
+    await page.getByLabel(`Charge for ${dented.assetTag}, net of tax (EUR)`).fill('180.00');
+    await page.getByRole('button', { name: 'Save charge' }).click();
+    // Repair 180.00 + 19 % = 214.20 from the 500.00 hold (worked by hand); the rest is released.
+    await expect.poll(() => page.getByLabel('Amount to capture (EUR)').inputValue(), { timeout: 10_000 }).toMatch(/^214\.20?$/);
+    await page.getByRole('button', { name: 'Capture and release the rest' }).click();
+    await expect.poll(async () => (await rig.db.query(`SELECT state, captured_minor FROM deposit_holds WHERE rental_id = $1 AND kind = 'hold' AND state <> 'declined'`, [rentalId]))[0], { timeout: 10_000 }).toEqual({ state: 'captured', captured_minor: 21_420 });
+
+    await page.getByRole('button', { name: 'Issue invoice' }).click();
+    const download = page.getByRole('link', { name: 'Download invoice (PDF)' });
+    await download.waitFor({ timeout: 10_000 });
+    const pdf = await context.request.get(new URL((await download.getAttribute('href'))!, rig.baseUrl).toString());
+    expect(pdf.headers()['content-type']).toBe('application/pdf');
+    const text = pdfText(Buffer.from(await pdf.body()));
+    const [{ number }] = await rig.db.query(`SELECT number FROM invoices WHERE rental_id = $1`, [rentalId]);
+    expect(text).toContain(number);
+    // 150.00 rental + 180.00 repair = 330.00 net, 392.70 with tax; 214.20 was taken from the hold: 178.50 due.
+    expect(text).toContain('€178.50');
+    await context.close();
+  }, 120_000);
+});

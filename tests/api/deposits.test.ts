@@ -5,6 +5,7 @@ import { createPaymentClient } from '../../server/billing/payment-client';
 import { startPaymentFake, type PaymentFake } from '../../server/fakes/payment-fake';
 import { signPayload } from '../../server/fakes/payments/events';
 import type { RentalView } from '../../shared/billing/views';
+import { todayIn } from '../../shared/calibration/due-date';
 import { pdfText } from '../support/pdf';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
@@ -30,7 +31,7 @@ beforeAll(async () => {
   stripe = createPaymentClient({ PAYMENT_API_KEY: t.config.PAYMENT_API_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 5000 });
   [billing, manager, tech, owner, otherOwner] = await Promise.all(['billing@demo.test', 'manager@demo.test', 'tech@demo.test', 'owner@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
   await t.api.patch('/api/settings').set(bearer(owner)).send({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 } });
-  await t.api.post('/api/rate-cards').set(bearer(billing)).send({ assetType: 'smr', dayMinor: 1500, weekMinor: 7500, monthMinor: 24_000, lateFeePerDayMinor: 500 });
+  // The demo seed's SMR rate card: day 15.00, week 75.00, month 240.00, late fee 5.00.
   customerId = (await t.api.post('/api/customers').set(bearer(billing)).send({ company: 'Quillon Test Rigs', billingEmail: 'accounts@quillon.test', billingContact: 'Ines Varga' })).body.id;
 });
 afterAll(async () => {
@@ -64,7 +65,7 @@ describe('a rental from quote to invoice', () => {
 
   it('books at quoted prices under the booking rules; technicians may not rent', async () => {
     rental = await newRental();
-    expect(rental).toMatchObject({ number: 'R-0001', state: 'reserved', currency: 'EUR', depositMinor: 50_000 });
+    expect(rental).toMatchObject({ number: expect.stringMatching(/^R-\d{4}$/), state: 'reserved', currency: 'EUR', depositMinor: 50_000 });
     // 13 days of two SMRs: two weeks each (common practice: cheapest cover), 300.00 + 19 % tax.
     expect(rental.quote).toMatchObject({ days: 13, subtotalMinor: 30_000, taxMinor: 5700, totalMinor: 35_700 });
     const booking = (await t.api.get(`/api/bookings/${rental.bookingId}`).set(bearer(manager))).body;
@@ -134,11 +135,15 @@ describe('a rental from quote to invoice', () => {
   });
 
   it('issues the invoice with a gapless number, a PDF and an e-mail; a credit note corrects it', async () => {
+    const year = Number(todayIn('Europe/Berlin').slice(0, 4));
+    // The next numbers after the demo's own invoices and credit notes of this year.
+    const [{ invoices, credits }] = await t.db.query(`SELECT count(*) FILTER (WHERE kind = 'invoice')::int AS invoices, count(*) FILTER (WHERE kind = 'credit_note')::int AS credits FROM invoices WHERE issued_on >= make_date($1, 1, 1)`, [year]);
+    const invoiceNo = `${year}-${String(invoices + 1).padStart(4, '0')}`;
+    const creditNo = `CN-${year}-${String(credits + 1).padStart(4, '0')}`;
     const issued = await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing));
     expect(issued.status, JSON.stringify(issued.body)).toBe(201);
-    const year = new Date().getUTCFullYear();
     // 300.00 rental + 180.00 repair = 480.00; tax 91.20; total 571.20; 214.20 taken from the hold → 357.00 due (worked by hand).
-    expect(issued.body).toMatchObject({ number: `${year}-0001`, subtotalMinor: 48_000, taxMinor: 9120, totalMinor: 57_120, depositCapturedMinor: 21_420, balanceMinor: 35_700 });
+    expect(issued.body).toMatchObject({ number: invoiceNo, subtotalMinor: 48_000, taxMinor: 9120, totalMinor: 57_120, depositCapturedMinor: 21_420, balanceMinor: 35_700 });
     expect((await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing))).status).toBe(409);
     const pdf = await t.api.get(`/api/rentals/${rental.id}/invoice.pdf`).set(bearer(billing)).buffer(true).parse((res, cb) => {
       const chunks: Buffer[] = [];
@@ -147,21 +152,21 @@ describe('a rental from quote to invoice', () => {
     });
     expect(pdf.headers['content-type']).toBe('application/pdf');
     const text = pdfText(pdf.body as Buffer);
-    expect(text).toContain(`${year}-0001`);
+    expect(text).toContain(invoiceNo);
     expect(text).toContain('€357.00');
-    expect((await mailTo('accounts@quillon.test')).at(-1).files).toEqual([`invoice-${year}-0001.pdf`]);
+    expect((await mailTo('accounts@quillon.test')).at(-1).files).toEqual([`invoice-${invoiceNo}.pdf`]);
     const tooMuch = await t.api.post(`/api/invoices/${issued.body.id}/credit-note`).set(bearer(billing)).send({ reason: 'Goodwill', amountMinor: 48_001 });
     expect(tooMuch.status).toBe(422);
     const credit = await t.api.post(`/api/invoices/${issued.body.id}/credit-note`).set(bearer(billing)).send({ reason: 'Repair cost lower than estimated', amountMinor: 3000 });
     expect(credit.status).toBe(201);
     // 30.00 + 19 % = 35.70 credited.
-    expect(credit.body).toMatchObject({ kind: 'credit_note', number: `CN-${year}-0001`, correctsNumber: `${year}-0001`, totalMinor: 3570 });
+    expect(credit.body).toMatchObject({ kind: 'credit_note', number: creditNo, correctsNumber: invoiceNo, totalMinor: 3570 });
     expect((await t.api.get(`/api/invoices/${issued.body.id}`).set(bearer(billing))).body.creditedMinor).toBe(3000);
     // Invoices are never edited: the database refuses.
     await expect(t.db.query(`UPDATE invoices SET total_minor = 0 WHERE id = $1`, [issued.body.id])).rejects.toThrow();
     const csv = await t.api.get('/api/invoices/export.csv').set(bearer(billing));
     expect(csv.text.split('\r\n')[0]).toContain('number,kind,issued_on');
-    expect(csv.text).toContain(`CN-${year}-0001`);
+    expect(csv.text).toContain(creditNo);
   });
 });
 

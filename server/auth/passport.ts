@@ -3,6 +3,7 @@ import type { Request } from 'express';
 import { Passport, type PassportStatic } from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { DataSource } from 'typeorm';
+import { preparedQuery } from '../db/prepared';
 import type { Actor } from '../db/transaction';
 import { SESSION_COOKIE, type TokenClaims } from './tokens';
 
@@ -22,9 +23,9 @@ export function createPassport(db: DataSource, key: KeyObject): PassportStatic {
         jwtFromRequest: ExtractJwt.fromExtractors([ExtractJwt.fromAuthHeaderAsBearerToken(), fromSessionCookie]),
       },
       (claims: TokenClaims, done: (err: unknown, user?: Actor | false) => void) => {
-        // Plain SQL: this runs on every request.
-        db.query(`SELECT role, disabled, token_version FROM users WHERE id = $1 AND organization_id = $2`, [claims.sub, claims.org])
-          .then(([user]: { role: Actor['role']; disabled: boolean; token_version: number }[]) => {
+        // A prepared statement: this runs on every request.
+        preparedQuery<{ role: Actor['role']; disabled: boolean; token_version: number }>(db, 'auth_user', `SELECT role, disabled, token_version FROM users WHERE id = $1 AND organization_id = $2`, [claims.sub, claims.org])
+          .then(([user]) => {
             if (!user || user.disabled || user.token_version !== claims.ver) return done(null, false);
             done(null, { userId: claims.sub, organizationId: claims.org, role: user.role });
           })

@@ -41,9 +41,16 @@ export function conflictingItems(tx: Scoped, assetIds: string[], startsOn: strin
   );
 }
 
-/** Assets of a type that are free and valid for the whole window (GET /api/availability). */
+/**
+ * Assets of a type that are free and valid for the whole window (GET /api/availability).
+ * Prepared, and shaped for the plan that stops at `limit`: assets in display
+ * order (assets_availability_order), each probed for an overlapping active
+ * booking (booking_items_active_by_asset; inclusive dates, so overlap is
+ * ends_on >= start and starts_on <= end).
+ */
 export function availableAssets(tx: Scoped, opts: { type?: string; startsOn: string; endsOn: string; exclude?: string[]; limit: number }) {
-  return tx.sql<{ id: string; assetTag: string; type: string; model: string | null; dueOn: string | null; kitName: string | null }>(
+  return tx.prepared<{ id: string; assetTag: string; type: string; model: string | null; dueOn: string | null; kitName: string | null }>(
+    'available_assets',
     `SELECT a.id, a.asset_tag AS "assetTag", a.type, a.model, to_char(a.due_on, 'YYYY-MM-DD') AS "dueOn", k.name AS "kitName"
        FROM assets a LEFT JOIN kits k ON k.id = a.kit_id
       WHERE a.organization_id = $1 AND ($2::text IS NULL OR a.type = $2)
@@ -51,8 +58,7 @@ export function availableAssets(tx: Scoped, opts: { type?: string; startsOn: str
         AND (NOT a.calibration_required OR a.due_on >= $4::date)
         AND NOT (a.id = ANY($5))
         AND NOT EXISTS (SELECT 1 FROM booking_items bi
-                         WHERE bi.asset_id = a.id AND bi.active
-                           AND daterange(bi.starts_on, bi.ends_on, '[]') && daterange($3::date, $4::date, '[]'))
+                         WHERE bi.asset_id = a.id AND bi.active AND bi.ends_on >= $3::date AND bi.starts_on <= $4::date)
         AND NOT ${TIP_NOT_VALIDATED('a')}
       ORDER BY a.kit_id IS NOT NULL, a.asset_tag
       LIMIT $6`,

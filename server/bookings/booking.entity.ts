@@ -106,6 +106,8 @@ export class BookingItem extends OrgOwned {
   @JoinColumn({ name: 'booking_id' })
   booking?: Booking;
 
+  // (asset, ends_on) of active rows only: "is this asset free then?" probed per asset; made by AvailabilityIndexes.
+  @Index('booking_items_active_by_asset', { synchronize: false })
   @Column({ name: 'asset_id', type: 'uuid' })
   assetId: string;
 

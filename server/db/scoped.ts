@@ -1,6 +1,7 @@
 import type { DeepPartial, EntityManager, EntityTarget, FindManyOptions, FindOptionsWhere, ObjectLiteral, QueryDeepPartialEntity } from 'typeorm';
 import { notFound } from '../http/errors';
 import type { OrgOwned } from './org-owned';
+import { preparedQuery } from './prepared';
 
 /**
  * The one way services touch organization-owned rows. It adds the signed-in
@@ -78,5 +79,10 @@ export class Scoped {
 
   sql<R = Record<string, unknown>>(text: string, params: unknown[] = []): Promise<R[]> {
     return this.manager.query(text, [this.organizationId, ...params]);
+  }
+
+  /** `sql` as a named prepared statement, for queries on the hot paths (see prepared.ts). */
+  prepared<R = Record<string, unknown>>(name: string, text: string, params: unknown[] = []): Promise<R[]> {
+    return preparedQuery<R>(this.manager, name, text, [this.organizationId, ...params]);
   }
 }

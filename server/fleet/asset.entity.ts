@@ -21,6 +21,8 @@ export class Asset extends OrgOwned {
   @Column({ type: 'text' })
   type: AssetType;
 
+  // (organization, type, in a kit or not, tag): the availability list's order, so it can stop at its limit; made by AvailabilityIndexes.
+  @Index('assets_availability_order', { synchronize: false })
   @Column({ name: 'asset_tag', type: 'text' })
   assetTag: string;
 

@@ -53,7 +53,8 @@ export async function seedBenchFleet(url: string, count: number) {
           location: locations[i % locations.length],
           replacementValueMinor: 10_000 + (i % 50) * 1_000,
           notes: null,
-          status: (['ready', 'ready', 'ready', 'out', 'held', 'at_lab'] as const)[i % 6],
+          // By the round through the types, not `i`: with 12 types, `i % 6` put every SMR at the lab.
+          status: (['ready', 'ready', 'ready', 'out', 'held', 'at_lab'] as const)[Math.floor(i / assetTypes.length) % 6],
           specs: specsFor[type]?.(i) ?? {},
           kitId: i % 4 === 0 ? kits[i % kits.length] : null,
           calibrationRequired: required,

@@ -27,16 +27,18 @@ export interface BookingRefusal {
 }
 
 const day = (date: string) => format(parseISO(date), 'd MMM yyyy');
+const fullRange = (startsOn: string, endsOn: string) => `${day(startsOn)} – ${day(endsOn)}`;
 
-/** The refusal in an API error, or null when the error is something else. */
-export function bookingRefusalFrom(error: unknown): BookingRefusal | null {
+/** The refusal in an API error, or null when the error is something else; `range` words the dates of the booking in the way. */
+export function bookingRefusalFrom(error: unknown, range = fullRange): BookingRefusal | null {
   if (!isApiError(error) || (error.code !== 'conflict' && error.code !== 'booking_blocked')) return null;
   const details = (error.details ?? {}) as RefusalDetails;
   const offered = (assetId: string) => details.alternatives?.[assetId] ?? [];
   const blocked = (details.blocked ?? []).map((b) => ({ assetId: b.assetId, why: `${b.assetTag} cannot go: ${blockReasonText[b.reason]}.`, alternatives: offered(b.assetId) }));
+  // The server lists every booking that holds an item; one line per item (its first clash) keeps one set of swap buttons.
   const clashes = (details.conflicts ?? [])
-    .filter((c) => !blocked.some((b) => b.assetId === c.assetId))
-    .map((c) => ({ assetId: c.assetId, why: `${c.assetTag} is already booked ${day(c.startsOn)} – ${day(c.endsOn)}.`, bookingId: c.bookingId, alternatives: offered(c.assetId) }));
+    .filter((c, i, all) => all.findIndex((o) => o.assetId === c.assetId) === i && !blocked.some((b) => b.assetId === c.assetId))
+    .map((c) => ({ assetId: c.assetId, why: `${c.assetTag} is already booked ${range(c.startsOn, c.endsOn)}.`, bookingId: c.bookingId, alternatives: offered(c.assetId) }));
   return { message: error.message, items: [...blocked, ...clashes] };
 }
 

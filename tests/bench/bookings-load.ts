@@ -1,4 +1,4 @@
-import autocannon from 'autocannon';
+import { backToBack, describeLoad, oneAtATime, peoplePaced, percentile } from './load';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 
 /**
@@ -10,31 +10,14 @@ const base = process.env.BENCH_URL!;
 const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@bench.test', password: 'nestkeeper-demo' }) });
 const { token } = (await login.json()) as { token: string };
 const headers = { authorization: `Bearer ${token}`, 'content-type': 'application/json' };
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 const today = todayIn('Europe/Berlin');
 
-/** 20 clients back to back, or each paced at `ratePerClient` requests a second. */
-async function availability(label: string, ratePerClient?: number) {
-  const times: number[] = [];
-  const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const instance = autocannon(
-      {
-        url: `${base}/api/availability?type=smr&startsOn=${addDays(today, 40)}&endsOn=${addDays(today, 53)}&limit=100`,
-        connections: 20,
-        duration: 15,
-        headers,
-        ...(ratePerClient ? { connectionRate: ratePerClient } : {}),
-      },
-      (err, r) => (err ? reject(err) : resolve(r)),
-    );
-    instance.on('response', (_c, _s, _b, ms) => times.push(ms));
-  });
-  times.sort((a, b) => a - b);
-  console.log(`GET /api/availability (type smr, two weeks), 20 connections ${label}, 15 s: ${result.requests.total} requests, ${result.requests.average.toFixed(0)} req/s, p50 ${percentile(times, 50).toFixed(1)} ms, p95 ${percentile(times, 95).toFixed(1)} ms, p99 ${percentile(times, 99).toFixed(1)} ms`);
-}
-console.log('');
-await availability('back to back');
-await availability('each paced at 5 requests a second', 5);
+const availability = `${base}/api/availability?type=smr&startsOn=${addDays(today, 40)}&endsOn=${addDays(today, 53)}&limit=100`;
+const first = (await (await fetch(availability, { headers })).json()) as { items: unknown[] };
+console.log(`\nGET /api/availability (type smr, two weeks, up to 100 free SMRs; this window has ${first.items.length}):`);
+console.log(`  one at a time                                  ${describeLoad(await oneAtATime(availability, headers))}`);
+console.log(`  20 people, think time ~200 ms (exponential)    ${describeLoad(await peoplePaced(availability, headers))}`);
+console.log(`  20 connections back to back (saturation)       ${describeLoad(await backToBack(availability, headers))}`);
 
 const kits = (await (await fetch(`${base}/api/kits?limit=500`, { headers })).json()) as { items: { id: string; name: string; memberCount: number }[] };
 const kit = kits.items.find((k) => k.name === 'Bench kit of twenty')!;

@@ -1,4 +1,4 @@
-import autocannon from 'autocannon';
+import { backToBack, describeLoad, peoplePaced } from './load';
 import { chromium } from 'playwright-core';
 
 /**
@@ -10,24 +10,11 @@ const base = process.env.BENCH_URL!;
 const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@bench.test', password: 'nestkeeper-demo' }) });
 const { token } = (await login.json()) as { token: string };
 
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
-
-/** `ratePerClient` paces each of the 20 clients (requests per second); without it they fire back to back. */
-async function load(name: string, pathAndQuery: string, ratePerClient?: number) {
-  const times: number[] = [];
-  let non2xx = 0;
-  const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const options = { url: `${base}${pathAndQuery}`, connections: 20, duration: 15, headers: { authorization: `Bearer ${token}` }, ...(ratePerClient ? { connectionRate: ratePerClient } : {}) };
-    const instance = autocannon(options, (err, r) => (err ? reject(err) : resolve(r)));
-    instance.on('response', (_client, status, _bytes, ms) => {
-      times.push(ms);
-      if (status >= 300) non2xx += 1;
-    });
-  });
-  times.sort((a, b) => a - b);
-  console.log(
-    `${name.padEnd(44)} ${String(result.requests.total).padStart(6)} req  ${(result.requests.average).toFixed(0).padStart(5)} req/s  p50 ${percentile(times, 50).toFixed(1)} ms  p95 ${percentile(times, 95).toFixed(1)} ms  p99 ${percentile(times, 99).toFixed(1)} ms${non2xx ? `  (${non2xx} non-2xx!)` : ''}`,
-  );
+const headers = { authorization: `Bearer ${token}` };
+/** Back to back (saturation), or 20 people with ~200 ms think times. */
+async function load(name: string, pathAndQuery: string, paced = false) {
+  const result = paced ? await peoplePaced(`${base}${pathAndQuery}`, headers) : await backToBack(`${base}${pathAndQuery}`, headers);
+  console.log(`${name.padEnd(44)} ${describeLoad(result)}`);
 }
 
 console.log('\nGET /api/assets, 20 connections, 15 s each, 20,000 assets');
@@ -35,9 +22,9 @@ await load('type filter + search "0001" (narrow)', '/api/assets?type=tracker,pro
 await load('type filter + search "shelf" (1 in 3 rows)', '/api/assets?type=tip,smr,battery&q=shelf&limit=50');
 await load('calibration overdue + search "orrin"', '/api/assets?calibration=overdue&q=orrin&sort=dueOn&limit=50');
 await load('no filter, first page', '/api/assets?limit=50');
-console.log('\nThe same, each of the 20 clients paced at 5 requests a second (people clicking, not a loop)');
-await load('type filter + search "0001" (narrow), paced', '/api/assets?type=tracker,probe&q=0001&limit=50', 5);
-await load('type filter + search "shelf", paced', '/api/assets?type=tip,smr,battery&q=shelf&limit=50', 5);
+console.log('\nThe same, 20 people each thinking ~200 ms between requests (exponential think times)');
+await load('type filter + search "0001" (narrow), paced', '/api/assets?type=tracker,probe&q=0001&limit=50', true);
+await load('type filter + search "shelf", paced', '/api/assets?type=tip,smr,battery&q=shelf&limit=50', true);
 
 const browser = await chromium.launch({
   executablePath: '/usr/bin/chromium',

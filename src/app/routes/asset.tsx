@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { Button, buttonClasses } from '../../components/button';
 import { AlertIcon, ArrowLeftIcon, PlusIcon, PrintIcon } from '../../components/icons';
+import { LoadFailure } from '../../components/load-failure';
 import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
 import { Panel } from '../../components/panel';
@@ -21,7 +22,6 @@ import { HoldPanel } from '../../features/holds/components/hold-panel';
 import { PutOnHoldButton } from '../../features/holds/components/put-on-hold';
 import { IncidentList } from '../../features/incidents/components/incident-list';
 import { kitsKeys } from '../../features/kits/api/keys';
-import { isApiError } from '../../lib/api-client';
 import { assetTypeTitles } from '../../lib/assets';
 import { todayIn } from '../../lib/bookings';
 import { can } from '../../lib/roles';
@@ -35,18 +35,7 @@ export default function AssetRoute() {
   const queryClient = useQueryClient();
 
   if (asset.isPending) return <LoadingPanel label="Loading the asset…" />;
-  if (asset.isError) {
-    const notFound = isApiError(asset.error) && asset.error.status === 404;
-    return (
-      <>
-        <PageHeader title={notFound ? 'Asset not found' : 'The asset could not be loaded'} />
-        <Notice tone="error">{notFound ? 'No asset in your fleet has this address. It may have been mistyped.' : asset.error.message}</Notice>
-        <Link to="/fleet" className={`${buttonClasses('secondary')} mt-4`}>
-          Back to all assets
-        </Link>
-      </>
-    );
-  }
+  if (asset.isError) return <LoadFailure error={asset.error} thing="asset" notFound="No asset in your fleet has this address. It may have been mistyped." back={{ to: '/fleet', label: 'Back to all assets' }} />;
 
   const a = asset.data;
   const canWrite = can(user.role, 'fleet.write') && a.status !== 'retired';

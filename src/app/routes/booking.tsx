@@ -1,8 +1,9 @@
-import { Link, useLocation, useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
+import { ArrivalNotice } from '../../components/arrival-notice';
 import { buttonClasses } from '../../components/button';
 import { ArrowLeftIcon } from '../../components/icons';
+import { LoadFailure } from '../../components/load-failure';
 import { LoadingPanel } from '../../components/loading-panel';
-import { Notice } from '../../components/notice';
 import { FactList, Panel } from '../../components/panel';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
@@ -10,30 +11,16 @@ import { useBooking } from '../../features/bookings/api/get-booking';
 import { BookingFacts, CancelBookingButton, MoveDatesButton, PackingList } from '../../features/bookings/components/booking-summary';
 import { bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
 import { useSiteJob } from '../../features/site-jobs/api/get-site-job';
-import { isApiError } from '../../lib/api-client';
 import { can } from '../../lib/roles';
 
 export default function BookingRoute() {
   const { id = '' } = useParams();
   const { user, organization } = useSession();
-  const location = useLocation();
   const booking = useBooking(id);
   const job = useSiteJob(booking.data?.jobId);
-  const notice = (location.state as { notice?: string } | null)?.notice;
 
   if (booking.isPending) return <LoadingPanel label="Loading the booking…" />;
-  if (booking.isError) {
-    const notFound = isApiError(booking.error) && booking.error.status === 404;
-    return (
-      <>
-        <PageHeader title={notFound ? 'Booking not found' : 'The booking could not be loaded'} />
-        <Notice tone="error">{notFound ? 'No booking of your firm has this address.' : booking.error.message}</Notice>
-        <Link to="/board" className={`${buttonClasses('secondary')} mt-4`}>
-          Back to the booking board
-        </Link>
-      </>
-    );
-  }
+  if (booking.isError) return <LoadFailure error={booking.error} thing="booking" notFound="No booking of your firm has this address." back={{ to: '/board', label: 'Back to the booking board' }} />;
 
   const b = booking.data;
   const handOver = can(user.role, 'bookings.hand_over');
@@ -60,11 +47,7 @@ export default function BookingRoute() {
         Booking board
       </Link>
       <PageHeader title={bookingTitle(b)} description={dayRange(b.startsOn, b.endsOn)} actions={actions.length ? actions : undefined} />
-      {notice ? (
-        <Notice tone="success" className="mb-4">
-          {notice}
-        </Notice>
-      ) : null}
+      <ArrivalNotice />
       <div className="grid gap-4 lg:grid-cols-2">
         <BookingFacts booking={b} timeZone={organization.timeZone} />
         {job.data ? (

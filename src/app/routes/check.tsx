@@ -1,13 +1,12 @@
 import { Link, useParams } from 'react-router-dom';
 import { ArrowLeftIcon } from '../../components/icons';
+import { LoadFailure } from '../../components/load-failure';
 import { LoadingPanel } from '../../components/loading-panel';
-import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useCheck } from '../../features/checks/api/get-check';
 import { CheckResult } from '../../features/checks/components/check-result';
 import { checkKindWords } from '../../features/checks/components/check-words';
 import { useAsset } from '../../features/fleet/api/get-asset';
-import { isApiError } from '../../lib/api-client';
 import { useDateFormat } from '../../lib/format';
 
 /** One stored field check, with the server's numbers. */
@@ -17,15 +16,7 @@ export default function CheckRoute() {
   const asset = useAsset(check.data?.assetId ?? '');
   const { dateTime } = useDateFormat();
   if (check.isPending) return <LoadingPanel label="Loading the check…" />;
-  if (check.isError) {
-    const notFound = isApiError(check.error) && check.error.status === 404;
-    return (
-      <>
-        <PageHeader title={notFound ? 'Check not found' : 'The check could not be loaded'} />
-        <Notice tone="error">{notFound ? 'No field check in your firm has this address.' : check.error.message}</Notice>
-      </>
-    );
-  }
+  if (check.isError) return <LoadFailure error={check.error} thing="check" notFound="No field check in your firm has this address." />;
   const c = check.data;
   const tag = asset.data?.assetTag;
   return (

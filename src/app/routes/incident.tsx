@@ -1,7 +1,7 @@
 import { Link, useParams } from 'react-router-dom';
 import { ArrowLeftIcon } from '../../components/icons';
+import { LoadFailure } from '../../components/load-failure';
 import { LoadingPanel } from '../../components/loading-panel';
-import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { BatteryCaution } from '../../components/safety-cautions';
 import { useSession } from '../../features/auth/components/session-context';
@@ -9,7 +9,6 @@ import { useIncident } from '../../features/incidents/api/get-incident';
 import { IncidentFacts, IncidentPhotos } from '../../features/incidents/components/incident-details';
 import { incidentKindWords } from '../../features/incidents/components/incident-words';
 import { ReviewActions } from '../../features/incidents/components/review-actions';
-import { isApiError } from '../../lib/api-client';
 import { can } from '../../lib/roles';
 
 export default function IncidentRoute() {
@@ -17,15 +16,7 @@ export default function IncidentRoute() {
   const { user, organization } = useSession();
   const incident = useIncident(id);
   if (incident.isPending) return <LoadingPanel label="Loading the report…" />;
-  if (incident.isError) {
-    const notFound = isApiError(incident.error) && incident.error.status === 404;
-    return (
-      <>
-        <PageHeader title={notFound ? 'Incident not found' : 'The incident could not be loaded'} />
-        <Notice tone="error">{notFound ? 'No incident in your firm has this address.' : incident.error.message}</Notice>
-      </>
-    );
-  }
+  if (incident.isError) return <LoadFailure error={incident.error} thing="incident" notFound="No incident in your firm has this address." />;
   const i = incident.data;
   const tag = i.asset?.assetTag;
   return (

@@ -3,8 +3,8 @@ import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { Button, buttonClasses } from '../../components/button';
 import { ArrowLeftIcon, PrintIcon } from '../../components/icons';
+import { LoadFailure } from '../../components/load-failure';
 import { LoadingPanel } from '../../components/loading-panel';
-import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { HeavyCaseCaution } from '../../components/safety-cautions';
 import { useSession } from '../../features/auth/components/session-context';
@@ -16,7 +16,6 @@ import { KitMembers } from '../../features/kits/components/kit-members';
 import { PackingList } from '../../features/kits/components/packing-list';
 import { ReadinessSummary } from '../../features/kits/components/readiness';
 import { ShippingSheetPanel } from '../../features/kits/components/shipping-sheet-panel';
-import { isApiError } from '../../lib/api-client';
 import { can } from '../../lib/roles';
 
 export default function KitRoute() {
@@ -28,15 +27,7 @@ export default function KitRoute() {
   const queryClient = useQueryClient();
 
   if (kit.isPending) return <LoadingPanel label="Loading the kit…" />;
-  if (kit.isError) {
-    const notFound = isApiError(kit.error) && kit.error.status === 404;
-    return (
-      <>
-        <PageHeader title={notFound ? 'Kit not found' : 'The kit could not be loaded'} />
-        <Notice tone="error">{notFound ? 'No kit of your firm has this address.' : kit.error.message}</Notice>
-      </>
-    );
-  }
+  if (kit.isError) return <LoadFailure error={kit.error} thing="kit" notFound="No kit of your firm has this address." />;
   const k = kit.data;
   const hasCase = k.members.some((m) => m.type === 'case' || m.type === 'tracker');
 

@@ -1,9 +1,9 @@
-import { Link, useLocation, useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
+import { ArrivalNotice } from '../../components/arrival-notice';
 import { buttonClasses } from '../../components/button';
 import { ArrowLeftIcon, DownloadIcon } from '../../components/icons';
 import { LoadFailure } from '../../components/load-failure';
 import { LoadingPanel } from '../../components/loading-panel';
-import { Notice } from '../../components/notice';
 import { FactList, Panel } from '../../components/panel';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
@@ -20,10 +20,8 @@ import { can } from '../../lib/roles';
 export default function RentalRoute() {
   const { id = '' } = useParams();
   const { user } = useSession();
-  const location = useLocation();
   const { dateTime } = useDateFormat();
   const rental = useRental(id);
-  const notice = (location.state as { notice?: string } | null)?.notice;
 
   if (rental.isPending) return <LoadingPanel label="Loading the rental…" />;
   if (rental.isError) {
@@ -50,11 +48,7 @@ export default function RentalRoute() {
         description={`${r.customer.company}, ${formatCalendarDate(r.startsOn)} – ${formatCalendarDate(r.endsOn)}`}
         actions={[pdf('agreement', 'Rental agreement (PDF)'), pdf('certificate-pack', 'Certificate pack (PDF)')]}
       />
-      {notice ? (
-        <Notice tone="success" className="mb-4">
-          {notice}
-        </Notice>
-      ) : null}
+      <ArrivalNotice />
       <div className="grid gap-4 lg:grid-cols-2">
         <Panel title="Rental">
           <FactList

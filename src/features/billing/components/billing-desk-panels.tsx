@@ -1,4 +1,5 @@
 import { Link } from 'react-router-dom';
+import { CountedSection } from '../../../components/counted-section';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { formatMoney, useDateFormat } from '../../../lib/format';
@@ -13,28 +14,23 @@ function RentalsPanel({ id, title, view, pick, empty, chip }: { id: string; titl
   const rentals = useRentals(view);
   const rows = rentals.data?.items.filter(pick) ?? [];
   return (
-    <section aria-labelledby={id} className="rounded-lg border border-paper-line bg-card p-4">
-      <div className="mb-2 flex items-baseline justify-between gap-2">
-        <h2 id={id} className="text-base font-semibold text-ink-900">
-          {title}
-        </h2>
-        {rentals.data ? <span className="text-sm text-ink-700">{rows.length === 0 ? 'none' : rows.length}</span> : null}
-      </div>
-      {rentals.isPending ? <LoadingPanel label="Looking for rentals…" /> : null}
-      {rentals.isError ? <Notice tone="error">{rentals.error.message}</Notice> : null}
-      {rentals.data && rows.length === 0 ? <p className="text-sm text-ink-700">{empty}</p> : null}
-      <ul className="flex flex-col divide-y divide-paper-line">
-        {rows.slice(0, 8).map((r) => (
-          <li key={r.id}>
-            <Link to={`/rentals/${r.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash">
-              <span className="font-mono font-semibold text-ink-900">{r.number}</span>
-              <span className="min-w-0 truncate text-sm text-ink-700">{r.customerCompany}</span>
-              <span className="ml-auto shrink-0">{chip(r)}</span>
-            </Link>
-          </li>
-        ))}
-      </ul>
-    </section>
+    <CountedSection
+      id={id}
+      title={title}
+      count={rentals.data ? rows.length : undefined}
+      empty={empty}
+      status={rentals.isPending ? <LoadingPanel label="Looking for rentals…" /> : rentals.isError ? <Notice tone="error">{rentals.error.message}</Notice> : null}
+    >
+      {rows.slice(0, 8).map((r) => (
+        <li key={r.id}>
+          <Link to={`/rentals/${r.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash">
+            <span className="font-mono font-semibold text-ink-900">{r.number}</span>
+            <span className="min-w-0 truncate text-sm text-ink-700">{r.customerCompany}</span>
+            <span className="ml-auto shrink-0">{chip(r)}</span>
+          </Link>
+        </li>
+      ))}
+    </CountedSection>
   );
 }
 

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Button } from '../../../components/button';
+import { ItemMatches } from '../../../components/item-matches';
 import { RemovableTags } from '../../../components/removable-tags';
 import { SearchBox } from '../../../components/search-box';
 import { assetTypeTitles } from '../../../lib/assets';
@@ -36,24 +36,11 @@ export function ItemPicker({ chosen, kitId, onChange }: { chosen: ChosenItem[]; 
       />
       <SearchBox label="Add separate items" value={q} onChange={setQ} placeholder="Tag, type or model, e.g. SMR" />
       {needle && found.data ? (
-        matches.length ? (
-          <ul className="flex flex-col divide-y divide-paper-line rounded-md border border-paper-line">
-            {matches.map((a) => (
-              <li key={a.id} className="flex items-center gap-2 px-2 py-1">
-                <span className="font-mono text-sm font-semibold">{a.assetTag}</span>
-                <span className="min-w-0 flex-1 truncate text-sm text-ink-700">
-                  {chosenFrom(a).detail}
-                  {a.kit ? ` · in ${a.kit.name}` : ''}
-                </span>
-                <Button size="sm" onClick={() => onChange([...chosen, chosenFrom(a)])}>
-                  Add {a.assetTag}
-                </Button>
-              </li>
-            ))}
-          </ul>
-        ) : (
-          <p className="text-sm text-ink-700">No item to add matches “{needle}”.</p>
-        )
+        <ItemMatches
+          items={matches.map((a) => ({ ...chosenFrom(a), kitName: a.kit?.name }))}
+          none={`No item to add matches “${needle}”.`}
+          onAdd={(id) => onChange([...chosen, ...matches.filter((a) => a.id === id).map(chosenFrom)])}
+        />
       ) : null}
       {found.isError ? <p className="text-sm text-bad">{found.error.message}</p> : null}
     </div>

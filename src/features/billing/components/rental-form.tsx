@@ -1,12 +1,15 @@
 import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
-import { useMemo, useState, type ReactNode } from 'react';
+import { useMemo, useState } from 'react';
 import * as Yup from 'yup';
 import { BookingRefusalPanel, bookingRefusalFrom, type Alternative, type BookingRefusal } from '../../../components/booking-refusal';
 import { Button } from '../../../components/button';
+import { DayRangeFields } from '../../../components/day-range-fields';
 import { Dialog } from '../../../components/dialog';
 import { Field, SelectField } from '../../../components/field';
+import { FormSection } from '../../../components/form-section';
 import { AlertIcon, PlusIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
+import { PackingListLine } from '../../../components/packing-list-line';
 import { dayRangeRules } from '../../../lib/day-range';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateRental } from '../api/create-rental';
@@ -143,21 +146,13 @@ function RentalFormBody({
 
         <FormSection legend="What goes">
           <SelectField name="kitId" label="Kit" options={kitOptions} hint="A kit rents every item on its packing list." />
-          {members.length ? (
-            <p className="text-sm text-ink-700">
-              <span className="font-semibold text-ink-800">Packing list: </span>
-              <span className="font-mono">{members.map((m) => m.assetTag).join(', ')}</span>
-            </p>
-          ) : null}
+          <PackingListLine tags={members.map((m) => m.assetTag)} />
           <ItemPicker chosen={values.items} kitId={values.kitId} onChange={(items) => void setFieldValue('items', items)} />
           <FieldMessage name="items" />
         </FormSection>
 
         <FormSection legend="When">
-          <div className="grid gap-3 sm:grid-cols-2">
-            <Field name="startsOn" label="Starts on" type="date" />
-            <Field name="endsOn" label="Ends on" type="date" min={values.startsOn || undefined} />
-          </div>
+          <DayRangeFields />
           <Field name="note" label="Note" hint="Anything the person at the counter should know." autoComplete="off" />
         </FormSection>
 
@@ -182,15 +177,6 @@ function RentalFormBody({
         />
       </Dialog>
     </>
-  );
-}
-
-function FormSection({ legend, children }: { legend: string; children: ReactNode }) {
-  return (
-    <fieldset className="flex flex-col gap-3 rounded-lg border border-paper-line bg-card p-4">
-      <legend className="px-1 font-semibold text-ink-900">{legend}</legend>
-      {children}
-    </fieldset>
   );
 }
 

@@ -1,4 +1,4 @@
-import { Link } from 'react-router-dom';
+import { AssetRowHeader } from '../../../components/asset-row-header';
 import { Panel } from '../../../components/panel';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
 import { assetTypeTitles, type AssetType } from '../../../lib/assets';
@@ -15,11 +15,7 @@ export function RentalItems({ items }: { items: RentalItem[] }) {
           <tbody className="divide-y divide-paper-line">
             {items.map((item) => (
               <tr key={item.id}>
-                <th scope="row" className="py-1.5 pr-2">
-                  <Link to={`/fleet/${item.id}`} className="font-mono font-semibold text-ink-900 underline-offset-2 hover:underline">
-                    {item.assetTag}
-                  </Link>
-                </th>
+                <AssetRowHeader id={item.id} tag={item.assetTag} />
                 <td className="py-1.5 pr-2">{assetTypeTitles[item.type as AssetType] ?? item.type}</td>
                 <td className="py-1.5 pr-2 font-mono">{item.serialNumber}</td>
                 <td className="py-1.5 pr-2">{[item.manufacturer, item.model].filter(Boolean).join(' ') || '—'}</td>

@@ -73,31 +73,6 @@ export interface HandoverInput {
   counterpart: string;
 }
 
-/** `details` of 409 `conflict` and 422 `booking_blocked` from create and move. */
-export interface BookingConflict {
-  assetId: string;
-  assetTag: string;
-  bookingId: string;
-  startsOn: string;
-  endsOn: string;
-}
-export interface BookingBlock {
-  assetId: string;
-  assetTag: string;
-  reason: BlockReason;
-}
-export interface Alternative {
-  id: string;
-  assetTag: string;
-  model: string | null;
-  dueOn: string | null;
-}
-export interface BookingTroubleDetails {
-  conflicts?: BookingConflict[];
-  blocked?: BookingBlock[];
-  alternatives?: Record<string, Alternative[]>;
-}
-
 export interface ReturnResult extends Booking {
   incidents: { assetId: string; incidentId: string }[];
 }

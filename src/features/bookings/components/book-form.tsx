@@ -1,22 +1,29 @@
 import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
-import { useId, useMemo, useState, type ReactNode } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import * as Yup from 'yup';
+import { BookingRefusalPanel, bookingRefusalFrom, type Alternative, type BookingRefusal } from '../../../components/booking-refusal';
 import { Button } from '../../../components/button';
+import { DayRangeFields } from '../../../components/day-range-fields';
 import { Dialog } from '../../../components/dialog';
 import { Field, SelectField } from '../../../components/field';
-import { AlertIcon, CrossIcon, PlusIcon } from '../../../components/icons';
+import { FormSection } from '../../../components/form-section';
+import { PlusIcon } from '../../../components/icons';
+import { ItemMatches } from '../../../components/item-matches';
 import { Notice } from '../../../components/notice';
-import { isApiError } from '../../../lib/api-client';
+import { PackingListLine } from '../../../components/packing-list-line';
+import { RemovableTags } from '../../../components/removable-tags';
+import { SearchBox } from '../../../components/search-box';
 import type { AssetView } from '../../../lib/assets';
 import { assetTypeTitles } from '../../../lib/assets';
 import { bookingDays } from '../../../lib/bookings';
+import { dayRangeRules } from '../../../lib/day-range';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateBooking } from '../api/create-booking';
 import { useBookings } from '../api/get-bookings';
-import type { Alternative, Booking, BookingInput, BookingTroubleDetails } from '../api/types';
+import type { Booking, BookingInput } from '../api/types';
 import { bookingProblems } from './booking-problems';
-import { blockSentence, dayRange, shortDay } from './booking-words';
+import { dayRange } from './booking-words';
 
 export interface BookValues {
   kitId: string;
@@ -44,47 +51,10 @@ const schema = Yup.object({
   assetIds: Yup.array(Yup.string().required()).test('something', 'Choose a kit or add at least one item.', function (value) {
     return (value?.length ?? 0) > 0 || !!(this.parent as BookValues).kitId;
   }),
-  startsOn: Yup.string().required('Pick the first day.'),
-  endsOn: Yup.string()
-    .required('Pick the last day.')
-    .test('after-start', 'The last day cannot be before the first.', function (value) {
-      const { startsOn } = this.parent as BookValues;
-      return !value || !startsOn || value >= startsOn;
-    })
-    .test('not-too-long', `A booking may span at most ${MAX_DAYS} days.`, function (value) {
-      const { startsOn } = this.parent as BookValues;
-      return !value || !startsOn || value < startsOn || bookingDays(startsOn, value) <= MAX_DAYS;
-    }),
+  ...dayRangeRules({ first: 'Pick the first day.', last: 'Pick the last day.', what: 'A booking' }, MAX_DAYS),
   jobId: Yup.string(),
   note: Yup.string().max(2000, 'Keep the note to 2000 characters.'),
 });
-
-/** The server's refusal, per troubled item, with the free alternatives it offered. */
-interface Trouble {
-  message: string;
-  items: { assetId: string; assetTag: string; why: string; bookingId?: string; alternatives: Alternative[] }[];
-}
-
-function troubleFrom(error: unknown): Trouble | null {
-  if (!isApiError(error) || (error.code !== 'conflict' && error.code !== 'booking_blocked')) return null;
-  const details = (error.details ?? {}) as BookingTroubleDetails;
-  const alternatives = details.alternatives ?? {};
-  const items: Trouble['items'] = [];
-  for (const b of details.blocked ?? []) {
-    items.push({ assetId: b.assetId, assetTag: b.assetTag, why: blockSentence(b.assetTag, b.reason), alternatives: alternatives[b.assetId] ?? [] });
-  }
-  for (const c of details.conflicts ?? []) {
-    if (items.some((i) => i.assetId === c.assetId)) continue;
-    items.push({
-      assetId: c.assetId,
-      assetTag: c.assetTag,
-      why: `${c.assetTag} is already booked ${dayRange(c.startsOn, c.endsOn)}.`,
-      bookingId: c.bookingId,
-      alternatives: alternatives[c.assetId] ?? [],
-    });
-  }
-  return { message: error.message, items };
-}
 
 export interface BookFormProps {
   kits: { id: string; name: string }[];
@@ -100,7 +70,7 @@ export interface BookFormProps {
 export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }: BookFormProps) {
   const create = useCreateBooking();
   const [formError, setFormError] = useState<string>();
-  const [trouble, setTrouble] = useState<Trouble | null>(null);
+  const [trouble, setTrouble] = useState<BookingRefusal | null>(null);
   const [swapNote, setSwapNote] = useState<string>();
 
   const initialValues: BookValues = {
@@ -126,7 +96,7 @@ export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }
     try {
       onBooked(await create.mutateAsync(input));
     } catch (error) {
-      const t = troubleFrom(error);
+      const t = bookingRefusalFrom(error, dayRange);
       if (t) setTrouble(t);
       else setFormError(applyServerErrors(error, helpers, { fields, labels }));
     }
@@ -166,7 +136,7 @@ function BookFormBody({
   onSwapped,
 }: Pick<BookFormProps, 'kits' | 'assets' | 'jobs' | 'renderNewJob'> & {
   formError?: string;
-  trouble: Trouble | null;
+  trouble: BookingRefusal | null;
   swapNote?: string;
   busy: boolean;
   onSwapped: (note: string) => void;
@@ -208,33 +178,22 @@ function BookFormBody({
         {formError ? <Notice tone="error">{formError}</Notice> : null}
         {swapNote && !trouble ? <Notice tone="info">{swapNote}</Notice> : null}
 
-        <fieldset className="flex flex-col gap-3 rounded-lg border border-paper-line bg-card p-4">
-          <legend className="px-1 font-semibold text-ink-900">What goes</legend>
+        <FormSection legend="What goes">
           <SelectField name="kitId" label="Kit" options={kitOptions} hint="A kit books every item on its packing list." />
-          {kitMembers.length ? (
-            <p className="text-sm text-ink-700">
-              <span className="font-semibold text-ink-800">Packing list: </span>
-              <span className="font-mono">{kitMembers.map((m) => m.assetTag).join(', ')}</span>
-            </p>
-          ) : null}
+          <PackingListLine tags={kitMembers.map((m) => m.assetTag)} />
           <ItemPicker assets={assets} chosen={extras} kitId={values.kitId} onChange={(ids) => void setFieldValue('assetIds', ids)} />
-        </fieldset>
+        </FormSection>
 
-        <fieldset className="flex flex-col gap-3 rounded-lg border border-paper-line bg-card p-4">
-          <legend className="px-1 font-semibold text-ink-900">When</legend>
-          <div className="grid gap-3 sm:grid-cols-2">
-            <Field name="startsOn" label="Starts on" type="date" />
-            <Field name="endsOn" label="Ends on" type="date" min={values.startsOn || undefined} />
-          </div>
+        <FormSection legend="When">
+          <DayRangeFields />
           <p className="text-sm text-ink-700" aria-live="polite">
             {datesValid
               ? `${bookingDays(values.startsOn, values.endsOn)} ${bookingDays(values.startsOn, values.endsOn) === 1 ? 'day' : 'days'}, ${dayRange(values.startsOn, values.endsOn)}, both days included.`
               : 'Whole days; the first and the last day are both included.'}
           </p>
-        </fieldset>
+        </FormSection>
 
-        <fieldset className="flex flex-col gap-3 rounded-lg border border-paper-line bg-card p-4">
-          <legend className="px-1 font-semibold text-ink-900">For</legend>
+        <FormSection legend="For">
           <div className="flex flex-wrap items-end gap-2">
             <SelectField
               name="jobId"
@@ -257,7 +216,7 @@ function BookFormBody({
             ) : null}
           </div>
           <Field name="note" label="Note" hint="Anything the person at the counter should know." autoComplete="off" />
-        </fieldset>
+        </FormSection>
 
         {problems.length && !trouble ? (
           <Notice tone="caution" title="This booking would be refused as it stands">
@@ -277,7 +236,7 @@ function BookFormBody({
           </Notice>
         ) : null}
 
-        {trouble ? <TroublePanel trouble={trouble} onSwap={swap} /> : null}
+        {trouble ? <BookingRefusalPanel refusal={trouble} onSwap={swap} /> : null}
 
         <div className="flex flex-wrap gap-2">
           <Button type="submit" variant="primary" busy={busy}>
@@ -303,51 +262,9 @@ function BookFormBody({
   );
 }
 
-function TroublePanel({ trouble, onSwap }: { trouble: Trouble; onSwap: (troubledId: string, alternative: Alternative) => void }) {
-  return (
-    <div role="alert" className="rounded-md border border-bad/50 bg-bad-wash px-3 py-2 text-ink-900">
-      <p className="flex items-start gap-2 font-semibold">
-        <AlertIcon size={18} className="mt-0.5 shrink-0 text-bad" />
-        {trouble.message}
-      </p>
-      <ul className="mt-2 flex flex-col gap-2">
-        {trouble.items.map((item) => (
-          <li key={item.assetId} className="rounded border border-paper-line bg-card px-3 py-2">
-            <p className="text-sm">
-              {item.why}{' '}
-              {item.bookingId ? (
-                <Link to={`/bookings/${item.bookingId}`} className="font-semibold text-brass-deep underline">
-                  See that booking
-                </Link>
-              ) : null}
-            </p>
-            {item.alternatives.length ? (
-              <div className="mt-2 flex flex-wrap gap-2">
-                {item.alternatives.map((alt) => (
-                  <Button
-                    key={alt.id}
-                    size="sm"
-                    onClick={() => onSwap(item.assetId, alt)}
-                    title={[alt.model, alt.dueOn ? `calibration due ${shortDay(alt.dueOn, true)}` : null].filter(Boolean).join(', ') || undefined}
-                  >
-                    Use {alt.assetTag} instead
-                  </Button>
-                ))}
-              </div>
-            ) : (
-              <p className="mt-1 text-sm text-ink-700">No item of the same type is free and in calibration for these dates.</p>
-            )}
-          </li>
-        ))}
-      </ul>
-    </div>
-  );
-}
-
 /** Search the fleet and add separate items (beyond the kit's packing list). */
 function ItemPicker({ assets, chosen, kitId, onChange }: { assets: AssetView[]; chosen: AssetView[]; kitId: string; onChange: (ids: string[]) => void }) {
   const [q, setQ] = useState('');
-  const searchId = useId();
   const chosenIds = new Set(chosen.map((a) => a.id));
   const needle = q.trim().toLowerCase();
   const matches = needle
@@ -358,58 +275,18 @@ function ItemPicker({ assets, chosen, kitId, onChange }: { assets: AssetView[]; 
     : [];
   return (
     <div className="flex flex-col gap-2">
-      {chosen.length ? (
-        <ul aria-label="Separate items" className="flex flex-wrap gap-2">
-          {chosen.map((a) => (
-            <li key={a.id} className="inline-flex items-center gap-1 rounded-full border border-paper-line bg-paper px-2 py-0.5 text-sm">
-              <span className="font-mono font-semibold">{a.assetTag}</span>
-              <span className="text-ink-700">{assetTypeTitles[a.type]}</span>
-              <button
-                type="button"
-                aria-label={`Remove ${a.assetTag}`}
-                onClick={() => onChange(chosen.filter((c) => c.id !== a.id).map((c) => c.id))}
-                className="rounded p-0.5 text-ink-700 hover:bg-paper-deep"
-              >
-                <CrossIcon size={14} />
-              </button>
-            </li>
-          ))}
-        </ul>
-      ) : null}
-      <div className="flex flex-col gap-1">
-        <label htmlFor={searchId} className="text-sm font-semibold text-ink-800">
-          Add separate items
-        </label>
-        <input
-          id={searchId}
-          type="search"
-          value={q}
-          onChange={(e) => setQ(e.target.value)}
-          placeholder="Tag, type or model, e.g. SMR"
-          autoComplete="off"
-          className="min-h-10 rounded-md border border-paper-line bg-card px-3 text-base"
-        />
-      </div>
+      <RemovableTags
+        label="Separate items"
+        items={chosen.map((a) => ({ id: a.id, tag: a.assetTag, detail: assetTypeTitles[a.type] }))}
+        onRemove={(id) => onChange(chosen.filter((c) => c.id !== id).map((c) => c.id))}
+      />
+      <SearchBox label="Add separate items" value={q} onChange={setQ} placeholder="Tag, type or model, e.g. SMR" />
       {needle ? (
-        matches.length ? (
-          <ul className="flex flex-col divide-y divide-paper-line rounded-md border border-paper-line">
-            {matches.map((a) => (
-              <li key={a.id} className="flex items-center gap-2 px-2 py-1">
-                <span className="font-mono text-sm font-semibold">{a.assetTag}</span>
-                <span className="min-w-0 flex-1 truncate text-sm text-ink-700">
-                  {assetTypeTitles[a.type]}
-                  {a.model ? ` · ${a.model}` : ''}
-                  {a.kit ? ` · in ${a.kit.name}` : ''}
-                </span>
-                <Button size="sm" onClick={() => onChange([...chosen.map((c) => c.id), a.id])}>
-                  Add {a.assetTag}
-                </Button>
-              </li>
-            ))}
-          </ul>
-        ) : (
-          <p className="text-sm text-ink-700">No item matches “{q.trim()}”.</p>
-        )
+        <ItemMatches
+          items={matches.map((a) => ({ id: a.id, tag: a.assetTag, detail: [assetTypeTitles[a.type], a.model].filter(Boolean).join(' · '), kitName: a.kit?.name }))}
+          none={`No item matches “${q.trim()}”.`}
+          onAdd={(id) => onChange([...chosen.map((c) => c.id), id])}
+        />
       ) : null}
     </div>
   );

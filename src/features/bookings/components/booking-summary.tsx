@@ -2,10 +2,11 @@ import { Form, Formik, type FormikHelpers } from 'formik';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import * as Yup from 'yup';
+import { AssetRowHeader } from '../../../components/asset-row-header';
 import { AssetStatusChip } from '../../../components/asset-status';
 import { Button } from '../../../components/button';
+import { DayRangeFields } from '../../../components/day-range-fields';
 import { Dialog } from '../../../components/dialog';
-import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
 import { assetTypeTitles } from '../../../lib/assets';
@@ -69,11 +70,7 @@ export function PackingList({ booking }: { booking: Booking }) {
         <tbody className="divide-y divide-paper-line">
           {booking.items.map((item) => (
             <tr key={item.id}>
-              <th scope="row" className="py-1.5 pr-2">
-                <Link to={`/fleet/${item.id}`} className="font-mono font-semibold text-ink-900 underline-offset-2 hover:underline">
-                  {item.assetTag}
-                </Link>
-              </th>
+              <AssetRowHeader id={item.id} tag={item.assetTag} />
               <td className="py-1.5 pr-2">{assetTypeTitles[item.type]}</td>
               <td className="py-1.5 pr-2">
                 <AssetStatusChip status={item.status} />
@@ -127,10 +124,7 @@ export function MoveDatesButton({ booking }: { booking: Booking }) {
           {({ isSubmitting, values }) => (
             <Form noValidate className="flex flex-col gap-3">
               {formError ? <Notice tone="error">{formError}</Notice> : null}
-              <div className="grid gap-3 sm:grid-cols-2">
-                <Field name="startsOn" label="Starts on" type="date" />
-                <Field name="endsOn" label="Ends on" type="date" min={values.startsOn || undefined} />
-              </div>
+              <DayRangeFields />
               {values.startsOn && values.endsOn && values.startsOn <= values.endsOn ? (
                 <p className="text-sm text-ink-700">{bookingDays(values.startsOn, values.endsOn)} days, both included.</p>
               ) : null}

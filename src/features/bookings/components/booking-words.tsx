@@ -1,6 +1,6 @@
 import { format, parseISO } from 'date-fns';
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
-import { blockReasonText, bookingDays, type BlockReason } from '../../../lib/bookings';
+import { bookingDays } from '../../../lib/bookings';
 import type { Booking, BookingPurpose, BookingState, ItemCondition } from '../api/types';
 
 export const bookingStateWords: Record<BookingState, string> = {
@@ -60,8 +60,4 @@ export function dayCount(startsOn: string, endsOn: string): string {
 export function bookingContents(booking: Pick<Booking, 'kit' | 'items'>): string {
   const count = `${booking.items.length} ${booking.items.length === 1 ? 'item' : 'items'}`;
   return booking.kit ? `${booking.kit.name} (${count})` : count;
-}
-
-export function blockSentence(assetTag: string, reason: BlockReason): string {
-  return `${assetTag} cannot go: ${blockReasonText[reason]}.`;
 }

@@ -1,6 +1,7 @@
 import { differenceInCalendarDays, parseISO } from 'date-fns';
 import { useContext, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
+import { CountedSection } from '../../../components/counted-section';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { useCounterDay } from '../api/get-counter-day';
@@ -26,21 +27,6 @@ function BookingLine({ booking, extra }: { booking: Booking; extra?: ReactNode }
   );
 }
 
-function Section({ id, title, count, empty, children, level = 2 }: { id: string; title: string; count: number; empty: string; children: ReactNode; level?: 2 | 3 }) {
-  const Heading = level === 2 ? 'h2' : 'h3';
-  return (
-    <section aria-labelledby={id} className="rounded-lg border border-paper-line bg-card p-4">
-      <div className="mb-2 flex items-baseline justify-between gap-2">
-        <Heading id={id} className="text-base font-semibold text-ink-900">
-          {title}
-        </Heading>
-        <span className="text-sm text-ink-700">{count === 0 ? 'none' : count}</span>
-      </div>
-      {count === 0 ? <p className="text-sm text-ink-700">{empty}</p> : <ul className="flex flex-col divide-y divide-paper-line">{children}</ul>}
-    </section>
-  );
-}
-
 /** Manager's and owner's "Today at the counter": what goes out, comes back, is late, or can no longer go. */
 export function TodayAtCounter() {
   const day = useCounterDay();
@@ -53,17 +39,17 @@ export function TodayAtCounter() {
         Today at the counter
       </h2>
       <div className="grid items-start gap-3 md:grid-cols-2">
-      <Section level={3} id="counter-out" title="Going out today" count={checkouts.length} empty="Nothing is due to be checked out.">
+      <CountedSection level={3} id="counter-out" title="Going out today" count={checkouts.length} empty="Nothing is due to be checked out.">
         {checkouts.map((b) => (
           <BookingLine key={b.id} booking={b} extra={<span className="font-semibold text-brass-deep">Check out</span>} />
         ))}
-      </Section>
-      <Section level={3} id="counter-back" title="Coming back today" count={returns.length} empty="Nothing is due back today.">
+      </CountedSection>
+      <CountedSection level={3} id="counter-back" title="Coming back today" count={returns.length} empty="Nothing is due back today.">
         {returns.map((b) => (
           <BookingLine key={b.id} booking={b} extra={<BookingStateChip state={b.state} />} />
         ))}
-      </Section>
-      <Section level={3} id="counter-late" title="Late returns" count={late.length} empty="Nothing is overdue back.">
+      </CountedSection>
+      <CountedSection level={3} id="counter-late" title="Late returns" count={late.length} empty="Nothing is overdue back.">
         {late.map((b) => {
           const daysLate = differenceInCalendarDays(parseISO(today), parseISO(b.endsOn));
           return (
@@ -78,8 +64,8 @@ export function TodayAtCounter() {
             />
           );
         })}
-      </Section>
-      <Section level={3} id="counter-blocked" title="Blocked bookings" count={blocked.length} empty="Every reserved item can still go.">
+      </CountedSection>
+      <CountedSection level={3} id="counter-blocked" title="Blocked bookings" count={blocked.length} empty="Every reserved item can still go.">
         {blocked.map((b) => (
           <BookingLine
             key={b.id}
@@ -91,7 +77,7 @@ export function TodayAtCounter() {
             }
           />
         ))}
-      </Section>
+      </CountedSection>
       </div>
     </section>
   );
@@ -105,7 +91,7 @@ export function MyKitPanels() {
   if (mine.isError) return <Notice tone="error">{mine.error.message}</Notice>;
   return (
     <>
-      <Section id="kit-now" title="Kit I carry now" count={mine.data.now.length} empty="No kit is checked out to you.">
+      <CountedSection id="kit-now" title="Kit I carry now" count={mine.data.now.length} empty="No kit is checked out to you.">
         {mine.data.now.map((b) => (
           <BookingLine
             key={b.id}
@@ -122,12 +108,12 @@ export function MyKitPanels() {
             }
           />
         ))}
-      </Section>
-      <Section id="kit-next" title="Next" count={mine.data.next.length} empty="Nothing is booked for you next.">
+      </CountedSection>
+      <CountedSection id="kit-next" title="Next" count={mine.data.next.length} empty="Nothing is booked for you next.">
         {mine.data.next.map((b) => (
           <BookingLine key={b.id} booking={b} extra={<BookingStateChip state={b.state} />} />
         ))}
-      </Section>
+      </CountedSection>
     </>
   );
 }

@@ -7,7 +7,7 @@ import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits } from '../../../lib/format';
-import { parseAmount } from './money';
+import { parseAmount } from '../../../lib/money';
 import { useUpdateIncident } from '../api/update-incident';
 import type { IncidentView } from '../api/types';
 

@@ -32,6 +32,9 @@ export function bookingsRoutes({ bookings, handover, desk, jobs, calendar }: Ser
   endpoint(router, at, { method: 'post', path: '/bookings/:id/return', summary: 'Take the kit back; missing or damaged items open incidents', access: 'bookings.hand_over', body: checklistPayload }, ({ actor, params, body }) =>
     handover.return(actor, params.id, body),
   );
+  endpoint(router, at, { method: 'get', path: '/bookings/:id/handover-sheet.pdf', summary: 'Hand-over sheet to sign at the counter (PDF)', access: 'bookings.read' }, async ({ actor, params, res }) =>
+    sendDocument(res, await handover.sheet(actor, params.id), 'application/pdf', 'handover-sheet.pdf', true),
+  );
   endpoint(router, at, { method: 'get', path: '/availability', summary: 'Assets of a type free and calibrated through a window', access: 'bookings.read', query: availabilityQuery }, ({ actor, query }) =>
     bookings.availability(actor, query),
   );

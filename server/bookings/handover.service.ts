@@ -4,7 +4,8 @@ import { blockReasonText } from '../../shared/bookings/rules';
 import type { checklistPayload } from '../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
-import { inOrganization, type Actor } from '../db/transaction';
+import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
+import { handoverSheetPdf } from '../documents/handover-sheet-pdf';
 import { Asset } from '../fleet/asset.entity';
 import { CustodyEvent } from '../fleet/custody-event.entity';
 import { AppError, ruleBroken } from '../http/errors';
@@ -94,6 +95,22 @@ export class HandoverService {
       await tx.updateWhere(BookingItem, { bookingId: id }, { active: false });
       await recordAudit(tx, actor, 'booking.returned', { type: 'booking', id }, { broughtBackBy: bringer.name, incidents });
       return { ...(await this.bookings.load(tx, id)), incidents };
+    });
+  }
+
+  /** The printable hand-over sheet: the packing list as handed over (or still to tick), cautions, signatures. */
+  sheet(actor: Actor, id: string) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      const booking = await tx.get(Booking, { id }, 'That booking', { relations: { job: true, kit: true } });
+      const ids = (await tx.find(BookingItem, { where: { bookingId: id } })).map((i) => i.assetId);
+      const items = await tx.find(Asset, { where: { id: In(ids) }, order: { type: 'ASC', assetTag: 'ASC' } });
+      const rental = booking.rentalId ? (await tx.sql<{ number: string; company: string }>(`SELECT r.number, c.company FROM rentals r JOIN customers c ON c.id = r.customer_id WHERE r.organization_id = $1 AND r.id = $2`, [booking.rentalId]))[0] : undefined;
+      const title = booking.job ? `Job ${booking.job.reference}, ${booking.job.customerName}` : rental ? `Rental ${rental.number}, ${rental.company}` : `${booking.purpose} booking`;
+      return handoverSheetPdf(
+        { name: ctx.name, timeZone: ctx.timeZone },
+        { title, startsOn: booking.startsOn, endsOn: booking.endsOn, kitName: booking.kit?.name ?? null, takenBy: booking.takenBy, checkedOutAt: booking.checkedOutAt?.toISOString() ?? null, items, checklist: booking.checkoutChecklist },
+      );
     });
   }
 

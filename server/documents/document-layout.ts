@@ -6,6 +6,7 @@
 import { formatMoney } from '../../shared/billing/money';
 import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
 import { BRASS, INK, MM, MUTED, type Pdf } from './pdf';
+import { batteryCautions } from './shipping-sheet-pdf';
 
 /** Printed documents use one locale so a customer's copy reads the same whoever prints it. */
 const LOCALE = 'en-GB';
@@ -123,5 +124,26 @@ export function totals(doc: Pdf, rows: { label: string; value: string; strong?: 
     doc.text(row.value, valueX, y, { width: width * 0.25 - GAP, align: 'right' });
     doc.y = Math.max(doc.y, y + 13);
   }
+  doc.x = doc.page.margins.left;
+}
+
+/** DESIGN.md §6: the laser line joins the battery and lifting cautions the shipping sheet already prints. */
+export const rentalCautions = [
+  "Laser trackers emit a visible laser beam, commonly IEC 60825-1 Class 2 (the class on the instrument's label applies): do not stare into the beam and do not point it at anyone's eyes.",
+  ...batteryCautions,
+];
+
+/** Signature lines side by side, one per party ("For <party>"). */
+export function signatureLines(doc: Pdf, parties: string[]) {
+  keepTogether(doc, 80);
+  doc.moveDown(3);
+  const y = doc.y;
+  const width = contentWidth(doc) / parties.length;
+  parties.forEach((party, i) => {
+    const x = doc.page.margins.left + i * width;
+    doc.save().strokeColor(INK).lineWidth(0.6).moveTo(x, y).lineTo(x + width - 12 * MM, y).stroke().restore();
+    doc.font('Helvetica-Bold').fontSize(9).fillColor(INK).text(`For ${party}`, x, y + 4, { width: width - 12 * MM });
+    doc.font('Helvetica').fillColor(MUTED).text('Name, signature and date', x, doc.y, { width: width - 12 * MM });
+  });
   doc.x = doc.page.margins.left;
 }

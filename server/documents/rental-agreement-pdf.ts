@@ -1,15 +1,8 @@
 import type { Periods } from '../../shared/billing/quote';
 import { lateChargeMinor } from '../../shared/billing/quote';
 import type { RentalView } from '../../shared/billing/views';
-import { bullets, calendarDate, contentWidth, facts, firmDateTime, heading, keepTogether, money, section, table, taxRateText, totals, typeTitle } from './document-layout';
-import { INK, MM, MUTED, renderPdf, type Pdf } from './pdf';
-import { batteryCautions } from './shipping-sheet-pdf';
-
-/** DESIGN.md §6: the laser line joins the battery and lifting cautions the shipping sheet already prints. */
-export const rentalCautions = [
-  "Laser trackers emit a visible laser beam, commonly IEC 60825-1 Class 2 (the class on the instrument's label applies): do not stare into the beam and do not point it at anyone's eyes.",
-  ...batteryCautions,
-];
+import { bullets, calendarDate, facts, firmDateTime, heading, money, rentalCautions, section, signatureLines, table, taxRateText, totals, typeTitle } from './document-layout';
+import { MM, renderPdf } from './pdf';
 
 /** { months: 1, weeks: 0, days: 2 } → "1 month, 2 days". */
 export const periodsText = (p: Periods) =>
@@ -29,20 +22,6 @@ function terms(rental: RentalView, currency: string) {
     `Calibration: the kit is rented calibrated. The certificate pack for every item travels by e-mail to ${rental.customer.billingEmail}.`,
     'Tell us at once about any drop, knock or damage: a knocked item may no longer measure true and must be checked before it is used again.',
   ];
-}
-
-function signatureLines(doc: Pdf, parties: string[]) {
-  keepTogether(doc, 80);
-  doc.moveDown(3);
-  const y = doc.y;
-  const width = contentWidth(doc) / parties.length;
-  parties.forEach((party, i) => {
-    const x = doc.page.margins.left + i * width;
-    doc.save().strokeColor(INK).lineWidth(0.6).moveTo(x, y).lineTo(x + width - 12 * MM, y).stroke().restore();
-    doc.font('Helvetica-Bold').fontSize(9).fillColor(INK).text(`For ${party}`, x, y + 4, { width: width - 12 * MM });
-    doc.font('Helvetica').fillColor(MUTED).text('Name, signature and date', x, doc.y, { width: width - 12 * MM });
-  });
-  doc.x = doc.page.margins.left;
 }
 
 export function rentalAgreementPdf(input: { firm: { name: string; timeZone: string }; rental: RentalView }): Promise<Buffer> {

@@ -1,6 +1,7 @@
 import ICAL from 'ical.js';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { binaryBody, pdfText } from '../support/pdf';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -135,6 +136,12 @@ describe('checkout and return against the packing list', () => {
     expect((await t.api.get('/api/bookings/mine').set(bearer(tech))).body.now.map((x: { id: string }) => x.id)).toContain(booking.id);
     const desk = (await t.api.get('/api/bookings/today').set(bearer(manager))).body;
     expect(desk.late.map((x: { id: string }) => x.id)).toContain(booking.id);
+    // The hand-over sheet (PDF, read back by MuPDF): the packing list as ticked, the cautions, two signatures.
+    const sheet = await t.api.get(`/api/bookings/${booking.id}/handover-sheet.pdf`).set(bearer(tech)).buffer(true).parse(binaryBody);
+    expect(sheet.headers['content-type']).toBe('application/pdf');
+    const text = pdfText(sheet.body as Buffer);
+    for (const phrase of ['Hand-over sheet', a.assetTag, b.assetTag, 'yes, good', 'Taken by Tamsin Quillfeather', 'IEC 60825-1', 'do not charge', 'Name, signature and date']) expect(text).toContain(phrase);
+    expect((await t.api.get(`/api/bookings/${booking.id}/handover-sheet.pdf`).set(bearer(otherOwner))).status).toBe(404);
 
     const back = await t.api
       .post(`/api/bookings/${booking.id}/return`)

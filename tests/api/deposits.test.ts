@@ -6,7 +6,7 @@ import { startPaymentFake, type PaymentFake } from '../../server/fakes/payment-f
 import { signPayload } from '../../server/fakes/payments/events';
 import type { RentalView } from '../../shared/billing/views';
 import { todayIn } from '../../shared/calibration/due-date';
-import { pdfText } from '../support/pdf';
+import { binaryBody, pdfText } from '../support/pdf';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
 const WEBHOOK_SECRET = 'whsec_deposits_test_secret';
@@ -145,11 +145,7 @@ describe('a rental from quote to invoice', () => {
     // 300.00 rental + 180.00 repair = 480.00; tax 91.20; total 571.20; 214.20 taken from the hold → 357.00 due (worked by hand).
     expect(issued.body).toMatchObject({ number: invoiceNo, subtotalMinor: 48_000, taxMinor: 9120, totalMinor: 57_120, depositCapturedMinor: 21_420, balanceMinor: 35_700 });
     expect((await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing))).status).toBe(409);
-    const pdf = await t.api.get(`/api/rentals/${rental.id}/invoice.pdf`).set(bearer(billing)).buffer(true).parse((res, cb) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const pdf = await t.api.get(`/api/rentals/${rental.id}/invoice.pdf`).set(bearer(billing)).buffer(true).parse(binaryBody);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     const text = pdfText(pdf.body as Buffer);
     expect(text).toContain(invoiceNo);

@@ -2,7 +2,7 @@ import { Form, Formik, useField, useFormikContext, type FormikHelpers } from 'fo
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import * as Yup from 'yup';
-import { Button } from '../../../components/button';
+import { Button, buttonClasses } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { PrintIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
@@ -12,7 +12,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useCheckOutBooking } from '../api/check-out-booking';
 import { useReturnBooking } from '../api/return-booking';
 import type { Booking, ItemCondition, ReturnResult } from '../api/types';
-import { bookingTitle, conditionWords, dayRange } from './booking-words';
+import { conditionWords } from './booking-words';
 
 export type HandoverMode = 'checkout' | 'return';
 
@@ -148,13 +148,18 @@ export function HandoverForm({
                 {w.submit}
               </Button>
               {mode === 'checkout' ? (
-                <Button icon={<PrintIcon size={16} />} onClick={() => window.print()}>
-                  Print hand-over sheet
-                </Button>
+                <a
+                  href={`/api/bookings/${booking.id}/handover-sheet.pdf`}
+                  target="_blank"
+                  rel="noreferrer"
+                  className={buttonClasses()}
+                >
+                  <PrintIcon size={16} />
+                  Hand-over sheet (PDF)
+                </a>
               ) : null}
             </div>
           </Form>
-          {mode === 'checkout' ? <HandoverSheet booking={booking} values={values} types={types} /> : null}
         </>
       )}
     </Formik>
@@ -265,54 +270,6 @@ function Cautions({ types }: { types: Set<string> }) {
           Follow local codes, the carrier&rsquo;s rules and the instrument maker&rsquo;s instructions for what is handed over.
         </Notice>
       ) : null}
-    </section>
-  );
-}
-
-/** The printed sheet both people sign at the counter (print only). */
-function HandoverSheet({ booking, values, types }: { booking: Booking; values: HandoverValues; types: Set<string> }) {
-  return (
-    <section aria-hidden="true" className="hidden text-black print:block">
-      <h2 className="text-xl font-bold">Hand-over sheet</h2>
-      <p className="mt-1">
-        {bookingTitle(booking)} · {dayRange(booking.startsOn, booking.endsOn)}
-        {booking.kit ? ` · ${booking.kit.name}` : ''}
-      </p>
-      <table className="mt-3 w-full border-collapse text-sm">
-        <thead>
-          <tr>
-            {['Item', 'Type', 'Present', 'Condition', 'Note'].map((h) => (
-              <th key={h} className="border border-black px-2 py-1 text-left">
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {booking.items.map((item, i) => {
-            const line = values.lines[i];
-            return (
-              <tr key={item.id}>
-                <td className="border border-black px-2 py-1 font-mono">{item.assetTag}</td>
-                <td className="border border-black px-2 py-1">{assetTypeTitles[item.type]}</td>
-                <td className="border border-black px-2 py-1">{line?.present ? 'Yes' : '☐'}</td>
-                <td className="border border-black px-2 py-1">{line ? conditionWords[line.condition] : ''}</td>
-                <td className="border border-black px-2 py-1">{line?.note}</td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
-      <div className="mt-3 flex flex-col gap-1 text-xs">
-        {types.has('tracker') ? <p>Laser beam: commonly IEC 60825-1 Class 2. Do not stare into the beam or point it at anyone&rsquo;s eyes.</p> : null}
-        {types.has('tracker') || types.has('case') ? <p>Tracker cases are heavy: lift with two people or use a trolley.</p> : null}
-        {types.has('battery') ? <p>A dropped, swollen or damaged lithium-ion battery is a fire risk: do not charge it and do not ship it by air.</p> : null}
-        <p>Follow local codes, the carrier&rsquo;s rules and the instrument maker&rsquo;s instructions.</p>
-      </div>
-      <div className="mt-8 grid grid-cols-2 gap-8 text-sm">
-        <p className="border-t border-black pt-1">Handed over by (name, signature, date)</p>
-        <p className="border-t border-black pt-1">Taken by: {values.counterpart || '(name, signature, date)'}</p>
-      </div>
     </section>
   );
 }

@@ -1,15 +1,7 @@
-import type { Periods } from '../../shared/billing/quote';
-import { lateChargeMinor } from '../../shared/billing/quote';
+import { lateChargeMinor, periodWords } from '../../shared/billing/quote';
 import type { RentalView } from '../../shared/billing/views';
 import { bullets, calendarDate, facts, firmDateTime, heading, money, rentalCautions, section, signatureLines, table, taxRateText, totals, typeTitle } from './document-layout';
 import { MM, renderPdf } from './pdf';
-
-/** { months: 1, weeks: 0, days: 2 } → "1 month, 2 days". */
-export const periodsText = (p: Periods) =>
-  (['months', 'weeks', 'days'] as const)
-    .filter((k) => p[k] > 0)
-    .map((k) => `${p[k]} ${p[k] === 1 ? k.slice(0, -1) : k}`)
-    .join(', ');
 
 function terms(rental: RentalView, currency: string) {
   const late = rental.quote.lines
@@ -61,7 +53,7 @@ export function rentalAgreementPdf(input: { firm: { name: string; timeZone: stri
         { header: 'Periods', share: 0.26 },
         { header: 'Amount', share: 0.22, right: true },
       ],
-      quote.lines.map((l) => [l.description, String(l.quantity), periodsText(l.periods), money(l.amountMinor, currency)]),
+      quote.lines.map((l) => [l.description, String(l.quantity), periodWords(l.periods), money(l.amountMinor, currency)]),
     );
     totals(doc, [
       { label: 'Subtotal', value: money(quote.subtotalMinor, currency) },

@@ -47,3 +47,10 @@ export function depositMinor(replacementValueMinor: number, policy: { percent: n
   const share = Math.round((replacementValueMinor * policy.percent) / 100);
   return Math.min(policy.maxMinor, Math.max(policy.minMinor, share));
 }
+
+/** { months: 1, weeks: 0, days: 2 } → "1 month, 2 days" (a month is 28 days, a week 7). */
+export const periodWords = (p: Periods) =>
+  (['months', 'weeks', 'days'] as const)
+    .filter((k) => p[k] > 0)
+    .map((k) => `${p[k]} ${p[k] === 1 ? k.slice(0, -1) : k}`)
+    .join(', ');

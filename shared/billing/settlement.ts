@@ -1,15 +1,5 @@
-import { lateChargeMinor, taxMinor } from './quote';
+import { lateChargeMinor, periodWords, taxMinor } from './quote';
 import type { InvoiceLine, Quote, Settlement } from './views';
-
-const periodWords = (p: { months: number; weeks: number; days: number }) =>
-  [
-    [p.months, 'month'],
-    [p.weeks, 'week'],
-    [p.days, 'day'],
-  ]
-    .filter(([n]) => (n as number) > 0)
-    .map(([n, w]) => `${n} ${w}${n === 1 ? '' : 's'}`)
-    .join(', ');
 
 /** Whole days from `endsOn` to `returnedOn` (dates inclusive, so returning on the end day is not late). */
 export function lateDaysBetween(endsOn: string, returnedOn: string): number {

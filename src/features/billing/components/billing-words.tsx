@@ -1,7 +1,7 @@
 import { ClockIcon } from '../../../components/icons';
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
 import { isApiError } from '../../../lib/api-client';
-import type { DepositState, HoldState, Periods, RentalState } from '../api/types';
+import type { DepositState, HoldState, RentalState } from '../api/types';
 
 const rentalStates: Record<RentalState, [string, StatusTone]> = {
   reserved: ['Reserved', 'paused'],
@@ -49,14 +49,6 @@ export function HoldLapse({ at, dateTime }: { at: string | null; dateTime: (valu
       </time>
     </span>
   );
-}
-
-const unit = (n: number, one: string) => `${n} ${one}${n === 1 ? '' : 's'}`;
-
-/** "1 month, 2 days" (a month is 28 days, a week 7). */
-export function periodWords(p: Periods): string {
-  const parts = [p.months ? unit(p.months, 'month') : '', p.weeks ? unit(p.weeks, 'week') : '', p.days ? unit(p.days, 'day') : ''];
-  return parts.filter(Boolean).join(', ') || '—';
 }
 
 /** A payment call's failure in words; a provider that did not answer can be asked again safely. */

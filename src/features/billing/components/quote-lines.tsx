@@ -1,6 +1,6 @@
 import { formatMoney, formatNumber } from '../../../lib/format';
 import type { Quote } from '../api/types';
-import { periodWords } from './billing-words';
+import { periodWords } from '../../../../shared/billing/quote';
 import { MoneyLines } from './money-lines';
 
 /** A rental's price: each line with its periods, then subtotal, tax, total, and the deposit to hold. */

@@ -112,16 +112,28 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
       await tx.updateWhere(Asset, { id: damaged.id }, { status: 'held' });
     }
 
-    // The deposit: a hold placed at checkout, settled at return for past rentals.
-    const held = p.holdFrom !== undefined ? new Date(at(p.holdFrom, 9).getTime() - 12 * 3_600_000) : at(p.from, 8);
+    // The deposit: a hold placed at checkout, settled at return for past rentals. A hold lasts
+    // 7 days; longer past rentals show its renewals on the saved card (4 days 18 hours each on Visa).
     const lateDays = returnedOn ? lateDaysBetween(endsOn, returnedOn) : 0;
     const extras = settle({ quote, lateDays, damage: [], depositCapturedMinor: 0, cardChargedMinor: 0 }).extrasGrossMinor;
     const captured = p.settle === 'captured' ? Math.min(extras, quote.depositMinor) : 0;
-    await tx.insert(DepositHold, {
-      rentalId: rental.id, kind: 'hold', paymentIntentId: null, idempotencyKey: `demo:${rental.id}:hold`, state: p.settle === 'captured' ? 'captured' : p.settle === 'released' ? 'released' : 'authorized',
-      amountMinor: quote.depositMinor, capturedMinor: captured, cardBrand: 'visa', cardLast4: '4242', captureBefore: new Date(held.getTime() + 7 * 86_400_000), initiatedBy: 'customer',
-      failureMessage: null, captureReason: captured ? `${lateDays} late days` : null, settledAt: returnedOn ? at(p.back ?? p.to, 16) : null,
-    });
+    const settledAt = p.settle === 'captured' || p.settle === 'released' ? at(p.back ?? p.to, 16) : null;
+    const holds: { createdAt: Date; captureBefore: Date; initiatedBy: 'customer' | 'merchant' }[] = [];
+    let createdAt = p.holdFrom !== undefined ? new Date(at(p.holdFrom, 9).getTime() - 12 * 3_600_000) : at(p.from, 8);
+    holds.push({ createdAt, captureBefore: new Date(createdAt.getTime() + 7 * 86_400_000), initiatedBy: 'customer' });
+    while (settledAt && holds.at(-1)!.captureBefore < settledAt) {
+      createdAt = new Date(holds.at(-1)!.captureBefore.getTime() - 36 * 3_600_000);
+      holds.push({ createdAt, captureBefore: new Date(createdAt.getTime() + (4 * 24 + 18) * 3_600_000), initiatedBy: 'merchant' });
+    }
+    for (const [i, h] of holds.entries()) {
+      const last = i === holds.length - 1;
+      await tx.insert(DepositHold, {
+        rentalId: rental.id, kind: 'hold', paymentIntentId: null, idempotencyKey: `demo:${rental.id}:hold:${i + 1}`,
+        state: !last ? 'replaced' : p.settle === 'captured' ? 'captured' : p.settle === 'released' ? 'released' : 'authorized',
+        amountMinor: quote.depositMinor, capturedMinor: last ? captured : 0, cardBrand: 'visa', cardLast4: '4242', captureBefore: h.captureBefore, initiatedBy: h.initiatedBy,
+        failureMessage: null, captureReason: last && captured ? `${lateDays} late days` : null, settledAt: last ? settledAt : holds[i + 1].createdAt, createdAt: h.createdAt,
+      });
+    }
     if (!returnedOn || p.settle === 'to_settle') continue;
 
     const s = settle({ quote, lateDays, damage: [], depositCapturedMinor: captured, cardChargedMinor: 0 });

@@ -203,6 +203,21 @@ describe('when the provider misbehaves', () => {
     expect(await captureCharges(pi.id)).toHaveLength(1);
   }, 30_000);
 
+  it('a provider answering 500 captures nothing; the clerk is told to try again, and the retry captures once', async () => {
+    const r = await returnedWithHold();
+    // Three faults: the first call and both of the SDK's retries fail, nothing applied (provider reference: api_error).
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: '500', times: 3 }) });
+    const failed = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 4000, reason: 'Cleaning' });
+    expect(failed.status).toBe(502);
+    expect(failed.body.error.code).toBe('payment_unavailable');
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'DELETE' });
+    expect((await stripe.paymentIntents.retrieve(await intentOf(r))).status).toBe('requires_capture');
+    expect((await view(r)).deposit.state).toBe('authorized');
+    const retried = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 4000, reason: 'Cleaning' });
+    expect(retried.status).toBe(200);
+    expect((await stripe.paymentIntents.retrieve(await intentOf(r))).amount_received).toBe(4000);
+  }, 30_000);
+
   it('a charge above the hold: the hold is captured whole and the rest charged to the saved card', async () => {
     const r = await returnedWithHold();
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 80_000, reason: 'SMR lost' });

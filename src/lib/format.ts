@@ -64,3 +64,7 @@ export function formatCalendarDate(value: string | null | undefined): string {
   if (!y || !m || !d) return value;
   return new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)));
 }
+
+/** A file size people read: "840 KB", "2.4 MB". */
+export const formatFileSize = (bytes: number) =>
+  bytes >= 1024 * 1024 ? `${formatNumber(bytes / 1024 / 1024, 1)} MB` : `${formatNumber(Math.max(1, Math.round(bytes / 1024)), 0)} KB`;

@@ -3,10 +3,9 @@ import { AssetStatusChip } from '../../../components/asset-status';
 import { DownloadIcon } from '../../../components/icons';
 import { FactList, Panel } from '../../../components/panel';
 import { assetTypeTitles } from '../../../lib/assets';
-import { formatMoney, useDateFormat } from '../../../lib/format';
+import { formatFileSize, formatMoney, useDateFormat } from '../../../lib/format';
 import type { IncidentView } from '../api/types';
 import { IncidentStateChip, incidentKindWords } from './incident-words';
-import { sizeText } from './photo-rules';
 
 export function IncidentFacts({ incident, currency }: { incident: IncidentView; currency: string }) {
   const { dateTime } = useDateFormat();
@@ -60,7 +59,7 @@ export function IncidentPhotos({ incident }: { incident: IncidentView }) {
                 </span>
               )}
               <span className="truncate text-xs text-ink-700">
-                {p.fileName} · {sizeText(p.sizeBytes)}
+                {p.fileName} · {formatFileSize(p.sizeBytes)}
               </span>
             </a>
           </li>

@@ -1,6 +1,7 @@
 import { useEffect, useId, useMemo, useRef } from 'react';
 import { CrossIcon } from '../../../components/icons';
-import { isHeic, MAX_PHOTOS, PHOTO_ACCEPT, sizeText } from './photo-rules';
+import { formatFileSize } from '../../../lib/format';
+import { isHeic, MAX_PHOTOS, PHOTO_ACCEPT } from './photo-rules';
 
 function FileGlyph() {
   return (
@@ -73,7 +74,7 @@ export function PhotoPicker({
                 </span>
               )}
               <span className="w-full truncate text-center text-xs text-ink-700">
-                {f.name} · {sizeText(f.size)}
+                {f.name} · {formatFileSize(f.size)}
               </span>
               <button
                 type="button"

@@ -1,5 +1,5 @@
 import { MAX_INCIDENT_PHOTOS, MAX_PHOTO_BYTES, photoTypes } from '../../../../shared/incidents/vocabulary';
-import { formatNumber } from '../../../lib/format';
+import { formatFileSize } from '../../../lib/format';
 
 /** The server's photo limits, checked in the browser first so a person on a slow link learns before uploading. */
 export const MAX_PHOTOS = MAX_INCIDENT_PHOTOS;
@@ -9,12 +9,10 @@ const acceptedTypes: readonly string[] = photoTypes;
 
 export const isHeic = (file: { type: string; name: string }) => /heic|heif/i.test(file.type) || /\.(heic|heif)$/i.test(file.name);
 
-export const sizeText = (bytes: number) =>
-  bytes >= 1024 * 1024 ? `${formatNumber(bytes / 1024 / 1024, 1)} MB` : `${formatNumber(Math.max(1, Math.round(bytes / 1024)), 0)} KB`;
 
 /** A plain sentence for a photo the server would refuse, or null when it is fine. */
 export function photoProblem(file: File): string | null {
   if (!acceptedTypes.includes(file.type) && !isHeic(file)) return `“${file.name}” is not a JPEG, PNG or HEIC photo.`;
-  if (file.size > MAX_PHOTO_BYTES) return `“${file.name}” is ${sizeText(file.size)}; each photo may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB. Take it again at a lower resolution.`;
+  if (file.size > MAX_PHOTO_BYTES) return `“${file.name}” is ${formatFileSize(file.size)}; each photo may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB. Take it again at a lower resolution.`;
   return null;
 }

@@ -6,6 +6,8 @@ export interface MailMessage {
   subject: string;
   text: string | null;
   html: string | null;
+  /** Names, types and sizes of what was attached (the sink keeps no file contents). */
+  attachments: { fileName: string; contentType: string; sizeBytes: number }[];
   receivedAt: string;
 }
 

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button } from '../../../components/button';
 import { ArrowLeftIcon } from '../../../components/icons';
-import { useDateFormat } from '../../../lib/format';
+import { formatFileSize, useDateFormat } from '../../../lib/format';
 import type { MailMessage } from '../api/types';
 
 /**
@@ -36,6 +36,20 @@ export function MessageReader({ message, onBack }: { message: MailMessage; onBac
         <dd>
           <time dateTime={message.receivedAt}>{fmt.dateTime(message.receivedAt)}</time>
         </dd>
+        {message.attachments?.length ? (
+          <>
+            <dt className="font-semibold text-ink-700">Attached</dt>
+            <dd>
+              <ul className="flex flex-col">
+                {message.attachments.map((a) => (
+                  <li key={a.fileName} className="break-all">
+                    <span className="font-mono">{a.fileName}</span> <span className="text-ink-500">· {formatFileSize(a.sizeBytes)}</span>
+                  </li>
+                ))}
+              </ul>
+            </dd>
+          </>
+        ) : null}
         {message.messageId ? (
           <>
             <dt className="font-semibold text-ink-700">Message id</dt>

@@ -84,12 +84,7 @@ export class DepositsService {
       // Once captured, a repeat (a double click, a retry after an error page) must not reach the card.
       if (state === 'captured') throw conflict(`The hold was already captured (${money(rental, hold!.capturedMinor)}); anything further goes on the invoice.`);
       let fromHold = 0;
-      if (state === 'authorized' && hold?.paymentIntentId) {
-        fromHold = Math.min(input.amountMinor, hold.amountMinor);
-        const captured = await this.gateway.capture(hold.paymentIntentId, fromHold, `hold:${hold.id}:capture`);
-        Object.assign(hold, { state: 'captured', capturedMinor: captured.ok ? captured.capturedMinor : fromHold, captureReason: input.reason, settledAt: new Date() });
-        await tx.save(DepositHold, hold);
-      }
+      if (state === 'authorized' && hold?.paymentIntentId) fromHold = await this.captureHold(tx, hold, Math.min(input.amountMinor, hold.amountMinor), input.reason);
       const above = input.amountMinor - fromHold;
       if (above > 0) await this.chargeCard(tx, rental, above, input.reason, hold);
       await recordAudit(tx, actor, 'deposit.captured', { type: 'rental', id: rentalId }, { amountMinor: input.amountMinor, fromHoldMinor: fromHold, chargedMinor: above, reason: input.reason });
@@ -138,6 +133,25 @@ export class DepositsService {
     Object.assign(hold, { state: 'replaced', settledAt: new Date() });
     await tx.save(DepositHold, hold);
     return { ok: true };
+  }
+
+  /**
+   * Captures from the hold and returns what it took. A hold that lapsed at the
+   * provider before its event reached us is recorded as lapsed and takes
+   * nothing, so the whole amount goes on the card instead.
+   */
+  private async captureHold(tx: Scoped, hold: DepositHold, amountMinor: number, reason: string): Promise<number> {
+    try {
+      const captured = await this.gateway.capture(hold.paymentIntentId!, amountMinor, `hold:${hold.id}:capture`);
+      Object.assign(hold, { state: 'captured', capturedMinor: captured.ok ? captured.capturedMinor : amountMinor, captureReason: reason, settledAt: new Date() });
+      await tx.save(DepositHold, hold);
+      return amountMinor;
+    } catch (err) {
+      if (!(err instanceof AppError && err.code === 'payment_refused') || (await this.gateway.retrieve(hold.paymentIntentId!)).status !== 'canceled') throw err;
+      Object.assign(hold, { state: 'lapsed', settledAt: new Date() });
+      await tx.save(DepositHold, hold);
+      return 0;
+    }
   }
 
   private async assertSettleable(tx: Scoped, rental: Rental) {

@@ -58,6 +58,7 @@ export const routes: RouteObject[] = [
             { path: 'rentals/:id', lazy: screen(() => import('./routes/rental')) },
             { path: 'invoices', lazy: screen(() => import('./routes/invoices')) },
             { path: 'customers', lazy: screen(() => import('./routes/customers')) },
+            { path: 'customers/:id', lazy: screen(() => import('./routes/customer')) },
             { path: 'billing/reports', lazy: screen(() => import('./routes/billing-reports')) },
           ]),
           gated('rentals.write', [{ path: 'rentals/new', lazy: screen(() => import('./routes/rental-new')) }]),

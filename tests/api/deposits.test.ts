@@ -218,6 +218,19 @@ describe('when the provider misbehaves', () => {
     expect((await stripe.paymentIntents.retrieve(await intentOf(r))).amount_received).toBe(4000);
   }, 30_000);
 
+  it('a hold that lapsed before its event reached us: the capture finds out and goes on the saved card', async () => {
+    const r = await returnedWithHold();
+    const url = fake.store.settings.webhookUrl;
+    fake.store.settings.webhookUrl = undefined; // the event is lost on the way
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }) });
+    fake.store.settings.webhookUrl = url;
+    expect((await view(r)).deposit.state).toBe('authorized');
+    const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 6000, reason: 'Late by three days' });
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    expect(res.body.deposit.state).toBe('lapsed');
+    expect(res.body.settlement).toMatchObject({ depositCapturedMinor: 0, cardChargedMinor: 6000 });
+  });
+
   it('a charge above the hold: the hold is captured whole and the rest charged to the saved card', async () => {
     const r = await returnedWithHold();
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 80_000, reason: 'SMR lost' });

@@ -8,8 +8,8 @@ import { Panel } from '../../components/panel';
 import { useSession } from '../../features/auth/components/session-context';
 import { useCustomers } from '../../features/billing/api/get-customers';
 import { useRateCards } from '../../features/billing/api/get-rate-cards';
-import type { Customer, RateCard } from '../../features/billing/api/types';
-import { CustomerForm } from '../../features/billing/components/customer-form';
+import type { RateCard } from '../../features/billing/api/types';
+import { CustomerDialog } from '../../features/billing/components/customer-dialog';
 import { CustomersTable } from '../../features/billing/components/customers-table';
 import { RateCardForm } from '../../features/billing/components/rate-card-form';
 import { RateCardsTable } from '../../features/billing/components/rate-cards-table';
@@ -24,7 +24,7 @@ export default function CustomersRoute() {
   const kits = useKits();
   const canEditCustomers = can(user.role, 'customers.write');
   const canEditRates = can(user.role, 'rentals.write');
-  const [customer, setCustomer] = useState<Customer | 'new' | null>(null);
+  const [addingCustomer, setAddingCustomer] = useState(false);
   const [card, setCard] = useState<RateCard | 'new' | null>(null);
   const [saved, setSaved] = useState<string>();
   const kitList = kits.data?.items ?? [];
@@ -44,13 +44,13 @@ export default function CustomersRoute() {
           title="Customers"
           actions={
             canEditCustomers ? (
-              <Button variant="primary" size="sm" icon={<PlusIcon size={14} />} onClick={() => setCustomer('new')}>
+              <Button variant="primary" size="sm" icon={<PlusIcon size={14} />} onClick={() => setAddingCustomer(true)}>
                 New customer
               </Button>
             ) : null
           }
         >
-          <CustomersTable customers={customers.data?.items} onOpen={canEditCustomers ? setCustomer : undefined} />
+          <CustomersTable customers={customers.data?.items} />
         </Panel>
         <Panel
           title="Rates"
@@ -70,18 +70,14 @@ export default function CustomersRoute() {
         </Panel>
       </div>
 
-      <Dialog open={customer !== null} onClose={() => setCustomer(null)} title={customer === 'new' ? 'New customer' : (customer?.company ?? '')} size="lg">
-        {customer ? (
-          <CustomerForm
-            customer={customer === 'new' ? undefined : customer}
-            onSaved={(c) => {
-              setSaved(`${c.company} is saved.`);
-              setCustomer(null);
-            }}
-            onCancel={() => setCustomer(null)}
-          />
-        ) : null}
-      </Dialog>
+      <CustomerDialog
+        open={addingCustomer}
+        onClose={() => setAddingCustomer(false)}
+        onSaved={(c) => {
+          setSaved(`${c.company} is saved.`);
+          setAddingCustomer(false);
+        }}
+      />
       <Dialog open={card !== null} onClose={() => setCard(null)} title={card === 'new' ? 'New rates' : 'Change rates'} size="lg">
         {card ? (
           <RateCardForm

@@ -3,15 +3,16 @@ import { apiClient, apiUrl } from '../../../lib/api-client';
 import { billingKeys } from './keys';
 import type { InvoiceKind, InvoiceSummary, Page } from './types';
 
-export function getInvoices(kind: InvoiceKind | 'all', signal?: AbortSignal): Promise<Page<InvoiceSummary>> {
-  return apiClient.get<Page<InvoiceSummary>>('/invoices', { query: { kind: kind === 'all' ? undefined : kind, limit: 500, offset: 0 }, signal });
+/** Without a customer, every customer's. */
+export function getInvoices(kind: InvoiceKind | 'all', customerId?: string, signal?: AbortSignal): Promise<Page<InvoiceSummary>> {
+  return apiClient.get<Page<InvoiceSummary>>('/invoices', { query: { kind: kind === 'all' ? undefined : kind, customerId, limit: 500, offset: 0 }, signal });
 }
 
-export const invoicesQueryOptions = (kind: InvoiceKind | 'all') =>
-  queryOptions({ queryKey: billingKeys.invoiceList(kind), queryFn: ({ signal }) => getInvoices(kind, signal) });
+export const invoicesQueryOptions = (kind: InvoiceKind | 'all', customerId?: string) =>
+  queryOptions({ queryKey: billingKeys.invoiceList(kind, customerId), queryFn: ({ signal }) => getInvoices(kind, customerId, signal) });
 
-export function useInvoices(kind: InvoiceKind | 'all') {
-  return useQuery(invoicesQueryOptions(kind));
+export function useInvoices(kind: InvoiceKind | 'all', customerId?: string) {
+  return useQuery(invoicesQueryOptions(kind, customerId));
 }
 
 /** Every invoice and credit note as CSV, and one document as PDF. */

@@ -3,14 +3,14 @@ import { apiClient } from '../../../lib/api-client';
 import { billingKeys } from './keys';
 import type { Page, RentalListView, RentalSummary } from './types';
 
-/** `open`: not cancelled, not yet invoiced; `to_settle`: returned with a hold still authorized or no invoice yet. */
-export function getRentals(view: RentalListView, signal?: AbortSignal): Promise<Page<RentalSummary>> {
-  return apiClient.get<Page<RentalSummary>>('/rentals', { query: { view, limit: 500, offset: 0 }, signal });
+/** `open`: not cancelled, not yet invoiced; `to_settle`: returned with a hold still authorized or no invoice yet. Without a customer, every customer's. */
+export function getRentals(view: RentalListView, customerId?: string, signal?: AbortSignal): Promise<Page<RentalSummary>> {
+  return apiClient.get<Page<RentalSummary>>('/rentals', { query: { view, customerId, limit: 500, offset: 0 }, signal });
 }
 
-export const rentalsQueryOptions = (view: RentalListView) =>
-  queryOptions({ queryKey: billingKeys.rentalList(view), queryFn: ({ signal }) => getRentals(view, signal) });
+export const rentalsQueryOptions = (view: RentalListView, customerId?: string) =>
+  queryOptions({ queryKey: billingKeys.rentalList(view, customerId), queryFn: ({ signal }) => getRentals(view, customerId, signal) });
 
-export function useRentals(view: RentalListView) {
-  return useQuery(rentalsQueryOptions(view));
+export function useRentals(view: RentalListView, customerId?: string) {
+  return useQuery(rentalsQueryOptions(view, customerId));
 }

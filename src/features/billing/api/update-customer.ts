@@ -11,7 +11,10 @@ export function useUpdateCustomer() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateCustomer,
-    // Rentals and invoices show the company: everything billing refreshes.
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: billingKeys.all }),
+    // The customer's page shows the answer at once; rentals and invoices show the company: everything billing refreshes.
+    onSuccess: (customer) => {
+      queryClient.setQueryData(billingKeys.customer(customer.id), customer);
+      return queryClient.invalidateQueries({ queryKey: billingKeys.all });
+    },
   });
 }

@@ -1,12 +1,24 @@
-import type { ColDef } from 'ag-grid-community';
+import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import { useMemo } from 'react';
+import { Link, useNavigate } from 'react-router-dom';
 import { DataGrid } from '../../../components/data-grid';
 import type { Customer } from '../api/types';
 
-export function CustomersTable({ customers, onOpen }: { customers: Customer[] | undefined; onOpen?: (customer: Customer) => void }) {
+/** Customers as a table; the company (or a click on the row) opens the customer's page. */
+export function CustomersTable({ customers }: { customers: Customer[] | undefined }) {
+  const navigate = useNavigate();
   const columns = useMemo<ColDef<Customer>[]>(
     () => [
-      { headerName: 'Company', field: 'company', minWidth: 180, flex: 2, cellClass: 'font-semibold', sort: 'asc' },
+      {
+        headerName: 'Company',
+        field: 'company',
+        minWidth: 180,
+        flex: 2,
+        cellClass: 'font-semibold',
+        sort: 'asc',
+        cellRenderer: (p: ICellRendererParams<Customer>) =>
+          p.data ? <Link to={`/customers/${p.data.id}`} className="text-ink-900 underline-offset-2 hover:underline">{p.data.company}</Link> : null,
+      },
       { headerName: 'Billing e-mail', field: 'billingEmail', minWidth: 200, flex: 2, cellClass: 'font-mono text-sm' },
       { headerName: 'Contact', field: 'billingContact', minWidth: 140 },
       { headerName: 'Tax number', field: 'taxNumber', minWidth: 130, cellClass: 'font-mono text-sm' },
@@ -22,7 +34,7 @@ export function CustomersTable({ customers, onOpen }: { customers: Customer[] | 
       rowId={(c) => c.id}
       exportFileName="nestkeeper-customers.csv"
       emptyMessage="No customers yet."
-      onRowClicked={onOpen}
+      onRowClicked={(c) => navigate(`/customers/${c.id}`)}
     />
   );
 }

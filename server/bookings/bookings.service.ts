@@ -15,8 +15,18 @@ import { listReply } from '../http/list-reply';
 
 const isExclusionViolation = (err: unknown) => (err as { code?: string })?.code === '23P01';
 
+type RentalLabel = { id: string; number: string; customerCompany: string };
+
+/** The rental (number and customer) behind each rental booking, in one query. */
+export async function bookingRentals(tx: Scoped, bookings: Pick<Booking, 'rentalId'>[]): Promise<Map<string, RentalLabel>> {
+  const ids = [...new Set(bookings.map((b) => b.rentalId).filter((id): id is string => !!id))];
+  if (!ids.length) return new Map();
+  const rows = await tx.sql<RentalLabel>(`SELECT r.id, r.number, c.company AS "customerCompany" FROM rentals r JOIN customers c ON c.id = r.customer_id WHERE r.organization_id = $1 AND r.id = ANY($2)`, [ids]);
+  return new Map(rows.map((r) => [r.id, r]));
+}
+
 export type BookingView = ReturnType<typeof bookingView>;
-export const bookingView = (b: Booking, items: Pick<Asset, 'id' | 'assetTag' | 'type' | 'status'>[]) => ({
+export const bookingView = (b: Booking, items: Pick<Asset, 'id' | 'assetTag' | 'type' | 'status'>[], rentals: Map<string, RentalLabel>) => ({
   id: b.id,
   state: b.state,
   purpose: b.purpose,
@@ -25,6 +35,7 @@ export const bookingView = (b: Booking, items: Pick<Asset, 'id' | 'assetTag' | '
   jobId: b.jobId,
   job: b.job ? { id: b.job.id, reference: b.job.reference, customerName: b.job.customerName } : null,
   rentalId: b.rentalId,
+  rental: b.rentalId ? (rentals.get(b.rentalId) ?? null) : null,
   kitId: b.kitId,
   kit: b.kit ? { id: b.kit.id, name: b.kit.name } : null,
   note: b.note,
@@ -134,7 +145,7 @@ export class BookingsService {
 
   async load(tx: Scoped, id: string) {
     const booking = await tx.get(Booking, { id }, 'That booking', { relations: { job: true, kit: true } });
-    return bookingView(booking, await bookingAssets(tx, [id]));
+    return bookingView(booking, await bookingAssets(tx, [id]), await bookingRentals(tx, [booking]));
   }
 
   list(actor: Actor, q: z.infer<typeof bookingListQuery>) {
@@ -148,7 +159,8 @@ export class BookingsService {
       if (q.assetId) qb.andWhere('EXISTS (SELECT 1 FROM booking_items bi WHERE bi.booking_id = b.id AND bi.asset_id = :assetId)', { assetId: q.assetId });
       const [rows, total] = await qb.take(q.limit).skip(q.offset).getManyAndCount();
       const items = await bookingAssets(tx, rows.map((r) => r.id));
-      return { items: rows.map((b) => bookingView(b, items.filter((i) => i.bookingId === b.id))), total };
+      const rentals = await bookingRentals(tx, rows);
+      return { items: rows.map((b) => bookingView(b, items.filter((i) => i.bookingId === b.id), rentals)), total };
     });
   }
 

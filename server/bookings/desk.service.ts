@@ -3,7 +3,7 @@ import { readInOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from '../organizations/org-context';
 import { blockedItems } from './booking-queries';
 import { Booking } from './booking.entity';
-import { bookingAssets, bookingView } from './bookings.service';
+import { bookingAssets, bookingRentals, bookingView } from './bookings.service';
 import type { Scoped } from '../db/scoped';
 
 /** What the manager's and the technician's home pages show about bookings. */
@@ -20,7 +20,8 @@ export class DeskService {
       .take(100)
       .getMany();
     const items = await bookingAssets(tx, rows.map((r) => r.id));
-    return rows.map((b) => bookingView(b, items.filter((i) => i.bookingId === b.id)));
+    const rentals = await bookingRentals(tx, rows);
+    return rows.map((b) => bookingView(b, items.filter((i) => i.bookingId === b.id), rentals));
   }
 
   /** Today's checkouts and returns, late returns, and reserved bookings an item no longer qualifies for. */

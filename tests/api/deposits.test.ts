@@ -69,7 +69,7 @@ describe('a rental from quote to invoice', () => {
     // 13 days of two SMRs: two weeks each (common practice: cheapest cover), 300.00 + 19 % tax.
     expect(rental.quote).toMatchObject({ days: 13, subtotalMinor: 30_000, taxMinor: 5700, totalMinor: 35_700 });
     const booking = (await t.api.get(`/api/bookings/${rental.bookingId}`).set(bearer(manager))).body;
-    expect(booking).toMatchObject({ purpose: 'rental', rentalId: rental.id });
+    expect(booking).toMatchObject({ purpose: 'rental', rentalId: rental.id, rental: { id: rental.id, number: rental.number, customerCompany: 'Quillon Test Rigs' } });
     expect((await t.api.post('/api/rentals').set(bearer(tech)).send({ customerId, assetIds: [rental.items[0].id], startsOn: '2027-06-01', endsOn: '2027-06-02' })).status).toBe(403);
     // The same SMRs for overlapping days: the bookings rules answer, unchanged.
     const clash = await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId, assetIds: rental.items.map((i) => i.id), startsOn: rental.endsOn, endsOn: rental.endsOn });

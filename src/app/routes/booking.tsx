@@ -49,7 +49,7 @@ export default function BookingRoute() {
       <PageHeader title={bookingTitle(b)} description={dayRange(b.startsOn, b.endsOn)} actions={actions.length ? actions : undefined} />
       <ArrivalNotice />
       <div className="grid gap-4 lg:grid-cols-2">
-        <BookingFacts booking={b} timeZone={organization.timeZone} />
+        <BookingFacts booking={b} timeZone={organization.timeZone} rentalLinks={can(user.role, 'reports.read')} />
         {job.data ? (
           <Panel title="Job">
             <FactList

@@ -29,6 +29,8 @@ export interface Booking {
   jobId: string | null;
   job: { id: string; reference: string; customerName: string } | null;
   rentalId: string | null;
+  /** The rental behind a rental booking: its number and customer. */
+  rental: { id: string; number: string; customerCompany: string } | null;
   kitId: string | null;
   kit: { id: string; name: string } | null;
   note: string | null;

@@ -19,7 +19,8 @@ import type { Booking, ChecklistLine } from '../api/types';
 import { BookingStateChip, conditionWords, dayCount, dayRange, purposeWords } from './booking-words';
 
 /** Dates, job, state and who handed what over. */
-export function BookingFacts({ booking, timeZone }: { booking: Booking; timeZone?: string }) {
+/** `rentalLinks`: whether the reader may open rental pages (the billing desk); others see the number only. */
+export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booking: Booking; timeZone?: string; rentalLinks?: boolean }) {
   return (
     <Panel title="Booking">
       <FactList
@@ -31,6 +32,17 @@ export function BookingFacts({ booking, timeZone }: { booking: Booking; timeZone
             value: booking.job ? (
               <span>
                 <span className="font-mono font-semibold">{booking.job.reference}</span> {booking.job.customerName}
+              </span>
+            ) : booking.rental ? (
+              <span>
+                {rentalLinks ? (
+                  <Link to={`/rentals/${booking.rental.id}`} className="font-mono font-semibold text-brass-deep underline">
+                    {booking.rental.number}
+                  </Link>
+                ) : (
+                  <span className="font-mono font-semibold">{booking.rental.number}</span>
+                )}{' '}
+                {booking.rental.customerCompany} (rental)
               </span>
             ) : (
               purposeWords[booking.purpose]

@@ -35,9 +35,11 @@ export const conditionWords: Record<ItemCondition, string> = {
   damaged: 'Damaged',
 };
 
-/** What a booking is for, in a few words: the job's reference and customer, or the purpose. */
-export function bookingTitle(booking: Pick<Booking, 'job' | 'purpose'>): string {
-  return booking.job ? `${booking.job.reference} ${booking.job.customerName}` : purposeWords[booking.purpose];
+/** What a booking is for, in a few words: the job's or rental's number and customer, or the purpose. */
+export function bookingTitle(booking: Pick<Booking, 'job' | 'purpose'> & { rental?: Booking['rental'] }): string {
+  if (booking.job) return `${booking.job.reference} ${booking.job.customerName}`;
+  if (booking.rental) return `${booking.rental.number} ${booking.rental.customerCompany}`;
+  return purposeWords[booking.purpose];
 }
 
 /** A short day, "2 Dec" (with the year when asked). */

@@ -6,6 +6,7 @@ import type { Transporter } from 'nodemailer';
 import type { DataSource } from 'typeorm';
 import { AuthService } from './auth/auth.service';
 import { authRoutes } from './auth/auth.routes';
+import { PgRateLimitStore } from './auth/pg-rate-limit-store';
 import { csrfGuard } from './auth/csrf';
 import { createPassport } from './auth/passport';
 import { signingKey } from './auth/tokens';
@@ -93,7 +94,7 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use('/api', express.json({ limit: '1mb' }), csrfGuard);
 
   app.use('/api', healthRoutes(db));
-  app.use('/api/auth', authRoutes(auth, { secureCookies: (config.PUBLIC_URL ?? '').startsWith('https:'), attemptsPer10Min: config.LOGIN_ATTEMPTS_PER_10_MIN }));
+  app.use('/api/auth', authRoutes(auth, { secureCookies: (config.PUBLIC_URL ?? '').startsWith('https:'), attemptsPer10Min: config.LOGIN_ATTEMPTS_PER_10_MIN, attemptStore: new PgRateLimitStore(db) }));
   app.use('/api/users', usersRoutes(users));
   app.use('/api/mailbox', notificationsRoutes(db));
   app.use('/api/admin/jobs', jobsRoutes(jobs));

@@ -1,13 +1,13 @@
 import { randomBytes } from 'node:crypto';
 import { Router, type CookieOptions, type Response } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { ipKeyGenerator, rateLimit, type Store } from 'express-rate-limit';
 import { changeOwnPasswordPayload, loginPayload } from '../../shared/schemas/users';
 import { endpoint } from '../http/endpoint';
 import { AppError } from '../http/errors';
 import type { AuthService } from './auth.service';
 import { CSRF_COOKIE, SESSION_COOKIE, TOKEN_LIFETIME_SECONDS } from './tokens';
 
-export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; attemptsPer10Min: number }): Router {
+export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; attemptsPer10Min: number; attemptStore: Store }): Router {
   const router = Router();
   const at = '/api/auth';
   const cookieBase: CookieOptions = { sameSite: 'lax', secure: opts.secureCookies, path: '/', maxAge: TOKEN_LIFETIME_SECONDS * 1000 };
@@ -17,7 +17,7 @@ export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; at
     res.cookie(CSRF_COOKIE, randomBytes(24).toString('base64url'), { ...cookieBase, httpOnly: false });
   };
 
-  // Per address and e-mail, so one person's typos do not lock out the whole office.
+  // Per address and e-mail, so one person's typos do not lock out the whole office; counted in PostgreSQL, so the limit holds across instances.
   router.post(
     '/login',
     rateLimit({
@@ -26,6 +26,7 @@ export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; at
       standardHeaders: 'draft-8',
       legacyHeaders: false,
       skipSuccessfulRequests: true,
+      store: opts.attemptStore,
       keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
       handler: (_req, _res, next) => next(new AppError(429, 'rate_limited', 'Too many sign-in attempts; wait a few minutes and try again.')),
     }),

@@ -1,4 +1,5 @@
 import { AuditEvent } from '../audit/audit-event.entity';
+import { LoginAttempt } from '../auth/login-attempt.entity';
 import { Asset } from '../fleet/asset.entity';
 import { CustodyEvent } from '../fleet/custody-event.entity';
 import { Kit } from '../fleet/kit.entity';
@@ -24,4 +25,4 @@ import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity the data source knows; a new component adds its own here. */
-export const entities = [Organization, User, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto, Job, Booking, BookingItem, CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem, Customer, RateCard, Rental, DepositHold, Invoice, DocumentCounter, PaymentEvent, OutboxAttachment];
+export const entities = [Organization, User, LoginAttempt, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto, Job, Booking, BookingItem, CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem, Customer, RateCard, Rental, DepositHold, Invoice, DocumentCounter, PaymentEvent, OutboxAttachment];

@@ -1,4 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import nodemailer from 'nodemailer';
+import request from 'supertest';
+import { buildApp } from '../../server/app';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -42,6 +45,17 @@ describe('sign-in', () => {
     expect(statuses.slice(0, 5)).toEqual([401, 401, 401, 401, 401]);
     expect(statuses[5]).toBe(429);
     expect((await attempt()).body.error.code).toBe('rate_limited');
+  });
+
+  it('counts failed sign-ins across app instances: a second instance on the same database shares the limit', async () => {
+    const second = request(buildApp({ config: t.config, db: t.db, mail: nodemailer.createTransport({ jsonTransport: true }) }).app);
+    const attempt = (api: typeof t.api) => api.post('/api/auth/login').send({ email: 'visitor@demo.test', password: 'guessing-across' });
+    const statuses: number[] = [];
+    for (let i = 0; i < 6; i += 1) statuses.push((await attempt(i % 2 ? second : t.api)).status);
+    // Five allowed in all, not five per instance.
+    expect(statuses).toEqual([401, 401, 401, 401, 401, 429]);
+    // The right password still works for someone else from the same address.
+    expect((await second.post('/api/auth/login').send({ email: 'manager@demo.test', password: 'nestkeeper-demo' })).status).toBe(200);
   });
 
   it('refuses anonymous callers on a protected route with 401', async () => {

@@ -22,15 +22,16 @@ export const depositRenewalsJob = (deposits: DepositsService): JobDefinition => 
   name: 'deposit-renewals',
   description: 'Renews card holds for deposits that would lapse within two days, and says when a card refuses.',
   schedule: '30 5 * * *',
-  run: async ({ db, now }) => {
+  run: async ({ db, now, organizationId }) => {
     const due: DueHold[] = await db.query(
       `SELECT d.id, d.organization_id, d.rental_id, o.time_zone
          FROM deposit_holds d JOIN rentals r ON r.id = d.rental_id JOIN bookings b ON b.id = r.booking_id
          JOIN organizations o ON o.id = d.organization_id
         WHERE d.kind = 'hold' AND d.state = 'authorized' AND d.payment_intent_id IS NOT NULL AND d.capture_before < $1 AND b.state <> 'cancelled'
+          AND ($2::uuid IS NULL OR d.organization_id = $2)
           AND NOT EXISTS (SELECT 1 FROM invoices i WHERE i.rental_id = r.id AND i.kind = 'invoice')
         ORDER BY d.capture_before`,
-      [new Date(now.getTime() + RENEW_WITHIN_HOURS * 3_600_000)],
+      [new Date(now.getTime() + RENEW_WITHIN_HOURS * 3_600_000), organizationId],
     );
     let renewed = 0;
     let refused = 0;

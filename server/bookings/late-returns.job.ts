@@ -11,15 +11,16 @@ export const lateReturnsJob = (): JobDefinition => ({
   name: 'late-returns',
   description: 'E-mails each firm one list of bookings that are past their end date and not returned.',
   schedule: '0 7 * * *',
-  run: async ({ db, now }) => {
+  run: async ({ db, now, organizationId }) => {
     const rows: LateRow[] = await db.query(
       `SELECT b.organization_id, o.time_zone, b.id, to_char(b.starts_on, 'YYYY-MM-DD') AS starts_on, to_char(b.ends_on, 'YYYY-MM-DD') AS ends_on,
               b.taken_by, j.reference, string_agg(a.asset_tag, ', ' ORDER BY a.asset_tag) AS tags
          FROM bookings b JOIN organizations o ON o.id = b.organization_id
          LEFT JOIN jobs j ON j.id = b.job_id
          JOIN booking_items bi ON bi.booking_id = b.id JOIN assets a ON a.id = bi.asset_id
-        WHERE b.state = 'out' AND b.ends_on < (now() AT TIME ZONE o.time_zone)::date
+        WHERE b.state = 'out' AND b.ends_on < (now() AT TIME ZONE o.time_zone)::date AND ($1::uuid IS NULL OR b.organization_id = $1)
         GROUP BY b.organization_id, o.time_zone, b.id, j.reference ORDER BY b.ends_on`,
+      [organizationId],
     );
     const byOrg = new Map<string, LateRow[]>();
     for (const r of rows) byOrg.set(r.organization_id, [...(byOrg.get(r.organization_id) ?? []), r]);

@@ -18,7 +18,7 @@ export const dueScanJob = (): JobDefinition => ({
   description: 'Marks calibration states and e-mails each owner and manager one digest of newly due-soon and overdue items and the bookings they threaten.',
   // Hourly; a firm is scanned in the hour its own clock reads 06:00 (every firm on "run now").
   schedule: '5 * * * *',
-  run: async ({ db, now, trigger }) => {
+  run: async ({ db, now, trigger, organizationId }) => {
     const changed: Changed[] = await db.query(
       `WITH states AS (
          SELECT a.id, a.organization_id, a.asset_tag,
@@ -26,13 +26,14 @@ export const dueScanJob = (): JobDefinition => ({
            FROM assets a JOIN organizations o ON o.id = a.organization_id
           WHERE a.calibration_required AND a.status <> 'retired'
             AND ($1 OR extract(hour FROM $2::timestamptz AT TIME ZONE o.time_zone) = 6)
+            AND ($3::uuid IS NULL OR a.organization_id = $3)
             AND (a.due_on IS NULL OR a.due_on <= ($2::timestamptz AT TIME ZONE o.time_zone)::date + coalesce((o.settings->>'dueSoonDays')::int, 30)))
        , marked AS (
          UPDATE assets a SET notified_calibration_state = s.state
            FROM states s WHERE a.id = s.id AND a.notified_calibration_state IS DISTINCT FROM s.state
          RETURNING s.organization_id, s.asset_tag, s.state)
        SELECT * FROM marked`,
-      [trigger === 'manual', now],
+      [trigger === 'manual', now, organizationId],
     );
     const byOrg = new Map<string, Changed[]>();
     for (const c of changed) byOrg.set(c.organization_id, [...(byOrg.get(c.organization_id) ?? []), c]);

@@ -36,6 +36,10 @@ export class JobRun {
 
   @Column({ type: 'text', nullable: true })
   error: string | null;
+
+  /** The firm a manual run was limited to; null for a scheduled run over every firm. */
+  @Column({ name: 'organization_id', type: 'uuid', nullable: true })
+  organizationId: string | null;
 }
 
 /** A claim on one cron slot: the first instance to insert the key runs it. */

@@ -7,14 +7,16 @@ import type { JobDefinition } from './job';
 import { JobRun } from './job-run.entity';
 import { pgRunCoordinator } from './pg-run-coordinator';
 
-const publicRun = (r: JobRun) => ({
+/** A run as a firm's owner sees it. In the run log a scheduled run's summary counts every firm's work, so it stays out of view. */
+const publicRun = (r: JobRun, showSummary = r.organizationId !== null) => ({
   id: r.id,
   trigger: r.trigger,
+  scope: r.organizationId ? ('your firm' as const) : ('every firm' as const),
   scheduledFor: r.scheduledFor,
   startedAt: r.startedAt,
   finishedAt: r.finishedAt,
   status: r.status,
-  summary: r.summary,
+  summary: showSummary ? r.summary : null,
   error: r.error,
 });
 
@@ -34,25 +36,28 @@ export class JobsService {
   }
 
   /** Run one job now and log it; failures are logged, not thrown, so the schedule carries on. */
-  async run(name: string, trigger: 'schedule' | 'manual', scheduledFor: Date | null = null) {
+  async run(name: string, trigger: 'schedule' | 'manual', scheduledFor: Date | null = null, organizationId: string | null = null) {
     const job = this.find(name);
     const repo = this.db.getRepository(JobRun);
-    const run = await repo.save(repo.create({ jobName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running' }));
+    const run = await repo.save(repo.create({ jobName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running', organizationId }));
     try {
-      run.summary = await job.run({ db: this.db, now: new Date(), trigger });
+      run.summary = await job.run({ db: this.db, now: new Date(), trigger, organizationId });
       run.status = 'succeeded';
     } catch (err) {
       run.status = 'failed';
       run.error = err instanceof Error ? err.message : String(err);
     }
     run.finishedAt = new Date();
-    return publicRun(await repo.save(run));
+    // The caller ran it, so it sees what the run did.
+    return publicRun(await repo.save(run), true);
   }
 
-  async list() {
+  /** Each job's last run that this firm may see: scheduled runs, and its own manual ones. */
+  async list(organizationId: string) {
     const last: JobRun[] = await this.db
       .getRepository(JobRun)
       .createQueryBuilder('r')
+      .where('r.organization_id IS NULL OR r.organization_id = :organizationId', { organizationId })
       .distinctOn(['r.job_name'])
       .orderBy('r.job_name')
       .addOrderBy('r.started_at', 'DESC')

@@ -6,5 +6,5 @@ export const outboxJob = (transport: Transporter, from: string): JobDefinition =
   name: 'deliver-outbox',
   description: 'Sends queued e-mail; retries with growing pauses while the mail server is unreachable.',
   schedule: '*/15 * * * * *',
-  run: ({ db }) => deliverOutbox(db, transport, from),
+  run: ({ db, organizationId }) => deliverOutbox(db, transport, from, organizationId),
 });

@@ -15,7 +15,8 @@ export const backoffSeconds = (attempts: number) => Math.min(30 * 2 ** Math.max(
  * transaction that held its lock. The fixed Message-ID lets the receiving end
  * recognise a repeat should a commit fail after the SMTP server accepted.
  */
-export async function deliverOutbox(db: DataSource, transport: Transporter, from: string) {
+/** `organizationId` limits the run to one firm's messages (an owner's "run now"). */
+export async function deliverOutbox(db: DataSource, transport: Transporter, from: string, organizationId: string | null = null) {
   let sent = 0;
   let deferred = 0;
   for (;;) {
@@ -23,6 +24,7 @@ export async function deliverOutbox(db: DataSource, transport: Transporter, from
       const due = await manager
         .createQueryBuilder(OutboxMessage, 'm')
         .where("m.status = 'pending' AND m.next_attempt_at <= now()")
+        .andWhere(organizationId ? 'm.organization_id = :organizationId' : 'true', { organizationId })
         .orderBy('m.created_at', 'ASC')
         .limit(BATCH)
         .setLock('pessimistic_write')
@@ -56,6 +58,6 @@ export async function deliverOutbox(db: DataSource, transport: Transporter, from
     });
     if (batch < BATCH || deferred > 0) break;
   }
-  const [{ pending }] = await db.query(`SELECT count(*)::int AS pending FROM outbox_messages WHERE status = 'pending'`);
+  const [{ pending }] = await db.query(`SELECT count(*)::int AS pending FROM outbox_messages WHERE status = 'pending' AND ($1::uuid IS NULL OR organization_id = $1)`, [organizationId]);
   return { sent, deferred, pending };
 }

@@ -205,13 +205,13 @@ describe('due scan timing and settings', () => {
     const job = dueScanJob();
     await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
     // 03:10 UTC is 04:10 in Wrenhallow (Europe/Berlin): not the demo firm's hour, nothing is scanned.
-    expect(await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule' })).toMatchObject({ itemsChanged: 0, digests: 0 });
+    expect(await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule', organizationId: null })).toMatchObject({ itemsChanged: 0, digests: 0 });
     // 05:10 UTC is 06:10 there (and 05:10 in the London firm, which waits for its own six o'clock).
-    const atSix = await job.run({ db: t.db, now: new Date('2026-12-01T05:10:00Z'), trigger: 'schedule' });
+    const atSix = await job.run({ db: t.db, now: new Date('2026-12-01T05:10:00Z'), trigger: 'schedule', organizationId: null });
     expect(atSix.itemsChanged).toBeGreaterThan(0);
     expect(atSix.digests).toBe(1);
     await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
-    expect((await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'manual' })).itemsChanged).toBeGreaterThan(0);
+    expect((await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'manual', organizationId: null })).itemsChanged).toBeGreaterThan(0);
   });
 
   it('lets the owner set providers with turnarounds and the interval policy', async () => {

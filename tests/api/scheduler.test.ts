@@ -56,16 +56,29 @@ describe('jobs admin API', () => {
 
   it('lets the owner run a job now, logs the run, and refuses other roles', async () => {
     const owner = await app.tokenFor('owner@demo.test');
-    const [{ queued }] = await app.db.query(`SELECT count(*)::int AS queued FROM outbox_messages WHERE status = 'pending'`);
+    const [{ queued }] = await app.db.query(`SELECT count(*)::int AS queued FROM outbox_messages m JOIN users u ON u.organization_id = m.organization_id AND u.email = 'owner@demo.test' WHERE m.status = 'pending'`);
     expect(queued).toBeGreaterThan(0);
     const run = await app.api.post('/api/admin/jobs/deliver-outbox/run').set(bearer(owner));
     expect(run.status).toBe(200);
-    // SMTP is not listening in this app: the run succeeds and the mail waits.
-    expect(run.body.run).toMatchObject({ status: 'succeeded', trigger: 'manual', summary: { sent: 0, deferred: queued, pending: queued } });
+    // SMTP is not listening in this app: the run succeeds and the mail waits. "Run now" covers the owner's own firm only.
+    expect(run.body.run).toMatchObject({ status: 'succeeded', trigger: 'manual', scope: 'your firm', summary: { sent: 0, deferred: queued, pending: queued } });
     const list = await app.api.get('/api/admin/jobs').set(bearer(owner));
     expect(list.body.items).toEqual(expect.arrayContaining([expect.objectContaining({ name: 'deliver-outbox', lastRun: expect.objectContaining({ id: run.body.run.id }) }), expect.objectContaining({ name: 'late-returns', lastRun: null })]));
     expect((await app.api.post('/api/admin/jobs/no-such-job/run').set(bearer(owner))).status).toBe(404);
     const manager = await app.tokenFor('manager@demo.test');
     expect((await app.api.get('/api/admin/jobs').set(bearer(manager))).status).toBe(403);
+  });
+
+  it("keeps one firm's run now to that firm, and out of the other firm's view", async () => {
+    const other = await app.tokenFor('owner@other.test');
+    const demo = await app.tokenFor('owner@demo.test');
+    // The demo firm has a late return (seeded); the other firm has none, and its run must not touch the demo firm's.
+    const run = await app.api.post('/api/admin/jobs/late-returns/run').set(bearer(other));
+    expect(run.body.run).toMatchObject({ status: 'succeeded', scope: 'your firm', summary: { firms: 0, lateBookings: 0 } });
+    const demoView = (await app.api.get('/api/admin/jobs').set(bearer(demo))).body.items.find((j: { name: string }) => j.name === 'late-returns');
+    expect(demoView.lastRun).toBeNull();
+    const own = await app.api.post('/api/admin/jobs/late-returns/run').set(bearer(demo));
+    expect(own.body.run.summary).toMatchObject({ firms: 1 });
+    expect(own.body.run.summary.lateBookings).toBeGreaterThan(0);
   });
 });

@@ -82,7 +82,7 @@ export function JobsTable() {
                             </>
                           ) : null}
                         </span>
-                        {last.summary ? <span>{last.summary}</span> : null}
+                        <span className="text-ink-700">{last.scope === 'every firm' ? 'Scheduled run over every firm' : `Run now for your firm${last.summary ? `: ${summaryWords(last.summary)}` : ''}`}</span>
                         {last.error ? <span className="text-bad">{last.error}</span> : null}
                       </>
                     ) : null}
@@ -121,7 +121,14 @@ function RunOutcomeNote({ outcome }: { outcome: RunOutcome }) {
     run.status === 'failed' ? 'This run failed' : run.status === 'running' ? 'Started; still running' : 'Run finished';
   return (
     <Notice tone={tone} title={title} className="mt-2 max-w-xs">
-      {run.status === 'failed' ? run.error || run.summary : run.summary || 'No summary was given.'}
+      {run.status === 'failed' ? run.error : run.summary ? summaryWords(run.summary) : 'No summary was given.'}
     </Notice>
   );
+}
+
+/** `{ lateBookings: 2, firms: 1 }` → "late bookings 2, firms 1". */
+function summaryWords(summary: NonNullable<JobRun['summary']>): string {
+  return Object.entries(summary)
+    .map(([key, value]) => `${key.replace(/([A-Z])/g, ' $1').toLowerCase()} ${value}`)
+    .join(', ');
 }

@@ -1,7 +1,7 @@
 import { MigrationInterface, QueryRunner } from "typeorm";
 
-export class SharedLoginLimit1796171602668 implements MigrationInterface {
-    name = 'SharedLoginLimit1796171602668'
+export class SharedLoginLimitAndFirmRuns1796171807014 implements MigrationInterface {
+    name = 'SharedLoginLimitAndFirmRuns1796171807014'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`
@@ -15,9 +15,16 @@ export class SharedLoginLimit1796171602668 implements MigrationInterface {
         await queryRunner.query(`
             CREATE INDEX "IDX_be81306e531d73a97245aa5152" ON "login_attempts" ("resets_at")
         `);
+        await queryRunner.query(`
+            ALTER TABLE "job_runs"
+            ADD "organization_id" uuid
+        `);
     }
 
     public async down(queryRunner: QueryRunner): Promise<void> {
+        await queryRunner.query(`
+            ALTER TABLE "job_runs" DROP COLUMN "organization_id"
+        `);
         await queryRunner.query(`
             DROP INDEX "public"."IDX_be81306e531d73a97245aa5152"
         `);

@@ -77,4 +77,27 @@ describe('the billing desk in a real browser', () => {
     expect(text).toContain('€178.50');
     await context.close();
   }, 120_000);
+
+  it('the owner sets the rental terms on the settings page, and quotes follow them', async () => {
+    const { context, page, nav } = await signedIn(rig.browser, rig.baseUrl, 'owner@demo.test', "Owner's overview");
+    await nav.getByRole('link', { name: 'Settings' }).click();
+    const form = page.getByRole('form', { name: 'Rental terms' });
+    await form.getByLabel('Tax on rentals (%)').fill('7,5');
+    await form.getByLabel('Deposit (% of replacement value)').fill('15');
+    await form.getByLabel('Deposit at least (EUR)').fill('200');
+    await form.getByLabel('Deposit at most (EUR)').fill('100');
+    await form.getByRole('button', { name: 'Save rental terms' }).click();
+    await form.getByText('The maximum must be at least the minimum.').waitFor();
+    await form.getByLabel('Deposit at most (EUR)').fill('3000');
+    await form.getByRole('button', { name: 'Save rental terms' }).click();
+    await form.getByText(/^Saved\./).waitFor();
+    const api = await apiAs('owner@demo.test');
+    const [smr] = (await api('/assets?type=smr&limit=1')).body.items;
+    const today = todayIn('Europe/Berlin');
+    const quote = (await api(`/quotes?assetIds=${smr.id}&startsOn=${addDays(today, 60)}&endsOn=${addDays(today, 60)}`)).body;
+    // One day of one SMR at 15.00: tax 7.5 % = 1.125, rounded half up to 1.13; deposit 15 % of 1 600.00 = 240.00 (within 200–3 000). Worked by hand.
+    expect(quote).toMatchObject({ subtotalMinor: 1500, taxRateBasisPoints: 750, taxMinor: 113, depositMinor: 24_000 });
+    await context.close();
+  }, 60_000);
 });
+

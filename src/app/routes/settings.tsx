@@ -6,13 +6,14 @@ import { useSettings } from '../../features/settings/api/get-settings';
 import { CheckRulesForm } from '../../features/settings/components/check-rules-form';
 import { IntervalPolicyForm } from '../../features/settings/components/interval-policy-form';
 import { ProvidersForm } from '../../features/settings/components/providers-form';
+import { RentalTermsForm } from '../../features/settings/components/rental-terms-form';
 import { SettingsForm } from '../../features/settings/components/settings-form';
 
 export default function SettingsRoute() {
   const settings = useSettings();
   return (
     <>
-      <PageHeader title="Settings" description="Firm-wide choices: how dates and due states are worked out, how field checks are judged, which labs calibrate your kit and how calibration intervals are reviewed." />
+      <PageHeader title="Settings" description="Firm-wide choices: how dates and due states are worked out, how field checks are judged, which labs calibrate your kit, how calibration intervals are reviewed, and the tax and deposit terms of rentals." />
       {settings.isPending ? <LoadingPanel /> : null}
       {settings.isError ? (
         <Notice tone="error" title="The settings could not be loaded">
@@ -30,6 +31,9 @@ export default function SettingsRoute() {
           </SettingsSection>
           <SettingsSection title="Interval review">
             <IntervalPolicyForm settings={settings.data} />
+          </SettingsSection>
+          <SettingsSection title="Rental terms">
+            <RentalTermsForm settings={settings.data} />
           </SettingsSection>
         </div>
       ) : null}

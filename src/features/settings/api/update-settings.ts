@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { settingsKeys } from './keys';
 import type { CheckKind, DecisionRule, Tolerance } from '../../../lib/checks';
-import type { CalibrationProvider, IntervalPolicy, OrganizationSettings } from './types';
+import type { CalibrationProvider, DepositPolicy, IntervalPolicy, OrganizationSettings } from './types';
 
 export interface UpdateSettingsInput {
   dueSoonDays?: number;
@@ -13,6 +13,9 @@ export interface UpdateSettingsInput {
   providers?: CalibrationProvider[];
   /** The whole policy; it replaces the saved one. */
   intervalPolicy?: IntervalPolicy;
+  /** Tax on rentals in basis points (19 % = 1900). */
+  taxRateBasisPoints?: number;
+  depositPolicy?: DepositPolicy;
 }
 
 export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettings> {

@@ -1,13 +1,11 @@
 import { Form, Formik, useField } from 'formik';
-import { useState } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { checkKindWords, type CheckKind, type DecisionRule, type Tolerance } from '../../../lib/checks';
-import { applyServerErrors } from '../../../lib/form-errors';
 import type { OrganizationSettings } from '../api/types';
-import { useUpdateSettings } from '../api/update-settings';
+import { useSettingsSave } from '../api/use-settings-save';
 
 const kinds = Object.keys(checkKindWords) as CheckKind[];
 
@@ -84,9 +82,7 @@ function ToleranceFields({ kind }: { kind: CheckKind }) {
 
 /** How field checks are judged: the decision rule and the firm's tolerance per check kind (owner only). */
 export function CheckRulesForm({ settings }: { settings: OrganizationSettings }) {
-  const update = useUpdateSettings();
-  const [problem, setProblem] = useState<string>();
-  const [saved, setSaved] = useState(false);
+  const { save, saved, problem } = useSettingsSave();
   if (!settings.decisionRule || !settings.tolerances) {
     return <Notice tone="info">This server does not offer field-check settings yet.</Notice>;
   }
@@ -99,23 +95,13 @@ export function CheckRulesForm({ settings }: { settings: OrganizationSettings })
       }}
       validationSchema={schema}
       enableReinitialize
-      onSubmit={async (values, helpers) => {
-        setProblem(undefined);
-        setSaved(false);
-        try {
-          await update.mutateAsync({
-            decisionRule: values.decisionRule,
-            tolerances: Object.fromEntries(kinds.map((k) => [k, fromValues(values.tolerances[k])])),
-          });
-          setSaved(true);
-        } catch (error) {
-          setProblem(
-            applyServerErrors(error, helpers, {
-              fields: ['decisionRule', ...kinds.flatMap((k) => ['um', 'aUm', 'bUmPerM'].map((f) => `tolerances.${k}.${f}`))],
-            }),
-          );
-        }
-      }}
+      onSubmit={(values, helpers) =>
+        save(
+          { decisionRule: values.decisionRule, tolerances: Object.fromEntries(kinds.map((k) => [k, fromValues(values.tolerances[k])])) },
+          helpers,
+          { fields: ['decisionRule', ...kinds.flatMap((k) => ['um', 'aUm', 'bUmPerM'].map((f) => `tolerances.${k}.${f}`))] },
+        )
+      }
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Field checks" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">

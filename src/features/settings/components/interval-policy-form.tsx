@@ -1,13 +1,11 @@
 import { Form, Formik } from 'formik';
-import { useState } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
-import { applyServerErrors } from '../../../lib/form-errors';
 import { formatNumber } from '../../../lib/format';
 import type { IntervalPolicy, OrganizationSettings } from '../api/types';
-import { useUpdateSettings } from '../api/update-settings';
+import { useSettingsSave } from '../api/use-settings-save';
 
 type Values = { lengthenAfter: number | ''; lengthenFactor: string; shortenFactor: string; minMonths: number | ''; maxMonths: number | '' };
 
@@ -69,9 +67,7 @@ function Explanation({ values, saved }: { values: Values; saved: IntervalPolicy 
 
 /** The staircase interval review of OIML D 10 / ILAC-G24: when to suggest a longer or shorter calibration interval (owner only). */
 export function IntervalPolicyForm({ settings }: { settings: OrganizationSettings }) {
-  const update = useUpdateSettings();
-  const [problem, setProblem] = useState<string>();
-  const [saved, setSaved] = useState(false);
+  const { save, saved, problem } = useSettingsSave();
   const policy = settings.intervalPolicy;
   if (!policy) {
     return <Notice tone="info">This server does not offer interval review settings yet.</Notice>;
@@ -81,22 +77,13 @@ export function IntervalPolicyForm({ settings }: { settings: OrganizationSetting
       initialValues={toValues(policy)}
       validationSchema={schema}
       enableReinitialize
-      onSubmit={async (values, helpers) => {
-        setProblem(undefined);
-        setSaved(false);
-        try {
-          await update.mutateAsync({ intervalPolicy: fromValues(values) });
-          setSaved(true);
-        } catch (error) {
-          setProblem(
-            applyServerErrors(error, helpers, {
-              fields,
-              aliases: Object.fromEntries(fields.map((f) => [`intervalPolicy.${f}`, f])),
-              // No labels: the server words these as whole clauses ("the shortest interval must not exceed the longest").
-            }),
-          );
-        }
-      }}
+      onSubmit={(values, helpers) =>
+        save({ intervalPolicy: fromValues(values) }, helpers, {
+          fields,
+          aliases: Object.fromEntries(fields.map((f) => [`intervalPolicy.${f}`, f])),
+          // No labels: the server words these as whole clauses ("the shortest interval must not exceed the longest").
+        })
+      }
     >
       {({ isSubmitting, dirty, values }) => (
         <Form noValidate aria-label="Interval review" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">

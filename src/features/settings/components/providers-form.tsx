@@ -1,13 +1,11 @@
 import { Form, Formik, useFormikContext } from 'formik';
-import { useState } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { AlertIcon, PlusIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
-import { applyServerErrors } from '../../../lib/form-errors';
 import type { OrganizationSettings } from '../api/types';
-import { useUpdateSettings } from '../api/update-settings';
+import { useSettingsSave } from '../api/use-settings-save';
 
 /** What the server allows (shared/schemas/assets.ts, organizationSettingsPayload.providers). */
 const MAX_PROVIDERS = 50;
@@ -116,9 +114,7 @@ function ProviderRows() {
 
 /** The calibration labs the firm uses and each one's usual turnaround, for planning lab trips (owner only). */
 export function ProvidersForm({ settings }: { settings: OrganizationSettings }) {
-  const update = useUpdateSettings();
-  const [problem, setProblem] = useState<string>();
-  const [saved, setSaved] = useState(false);
+  const { save, saved, problem } = useSettingsSave();
   if (!settings.providers) {
     return <Notice tone="info">This server does not offer calibration provider settings yet.</Notice>;
   }
@@ -127,28 +123,17 @@ export function ProvidersForm({ settings }: { settings: OrganizationSettings }) 
       initialValues={{ providers: settings.providers.map((p) => ({ name: p.name, turnaroundDays: p.turnaroundDays })) }}
       validationSchema={schema}
       enableReinitialize
-      onSubmit={async (values, helpers) => {
-        setProblem(undefined);
-        setSaved(false);
-        try {
-          await update.mutateAsync({
-            providers: values.providers.map((p) => ({ name: p.name.trim(), turnaroundDays: Number(p.turnaroundDays) })),
-          });
-          setSaved(true);
-        } catch (error) {
-          setProblem(
-            applyServerErrors(error, helpers, {
-              fields: ['providers', ...values.providers.flatMap((_, i) => [`providers.${i}.name`, `providers.${i}.turnaroundDays`])],
-              labels: Object.fromEntries(
-                values.providers.flatMap((_, i) => [
-                  [`providers.${i}.name`, 'The name'],
-                  [`providers.${i}.turnaroundDays`, 'The turnaround'],
-                ]),
-              ),
-            }),
-          );
-        }
-      }}
+      onSubmit={(values, helpers) =>
+        save({ providers: values.providers.map((p) => ({ name: p.name.trim(), turnaroundDays: Number(p.turnaroundDays) })) }, helpers, {
+          fields: ['providers', ...values.providers.flatMap((_, i) => [`providers.${i}.name`, `providers.${i}.turnaroundDays`])],
+          labels: Object.fromEntries(
+            values.providers.flatMap((_, i) => [
+              [`providers.${i}.name`, 'The name'],
+              [`providers.${i}.turnaroundDays`, 'The turnaround'],
+            ]),
+          ),
+        })
+      }
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Calibration providers" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">

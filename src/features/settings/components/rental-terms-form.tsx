@@ -1,14 +1,12 @@
 import { Form, Formik } from 'formik';
-import { useState } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
-import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits, formatMoney } from '../../../lib/format';
 import { amountText, parseAmount } from '../../../lib/money';
 import type { OrganizationSettings } from '../api/types';
-import { useUpdateSettings } from '../api/update-settings';
+import { useSettingsSave } from '../api/use-settings-save';
 
 type Values = { taxPercent: string; depositPercent: string; depositMin: string; depositMax: string };
 const fields = ['taxPercent', 'depositPercent', 'depositMin', 'depositMax'] as const;
@@ -18,9 +16,7 @@ const percent = (v: string | undefined) => (v && /^\d{1,3}([.,]\d{1,2})?$/.test(
 
 /** Tax on rentals and how deposits are worked out (owner only): the rental form and every quote use these. */
 export function RentalTermsForm({ settings }: { settings: OrganizationSettings }) {
-  const update = useUpdateSettings();
-  const [problem, setProblem] = useState<string>();
-  const [saved, setSaved] = useState(false);
+  const { save, saved, problem } = useSettingsSave();
   const { currency } = settings;
   const digits = currencyDigits(currency);
   const policy = settings.depositPolicy;
@@ -45,19 +41,16 @@ export function RentalTermsForm({ settings }: { settings: OrganizationSettings }
       }}
       validationSchema={schema}
       enableReinitialize
-      onSubmit={async (values, helpers) => {
-        setProblem(undefined);
-        setSaved(false);
-        try {
-          await update.mutateAsync({
+      onSubmit={(values, helpers) =>
+        save(
+          {
             taxRateBasisPoints: Math.round(percent(values.taxPercent)! * 100),
             depositPolicy: { percent: percent(values.depositPercent)!, minMinor: parseAmount(values.depositMin, digits)!, maxMinor: parseAmount(values.depositMax, digits)! },
-          });
-          setSaved(true);
-        } catch (error) {
-          setProblem(applyServerErrors(error, helpers, { fields, aliases: { taxRateBasisPoints: 'taxPercent', 'depositPolicy.percent': 'depositPercent', 'depositPolicy.minMinor': 'depositMin', 'depositPolicy.maxMinor': 'depositMax' } }));
-        }
-      }}
+          },
+          helpers,
+          { fields, aliases: { taxRateBasisPoints: 'taxPercent', 'depositPolicy.percent': 'depositPercent', 'depositPolicy.minMinor': 'depositMin', 'depositPolicy.maxMinor': 'depositMax' } },
+        )
+      }
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Rental terms" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">

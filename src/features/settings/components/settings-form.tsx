@@ -1,12 +1,11 @@
 import { Form, Formik } from 'formik';
-import { useId, useMemo, useState } from 'react';
+import { useId, useMemo } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
-import { applyServerErrors } from '../../../lib/form-errors';
 import type { OrganizationSettings } from '../api/types';
-import { useUpdateSettings } from '../api/update-settings';
+import { useSettingsSave } from '../api/use-settings-save';
 
 function isTimeZone(value: string | undefined): boolean {
   if (!value) return false;
@@ -31,9 +30,7 @@ const schema = Yup.object({
 type Values = { dueSoonDays: number | ''; timeZone: string };
 
 export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
-  const update = useUpdateSettings();
-  const [problem, setProblem] = useState<string>();
-  const [saved, setSaved] = useState(false);
+  const { save, saved, problem } = useSettingsSave();
   const listId = useId();
   const zones = useMemo(() => {
     const intl = Intl as unknown as { supportedValuesOf?: (key: string) => string[] };
@@ -45,21 +42,12 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
       initialValues={{ dueSoonDays: settings.dueSoonDays, timeZone: settings.timeZone }}
       validationSchema={schema}
       enableReinitialize
-      onSubmit={async (values, helpers) => {
-        setProblem(undefined);
-        setSaved(false);
-        try {
-          await update.mutateAsync({ dueSoonDays: Number(values.dueSoonDays), timeZone: values.timeZone.trim() });
-          setSaved(true);
-        } catch (error) {
-          setProblem(
-            applyServerErrors(error, helpers, {
-              fields: ['dueSoonDays', 'timeZone'],
-              labels: { dueSoonDays: 'The due-soon window', timeZone: 'The time zone' },
-            }),
-          );
-        }
-      }}
+      onSubmit={(values, helpers) =>
+        save({ dueSoonDays: Number(values.dueSoonDays), timeZone: values.timeZone.trim() }, helpers, {
+          fields: ['dueSoonDays', 'timeZone'],
+          labels: { dueSoonDays: 'The due-soon window', timeZone: 'The time zone' },
+        })
+      }
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Settings" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">

@@ -73,7 +73,7 @@ export class IncidentPhoto extends OrgOwned {
   @Column({ type: 'bytea', select: false })
   data: Buffer;
 
-  /** A small JPEG for lists; null where the format cannot be rendered here (HEIC). */
+  /** A small JPEG for lists; null where the file could not be decoded. */
   @Column({ type: 'bytea', nullable: true, select: false })
   thumbnail: Buffer | null;
 

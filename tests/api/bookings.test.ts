@@ -1,8 +1,8 @@
 import ICAL from 'ical.js';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { binaryBody, pdfText } from '../support/pdf';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { pdfText } from '../support/pdf';
+import { bearer, binaryBody, createTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
 let manager: string;

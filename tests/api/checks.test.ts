@@ -1,6 +1,8 @@
+import fs from 'node:fs';
+import path from 'node:path';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, binaryBody, createTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
 let manager: string;
@@ -147,7 +149,24 @@ describe('incidents, holds and release', () => {
     expect((await t.api.get(`/api/incidents/${res.body.id}`).set(bearer(otherOwner))).status).toBe(404);
   });
 
-  it('keeps a HEIC photo from an iPhone without a thumbnail (it cannot be rendered here)', async () => {
+  it('gives a real HEIC photo a JPEG thumbnail, decoded by libheif', async () => {
+    const tip = await newTip('TIP-D04');
+    // tests/fixtures/synthetic-photo.heic: a 480 × 360 synthetic gradient with a blue disc in the middle,
+    // encoded by Debian's heif-enc (libheif with x265), so no camera and no real photo is involved.
+    const heic = fs.readFileSync(path.resolve('tests/fixtures/synthetic-photo.heic'));
+    const res = await t.api.post('/api/incidents').set(bearer(tech)).field('assetId', tip.id).field('kind', 'impact').field('description', 'Knocked on the stand').field('occurredAt', '2026-11-30T10:00:00Z').attach('photos', heic, { filename: 'IMG_0002.HEIC', contentType: 'image/heic' });
+    expect(res.status).toBe(201);
+    expect(res.body.photos[0].thumbnailUrl).toBeTruthy();
+    const thumb = await t.api.get(res.body.photos[0].thumbnailUrl).set(bearer(manager)).buffer(true).parse(binaryBody);
+    expect(thumb.headers['content-type']).toBe('image/jpeg');
+    // Read back by sharp's own JPEG decoder: 320 wide (4:3 kept), and the middle is the blue disc.
+    const { data, info } = await sharp(thumb.body as Buffer).raw().toBuffer({ resolveWithObject: true });
+    expect([info.width, info.height]).toEqual([320, 240]);
+    const centre = (120 * info.width + 160) * info.channels;
+    expect(data[centre + 2]).toBeGreaterThan(180);
+  });
+
+  it('keeps a file that only looks like HEIC, without a thumbnail', async () => {
     const tip = await newTip('TIP-D03');
     // ISO base media 'ftyp' box with the 'heic' brand (ISO/IEC 23008-12).
     const heic = Buffer.concat([Buffer.from([0, 0, 0, 0x18]), Buffer.from('ftypheic'), Buffer.from([0, 0, 0, 0]), Buffer.from('mif1heic'), Buffer.alloc(64)]);

@@ -6,8 +6,8 @@ import { startPaymentFake, type PaymentFake } from '../../server/fakes/payment-f
 import { signPayload } from '../../server/fakes/payments/events';
 import type { RentalView } from '../../shared/billing/views';
 import { todayIn } from '../../shared/calibration/due-date';
-import { binaryBody, pdfText } from '../support/pdf';
-import { bearer, createTestApp, type TestApp } from '../support/test-app';
+import { pdfText } from '../support/pdf';
+import { bearer, binaryBody, createTestApp, type TestApp } from '../support/test-app';
 
 const WEBHOOK_SECRET = 'whsec_deposits_test_secret';
 let t: TestApp;

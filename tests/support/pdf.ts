@@ -28,9 +28,3 @@ export function pdfText(pdf: Buffer): string {
 
 export const pdfPageCount = (pdf: Buffer) => mupdf.Document.openDocument(pdf, 'application/pdf').countPages();
 
-/** A supertest parser that keeps a binary body (a PDF) as one Buffer. */
-export const binaryBody = (res: import('superagent').Response, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};

@@ -34,3 +34,10 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
 
 export type TestApp = Awaited<ReturnType<typeof createTestApp>>;
 export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
+
+/** A supertest parser that keeps a binary body (a PDF, an image) as one Buffer. */
+export const binaryBody = (res: import('superagent').Response, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+};

@@ -41,7 +41,7 @@ export function IncidentFacts({ incident, currency }: { incident: IncidentView; 
   );
 }
 
-/** The photos as thumbnails; a click opens the full image. HEIC has no thumbnail: a file link instead. */
+/** The photos as thumbnails; a click opens the full image. A photo without a thumbnail (one that could not be decoded) gets a file link instead. */
 export function IncidentPhotos({ incident }: { incident: IncidentView }) {
   return (
     <Panel title="Photos">

@@ -104,7 +104,7 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use('/api', checksRoutes(new ChecksService(db)));
   app.use('/api/assets', holdsRoutes(new HoldsService(db)));
   app.use('/api/incidents', incidentsRoutes(new IncidentsService(db)));
-  const bookings = new BookingsService(db);
+  const bookings = new BookingsService(db, (tx, booking) => deposits.releaseForCancelledBooking(tx, booking));
   const rentalRegister = new RentalRegisterService(db, bookings);
   app.use(
     '/api',

@@ -107,6 +107,17 @@ export class DepositsService {
     });
   }
 
+  /** A cancelled rental keeps nothing on the customer's card: its live hold is released with the booking. */
+  async releaseForCancelledBooking(tx: Scoped, booking: Booking) {
+    if (!booking.rentalId) return;
+    const rental = await lockRental(tx, booking.rentalId);
+    const { state, hold } = depositState(await tx.find(DepositHold, { where: { rentalId: rental.id } }));
+    if (state !== 'authorized' || !hold?.paymentIntentId) return;
+    await this.gateway.cancel(hold.paymentIntentId, `hold:${hold.id}:release`);
+    Object.assign(hold, { state: 'released', settledAt: new Date() });
+    await tx.save(DepositHold, hold);
+  }
+
   /**
    * Places a fresh hold on the saved card (merchant-initiated, so the card
    * network's shorter window applies) and lets the old one go. Returns the

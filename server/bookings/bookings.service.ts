@@ -63,7 +63,11 @@ export async function bookingAssets(tx: Scoped, bookingIds: string[]) {
 }
 
 export class BookingsService {
-  constructor(private readonly db: DataSource) {}
+  constructor(
+    private readonly db: DataSource,
+    /** What other components do when a reservation is cancelled (rentals: let the deposit hold go). */
+    private readonly onCancel: (tx: Scoped, booking: Booking) => Promise<void> = async () => {},
+  ) {}
 
   /**
    * Book whole days; `within` runs in the same transaction once the booking exists. Refuses (422) items that may not go out for the window,
@@ -134,6 +138,7 @@ export class BookingsService {
       booking.state = 'cancelled';
       await tx.save(Booking, booking);
       await tx.updateWhere(BookingItem, { bookingId: id }, { active: false });
+      await this.onCancel(tx, booking);
       await recordAudit(tx, actor, 'booking.cancelled', { type: 'booking', id });
       return this.load(tx, id);
     });

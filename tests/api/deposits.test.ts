@@ -239,6 +239,15 @@ describe('when the provider misbehaves', () => {
     expect(res.body.deposit.holds.at(-1)).toMatchObject({ kind: 'charge', state: 'captured', capturedMinor: 30_000, initiatedBy: 'merchant' });
   });
 
+  it('cancelling a reserved rental releases its deposit hold', async () => {
+    const r = await newRental(3);
+    expect((await takeDeposit(r)).status).toBe(200);
+    expect((await t.api.post(`/api/bookings/${r.bookingId}/cancel`).set(bearer(manager))).status).toBe(200);
+    const after = await view(r);
+    expect(after).toMatchObject({ state: 'cancelled', deposit: { state: 'released' } });
+    expect((await stripe.paymentIntents.retrieve(await intentOf(r))).status).toBe('canceled');
+  });
+
   it('releases a hold in full', async () => {
     const r = await returnedWithHold();
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/release`).set(bearer(billing));

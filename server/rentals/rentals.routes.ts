@@ -20,7 +20,7 @@ export function rentalsRoutes(rentals: RentalsService, register: RentalRegisterS
 
   endpoint(router, at, { method: 'post', path: '/rentals', summary: 'Rent kit to a customer at quoted prices (a booking under the usual rules)', access: 'rentals.write', body: rentalPayload, status: 201 }, ({ actor, body }) => register.create(actor, body));
   endpoint(router, at, { method: 'get', path: '/rentals', summary: 'Rentals: open, to settle at return, or all', access: 'reports.read', query: rentalListQuery }, ({ actor, query }) => register.list(actor, query));
-  endpoint(router, at, { method: 'get', path: '/rentals/:id', summary: 'One rental with its deposit, charges and invoices', access: 'bookings.read' }, ({ actor, params }) => register.get(actor, params.id));
+  endpoint(router, at, { method: 'get', path: '/rentals/:id', summary: 'One rental with its deposit, charges and invoices', access: 'reports.read' }, ({ actor, params }) => register.get(actor, params.id));
   endpoint(router, at, { method: 'put', path: '/rentals/:id/charges/:incidentId', summary: 'Set the charge for a damaged or missing item', access: 'rentals.write', body: chargePayload }, ({ actor, params, body }) => register.setCharge(actor, params.id, params.incidentId, body.amountMinor));
   endpoint(router, at, { method: 'get', path: '/rentals/:id/agreement.pdf', summary: 'Rental agreement (PDF)', access: 'bookings.read' }, async ({ actor, params, res }) => {
     const { pdf, number } = await register.agreementPdf(actor, params.id);

@@ -9,7 +9,8 @@ import { assetTypeTitles, type AssetType, type TipPosition } from '../../shared/
 import { checkKindTitles, checkSubjectType, type CheckPayload } from '../../shared/schemas/checks';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
-import { inOrganization, type Actor } from '../db/transaction';
+import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
+import { listReply } from '../http/list-reply';
 import { Asset } from '../fleet/asset.entity';
 import { AppError, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
@@ -130,6 +131,35 @@ export class ChecksService {
     });
   }
 
+  /**
+   * The technician's to-do: every mounting position of every tip in the kit
+   * they carry now or take next (taken by them, or on jobs they lead) without a
+   * passing latest validation — what the booking rules would refuse.
+   */
+  toDo(actor: Actor) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const { today } = await loadOrgContext(tx);
+      return listReply(
+        await tx.sql<CheckToDo>(
+          `SELECT a.id AS "assetId", a.asset_tag AS "assetTag", pos.position, last.decision AS "lastDecision", last.performed_at AS "lastCheckedAt",
+                  b.id AS "bookingId", to_char(b.starts_on, 'YYYY-MM-DD') AS "startsOn", b.state AS "bookingState"
+             FROM bookings b LEFT JOIN jobs j ON j.id = b.job_id
+             JOIN booking_items bi ON bi.booking_id = b.id
+             JOIN assets a ON a.id = bi.asset_id AND a.type = 'tip'
+             CROSS JOIN LATERAL jsonb_array_elements_text(coalesce(a.specs->'positions', '[]'::jsonb)) AS pos(position)
+             LEFT JOIN LATERAL (SELECT fc.decision, fc.performed_at FROM field_checks fc
+                                 WHERE fc.organization_id = a.organization_id AND fc.asset_id = a.id AND fc.kind = 'tip_validation' AND fc.position = pos.position
+                                 ORDER BY fc.performed_at DESC, fc.created_at DESC LIMIT 1) last ON true
+            WHERE b.organization_id = $1 AND (b.taken_by_user_id = $2 OR j.lead_technician_id = $2)
+              AND (b.state = 'out' OR (b.state = 'reserved' AND b.ends_on >= $3::date))
+              AND coalesce(last.decision, 'none') <> 'pass'
+            ORDER BY b.starts_on, a.asset_tag, pos.position`,
+          [actor.userId, today],
+        ),
+      );
+    });
+  }
+
   get(actor: Actor, id: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => checkView(await tx.get(FieldCheck, { id }, 'That check')));
   }
@@ -139,6 +169,9 @@ export class ChecksService {
     return inOrganization(this.db, actor.organizationId, async (tx) => tipValidationStatus(tx, await tx.get(Asset, { id: assetId }, 'That asset')));
   }
 }
+
+/** A tip position in kit a technician carries now or next whose latest validation did not pass (or is missing). */
+export type CheckToDo = { assetId: string; assetTag: string; position: string; lastDecision: string | null; lastCheckedAt: string | null; bookingId: string; startsOn: string; bookingState: string };
 
 export async function tipValidationStatus(tx: Scoped, tip: Asset) {
   const positions = (tip.specs.positions as TipPosition[] | undefined) ?? [];

@@ -93,6 +93,24 @@ describe('tip validation', () => {
   });
 });
 
+describe("the technician's checks to do", () => {
+  it('lists tip positions in the kit they carry without a passing latest validation, until one passes', async () => {
+    const mine = (await t.api.get('/api/bookings/mine').set(bearer(tech))).body;
+    const booking = mine.now[0];
+    const tip = booking.items.find((i: { type: string }) => i.type === 'tip');
+    const before = (await t.api.get('/api/checks/to-do').set(bearer(tech))).body.items as { assetId: string; position: string }[];
+    expect(before.filter((c) => c.assetId === tip.id)).toEqual([]);
+    // 200 µm off in the horizontal position: a fail (the demo tolerance is 60 µm).
+    expect((await validate(tech, tip.id, 'horizontal', 200)).body.result.decision).toBe('fail');
+    const after = (await t.api.get('/api/checks/to-do').set(bearer(tech))).body.items;
+    expect(after).toContainEqual(expect.objectContaining({ assetId: tip.id, assetTag: tip.assetTag, position: 'horizontal', lastDecision: 'fail', bookingId: booking.id }));
+    expect((await validate(tech, tip.id, 'horizontal', 10)).body.result.decision).toBe('pass');
+    expect((await t.api.get('/api/checks/to-do').set(bearer(tech))).body.items.filter((c: { assetId: string }) => c.assetId === tip.id)).toEqual([]);
+    // Another firm's technician-to-be sees none of it.
+    expect((await t.api.get('/api/checks/to-do').set(bearer(otherOwner))).body.items).toEqual([]);
+  });
+});
+
 describe('two-face and length checks', () => {
   it('needs the distance for a range-dependent tolerance, then judges the two-face error against A + B·L', async () => {
     const tracker = (await t.api.get('/api/assets?type=tracker&limit=1').set(bearer(manager))).body.items[0];

@@ -7,6 +7,7 @@ import { useSession } from '../../features/auth/components/session-context';
 import { MyKitPanels, TodayAtCounter } from '../../features/bookings/components/desk-panels';
 import { OpenImpactReviews } from '../../features/calibration/components/impact-review-links';
 import { RecalibrationsDue } from '../../features/fleet/components/due-list';
+import { ChecksToDo } from '../../features/checks/components/checks-to-do';
 import { HeldItems } from '../../features/fleet/components/held-list';
 import { BillingDeskPanels } from '../../features/billing/components/billing-desk-panels';
 import { IncidentList } from '../../features/incidents/components/incident-list';
@@ -76,10 +77,7 @@ const homes: Record<Role, RoleHome> = {
     description: 'The kit in your care and the checks it needs.',
     panels: [
       { title: 'Kit I carry now', body: null, live: () => <MyKitPanels /> },
-      {
-        title: 'Checks to do',
-        body: 'Probe tips that need a validation before their next job, and other field checks, will be listed here.',
-      },
+      { title: 'Checks to do', body: null, live: () => <ChecksToDo /> },
       { title: 'Recent incidents', body: null, live: () => <RecentIncidents /> },
       {
         title: 'Report damage',

@@ -6,4 +6,5 @@ export const checksKeys = {
   list: (params: CheckListParams) => [...checksKeys.lists(), params] as const,
   one: (id: string) => [...checksKeys.all, 'one', id] as const,
   tipValidation: (assetId: string) => [...checksKeys.all, 'tip-validation', assetId] as const,
+  toDo: () => [...checksKeys.all, 'to-do'] as const,
 };

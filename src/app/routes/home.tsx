@@ -10,6 +10,8 @@ import { RecalibrationsDue } from '../../features/fleet/components/due-list';
 import { ChecksToDo } from '../../features/checks/components/checks-to-do';
 import { HeldItems } from '../../features/fleet/components/held-list';
 import { BillingDeskPanels } from '../../features/billing/components/billing-desk-panels';
+import { KitUsePanel } from '../../features/billing/components/kit-use-panel';
+import { todayIn } from '../../lib/bookings';
 import { IncidentList } from '../../features/incidents/components/incident-list';
 import type { Role } from '../../lib/roles';
 
@@ -28,7 +30,13 @@ interface RoleHome {
   links?: { to: string; label: string; note: string }[];
 }
 
-/** Each role's home. Panels say what will appear once the feature behind them lands — no invented numbers. */
+/** The owner's kit panel, in the firm's own calendar and currency. */
+function OwnerKitUse() {
+  const { organization } = useSession();
+  return <KitUsePanel today={todayIn(organization.timeZone)} currency={organization.currency} />;
+}
+
+/** Each role's home: live panels drawn by the features, and plain words where a panel only points the way. */
 const homes: Record<Role, RoleHome> = {
   owner: {
     title: "Owner's overview",
@@ -51,10 +59,7 @@ const homes: Record<Role, RoleHome> = {
       { title: 'On hold', body: null, live: () => <HeldItems /> },
       { title: 'Open incidents', body: null, live: () => <OpenIncidents /> },
       { title: 'Open impact reviews', body: null, live: () => <OpenImpactReviews /> },
-      {
-        title: 'Use and revenue per kit',
-        body: 'Days booked and rental revenue per kit will appear here once bookings and rentals are being recorded.',
-      },
+      { title: 'Use and revenue per kit', body: null, live: () => <OwnerKitUse /> },
     ],
     links: [
       { to: '/users', label: 'Users', note: 'Add the people in your firm and give each a role.' },

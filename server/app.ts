@@ -38,6 +38,7 @@ import { LabService } from './calibration/lab.service';
 import { ReviewService } from './calibration/review.service';
 import { RentalsService } from './rentals/rentals.service';
 import { rentalsRoutes } from './rentals/rentals.routes';
+import { repriceRental } from './rentals/pricing';
 import { RentalRegisterService } from './rentals/rental-register.service';
 import { billingRoutes } from './billing/billing.routes';
 import { BillingReportsService } from './billing/billing-reports.service';
@@ -104,7 +105,10 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use('/api', checksRoutes(new ChecksService(db)));
   app.use('/api/assets', holdsRoutes(new HoldsService(db)));
   app.use('/api/incidents', incidentsRoutes(new IncidentsService(db)));
-  const bookings = new BookingsService(db, (tx, booking) => deposits.releaseForCancelledBooking(tx, booking));
+  const bookings = new BookingsService(db, {
+    onReschedule: (tx, booking) => repriceRental(tx, booking),
+    onCancel: (tx, booking) => deposits.releaseForCancelledBooking(tx, booking),
+  });
   const rentalRegister = new RentalRegisterService(db, bookings);
   app.use(
     '/api',

@@ -62,11 +62,16 @@ export async function bookingAssets(tx: Scoped, bookingIds: string[]) {
   );
 }
 
+export type BookingHooks = {
+  onReschedule?: (tx: Scoped, booking: Booking) => Promise<void>;
+  onCancel?: (tx: Scoped, booking: Booking) => Promise<void>;
+};
+
 export class BookingsService {
   constructor(
     private readonly db: DataSource,
-    /** What other components do when a reservation is cancelled (rentals: let the deposit hold go). */
-    private readonly onCancel: (tx: Scoped, booking: Booking) => Promise<void> = async () => {},
+    /** What other components do when a reservation moves or is cancelled (rentals: re-price, let the deposit hold go). */
+    private readonly hooks: BookingHooks = {},
   ) {}
 
   /**
@@ -122,6 +127,7 @@ export class BookingsService {
         Object.assign(booking, { startsOn: input.startsOn, endsOn: input.endsOn, note: input.note ?? booking.note });
         await tx.save(Booking, booking);
         await tx.updateWhere(BookingItem, { bookingId: id }, { startsOn: input.startsOn, endsOn: input.endsOn });
+        await this.hooks.onReschedule?.(tx, booking);
         await recordAudit(tx, actor, 'booking.rescheduled', { type: 'booking', id }, { before, after: input });
         return this.load(tx, id);
       });
@@ -138,7 +144,7 @@ export class BookingsService {
       booking.state = 'cancelled';
       await tx.save(Booking, booking);
       await tx.updateWhere(BookingItem, { bookingId: id }, { active: false });
-      await this.onCancel(tx, booking);
+      await this.hooks.onCancel?.(tx, booking);
       await recordAudit(tx, actor, 'booking.cancelled', { type: 'booking', id });
       return this.load(tx, id);
     });

@@ -9,6 +9,25 @@ import { Kit } from '../fleet/kit.entity';
 import { ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { RateCard } from './rate-card.entity';
+import { Rental } from './rental.entity';
+import { BookingItem, type Booking } from '../bookings/booking.entity';
+import { DepositHold } from '../billing/deposit-hold.entity';
+
+/**
+ * A rental's booking moved: its prices follow the new dates (same items, the
+ * rate cards of today). The deposit follows too, unless a hold for the old
+ * amount is already on the card.
+ */
+export async function repriceRental(tx: Scoped, booking: Booking) {
+  if (!booking.rentalId) return;
+  const rental = await tx.get(Rental, { id: booking.rentalId }, 'That rental');
+  const items = (await tx.find(BookingItem, { where: { bookingId: booking.id } })).map((i) => i.assetId);
+  const kitMembers = booking.kitId ? (await tx.find(Asset, { where: { kitId: booking.kitId } })).map((a) => a.id) : [];
+  const quote = await priceRental(tx, { kitId: booking.kitId ?? undefined, assetIds: items.filter((id) => !kitMembers.includes(id)), startsOn: booking.startsOn, endsOn: booking.endsOn });
+  const held = await tx.count(DepositHold, { rentalId: rental.id, kind: 'hold', state: 'authorized' });
+  Object.assign(rental, { quote, depositMinor: held ? rental.depositMinor : quote.depositMinor });
+  await tx.save(Rental, rental);
+}
 
 export type PriceRequest = { kitId?: string; assetIds?: string[]; startsOn: string; endsOn: string };
 

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { availabilityQuery, bookingDatesPayload, bookingListQuery, bookingPayload, checklistPayload, jobPayload } from '../../shared/schemas/bookings';
 import { endpoint, paging } from '../http/endpoint';
+import { ruleBroken } from '../http/errors';
 import { sendDocument } from '../http/send-file';
 import type { BookingsService } from './bookings.service';
 import type { CalendarService } from './calendar';
@@ -18,9 +19,11 @@ export function bookingsRoutes({ bookings, handover, desk, jobs, calendar }: Ser
   endpoint(router, at, { method: 'get', path: '/bookings/today', summary: "The counter's day: checkouts, returns, late returns, blocked bookings", access: 'bookings.read' }, ({ actor }) => desk.today(actor));
   endpoint(router, at, { method: 'get', path: '/bookings/mine', summary: 'Kit I carry now and next', access: 'bookings.read' }, ({ actor }) => desk.mine(actor));
   endpoint(router, at, { method: 'get', path: '/bookings', summary: 'Bookings in a date window', access: 'bookings.read', query: bookingListQuery }, ({ actor, query }) => bookings.list(actor, query));
-  endpoint(router, at, { method: 'post', path: '/bookings', summary: 'Book a kit or assets for whole days (409 on overlap, 422 when an item may not go)', access: 'bookings.write', body: bookingPayload, status: 201 }, ({ actor, body }) =>
-    bookings.create(actor, body),
-  );
+  endpoint(router, at, { method: 'post', path: '/bookings', summary: 'Book a kit or assets for whole days (409 on overlap, 422 when an item may not go)', access: 'bookings.write', body: bookingPayload, status: 201 }, ({ actor, body }) => {
+    // A rental and its booking are made together, at quoted prices; a bare booking cannot claim one.
+    if (body.rentalId) throw ruleBroken('rental_booking', 'Book a rental with the rental itself (POST /api/rentals): it books the items and fixes the prices together.');
+    return bookings.create(actor, body);
+  });
   endpoint(router, at, { method: 'get', path: '/bookings/:id', summary: 'One booking with its items', access: 'bookings.read' }, ({ actor, params }) => bookings.get(actor, params.id));
   endpoint(router, at, { method: 'patch', path: '/bookings/:id', summary: 'Move a reserved booking (same rules)', access: 'bookings.write', body: bookingDatesPayload }, ({ actor, params, body }) =>
     bookings.reschedule(actor, params.id, body),

@@ -70,6 +70,10 @@ describe('a rental from quote to invoice', () => {
     expect(rental.quote).toMatchObject({ days: 13, subtotalMinor: 30_000, taxMinor: 5700, totalMinor: 35_700 });
     const booking = (await t.api.get(`/api/bookings/${rental.bookingId}`).set(bearer(manager))).body;
     expect(booking).toMatchObject({ purpose: 'rental', rentalId: rental.id, rental: { id: rental.id, number: rental.number, customerCompany: 'Quillon Test Rigs' } });
+    // A bare booking cannot claim a rental: the two are made together.
+    const claim = await t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [rental.items[0].id], startsOn: '2027-09-01', endsOn: '2027-09-02', rentalId: rental.id });
+    expect(claim.status).toBe(422);
+    expect(claim.body.error.code).toBe('rental_booking');
     expect((await t.api.post('/api/rentals').set(bearer(tech)).send({ customerId, assetIds: [rental.items[0].id], startsOn: '2027-06-01', endsOn: '2027-06-02' })).status).toBe(403);
     // The same SMRs for overlapping days: the bookings rules answer, unchanged.
     const clash = await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId, assetIds: rental.items.map((i) => i.id), startsOn: rental.endsOn, endsOn: rental.endsOn });

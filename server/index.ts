@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import cluster from 'node:cluster';
 import type { Server } from 'node:http';
+import type { DataSource } from 'typeorm';
 import { buildApp } from './app';
 import { readConfig, type Config } from './config';
 import { createDataSource } from './db/data-source';
@@ -23,10 +24,7 @@ async function serve(config: Config) {
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
-  if (fakes) {
-    const restored = await restoreHoldsOnLocalFake(db, new PaymentGateway(createPaymentClient(config)), `http://127.0.0.1:${fakes.paymentPort}`);
-    if (restored) console.log(`Placed ${restored} open deposit hold(s) again on the local payment fake.`);
-  }
+  if (fakes) await restoreLocalHolds(config, db, fakes.paymentPort);
   if (config.RUN_SCHEDULER) jobs.start();
   if (cluster.isPrimary || cluster.worker?.id === 1) console.log(`Nestkeeper is listening on http://${config.HOST}:${config.PORT}`);
 
@@ -45,6 +43,10 @@ async function serve(config: Config) {
 
 async function supervise(config: Config) {
   const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config, { paymentWebhookUrl: webhookUrl(config) }) : null;
+  if (fakes) {
+    const db = await createDataSource(config.DATABASE_URL, 1).initialize();
+    await restoreLocalHolds(config, db, fakes.paymentPort).finally(() => db.destroy());
+  }
   const workerEnv = { START_LOCAL_FAKES: 'false' };
   let stopping = false;
   for (let i = 0; i < config.WEB_CONCURRENCY; i += 1) cluster.fork(workerEnv);
@@ -59,6 +61,12 @@ async function supervise(config: Config) {
     await Promise.all(workers.map((w) => new Promise((resolve) => { w!.once('exit', resolve); w!.process.kill('SIGTERM'); })));
     await fakes?.close();
   });
+}
+
+/** The local payment fake starts empty: place the holds the database still counts on again (server/seed/demo-holds.ts). */
+async function restoreLocalHolds(config: Config, db: DataSource, paymentPort: number) {
+  const restored = await restoreHoldsOnLocalFake(db, new PaymentGateway(createPaymentClient(config)), `http://127.0.0.1:${paymentPort}`);
+  if (restored) console.log(`Placed ${restored} open deposit hold(s) again on the local payment fake.`);
 }
 
 /** Where the local payment fake delivers its signed events. */

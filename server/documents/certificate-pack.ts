@@ -36,8 +36,11 @@ function coverPdf(input: PackInput, found: Found[]) {
   return renderPdf({ size: 'A4', margin: 18 * MM }, (doc) => {
     heading(doc, input.firm.name, `Certificate pack — rental ${input.rentalNumber}`, [
       `${input.customerCompany} · ${calendarDate(input.startsOn)} to ${calendarDate(input.endsOn)}, both days included`,
-      'This pack lets you show your own auditors that the rented kit was in calibration for the rental. The certificates follow this page in the order listed.',
+      input.entries.length
+        ? 'This pack lets you show your own auditors that the rented kit was in calibration for the rental. The certificates follow this page in the order listed.'
+        : 'None of the rented items needs calibration (batteries, nests, cases and the like), so there are no certificates to include.',
     ]);
+    if (!input.entries.length) return;
     table(
       doc,
       [

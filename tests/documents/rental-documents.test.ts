@@ -216,4 +216,10 @@ describe('certificate pack PDF', () => {
     expect(pdfPageCount(pdf)).toBe(1);
     expectAll(pdfText(pdf), ['certificate could not be read', 'no certificate on file']);
   });
+
+  it('says so when none of the rented items needs calibration', async () => {
+    const pdf = await pack([]);
+    expect(pdfPageCount(pdf)).toBe(1);
+    expectAll(pdfText(pdf), ['None of the rented items needs calibration', 'no certificates to include']);
+  });
 });

@@ -99,7 +99,7 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
       checkedOutAt: at(p.from, 8), handedOverBy: manager.id, takenBy: customers[p.renter].billingContact, takenByUserId: null, checkoutChecklist: checklist(null),
       returnedAt: returnedOn ? at(p.back ?? p.to, 15) : null, receivedBy: returnedOn ? manager.id : null, broughtBackBy: returnedOn ? customers[p.renter].billingContact : null, returnChecklist: returnedOn ? checklist(damaged) : null,
     });
-    const rental = await tx.insert(Rental, { number: `R-${padded(await nextNumber(tx, 'rental'))}`, customerId: customers[p.renter].id, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: 'pm_card_visa', note: null, createdBy: clerk.id });
+    const rental = await tx.insert(Rental, { number: `R-${padded(await nextNumber(tx, 'rental'))}`, customerId: customers[p.renter].id, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: 'pm_card_visa', note: null, createdBy: clerk.id, createdAt: at(p.from - 6, 10) });
     await tx.updateWhere(Booking, { id: booking.id }, { rentalId: rental.id });
     await tx.insertMany(BookingItem, items.map((a) => ({ bookingId: booking.id, assetId: a.id, startsOn, endsOn, active: out })));
     await tx.insertMany(CustodyEvent, items.map((a) => ({ assetId: a.id, kind: 'checked_out' as const, actorUserId: manager.id, holder: customers[p.renter].company, location: customers[p.renter].address, bookingId: booking.id, note: null })));

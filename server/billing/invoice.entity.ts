@@ -83,6 +83,10 @@ export class Invoice extends OrgOwned {
   @Column({ type: 'jsonb' })
   customer: InvoiceView['customer'];
 
+  /** The firm's own address, tax number and payment terms as they were on the day of issue. */
+  @Column({ type: 'jsonb', nullable: true })
+  issuer: InvoiceView['issuer'];
+
   /** Why a credit note was issued. */
   @Column({ type: 'text', nullable: true })
   reason: string | null;

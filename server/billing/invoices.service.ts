@@ -148,13 +148,14 @@ export class InvoicesService {
     return kind === 'invoice' ? `${year}-${padded(n)}` : `CN-${year}-${padded(n)}`;
   }
 
-  private async write(tx: Scoped, actor: Actor, v: Omit<Invoice, 'id' | 'organizationId' | 'issuedOn' | 'issuedAt' | 'issuedBy' | 'customer' | 'customerId'> & { customer: Customer }) {
+  private async write(tx: Scoped, actor: Actor, v: Omit<Invoice, 'id' | 'organizationId' | 'issuedOn' | 'issuedAt' | 'issuedBy' | 'customer' | 'customerId' | 'issuer'> & { customer: Customer }) {
     const ctx = await loadOrgContext(tx);
     const { customer, ...rest } = v;
     const invoice = await tx.insert(Invoice, {
       ...rest,
       customerId: customer.id,
       customer: { company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail, address: customer.address, taxNumber: customer.taxNumber },
+      issuer: ctx.issuer,
       issuedOn: ctx.today,
       issuedAt: new Date(),
       issuedBy: actor.userId,
@@ -187,7 +188,7 @@ export class InvoicesService {
 
   private async view(tx: Scoped, invoice: Invoice): Promise<InvoiceView> {
     const [summary] = await this.summaries(tx, [invoice]);
-    return { ...summary, lines: invoice.lines, taxRateBasisPoints: invoice.taxRateBasisPoints, customer: invoice.customer, issuedAt: invoice.issuedAt.toISOString() };
+    return { ...summary, issuer: invoice.issuer, lines: invoice.lines, taxRateBasisPoints: invoice.taxRateBasisPoints, customer: invoice.customer, issuedAt: invoice.issuedAt.toISOString() };
   }
 
   private async render(tx: Scoped, invoice: InvoiceView) {

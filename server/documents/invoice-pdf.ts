@@ -1,5 +1,5 @@
 import type { InvoiceView } from '../../shared/billing/views';
-import { calendarDate, facts, heading, money, section, table, taxRateText, totals } from './document-layout';
+import { bullets, calendarDate, facts, heading, money, section, table, taxRateText, totals } from './document-layout';
 import { MM, renderPdf } from './pdf';
 
 /** What was paid and what is left, after the invoice totals; a credit note only states what it gives back. */
@@ -19,7 +19,12 @@ export function invoicePdf(input: { firm: { name: string; timeZone: string }; in
   const credit = invoice.kind === 'credit_note';
   const title = `${credit ? 'Credit note' : 'Invoice'} ${invoice.number}`;
   return renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: title } }, (doc) => {
-    heading(doc, firm.name, title, [`Issue date ${calendarDate(invoice.issuedOn)}`]);
+    const issuer = invoice.issuer;
+    heading(doc, firm.name, title, [
+      ...(issuer?.address ? [issuer.address] : []),
+      ...(issuer?.taxNumber ? [`Tax number ${issuer.taxNumber}`] : []),
+      `Issue date ${calendarDate(invoice.issuedOn)}`,
+    ]);
     if (credit) {
       facts(doc, [
         ['Corrects invoice', invoice.correctsNumber],
@@ -53,5 +58,9 @@ export function invoicePdf(input: { firm: { name: string; timeZone: string }; in
       { label: 'Total', value: money(invoice.totalMinor, currency), strong: true },
       ...settlementRows(invoice),
     ]);
+    if (issuer?.paymentTerms && !credit) {
+      section(doc, 'Payment');
+      bullets(doc, [issuer.paymentTerms]);
+    }
   });
 }

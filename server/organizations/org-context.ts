@@ -4,7 +4,7 @@ import type { DecisionRule } from '../../shared/checks/decision';
 import type { Tolerance } from '../../shared/checks/tolerance';
 import { defaultTolerances, type CheckKind } from '../../shared/schemas/checks';
 import type { Scoped } from '../db/scoped';
-import type { Organization } from './organization.entity';
+import type { InvoiceIssuer, Organization } from './organization.entity';
 
 /** The organization facts most rules need: its calendar "today", due-soon window, currency. */
 export type OrgContext = {
@@ -20,6 +20,7 @@ export type OrgContext = {
   intervalPolicy: IntervalPolicy;
   taxRateBasisPoints: number;
   depositPolicy: { percent: number; minMinor: number; maxMinor: number };
+  issuer: InvoiceIssuer;
 };
 
 /** Turnaround when a provider is not in the settings (common practice: about two weeks). */
@@ -43,5 +44,6 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
     taxRateBasisPoints: org.settings.taxRateBasisPoints ?? 0,
     // Common practice starting point: a tenth of the replacement value, within sensible bounds.
     depositPolicy: org.settings.depositPolicy ?? { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 },
+    issuer: org.settings.issuer ?? { address: '', taxNumber: '', paymentTerms: '' },
   };
 }

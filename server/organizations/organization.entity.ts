@@ -16,7 +16,11 @@ export type OrganizationSettings = {
   /** Tax on rentals in basis points (1 900 = 19 %). */
   taxRateBasisPoints: number;
   depositPolicy: { percent: number; minMinor: number; maxMinor: number };
+  /** The firm as it must appear on its invoices: address, tax number, how to pay. */
+  issuer: InvoiceIssuer;
 };
+
+export type InvoiceIssuer = { address: string; taxNumber: string; paymentTerms: string };
 
 @Entity({ name: 'organizations' })
 export class Organization {

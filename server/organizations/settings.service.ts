@@ -17,6 +17,7 @@ const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>) => ({
   depositPolicy: ctx.depositPolicy,
   providers: ctx.providers,
   intervalPolicy: ctx.intervalPolicy,
+  issuer: ctx.issuer,
 });
 
 export const getSettings = (db: DataSource, actor: Actor) => inOrganization(db, actor.organizationId, async (tx) => view(await loadOrgContext(tx)));
@@ -32,6 +33,7 @@ export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<type
     if (patch.depositPolicy) org.settings = { ...org.settings, depositPolicy: patch.depositPolicy };
     if (patch.providers) org.settings = { ...org.settings, providers: patch.providers };
     if (patch.intervalPolicy) org.settings = { ...org.settings, intervalPolicy: patch.intervalPolicy };
+    if (patch.issuer) org.settings = { ...org.settings, issuer: patch.issuer };
     if (patch.tolerances) org.settings = { ...org.settings, tolerances: { ...org.settings.tolerances, ...patch.tolerances } };
     await tx.manager.save(Organization, org);
     await recordAudit(tx, actor, 'settings.updated', { type: 'organization', id: org.id }, { before, after: patch });

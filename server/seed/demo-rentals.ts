@@ -28,6 +28,9 @@ const renters = [
   { company: 'Quarrington Rail Fabrication', billingContact: 'Works office', billingEmail: 'office@quarrington-rail.test', address: 'Quarrington Sidings 2', taxNumber: 'QR-5520-0418' },
 ];
 
+/** The demo firm's own invoice details (invented). */
+const issuer = { address: 'Forge Lane 12, 41877 Wrenhallow', taxNumber: 'WH-7781-0042', paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.' };
+
 /** Day, week (7 days), month (28 days) and late fee per day, in cents (invented prices). */
 const rates: Record<AssetType, [number, number, number, number]> = {
   tracker: [42_000, 210_000, 680_000, 8000],
@@ -60,7 +63,7 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
   const clerk = people.find((p) => p.role === 'billing')!;
   const manager = people.find((p) => p.role === 'manager')!;
   await tx.manager.update(Organization, { id: tx.organizationId }, {
-    settings: () => `settings || '${JSON.stringify({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 } })}'::jsonb`,
+    settings: () => `settings || '${JSON.stringify({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 }, issuer })}'::jsonb`,
   });
   const customers: Customer[] = [];
   for (const r of renters) customers.push(await tx.insert(Customer, { ...r, notes: null, paymentCustomerId: null }));
@@ -140,7 +143,7 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
     const issuedOn = addDays(today, (p.back ?? p.to) + 1);
     const customer = customers[p.renter];
     const snapshot = { company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail, address: customer.address, taxNumber: customer.taxNumber };
-    const base = { rentalId: rental.id, customerId: customer.id, issuedBy: clerk.id, currency: quote.currency, taxRateBasisPoints: quote.taxRateBasisPoints, customer: snapshot };
+    const base = { rentalId: rental.id, customerId: customer.id, issuedBy: clerk.id, currency: quote.currency, taxRateBasisPoints: quote.taxRateBasisPoints, customer: snapshot, issuer };
     const invoice = await tx.insert(Invoice, {
       ...base, kind: 'invoice', number: `${issuedOn.slice(0, 4)}-${padded(await nextNumber(tx, `invoice:${issuedOn.slice(0, 4)}`))}`, correctsInvoiceId: null, issuedOn, issuedAt: at((p.back ?? p.to) + 1, 10),
       lines: s.lines, subtotalMinor: s.subtotalMinor, taxMinor: s.taxMinor, totalMinor: s.totalMinor, depositCapturedMinor: s.depositCapturedMinor, cardChargedMinor: 0, balanceMinor: s.balanceMinor, reason: null,

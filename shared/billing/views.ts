@@ -104,6 +104,8 @@ export type InvoiceSummary = {
 };
 
 export type InvoiceView = InvoiceSummary & {
+  /** Who issued it: the firm's address, tax number and payment terms on the day of issue (null on invoices from before they were kept). */
+  issuer: { address: string; taxNumber: string; paymentTerms: string } | null;
   lines: InvoiceLine[];
   taxRateBasisPoints: number;
   customer: { company: string; billingContact: string | null; billingEmail: string; address: string | null; taxNumber: string | null };

@@ -130,6 +130,11 @@ export const organizationSettingsPayload = z
       .object({ percent: z.number().min(0).max(100), minMinor: z.number().int().min(0), maxMinor: z.number().int().min(0) })
       .refine((p) => p.minMinor <= p.maxMinor, { message: 'the minimum must not exceed the maximum', path: ['maxMinor'] }),
     tolerances: z.partialRecord(z.enum(checkKinds), tolerancePayload),
+    issuer: z.object({
+      address: z.string().trim().max(400),
+      taxNumber: z.string().trim().max(40),
+      paymentTerms: z.string().trim().max(600),
+    }),
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
     timeZone: z.string().refine((tz) => {
       try {

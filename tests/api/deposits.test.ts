@@ -157,6 +157,10 @@ describe('a rental from quote to invoice', () => {
     const text = pdfText(pdf.body as Buffer);
     expect(text).toContain(invoiceNo);
     expect(text).toContain('€357.00');
+    // The firm's own details (demo settings) are printed, and kept on the invoice: a later change leaves it as issued.
+    expect(text).toContain('Tax number WH-7781-0042');
+    await t.api.patch('/api/settings').set(bearer(owner)).send({ issuer: { address: 'Mill Yard 3, Wrenhallow', taxNumber: 'WH-0000-0001', paymentTerms: 'Within 30 days.' } });
+    expect((await t.api.get(`/api/invoices/${issued.body.id}`).set(bearer(billing))).body.issuer).toMatchObject({ taxNumber: 'WH-7781-0042' });
     expect((await mailTo('accounts@quillon.test')).at(-1).files).toEqual([`invoice-${invoiceNo}.pdf`]);
     const tooMuch = await t.api.post(`/api/invoices/${issued.body.id}/credit-note`).set(bearer(billing)).send({ reason: 'Goodwill', amountMinor: 48_001 });
     expect(tooMuch.status).toBe(422);

@@ -91,7 +91,15 @@ describe('the billing desk in a real browser', () => {
     await form.getByLabel('Deposit at most (EUR)').fill('3000');
     await form.getByRole('button', { name: 'Save rental terms' }).click();
     await form.getByText(/^Saved\./).waitFor();
+    const details = page.getByRole('form', { name: 'Invoice details' });
+    await details.getByLabel('Address on invoices').fill('');
+    await details.getByRole('button', { name: 'Save invoice details' }).click();
+    await details.getByText('Invoices must say where the firm is.').waitFor();
+    await details.getByLabel('Address on invoices').fill('Mill Yard 3, 41877 Wrenhallow');
+    await details.getByRole('button', { name: 'Save invoice details' }).click();
+    await details.getByText(/^Saved\./).waitFor();
     const api = await apiAs('owner@demo.test');
+    expect((await api('/settings')).body.issuer).toMatchObject({ address: 'Mill Yard 3, 41877 Wrenhallow', taxNumber: 'WH-7781-0042' });
     const [smr] = (await api('/assets?type=smr&limit=1')).body.items;
     const today = todayIn('Europe/Berlin');
     const quote = (await api(`/quotes?assetIds=${smr.id}&startsOn=${addDays(today, 60)}&endsOn=${addDays(today, 60)}`)).body;

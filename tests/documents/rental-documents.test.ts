@@ -105,6 +105,7 @@ function invoice(over: Partial<InvoiceView> = {}): InvoiceView {
     id: 'i1',
     kind: 'invoice',
     number: 'INV-2025-0042',
+    issuer: { address: 'Forge Lane 12, Wrenhallow', taxNumber: 'WH-7781-0042', paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.' },
     issuedOn: '2025-03-14',
     issuedAt: '2025-03-14T10:00:00Z',
     rentalId: 'r1',
@@ -146,6 +147,10 @@ describe('invoice PDF', () => {
       '€4,046.00',
       'Deposit captured €1,500.00',
       'Balance due €546.00',
+      // The issuing firm's own details, as kept on the invoice.
+      'Forge Lane 12, Wrenhallow',
+      'Tax number WH-7781-0042',
+      'Payment within 14 days of the invoice date',
     ]);
   });
 

@@ -6,6 +6,7 @@ import { useSettings } from '../../features/settings/api/get-settings';
 import { CheckRulesForm } from '../../features/settings/components/check-rules-form';
 import { IntervalPolicyForm } from '../../features/settings/components/interval-policy-form';
 import { ProvidersForm } from '../../features/settings/components/providers-form';
+import { InvoiceIssuerForm } from '../../features/settings/components/invoice-issuer-form';
 import { RentalTermsForm } from '../../features/settings/components/rental-terms-form';
 import { SettingsForm } from '../../features/settings/components/settings-form';
 
@@ -34,6 +35,9 @@ export default function SettingsRoute() {
           </SettingsSection>
           <SettingsSection title="Rental terms">
             <RentalTermsForm settings={settings.data} />
+          </SettingsSection>
+          <SettingsSection title="Invoice details">
+            <InvoiceIssuerForm settings={settings.data} />
           </SettingsSection>
         </div>
       ) : null}

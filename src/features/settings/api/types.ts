@@ -34,4 +34,13 @@ export interface OrganizationSettings {
   /** Tax on rentals in basis points (1 % = 100). */
   taxRateBasisPoints?: number;
   depositPolicy?: DepositPolicy;
+  /** The firm as its invoices name it (absent from older servers). */
+  issuer?: InvoiceIssuer;
+}
+
+/** What every invoice must say about who issues it; kept on each invoice as it was on the day of issue. */
+export interface InvoiceIssuer {
+  address: string;
+  taxNumber: string;
+  paymentTerms: string;
 }

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { settingsKeys } from './keys';
 import type { CheckKind, DecisionRule, Tolerance } from '../../../lib/checks';
-import type { CalibrationProvider, DepositPolicy, IntervalPolicy, OrganizationSettings } from './types';
+import type { CalibrationProvider, DepositPolicy, IntervalPolicy, InvoiceIssuer, OrganizationSettings } from './types';
 
 export interface UpdateSettingsInput {
   dueSoonDays?: number;
@@ -16,6 +16,7 @@ export interface UpdateSettingsInput {
   /** Tax on rentals in basis points (19 % = 1900). */
   taxRateBasisPoints?: number;
   depositPolicy?: DepositPolicy;
+  issuer?: InvoiceIssuer;
 }
 
 export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettings> {

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { capturePayload, creditNotePayload, depositPayload, invoiceListQuery, revenueQuery, utilisationQuery } from '../../shared/schemas/rentals';
+import { capturePayload, creditNotePayload, depositPayload, invoiceListQuery, invoicePaymentPayload, revenueQuery, utilisationQuery } from '../../shared/schemas/rentals';
 import { endpoint } from '../http/endpoint';
 import { sendDocument } from '../http/send-file';
 import type { BillingReportsService } from './billing-reports.service';
@@ -27,6 +27,7 @@ export function billingRoutes({ deposits, invoices, reports }: BillingServices):
     const { pdf, number, kind } = await invoices.pdf(actor, params.id);
     sendDocument(res, pdf, 'application/pdf', `${kind === 'invoice' ? 'invoice' : 'credit-note'}-${number}.pdf`, true);
   });
+  endpoint(router, at, { method: 'post', path: '/invoices/:id/payments', summary: 'Record money received against an invoice', access: 'rentals.write', body: invoicePaymentPayload, status: 201 }, ({ actor, params, body }) => invoices.recordPayment(actor, params.id, body));
   endpoint(router, at, { method: 'post', path: '/invoices/:id/credit-note', summary: 'Correct an invoice with a credit note', access: 'rentals.write', body: creditNotePayload, status: 201 }, ({ actor, params, body }) => invoices.creditNote(actor, params.id, body));
   endpoint(router, at, { method: 'get', path: '/billing/revenue', summary: 'Net invoiced per kit and month', access: 'reports.read', query: revenueQuery }, ({ actor, query }) => reports.revenue(actor, query));
   endpoint(router, at, { method: 'get', path: '/billing/utilisation', summary: 'Booked days over days in the period, per kit', access: 'reports.read', query: utilisationQuery }, ({ actor, query }) => reports.utilisation(actor, query));

@@ -1,4 +1,4 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { InvoiceLine, InvoiceView } from '../../shared/billing/views';
 import { OrgOwned } from '../db/org-owned';
 import { Customer } from '../rentals/customer.entity';
@@ -103,4 +103,35 @@ export class DocumentCounter {
 
   @Column({ name: 'last_number', type: 'integer' })
   lastNumber: number;
+}
+
+/** Money received against an invoice (a bank transfer, say). Append-only like the invoice itself. */
+@Entity({ name: 'invoice_payments' })
+@Index(['organizationId', 'invoiceId'])
+export class InvoicePayment extends OrgOwned {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'invoice_id', type: 'uuid' })
+  invoiceId: string;
+
+  @ManyToOne(() => Invoice, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'invoice_id' })
+  invoice?: Invoice;
+
+  @Column({ name: 'amount_minor', type: 'integer' })
+  amountMinor: number;
+
+  @Column({ name: 'received_on', type: 'date' })
+  receivedOn: string;
+
+  /** The payer's reference or the bank statement line. */
+  @Column({ type: 'text' })
+  reference: string;
+
+  @Column({ name: 'recorded_by', type: 'uuid' })
+  recordedBy: string;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
 }

@@ -4,7 +4,7 @@ import Papa from 'papaparse';
 import { taxMinor } from '../../shared/billing/quote';
 import { formatMoney } from '../../shared/billing/money';
 import type { InvoiceView } from '../../shared/billing/views';
-import type { creditNotePayload, invoiceListQuery } from '../../shared/schemas/rentals';
+import type { creditNotePayload, invoiceListQuery, invoicePaymentPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
 import { Booking } from '../bookings/booking.entity';
 import type { Scoped } from '../db/scoped';
@@ -16,7 +16,7 @@ import { loadOrgContext } from '../organizations/org-context';
 import { Customer } from '../rentals/customer.entity';
 import { invoiceSummaries, loadRentalView } from '../rentals/rental-view';
 import { lockRental } from './deposits.service';
-import { Invoice } from './invoice.entity';
+import { Invoice, InvoicePayment } from './invoice.entity';
 import { nextNumber, padded } from './numbering';
 
 /**
@@ -93,6 +93,21 @@ export class InvoicesService {
     });
   }
 
+  /** Money received against an invoice (a transfer, say); never more than is outstanding. */
+  recordPayment(actor: Actor, invoiceId: string, input: z.infer<typeof invoicePaymentPayload>) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const invoice = await tx.get(Invoice, { id: invoiceId, kind: 'invoice' }, 'That invoice');
+      await lockRental(tx, invoice.rentalId);
+      const { outstandingMinor } = (await this.view(tx, invoice));
+      if (input.amountMinor > outstandingMinor) {
+        throw ruleBroken('overpaid', `Invoice ${invoice.number} has ${formatMoney(outstandingMinor, invoice.currency, 'en-GB')} outstanding; record at most that.`, { outstandingMinor });
+      }
+      const payment = await tx.insert(InvoicePayment, { invoiceId, amountMinor: input.amountMinor, receivedOn: input.receivedOn, reference: input.reference, recordedBy: actor.userId });
+      await recordAudit(tx, actor, 'invoice.payment_recorded', { type: 'invoice', id: invoiceId }, { paymentId: payment.id, amountMinor: input.amountMinor, receivedOn: input.receivedOn, reference: input.reference });
+      return this.view(tx, invoice);
+    });
+  }
+
   list(actor: Actor, q: z.infer<typeof invoiceListQuery>) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const qb = tx.select(Invoice, 'i').orderBy('i.issued_at', 'DESC').addOrderBy('i.number', 'DESC');
@@ -138,6 +153,8 @@ export class InvoicesService {
         card_charged_minor: i.cardChargedMinor,
         balance_minor: i.balanceMinor,
         credited_minor: i.creditedMinor,
+        received_minor: i.receivedMinor,
+        outstanding_minor: i.outstandingMinor,
       })),
     );
   }
@@ -179,16 +196,26 @@ export class InvoicesService {
     return view;
   }
 
-  /** Summaries of `rows`, each knowing its corrected invoice's number and what was credited against it. */
+  /** Summaries of `rows`, each knowing its corrected invoice's number, what was credited against it and what was received. */
   private async summaries(tx: Scoped, rows: Invoice[]) {
     if (!rows.length) return [];
     const siblings = await tx.find(Invoice, { where: { rentalId: In([...new Set(rows.map((r) => r.rentalId))]) } });
-    return rows.map((r) => invoiceSummaries(siblings.filter((i) => i.rentalId === r.rentalId), r.customer.company).find((s) => s.id === r.id)!);
+    const payments = await tx.find(InvoicePayment, { where: { invoiceId: In(siblings.map((i) => i.id)) } });
+    return rows.map((r) => invoiceSummaries(siblings.filter((i) => i.rentalId === r.rentalId), r.customer.company, payments).find((s) => s.id === r.id)!);
   }
 
   private async view(tx: Scoped, invoice: Invoice): Promise<InvoiceView> {
     const [summary] = await this.summaries(tx, [invoice]);
-    return { ...summary, issuer: invoice.issuer, lines: invoice.lines, taxRateBasisPoints: invoice.taxRateBasisPoints, customer: invoice.customer, issuedAt: invoice.issuedAt.toISOString() };
+    const payments = await tx.find(InvoicePayment, { where: { invoiceId: invoice.id }, order: { receivedOn: 'ASC', createdAt: 'ASC' } });
+    return {
+      ...summary,
+      payments: payments.map((p) => ({ id: p.id, amountMinor: p.amountMinor, receivedOn: p.receivedOn, reference: p.reference, createdAt: p.createdAt.toISOString() })),
+      issuer: invoice.issuer,
+      lines: invoice.lines,
+      taxRateBasisPoints: invoice.taxRateBasisPoints,
+      customer: invoice.customer,
+      issuedAt: invoice.issuedAt.toISOString(),
+    };
   }
 
   private async render(tx: Scoped, invoice: InvoiceView) {

@@ -13,7 +13,7 @@ import { Customer } from '../rentals/customer.entity';
 import { RateCard } from '../rentals/rate-card.entity';
 import { Rental } from '../rentals/rental.entity';
 import { DepositHold } from '../billing/deposit-hold.entity';
-import { DocumentCounter, Invoice } from '../billing/invoice.entity';
+import { DocumentCounter, Invoice, InvoicePayment } from '../billing/invoice.entity';
 import { PaymentEvent } from '../billing/payment-event.entity';
 import { OutboxAttachment } from '../notifications/outbox-attachment.entity';
 import { Hold } from '../holds/hold.entity';
@@ -25,4 +25,4 @@ import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity the data source knows; a new component adds its own here. */
-export const entities = [Organization, User, LoginAttempt, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto, Job, Booking, BookingItem, CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem, Customer, RateCard, Rental, DepositHold, Invoice, DocumentCounter, PaymentEvent, OutboxAttachment];
+export const entities = [Organization, User, LoginAttempt, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, Asset, Kit, CustodyEvent, FieldCheck, Hold, Incident, IncidentPhoto, Job, Booking, BookingItem, CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem, Customer, RateCard, Rental, DepositHold, Invoice, InvoicePayment, DocumentCounter, PaymentEvent, OutboxAttachment];

@@ -4,7 +4,7 @@ import type { DepositHoldView, DepositState, InvoiceSummary, RentalState, Rental
 import { todayIn } from '../../shared/calibration/due-date';
 import { Booking, BookingItem } from '../bookings/booking.entity';
 import { DepositHold } from '../billing/deposit-hold.entity';
-import { Invoice } from '../billing/invoice.entity';
+import { Invoice, InvoicePayment } from '../billing/invoice.entity';
 import type { Scoped } from '../db/scoped';
 import { Asset } from '../fleet/asset.entity';
 import { Incident } from '../incidents/incident.entity';
@@ -36,38 +36,38 @@ export function depositState(holds: DepositHold[]): { state: DepositState; hold:
   return { state: current.state as DepositState, hold: current };
 }
 
-export const invoiceSummary = (i: Invoice, correctsNumber: string | null, creditedMinor: number, customerCompany: string): InvoiceSummary => ({
-  id: i.id,
-  kind: i.kind,
-  number: i.number,
-  issuedOn: i.issuedOn,
-  rentalId: i.rentalId,
-  customerId: i.customerId,
-  customerCompany,
-  correctsInvoiceId: i.correctsInvoiceId,
-  correctsNumber,
-  currency: i.currency,
-  subtotalMinor: i.subtotalMinor,
-  taxMinor: i.taxMinor,
-  totalMinor: i.totalMinor,
-  depositCapturedMinor: i.depositCapturedMinor,
-  cardChargedMinor: i.cardChargedMinor,
-  balanceMinor: i.balanceMinor,
-  creditedMinor,
-  reason: i.reason,
-});
-
-/** Invoices of a rental with their credit notes' totals. */
-export function invoiceSummaries(invoices: Invoice[], customerCompany: string): InvoiceSummary[] {
+/**
+ * Invoices of a rental, each with what credit notes took off it and what was
+ * received against it; what is outstanding follows from those.
+ */
+export function invoiceSummaries(invoices: Invoice[], customerCompany: string, payments: Pick<InvoicePayment, 'invoiceId' | 'amountMinor'>[]): InvoiceSummary[] {
   const byId = new Map(invoices.map((i) => [i.id, i]));
-  return invoices.map((i) =>
-    invoiceSummary(
-      i,
-      i.correctsInvoiceId ? (byId.get(i.correctsInvoiceId)?.number ?? null) : null,
-      invoices.filter((c) => c.correctsInvoiceId === i.id).reduce((s, c) => s + c.subtotalMinor, 0),
+  return invoices.map((i) => {
+    const credits = invoices.filter((c) => c.correctsInvoiceId === i.id);
+    const receivedMinor = payments.filter((p) => p.invoiceId === i.id).reduce((s, p) => s + p.amountMinor, 0);
+    return {
+      id: i.id,
+      kind: i.kind,
+      number: i.number,
+      issuedOn: i.issuedOn,
+      rentalId: i.rentalId,
+      customerId: i.customerId,
       customerCompany,
-    ),
-  );
+      correctsInvoiceId: i.correctsInvoiceId,
+      correctsNumber: i.correctsInvoiceId ? (byId.get(i.correctsInvoiceId)?.number ?? null) : null,
+      currency: i.currency,
+      subtotalMinor: i.subtotalMinor,
+      taxMinor: i.taxMinor,
+      totalMinor: i.totalMinor,
+      depositCapturedMinor: i.depositCapturedMinor,
+      cardChargedMinor: i.cardChargedMinor,
+      balanceMinor: i.balanceMinor,
+      creditedMinor: credits.reduce((s, c) => s + c.subtotalMinor, 0),
+      receivedMinor,
+      outstandingMinor: i.kind === 'invoice' ? i.balanceMinor - credits.reduce((s, c) => s + c.totalMinor, 0) - receivedMinor : 0,
+      reason: i.reason,
+    };
+  });
 }
 
 export const rentalState = (booking: Booking, invoiced: boolean): RentalState => (booking.state === 'cancelled' ? 'cancelled' : invoiced ? 'invoiced' : booking.state);
@@ -119,7 +119,7 @@ export async function loadRentalView(tx: Scoped, rental: Rental): Promise<Rental
       depositCapturedMinor: sum('hold'),
       cardChargedMinor: sum('charge'),
     }),
-    invoices: invoiceSummaries(invoices, customer.company),
+    invoices: invoiceSummaries(invoices, customer.company, await tx.find(InvoicePayment, { where: { invoiceId: In(invoices.map((i) => i.id)) } })),
     createdAt: rental.createdAt.toISOString(),
   };
 }

@@ -98,12 +98,19 @@ export type InvoiceSummary = {
   depositCapturedMinor: number;
   cardChargedMinor: number;
   balanceMinor: number;
-  /** Credit notes already issued against an invoice (0 for credit notes). */
+  /** Credit notes already issued against an invoice, net (0 for credit notes). */
   creditedMinor: number;
+  /** Payments recorded against an invoice (bank transfers and the like; 0 for credit notes). */
+  receivedMinor: number;
+  /** What the customer still owes: the balance less credit notes (with their tax) and payments received. */
+  outstandingMinor: number;
   reason: string | null;
 };
 
+export type InvoicePaymentView = { id: string; amountMinor: number; receivedOn: string; reference: string; createdAt: string };
+
 export type InvoiceView = InvoiceSummary & {
+  payments: InvoicePaymentView[];
   /** Who issued it: the firm's address, tax number and payment terms on the day of issue (null on invoices from before they were kept). */
   issuer: { address: string; taxNumber: string; paymentTerms: string } | null;
   lines: InvoiceLine[];

@@ -74,6 +74,12 @@ export const creditNotePayload = z.object({
   amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing').max(1e9).optional(),
 });
 
+export const invoicePaymentPayload = z.object({
+  amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing').max(1e9),
+  receivedOn: isoDate,
+  reference: z.string().trim().min(2, 'say where it came from (a bank reference, say)').max(200),
+});
+
 export const invoiceListQuery = z.object({
   kind: z.enum(['invoice', 'credit_note']).optional(),
   customerId: z.uuid().optional(),

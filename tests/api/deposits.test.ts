@@ -171,6 +171,16 @@ describe('a rental from quote to invoice', () => {
     expect((await t.api.get(`/api/invoices/${issued.body.id}`).set(bearer(billing))).body.creditedMinor).toBe(3000);
     // Invoices are never edited: the database refuses.
     await expect(t.db.query(`UPDATE invoices SET total_minor = 0 WHERE id = $1`, [issued.body.id])).rejects.toThrow();
+    // 357.00 due less the credit note's 35.70 = 321.30 outstanding; a transfer is recorded against it, never more than is owed.
+    expect((await t.api.get(`/api/invoices/${issued.body.id}`).set(bearer(billing))).body).toMatchObject({ receivedMinor: 0, outstandingMinor: 32_130 });
+    const over = await t.api.post(`/api/invoices/${issued.body.id}/payments`).set(bearer(billing)).send({ amountMinor: 32_131, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' });
+    expect(over.status).toBe(422);
+    expect(over.body.error.code).toBe('overpaid');
+    expect((await t.api.post(`/api/invoices/${issued.body.id}/payments`).set(bearer(tech)).send({ amountMinor: 100, receivedOn: '2027-02-03', reference: 'x y' })).status).toBe(403);
+    const paid = await t.api.post(`/api/invoices/${issued.body.id}/payments`).set(bearer(billing)).send({ amountMinor: 32_130, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' });
+    expect(paid.status).toBe(201);
+    expect(paid.body).toMatchObject({ receivedMinor: 32_130, outstandingMinor: 0, payments: [expect.objectContaining({ amountMinor: 32_130, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' })] });
+    await expect(t.db.query(`DELETE FROM invoice_payments`)).rejects.toThrow();
     const csv = await t.api.get('/api/invoices/export.csv').set(bearer(billing));
     expect(csv.text.split('\r\n')[0]).toContain('number,kind,issued_on');
     expect(csv.text).toContain(creditNo);

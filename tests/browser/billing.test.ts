@@ -75,6 +75,14 @@ describe('the billing desk in a real browser', () => {
     expect(text).toContain(number);
     // 150.00 rental + 180.00 repair = 330.00 net, 392.70 with tax; 214.20 was taken from the hold: 178.50 due.
     expect(text).toContain('€178.50');
+
+    // The customer pays the balance by transfer: the clerk records it and nothing is left outstanding.
+    await page.getByRole('button', { name: 'Record a payment' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Record a payment' });
+    await expect.poll(() => dialog.getByLabel('Amount received (EUR)').inputValue()).toMatch(/^178\.50?$/);
+    await dialog.getByLabel('Reference').fill('Transfer OMD-20931');
+    await dialog.getByRole('button', { name: 'Record payment' }).click();
+    await expect.poll(() => page.locator('main').innerText(), { timeout: 10_000 }).toMatch(/nothing outstanding/);
     await context.close();
   }, 120_000);
 

@@ -1,3 +1,4 @@
+import { format } from 'date-fns';
 import { useState } from 'react';
 import { Button, buttonClasses } from '../../../components/button';
 import { DownloadIcon } from '../../../components/icons';
@@ -10,6 +11,7 @@ import { useIssueInvoice } from '../api/issue-invoice';
 import type { InvoiceLine, InvoiceSummary, RentalView } from '../api/types';
 import { ChargesEditor } from './charges-editor';
 import { CreditNoteDialog } from './credit-note-dialog';
+import { PaymentDialog } from './payment-dialog';
 import { MoneyLines } from './money-lines';
 
 const lineKindWords: Record<InvoiceLine['kind'], string> = { rental: 'Rental', late: 'Late days', damage: 'Damage or loss', credit: 'Credit' };
@@ -21,10 +23,11 @@ function notReady(rental: RentalView): string | null {
   return null;
 }
 
-/** What the rental comes to, the invoice and its credit notes. */
+/** What the rental comes to, the invoice, what was received against it and its credit notes. */
 export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCharge: boolean }) {
   const issue = useIssueInvoice();
   const [creditOpen, setCreditOpen] = useState(false);
+  const [paymentOpen, setPaymentOpen] = useState(false);
   const { settlement, currency } = rental;
   const invoice = rental.invoices.find((i) => i.kind === 'invoice');
   const creditNotes = rental.invoices.filter((i) => i.kind === 'credit_note');
@@ -51,12 +54,19 @@ export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCha
           <div className="flex flex-wrap items-center gap-3">
             <p>
               Invoice <span className="font-mono font-semibold">{invoice.number}</span>, issued {formatCalendarDate(invoice.issuedOn)}
-              {invoice.creditedMinor ? `; ${formatMoney(invoice.creditedMinor, currency)} credited` : ''}.
+              {invoice.creditedMinor ? `; ${formatMoney(invoice.creditedMinor, currency)} credited` : ''}
+              {invoice.receivedMinor ? `; ${formatMoney(invoice.receivedMinor, currency)} received` : ''}
+              {invoice.outstandingMinor > 0 ? `; ${formatMoney(invoice.outstandingMinor, currency)} outstanding.` : '; nothing outstanding.'}
             </p>
             <a href={rentalDocumentUrl(rental.id, 'invoice')} target="_blank" rel="noopener" className={buttonClasses('secondary', 'sm')}>
               <DownloadIcon size={14} />
               Download invoice (PDF)
             </a>
+            {canCharge && invoice.outstandingMinor > 0 ? (
+              <Button size="sm" onClick={() => setPaymentOpen(true)}>
+                Record a payment
+              </Button>
+            ) : null}
             {canCharge ? (
               <Button size="sm" onClick={() => setCreditOpen(true)}>
                 Credit note
@@ -77,6 +87,7 @@ export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCha
         {creditNotes.length ? <CreditNotes notes={creditNotes} /> : null}
       </div>
       {invoice ? <CreditNoteDialog invoice={invoice} open={creditOpen} onClose={() => setCreditOpen(false)} /> : null}
+      {invoice ? <PaymentDialog invoice={invoice} today={format(new Date(), 'yyyy-MM-dd')} open={paymentOpen} onClose={() => setPaymentOpen(false)} /> : null}
     </Panel>
   );
 }

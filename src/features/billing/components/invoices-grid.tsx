@@ -47,6 +47,8 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
       money('cardChargedMinor', 'Charged to card'),
       money('balanceMinor', 'Balance'),
       money('creditedMinor', 'Credited'),
+      money('receivedMinor', 'Received'),
+      money('outstandingMinor', 'Outstanding'),
       {
         colId: 'pdf',
         headerName: 'Document',

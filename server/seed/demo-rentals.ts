@@ -4,7 +4,7 @@ import { settle, lateDaysBetween } from '../../shared/billing/settlement';
 import type { AssetType } from '../../shared/assets/vocabulary';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { DepositHold } from '../billing/deposit-hold.entity';
-import { Invoice } from '../billing/invoice.entity';
+import { Invoice, InvoicePayment } from '../billing/invoice.entity';
 import { nextNumber, padded } from '../billing/numbering';
 import { Booking, BookingItem } from '../bookings/booking.entity';
 import type { Scoped } from '../db/scoped';
@@ -148,14 +148,18 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
       ...base, kind: 'invoice', number: `${issuedOn.slice(0, 4)}-${padded(await nextNumber(tx, `invoice:${issuedOn.slice(0, 4)}`))}`, correctsInvoiceId: null, issuedOn, issuedAt: at((p.back ?? p.to) + 1, 10),
       lines: s.lines, subtotalMinor: s.subtotalMinor, taxMinor: s.taxMinor, totalMinor: s.totalMinor, depositCapturedMinor: s.depositCapturedMinor, cardChargedMinor: 0, balanceMinor: s.balanceMinor, reason: null,
     });
+    const amount = p.credit ? Math.round(s.subtotalMinor * 0.1) : 0;
+    const tax = taxMinor(amount, quote.taxRateBasisPoints);
     if (p.credit) {
-      const amount = Math.round(s.subtotalMinor * 0.1);
-      const tax = taxMinor(amount, quote.taxRateBasisPoints);
       await tx.insert(Invoice, {
         ...base, kind: 'credit_note', number: `CN-${issuedOn.slice(0, 4)}-${padded(await nextNumber(tx, `credit_note:${issuedOn.slice(0, 4)}`))}`, correctsInvoiceId: invoice.id, issuedOn: addDays(issuedOn, 3), issuedAt: at((p.back ?? p.to) + 4, 10),
         lines: [{ kind: 'credit', description: `Credit against invoice ${invoice.number}: ${p.credit}`, quantity: 1, unitMinor: amount, amountMinor: amount }],
         subtotalMinor: amount, taxMinor: tax, totalMinor: amount + tax, depositCapturedMinor: 0, cardChargedMinor: 0, balanceMinor: -(amount + tax), reason: p.credit,
       });
+    }
+    // Invoices older than ten weeks were paid by transfer (the balance after any credit note); the newer ones are still open.
+    if ((p.back ?? p.to) + 1 < -70) {
+      await tx.insert(InvoicePayment, { invoiceId: invoice.id, amountMinor: s.balanceMinor - amount - tax, receivedOn: addDays(issuedOn, 12), reference: `Transfer ${customer.company.split(' ')[0].toUpperCase()}-${invoice.number}`, recordedBy: clerk.id });
     }
   }
   return { rentals: n };

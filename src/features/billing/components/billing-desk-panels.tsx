@@ -2,7 +2,8 @@ import { Link } from 'react-router-dom';
 import { CountedSection } from '../../../components/counted-section';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
-import { formatMoney, useDateFormat } from '../../../lib/format';
+import { formatCalendarDate, formatMoney, useDateFormat } from '../../../lib/format';
+import { useInvoices } from '../api/get-invoices';
 import { useRentals } from '../api/get-rentals';
 import type { RentalListView, RentalSummary } from '../api/types';
 import { DepositStateChip, HoldLapse, lapsesSoon, RentalStateChip } from './billing-words';
@@ -34,7 +35,7 @@ function RentalsPanel({ id, title, view, pick, empty, chip }: { id: string; titl
   );
 }
 
-/** The billing clerk's home: holds near lapse, deposits to settle, rentals to invoice. */
+/** The billing clerk's home: holds near lapse, deposits to settle, rentals to invoice, invoices to chase. */
 export function BillingDeskPanels() {
   const { dateTime } = useDateFormat();
   return (
@@ -53,6 +54,34 @@ export function BillingDeskPanels() {
           </span>
         )}
       />
+      <UnpaidInvoices />
     </>
+  );
+}
+
+/** Invoices with money still outstanding, oldest first: what to chase. */
+function UnpaidInvoices() {
+  const invoices = useInvoices('invoice');
+  const rows = (invoices.data?.items ?? []).filter((i) => i.outstandingMinor > 0).sort((a, b) => a.issuedOn.localeCompare(b.issuedOn));
+  return (
+    <CountedSection
+      id="unpaid-heading"
+      title="Invoices not yet paid"
+      count={invoices.data ? rows.length : undefined}
+      empty="Every invoice is paid."
+      status={invoices.isPending ? <LoadingPanel label="Looking at invoices…" /> : invoices.isError ? <Notice tone="error">{invoices.error.message}</Notice> : null}
+    >
+      {rows.slice(0, 8).map((i) => (
+        <li key={i.id}>
+          <Link to={`/rentals/${i.rentalId}`} className="flex min-h-11 flex-wrap items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash">
+            <span className="font-mono font-semibold text-ink-900">{i.number}</span>
+            <span className="min-w-0 truncate text-sm text-ink-700">{i.customerCompany}</span>
+            <span className="ml-auto shrink-0 text-sm">
+              {formatMoney(i.outstandingMinor, i.currency)} since {formatCalendarDate(i.issuedOn)}
+            </span>
+          </Link>
+        </li>
+      ))}
+    </CountedSection>
   );
 }

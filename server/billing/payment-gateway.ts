@@ -27,17 +27,18 @@ function outcome(pi: Stripe.PaymentIntent): IntentOutcome {
 const unavailable = (err: Error) =>
   new AppError(502, 'payment_unavailable', `The payment provider did not answer (${err.message}). Try again: a repeated request is recognised, so nothing is charged twice.`);
 
-/** Turns the SDK's errors into the API's: card declines come back as outcomes, outages as 502, the rest as 422 naming the provider's words. */
-async function call<T>(work: () => Promise<T>): Promise<T> {
-  try {
-    return await work();
-  } catch (err) {
-    if (err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError || (err instanceof Stripe.errors.StripeError && (err.statusCode ?? 0) >= 500)) throw unavailable(err);
-    if (err instanceof Stripe.errors.StripeIdempotencyError) throw new AppError(409, 'conflict', 'A different request with the same purpose is already under way at the payment provider; reload and try again.');
-    if (err instanceof Stripe.errors.StripeError) throw new AppError(422, 'payment_refused', `The payment provider refused: ${err.message}`, { providerCode: err.code ?? null });
-    throw err;
-  }
+/** The SDK's errors as the API's: outages as 502, a clashing replay as 409, the rest as 422 naming the provider's words. */
+function providerError(err: unknown): unknown {
+  if (err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError || (err instanceof Stripe.errors.StripeError && (err.statusCode ?? 0) >= 500)) return unavailable(err);
+  if (err instanceof Stripe.errors.StripeIdempotencyError) return new AppError(409, 'conflict', 'A different request with the same purpose is already under way at the payment provider; reload and try again.');
+  if (err instanceof Stripe.errors.StripeError) return new AppError(422, 'payment_refused', `The payment provider refused: ${err.message}`, { providerCode: err.code ?? null });
+  return err;
 }
+
+const call = <T>(work: () => Promise<T>): Promise<T> =>
+  work().catch((err: unknown) => {
+    throw providerError(err);
+  });
 
 /**
  * The provider operations behind deposits, each with the idempotency key the
@@ -80,8 +81,9 @@ export class PaymentGateway {
     try {
       return outcome(await create());
     } catch (err) {
+      // A declined card is an answer, not a failure: it is recorded and shown.
       if (err instanceof Stripe.errors.StripeCardError) return { ok: false, id: err.payment_intent?.id ?? null, message: err.message, declineCode: err.decline_code ?? null };
-      return call(() => Promise.reject(err));
+      throw providerError(err);
     }
   }
 

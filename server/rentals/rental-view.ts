@@ -12,7 +12,7 @@ import { loadOrgContext } from '../organizations/org-context';
 import { Customer } from './customer.entity';
 import type { Rental } from './rental.entity';
 
-export const holdView = (h: DepositHold): DepositHoldView & { kind: DepositHold['kind'] } => ({
+export const holdView = (h: DepositHold): DepositHoldView => ({
   id: h.id,
   kind: h.kind,
   state: h.state,

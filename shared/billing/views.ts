@@ -37,6 +37,8 @@ export type DepositState = 'none' | 'authorized' | 'captured' | 'released' | 'la
 
 export type DepositHoldView = {
   id: string;
+  /** A deposit authorization, or a charge above the hold on the saved card. */
+  kind: 'hold' | 'charge';
   state: HoldState;
   amountMinor: number;
   capturedMinor: number;

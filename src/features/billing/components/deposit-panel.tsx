@@ -93,6 +93,9 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
   );
 }
 
+/** A charge above the hold and a renewal are both merchant-initiated on the saved card; the kind tells them apart. */
+const howTaken = (h: DepositHoldView) => (h.kind === 'charge' ? 'Charged to the saved card' : h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card');
+
 function HoldHistory({ holds, currency, dateTime }: { holds: DepositHoldView[]; currency: string; dateTime: (value: string) => string }) {
   return (
     <div className="overflow-x-auto">
@@ -103,7 +106,7 @@ function HoldHistory({ holds, currency, dateTime }: { holds: DepositHoldView[]; 
           {holds.map((h) => (
             <tr key={h.id}>
               <td className="py-1.5 pr-2">{dateTime(h.createdAt)}</td>
-              <td className="py-1.5 pr-2">{h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card'}</td>
+              <td className="py-1.5 pr-2">{howTaken(h)}</td>
               <td className="py-1.5 pr-2 font-mono">{card(h) ?? '—'}</td>
               <td className="py-1.5 pr-2 text-right tabular-nums">{formatMoney(h.amountMinor, currency)}</td>
               <td className="py-1.5 pr-2">

@@ -38,15 +38,16 @@ await page.getByLabel('Password').fill('nestkeeper-demo');
 await page.getByRole('button', { name: 'Sign in' }).click();
 await page.getByRole('heading', { level: 1, name: 'Shop floor today' }).waitFor();
 
+// In-app navigation only: the production server's session cookie is Secure, so a reload over http signs out.
+await page.getByRole('navigation', { name: 'Main navigation' }).getByRole('link', { name: 'Bookings' }).click();
+await page.locator(rowHeaders).nth(89).waitFor({ state: 'attached' });
+const weeks = page.getByLabel('Weeks shown');
 const switching: number[] = [];
-let rows = 0;
 for (let i = 0; i < RUNS; i += 1) {
-  await page.goto(`${base}/bookings?weeks=4`);
-  await page.locator(rowHeaders).nth(89).waitFor();
-  const fourWeeks = await boardLabel(page);
-  switching.push(await timeDrawing(page, fourWeeks, () => page.getByLabel('Weeks shown').selectOption('8')));
-  rows = await page.locator(rowHeaders).count();
+  if ((await weeks.inputValue()) !== '4') await timeDrawing(page, await boardLabel(page), () => weeks.selectOption('4'));
+  switching.push(await timeDrawing(page, await boardLabel(page), () => weeks.selectOption('8')));
 }
+const rows = await page.locator(rowHeaders).count();
 switching.sort((a, b) => a - b);
 const median = percentile(switching, 50);
 console.log(`\nboard: ${rows} rows × 8 weeks drawn in ${median.toFixed(0)} ms (median of ${RUNS} switches from 4 to 8 weeks in Chromium; max ${switching[switching.length - 1].toFixed(0)} ms; target under 1000 ms${median < 1000 ? '' : ' — MISSED'})`);

@@ -8,6 +8,7 @@ import type { RentalView } from '../../shared/billing/views';
 import { todayIn } from '../../shared/calibration/due-date';
 import { pdfText } from '../support/pdf';
 import { bearer, binaryBody, createTestApp, type TestApp } from '../support/test-app';
+import { eventually } from '../support/eventually';
 
 const WEBHOOK_SECRET = 'whsec_deposits_test_secret';
 let t: TestApp;
@@ -23,8 +24,8 @@ let stripe: ReturnType<typeof createPaymentClient>;
 
 beforeAll(async () => {
   fake = await startPaymentFake({ port: 0, webhookSecret: WEBHOOK_SECRET, webhookRetryDelaysMs: [100, 100] });
-  // The SDK gives up on a call after 1 s here, so a withheld reply turns into retries quickly.
-  t = await createTestApp({ PAYMENT_API_PORT: String(fake.port), PAYMENT_WEBHOOK_SECRET: WEBHOOK_SECRET, PAYMENT_TIMEOUT_MS: '1000' });
+  // The SDK gives up on a call after 2 s here (an ordinary reply comes well before, even on a busy machine), so a withheld reply turns into retries quickly.
+  t = await createTestApp({ PAYMENT_API_PORT: String(fake.port), PAYMENT_WEBHOOK_SECRET: WEBHOOK_SECRET, PAYMENT_TIMEOUT_MS: '2000' });
   server = t.app.listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   fake.store.settings.webhookUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/webhooks/payments`;
@@ -200,8 +201,8 @@ describe('when the provider misbehaves', () => {
 
   it('a capture whose reply is lost is retried under the same key: captured exactly once', async () => {
     const r = await returnedWithHold();
-    // The fake applies the capture but withholds its reply past the SDK's 1 s timeout — once.
-    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 1, hangMs: 3000 }) });
+    // The fake applies the capture but withholds its reply past the SDK's 2 s timeout — once.
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 1, hangMs: 10_000 }) });
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 5000, reason: 'Scratched case' });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     const pi = await stripe.paymentIntents.retrieve(await intentOf(r));
@@ -211,12 +212,12 @@ describe('when the provider misbehaves', () => {
 
   it('when every attempt times out the clerk is told to retry; the provider\'s event tells the truth and nothing is captured twice', async () => {
     const r = await returnedWithHold();
-    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 3, hangMs: 3000 }) });
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 3, hangMs: 10_000 }) });
     const failed = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 7000, reason: 'Late by two days' });
     expect(failed.status).toBe(502);
     expect(failed.body.error.code).toBe('payment_unavailable');
     // The capture did happen at the provider; its signed payment_intent.succeeded event brings the hold up to date.
-    await expect.poll(async () => (await view(r)).deposit.hold?.capturedMinor, { timeout: 5000 }).toBe(7000);
+    await eventually(async () => (await view(r)).deposit.hold?.capturedMinor).toBe(7000);
     const retried = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 7000, reason: 'Late by two days' });
     expect(retried.status).toBe(409);
     const pi = await stripe.paymentIntents.retrieve(await intentOf(r));
@@ -315,7 +316,7 @@ describe('payment webhooks', () => {
     await checkout(r);
     // Eight days later at the provider: past the 7-day window, the authorization is released and the event delivered.
     await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }) });
-    await expect.poll(async () => (await view(r)).deposit.state, { timeout: 5000 }).toBe('lapsed');
+    await eventually(async () => (await view(r)).deposit.state).toBe('lapsed');
     const mails = await mailTo('billing@demo.test');
     expect(mails.at(-1).subject).toBe(`Deposit hold lapsed: rental ${r.number}`);
   });

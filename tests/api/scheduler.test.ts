@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { JobDefinition } from '../../server/jobs/job';
 import { JobsService } from '../../server/jobs/jobs.service';
 import { pgRunCoordinator } from '../../server/jobs/pg-run-coordinator';
+import { waitUntil } from '../support/eventually';
 import { createTestDatabase } from '../support/test-db';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
@@ -27,9 +28,19 @@ describe('scheduled work', () => {
     const b = new JobsService(t.db, [job('b')]);
     a.start();
     b.start();
-    await new Promise((r) => setTimeout(r, 3500));
+    // Two fires, however late a busy machine lets them come.
+    await waitUntil('two fires of the every-second job', () => fired.length >= 2);
     await a.stop();
     await b.stop();
+    // Stopping does not wait for a fire already claimed: let every claimed slot finish its run before counting.
+    const settled = async () => {
+      const [{ claimed, finished }] = await t.db.query(
+        `SELECT (SELECT count(*)::int FROM job_leases WHERE key LIKE 'tick:%') AS claimed,
+                (SELECT count(*)::int FROM job_runs WHERE job_name = 'tick' AND finished_at IS NOT NULL) AS finished`,
+      );
+      return claimed === finished;
+    };
+    await waitUntil('the claimed fires to finish', settled);
 
     const rows: { scheduled_for: Date; n: number }[] = await t.db.query(
       `SELECT scheduled_for, count(*)::int AS n FROM job_runs WHERE job_name = 'tick' GROUP BY scheduled_for ORDER BY 1`,

@@ -1,5 +1,5 @@
 import { backToBack, describeLoad, peoplePaced } from './load';
-import { chromium } from 'playwright-core';
+import { launchChromium } from '../support/chromium';
 
 /**
  * Measures against a server already running with the benchmark firm
@@ -26,10 +26,7 @@ console.log('\nThe same, 20 people each thinking ~200 ms between requests (expon
 await load('type filter + search "0001" (narrow), paced', '/api/assets?type=tracker,probe&q=0001&limit=50', true);
 await load('type filter + search "shelf", paced', '/api/assets?type=tip,smr,battery&q=shelf&limit=50', true);
 
-const browser = await chromium.launch({
-  executablePath: '/usr/bin/chromium',
-  args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-});
+const browser = await launchChromium();
 const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
 await page.goto(`${base}/sign-in`);
 await page.getByLabel('E-mail').fill('bench@bench.test');

@@ -1,10 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
-import { startBrowserRig } from '../support/browser';
+import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { signedIn } from '../support/browser-session';
 import { pdfText } from '../support/pdf';
+import { eventually } from '../support/eventually';
 
-let rig: Awaited<ReturnType<typeof startBrowserRig>>;
+let rig: BrowserRig;
 beforeAll(async () => {
   rig = await startBrowserRig();
 });
@@ -26,7 +27,7 @@ describe('the billing desk in a real browser', () => {
     const free = (await clerkApi(`/availability?type=smr&startsOn=${startsOn}&endsOn=${endsOn}&limit=2`)).body.items as { id: string; assetTag: string }[];
     expect(free).toHaveLength(2);
 
-    const { context, page, nav } = await signedIn(rig.browser, rig.baseUrl, 'billing@demo.test', 'Billing desk');
+    const { context, page, nav } = await signedIn(rig, 'billing@demo.test', 'Billing desk');
     await nav.getByRole('link', { name: 'Rentals' }).click();
     await page.getByRole('link', { name: 'New rental' }).click();
     await page.getByLabel('Customer', { exact: true }).selectOption({ label: 'Ostby Mould & Die' });
@@ -37,16 +38,16 @@ describe('the billing desk in a real browser', () => {
       await page.getByRole('button', { name: `Add ${smr.assetTag}` }).click();
     }
     // The quote follows the form: 7 days of two SMRs is one week each at 75.00 (demo rate card), + 19 % tax.
-    await expect.poll(() => page.locator('main').innerText(), { timeout: 10_000 }).toMatch(/1 week/);
-    await expect.poll(() => page.locator('main').innerText()).toMatch(/€178\.50/);
+    await eventually(() => page.locator('main').innerText()).toMatch(/1 week/);
+    await eventually(() => page.locator('main').innerText()).toMatch(/€178\.50/);
     await page.getByRole('button', { name: 'Create rental' }).click();
-    await page.waitForURL(/\/rentals\/[0-9a-f-]{36}$/, { timeout: 10_000 });
+    await page.waitForURL(/\/rentals\/[0-9a-f-]{36}$/);
     const rentalId = page.url().split('/').pop()!;
     await page.getByRole('heading', { level: 1, name: /^Rental R-\d+$/ }).waitFor();
 
     await page.getByLabel('Test card').selectOption({ label: 'Visa ending 4242 — approves' });
     await page.getByRole('button', { name: 'Take deposit' }).click();
-    await expect.poll(() => page.locator('main').innerText(), { timeout: 10_000 }).toMatch(/Visa ending 4242/);
+    await eventually(() => page.locator('main').innerText()).toMatch(/Visa ending 4242/);
 
     // At the counter (the shop manager): out, then back with one SMR dented.
     const managerApi = await apiAs('manager@demo.test');
@@ -57,17 +58,17 @@ describe('the billing desk in a real browser', () => {
     expect((await managerApi(`/bookings/${rental.bookingId}/return`, walk(dented.id))).status).toBe(200);
 
     await page.reload();
-    await page.getByRole('heading', { name: 'Settle the deposit' }).waitFor({ timeout: 10_000 });
+    await page.getByRole('heading', { name: 'Settle the deposit' }).waitFor();
     await page.getByLabel(`Charge for ${dented.assetTag}, net of tax (EUR)`).fill('180.00');
     await page.getByRole('button', { name: 'Save charge' }).click();
     // Repair 180.00 + 19 % = 214.20 from the 500.00 hold (worked by hand); the rest is released.
-    await expect.poll(() => page.getByLabel('Amount to capture (EUR)').inputValue(), { timeout: 10_000 }).toMatch(/^214\.20?$/);
+    await eventually(() => page.getByLabel('Amount to capture (EUR)').inputValue()).toMatch(/^214\.20?$/);
     await page.getByRole('button', { name: 'Capture and release the rest' }).click();
-    await expect.poll(async () => (await rig.db.query(`SELECT state, captured_minor FROM deposit_holds WHERE rental_id = $1 AND kind = 'hold' AND state <> 'declined'`, [rentalId]))[0], { timeout: 10_000 }).toEqual({ state: 'captured', captured_minor: 21_420 });
+    await eventually(async () => (await rig.db.query(`SELECT state, captured_minor FROM deposit_holds WHERE rental_id = $1 AND kind = 'hold' AND state <> 'declined'`, [rentalId]))[0]).toEqual({ state: 'captured', captured_minor: 21_420 });
 
     await page.getByRole('button', { name: 'Issue invoice' }).click();
     const download = page.getByRole('link', { name: 'Download invoice (PDF)' });
-    await download.waitFor({ timeout: 10_000 });
+    await download.waitFor();
     const pdf = await context.request.get(new URL((await download.getAttribute('href'))!, rig.baseUrl).toString());
     expect(pdf.headers()['content-type']).toBe('application/pdf');
     const text = pdfText(Buffer.from(await pdf.body()));
@@ -79,15 +80,15 @@ describe('the billing desk in a real browser', () => {
     // The customer pays the balance by transfer: the clerk records it and nothing is left outstanding.
     await page.getByRole('button', { name: 'Record a payment' }).click();
     const dialog = page.getByRole('dialog', { name: 'Record a payment' });
-    await expect.poll(() => dialog.getByLabel('Amount received (EUR)').inputValue()).toMatch(/^178\.50?$/);
+    await eventually(() => dialog.getByLabel('Amount received (EUR)').inputValue()).toMatch(/^178\.50?$/);
     await dialog.getByLabel('Reference').fill('Transfer OMD-20931');
     await dialog.getByRole('button', { name: 'Record payment' }).click();
-    await expect.poll(() => page.locator('main').innerText(), { timeout: 10_000 }).toMatch(/nothing outstanding/);
+    await eventually(() => page.locator('main').innerText()).toMatch(/nothing outstanding/);
     await context.close();
   }, 120_000);
 
   it('the owner sets the rental terms on the settings page, and quotes follow them', async () => {
-    const { context, page, nav } = await signedIn(rig.browser, rig.baseUrl, 'owner@demo.test', "Owner's overview");
+    const { context, page, nav } = await signedIn(rig, 'owner@demo.test', "Owner's overview");
     await nav.getByRole('link', { name: 'Settings' }).click();
     const form = page.getByRole('form', { name: 'Rental terms' });
     await form.getByLabel('Tax on rentals (%)').fill('7,5');

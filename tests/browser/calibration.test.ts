@@ -1,10 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { renderPdf } from '../../server/documents/pdf';
-import { startBrowserRig } from '../support/browser';
+import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { signedIn } from '../support/browser-session';
+import { eventually } from '../support/eventually';
 
-let rig: Awaited<ReturnType<typeof startBrowserRig>>;
+let rig: BrowserRig;
 beforeAll(async () => {
   rig = await startBrowserRig();
 });
@@ -18,13 +19,13 @@ describe("the owner's calibration review in a real browser", () => {
     const [smr] = await rig.db.query(`SELECT id FROM assets WHERE asset_tag = 'SMR-001'`);
     const certificate = await renderPdf({ size: 'A4' }, (doc) => doc.text('Certificate FCL-TEST-1 (test document)'));
 
-    const { context, page, nav } = await signedIn(rig.browser, rig.baseUrl, 'owner@demo.test', "Owner's overview");
+    const { context, page, nav } = await signedIn(rig, 'owner@demo.test', "Owner's overview");
     await nav.getByRole('link', { name: 'Calibration' }).click();
     await page.getByRole('heading', { level: 1, name: 'Calibration review' }).waitFor();
     await page.getByRole('row').filter({ hasText: 'SMR-001' }).getByRole('link', { name: 'Plan lab trip' }).first().click();
     await page.getByRole('button', { name: 'Plan this trip' }).first().click();
     await page.getByRole('button', { name: 'Send to the lab' }).click();
-    await expect.poll(async () => (await rig.db.query(`SELECT status FROM assets WHERE id = $1`, [smr.id]))[0].status, { timeout: 10_000 }).toBe('at_lab');
+    await eventually(async () => (await rig.db.query(`SELECT status FROM assets WHERE id = $1`, [smr.id]))[0].status).toBe('at_lab');
 
     await page.goto(`${rig.baseUrl}/fleet/${smr.id}/calibrate`);
     await page.getByRole('heading', { level: 1, name: 'Record a calibration' }).waitFor();
@@ -40,9 +41,9 @@ describe("the owner's calibration review in a real browser", () => {
 
     await page.getByLabel('Assessment: J-2611').selectOption('customer_notified');
     await page.getByRole('button', { name: 'Draft notices' }).click();
-    await expect.poll(() => page.locator('main').innerText(), { timeout: 10_000 }).toMatch(/quality@larkspur-aero\.test/);
+    await eventually(() => page.locator('main').innerText()).toMatch(/quality@larkspur-aero\.test/);
     await page.getByRole('button', { name: 'Close review' }).click();
-    await expect.poll(async () => (await rig.db.query(`SELECT state FROM impact_reviews WHERE asset_id = $1 ORDER BY created_at DESC LIMIT 1`, [smr.id]))[0].state, { timeout: 10_000 }).toBe('closed');
+    await eventually(async () => (await rig.db.query(`SELECT state FROM impact_reviews WHERE asset_id = $1 ORDER BY created_at DESC LIMIT 1`, [smr.id]))[0].state).toBe('closed');
     await context.close();
   }, 120_000);
 });

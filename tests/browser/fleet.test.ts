@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startBrowserRig } from '../support/browser';
+import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { phone, signedIn } from '../support/browser-session';
+import { eventually } from '../support/eventually';
 
-let rig: Awaited<ReturnType<typeof startBrowserRig>>;
+let rig: BrowserRig;
 beforeAll(async () => {
   rig = await startBrowserRig();
 });
@@ -10,7 +11,7 @@ afterAll(() => rig?.close());
 
 describe('fleet register in a real browser', () => {
   it('a manager registers a tip, finds it in the fleet grid, and opens its label', async () => {
-    const { context, page, nav } = await signedIn(rig.browser, rig.baseUrl, 'manager@demo.test', 'Shop floor today');
+    const { context, page, nav } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
     await nav.getByRole('link', { name: 'Fleet' }).click();
     await page.getByRole('heading', { level: 1, name: 'Fleet' }).waitFor();
     await page.getByRole('link', { name: 'Add asset' }).or(page.getByRole('button', { name: 'Add asset' })).first().click();
@@ -26,7 +27,7 @@ describe('fleet register in a real browser', () => {
 
     await nav.getByRole('link', { name: 'Fleet' }).click();
     await page.getByLabel('Search the fleet').fill('TIP-777');
-    await expect.poll(() => page.locator('.ag-row').allInnerTexts(), { timeout: 10_000 }).toEqual([expect.stringContaining('TIP-777')]);
+    await eventually(() => page.locator('.ag-row').allInnerTexts()).toEqual([expect.stringContaining('TIP-777')]);
     await page.locator('.ag-row').first().click();
     await page.getByRole('heading', { level: 1, name: 'TIP-777' }).waitFor();
 
@@ -40,7 +41,7 @@ describe('fleet register in a real browser', () => {
 
   it('a technician on a phone finds an asset by typing its RFID tag', async () => {
     const [tip] = await rig.db.query(`SELECT asset_tag, rfid_tag FROM assets WHERE type = 'tip' AND rfid_tag IS NOT NULL ORDER BY asset_tag LIMIT 1`);
-    const { context, page, nav } = await signedIn(rig.browser, rig.baseUrl, 'tech@demo.test', 'My kit', phone);
+    const { context, page, nav } = await signedIn(rig, 'tech@demo.test', 'My kit', phone);
     await page.getByRole('link', { name: 'Find an item by its label' }).click();
     await page.getByRole('heading', { level: 1, name: 'Find by label' }).waitFor();
     await page.getByLabel('Asset tag or RFID tag').fill(tip.rfid_tag.toLowerCase());

@@ -1,9 +1,10 @@
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startBrowserRig } from '../support/browser';
+import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { phone, signedIn } from '../support/browser-session';
+import { eventually } from '../support/eventually';
 
-let rig: Awaited<ReturnType<typeof startBrowserRig>>;
+let rig: BrowserRig;
 beforeAll(async () => {
   rig = await startBrowserRig();
 });
@@ -16,7 +17,7 @@ describe('damage report, hold and release in a real browser', () => {
   it('a technician on a phone reports a dropped tip with a photo; the manager re-validates it and releases it', async () => {
     const [tip] = await rig.db.query(`SELECT id, asset_tag FROM assets WHERE type = 'tip' AND status = 'ready' AND kit_id IS NOT NULL ORDER BY asset_tag LIMIT 1`);
 
-    const tech = await signedIn(rig.browser, rig.baseUrl, 'tech@demo.test', 'My kit', phone);
+    const tech = await signedIn(rig, 'tech@demo.test', 'My kit', phone);
     await tech.page.getByRole('link', { name: 'Find an item by its label' }).click();
     await tech.page.getByLabel('Asset tag or RFID tag').fill(tip.asset_tag);
     await tech.page.getByRole('button', { name: 'Find' }).click();
@@ -28,7 +29,7 @@ describe('damage report, hold and release in a real browser', () => {
     const photo = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#7a6a55' } }).jpeg().toBuffer();
     await tech.page.getByLabel('Photos').setInputFiles({ name: 'floor.jpg', mimeType: 'image/jpeg', buffer: photo });
     await tech.page.getByRole('button', { name: 'Send report' }).click();
-    await expect.poll(() => tech.page.locator('main').innerText(), { timeout: 15_000 }).toMatch(/on hold/i);
+    await eventually(() => tech.page.locator('main').innerText()).toMatch(/on hold/i);
     expect(await tech.page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
     await tech.context.close();
 
@@ -37,12 +38,12 @@ describe('damage report, hold and release in a real browser', () => {
     const [photoRow] = await rig.db.query(`SELECT content_type, thumbnail IS NOT NULL AS thumb FROM incident_photos p JOIN incidents i ON i.id = p.incident_id WHERE i.asset_id = $1`, [tip.id]);
     expect(photoRow).toEqual({ content_type: 'image/jpeg', thumb: true });
 
-    const manager = await signedIn(rig.browser, rig.baseUrl, 'manager@demo.test', 'Shop floor today');
+    const manager = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
     const page = manager.page;
     await page.goto(`${rig.baseUrl}/fleet/${tip.id}`);
     await page.getByRole('heading', { level: 1, name: tip.asset_tag }).waitFor();
     await page.getByRole('button', { name: 'Release' }).click();
-    await expect.poll(() => page.locator('main').innerText()).toMatch(/no passing vertical tip validation since the hold began/i);
+    await eventually(() => page.locator('main').innerText()).toMatch(/no passing vertical tip validation since the hold began/i);
 
     for (const position of ['vertical', 'horizontal']) {
       await page.goto(`${rig.baseUrl}/fleet/${tip.id}`);
@@ -53,13 +54,13 @@ describe('damage report, hold and release in a real browser', () => {
       await page.getByLabel('Reference Y (mm)').fill('200');
       await page.getByLabel('Reference Z (mm)').fill('50');
       await page.getByLabel('Paste readings').fill(pastedReadings);
-      await expect.poll(() => page.getByLabel('Reading 4 Z (mm)').inputValue()).toBe('49.997');
+      await eventually(() => page.getByLabel('Reading 4 Z (mm)').inputValue()).toBe('49.997');
       await page.getByRole('button', { name: 'Save check' }).click();
-      await expect.poll(() => page.locator('main').innerText(), { timeout: 10_000 }).toMatch(/Pass/);
+      await eventually(() => page.locator('main').innerText()).toMatch(/Pass/);
     }
     await page.goto(`${rig.baseUrl}/fleet/${tip.id}`);
     await page.getByRole('button', { name: 'Release' }).click();
-    await expect.poll(async () => (await rig.db.query(`SELECT status FROM assets WHERE id = $1`, [tip.id]))[0].status, { timeout: 10_000 }).toBe('ready');
+    await eventually(async () => (await rig.db.query(`SELECT status FROM assets WHERE id = $1`, [tip.id]))[0].status).toBe('ready');
     await manager.context.close();
   }, 120_000);
 });

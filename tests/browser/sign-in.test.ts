@@ -1,8 +1,9 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startBrowserRig } from '../support/browser';
+import { startBrowserRig, type BrowserRig } from '../support/browser';
+import { eventually } from '../support/eventually';
 
-let rig: Awaited<ReturnType<typeof startBrowserRig>>;
+let rig: BrowserRig;
 beforeAll(async () => {
   rig = await startBrowserRig();
 });
@@ -29,10 +30,10 @@ const roles = [
 describe('signing in, in a real browser', () => {
   for (const role of roles) {
     it(`${role.email} lands on their own home page with their own navigation`, async () => {
-      const context = await rig.browser.newContext();
+      const context = await rig.newContext();
       const page = await context.newPage();
       await signIn(page, role.email);
-      await expect.poll(() => page.getByRole('heading', { level: 1 }).first().innerText()).toBe(role.heading);
+      await eventually(() => page.getByRole('heading', { level: 1 }).first().innerText()).toBe(role.heading);
       const links = await navLinks(page);
       for (const name of role.sees) expect(links).toContain(name);
       for (const name of role.hidden) expect(links).not.toContain(name);
@@ -41,16 +42,16 @@ describe('signing in, in a real browser', () => {
   }
 
   it('says so when the password is wrong, and stays on the sign-in page', async () => {
-    const context = await rig.browser.newContext();
+    const context = await rig.newContext();
     const page = await context.newPage();
     await signIn(page, 'owner@demo.test', 'wrong-password');
-    await expect.poll(() => page.getByRole('alert').first().innerText()).toMatch(/do not match/);
+    await eventually(() => page.getByRole('alert').first().innerText()).toMatch(/do not match/);
     expect(page.url()).toMatch(/\/sign-in/);
     await context.close();
   });
 
   it('lets the owner add a user through the form and see them in the table', async () => {
-    const context = await rig.browser.newContext();
+    const context = await rig.newContext();
     const page = await context.newPage();
     await signIn(page, 'owner@demo.test');
     await page.getByRole('navigation', { name: 'Main navigation' }).getByRole('link', { name: 'Users' }).click();
@@ -59,24 +60,24 @@ describe('signing in, in a real browser', () => {
     await page.getByLabel('Role', { exact: true }).selectOption('technician');
     await page.getByLabel('Temporary password').fill('a-long-enough-password');
     await page.getByRole('button', { name: /add user/i }).click();
-    await expect.poll(() => page.getByText('perrin@demo.test').count()).toBeGreaterThan(0);
+    await eventually(() => page.getByText('perrin@demo.test').count()).toBeGreaterThan(0);
     await context.close();
   });
 
   it('shows the owner the mailbox with the welcome message', async () => {
-    const context = await rig.browser.newContext();
+    const context = await rig.newContext();
     const page = await context.newPage();
     await signIn(page, 'owner@demo.test');
     await page.getByRole('navigation', { name: 'Main navigation' }).getByRole('link', { name: 'Mailbox' }).click();
-    await expect.poll(() => page.getByRole('heading', { level: 1 }).first().innerText()).toMatch(/Mailbox/i);
+    await eventually(() => page.getByRole('heading', { level: 1 }).first().innerText()).toMatch(/Mailbox/i);
     await context.close();
   });
 
   it('works on a phone: the technician opens the menu and signs out', async () => {
-    const context = await rig.browser.newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
+    const context = await rig.newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
     const page = await context.newPage();
     await signIn(page, 'tech@demo.test');
-    await expect.poll(() => page.getByRole('heading', { level: 1 }).first().innerText()).toBe('My kit');
+    await eventually(() => page.getByRole('heading', { level: 1 }).first().innerText()).toBe('My kit');
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     const nav = page.getByRole('navigation', { name: 'Main navigation' });
@@ -89,12 +90,12 @@ describe('signing in, in a real browser', () => {
   });
 
   it('shows a 404 page for an unknown address', async () => {
-    const context = await rig.browser.newContext();
+    const context = await rig.newContext();
     const page = await context.newPage();
     await signIn(page, 'manager@demo.test');
     await page.getByRole('heading', { level: 1, name: 'Shop floor today' }).waitFor();
     await page.goto(`${rig.baseUrl}/no/such/page`);
-    await expect.poll(() => page.locator('body').innerText()).toMatch(/Page not found/);
+    await eventually(() => page.locator('body').innerText()).toMatch(/Page not found/);
     await context.close();
   });
 });

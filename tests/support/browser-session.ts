@@ -1,10 +1,11 @@
-import type { Browser, BrowserContextOptions, Page } from 'playwright-core';
+import type { BrowserContextOptions } from 'playwright-core';
+import type { BrowserRig } from './browser';
 
 /** A fresh browser context signed in as `email` (demo password), waiting on the role's home heading. */
-export async function signedIn(browser: Browser, baseUrl: string, email: string, heading: string, options: BrowserContextOptions = {}) {
-  const context = await browser.newContext(options);
-  const page: Page = await context.newPage();
-  await page.goto(`${baseUrl}/sign-in`);
+export async function signedIn(rig: BrowserRig, email: string, heading: string, options: BrowserContextOptions = {}) {
+  const context = await rig.newContext(options);
+  const page = await context.newPage();
+  await page.goto(`${rig.baseUrl}/sign-in`);
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill('nestkeeper-demo');
   await page.getByRole('button', { name: 'Sign in' }).click();

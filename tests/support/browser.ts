@@ -2,16 +2,18 @@ import fs from 'node:fs';
 import type { Server } from 'node:http';
 import path from 'node:path';
 import nodemailer from 'nodemailer';
-import { chromium, type Browser } from 'playwright-core';
+import type { BrowserContextOptions } from 'playwright-core';
 import { buildApp } from '../../server/app';
 import { readConfig } from '../../server/config';
 import { startPaymentFake } from '../../server/fakes/payment-fake';
+import { launchChromium } from './chromium';
+import { WAIT_MS } from './eventually';
 import { createTestDatabase } from './test-db';
 
 /** The real server with the built client on a free loopback port, a seeded
  * database, the payment-provider fake delivering signed webhooks to it, and
- * Debian's Chromium driven by playwright-core (which gives each launch a
- * fresh, throwaway user-data directory). */
+ * Debian's Chromium driven by playwright-core. Open pages through `newContext`:
+ * its locators and navigations wait with the suite's patience. */
 export async function startBrowserRig() {
   const database = await createTestDatabase({ seed: true });
   const payments = await startPaymentFake({ port: 0, webhookSecret: 'whsec_browser_rig' });
@@ -34,23 +36,16 @@ export async function startBrowserRig() {
   });
   const { port } = server.address() as { port: number };
   payments.store.settings.webhookUrl = `http://127.0.0.1:${port}/api/webhooks/payments`;
-  const browser: Browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: [
-      '--headless',
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
+  const browser = await launchChromium();
   return {
     baseUrl: `http://127.0.0.1:${port}`,
-    browser,
     db: database.db,
+    async newContext(options: BrowserContextOptions = {}) {
+      const context = await browser.newContext(options);
+      context.setDefaultTimeout(WAIT_MS);
+      context.setDefaultNavigationTimeout(WAIT_MS);
+      return context;
+    },
     async close() {
       await browser.close();
       server.closeAllConnections();
@@ -60,3 +55,5 @@ export async function startBrowserRig() {
     },
   };
 }
+
+export type BrowserRig = Awaited<ReturnType<typeof startBrowserRig>>;

@@ -27,9 +27,7 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
     return res.body.token as string;
   }
 
-  // A moment for work that runs after a response (the sign-in limiter's bookkeeping) before the database goes.
-  const close = () => new Promise((resolve) => setTimeout(resolve, 100)).then(() => database.drop());
-  return { app, api, jobs, db: database.db, config, tokenFor, close };
+  return { app, api, jobs, db: database.db, config, tokenFor, close: () => database.drop() };
 }
 
 export type TestApp = Awaited<ReturnType<typeof createTestApp>>;

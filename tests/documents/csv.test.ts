@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import { toCsv } from './csv';
+import { toCsv } from '../../server/documents/csv';
 
 describe('CSV downloads (RFC 4180, with the OWASP CSV Injection guard)', () => {
   // OWASP, "CSV Injection" (owasp.org/www-community/attacks/CSV_Injection), its two

@@ -1,6 +1,5 @@
 import { In, type DataSource } from 'typeorm';
 import type { z } from 'zod';
-import Papa from 'papaparse';
 import { taxMinor } from '../../shared/billing/quote';
 import { formatMoney } from '../../shared/billing/money';
 import type { InvoiceView } from '../../shared/billing/views';
@@ -9,6 +8,7 @@ import { recordAudit } from '../audit/audit.service';
 import { Booking } from '../bookings/booking.entity';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
+import { toCsv } from '../documents/csv';
 import { invoicePdf } from '../documents/invoice-pdf';
 import { conflict, ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications/outbox';
@@ -135,27 +135,28 @@ export class InvoicesService {
     });
   }
 
-  /** Every invoice and credit note as CSV (RFC 4180 by papaparse), amounts in major units. */
+  /** Every invoice and credit note as CSV, amounts in minor units. */
   async csv(actor: Actor) {
     const { items } = await this.list(actor, { limit: 100_000, offset: 0 } as z.infer<typeof invoiceListQuery>);
-    return Papa.unparse(
-      items.map((i) => ({
-        number: i.number,
-        kind: i.kind,
-        issued_on: i.issuedOn,
-        customer: i.customerCompany,
-        corrects: i.correctsNumber ?? '',
-        currency: i.currency,
-        subtotal_minor: i.subtotalMinor,
-        tax_minor: i.taxMinor,
-        total_minor: i.totalMinor,
-        deposit_captured_minor: i.depositCapturedMinor,
-        card_charged_minor: i.cardChargedMinor,
-        balance_minor: i.balanceMinor,
-        credited_minor: i.creditedMinor,
-        received_minor: i.receivedMinor,
-        outstanding_minor: i.outstandingMinor,
-      })),
+    return toCsv(
+      ['number', 'kind', 'issued_on', 'customer', 'corrects', 'currency', 'subtotal_minor', 'tax_minor', 'total_minor', 'deposit_captured_minor', 'card_charged_minor', 'balance_minor', 'credited_minor', 'received_minor', 'outstanding_minor'],
+      items.map((i) => [
+        i.number,
+        i.kind,
+        i.issuedOn,
+        i.customerCompany,
+        i.correctsNumber ?? '',
+        i.currency,
+        i.subtotalMinor,
+        i.taxMinor,
+        i.totalMinor,
+        i.depositCapturedMinor,
+        i.cardChargedMinor,
+        i.balanceMinor,
+        i.creditedMinor,
+        i.receivedMinor,
+        i.outstandingMinor,
+      ]),
     );
   }
 

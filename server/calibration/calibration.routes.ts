@@ -35,7 +35,7 @@ export function calibrationRoutes({ calibration, impact, lab, review }: Services
   endpoint(router, at, { method: 'get', path: '/assets/:id/calibrations', summary: "An item's calibrations, newest first", access: 'fleet.read' }, ({ actor, params }) => calibration.list(actor, params.id));
   endpoint(router, at, { method: 'get', path: '/calibrations/:id/certificate.pdf', summary: 'The certificate PDF (organization only)', access: 'fleet.read' }, async ({ actor, params, res }) => {
     const file = await calibration.certificate(actor, params.id);
-    sendDocument(res, file.data, 'application/pdf', file.fileName, true);
+    sendDocument(res, file.data, 'application/pdf', file.fileName, file.inline);
   });
   endpoint(router, at, { method: 'post', path: '/calibrations/:id/interval', summary: 'Accept or decline the suggested next interval', access: 'impact.review', body: intervalDecisionPayload }, ({ actor, params, body }) =>
     calibration.decideInterval(actor, params.id, body.decision),

@@ -1,4 +1,3 @@
-import { fileTypeFromBuffer } from 'file-type';
 import { IsNull, type DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { dueDate } from '../../shared/calibration/due-date';
@@ -6,6 +5,7 @@ import { suggestInterval, type AsFound } from '../../shared/calibration/interval
 import type { calibrationEventFields } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, type Actor } from '../db/transaction';
+import { describeActiveContent, inspectPdf } from '../documents/pdf-inspection';
 import { Asset } from '../fleet/asset.entity';
 import { CustodyEvent } from '../fleet/custody-event.entity';
 import { Hold } from '../holds/hold.entity';
@@ -39,6 +39,21 @@ const eventView = (e: CalibrationEvent) => ({
   createdAt: e.createdAt.toISOString(),
 });
 
+/**
+ * Judge the bytes, not the name: a renamed photo is not a certificate, a "%PDF"
+ * header in front of HTML is not a PDF, and a certificate that runs scripts or
+ * carries files is not kept (people open it in a browser's PDF viewer).
+ */
+async function refuseUnlessPlainPdf(file: UploadedCertificate) {
+  const result = await inspectPdf(file.buffer);
+  const name = `"${file.originalname}"`;
+  if (result.kind === 'not_pdf') throw new AppError(415, 'unsupported_type', `${name} is not a PDF: ${result.reason}.`);
+  if (result.kind === 'encrypted') throw ruleBroken('certificate_encrypted', `${name} is encrypted or password-protected, so Nestkeeper cannot check what it contains. Ask the lab for an unprotected copy.`);
+  if (result.activeContent.length) {
+    throw ruleBroken('certificate_active_content', `${name} contains ${describeActiveContent(result.activeContent)}. A certificate is kept as a plain PDF: ask the lab for a copy without scripts or attachments, or print it to a new PDF.`, { found: result.activeContent });
+  }
+}
+
 export class CalibrationService {
   constructor(private readonly db: DataSource) {}
 
@@ -49,8 +64,7 @@ export class CalibrationService {
    */
   async record(actor: Actor, assetId: string, fields: z.infer<typeof calibrationEventFields>, file: UploadedCertificate | undefined) {
     if (!file) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { certificate: 'attach the certificate PDF' } });
-    // Judge the bytes, not the name: a renamed photo is not a certificate.
-    if ((await fileTypeFromBuffer(file.buffer))?.mime !== 'application/pdf') throw new AppError(415, 'unsupported_type', `"${file.originalname}" is not a PDF.`);
+    await refuseUnlessPlainPdf(file);
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const asset = await tx.get(Asset, { id: assetId }, 'That asset');
@@ -119,8 +133,9 @@ export class CalibrationService {
     });
   }
 
-  certificate(actor: Actor, eventId: string) {
-    return inOrganization(this.db, actor.organizationId, async (tx) => {
+  /** The stored file; it opens in the browser only when it is a plain PDF (files stored before the check may not be). */
+  async certificate(actor: Actor, eventId: string) {
+    const file = await inOrganization(this.db, actor.organizationId, async (tx) => {
       const [row] = await tx.sql<{ data: Buffer; file_name: string }>(
         `SELECT f.data, f.file_name FROM calibration_events e JOIN certificate_files f ON f.id = e.certificate_file_id WHERE e.organization_id = $1 AND e.id = $2`,
         [eventId],
@@ -128,6 +143,8 @@ export class CalibrationService {
       if (!row) throw new AppError(404, 'not_found', 'That certificate was not found.');
       return { data: row.data, fileName: row.file_name };
     });
+    const inspection = await inspectPdf(file.data);
+    return { ...file, inline: inspection.kind === 'pdf' && inspection.activeContent.length === 0 };
   }
 
   /** The owner accepts or declines the suggested interval; accepting moves the due date from the last calibration. */

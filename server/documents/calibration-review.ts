@@ -1,17 +1,14 @@
-import Papa from 'papaparse';
 import type { DueRow } from '../calibration/review.service';
+import { toCsv } from './csv';
 import { INK, MM, MUTED, renderPdf } from './pdf';
 
 const threatenedText = (r: DueRow) => r.threatened.map((t) => `${t.jobReference ?? 'booking'} ${t.startsOn}–${t.endsOn}`).join('; ');
 
-/** The overdue and due-soon list as CSV (RFC 4180, papaparse). */
+/** The overdue and due-soon list as CSV. */
 export const dueItemsCsv = (rows: DueRow[]) =>
-  Papa.unparse(
-    {
-      fields: ['assetTag', 'type', 'state', 'dueOn', 'provider', 'kit', 'status', 'threatenedBookings'],
-      data: rows.map((r) => [r.assetTag, r.type, r.state, r.dueOn ?? '', r.provider ?? '', r.kitName ?? '', r.status, threatenedText(r)]),
-    },
-    { newline: '\r\n' },
+  toCsv(
+    ['assetTag', 'type', 'state', 'dueOn', 'provider', 'kit', 'status', 'threatenedBookings'],
+    rows.map((r) => [r.assetTag, r.type, r.state, r.dueOn ?? '', r.provider ?? '', r.kitName ?? '', r.status, threatenedText(r)]),
   );
 
 /** A one-glance PDF of the same list for the owner's meeting or an auditor. */

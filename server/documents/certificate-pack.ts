@@ -1,6 +1,7 @@
 import { PDFDocument, type PDFPage } from 'pdf-lib';
 import { calendarDate, heading, table, typeTitle } from './document-layout';
 import { MM, renderPdf } from './pdf';
+import { inspectPdf, keepDrawingOnly } from './pdf-inspection';
 
 export type CertificateEntry = {
   assetTag: string;
@@ -16,21 +17,32 @@ export type CertificateEntry = {
 
 type PackInput = { firm: { name: string }; rentalNumber: string; customerCompany: string; startsOn: string; endsOn: string; entries: CertificateEntry[] };
 
-/** The certificate's pages copied into `pack`, or why there are none. An unreadable file must not sink the pack. */
-async function certificatePages(pack: PDFDocument, pdf: Buffer | null): Promise<PDFPage[] | 'missing' | 'unreadable'> {
+type Pages = { pages: PDFPage[]; contentOnly: boolean };
+
+/**
+ * The certificate's pages copied into `pack`, or why there are none. An unreadable file must not sink the pack.
+ * pdf-lib copies a page with everything it refers to (annotations and their actions, the page's /AA), so a file
+ * stored before uploads were checked gives only what its pages draw, and only if that copy checks clean.
+ */
+async function certificatePages(pack: PDFDocument, pdf: Buffer | null): Promise<Pages | 'missing' | 'unreadable' | 'withheld'> {
   if (!pdf) return 'missing';
-  try {
-    const source = await PDFDocument.load(pdf);
-    return await pack.copyPages(source, source.getPageIndices());
-  } catch {
-    return 'unreadable';
-  }
+  const inspection = await inspectPdf(pdf);
+  if (inspection.kind !== 'pdf') return 'unreadable';
+  const source = inspection.document;
+  if (!inspection.activeContent.length) return { pages: await pack.copyPages(source, source.getPageIndices()), contentOnly: false };
+  source.getPages().forEach(keepDrawingOnly);
+  const plain = await PDFDocument.create();
+  for (const page of await plain.copyPages(source, source.getPageIndices())) plain.addPage(page);
+  const recheck = await inspectPdf(await plain.save());
+  if (recheck.kind !== 'pdf' || recheck.activeContent.length) return 'withheld';
+  return { pages: await pack.copyPages(recheck.document, recheck.document.getPageIndices()), contentOnly: true };
 }
 
-const statusText = { missing: 'no certificate on file', unreadable: 'certificate could not be read' } as const;
-const dateOrDash = (d: string | null) => (d ? calendarDate(d) : '—');
-
 type Found = Awaited<ReturnType<typeof certificatePages>>;
+
+const statusText = { missing: 'no certificate on file', unreadable: 'certificate could not be read', withheld: 'certificate left out: it carries scripts or files' } as const;
+const foundText = (found: Found) => (typeof found === 'string' ? statusText[found] : found.contentOnly ? 'pages attached; scripts and files removed' : 'certificate attached');
+const dateOrDash = (d: string | null) => (d ? calendarDate(d) : '—');
 
 function coverPdf(input: PackInput, found: Found[]) {
   return renderPdf({ size: 'A4', margin: 18 * MM }, (doc) => {
@@ -63,7 +75,7 @@ function coverPdf(input: PackInput, found: Found[]) {
           dateOrDash(e.performedOn),
           dateOrDash(e.dueOn),
           e.provider ?? '—',
-          Array.isArray(pages) ? 'certificate attached' : statusText[pages],
+          foundText(pages),
         ];
       }),
       8,
@@ -78,7 +90,7 @@ export async function certificatePackPdf(input: PackInput): Promise<Buffer> {
   for (const entry of input.entries) found.push(await certificatePages(pack, entry.pdf));
   const cover = await PDFDocument.load(await coverPdf(input, found));
   for (const page of await pack.copyPages(cover, cover.getPageIndices())) pack.addPage(page);
-  for (const pages of found) if (Array.isArray(pages)) pages.forEach((p) => pack.addPage(p));
+  for (const f of found) if (typeof f !== 'string') f.pages.forEach((p) => pack.addPage(p));
   pack.setTitle(`Certificate pack ${input.rentalNumber}`);
   pack.setSubject(`${input.customerCompany}, ${input.startsOn} to ${input.endsOn}`);
   pack.setProducer('Nestkeeper');

@@ -1,6 +1,8 @@
 import Papa from 'papaparse';
 import { z } from 'zod';
+import { restoreNeutralisedCell } from '../../shared/csv/formula-guard';
 import { assetTypes, createAssetPayload, specsByType, type AssetView, type CreateAssetPayload } from '../../shared/schemas/assets';
+import { toCsv } from '../documents/csv';
 
 /**
  * The fleet's CSV file (RFC 4180, parsed and written by papaparse): one row
@@ -48,11 +50,6 @@ const requiredColumns = ['type', 'assetTag', 'serialNumber'];
 export type ImportError = { row: number; column: string; message: string };
 export type ImportRow = { row: number; kit: string | null; payload: CreateAssetPayload };
 
-// A cell starting with = + - @ would run as a formula in a spreadsheet; a leading ' keeps it text.
-const FORMULA_START = /^[=+\-@\t\r]/;
-const guardCell = (v: string) => (FORMULA_START.test(v) ? `'${v}` : v);
-const unguardCell = (v: string) => (v.startsWith("'") && FORMULA_START.test(v.slice(1)) ? v.slice(1) : v);
-
 export function assetsToCsv(assets: AssetView[]): string {
   const rows = assets.map((a) => {
     const specs = a.specs as Record<string, unknown>;
@@ -80,21 +77,18 @@ export function assetsToCsv(assets: AssetView[]): string {
       const v = specs[key];
       cells[`spec.${key}`] = v === undefined ? null : kind === 'list' ? (v as string[]).join(';') : kind === 'boolean' ? (v ? 'yes' : 'no') : v;
     }
-    return [...importColumns, ...exportOnlyColumns].map((c) => (cells[c] === null || cells[c] === undefined ? '' : guardCell(String(cells[c]))));
+    return [...importColumns, ...exportOnlyColumns].map((c) => cells[c] ?? '');
   });
-  return Papa.unparse({ fields: [...importColumns, ...exportOnlyColumns], data: rows }, { newline: '\r\n' });
+  return toCsv([...importColumns, ...exportOnlyColumns], rows);
 }
 
 export const importTemplateCsv = () =>
-  Papa.unparse(
-    {
-      fields: [...importColumns],
-      data: [
-        ['tip', 'TIP-101', 'PT-55012', 'Example Maker', 'Tip 6 mm', '', 'E2:00:01:5A', 'Shelf B2', '18000', '', 'yes', '12', 'Example Lab', '2026-06-01', 'Kit A', '120', 'vertical;horizontal', '', '', '', '', '', '', '', '', '', '', ''],
-        ['battery', 'BAT-101', 'BP-9921', 'Example Maker', 'Pack 14.4', '', '', 'Shelf C1', '90000', '', 'no', '', '', '', '', '', '', '14.4', '6.8', '120', 'no', '', '', '', '', '', '', ''],
-      ],
-    },
-    { newline: '\r\n' },
+  toCsv(
+    importColumns,
+    [
+      ['tip', 'TIP-101', 'PT-55012', 'Example Maker', 'Tip 6 mm', '', 'E2:00:01:5A', 'Shelf B2', '18000', '', 'yes', '12', 'Example Lab', '2026-06-01', 'Kit A', '120', 'vertical;horizontal', '', '', '', '', '', '', '', '', '', '', ''],
+      ['battery', 'BAT-101', 'BP-9921', 'Example Maker', 'Pack 14.4', '', '', 'Shelf C1', '90000', '', 'no', '', '', '', '', '', '', '14.4', '6.8', '120', 'no', '', '', '', '', '', '', ''],
+    ],
   );
 
 const yes = new Set(['yes', 'true', '1', 'y']);
@@ -117,7 +111,7 @@ export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: Import
   parsed.data.forEach((raw, index) => {
     const row = index + 1;
     const cell = (c: string) => {
-      const v = unguardCell((raw[c] ?? '').trim());
+      const v = restoreNeutralisedCell((raw[c] ?? '').trim());
       return v === '' ? undefined : v;
     };
     const rowErrors: ImportError[] = [];

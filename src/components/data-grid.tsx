@@ -2,7 +2,7 @@ import type { ColDef, GetRowIdParams, GridApi, GridReadyEvent, RowClickedEvent }
 import { AgGridReact } from 'ag-grid-react';
 import { useCallback, useId, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Button } from './button';
-import { actionsColumnType, columnTypes, escapeHtml, nestkeeperGridTheme } from './grid-setup';
+import { actionsColumnType, columnTypes, csvExportParams, escapeHtml, nestkeeperGridTheme } from './grid-setup';
 import { DownloadIcon } from './icons';
 
 export { actionsColumnType, nestkeeperGridTheme } from './grid-setup';
@@ -119,6 +119,7 @@ export function DataGrid<T>({
           columnDefs={columns}
           defaultColDef={defaultColDef}
           columnTypes={columnTypes}
+          defaultCsvExportParams={csvExportParams}
           getRowId={getRowId}
           quickFilterText={quickFilter ? filterText : undefined}
           loading={loading || rows === undefined}

@@ -11,7 +11,9 @@ import {
   ValidationModule,
   themeQuartz,
   type ColTypeDef,
+  type CsvExportParams,
 } from 'ag-grid-community';
+import { neutraliseFormula } from '../../shared/csv/formula-guard';
 
 // Only the ag-grid modules Nestkeeper uses (not AllCommunityModule), registered
 // once when the first page with a table loads. This module is only imported by
@@ -60,6 +62,18 @@ export const nestkeeperGridTheme = themeQuartz.withParams({
 export const actionsColumnType = 'nkActions';
 export const columnTypes: Record<string, ColTypeDef> = {
   [actionsColumnType]: { sortable: false, filter: false, resizable: false, suppressHeaderMenuButton: true },
+};
+
+/**
+ * Every grid's CSV export: each cell as ag-grid would write it (the column's
+ * formatter unless the column opts out), then through the shared formula guard
+ * so a spreadsheet shows user text as text. ag-grid quotes every cell itself.
+ */
+export const csvExportParams: CsvExportParams = {
+  processCellCallback: ({ value, column, formatValue }) => {
+    const cell: unknown = column.getColDef().useValueFormatterForExport === false ? value : formatValue(value);
+    return String(neutraliseFormula(cell ?? ''));
+  },
 };
 
 export function escapeHtml(text: string): string {

@@ -8,6 +8,7 @@ import { pgSinkStore, startSmtpSink } from '../../server/fakes/smtp-sink';
 import { JobsService } from '../../server/jobs/jobs.service';
 import { dueScanJob } from '../../server/calibration/due-scan.job';
 import { deliverOutbox } from '../../server/notifications/outbox-sender';
+import { activeChanges, certificateWith } from '../support/pdf-fixtures';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -60,6 +61,54 @@ describe('recording calibrations', () => {
     expect(none.status).toBe(400);
     expect(Object.keys(none.body.error.details.fields).sort()).toEqual(['asFound', 'asLeft', 'certificateNumber', 'provider']);
     expect((await t.api.get(`/api/assets/${a.id}/calibrations`).set(bearer(manager))).body.items).toHaveLength(0);
+  });
+
+  it('refuses a PDF header followed by HTML as not a PDF (415), keeping nothing', async () => {
+    const a = await tracker('2026-01-01');
+    const res = await record(manager, a.id, fields('2026-11-01'), Buffer.from('%PDF-1.7\n<html><body><script>alert(1)</script></body></html>'), 'certificate.pdf');
+    expect(res.status).toBe(415);
+    expect(res.body.error).toMatchObject({ code: 'unsupported_type', message: expect.stringMatching(/^"certificate\.pdf" is not a PDF: /) });
+    expect((await t.api.get(`/api/assets/${a.id}/calibrations`).set(bearer(manager))).body.items).toHaveLength(0);
+  });
+
+  // ISO 32000-1 names: a JavaScript /OpenAction, the /Names /JavaScript tree, /EmbeddedFiles, a /Launch link, a page's /AA, /XFA.
+  it.each([
+    ['openActionJavaScript', ['/JavaScript', '/OpenAction'], /JavaScript and an action run when the document opens/],
+    ['namesJavaScript', ['/JavaScript'], /contains JavaScript\./],
+    ['embeddedFile', ['/EmbeddedFiles'], /embedded files/],
+    ['launchLink', ['/Launch'], /an action that starts a program/],
+    ['pageOpenJavaScript', ['/JavaScript', '/AA'], /actions run on page or field events/],
+    ['xfaForm', ['/XFA'], /an XFA form/],
+  ])('refuses a certificate with active content (%s) with 422 naming what was found, keeping nothing', async (fixture, found, words) => {
+    const a = await tracker('2026-01-01');
+    const res = await record(manager, a.id, fields('2026-11-01'), await certificateWith(activeChanges[fixture]), 'OCL-7781.pdf');
+    expect(res.status).toBe(422);
+    expect(res.body.error).toMatchObject({ code: 'certificate_active_content', details: { found } });
+    expect(res.body.error.message).toMatch(words);
+    expect(res.body.error.message).toMatch(/^"OCL-7781\.pdf" contains /);
+    expect((await t.api.get(`/api/assets/${a.id}/calibrations`).set(bearer(manager))).body.items).toHaveLength(0);
+  });
+
+  it('refuses an encrypted certificate it cannot check (422)', async () => {
+    const a = await tracker('2026-01-01');
+    const locked = await renderPdf({ size: 'A4', ownerPassword: 'lab-owner-secret' }, (doc) => doc.text('Certificate OCL-7790'));
+    const res = await record(manager, a.id, fields('2026-11-01'), locked);
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe('certificate_encrypted');
+  });
+
+  it('opens a clean certificate in the browser, but sends one stored before the check as a download', async () => {
+    const a = await tracker('2026-01-01');
+    const event = (await record(manager, a.id, fields('2026-11-04'))).body;
+    const clean = await t.api.get(event.certificateUrl).set(bearer(tech)).buffer(true);
+    expect(clean.headers['content-disposition']).toMatch(/^inline; /);
+    // An older upload with a script, written straight to the table as if it predated the check.
+    const scripted = await certificateWith(activeChanges.openActionJavaScript);
+    await t.db.query(`UPDATE certificate_files SET data = $1 WHERE id = (SELECT certificate_file_id FROM calibration_events WHERE id = $2)`, [scripted, event.id]);
+    const old = await t.api.get(event.certificateUrl).set(bearer(tech)).buffer(true);
+    expect(old.status).toBe(200);
+    expect(old.headers['content-type']).toBe('application/pdf');
+    expect(old.headers['content-disposition']).toMatch(/^attachment; /);
   });
 
   it('serves the certificate to the firm only, and only lets the right roles record', async () => {

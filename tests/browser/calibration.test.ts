@@ -4,6 +4,7 @@ import { renderPdf } from '../../server/documents/pdf';
 import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { signedIn } from '../support/browser-session';
 import { eventually } from '../support/eventually';
+import { activeChanges, certificateWith } from '../support/pdf-fixtures';
 
 let rig: BrowserRig;
 beforeAll(async () => {
@@ -33,6 +34,12 @@ describe("the owner's calibration review in a real browser", () => {
     await page.getByLabel('Certificate number').fill('FCL-TEST-1');
     await page.getByLabel('As found').selectOption('out_of_tolerance');
     await page.getByLabel('As left').selectOption('in_tolerance');
+    // A certificate with a script that runs on opening is refused, and the form says why beside the file.
+    const scripted = await certificateWith(activeChanges.openActionJavaScript);
+    await page.getByLabel('Certificate (PDF)').setInputFiles({ name: 'FCL-TEST-1-scripted.pdf', mimeType: 'application/pdf', buffer: scripted });
+    await page.getByRole('button', { name: 'Save calibration' }).click();
+    await page.getByText('"FCL-TEST-1-scripted.pdf" contains JavaScript and an action run when the document opens.', { exact: false }).waitFor();
+    expect(await page.getByLabel('Certificate (PDF)').getAttribute('aria-invalid')).toBe('true');
     await page.getByLabel('Certificate (PDF)').setInputFiles({ name: 'FCL-TEST-1.pdf', mimeType: 'application/pdf', buffer: certificate });
     await page.getByRole('button', { name: 'Save calibration' }).click();
     await page.getByRole('link', { name: 'Open the impact review' }).click();

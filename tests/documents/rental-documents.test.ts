@@ -5,7 +5,9 @@ import { certificatePackPdf, type CertificateEntry } from '../../server/document
 import { invoicePdf } from '../../server/documents/invoice-pdf';
 import { renderPdf } from '../../server/documents/pdf';
 import { rentalAgreementPdf } from '../../server/documents/rental-agreement-pdf';
+import { inspectPdf } from '../../server/documents/pdf-inspection';
 import { pdfPageCount, pdfText } from '../support/pdf';
+import { activeChanges, activeNamesSeenByMuPdf, certificateWith } from '../support/pdf-fixtures';
 
 // Invented firm, customer, makers and tags (DESIGN.md §9).
 const firm = { name: 'Brackenmoor Dimensional Works', timeZone: 'Europe/Berlin' };
@@ -223,6 +225,20 @@ describe('certificate pack PDF', () => {
     const pdf = await pack([entry('TRK-001', 'OCL-1187', Buffer.from('this is not a PDF')), entry('SMR-004', null, null)]);
     expect(pdfPageCount(pdf)).toBe(1);
     expectAll(pdfText(pdf), ['certificate could not be read', 'no certificate on file']);
+  });
+
+  // Certificates stored before uploads were checked may carry active content; pdf-lib's copyPages
+  // would bring a page's annotations and /AA along. The pack keeps what the pages draw and nothing else.
+  it('carries no scripts, launch actions or attached files from a stored certificate, yet shows its pages', async () => {
+    const stored = await Promise.all(Object.values(activeChanges).map((change, i) => certificateWith(change, [`Lab certificate OCL-88${i} page one`, `Lab certificate OCL-88${i} page two`])));
+    const pdf = await pack(stored.map((bytes, i) => entry(`TRK-10${i}`, `OCL-88${i}`, bytes)));
+    expect(await inspectPdf(pdf)).toMatchObject({ kind: 'pdf', activeContent: [] });
+    // Read by an independent parser too (MuPDF): no active-content name in any object of the pack.
+    expect(activeNamesSeenByMuPdf(pdf)).toEqual([]);
+    expect(pdfPageCount(pdf)).toBe(1 + 2 * stored.length);
+    const text = pdfText(pdf);
+    expectAll(text, stored.flatMap((_, i) => [`OCL-88${i} page one`, `OCL-88${i} page two`]));
+    expect(text.match(/pages attached; scripts and files removed/g)).toHaveLength(stored.length);
   });
 
   it('says so when none of the rented items needs calibration', async () => {

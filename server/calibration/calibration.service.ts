@@ -32,6 +32,7 @@ const eventView = (e: CalibrationEvent) => ({
   dueOn: e.dueOn,
   suggestedIntervalMonths: e.suggestedIntervalMonths,
   suggestionReason: e.suggestionReason,
+  suggestedChange: e.suggestedChange,
   intervalDecision: e.intervalDecision,
   labTripId: e.labTripId,
   note: e.note,
@@ -72,6 +73,7 @@ export class CalibrationService {
         dueOn: dueDate(fields.performedOn, intervalMonths),
         suggestedIntervalMonths: suggestion.suggestedMonths,
         suggestionReason: suggestion.reason,
+        suggestedChange: suggestion.change,
         intervalDecision: null,
         labTripId: null,
         note: fields.note ?? null,
@@ -135,6 +137,7 @@ export class CalibrationService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const event = await tx.get(CalibrationEvent, { id: eventId }, 'That calibration');
       if (event.intervalDecision) throw ruleBroken('interval_decided', `This suggestion was already ${event.intervalDecision}.`);
+      if (event.suggestedChange === 'outside_policy') throw ruleBroken('interval_outside_policy', `There is no suggestion to decide: ${event.suggestionReason}`);
       event.intervalDecision = decision === 'accept' ? 'accepted' : 'declined';
       await tx.manager.save(CalibrationEvent, event);
       const asset = await tx.get(Asset, { id: event.assetId }, 'That asset');

@@ -87,6 +87,32 @@ describe('recording calibrations', () => {
   });
 });
 
+describe('interval suggestions never move against the evidence (OIML D 10 method 1)', () => {
+  it('reports a 2-month interval found out of tolerance as outside the policy (3–36 months), not "lengthen to 3 months"', async () => {
+    const a = await tracker('2026-01-01', 2);
+    const event = (await record(manager, a.id, fields('2026-03-01', 'out_of_tolerance'))).body;
+    expect(event).toMatchObject({ intervalMonths: 2, suggestedIntervalMonths: 2, suggestedChange: 'outside_policy', intervalDecision: null });
+    expect(event.suggestionReason).toMatch(/below the policy's range of 3–36 months/);
+    const decided = await t.api.post(`/api/calibrations/${event.id}/interval`).set(bearer(owner)).send({ decision: 'accept' });
+    expect(decided.status).toBe(422);
+    expect(decided.body.error.code).toBe('interval_outside_policy');
+  });
+
+  it('reports a 48-month interval after in-tolerance results as outside the policy, not "keep" while cutting it to 36', async () => {
+    const a = await tracker('2022-01-01', 48);
+    await record(manager, a.id, fields('2023-01-01', 'in_tolerance', { intervalMonths: '48' }));
+    const event = (await record(manager, a.id, fields('2026-01-01', 'in_tolerance', { intervalMonths: '48' }))).body;
+    expect(event).toMatchObject({ intervalMonths: 48, suggestedIntervalMonths: 48, suggestedChange: 'outside_policy' });
+    expect(event.suggestionReason).toMatch(/above the policy's range/);
+  });
+
+  it('names the way a suggestion moves', async () => {
+    const a = await tracker('2025-01-01');
+    const event = (await record(manager, a.id, fields('2026-01-01', 'out_of_tolerance'))).body;
+    expect(event).toMatchObject({ intervalMonths: 12, suggestedIntervalMonths: 6, suggestedChange: 'shorten' });
+  });
+});
+
 describe('out-of-tolerance impact review', () => {
   it('lists exactly the bookings between the last passing evidence and the finding, edge days included', async () => {
     const a = await tracker('2026-01-10');

@@ -1,7 +1,7 @@
 import { fileTypeFromBuffer } from 'file-type';
 import { IsNull, type DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { dueDate } from '../../shared/calibration/due-date';
+import { calendarDayIn, dueDate } from '../../shared/calibration/due-date';
 import { suggestInterval, type AsFound } from '../../shared/calibration/interval-review';
 import type { calibrationEventFields } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
@@ -107,7 +107,7 @@ export class CalibrationService {
       await recordAudit(tx, actor, 'calibration.recorded', { type: 'asset', id: assetId }, { eventId: event.id, asFound: fields.asFound, asLeft: fields.asLeft, dueOn: event.dueOn });
       if (fields.asFound === 'out_of_tolerance') await openImpactReview(tx, actor, asset, { trigger: 'calibration', triggerId: event.id, foundOn: fields.performedOn });
       const hold = await tx.findOne(Hold, { assetId, releasedAt: IsNull() });
-      if (hold && fields.asLeft === 'in_tolerance' && fields.performedOn >= hold.startedAt.toISOString().slice(0, 10)) {
+      if (hold && fields.asLeft === 'in_tolerance' && fields.performedOn >= calendarDayIn(hold.startedAt, ctx.timeZone)) {
         await releaseHold(tx, actor, asset, hold, [{ kind: 'calibration', id: event.id, performedAt: fields.performedOn }], `Calibrated: certificate ${fields.certificateNumber}`);
       }
       return eventView(event);

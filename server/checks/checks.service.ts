@@ -15,7 +15,7 @@ import { Asset } from '../fleet/asset.entity';
 import { AppError, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
 import { openImpactReview } from '../calibration/impact.service';
-import { todayIn } from '../../shared/calibration/due-date';
+import { calendarDayIn } from '../../shared/calibration/due-date';
 import { enqueueMail } from '../notifications/outbox';
 import { staffAddresses } from '../notifications/staff';
 import { loadOrgContext } from '../organizations/org-context';
@@ -109,7 +109,7 @@ export class ChecksService {
       if (decision === 'fail') {
         const what = `${checkKindTitles[input.kind]}${check.position ? ` (${check.position})` : ''} failed: ${decided.resultUm.toFixed(1)} µm against ${decided.acceptanceLimitUm.toFixed(1)} µm${decided.guardBandUm > 0 ? ` (tolerance ${decided.toleranceUm.toFixed(1)} µm less a guard band of ${decided.guardBandUm.toFixed(1)} µm)` : ''}`;
         await placeHold(tx, actor, subject, { reason: 'failed_check', summary: what, checkId: check.id });
-        await openImpactReview(tx, actor, subject, { trigger: 'check', triggerId: check.id, foundOn: todayIn(ctx.timeZone, check.performedAt) });
+        await openImpactReview(tx, actor, subject, { trigger: 'check', triggerId: check.id, foundOn: calendarDayIn(check.performedAt, ctx.timeZone) });
         await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
           subject: `${subject.assetTag} is on hold: ${checkKindTitles[input.kind].toLowerCase()} failed`,
           heading: `${subject.assetTag} failed a field check and is on hold`,

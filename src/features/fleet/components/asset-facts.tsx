@@ -5,13 +5,14 @@ import { AssetStatusChip, CalibrationChip } from '../../../components/asset-stat
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
 import { assetTypeTitles, typesWithFirmware, type AssetView } from '../../../lib/assets';
 import { shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
-import { formatCalendarDate, formatCount, formatMoney, formatNumber } from '../../../lib/format';
+import { formatCalendarDate, formatCount, formatMoney, formatNumber, useDateFormat } from '../../../lib/format';
 
 export { FactList, Panel } from '../../../components/panel';
 
 const num = (v: unknown) => (typeof v === 'number' ? v : null);
 
 export function AssetIdentity({ asset }: { asset: AssetView }) {
+  const { date } = useDateFormat();
   return (
     <Panel title="Identity">
       <FactList
@@ -37,7 +38,7 @@ export function AssetIdentity({ asset }: { asset: AssetView }) {
             ),
           },
           ...(asset.notes ? [{ term: 'Notes', value: <span className="whitespace-pre-line">{asset.notes}</span> }] : []),
-          ...(asset.retiredAt ? [{ term: 'Retired', value: `${formatCalendarDate(asset.retiredAt.slice(0, 10))} — ${asset.retiredReason ?? ''}` }] : []),
+          ...(asset.retiredAt ? [{ term: 'Retired', value: `${date(asset.retiredAt)} — ${asset.retiredReason ?? ''}` }] : []),
         ]}
       />
     </Panel>

@@ -4,7 +4,7 @@ import { Link } from 'react-router-dom';
 import { AssetStatusChip, CalibrationChip } from '../../../components/asset-status';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
 import { assetTypeTitles, typesWithFirmware, type AssetView } from '../../../lib/assets';
-import { shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
+import { formatWattHours, shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
 import { formatCalendarDate, formatCount, formatMoney, formatNumber, useDateFormat } from '../../../lib/format';
 
 export { FactList, Panel } from '../../../components/panel';
@@ -68,7 +68,7 @@ export function AssetSpecs({ asset }: { asset: AssetView }) {
       items = [
         { term: 'Nominal voltage', value: v === null ? null : `${formatNumber(v, 2)} V` },
         { term: 'Rated capacity', value: ah === null ? null : `${formatNumber(ah, 3)} Ah` },
-        { term: 'Energy', value: wh === null ? null : `${formatNumber(wh)} Wh` },
+        { term: 'Energy', value: wh === null ? null : formatWattHours(wh) },
         { term: 'Shipping class', value: wh === null ? null : shippingClassText[shippingClass(wh, s.damaged === true)] },
         { term: 'Charge cycles', value: num(s.chargeCycles) === null ? null : formatCount(num(s.chargeCycles)!) },
         { term: 'Damaged', value: s.damaged === true ? 'Yes — do not charge, do not fly' : 'No' },

@@ -84,7 +84,7 @@ export class DepositsService {
       // Once captured, a repeat (a double click, a retry after an error page) must not reach the card.
       if (state === 'captured') throw conflict(`The hold was already captured (${money(rental, hold!.capturedMinor)}); anything further goes on the invoice.`);
       let fromHold = 0;
-      if (state === 'authorized' && hold?.paymentIntentId) fromHold = await this.captureHold(tx, hold, Math.min(input.amountMinor, hold.amountMinor), input.reason);
+      if (state === 'authorized' && hold?.paymentIntentId) fromHold = await this.captureHold(tx, hold, rental.currency, Math.min(input.amountMinor, hold.amountMinor), input.reason);
       const above = input.amountMinor - fromHold;
       if (above > 0) await this.chargeCard(tx, rental, above, input.reason, hold);
       await recordAudit(tx, actor, 'deposit.captured', { type: 'rental', id: rentalId }, { amountMinor: input.amountMinor, fromHoldMinor: fromHold, chargedMinor: above, reason: input.reason });
@@ -151,9 +151,9 @@ export class DepositsService {
    * provider before its event reached us is recorded as lapsed and takes
    * nothing, so the whole amount goes on the card instead.
    */
-  private async captureHold(tx: Scoped, hold: DepositHold, amountMinor: number, reason: string): Promise<number> {
+  private async captureHold(tx: Scoped, hold: DepositHold, currency: string, amountMinor: number, reason: string): Promise<number> {
     try {
-      const captured = await this.gateway.capture(hold.paymentIntentId!, amountMinor, `hold:${hold.id}:capture`);
+      const captured = await this.gateway.capture(hold.paymentIntentId!, amountMinor, currency, `hold:${hold.id}:capture`);
       Object.assign(hold, { state: 'captured', capturedMinor: captured.ok ? captured.capturedMinor : amountMinor, captureReason: reason, settledAt: new Date() });
       await tx.save(DepositHold, hold);
       return amountMinor;

@@ -1,4 +1,6 @@
 import Stripe from 'stripe';
+import { formatMoney } from '../../shared/billing/money';
+import { fromProviderAmount, providerStepMinor, toProviderAmount } from '../../shared/billing/provider-amounts';
 import { AppError } from '../http/errors';
 
 /** What Nestkeeper needs from a PaymentIntent. */
@@ -15,12 +17,25 @@ function outcome(pi: Stripe.PaymentIntent): IntentOutcome {
     ok: true,
     id: pi.id,
     status: pi.status,
-    amountMinor: pi.amount,
-    capturedMinor: pi.amount_received,
+    amountMinor: fromProviderAmount(pi.amount, pi.currency),
+    capturedMinor: fromProviderAmount(pi.amount_received, pi.currency),
     captureBefore: captureBefore ? new Date(captureBefore * 1000) : null,
     cardBrand: card?.brand ?? null,
     cardLast4: card?.last4 ?? null,
   };
+}
+
+/**
+ * Our ISO 4217 minor units as the provider's `amount` (its zero-decimal,
+ * three-decimal and special-case rules: shared/billing/provider-amounts.ts).
+ * An amount it cannot take is refused here with the step it can take, before any call.
+ */
+function providerAmount(minor: number, currency: string): number {
+  const step = providerStepMinor(currency);
+  if (minor % step !== 0) {
+    throw new AppError(422, 'amount_not_accepted', `The payment provider takes ${currency} in steps of ${formatMoney(step, currency, 'en-GB')}; ${formatMoney(minor, currency, 'en-GB')} is not one. Round it to a step.`, { stepMinor: step });
+  }
+  return toProviderAmount(minor, currency);
 }
 
 /** The provider could not be reached or failed on its side: nothing to show the customer, try again (same key, no double charge). */
@@ -65,7 +80,7 @@ export class PaymentGateway {
     const create = () =>
       this.client.paymentIntents.create(
         {
-          amount: p.amountMinor,
+          amount: providerAmount(p.amountMinor, p.currency),
           currency: p.currency.toLowerCase(),
           customer: p.customer,
           payment_method: p.paymentMethod,
@@ -87,8 +102,9 @@ export class PaymentGateway {
     }
   }
 
-  async capture(intentId: string, amountMinor: number, key: string): Promise<IntentOutcome> {
-    return outcome(await call(() => this.client.paymentIntents.capture(intentId, { amount_to_capture: amountMinor, expand: ['latest_charge'] }, { idempotencyKey: key })));
+  async capture(intentId: string, amountMinor: number, currency: string, key: string): Promise<IntentOutcome> {
+    const amount = providerAmount(amountMinor, currency);
+    return outcome(await call(() => this.client.paymentIntents.capture(intentId, { amount_to_capture: amount, expand: ['latest_charge'] }, { idempotencyKey: key })));
   }
 
   async cancel(intentId: string, key: string): Promise<IntentOutcome> {

@@ -1,5 +1,6 @@
 import express, { Router } from 'express';
 import type Stripe from 'stripe';
+import { fromProviderAmount } from '../../shared/billing/provider-amounts';
 import type { DataSource, EntityManager } from 'typeorm';
 import { Scoped } from '../db/scoped';
 import { documentedEndpoints } from '../http/endpoint';
@@ -40,7 +41,7 @@ async function apply(manager: EntityManager, event: Stripe.Event): Promise<{ org
     return { organizationId: hold.organizationId, outcome: `hold ${hold.id} lapsed` };
   }
   if (event.type === 'payment_intent.succeeded' && hold.kind === 'hold' && hold.state === 'authorized') {
-    Object.assign(hold, { state: 'captured', capturedMinor: pi.amount_received, captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
+    Object.assign(hold, { state: 'captured', capturedMinor: fromProviderAmount(pi.amount_received, pi.currency), captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
     await tx.save(DepositHold, hold);
     return { organizationId: hold.organizationId, outcome: `hold ${hold.id} captured (${pi.amount_received})` };
   }

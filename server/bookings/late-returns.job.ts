@@ -18,9 +18,9 @@ export const lateReturnsJob = (): JobDefinition => ({
          FROM bookings b JOIN organizations o ON o.id = b.organization_id
          LEFT JOIN jobs j ON j.id = b.job_id
          JOIN booking_items bi ON bi.booking_id = b.id JOIN assets a ON a.id = bi.asset_id
-        WHERE b.state = 'out' AND b.ends_on < (now() AT TIME ZONE o.time_zone)::date AND ($1::uuid IS NULL OR b.organization_id = $1)
+        WHERE b.state = 'out' AND b.ends_on < ($2::timestamptz AT TIME ZONE o.time_zone)::date AND ($1::uuid IS NULL OR b.organization_id = $1)
         GROUP BY b.organization_id, o.time_zone, b.id, j.reference ORDER BY b.ends_on`,
-      [organizationId],
+      [organizationId, now],
     );
     const byOrg = new Map<string, LateRow[]>();
     for (const r of rows) byOrg.set(r.organization_id, [...(byOrg.get(r.organization_id) ?? []), r]);

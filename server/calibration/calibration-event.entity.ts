@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { AsFound } from '../../shared/calibration/interval-review';
+import type { AsFound, IntervalChange } from '../../shared/calibration/interval-review';
 import { OrgOwned } from '../db/org-owned';
 import { AssetBound } from '../fleet/asset-bound';
 
@@ -63,6 +63,10 @@ export class CalibrationEvent extends AssetBound {
 
   @Column({ name: 'suggestion_reason', type: 'text' })
   suggestionReason: string;
+
+  /** Which way the suggestion moves, or `outside_policy` when the interval is outside the firm's range and left to a person. */
+  @Column({ name: 'suggested_change', type: 'text' })
+  suggestedChange: IntervalChange;
 
   /** The owner's answer to the suggestion; null while open or when it suggested no change. */
   @Column({ name: 'interval_decision', type: 'text', nullable: true })

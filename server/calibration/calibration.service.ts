@@ -1,6 +1,6 @@
 import { IsNull, type DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { dueDate } from '../../shared/calibration/due-date';
+import { calendarDayIn, dueDate } from '../../shared/calibration/due-date';
 import { suggestInterval, type AsFound } from '../../shared/calibration/interval-review';
 import type { calibrationEventFields } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
@@ -32,6 +32,7 @@ const eventView = (e: CalibrationEvent) => ({
   dueOn: e.dueOn,
   suggestedIntervalMonths: e.suggestedIntervalMonths,
   suggestionReason: e.suggestionReason,
+  suggestedChange: e.suggestedChange,
   intervalDecision: e.intervalDecision,
   labTripId: e.labTripId,
   note: e.note,
@@ -86,6 +87,7 @@ export class CalibrationService {
         dueOn: dueDate(fields.performedOn, intervalMonths),
         suggestedIntervalMonths: suggestion.suggestedMonths,
         suggestionReason: suggestion.reason,
+        suggestedChange: suggestion.change,
         intervalDecision: null,
         labTripId: null,
         note: fields.note ?? null,
@@ -119,7 +121,7 @@ export class CalibrationService {
       await recordAudit(tx, actor, 'calibration.recorded', { type: 'asset', id: assetId }, { eventId: event.id, asFound: fields.asFound, asLeft: fields.asLeft, dueOn: event.dueOn });
       if (fields.asFound === 'out_of_tolerance') await openImpactReview(tx, actor, asset, { trigger: 'calibration', triggerId: event.id, foundOn: fields.performedOn });
       const hold = await tx.findOne(Hold, { assetId, releasedAt: IsNull() });
-      if (hold && fields.asLeft === 'in_tolerance' && fields.performedOn >= hold.startedAt.toISOString().slice(0, 10)) {
+      if (hold && fields.asLeft === 'in_tolerance' && fields.performedOn >= calendarDayIn(hold.startedAt, ctx.timeZone)) {
         await releaseHold(tx, actor, asset, hold, [{ kind: 'calibration', id: event.id, performedAt: fields.performedOn }], `Calibrated: certificate ${fields.certificateNumber}`);
       }
       return eventView(event);
@@ -152,6 +154,7 @@ export class CalibrationService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const event = await tx.get(CalibrationEvent, { id: eventId }, 'That calibration');
       if (event.intervalDecision) throw ruleBroken('interval_decided', `This suggestion was already ${event.intervalDecision}.`);
+      if (event.suggestedChange === 'outside_policy') throw ruleBroken('interval_outside_policy', `There is no suggestion to decide: ${event.suggestionReason}`);
       event.intervalDecision = decision === 'accept' ? 'accepted' : 'declined';
       await tx.manager.save(CalibrationEvent, event);
       const asset = await tx.get(Asset, { id: event.assetId }, 'That asset');

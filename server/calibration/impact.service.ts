@@ -9,12 +9,14 @@ import { staffAddresses } from '../notifications/staff';
 import { ImpactReview, ImpactReviewItem, type ImpactAssessment } from './impact-review.entity';
 import { listReply } from '../http/list-reply';
 
-/** Day of the item's last passing evidence before `foundOn`: an in-tolerance calibration or a passing field check. */
+/** Day of the item's last passing evidence before `foundOn`: an in-tolerance calibration or a passing field check (on the firm's calendar). */
 async function lastPassingEvidence(tx: Scoped, assetId: string, foundOn: string, excludeCheckId?: string) {
   const [row] = await tx.sql<{ since: string | null }>(
     `SELECT to_char(greatest(
         (SELECT max(performed_on) FROM calibration_events WHERE organization_id = $1 AND asset_id = $2 AND as_found = 'in_tolerance' AND performed_on < $3::date),
-        (SELECT max(performed_at)::date FROM field_checks WHERE organization_id = $1 AND asset_id = $2 AND decision = 'pass' AND performed_at::date <= $3::date AND id <> coalesce($4::uuid, '00000000-0000-0000-0000-000000000000'))
+        (SELECT max((performed_at AT TIME ZONE o.time_zone)::date) FROM field_checks, organizations o
+          WHERE field_checks.organization_id = $1 AND o.id = $1 AND asset_id = $2 AND decision = 'pass'
+            AND (performed_at AT TIME ZONE o.time_zone)::date <= $3::date AND field_checks.id <> coalesce($4::uuid, '00000000-0000-0000-0000-000000000000'))
       ), 'YYYY-MM-DD') AS since`,
     [assetId, foundOn, excludeCheckId ?? null],
   );

@@ -15,7 +15,7 @@ import { Asset } from '../fleet/asset.entity';
 import { AppError, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
 import { openImpactReview } from '../calibration/impact.service';
-import { todayIn } from '../../shared/calibration/due-date';
+import { calendarDayIn } from '../../shared/calibration/due-date';
 import { enqueueMail } from '../notifications/outbox';
 import { staffAddresses } from '../notifications/staff';
 import { loadOrgContext } from '../organizations/org-context';
@@ -86,7 +86,8 @@ export class ChecksService {
       if (tolerance.kind === 'range' && input.distanceM == null) throw badField('distanceM', 'is needed: the tolerance for this check depends on the distance from the tracker');
       const limitUm = toleranceUm(tolerance, input.distanceM);
       const uUm = input.uncertaintyUm ?? (input.uncertaintyComponentsUm?.length ? expandedUncertainty(input.uncertaintyComponentsUm) : 0);
-      const { decision, guardBandUm } = decide(judged, limitUm, ctx.decisionRule, uUm);
+      const decided = decide(judged, limitUm, ctx.decisionRule, uUm);
+      const { decision } = decided;
 
       const check = await tx.insert(FieldCheck, {
         kind: input.kind,
@@ -95,9 +96,9 @@ export class ChecksService {
         position: input.kind === 'tip_validation' ? input.position : null,
         inputs: { ...inputs, distanceM: input.distanceM ?? null, tolerance, uncertaintyComponentsUm: input.uncertaintyComponentsUm ?? null },
         result,
-        toleranceUm: Math.round(limitUm * 10) / 10,
-        expandedUncertaintyUm: Math.round(uUm * 10) / 10,
-        guardBandUm: Math.round(guardBandUm * 10) / 10,
+        toleranceUm: decided.toleranceUm,
+        expandedUncertaintyUm: decided.expandedUncertaintyUm,
+        guardBandUm: decided.guardBandUm,
         decisionRule: ctx.decisionRule,
         decision,
         performedAt: input.performedAt ? new Date(input.performedAt) : new Date(),
@@ -106,9 +107,9 @@ export class ChecksService {
       });
       await recordAudit(tx, actor, 'check.recorded', { type: 'asset', id: subject.id }, { checkId: check.id, kind: check.kind, decision, position: check.position });
       if (decision === 'fail') {
-        const what = `${checkKindTitles[input.kind]}${check.position ? ` (${check.position})` : ''} failed: ${judged.toFixed(1)} µm against ${limitUm.toFixed(1)} µm`;
+        const what = `${checkKindTitles[input.kind]}${check.position ? ` (${check.position})` : ''} failed: ${decided.resultUm.toFixed(1)} µm against ${decided.acceptanceLimitUm.toFixed(1)} µm${decided.guardBandUm > 0 ? ` (tolerance ${decided.toleranceUm.toFixed(1)} µm less a guard band of ${decided.guardBandUm.toFixed(1)} µm)` : ''}`;
         await placeHold(tx, actor, subject, { reason: 'failed_check', summary: what, checkId: check.id });
-        await openImpactReview(tx, actor, subject, { trigger: 'check', triggerId: check.id, foundOn: todayIn(ctx.timeZone, check.performedAt) });
+        await openImpactReview(tx, actor, subject, { trigger: 'check', triggerId: check.id, foundOn: calendarDayIn(check.performedAt, ctx.timeZone) });
         await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
           subject: `${subject.assetTag} is on hold: ${checkKindTitles[input.kind].toLowerCase()} failed`,
           heading: `${subject.assetTag} failed a field check and is on hold`,

@@ -1,4 +1,4 @@
-import { shippingClassText, type shippingSheet } from '../../shared/batteries/shipping-class';
+import { formatWattHours, shippingClassText, type shippingSheet } from '../../shared/batteries/shipping-class';
 import { BRASS, INK, MM, MUTED, renderPdf } from './pdf';
 
 /** DESIGN.md §6 cautions, as printed on the sheet that travels with the kit. */
@@ -17,14 +17,14 @@ export const shippingSheetPdf = (kitName: string, firm: string, sheet: ReturnTyp
     doc.font('Helvetica').fontSize(9).fillColor(MUTED).text('Watt-hours = nominal voltage × rated capacity. Classes follow the IATA lithium-ion passenger limits.');
     doc.moveDown(1);
     const cols = [left, left + 35 * MM, left + 60 * MM, left + 82 * MM, left + 104 * MM];
-    const header = ['Battery', 'Nominal V', 'Rated Ah', 'Wh', 'Class'];
+    const header = ['Battery', 'Nominal V', 'Rated Ah', 'Energy', 'Class'];
     let y = doc.y;
     doc.font('Helvetica-Bold').fontSize(9).fillColor(INK);
     header.forEach((h, i) => doc.text(h, cols[i], y));
     y += 14;
     doc.font('Helvetica').fontSize(9);
     for (const line of sheet.lines) {
-      const cells = [line.assetTag, String(line.nominalVoltageV), String(line.ratedCapacityAh), line.wattHours.toFixed(1), shippingClassText[line.class]];
+      const cells = [line.assetTag, String(line.nominalVoltageV), String(line.ratedCapacityAh), formatWattHours(line.wattHours, 'en-GB'), shippingClassText[line.class]];
       cells.forEach((c, i) => doc.font(i === 0 ? 'Courier' : 'Helvetica').text(c, cols[i], y, { width: i === 4 ? 70 * MM : 30 * MM }));
       y += 14;
     }
@@ -32,7 +32,7 @@ export const shippingSheetPdf = (kitName: string, firm: string, sheet: ReturnTyp
       doc.text('This kit has no batteries.', left, y);
       y += 14;
     }
-    doc.font('Helvetica-Bold').text(`Total: ${sheet.count} batteries, ${sheet.totalWattHours.toFixed(1)} Wh`, left, y + 6);
+    doc.font('Helvetica-Bold').text(`Total: ${sheet.count} batteries, ${formatWattHours(sheet.totalWattHours, 'en-GB')}`, left, y + 6);
     doc.moveDown(2);
     doc.save().rect(left, doc.y, doc.page.width - 2 * left, 3).fill(BRASS).restore();
     doc.moveDown(0.8);

@@ -4,7 +4,9 @@ import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { ruleBroken } from '../http/errors';
+import { calendarDayIn } from '../../shared/calibration/due-date';
 import { Asset } from '../fleet/asset.entity';
+import { loadOrgContext } from '../organizations/org-context';
 import { CustodyEvent } from '../fleet/custody-event.entity';
 import { Hold, type HoldReason } from './hold.entity';
 import { listReply } from '../http/list-reply';
@@ -74,7 +76,8 @@ export class HoldsService {
       const asset = await tx.get(Asset, { id: assetId }, 'That asset');
       const hold = await tx.findOne(Hold, { assetId, releasedAt: IsNull() });
       if (!hold) throw ruleBroken('not_held', `${asset.assetTag} is not on hold.`);
-      const { evidence, missing } = await this.evidenceSince(tx, asset, hold.startedAt);
+      const { timeZone } = await loadOrgContext(tx);
+      const { evidence, missing } = await this.evidenceSince(tx, asset, hold.startedAt, timeZone);
       if (missing.length) {
         throw ruleBroken('release_needs_evidence', `${asset.assetTag} stays on hold: ${missing.join('; ')}.`, { missing, holdStartedAt: hold.startedAt.toISOString() });
       }
@@ -86,9 +89,10 @@ export class HoldsService {
   /**
    * What clears a hold: for a tip, a passing validation in every position it is
    * used in; for a tracker, a passing two-face or length check; for any item,
-   * a calibration recorded after the hold began.
+   * a calibration recorded after the hold began, dated on or after the firm's
+   * calendar day the hold began on.
    */
-  private async evidenceSince(tx: Scoped, asset: Asset, since: Date): Promise<{ evidence: Evidence[]; missing: string[] }> {
+  private async evidenceSince(tx: Scoped, asset: Asset, since: Date, timeZone: string): Promise<{ evidence: Evidence[]; missing: string[] }> {
     const passing = await tx.sql<{ id: string; kind: string; position: string | null; performedAt: string }>(
       `SELECT id, kind, position, performed_at AS "performedAt" FROM field_checks
         WHERE organization_id = $1 AND asset_id = $2 AND decision = 'pass' AND performed_at >= $3 AND created_at > $3
@@ -99,7 +103,7 @@ export class HoldsService {
       `SELECT id, to_char(performed_on, 'YYYY-MM-DD') AS "performedOn" FROM calibration_events
         WHERE organization_id = $1 AND asset_id = $2 AND as_left = 'in_tolerance' AND performed_on >= $3::date AND created_at > $4
         ORDER BY performed_on DESC LIMIT 1`,
-      [asset.id, since.toISOString().slice(0, 10), since],
+      [asset.id, calendarDayIn(since, timeZone), since],
     );
     if (calibration) return { evidence: [{ kind: 'calibration', id: calibration.id, performedAt: calibration.performedOn }], missing: [] };
     if (asset.type === 'tip') {

@@ -1,5 +1,6 @@
 import { In } from 'typeorm';
 import { cheapestCover, depositMinor, taxMinor } from '../../shared/billing/quote';
+import { roundUpToProviderStep } from '../../shared/billing/provider-amounts';
 import type { Quote, QuoteLine } from '../../shared/billing/views';
 import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
 import { bookingDays } from '../../shared/bookings/rules';
@@ -70,7 +71,8 @@ export async function priceRental(tx: Scoped, q: PriceRequest): Promise<Quote> {
     taxRateBasisPoints: ctx.taxRateBasisPoints,
     taxMinor: tax,
     totalMinor: subtotalMinor + tax,
-    depositMinor: depositMinor(replacement, ctx.depositPolicy),
+    // Rounded up to a step the payment provider can hold (KWD in 0.010, MGA in whole ariary).
+    depositMinor: roundUpToProviderStep(depositMinor(replacement, ctx.depositPolicy), ctx.currency),
     currency: ctx.currency,
   };
 }

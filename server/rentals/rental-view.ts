@@ -1,7 +1,7 @@
 import { In } from 'typeorm';
 import { settle, lateDaysBetween } from '../../shared/billing/settlement';
 import type { DepositHoldView, DepositState, InvoiceSummary, RentalState, RentalView } from '../../shared/billing/views';
-import { todayIn } from '../../shared/calibration/due-date';
+import { calendarDayIn } from '../../shared/calibration/due-date';
 import { Booking, BookingItem } from '../bookings/booking.entity';
 import { DepositHold } from '../billing/deposit-hold.entity';
 import { Invoice, InvoicePayment } from '../billing/invoice.entity';
@@ -83,7 +83,7 @@ export async function loadRentalView(tx: Scoped, rental: Rental): Promise<Rental
   const incidents = await tx.find(Incident, { where: { bookingId: booking.id }, order: { createdAt: 'ASC' } });
   const invoices = await tx.find(Invoice, { where: { rentalId: rental.id }, order: { issuedAt: 'ASC' } });
   const deposit = depositState(holds);
-  const returnedOn = booking.returnedAt ? todayIn(ctx.timeZone, booking.returnedAt) : null;
+  const returnedOn = booking.returnedAt ? calendarDayIn(booking.returnedAt, ctx.timeZone) : null;
   const lateDays = booking.state === 'returned' || booking.state === 'out' ? lateDaysBetween(booking.endsOn, returnedOn ?? ctx.today) : 0;
   const charges = incidents.map((i) => ({
     incidentId: i.id,

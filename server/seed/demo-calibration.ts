@@ -47,7 +47,7 @@ export async function seedDemoCalibration(tx: Scoped, firm: string, timeZone: st
     return tx.insert(CalibrationEvent, {
       assetId: a.id, performedOn, provider: a.calibrationProvider!, certificateNumber: number, certificateFileId: file.id, asFound, asLeft: 'in_tolerance',
       intervalMonths: interval, dueOn: dueDate(performedOn, interval), suggestedIntervalMonths: s.suggestedMonths, suggestionReason: s.reason,
-      intervalDecision: s.change === 'keep' ? null : 'declined', labTripId: null, note: null, recordedBy: manager.id,
+      suggestedChange: s.change, intervalDecision: s.change === 'lengthen' || s.change === 'shorten' ? 'declined' : null, labTripId: null, note: null, recordedBy: manager.id,
     });
   };
   for (const a of assets.filter((x) => x.lastCalibratedOn)) {

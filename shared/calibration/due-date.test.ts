@@ -1,6 +1,6 @@
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
-import { addDays, calibrationState, dueDate, dueOnForPlan, todayIn } from './due-date';
+import { addDays, calendarDayIn, calibrationState, dueDate, dueOnForPlan, todayIn } from './due-date';
 
 // Independent reference: Luxon's DateTime.plus({ months }), which also clamps to
 // the month's last day (Luxon docs, "Math": "adding a month to Jan 31 gives Feb 28/29").
@@ -69,5 +69,51 @@ describe("today in the organization's time zone", () => {
     expect(addDays('2026-12-31', 1)).toBe('2027-01-01');
     expect(addDays('2026-03-01', -1)).toBe('2026-02-28');
     expect(addDays('2026-03-28', 2)).toBe(DateTime.fromISO('2026-03-28').plus({ days: 2 }).toISODate());
+  });
+});
+
+describe('the calendar day of an instant in a time zone (independent of the process TZ)', () => {
+  // Hand-written from the time-zone rules (from memory of the tz database): the United States
+  // start daylight saving on the second Sunday of March at 02:00 (8 March 2026: PST −8 → PDT −7);
+  // New Zealand ends it on the first Sunday of April at 03:00 (5 April 2026: NZDT +13 → NZST +12).
+  it.each([
+    ['2026-03-08T07:59:59.999Z', 'America/Los_Angeles', '2026-03-07'], // 23:59:59.999 PST on the 7th
+    ['2026-03-08T08:00:00.000Z', 'America/Los_Angeles', '2026-03-08'], // midnight PST, the day the clocks go forward
+    ['2026-03-09T06:59:59.999Z', 'America/Los_Angeles', '2026-03-08'], // 23:59:59.999 PDT: the 8th has 23 hours
+    ['2026-03-09T07:00:00.000Z', 'America/Los_Angeles', '2026-03-09'],
+    ['2026-04-04T10:59:59.999Z', 'Pacific/Auckland', '2026-04-04'], // 23:59:59.999 NZDT on the 4th
+    ['2026-04-04T11:00:00.000Z', 'Pacific/Auckland', '2026-04-05'], // midnight NZDT
+    ['2026-04-05T11:59:59.999Z', 'Pacific/Auckland', '2026-04-05'], // 23:59:59.999 NZST: the 5th has 25 hours
+    ['2026-04-05T12:00:00.000Z', 'Pacific/Auckland', '2026-04-06'],
+    ['2026-12-31T10:59:59.999Z', 'Pacific/Auckland', '2026-12-31'],
+    ['2026-12-31T11:00:00.000Z', 'Pacific/Auckland', '2027-01-01'], // New Year in Auckland while it is still 31 December in UTC
+    ['2026-06-30T18:29:59.999Z', 'Asia/Kolkata', '2026-06-30'], // IST +5:30, no daylight saving
+    ['2026-06-30T18:30:00.000Z', 'Asia/Kolkata', '2026-07-01'],
+  ])('%s in %s is %s (tz rules; Luxon agrees)', (iso, zone, day) => {
+    const instant = new Date(iso);
+    expect(calendarDayIn(instant, zone)).toBe(day);
+    expect(DateTime.fromJSDate(instant, { zone }).toISODate()).toBe(day);
+  });
+
+  // Independent computation: Luxon's own zone arithmetic (DateTime.fromObject in a zone, startOf('day')).
+  const zones = ['UTC', 'America/Los_Angeles', 'Pacific/Auckland', 'Europe/Berlin', 'America/St_Johns', 'Pacific/Chatham', 'Pacific/Kiritimati', 'Pacific/Pago_Pago'];
+  it.each(zones)('agrees with Luxon one millisecond either side of every local midnight, 1 Mar – 15 Apr 2026 and 20 Sep – 10 Nov 2026, in %s', (zone) => {
+    const wrong: string[] = [];
+    for (const [from, to] of [['2026-03-01', '2026-04-15'], ['2026-09-20', '2026-11-10']]) {
+      for (let day = DateTime.fromISO(from, { zone }); day.toISODate()! <= to; day = day.plus({ days: 1 })) {
+        const midnight = day.startOf('day');
+        for (const ms of [-1, 0, 1]) {
+          const instant = new Date(midnight.toMillis() + ms);
+          const expected = DateTime.fromMillis(instant.getTime(), { zone }).toISODate();
+          if (calendarDayIn(instant, zone) !== expected) wrong.push(`${instant.toISOString()} → ${calendarDayIn(instant, zone)}, Luxon ${expected}`);
+        }
+      }
+    }
+    expect(wrong).toEqual([]);
+  });
+
+  it('todayIn is the calendar day of now', () => {
+    const instant = new Date('2026-04-05T11:30:00Z');
+    expect(todayIn('Pacific/Auckland', instant)).toBe(calendarDayIn(instant, 'Pacific/Auckland'));
   });
 });

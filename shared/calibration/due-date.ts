@@ -33,18 +33,26 @@ export function calibrationState(required: boolean, dueOn: string | null, today:
 }
 
 // Building an Intl formatter is far costlier than using one; keep one per zone.
-const isoDateFormatters = new Map<string, Intl.DateTimeFormat>();
+const dayFormatters = new Map<string, Intl.DateTimeFormat>();
+
+/**
+ * The calendar day (`YYYY-MM-DD`) an instant falls on in an IANA time zone —
+ * the firm's day, wherever the server or browser runs. Read field by field with
+ * formatToParts (Gregorian calendar, Latin digits), not from a locale's layout.
+ */
+export function calendarDayIn(instant: Date, timeZone: string): string {
+  let formatter = dayFormatters.get(timeZone);
+  if (!formatter) {
+    formatter = new Intl.DateTimeFormat('en-US', { timeZone, calendar: 'gregory', numberingSystem: 'latn', year: 'numeric', month: '2-digit', day: '2-digit' });
+    dayFormatters.set(timeZone, formatter);
+  }
+  const parts = formatter.formatToParts(instant);
+  const field = (type: 'year' | 'month' | 'day') => parts.find((p) => p.type === type)!.value;
+  return `${field('year').padStart(4, '0')}-${field('month')}-${field('day')}`;
+}
 
 /** Today's calendar date in an IANA time zone. */
-export function todayIn(timeZone: string, now: Date = new Date()): string {
-  let formatter = isoDateFormatters.get(timeZone);
-  if (!formatter) {
-    // en-CA formats as YYYY-MM-DD.
-    formatter = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
-    isoDateFormatters.set(timeZone, formatter);
-  }
-  return formatter.format(now);
-}
+export const todayIn = (timeZone: string, now: Date = new Date()): string => calendarDayIn(now, timeZone);
 
 /** The date `days` after `date` (negative for before). */
 export function addDays(date: string, days: number): string {

@@ -125,6 +125,48 @@ describe('decision rules (ILAC-G8:09/2019)', () => {
     expect(g.acceptanceLimitUm).toBe(40);
   });
 
+  // ILAC-G8:09/2019 §4.2.1 (simple acceptance, w = 0: accepted when the measured value is within
+  // the tolerance limit) and §4.2.2 (guarded acceptance, w = U); from memory. The limit here is the
+  // brief's A + B·L = 15 µm + 6 µm/m × 2.05 m = 27.3 µm (arithmetic).
+  const limit = toleranceUm({ kind: 'range', aUm: 15, bUmPerM: 6 }, 2.05);
+
+  it('states A + B·L to 0.1 µm: 15 µm + 6 µm/m × 2.05 m = 27.3 µm (arithmetic)', () => {
+    expect(limit).toBe(27.3);
+  });
+
+  it('passes a result equal to the limit under simple acceptance, however the limit was computed', () => {
+    expect(decide(27.3, limit, 'simple').decision).toBe('pass');
+    expect(decide(27.3, 15 + 6 * 2.05, 'simple').decision).toBe('pass'); // the raw binary sum 27.299999999999997
+    expect(decide(-27.3, limit, 'simple').decision).toBe('pass');
+    expect(decide(27.4, limit, 'simple').decision).toBe('fail');
+    // A two-face error of exactly 27.3 µm measured by the tracker (0.0273 mm between the faces).
+    expect(decide(twoFaceErrorUm({ x: 0, y: 0, z: 0 }, { x: 0.0273, y: 0, z: 0 }), limit, 'simple').decision).toBe('pass');
+  });
+
+  it('passes a result equal to the acceptance limit under guarded acceptance (w = U, k = 2)', () => {
+    // u = √(1.2² + 1.6²) = 2.0 µm (a 3-4-5 triangle scaled by 0.4), U = 2u = 4.0 µm (GUM §6.2.1); 27.3 − 4.0 = 23.3 µm.
+    const U = expandedUncertainty([1.2, 1.6]);
+    const d = decide(23.3, limit, 'guarded', U);
+    expect(d).toMatchObject({ decision: 'pass', toleranceUm: 27.3, expandedUncertaintyUm: 4, guardBandUm: 4, acceptanceLimitUm: 23.3 });
+    expect(decide(23.4, limit, 'guarded', U).decision).toBe('fail');
+    expect(decide(27.3, limit, 'guarded', U).decision).toBe('fail'); // inside the guard band
+  });
+
+  it('rounds the result by the same half-even rule before comparing, so results straddling the boundary fall the stated way', () => {
+    const faces = (dxMm: number) => twoFaceErrorUm({ x: 0, y: 0, z: 0 }, { x: dxMm, y: 0, z: 0 });
+    // 27.349… µm rounds to 27.3 and passes; 27.35 µm rounds to 27.4 (half to even) and fails.
+    expect(faces(0.027349)).toBe(27.3);
+    expect(decide(faces(0.027349), limit, 'simple').decision).toBe('pass');
+    expect(faces(0.02735)).toBe(27.4);
+    expect(decide(faces(0.02735), limit, 'simple').decision).toBe('fail');
+    // 27.45 µm rounds to 27.4 (even), not 27.5: it passes a 27.4 µm limit, where half-up rounding would fail it.
+    expect(faces(0.02745)).toBe(27.4);
+    expect(decide(faces(0.02745), 27.4, 'simple').decision).toBe('pass');
+    // The limit is rounded by the same rule: a stated 27.25 µm is 27.2 µm, so 27.25 µm (27.2) passes and 27.3 µm fails.
+    expect(decide(27.25, 27.25, 'simple').decision).toBe('pass');
+    expect(decide(27.3, 27.25, 'simple').decision).toBe('fail');
+  });
+
   it('judges signed errors by their size', () => {
     expect(decide(-30, 50, 'simple').decision).toBe('pass');
     expect(decide(-60, 50, 'simple').decision).toBe('fail');

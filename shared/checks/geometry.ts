@@ -1,3 +1,5 @@
+import { roundUm } from './rounding';
+
 /** Points in millimetres, as a tracker reports them. */
 export type Point = { x: number; y: number; z: number };
 
@@ -12,5 +14,5 @@ export function meanPoint(points: Point[]): Point {
   };
 }
 
-/** Millimetres to micrometres, rounded to 0.1 µm for reporting. */
-export const toUm = (mm: number) => Math.round(mm * 10_000) / 10;
+/** Millimetres to micrometres, rounded to 0.1 µm by the checks' one rounding rule (half to even). */
+export const toUm = (mm: number) => roundUm(mm * 1000);

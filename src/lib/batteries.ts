@@ -1,3 +1,3 @@
 /** Lithium-ion battery watt-hours and shipping class (shared/batteries/shipping-class.ts). */
-export { wattHours, shippingClass, shippingClassText } from '../../shared/batteries/shipping-class';
+export { formatWattHours, wattHours, shippingClass, shippingClassText } from '../../shared/batteries/shipping-class';
 export type { ShippingClass } from '../../shared/batteries/shipping-class';

@@ -3,4 +3,4 @@ export { addDays, calibrationState, calibrationStates, dueDate, dueOnForPlan, to
 export type { CalibrationState } from '../../shared/calibration/due-date';
 /** The interval review of OIML D 10 / ILAC-G24 (shared/calibration/interval-review.ts). */
 export { suggestInterval, defaultIntervalPolicy } from '../../shared/calibration/interval-review';
-export type { AsFound, IntervalSuggestion } from '../../shared/calibration/interval-review';
+export type { AsFound, IntervalChange, IntervalSuggestion } from '../../shared/calibration/interval-review';

@@ -136,6 +136,55 @@ describe('recording calibrations', () => {
   });
 });
 
+describe("a hold began on the firm's calendar day, not UTC's", () => {
+  it('in Pacific/Auckland, a certificate dated the day before the drop does not release the hold; one dated the drop day does', async () => {
+    expect((await t.api.patch('/api/settings').set(bearer(otherOwner)).send({ timeZone: 'Pacific/Auckland' })).status).toBe(200);
+    const asset = (await t.api.post('/api/assets').set(bearer(otherOwner)).send({ type: 'tracker', assetTag: 'TRK-NZ1', serialNumber: 'S-NZ1' })).body as { id: string };
+    expect((await t.api.post(`/api/assets/${asset.id}/hold`).set(bearer(otherOwner)).send({ summary: 'Knocked off its stand' })).status).toBe(201);
+    // Dropped at 00:30 Auckland time ten days ago: still the previous day in UTC (NZ is UTC+12/+13; tz database via Luxon).
+    const dropDay = addDays(todayIn('Pacific/Auckland'), -10);
+    const drop = DateTime.fromISO(`${dropDay}T00:30`, { zone: 'Pacific/Auckland' });
+    expect(drop.toUTC().toISODate()).toBe(addDays(dropDay, -1));
+    await t.db.query(`UPDATE holds SET started_at = $1 WHERE asset_id = $2`, [drop.toJSDate(), asset.id]);
+    const status = async () => (await t.api.get(`/api/assets/${asset.id}`).set(bearer(otherOwner))).body.status;
+
+    expect((await record(otherOwner, asset.id, fields(addDays(dropDay, -1)))).status).toBe(201);
+    expect(await status()).toBe('held');
+    const refused = await t.api.post(`/api/assets/${asset.id}/release`).set(bearer(otherOwner)).send({});
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.code).toBe('release_needs_evidence');
+
+    expect((await record(otherOwner, asset.id, fields(dropDay))).status).toBe(201);
+    expect(await status()).toBe('ready');
+  });
+});
+
+describe('interval suggestions never move against the evidence (OIML D 10 method 1)', () => {
+  it('reports a 2-month interval found out of tolerance as outside the policy (3–36 months), not "lengthen to 3 months"', async () => {
+    const a = await tracker('2026-01-01', 2);
+    const event = (await record(manager, a.id, fields('2026-03-01', 'out_of_tolerance'))).body;
+    expect(event).toMatchObject({ intervalMonths: 2, suggestedIntervalMonths: 2, suggestedChange: 'outside_policy', intervalDecision: null });
+    expect(event.suggestionReason).toMatch(/below the policy's range of 3–36 months/);
+    const decided = await t.api.post(`/api/calibrations/${event.id}/interval`).set(bearer(owner)).send({ decision: 'accept' });
+    expect(decided.status).toBe(422);
+    expect(decided.body.error.code).toBe('interval_outside_policy');
+  });
+
+  it('reports a 48-month interval after in-tolerance results as outside the policy, not "keep" while cutting it to 36', async () => {
+    const a = await tracker('2022-01-01', 48);
+    await record(manager, a.id, fields('2023-01-01', 'in_tolerance', { intervalMonths: '48' }));
+    const event = (await record(manager, a.id, fields('2026-01-01', 'in_tolerance', { intervalMonths: '48' }))).body;
+    expect(event).toMatchObject({ intervalMonths: 48, suggestedIntervalMonths: 48, suggestedChange: 'outside_policy' });
+    expect(event.suggestionReason).toMatch(/above the policy's range/);
+  });
+
+  it('names the way a suggestion moves', async () => {
+    const a = await tracker('2025-01-01');
+    const event = (await record(manager, a.id, fields('2026-01-01', 'out_of_tolerance'))).body;
+    expect(event).toMatchObject({ intervalMonths: 12, suggestedIntervalMonths: 6, suggestedChange: 'shorten' });
+  });
+});
+
 describe('out-of-tolerance impact review', () => {
   it('lists exactly the bookings between the last passing evidence and the finding, edge days included', async () => {
     const a = await tracker('2026-01-10');

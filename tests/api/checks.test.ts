@@ -123,6 +123,23 @@ describe('two-face and length checks', () => {
     expect(res.body.result).toMatchObject({ errorUm: 50, toleranceUm: 60, decision: 'pass' });
   });
 
+  it('passes a result equal to its limit: 27.3 µm against 15 µm + 6 µm/m × 2.05 m (ILAC-G8:09/2019 simple acceptance)', async () => {
+    const owner = await t.tokenFor('owner@demo.test');
+    await t.api.patch('/api/settings').set(bearer(owner)).send({ tolerances: { two_face: { kind: 'range', aUm: 15, bUmPerM: 6 } } });
+    const tracker = (await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'tracker', assetTag: 'TRK-LIM1', serialNumber: 'S-LIM1' })).body;
+    const faces = (dzMm: number) => ({ kind: 'two_face', assetId: tracker.id, front: { x: 3000, y: 10, z: 0 }, back: { x: 3000, y: 10, z: dzMm }, distanceM: 2.05 });
+    try {
+      const onTheLimit = await t.api.post('/api/checks').set(bearer(tech)).send(faces(0.0273));
+      expect(onTheLimit.status).toBe(201);
+      expect(onTheLimit.body.result).toMatchObject({ errorUm: 27.3, toleranceUm: 27.3, decision: 'pass' });
+      // 27.35 µm rounds half to even to 27.4 µm: over the limit.
+      const over = await t.api.post('/api/checks').set(bearer(tech)).send(faces(0.02735));
+      expect(over.body.result).toMatchObject({ errorUm: 27.4, toleranceUm: 27.3, decision: 'fail' });
+    } finally {
+      await t.api.patch('/api/settings').set(bearer(owner)).send({ tolerances: { two_face: { kind: 'range', aUm: 20, bUmPerM: 8 } } });
+    }
+  });
+
   it('computes the scale bar length at temperature from its certified length and expansion coefficient', async () => {
     const tracker = (await t.api.get('/api/assets?type=tracker&limit=1&offset=1').set(bearer(manager))).body.items[0];
     const bar = (

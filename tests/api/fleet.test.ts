@@ -227,17 +227,29 @@ describe('kits', () => {
   it("lists a kit's batteries with watt-hours and IATA class on the shipping sheet", async () => {
     const battery = (wh: [number, number], tag: string, damaged = false) =>
       post(manager, { type: 'battery', assetTag: tag, serialNumber: `S-${tag}`, specs: { nominalVoltageV: wh[0], ratedCapacityAh: wh[1], damaged } });
-    const ids = [(await battery([14.4, 6.8], 'BAT-S1')).body.id, (await battery([14.4, 10.4], 'BAT-S2')).body.id, (await battery([14.4, 6.8], 'BAT-S3', true)).body.id];
+    const ids = [
+      (await battery([14.4, 6.8], 'BAT-S1')).body.id,
+      (await battery([14.4, 10.4], 'BAT-S2')).body.id,
+      (await battery([14.4, 6.8], 'BAT-S3', true)).body.id,
+      (await battery([10.8, 9.263], 'BAT-S4')).body.id,
+    ];
     const kit = (await t.api.post('/api/kits').set(bearer(manager)).send({ name: 'Shipping kit', memberIds: ids })).body;
     const sheet = (await t.api.get(`/api/kits/${kit.id}/shipping-sheet`).set(bearer(tech))).body;
-    expect(sheet.lines.map((l: { assetTag: string; wattHours: number; class: string }) => [l.assetTag, l.wattHours, l.class])).toEqual([
-      ['BAT-S1', 97.9, 'up_to_100_wh'],
-      ['BAT-S2', 149.8, 'over_100_to_160_wh'],
-      ['BAT-S3', 97.9, 'damaged_do_not_fly'],
+    // Wh = V × Ah (arithmetic): 97.92, 149.76, 97.92 and 100.0404 Wh; IATA DGR classes at 100 and 160 Wh.
+    const lines = sheet.lines as { assetTag: string; wattHours: number; class: string }[];
+    expect(lines.map((l) => [l.assetTag, l.class])).toEqual([
+      ['BAT-S1', 'up_to_100_wh'],
+      ['BAT-S2', 'over_100_to_160_wh'],
+      ['BAT-S3', 'damaged_do_not_fly'],
+      ['BAT-S4', 'over_100_to_160_wh'],
     ]);
-    expect(sheet.totalWattHours).toBe(345.6);
+    [97.92, 149.76, 97.92, 100.0404].forEach((wh, i) => expect(lines[i].wattHours).toBeCloseTo(wh, 9));
+    expect(sheet.totalWattHours).toBeCloseTo(445.6404, 9);
     const pdf = pdfText((await t.api.get(`/api/kits/${kit.id}/shipping-sheet.pdf`).set(bearer(tech)).buffer(true)).body);
-    expect(pdf).toContain('345.6 Wh');
+    expect(pdf).toContain('445.6 Wh');
+    // Over 100 Wh, so never printed as "100.0 Wh".
+    expect(pdf).toContain('100.04 Wh');
+    expect(pdf).not.toContain('100.0 Wh');
     expect(pdf).toMatch(/do not ship them by air/);
   });
 });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { fromZodError } from './errors';
+import { fromZodError, ProviderError } from './errors';
 
 /** Parameters every endpoint accepts (the SDK may send them). */
 export const common = {
@@ -40,6 +40,25 @@ export const formBool = z.enum(['true', 'false']).transform((v) => v === 'true')
 
 /** A positive amount in the currency's smallest unit (https://docs.stripe.com/currencies#zero-decimal). */
 export const formAmount = formInt.pipe(z.number().int().min(1).max(99_999_999));
+
+/**
+ * The provider's per-currency amount rules (https://docs.stripe.com/currencies):
+ * three-decimal currencies need a last digit of 0 ("Three-decimal currencies");
+ * ISK, zero-decimal at the card networks since 14 April 2023, is still sent with
+ * two decimals and must be evenly divisible by 100 ("Special cases"; the error code
+ * from support.stripe.com "Deprecation of fractional ISK charges and refunds").
+ * Zero-decimal currencies take any integer, which `formAmount` already is.
+ */
+export function assertAcceptedAmount(amount: number, currency: string, param: string): void {
+  // Parameter errors, so not kept for idempotent replay (like the schema's own).
+  const refuse = (message: string, code?: string) => new ProviderError(400, { type: 'invalid_request_error', message, param, ...(code ? { code } : {}) }, false);
+  if (['bhd', 'jod', 'kwd', 'omr', 'tnd'].includes(currency) && amount % 10 !== 0) {
+    throw refuse(`Invalid amount: ${currency.toUpperCase()} amounts must end in 0 (round to the nearest ten).`);
+  }
+  if (currency === 'isk' && amount % 100 !== 0) {
+    throw refuse('Invalid amount. Currency ISK has become effectively zero-decimal and charged amounts must be evenly divisible by 100.', 'invalid_charge_amount_no_decimal_compatible');
+  }
+}
 
 /** Three-letter ISO currency code, lower-cased as the provider returns it. */
 export const currencyParam = z

@@ -6,6 +6,7 @@ import { ProviderError, invalidRequest, resourceMissing, stateError } from './er
 import { causeOf, emitEvent, type EventCause } from './events';
 import {
   applyMetadata,
+  assertAcceptedAmount,
   common,
   currencyParam,
   formAmount,
@@ -320,6 +321,7 @@ export const paymentIntents: PaymentResource = {
         // "This parameter can only be used with confirm=true." (create reference, off_session)
         throw invalidRequest('off_session can only be used when confirm=true.', { code: 'parameter_invalid', param: 'off_session' });
       }
+      assertAcceptedAmount(p.amount, p.currency, 'amount');
       if (p.customer) findCustomer(store, p.customer);
       const pm = p.payment_method ? resolvePaymentMethod(store, p.payment_method) : undefined;
       const id = store.newId('pi');
@@ -382,6 +384,7 @@ export const paymentIntents: PaymentResource = {
       const editable: PaymentIntentStatus[] = ['requires_payment_method', 'requires_confirmation', 'requires_action'];
       const changesMoneyOrMethod = p.amount !== undefined || p.currency !== undefined || p.payment_method !== undefined || p.capture_method !== undefined;
       if (changesMoneyOrMethod && !editable.includes(intent.status)) throw unexpectedState(intent, 'update', editable);
+      assertAcceptedAmount(p.amount ?? intent.amount, p.currency ?? intent.currency, 'amount');
       if (p.customer) findCustomer(store, p.customer);
       const pm = p.payment_method ? resolvePaymentMethod(store, p.payment_method) : undefined;
       const updated = save(store, {
@@ -431,6 +434,7 @@ export const paymentIntents: PaymentResource = {
       }
       if (intent.status !== 'requires_capture') throw unexpectedState(intent, 'capture', ['requires_capture']);
       const amount = p.amount_to_capture ?? intent.amount_capturable;
+      assertAcceptedAmount(amount, intent.currency, 'amount_to_capture');
       if (amount > intent.amount_capturable) {
         throw invalidRequest(
           `The amount to capture (${amount}) must be less than or equal to the amount capturable (${intent.amount_capturable}).`,

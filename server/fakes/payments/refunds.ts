@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { findCharge, updateCharge, type Charge } from './charges';
 import { invalidRequest, resourceMissing, stateError } from './errors';
 import { causeOf, emitEvent } from './events';
-import { applyMetadata, common, formAmount, listPage, listParams, metadataParam, parseParams, type Metadata } from './params';
+import { applyMetadata, assertAcceptedAmount, common, formAmount, listPage, listParams, metadataParam, parseParams, type Metadata } from './params';
 import { findIntentForRefund } from './payment-intents';
 import type { PaymentResource } from './resource';
 import type { PaymentStore } from './store';
@@ -82,6 +82,7 @@ export const refunds: PaymentResource = {
         throw stateError('charge_already_refunded', `Charge ${charge.id} has already been refunded.`, { charge: charge.id });
       }
       const amount = p.amount ?? refundable;
+      assertAcceptedAmount(amount, charge.currency, 'amount');
       if (amount > refundable) {
         throw invalidRequest(
           `Refund amount (${amount}) is greater than the unrefunded amount on charge ${charge.id} (${refundable}).`,

@@ -1,10 +1,10 @@
-import { format } from 'date-fns';
 import { useState } from 'react';
 import { Button, buttonClasses } from '../../../components/button';
 import { DownloadIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
-import { formatCalendarDate, formatMoney } from '../../../lib/format';
+import { todayIn } from '../../../lib/calibration';
+import { formatCalendarDate, formatMoney, useDateFormat } from '../../../lib/format';
 import { invoiceDocumentUrl } from '../api/get-invoices';
 import { rentalDocumentUrl } from '../api/get-rental';
 import { useIssueInvoice } from '../api/issue-invoice';
@@ -26,6 +26,7 @@ function notReady(rental: RentalView): string | null {
 /** What the rental comes to, the invoice, what was received against it and its credit notes. */
 export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCharge: boolean }) {
   const issue = useIssueInvoice();
+  const { timeZone } = useDateFormat();
   const [creditOpen, setCreditOpen] = useState(false);
   const [paymentOpen, setPaymentOpen] = useState(false);
   const { settlement, currency } = rental;
@@ -87,7 +88,7 @@ export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCha
         {creditNotes.length ? <CreditNotes notes={creditNotes} /> : null}
       </div>
       {invoice ? <CreditNoteDialog invoice={invoice} open={creditOpen} onClose={() => setCreditOpen(false)} /> : null}
-      {invoice ? <PaymentDialog invoice={invoice} today={format(new Date(), 'yyyy-MM-dd')} open={paymentOpen} onClose={() => setPaymentOpen(false)} /> : null}
+      {invoice ? <PaymentDialog invoice={invoice} today={todayIn(timeZone ?? 'UTC')} open={paymentOpen} onClose={() => setPaymentOpen(false)} /> : null}
     </Panel>
   );
 }

@@ -1,4 +1,4 @@
-import type { AsFound } from '../../../lib/calibration';
+import type { AsFound, IntervalChange } from '../../../lib/calibration';
 import type { DueRow, ThreatenedBooking } from '../../../../shared/calibration/review-types';
 export type { DueRow, ThreatenedBooking };
 
@@ -19,6 +19,8 @@ export interface CalibrationEvent {
   dueOn: string;
   suggestedIntervalMonths: number;
   suggestionReason: string;
+  /** Which way the suggestion moves; `outside_policy` when the interval is outside the firm's range and left to a person. */
+  suggestedChange: IntervalChange;
   intervalDecision: null | 'accepted' | 'declined';
   labTripId: string | null;
   note: string | null;

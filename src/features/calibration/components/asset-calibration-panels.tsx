@@ -36,9 +36,11 @@ export function CalibrationHistory({ assetId, className = '' }: { assetId: strin
               </div>
               <p className="text-sm text-ink-700">
                 Interval {months(e.intervalMonths)} · due {formatCalendarDate(effectiveDueOn(e))}
-                {e.suggestedIntervalMonths !== e.intervalMonths
-                  ? ` · suggested ${months(e.suggestedIntervalMonths)}${e.intervalDecision ? `, ${decisionWords[e.intervalDecision]}` : ', not yet decided'}`
-                  : ''}
+                {e.suggestedChange === 'outside_policy'
+                  ? ' · outside the interval policy'
+                  : e.suggestedChange !== 'keep'
+                    ? ` · suggested ${months(e.suggestedIntervalMonths)}${e.intervalDecision ? `, ${decisionWords[e.intervalDecision]}` : ', not yet decided'}`
+                    : ''}
               </p>
               {e.note ? <p className="whitespace-pre-line text-sm">{e.note}</p> : null}
             </li>

@@ -43,6 +43,20 @@ export function dateRange(startsOn: string, endsOn: string): string {
 export const months = (n: number) => `${n} ${n === 1 ? 'month' : 'months'}`;
 export const days = (n: number) => `${n} ${n === 1 ? 'day' : 'days'}`;
 
+/** The suggestion in words, from the way it moves (never inferred from the numbers alone). */
+export function suggestionHeadline(event: CalibrationEvent): string {
+  switch (event.suggestedChange) {
+    case 'lengthen':
+      return `Lengthen the interval from ${months(event.intervalMonths)} to ${months(event.suggestedIntervalMonths)}`;
+    case 'shorten':
+      return `Shorten the interval from ${months(event.intervalMonths)} to ${months(event.suggestedIntervalMonths)}`;
+    case 'keep':
+      return `Keep the interval at ${months(event.intervalMonths)}`;
+    case 'outside_policy':
+      return `No suggestion: ${months(event.intervalMonths)} is outside the interval policy`;
+  }
+}
+
 /** The due date a calibration leaves the item with: an accepted interval suggestion moves it from the same calibration day. */
 export function effectiveDueOn(event: CalibrationEvent): string {
   return event.intervalDecision === 'accepted' && event.suggestedIntervalMonths !== event.intervalMonths

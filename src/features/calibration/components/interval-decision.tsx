@@ -2,27 +2,30 @@ import { Button } from '../../../components/button';
 import { Notice } from '../../../components/notice';
 import { useDecideInterval } from '../api/decide-interval';
 import type { CalibrationEvent } from '../api/types';
-import { months } from './calibration-words';
+import { suggestionHeadline } from './calibration-words';
 
 const decisionWords = { accepted: 'Accepted', declined: 'Declined' } as const;
 
 /** The interval review's suggestion after a calibration, and the owner's answer (OIML D 10 / ILAC-G24 staircase method). */
 export function IntervalSuggestion({ event, canDecide, onDecided }: { event: CalibrationEvent; canDecide: boolean; onDecided?: (event: CalibrationEvent) => void }) {
   const decide = useDecideInterval();
-  const change = event.suggestedIntervalMonths - event.intervalMonths;
-  const headline =
-    change === 0
-      ? `Keep the interval at ${months(event.intervalMonths)}`
-      : `${change > 0 ? 'Lengthen' : 'Shorten'} the interval from ${months(event.intervalMonths)} to ${months(event.suggestedIntervalMonths)}`;
+  const moves = event.suggestedChange === 'lengthen' || event.suggestedChange === 'shorten';
+  const outside = event.suggestedChange === 'outside_policy';
   return (
     <div className="flex flex-col gap-2">
       <p>
-        <span className="font-semibold">Suggested: {headline}.</span> <span className="text-ink-700">{event.suggestionReason}</span>
+        <span className="font-semibold">
+          {outside ? '' : 'Suggested: '}
+          {suggestionHeadline(event)}.
+        </span>{' '}
+        <span className="text-ink-700">{event.suggestionReason}</span>
       </p>
-      {event.intervalDecision ? (
+      {outside ? (
+        <p className="text-sm text-ink-700">Change the asset’s calibration interval by hand, or widen the policy’s range in the settings.</p>
+      ) : event.intervalDecision ? (
         <p className="text-sm">
           <span className="font-semibold">{decisionWords[event.intervalDecision]}</span>
-          {event.intervalDecision === 'accepted' && change !== 0 ? ' — the due date now follows the new interval.' : '.'}
+          {event.intervalDecision === 'accepted' && moves ? ' — the due date now follows the new interval.' : '.'}
         </p>
       ) : canDecide ? (
         <div className="flex flex-wrap items-center gap-2">
@@ -43,7 +46,7 @@ export function IntervalSuggestion({ event, canDecide, onDecided }: { event: Cal
           >
             Decline
           </Button>
-          <span className="text-sm text-ink-700">{change !== 0 ? 'Accepting moves the due date.' : ''}</span>
+          <span className="text-sm text-ink-700">{moves ? 'Accepting moves the due date.' : ''}</span>
         </div>
       ) : (
         <p className="text-sm text-ink-700">Waiting for the owner to accept or decline.</p>

@@ -193,18 +193,20 @@ export function previewCheck(values: CheckFormValues, rules: CheckRules, bar: Sc
   const tolerance = rules.tolerances[values.kind];
   let limit: number | null = null;
   if (!tolerance) waiting.push('The tolerance for this check is not known here; the server will apply the firm’s setting.');
-  else if (tolerance.kind === 'fixed') limit = tolerance.um;
+  else if (tolerance.kind === 'fixed') limit = toleranceUm(tolerance);
   else {
     const d = parseDecimal(values.distanceM);
     if (d === null || d < 0) waiting.push('Enter the distance from the tracker: the tolerance depends on it.');
     else limit = toleranceUm(tolerance, d);
   }
-  const expandedUncertaintyUm = uncertaintyFrom(values).expandedUm ?? 0;
+  let expandedUncertaintyUm = uncertaintyFrom(values).expandedUm ?? 0;
   let decision: Decision | null = null;
   let guardBandUm: number | null = null;
   let acceptanceLimitUm: number | null = null;
   if (limit !== null && rules.decisionRule) {
     const d = decide(judgedUm ?? 0, limit, rules.decisionRule, expandedUncertaintyUm);
+    // The numbers the decision compares, rounded as the server stores them.
+    expandedUncertaintyUm = d.expandedUncertaintyUm;
     guardBandUm = d.guardBandUm;
     acceptanceLimitUm = d.acceptanceLimitUm;
     if (judgedUm !== null) decision = d.decision;

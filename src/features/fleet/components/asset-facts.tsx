@@ -4,14 +4,15 @@ import { Link } from 'react-router-dom';
 import { AssetStatusChip, CalibrationChip } from '../../../components/asset-status';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
 import { assetTypeTitles, typesWithFirmware, type AssetView } from '../../../lib/assets';
-import { shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
-import { formatCalendarDate, formatCount, formatMoney, formatNumber } from '../../../lib/format';
+import { formatWattHours, shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
+import { formatCalendarDate, formatCount, formatMoney, formatNumber, useDateFormat } from '../../../lib/format';
 
 export { FactList, Panel } from '../../../components/panel';
 
 const num = (v: unknown) => (typeof v === 'number' ? v : null);
 
 export function AssetIdentity({ asset }: { asset: AssetView }) {
+  const { date } = useDateFormat();
   return (
     <Panel title="Identity">
       <FactList
@@ -37,7 +38,7 @@ export function AssetIdentity({ asset }: { asset: AssetView }) {
             ),
           },
           ...(asset.notes ? [{ term: 'Notes', value: <span className="whitespace-pre-line">{asset.notes}</span> }] : []),
-          ...(asset.retiredAt ? [{ term: 'Retired', value: `${formatCalendarDate(asset.retiredAt.slice(0, 10))} — ${asset.retiredReason ?? ''}` }] : []),
+          ...(asset.retiredAt ? [{ term: 'Retired', value: `${date(asset.retiredAt)} — ${asset.retiredReason ?? ''}` }] : []),
         ]}
       />
     </Panel>
@@ -67,7 +68,7 @@ export function AssetSpecs({ asset }: { asset: AssetView }) {
       items = [
         { term: 'Nominal voltage', value: v === null ? null : `${formatNumber(v, 2)} V` },
         { term: 'Rated capacity', value: ah === null ? null : `${formatNumber(ah, 3)} Ah` },
-        { term: 'Energy', value: wh === null ? null : `${formatNumber(wh)} Wh` },
+        { term: 'Energy', value: wh === null ? null : formatWattHours(wh) },
         { term: 'Shipping class', value: wh === null ? null : shippingClassText[shippingClass(wh, s.damaged === true)] },
         { term: 'Charge cycles', value: num(s.chargeCycles) === null ? null : formatCount(num(s.chargeCycles)!) },
         { term: 'Damaged', value: s.damaged === true ? 'Yes — do not charge, do not fly' : 'No' },

@@ -7,7 +7,7 @@ import { CheckboxField, CheckboxGroup, Field, SelectField } from '../../../compo
 import { Notice } from '../../../components/notice';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
 import { assetTypes, assetTypeTitles, typesWithFirmware, type AssetType, type AssetView } from '../../../lib/assets';
-import { shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
+import { formatWattHours, shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
 import { calibrationState, dueOnForPlan, todayIn } from '../../../lib/calibration';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits, formatCalendarDate, formatNumber } from '../../../lib/format';
@@ -79,7 +79,7 @@ function SpecFields({ type }: { type: AssetType }) {
               'Enter the voltage and capacity to see the energy and shipping class.'
             ) : (
               <>
-                <strong>{formatNumber(wh)} Wh</strong> — {shippingClassText[shippingClass(wh, v.damaged)]}
+                <strong>{formatWattHours(wh)}</strong> — {shippingClassText[shippingClass(wh, v.damaged)]}
               </>
             )}
           </p>

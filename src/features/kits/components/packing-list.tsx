@@ -1,15 +1,17 @@
 import { assetTypeTitles } from '../../../lib/assets';
+import { useDateFormat } from '../../../lib/format';
 import type { KitWithMembers } from '../api/types';
 
 /** The printable packing list: hidden on screen, the only thing printed from the kit page. */
 export function PackingList({ kit, organizationName }: { kit: KitWithMembers; organizationName: string }) {
+  const { date } = useDateFormat();
   const tick = <span aria-hidden="true" className="inline-block size-5 border-2 border-ink-900" />;
   return (
     <section aria-label="Packing list (printed)" className="hidden text-black print:block">
       <h2 className="text-2xl font-bold">Packing list · {kit.name}</h2>
       <p className="mb-4 text-sm">
         {organizationName} · {kit.members.length} {kit.members.length === 1 ? 'item' : 'items'} · printed{' '}
-        {new Date().toLocaleDateString()}
+        {date(new Date())}
       </p>
       <table className="w-full border-collapse text-left text-sm">
         <thead>

@@ -4,7 +4,7 @@ import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { BatteryCaution } from '../../../components/safety-cautions';
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
-import { shippingClassText, type ShippingClass } from '../../../lib/batteries';
+import { formatWattHours, shippingClassText, type ShippingClass } from '../../../lib/batteries';
 import { formatNumber } from '../../../lib/format';
 import { shippingSheetPdfUrl, useShippingSheet } from '../api/get-shipping-sheet';
 
@@ -16,7 +16,7 @@ const classTone: Record<ShippingClass, StatusTone> = {
 };
 const classShort: Record<ShippingClass, string> = {
   up_to_100_wh: 'Up to 100 Wh',
-  over_100_to_160_wh: '100–160 Wh',
+  over_100_to_160_wh: 'Over 100 to 160 Wh',
   over_160_wh: 'Over 160 Wh',
   damaged_do_not_fly: 'Damaged',
 };
@@ -60,7 +60,7 @@ export function ShippingSheetPanel({ kitId }: { kitId: string }) {
                       <td className="px-2 py-1.5 font-mono font-semibold">{line.assetTag}</td>
                       <td className="px-2 py-1.5 text-right">{formatNumber(line.nominalVoltageV, 2)} V</td>
                       <td className="px-2 py-1.5 text-right">{formatNumber(line.ratedCapacityAh, 3)} Ah</td>
-                      <td className="px-2 py-1.5 text-right font-semibold">{formatNumber(line.wattHours)} Wh</td>
+                      <td className="px-2 py-1.5 text-right font-semibold">{formatWattHours(line.wattHours)}</td>
                       <td className="px-2 py-1.5">
                         <StatusChip tone={classTone[line.class]} label={classShort[line.class]} title={shippingClassText[line.class]} />
                       </td>
@@ -72,7 +72,7 @@ export function ShippingSheetPanel({ kitId }: { kitId: string }) {
                     <th scope="row" colSpan={3} className="px-2 py-1.5 text-left">
                       Total, {sheet.data.count} {sheet.data.count === 1 ? 'battery' : 'batteries'}
                     </th>
-                    <td className="px-2 py-1.5 text-right">{formatNumber(sheet.data.totalWattHours)} Wh</td>
+                    <td className="px-2 py-1.5 text-right">{formatWattHours(sheet.data.totalWattHours)}</td>
                     <td />
                   </tr>
                 </tfoot>

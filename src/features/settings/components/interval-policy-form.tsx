@@ -60,7 +60,8 @@ function Explanation({ values, saved }: { values: Values; saved: IntervalPolicy 
   return (
     <p className="text-sm text-ink-700" aria-live="polite">
       After {n} in-tolerance result{n === 1 ? '' : 's'} in a row the suggested interval grows by ×{formatNumber(f, 3)}; after an
-      out-of-tolerance result it shrinks by ×{formatNumber(s, 3)}. The owner accepts or declines each suggestion.
+      out-of-tolerance result it shrinks by ×{formatNumber(s, 3)}, within the range below; a suggestion never moves against the
+      result, so an interval outside the range is left to a person. The owner accepts or declines each suggestion.
     </p>
   );
 }

@@ -45,7 +45,7 @@ try {
   const url = await ensureDatabase(startCluster({ dataDir, port: await freePort(), log }), 'nestkeeper');
   const port = await freePort();
   const env = { ...process.env, DATABASE_URL: url, JWT_SECRET: 'bench-secret-bench-secret-bench-secret', PORT: String(port), START_LOCAL_FAKES: 'false', RUN_SCHEDULER: 'false', NODE_ENV: 'production' };
-  runTs('server/db/prepare.ts', env);
+  runTs('server/prepare.ts', env);
   env.BENCH_ASSETS = String(suite.assets ?? 20_000);
   runTs('server/seed/seed-bench-fleet.ts', env);
   for (const seed of suite.seed) runTs(seed, env);

@@ -23,7 +23,7 @@ async function main() {
     env.JWT_SECRET ??= localJwtSecret(clusterDir);
   }
   if (!env.JWT_SECRET) throw new Error('Set JWT_SECRET (32+ characters) when DATABASE_URL points at your own PostgreSQL.');
-  runTs('server/db/prepare.ts', env);
+  runTs('server/prepare.ts', env);
 
   const tsx = ['--import', 'tsx'];
   if (dev) {

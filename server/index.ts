@@ -4,7 +4,7 @@ import type { Server } from 'node:http';
 import type { DataSource } from 'typeorm';
 import { buildApp } from './app';
 import { readConfig, type Config } from './config';
-import { createDataSource } from './db/data-source';
+import { openDataSource } from './data-source';
 import { startLocalFakes } from './fakes/local-fakes';
 import { createMailTransport } from './notifications/mail-transport';
 import { createPaymentClient } from './billing/payment-client';
@@ -17,7 +17,7 @@ import { restoreHoldsOnLocalFake } from './seed/demo-holds';
  * workers share the port (the app is stateless, so they are interchangeable).
  */
 async function serve(config: Config) {
-  const db = await createDataSource(config.DATABASE_URL).initialize();
+  const db = await openDataSource(config.DATABASE_URL).initialize();
   const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config, { paymentWebhookUrl: webhookUrl(config) }) : null;
   const mail = createMailTransport(config);
   const { app, jobs } = buildApp({ config, db, mail });
@@ -44,7 +44,7 @@ async function serve(config: Config) {
 async function supervise(config: Config) {
   const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config, { paymentWebhookUrl: webhookUrl(config) }) : null;
   if (fakes) {
-    const db = await createDataSource(config.DATABASE_URL, 1).initialize();
+    const db = await openDataSource(config.DATABASE_URL, 1).initialize();
     await restoreLocalHolds(config, db, fakes.paymentPort).finally(() => db.destroy());
   }
   const workerEnv = { START_LOCAL_FAKES: 'false' };

@@ -1,8 +1,7 @@
 import { Column, CreateDateColumn, Entity, Exclusion, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import type { BookingPurpose, BookingState } from '../../shared/schemas/bookings';
 import { OrgOwned } from '../db/org-owned';
-import { Asset } from '../fleet/asset.entity';
-import { Kit } from '../fleet/kit.entity';
+import type { AssetRecord, KitRecord } from '../fleet';
 import { Job } from './job.entity';
 
 export type ChecklistLine = { assetId: string; present: boolean; condition: 'good' | 'worn' | 'damaged'; note?: string };
@@ -41,9 +40,9 @@ export class Booking extends OrgOwned {
   @Column({ name: 'kit_id', type: 'uuid', nullable: true })
   kitId: string | null;
 
-  @ManyToOne(() => Kit, { onDelete: 'SET NULL', nullable: true })
+  @ManyToOne('Kit', { onDelete: 'SET NULL', nullable: true })
   @JoinColumn({ name: 'kit_id' })
-  kit?: Kit | null;
+  kit?: KitRecord | null;
 
   @Column({ type: 'text', nullable: true })
   note: string | null;
@@ -111,9 +110,9 @@ export class BookingItem extends OrgOwned {
   @Column({ name: 'asset_id', type: 'uuid' })
   assetId: string;
 
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
+  @ManyToOne('Asset', { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
+  asset?: AssetRecord;
 
   @Column({ name: 'starts_on', type: 'date' })
   startsOn: string;

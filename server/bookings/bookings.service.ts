@@ -1,12 +1,11 @@
-import { In, type DataSource } from 'typeorm';
+import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { blockReasonText } from '../../shared/bookings/rules';
 import type { availabilityQuery, BookingPayload, bookingListQuery, BookingPurpose } from '../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
-import { Asset } from '../fleet/asset.entity';
-import { Kit } from '../fleet/kit.entity';
+import { assetsByIds, getKit, kitMembers, type AssetRecord } from '../fleet';
 import { AppError, conflict, notFound, ruleBroken } from '../http/errors';
 import { availableAssets, blockedItems, conflictingItems } from './booking-queries';
 import { Booking, BookingItem } from './booking.entity';
@@ -26,7 +25,7 @@ export async function bookingRentals(tx: Scoped, bookings: Pick<Booking, 'rental
 }
 
 export type BookingView = ReturnType<typeof bookingView>;
-export const bookingView = (b: Booking, items: Pick<Asset, 'id' | 'assetTag' | 'type' | 'status'>[], rentals: Map<string, RentalLabel>) => ({
+export const bookingView = (b: Booking, items: Pick<AssetRecord, 'id' | 'assetTag' | 'type' | 'status'>[], rentals: Map<string, RentalLabel>) => ({
   id: b.id,
   state: b.state,
   purpose: b.purpose,
@@ -54,7 +53,7 @@ export const bookingView = (b: Booking, items: Pick<Asset, 'id' | 'assetTag' | '
 /** Items of the booking, in packing-list order. */
 export async function bookingAssets(tx: Scoped, bookingIds: string[]) {
   if (!bookingIds.length) return [];
-  return tx.sql<{ bookingId: string; id: string; assetTag: string; type: Asset['type']; status: Asset['status'] }>(
+  return tx.sql<{ bookingId: string; id: string; assetTag: string; type: AssetRecord['type']; status: AssetRecord['status'] }>(
     `SELECT bi.booking_id AS "bookingId", a.id, a.asset_tag AS "assetTag", a.type, a.status
        FROM booking_items bi JOIN assets a ON a.id = bi.asset_id
       WHERE bi.organization_id = $1 AND bi.booking_id = ANY($2) ORDER BY a.type, a.asset_tag`,
@@ -182,11 +181,11 @@ export class BookingsService {
   private async resolveAssets(tx: Scoped, assetIds: string[], kitId?: string) {
     const ids = new Set(assetIds);
     if (kitId) {
-      await tx.get(Kit, { id: kitId }, 'That kit');
-      for (const m of await tx.find(Asset, { where: { kitId } })) ids.add(m.id);
+      await getKit(tx, kitId);
+      for (const m of await kitMembers(tx, kitId)) ids.add(m.id);
       if (ids.size === 0) throw ruleBroken('kit_empty', 'That kit has no members to book.');
     }
-    const found = await tx.find(Asset, { where: { id: In([...ids]) } });
+    const found = await assetsByIds(tx, [...ids]);
     const missing = [...ids].filter((id) => !found.some((a) => a.id === id));
     if (missing.length) throw notFound(`Asset ${missing[0]}`);
     return [...ids];
@@ -213,6 +212,6 @@ export class BookingsService {
   private async typesOf(tx: Scoped, assetIds: string[]) {
     const unique = [...new Set(assetIds)];
     if (!unique.length) return [];
-    return (await tx.find(Asset, { where: { id: In(unique) } })).map((a) => ({ assetId: a.id, type: a.type as string }));
+    return (await assetsByIds(tx, unique)).map((a) => ({ assetId: a.id, type: a.type as string }));
   }
 }

@@ -1,4 +1,4 @@
-import { In, type DataSource } from 'typeorm';
+import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { blockReasonText } from '../../shared/bookings/rules';
 import type { checklistPayload } from '../../shared/schemas/bookings';
@@ -6,8 +6,7 @@ import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { handoverSheetPdf } from '../documents/handover-sheet-pdf';
-import { Asset } from '../fleet/asset.entity';
-import { CustodyEvent } from '../fleet/custody-event.entity';
+import { assetsByIds, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
 import { AppError, ruleBroken } from '../http/errors';
 import { openIncident } from '../incidents/incidents.service';
 import { loadOrgContext } from '../organizations/org-context';
@@ -51,8 +50,7 @@ export class HandoverService {
       await this.gates.beforeCheckout?.(tx, booking);
       const taker = await this.counterpart(tx, input.counterpart);
       const now = new Date();
-      await tx.updateWhere(Asset, { id: In(assets.map((a) => a.id)) }, { status: 'out' });
-      await tx.insertMany(CustodyEvent, assets.map((a) => ({ assetId: a.id, kind: 'checked_out' as const, actorUserId: actor.userId, holder: taker.name, location: null, bookingId: id, note: noteFor(input.checklist, a.id) })));
+      await moveAssets(tx, actor, assets.map((a) => a.id), 'out', { why: (assetId) => noteFor(input.checklist, assetId), bookingId: id, where: null, counterpart: taker.name });
       Object.assign(booking, { state: 'out', checkedOutAt: now, handedOverBy: actor.userId, takenBy: taker.name, takenByUserId: taker.userId, checkoutChecklist: input.checklist as ChecklistLine[] });
       await tx.save(Booking, booking);
       await recordAudit(tx, actor, 'booking.checked_out', { type: 'booking', id }, { takenBy: taker.name, items: assets.length });
@@ -83,13 +81,12 @@ export class HandoverService {
           });
           incidents.push({ assetId: asset.id, incidentId: incident.id });
         }
-        if (line.present) {
-          await tx.insert(CustodyEvent, { assetId: asset.id, kind: 'returned', actorUserId: actor.userId, holder: ctx.name, location: asset.location, bookingId: id, note: line.note ?? null });
-        }
       }
-      // Items that came back fine are ready again, unless something else holds them (a failed field check, say).
-      const fine = input.checklist.filter((l) => l.present && l.condition !== 'damaged').map((l) => l.assetId);
-      if (fine.length) await tx.updateWhere(Asset, { id: In(fine), status: 'out' }, { status: 'ready' });
+      // Back at the counter: ready again if simply out; still held if something holds it (this damage, a failed field check).
+      const back = await lockAssets(tx, input.checklist.filter((l) => l.present).map((l) => l.assetId));
+      const custody = { why: (assetId: string) => input.checklist.find((l) => l.assetId === assetId)?.note ?? null, bookingId: id, counterpart: ctx.name };
+      await moveAssets(tx, actor, back.filter((a) => a.status === 'out').map((a) => a.id), 'ready', custody);
+      await noteCustody(tx, actor, back.filter((a) => a.status !== 'out').map((a) => a.id), 'returned', custody);
       Object.assign(booking, { state: 'returned', returnedAt: now, receivedBy: actor.userId, broughtBackBy: bringer.name, returnChecklist: input.checklist as ChecklistLine[] });
       await tx.save(Booking, booking);
       await tx.updateWhere(BookingItem, { bookingId: id }, { active: false });
@@ -104,7 +101,7 @@ export class HandoverService {
       const ctx = await loadOrgContext(tx);
       const booking = await tx.get(Booking, { id }, 'That booking', { relations: { job: true, kit: true } });
       const ids = (await tx.find(BookingItem, { where: { bookingId: id } })).map((i) => i.assetId);
-      const items = await tx.find(Asset, { where: { id: In(ids) }, order: { type: 'ASC', assetTag: 'ASC' } });
+      const items = await assetsByIds(tx, ids, { packingOrder: true });
       const rental = booking.rentalId ? (await tx.sql<{ number: string; company: string }>(`SELECT r.number, c.company FROM rentals r JOIN customers c ON c.id = r.customer_id WHERE r.organization_id = $1 AND r.id = $2`, [booking.rentalId]))[0] : undefined;
       const title = booking.job ? `Job ${booking.job.reference}, ${booking.job.customerName}` : rental ? `Rental ${rental.number}, ${rental.company}` : `${booking.purpose} booking`;
       return handoverSheetPdf(
@@ -117,7 +114,7 @@ export class HandoverService {
   /** The checklist must name exactly the booking's items. */
   private async walk(tx: Scoped, booking: Booking, checklist: ChecklistLine[]) {
     const ids = (await tx.find(BookingItem, { where: { bookingId: booking.id } })).map((i) => i.assetId);
-    const assets = await tx.find(Asset, { where: { id: In(ids) } });
+    const assets = await assetsByIds(tx, ids);
     const listed = new Set(checklist.map((l) => l.assetId));
     const unticked = assets.filter((a) => !listed.has(a.id));
     const strangers = checklist.filter((l) => !ids.includes(l.assetId));
@@ -139,7 +136,7 @@ export class HandoverService {
   }
 }
 
-const tags = (assets: Asset[], lines: { assetId: string }[]) => lines.map((l) => assets.find((a) => a.id === l.assetId)?.assetTag).join(', ');
+const tags = (assets: AssetRecord[], lines: { assetId: string }[]) => lines.map((l) => assets.find((a) => a.id === l.assetId)?.assetTag).join(', ');
 const noteFor = (checklist: ChecklistLine[], assetId: string) => {
   const line = checklist.find((l) => l.assetId === assetId);
   return line ? `${line.condition}${line.note ? `: ${line.note}` : ''}` : null;

@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { AsFound, IntervalChange } from '../../shared/calibration/interval-review';
 import { OrgOwned } from '../db/org-owned';
-import { AssetBound } from '../fleet/asset-bound';
+import { AssetBound } from '../fleet';
 
 /** A certificate PDF, kept in PostgreSQL so every app instance can serve it. */
 @Entity({ name: 'certificate_files' })

@@ -6,8 +6,7 @@ import type { calibrationEventFields } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, type Actor } from '../db/transaction';
 import { describeActiveContent, inspectPdf } from '../documents/pdf-inspection';
-import { Asset } from '../fleet/asset.entity';
-import { CustodyEvent } from '../fleet/custody-event.entity';
+import { getAsset, lockAssets, moveAssets, noteCustody, updateCalibrationPlan } from '../fleet';
 import { Hold } from '../holds/hold.entity';
 import { releaseHold } from '../holds/holds.service';
 import { AppError, ruleBroken } from '../http/errors';
@@ -68,7 +67,7 @@ export class CalibrationService {
     await refuseUnlessPlainPdf(file);
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const asset = await tx.get(Asset, { id: assetId }, 'That asset');
+      const [asset] = await lockAssets(tx, [assetId]);
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
       if (fields.performedOn > ctx.today) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { performedOn: 'cannot be in the future' } });
       const stored = await tx.insert(CertificateFile, { fileName: file.originalname.slice(0, 200), sizeBytes: file.size, data: file.buffer });
@@ -95,11 +94,10 @@ export class CalibrationService {
       });
       // The newest calibration sets the plan; an older certificate entered late only joins the history.
       if (!asset.lastCalibratedOn || fields.performedOn >= asset.lastCalibratedOn) {
-        Object.assign(asset, { calibrationRequired: true, lastCalibratedOn: fields.performedOn, calibrationIntervalMonths: intervalMonths, calibrationProvider: fields.provider, dueOn: event.dueOn, notifiedCalibrationState: null });
+        await updateCalibrationPlan(tx, assetId, { calibrationRequired: true, lastCalibratedOn: fields.performedOn, calibrationIntervalMonths: intervalMonths, calibrationProvider: fields.provider, dueOn: event.dueOn, notifiedCalibrationState: null });
       }
       const wasAtLab = asset.status === 'at_lab';
       if (wasAtLab) {
-        asset.status = 'ready';
         const [item] = await tx.sql<{ id: string; lab_trip_id: string }>(
           `SELECT i.id, i.lab_trip_id FROM lab_trip_items i JOIN lab_trips t ON t.id = i.lab_trip_id WHERE i.organization_id = $1 AND i.asset_id = $2 AND i.received_on IS NULL AND t.state = 'at_lab' LIMIT 1`,
           [assetId],
@@ -116,13 +114,17 @@ export class CalibrationService {
           }
         }
       }
-      await tx.save(Asset, asset);
-      await tx.insert(CustodyEvent, { assetId, kind: wasAtLab ? 'back_from_lab' : 'calibrated', actorUserId: actor.userId, holder: ctx.name, location: asset.location, bookingId: null, note: `Certificate ${fields.certificateNumber} from ${fields.provider}` });
+      const custody = { why: `Certificate ${fields.certificateNumber} from ${fields.provider}`, counterpart: ctx.name };
+      if (wasAtLab) await moveAssets(tx, actor, [assetId], 'ready', custody);
+      else await noteCustody(tx, actor, [assetId], 'calibrated', custody);
       await recordAudit(tx, actor, 'calibration.recorded', { type: 'asset', id: assetId }, { eventId: event.id, asFound: fields.asFound, asLeft: fields.asLeft, dueOn: event.dueOn });
       if (fields.asFound === 'out_of_tolerance') await openImpactReview(tx, actor, asset, { trigger: 'calibration', triggerId: event.id, foundOn: fields.performedOn });
       const hold = await tx.findOne(Hold, { assetId, releasedAt: IsNull() });
       if (hold && fields.asLeft === 'in_tolerance' && fields.performedOn >= calendarDayIn(hold.startedAt, ctx.timeZone)) {
-        await releaseHold(tx, actor, asset, hold, [{ kind: 'calibration', id: event.id, performedAt: fields.performedOn }], `Calibrated: certificate ${fields.certificateNumber}`);
+        await releaseHold(tx, actor, hold, [{ kind: 'calibration', id: event.id, performedAt: fields.performedOn }], `Calibrated: certificate ${fields.certificateNumber}`);
+      } else if (hold && wasAtLab) {
+        // Back from the lab without the evidence that ends its hold: it stays held, not bookable.
+        await moveAssets(tx, actor, [assetId], 'held', { why: `Still on hold: ${hold.summary}`, details: { holdId: hold.id } });
       }
       return eventView(event);
     });
@@ -130,7 +132,7 @@ export class CalibrationService {
 
   list(actor: Actor, assetId: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      await tx.get(Asset, { id: assetId }, 'That asset');
+      await getAsset(tx, assetId);
       return listReply((await tx.find(CalibrationEvent, { where: { assetId }, order: { performedOn: 'DESC', createdAt: 'DESC' } })).map(eventView));
     });
   }
@@ -157,12 +159,9 @@ export class CalibrationService {
       if (event.suggestedChange === 'outside_policy') throw ruleBroken('interval_outside_policy', `There is no suggestion to decide: ${event.suggestionReason}`);
       event.intervalDecision = decision === 'accept' ? 'accepted' : 'declined';
       await tx.manager.save(CalibrationEvent, event);
-      const asset = await tx.get(Asset, { id: event.assetId }, 'That asset');
+      const asset = await getAsset(tx, event.assetId);
       if (decision === 'accept' && asset.lastCalibratedOn === event.performedOn) {
-        asset.calibrationIntervalMonths = event.suggestedIntervalMonths;
-        asset.dueOn = dueDate(event.performedOn, event.suggestedIntervalMonths);
-        asset.notifiedCalibrationState = null;
-        await tx.save(Asset, asset);
+        await updateCalibrationPlan(tx, asset.id, { calibrationIntervalMonths: event.suggestedIntervalMonths, dueOn: dueDate(event.performedOn, event.suggestedIntervalMonths), notifiedCalibrationState: null });
       }
       await recordAudit(tx, actor, 'calibration.interval_' + event.intervalDecision, { type: 'asset', id: event.assetId }, {
         eventId,

@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { OrgOwned } from '../db/org-owned';
-import { AssetBound } from '../fleet/asset-bound';
+import { AssetBound } from '../fleet';
 
 export type ImpactAssessment = 'no_effect' | 'customer_notified' | 'remeasure_offered';
 

@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
-import { Asset } from '../fleet/asset.entity';
+import { getAsset, type AssetRecord } from '../fleet';
 import { ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications/outbox';
 import { staffAddresses } from '../notifications/staff';
@@ -28,7 +28,7 @@ async function lastPassingEvidence(tx: Scoped, assetId: string, foundOn: string,
  * transaction: every booking that took it out between its last passing
  * evidence and the finding, both days included.
  */
-export async function openImpactReview(tx: Scoped, actor: Actor, asset: Asset, found: { trigger: 'calibration' | 'check'; triggerId: string; foundOn: string }) {
+export async function openImpactReview(tx: Scoped, actor: Actor, asset: Pick<AssetRecord, 'id' | 'assetTag'>, found: { trigger: 'calibration' | 'check'; triggerId: string; foundOn: string }) {
   const since = await lastPassingEvidence(tx, asset.id, found.foundOn, found.trigger === 'check' ? found.triggerId : undefined);
   const review = await tx.insert(ImpactReview, { assetId: asset.id, trigger: found.trigger, triggerId: found.triggerId, since, foundOn: found.foundOn, state: 'open', closedAt: null });
   const bookings = await tx.sql<{ bookingId: string }>(
@@ -81,7 +81,7 @@ export class ImpactService {
   /** GET /api/assets/:id/impact — the item's latest review. */
   forAsset(actor: Actor, assetId: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      await tx.get(Asset, { id: assetId }, 'That asset');
+      await getAsset(tx, assetId);
       const review = await tx.findOne(ImpactReview, { assetId }, { order: { createdAt: 'DESC' }, relations: { asset: true } });
       if (!review) return { since: null, foundOn: null, state: 'none', bookings: [] };
       return this.view(tx, review);

@@ -1,4 +1,4 @@
-import { In, type DataSource } from 'typeorm';
+import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { bookingDays } from '../../shared/bookings/rules';
 import { addDays } from '../../shared/calibration/due-date';
@@ -8,8 +8,7 @@ import { Booking, BookingItem } from '../bookings/booking.entity';
 import { conflictingItems } from '../bookings/booking-queries';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
-import { Asset } from '../fleet/asset.entity';
-import { CustodyEvent } from '../fleet/custody-event.entity';
+import { assetsByIds, getAsset, moveAssets } from '../fleet';
 import { conflict, ruleBroken } from '../http/errors';
 import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations/org-context';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
@@ -33,7 +32,7 @@ export class LabService {
   windows(actor: Actor, assetId: string) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const asset = await tx.get(Asset, { id: assetId }, 'That asset');
+      const asset = await getAsset(tx, assetId);
       const days = turnaround(ctx, asset.calibrationProvider);
       const busy = await tx.sql<Busy>(
         `SELECT b.id AS "bookingId", to_char(bi.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(bi.ends_on, 'YYYY-MM-DD') AS "endsOn", b.purpose, j.reference AS "jobReference"
@@ -79,15 +78,12 @@ export class LabService {
       const trip = await tx.get(LabTrip, { id: tripId }, 'That lab trip');
       if (trip.state !== 'planned') throw ruleBroken('lab_trip_state', `This trip is already ${trip.state === 'at_lab' ? 'at the lab' : 'back'}.`);
       const items = await tx.find(LabTripItem, { where: { labTripId: tripId } });
-      const assets = await tx.find(Asset, { where: { id: In(items.map((i) => i.assetId)) } });
-      const out = assets.filter((a) => a.status === 'out' || a.status === 'retired');
-      if (out.length) throw ruleBroken('lab_trip_blocked', `Not in the shop to send: ${out.map((a) => `${a.assetTag} (${a.status})`).join(', ')}.`);
-      await tx.updateWhere(Asset, { id: In(assets.map((a) => a.id)) }, { status: 'at_lab' });
-      await tx.insertMany(CustodyEvent, assets.map((a) => ({ assetId: a.id, kind: 'sent_to_lab' as const, actorUserId: actor.userId, holder: trip.provider, location: trip.provider, bookingId: trip.bookingId, note: `Expected back ${trip.expectedBackOn}` })));
+      // Only what is in the shop (ready or held) may leave for the lab: custody.ts refuses the rest.
+      const moved = await moveAssets(tx, actor, items.map((i) => i.assetId), 'at_lab', { why: `Expected back ${trip.expectedBackOn}`, bookingId: trip.bookingId, where: trip.provider, counterpart: trip.provider });
       trip.state = 'at_lab';
       await tx.save(LabTrip, trip);
       if (trip.bookingId) await tx.updateWhere(Booking, { id: trip.bookingId }, { state: 'out', checkedOutAt: new Date(), handedOverBy: actor.userId, takenBy: trip.provider });
-      await recordAudit(tx, actor, 'lab_trip.sent', { type: 'lab_trip', id: tripId }, { assets: assets.map((a) => a.assetTag) });
+      await recordAudit(tx, actor, 'lab_trip.sent', { type: 'lab_trip', id: tripId }, { assets: moved.map((a) => a.assetTag) });
       return this.view(tx, trip);
     });
   }
@@ -100,7 +96,7 @@ export class LabService {
   }
 
   private async assets(tx: Scoped, ids: string[]) {
-    const assets = await tx.find(Asset, { where: { id: In(ids) } });
+    const assets = await assetsByIds(tx, ids);
     if (assets.length !== new Set(ids).size) throw ruleBroken('unknown_asset', 'One of those items is not in your fleet.');
     const retired = assets.filter((a) => a.status === 'retired');
     if (retired.length) throw ruleBroken('asset_retired', `Retired: ${retired.map((a) => a.assetTag).join(', ')}.`);

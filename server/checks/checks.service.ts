@@ -11,7 +11,7 @@ import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { listReply } from '../http/list-reply';
-import { Asset } from '../fleet/asset.entity';
+import { findAsset, getAsset, type AssetRecord } from '../fleet';
 import { AppError, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
 import { openImpactReview } from '../calibration/impact.service';
@@ -24,7 +24,7 @@ import { FieldCheck } from './field-check.entity';
 const badField = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { [field]: message } });
 
 async function assetOfType(tx: Scoped, id: string, type: AssetType, field: string) {
-  const asset = await tx.findOne(Asset, { id });
+  const asset = await findAsset(tx, id);
   if (!asset) throw badField(field, 'is not an asset of your fleet');
   if (asset.type !== type) throw badField(field, `is a ${assetTypeTitles[asset.type].toLowerCase()}, not a ${assetTypeTitles[type].toLowerCase()}`);
   if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
@@ -32,7 +32,7 @@ async function assetOfType(tx: Scoped, id: string, type: AssetType, field: strin
 }
 
 /** The computation for each kind: results to store, the number the decision judges, and inputs worth keeping. */
-async function compute(tx: Scoped, input: CheckPayload, subject: Asset) {
+async function compute(tx: Scoped, input: CheckPayload, subject: AssetRecord) {
   switch (input.kind) {
     case 'tip_validation': {
       const positions = (subject.specs.positions as TipPosition[] | undefined) ?? [];
@@ -167,14 +167,14 @@ export class ChecksService {
 
   /** Per mounting position: validated only when the latest validation in that position passed. */
   tipStatus(actor: Actor, assetId: string) {
-    return inOrganization(this.db, actor.organizationId, async (tx) => tipValidationStatus(tx, await tx.get(Asset, { id: assetId }, 'That asset')));
+    return inOrganization(this.db, actor.organizationId, async (tx) => tipValidationStatus(tx, await getAsset(tx, assetId)));
   }
 }
 
 /** A tip position in kit a technician carries now or next whose latest validation did not pass (or is missing). */
 export type CheckToDo = { assetId: string; assetTag: string; position: string; lastDecision: string | null; lastCheckedAt: string | null; bookingId: string; startsOn: string; bookingState: string };
 
-export async function tipValidationStatus(tx: Scoped, tip: Asset) {
+export async function tipValidationStatus(tx: Scoped, tip: AssetRecord) {
   const positions = (tip.specs.positions as TipPosition[] | undefined) ?? [];
   const latest = await tx.sql<{ position: string; decision: string; performedAt: Date; id: string }>(
     `SELECT DISTINCT ON (position) position, decision, performed_at AS "performedAt", id FROM field_checks

@@ -1,8 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { Decision, DecisionRule } from '../../shared/checks/decision';
 import type { CheckKind } from '../../shared/schemas/checks';
-import { AssetBound } from '../fleet/asset-bound';
-import { Asset } from '../fleet/asset.entity';
+import { AssetBound, type AssetRecord } from '../fleet';
 
 /** A measurement taken in the field to confirm an item still performs (DESIGN.md §3):
  * its inputs, the computed results and the decision, as recorded. */
@@ -20,9 +19,9 @@ export class FieldCheck extends AssetBound {
   @Column({ name: 'related_asset_id', type: 'uuid', nullable: true })
   relatedAssetId: string | null;
 
-  @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: true })
+  @ManyToOne('Asset', { onDelete: 'RESTRICT', nullable: true })
   @JoinColumn({ name: 'related_asset_id' })
-  relatedAsset?: Asset | null;
+  relatedAsset?: AssetRecord | null;
 
   /** Tip mounting position (tip validations only). */
   @Column({ type: 'text', nullable: true })

@@ -1,13 +1,13 @@
 import 'reflect-metadata';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { DataSource } from 'typeorm';
-import { entities } from './entities';
+import { DataSource, type DataSourceOptions } from 'typeorm';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
-/** The schema comes only from migrations/ (never synchronize). */
-export function createDataSource(url: string, poolSize = 10): DataSource {
+/** The schema comes only from migrations/ (never synchronize). The entities come from the
+ * composition at the top (server/data-source.ts): db/ knows no component. */
+export function createDataSource(url: string, entities: DataSourceOptions['entities'], poolSize = 10): DataSource {
   return new DataSource({
     type: 'postgres',
     url,
@@ -21,6 +21,3 @@ export function createDataSource(url: string, poolSize = 10): DataSource {
     extra: { max: poolSize },
   });
 }
-
-/** For the TypeORM CLI (`npm run migration:generate`). */
-export default createDataSource(process.env.DATABASE_URL ?? 'postgres://localhost/nestkeeper');

@@ -1,5 +1,4 @@
 import { Column, Index, JoinColumn, ManyToOne } from 'typeorm';
-import { Organization } from '../organizations/organization.entity';
 
 /** Every business row belongs to one organization. Entities extend this so
  * the scoped manager (db/scoped.ts) can add the organization to every query. */
@@ -8,7 +7,8 @@ export abstract class OrgOwned {
   @Column({ name: 'organization_id', type: 'uuid' })
   organizationId: string;
 
-  @ManyToOne(() => Organization, { onDelete: 'RESTRICT', nullable: false })
+  // By name, so db/ knows no component: the organizations component registers the entity.
+  @ManyToOne('Organization', { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'organization_id' })
-  organization?: Organization;
+  organization?: unknown;
 }

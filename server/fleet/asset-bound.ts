@@ -1,5 +1,6 @@
 import { Column, JoinColumn, ManyToOne } from 'typeorm';
 import { OrgOwned } from '../db/org-owned';
+import type { AssetRecord } from './asset-records';
 import { Asset } from './asset.entity';
 
 /** A record about one asset (a check, a hold, an incident, a calibration…): the
@@ -10,5 +11,5 @@ export abstract class AssetBound extends OrgOwned {
 
   @ManyToOne(() => Asset, { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'asset_id' })
-  asset?: Asset;
+  asset?: AssetRecord;
 }

@@ -8,7 +8,7 @@ import { ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { Asset } from './asset.entity';
 import { parseAssetCsv, type ImportError } from './asset-csv';
-import { CustodyEvent } from './custody-event.entity';
+import { noteCustody } from './custody';
 import { Kit } from './kit.entity';
 
 const MAX_ERRORS_SHOWN = 500;
@@ -86,7 +86,7 @@ export async function importAssetsCsv(db: DataSource, actor: Actor, text: string
         };
       }),
     );
-    await tx.insertMany(CustodyEvent, ids.map((assetId, i) => ({ assetId, kind: 'registered' as const, actorUserId: actor.userId, location: rows[i].payload.location ?? null, holder: ctx.name, note: 'Imported from CSV' })));
+    await noteCustody(tx, actor, ids, 'registered', { counterpart: ctx.name, why: 'Imported from CSV' });
     await tx.insertMany(AuditEvent, ids.map((id, i) => ({ actorUserId: actor.userId, action: 'asset.created', subjectType: 'asset', subjectId: id, details: { assetTag: rows[i].payload.assetTag, via: 'csv_import' } })));
     await recordAudit(tx, actor, 'assets.imported', { type: 'organization', id: actor.organizationId }, { count: ids.length, kitsCreated: kitNames.length });
     return { ...summary, created: ids.length };

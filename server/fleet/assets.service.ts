@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import { dueOnForPlan } from '../../shared/calibration/due-date';
 import {
   specsByType,
+  type AssetStatus,
   typesWithFirmware,
   type AssetListQuery,
   type CreateAssetPayload,
@@ -15,7 +16,7 @@ import { loadOrgContext } from '../organizations/org-context';
 import { Asset } from './asset.entity';
 import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
-import { CustodyEvent } from './custody-event.entity';
+import { moveAssets, noteCustody, statusWords } from './custody';
 import { listReply } from '../http/list-reply';
 
 const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
@@ -89,7 +90,7 @@ export class AssetsService {
           dueOn: dueOnForPlan({ required: plan.required, intervalMonths: plan.intervalMonths ?? null, lastCalibratedOn: plan.lastCalibratedOn ?? null }),
         }),
       );
-      await tx.insert(CustodyEvent, { assetId: asset.id, kind: 'registered', actorUserId: actor.userId, location: asset.location, holder: ctx.name, bookingId: null, note: null });
+      await noteCustody(tx, actor, [asset.id], 'registered', { counterpart: ctx.name });
       await recordAudit(tx, actor, 'asset.created', { type: 'asset', id: asset.id }, { assetTag: asset.assetTag, type: asset.type });
       return toAssetView(asset, ctx, this.publicUrl);
     });
@@ -120,8 +121,10 @@ export class AssetsService {
       }
       if (changes.assetTag || changes.rfidTag) await this.assertIdentityFree(tx, changes.assetTag ? asset.assetTag : null, changes.rfidTag ? asset.rfidTag : null, asset.id);
       if (Object.keys(changes).length === 0) return toAssetView(asset, ctx, this.publicUrl);
-      const saved = await this.saving(() => tx.save(Asset, asset));
-      if (changes.location) await tx.insert(CustodyEvent, { assetId: id, kind: 'moved', actorUserId: actor.userId, location: asset.location, holder: null, bookingId: null, note: null });
+      // Only the changed fields: the status is custody.ts's to write, even if it moved meanwhile.
+      await this.saving(() => tx.updateWhere(Asset, { id }, Object.fromEntries(Object.keys(changes).map((k) => [k, asset[k as keyof Asset]]))));
+      const saved = await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } });
+      if (changes.location) await noteCustody(tx, actor, [id], 'moved');
       await recordAudit(tx, actor, 'asset.updated', { type: 'asset', id }, { changes });
       return toAssetView(saved, ctx, this.publicUrl);
     });
@@ -132,13 +135,11 @@ export class AssetsService {
       const ctx = await loadOrgContext(tx);
       const asset = await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } });
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is already retired.`);
-      if (asset.status === 'out') throw ruleBroken('asset_out', `${asset.assetTag} is out on a job or rental; take it back in before retiring it.`);
       const formerKit = asset.kit?.name ?? null;
-      Object.assign(asset, { status: 'retired', retiredAt: new Date(), retiredReason: reason, kitId: null, kit: null });
-      const saved = await tx.save(Asset, asset);
-      await tx.insert(CustodyEvent, { assetId: id, kind: 'retired', actorUserId: actor.userId, location: asset.location, holder: null, bookingId: null, note: reason });
-      await recordAudit(tx, actor, 'asset.retired', { type: 'asset', id }, { reason, formerKit });
-      return toAssetView(saved, ctx, this.publicUrl);
+      // An item that is out cannot be retired (custody.ts): it comes back in first.
+      await moveAssets(tx, actor, [id], 'retired', { why: reason, details: { reason, formerKit } });
+      await tx.updateWhere(Asset, { id }, { retiredAt: new Date(), retiredReason: reason, kitId: null });
+      return toAssetView(await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } }), ctx, this.publicUrl);
     });
   }
 
@@ -223,6 +224,10 @@ function describeHistory(action: string, details: Record<string, unknown>): stri
     case 'retired':
       return 'Taken out of service for good';
     default:
+      // A status move (custody.ts audits each one with its from and to).
+      if (action.startsWith('asset.') && typeof details.from === 'string' && typeof details.to === 'string') {
+        return `Status ${statusWords[details.from as AssetStatus]} → ${statusWords[details.to as AssetStatus]}${details.note ? `: ${details.note}` : ''}`;
+      }
       return action.replace(/[._]/g, ' ');
   }
 }

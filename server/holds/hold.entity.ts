@@ -1,5 +1,5 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import { AssetBound } from '../fleet/asset-bound';
+import { AssetBound } from '../fleet';
 
 export type HoldReason = 'incident' | 'failed_check' | 'manual';
 

@@ -5,15 +5,14 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { ruleBroken } from '../http/errors';
 import { calendarDayIn } from '../../shared/calibration/due-date';
-import { Asset } from '../fleet/asset.entity';
+import { getAsset, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
 import { loadOrgContext } from '../organizations/org-context';
-import { CustodyEvent } from '../fleet/custody-event.entity';
 import { Hold, type HoldReason } from './hold.entity';
 import { listReply } from '../http/list-reply';
 
 /** Take an asset out of service inside the caller's transaction. A second
  * reason while already held is recorded on the audit trail, not as a new hold. */
-export async function placeHold(tx: Scoped, actor: Actor, asset: Asset, hold: { reason: HoldReason; summary: string; incidentId?: string; checkId?: string }) {
+export async function placeHold(tx: Scoped, actor: Actor, asset: Pick<AssetRecord, 'id'>, hold: { reason: HoldReason; summary: string; incidentId?: string; checkId?: string }) {
   const current = await tx.findOne(Hold, { assetId: asset.id, releasedAt: IsNull() });
   if (current) {
     await recordAudit(tx, actor, 'asset.hold_reason_added', { type: 'asset', id: asset.id }, { holdId: current.id, ...hold });
@@ -31,24 +30,26 @@ export async function placeHold(tx: Scoped, actor: Actor, asset: Asset, hold: { 
     releasedBy: null,
     releaseEvidence: null,
   });
-  await tx.updateWhere(Asset, { id: asset.id }, { status: 'held' });
-  await tx.insert(CustodyEvent, { assetId: asset.id, kind: 'held', actorUserId: actor.userId, holder: null, location: asset.location, bookingId: null, note: hold.summary });
-  await recordAudit(tx, actor, 'asset.held', { type: 'asset', id: asset.id }, { holdId: created.id, reason: hold.reason, summary: hold.summary });
+  await moveAssets(tx, actor, [asset.id], 'held', { why: hold.summary, details: { holdId: created.id, reason: hold.reason, summary: hold.summary } });
   return created;
 }
 
 type Evidence = { kind: string; id: string; performedAt: string; position?: string | null };
 
 /** End a hold on the given evidence, inside the caller's transaction. */
-export async function releaseHold(tx: Scoped, actor: Actor, asset: Asset, hold: Hold, evidence: Evidence[], note?: string) {
+export async function releaseHold(tx: Scoped, actor: Actor, hold: Hold, evidence: Evidence[], note?: string) {
   hold.releasedAt = new Date();
   hold.releasedBy = actor.userId;
   hold.releaseEvidence = { evidence, note: note ?? null };
   await tx.save(Hold, hold);
-  // Still at a customer's site (held from the field): it stays out until it comes back.
-  if (asset.status === 'held') await tx.updateWhere(Asset, { id: asset.id }, { status: 'ready' });
-  await tx.insert(CustodyEvent, { assetId: asset.id, kind: 'released', actorUserId: actor.userId, holder: null, location: asset.location, bookingId: null, note: note ?? null });
-  await recordAudit(tx, actor, 'asset.released', { type: 'asset', id: asset.id }, { holdId: hold.id, evidence });
+  const [asset] = await lockAssets(tx, [hold.assetId]);
+  if (asset.status === 'held') {
+    await moveAssets(tx, actor, [asset.id], 'ready', { why: note ?? null, details: { holdId: hold.id, evidence } });
+  } else {
+    // Not on hold in the register any more (sent to the lab while held, say): the release is recorded, the status stays.
+    await noteCustody(tx, actor, [asset.id], 'released', { why: note ?? null });
+    await recordAudit(tx, actor, 'asset.released', { type: 'asset', id: asset.id }, { holdId: hold.id, evidence });
+  }
 }
 
 export class HoldsService {
@@ -56,7 +57,7 @@ export class HoldsService {
 
   hold(actor: Actor, assetId: string, summary: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const asset = await tx.get(Asset, { id: assetId }, 'That asset');
+      const asset = await getAsset(tx, assetId);
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
       return this.view(await placeHold(tx, actor, asset, { reason: 'manual', summary }));
     });
@@ -64,7 +65,7 @@ export class HoldsService {
 
   current(actor: Actor, assetId: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      await tx.get(Asset, { id: assetId }, 'That asset');
+      await getAsset(tx, assetId);
       const holds = await tx.find(Hold, { where: { assetId }, order: { startedAt: 'DESC' }, take: 20 });
       return listReply(holds.map((h) => this.view(h)));
     });
@@ -73,7 +74,7 @@ export class HoldsService {
   /** Release only on evidence recorded after the hold began (DESIGN.md §3 "Hold"). */
   release(actor: Actor, assetId: string, note?: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const asset = await tx.get(Asset, { id: assetId }, 'That asset');
+      const asset = await getAsset(tx, assetId);
       const hold = await tx.findOne(Hold, { assetId, releasedAt: IsNull() });
       if (!hold) throw ruleBroken('not_held', `${asset.assetTag} is not on hold.`);
       const { timeZone } = await loadOrgContext(tx);
@@ -81,7 +82,7 @@ export class HoldsService {
       if (missing.length) {
         throw ruleBroken('release_needs_evidence', `${asset.assetTag} stays on hold: ${missing.join('; ')}.`, { missing, holdStartedAt: hold.startedAt.toISOString() });
       }
-      await releaseHold(tx, actor, asset, hold, evidence, note);
+      await releaseHold(tx, actor, hold, evidence, note);
       return this.view(hold);
     });
   }
@@ -92,7 +93,7 @@ export class HoldsService {
    * a calibration recorded after the hold began, dated on or after the firm's
    * calendar day the hold began on.
    */
-  private async evidenceSince(tx: Scoped, asset: Asset, since: Date, timeZone: string): Promise<{ evidence: Evidence[]; missing: string[] }> {
+  private async evidenceSince(tx: Scoped, asset: AssetRecord, since: Date, timeZone: string): Promise<{ evidence: Evidence[]; missing: string[] }> {
     const passing = await tx.sql<{ id: string; kind: string; position: string | null; performedAt: string }>(
       `SELECT id, kind, position, performed_at AS "performedAt" FROM field_checks
         WHERE organization_id = $1 AND asset_id = $2 AND decision = 'pass' AND performed_at >= $3 AND created_at > $3

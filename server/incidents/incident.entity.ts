@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import type { IncidentKind, IncidentState } from '../../shared/schemas/incidents';
 import { OrgOwned } from '../db/org-owned';
-import { AssetBound } from '../fleet/asset-bound';
+import { AssetBound } from '../fleet';
 
 /** A damage or loss report (DESIGN.md §3). Reporting one holds the asset. */
 @Entity({ name: 'incidents' })

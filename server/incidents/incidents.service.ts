@@ -4,7 +4,7 @@ import { incidentKindTitles, type IncidentKind, type incidentListQuery, type inc
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
-import { Asset } from '../fleet/asset.entity';
+import { findAsset, getAsset, markDamaged, type AssetRecord } from '../fleet';
 import { AppError, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
 import { enqueueMail } from '../notifications/outbox';
@@ -18,7 +18,7 @@ const batteryDamageKinds = new Set(['dropped', 'impact', 'malfunction']);
 
 type PhotoRow = Pick<IncidentPhoto, 'id' | 'contentType' | 'fileName' | 'sizeBytes'> & { hasThumbnail: boolean };
 
-const view = (i: Incident, photos: PhotoRow[], asset?: Asset) => ({
+const view = (i: Incident, photos: PhotoRow[], asset?: AssetRecord) => ({
   id: i.id,
   assetId: i.assetId,
   asset: asset ? { id: asset.id, assetTag: asset.assetTag, type: asset.type, status: asset.status } : undefined,
@@ -50,7 +50,7 @@ type IncidentFields = { kind: IncidentKind; description: string; occurredAt: str
  * knocked lithium battery as damaged, and queue the e-mail to the manager and
  * owner. Also used by the return desk for missing or damaged items.
  */
-export async function openIncident(tx: Scoped, actor: Actor, asset: Asset, input: IncidentFields, photos: Awaited<ReturnType<typeof preparePhoto>>[] = []) {
+export async function openIncident(tx: Scoped, actor: Actor, asset: AssetRecord, input: IncidentFields, photos: Awaited<ReturnType<typeof preparePhoto>>[] = []) {
   const incident = await tx.insert(Incident, {
     assetId: asset.id,
     kind: input.kind,
@@ -66,7 +66,7 @@ export async function openIncident(tx: Scoped, actor: Actor, asset: Asset, input
   const saved = [];
   for (const p of photos) saved.push(await tx.insert(IncidentPhoto, { incidentId: incident.id, ...p }));
   const flagBattery = asset.type === 'battery' && batteryDamageKinds.has(input.kind);
-  if (flagBattery) await tx.updateWhere(Asset, { id: asset.id }, { specs: { ...asset.specs, damaged: true } });
+  if (flagBattery) await markDamaged(tx, asset);
   await placeHold(tx, actor, asset, { reason: 'incident', summary: `${incidentKindTitles[input.kind]}: ${input.description.slice(0, 200)}`, incidentId: incident.id });
   await recordAudit(tx, actor, 'incident.reported', { type: 'asset', id: asset.id }, { incidentId: incident.id, kind: input.kind, photos: saved.length, batteryFlaggedDamaged: flagBattery });
   await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
@@ -87,11 +87,11 @@ export class IncidentsService {
   async report(actor: Actor, input: z.infer<typeof incidentPayload>, files: UploadedPhoto[]) {
     const photos = await Promise.all(files.map(preparePhoto));
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const asset = await tx.findOne(Asset, { id: input.assetId });
+      const asset = await findAsset(tx, input.assetId);
       if (!asset) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { assetId: 'is not an asset of your fleet' } });
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
       const { incident, photos: saved } = await openIncident(tx, actor, asset, { ...input, bookingId: input.bookingId ?? null }, photos);
-      const refreshed = await tx.get(Asset, { id: asset.id }, 'That asset');
+      const refreshed = await getAsset(tx, asset.id);
       return view(incident, saved.map((p) => ({ ...p, hasThumbnail: !!p.thumbnail })), refreshed);
     });
   }

@@ -1,12 +1,10 @@
-import { In } from 'typeorm';
 import { cheapestCover, depositMinor, taxMinor } from '../../shared/billing/quote';
 import { roundUpToProviderStep } from '../../shared/billing/provider-amounts';
 import type { Quote, QuoteLine } from '../../shared/billing/views';
 import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
 import { bookingDays } from '../../shared/bookings/rules';
 import type { Scoped } from '../db/scoped';
-import { Asset } from '../fleet/asset.entity';
-import { Kit } from '../fleet/kit.entity';
+import { assetsByIds, getKit, kitMembers as membersOf, type AssetRecord } from '../fleet';
 import { ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { RateCard } from './rate-card.entity';
@@ -23,7 +21,7 @@ export async function repriceRental(tx: Scoped, booking: Booking) {
   if (!booking.rentalId) return;
   const rental = await tx.get(Rental, { id: booking.rentalId }, 'That rental');
   const items = (await tx.find(BookingItem, { where: { bookingId: booking.id } })).map((i) => i.assetId);
-  const kitMembers = booking.kitId ? (await tx.find(Asset, { where: { kitId: booking.kitId } })).map((a) => a.id) : [];
+  const kitMembers = booking.kitId ? (await membersOf(tx, booking.kitId)).map((a) => a.id) : [];
   const quote = await priceRental(tx, { kitId: booking.kitId ?? undefined, assetIds: items.filter((id) => !kitMembers.includes(id)), startsOn: booking.startsOn, endsOn: booking.endsOn });
   const held = await tx.count(DepositHold, { rentalId: rental.id, kind: 'hold', state: 'authorized' });
   Object.assign(rental, { quote, depositMinor: held ? rental.depositMinor : quote.depositMinor });
@@ -39,9 +37,9 @@ export type PriceRequest = { kitId?: string; assetIds?: string[]; startsOn: stri
  */
 export async function priceRental(tx: Scoped, q: PriceRequest): Promise<Quote> {
   const ctx = await loadOrgContext(tx);
-  const kit = q.kitId ? await tx.get(Kit, { id: q.kitId }, 'That kit') : null;
-  const kitMembers = kit ? await tx.find(Asset, { where: { kitId: kit.id } }) : [];
-  const loose = q.assetIds?.length ? await tx.find(Asset, { where: { id: In(q.assetIds) } }) : [];
+  const kit = q.kitId ? await getKit(tx, q.kitId) : null;
+  const kitMembers = kit ? await membersOf(tx, kit.id) : [];
+  const loose = q.assetIds?.length ? await assetsByIds(tx, q.assetIds) : [];
   if (loose.length !== new Set(q.assetIds ?? []).size) throw ruleBroken('unknown_asset', 'One of those items is not in your fleet.');
   const cards = await tx.find(RateCard, {});
   const days = bookingDays(q.startsOn, q.endsOn);
@@ -54,7 +52,7 @@ export async function priceRental(tx: Scoped, q: PriceRequest): Promise<Quote> {
   };
   const kitCard = kit ? cards.find((c) => c.kitId === kit.id) : undefined;
   if (kit && kitCard) lines.push(line(kitCard, { description: kit.name, assetIds: kitMembers.map((m) => m.id), kitId: kit.id }));
-  const byType = new Map<AssetType, Asset[]>();
+  const byType = new Map<AssetType, AssetRecord[]>();
   for (const a of [...(kitCard ? [] : kitMembers), ...loose.filter((a) => !kitMembers.some((m) => m.id === a.id))]) byType.set(a.type, [...(byType.get(a.type) ?? []), a]);
   const unpriced = [...byType.keys()].filter((t) => !cards.some((c) => c.assetType === t));
   if (unpriced.length) throw ruleBroken('no_rate', `No rate card for: ${unpriced.map((t) => assetTypeTitles[t]).join(', ')}. Add one under rate cards.`, { types: unpriced });

@@ -6,7 +6,7 @@ import { Booking, BookingItem } from '../bookings/booking.entity';
 import { DepositHold } from '../billing/deposit-hold.entity';
 import { Invoice, InvoicePayment } from '../billing/invoice.entity';
 import type { Scoped } from '../db/scoped';
-import { Asset } from '../fleet/asset.entity';
+import { assetsByIds } from '../fleet';
 import { Incident } from '../incidents/incident.entity';
 import { loadOrgContext } from '../organizations/org-context';
 import { Customer } from './customer.entity';
@@ -78,7 +78,7 @@ export async function loadRentalView(tx: Scoped, rental: Rental): Promise<Rental
   const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking', { relations: { kit: true } });
   const customer = await tx.get(Customer, { id: rental.customerId }, 'That customer');
   const itemIds = (await tx.find(BookingItem, { where: { bookingId: booking.id } })).map((i) => i.assetId);
-  const assets = await tx.find(Asset, { where: { id: In(itemIds) }, order: { type: 'ASC', assetTag: 'ASC' } });
+  const assets = await assetsByIds(tx, itemIds, { packingOrder: true });
   const holds = await tx.find(DepositHold, { where: { rentalId: rental.id }, order: { createdAt: 'ASC' } });
   const incidents = await tx.find(Incident, { where: { bookingId: booking.id }, order: { createdAt: 'ASC' } });
   const invoices = await tx.find(Invoice, { where: { rentalId: rental.id }, order: { issuedAt: 'ASC' } });

@@ -3,7 +3,7 @@ import type { z } from 'zod';
 import type { customerPayload, quoteQuery, rateCardPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
-import { Kit } from '../fleet/kit.entity';
+import { getKit } from '../fleet';
 import { conflict } from '../http/errors';
 import { Customer } from './customer.entity';
 import { priceRental } from './pricing';
@@ -46,7 +46,7 @@ export class RentalsService {
 
   saveRateCard(actor: Actor, input: RateCardInput, id?: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      if (input.kitId) await tx.get(Kit, { id: input.kitId }, 'That kit');
+      if (input.kitId) await getKit(tx, input.kitId);
       const subject = input.kitId ? { kitId: input.kitId } : { assetType: input.assetType! };
       const clash = await tx.findOne(RateCard, subject);
       if (clash && clash.id !== id) throw conflict('That type or kit already has a rate card; change that one.', { fields: { [input.kitId ? 'kitId' : 'assetType']: 'already has a rate card' } });

@@ -1,4 +1,3 @@
-import { In } from 'typeorm';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { tipValidation } from '../../shared/checks/tip-validation';
 import { twoFaceErrorUm } from '../../shared/checks/two-face';
@@ -8,9 +7,7 @@ import { Booking, BookingItem } from '../bookings/booking.entity';
 import { Job } from '../bookings/job.entity';
 import { FieldCheck } from '../checks/field-check.entity';
 import type { Scoped } from '../db/scoped';
-import { Asset } from '../fleet/asset.entity';
-import { CustodyEvent } from '../fleet/custody-event.entity';
-import { Kit } from '../fleet/kit.entity';
+import { fleetSnapshot, moveAssets, recordPastCustody, type AssetRecord, type KitRecord } from '../fleet';
 import { Hold } from '../holds/hold.entity';
 import { Incident } from '../incidents/incident.entity';
 import { User } from '../users/user.entity';
@@ -48,15 +45,14 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   const people = await tx.find(User, {});
   const tech = people.find((p) => p.role === 'technician')!;
   const manager = people.find((p) => p.role === 'manager')!;
-  const assets = await tx.find(Asset, { order: { assetTag: 'ASC' } });
+  const { assets, kits } = await fleetSnapshot(tx);
   const byTag = (tag: string) => assets.find((a) => a.assetTag === tag)!;
-  const kits = await tx.find(Kit, { order: { name: 'ASC' } });
-  const members = (kit: Kit) => assets.filter((a) => a.kitId === kit.id);
+  const members = (kit: KitRecord) => assets.filter((a) => a.kitId === kit.id);
 
   // Tip validations: every tip in a kit validated in both positions; TIP-002 drifting toward the 60 µm tolerance.
   const ref = { x: 2150.412, y: -403.118, z: 812.905 };
   const checks: Partial<FieldCheck>[] = [];
-  const validation = (tip: Asset, position: string, um: number, daysAgo: number) => {
+  const validation = (tip: AssetRecord, position: string, um: number, daysAgo: number) => {
     const r = tipValidation(ref, around(ref, um));
     checks.push({
       kind: 'tip_validation', assetId: tip.id, relatedAssetId: byTag('PRB-001').id, position, inputs: { reference: ref, readings: around(ref, um), tolerance: { kind: 'fixed', um: 60 } },
@@ -97,9 +93,8 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
     assetId: dropped.id, kind: 'dropped', description: 'Slipped off the probe during a tip change and hit the floor plate. Ball looks fine, shank may be bent.',
     occurredAt: at(-2, 14), location: customers[1].siteAddress, bookingId: null, state: 'reported', resolution: null, chargeAmountMinor: null, reportedBy: tech.id,
   });
-  await tx.insert(Hold, { assetId: dropped.id, reason: 'incident', summary: 'Dropped: slipped off the probe during a tip change', incidentId: incident.id, checkId: null, startedAt: at(-2, 14), startedBy: tech.id, releasedAt: null, releasedBy: null, releaseEvidence: null });
-  await tx.updateWhere(Asset, { id: dropped.id }, { status: 'held' });
-  await tx.insert(CustodyEvent, { assetId: dropped.id, kind: 'held', actorUserId: tech.id, holder: null, location: dropped.location, bookingId: null, note: 'Dropped: reported from site' });
+  const hold = await tx.insert(Hold, { assetId: dropped.id, reason: 'incident', summary: 'Dropped: slipped off the probe during a tip change', incidentId: incident.id, checkId: null, startedAt: at(-2, 14), startedBy: tech.id, releasedAt: null, releasedBy: null, releaseEvidence: null });
+  await moveAssets(tx, { userId: tech.id }, [dropped.id], 'held', { why: 'Dropped: reported from site', details: { holdId: hold.id, reason: hold.reason, summary: hold.summary } });
 
   // Jobs and bookings.
   const jobs = [];
@@ -109,7 +104,7 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
     jobs.push(await tx.insert(Job, { ...c, startsOn: addDays(today, start), endsOn: addDays(today, start + length), leadTechnicianId: tech.id, notes: null }));
   }
   const [alder, birch, cedar, damson] = kits;
-  type Plan = { kit: Kit; job: Job; state: 'returned' | 'out' | 'reserved' };
+  type Plan = { kit: KitRecord; job: Job; state: 'returned' | 'out' | 'reserved' };
   const plans: Plan[] = [
     { kit: alder, job: jobs[0], state: 'returned' },
     { kit: birch, job: jobs[1], state: 'out' },
@@ -128,13 +123,14 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
       broughtBackBy: p.state === 'returned' ? tech.name : null, returnChecklist: p.state === 'returned' ? items.map((a) => ({ assetId: a.id, present: true, condition: 'good' as const })) : null,
     });
     await tx.insertMany(BookingItem, items.map((a) => ({ bookingId: booking.id, assetId: a.id, startsOn: p.job.startsOn, endsOn: p.job.endsOn, active: p.state !== 'returned' })));
-    if (out) {
-      await tx.insertMany(CustodyEvent, items.map((a) => ({ assetId: a.id, kind: 'checked_out' as const, actorUserId: manager.id, holder: tech.name, location: p.job.siteAddress, bookingId: booking.id, note: null })));
-    }
+    if (p.state === 'out') await moveAssets(tx, { userId: manager.id }, items.map((a) => a.id), 'out', { bookingId: booking.id, where: p.job.siteAddress, counterpart: tech.name });
     if (p.state === 'returned') {
-      await tx.insertMany(CustodyEvent, items.map((a) => ({ assetId: a.id, kind: 'returned' as const, actorUserId: manager.id, holder: null, location: a.location, bookingId: booking.id, note: null })));
+      const event = { actorUserId: manager.id, bookingId: booking.id, note: null };
+      await recordPastCustody(tx, [
+        ...items.map((a) => ({ ...event, assetId: a.id, kind: 'checked_out' as const, holder: tech.name, location: p.job.siteAddress })),
+        ...items.map((a) => ({ ...event, assetId: a.id, kind: 'returned' as const, holder: null, location: a.location })),
+      ]);
     }
-    if (p.state === 'out') await tx.updateWhere(Asset, { id: In(items.map((a) => a.id)) }, { status: 'out' });
     await tx.insert(AuditEvent, { actorUserId: manager.id, action: 'booking.created', subjectType: 'booking', subjectId: booking.id, details: { via: 'demo_seed' } });
   }
   return { checks: checks.length, bookings: plans.length };

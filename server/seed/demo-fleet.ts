@@ -2,9 +2,7 @@ import { addDays, dueOnForPlan, todayIn } from '../../shared/calibration/due-dat
 import type { AssetType } from '../../shared/schemas/assets';
 import { AuditEvent } from '../audit/audit-event.entity';
 import type { Scoped } from '../db/scoped';
-import { Asset } from '../fleet/asset.entity';
-import { CustodyEvent } from '../fleet/custody-event.entity';
-import { Kit } from '../fleet/kit.entity';
+import { noteCustody, seedAssets, seedKits, type SeedAsset as AssetRow } from '../fleet';
 
 /** Invented makers and models: none of these names belongs to a real company or product. */
 const makers: Record<AssetType, { maker: string; model: string; interval: number | null; value: number; specs: () => Record<string, unknown> }> = {
@@ -33,7 +31,7 @@ const kitContents: [AssetType, number][] = [
 ];
 const kitNames = ['Kit Alder', 'Kit Birch', 'Kit Cedar', 'Kit Damson'];
 
-type SeedAsset = { type: AssetType; kit: string | null; lastCalibratedDaysAgo: number | null; extra?: Partial<Asset> };
+type SeedAsset = { type: AssetType; kit: string | null; lastCalibratedDaysAgo: number | null; extra?: Partial<AssetRow> };
 
 /** About 80 assets in four kits plus spares, with due dates spread so some are overdue and some due soon. */
 export async function seedDemoFleet(tx: Scoped, timeZone: string, firm: string) {
@@ -61,8 +59,8 @@ export async function seedDemoFleet(tx: Scoped, timeZone: string, firm: string) 
   plan.push({ type: 'battery', kit: null, lastCalibratedDaysAgo: null, extra: { model: 'Pack 14V10', specs: { nominalVoltageV: 14.4, ratedCapacityAh: 10.4, chargeCycles: 48 } } });
   plan.push({ type: 'battery', kit: null, lastCalibratedDaysAgo: null, extra: { specs: { nominalVoltageV: 14.4, ratedCapacityAh: 6.7, chargeCycles: 310, damaged: true }, notes: 'Dropped from the van tail-lift; casing cracked. Do not charge.' } });
 
-  const kits = new Map<string, string>();
-  for (const name of kitNames) kits.set(name, (await tx.insert(Kit, { name, notes: `Travels in one case set; packed at the ${firm} shop.` })).id);
+  const kitIds = await seedKits(tx, kitNames.map((name) => ({ name, notes: `Travels in one case set; packed at the ${firm} shop.` })));
+  const kits = new Map(kitNames.map((name, i) => [name, kitIds[i]]));
 
   const rows = plan.map((p, index) => {
     const m = makers[p.type];
@@ -82,7 +80,6 @@ export async function seedDemoFleet(tx: Scoped, timeZone: string, firm: string) 
       location: p.kit ? `Shop, bay ${kitNames.indexOf(p.kit) + 1}` : 'Shop, spares cabinet',
       replacementValueMinor: m.value,
       notes: null,
-      status: 'ready' as const,
       specs: m.specs(),
       kitId: p.kit ? kits.get(p.kit)! : null,
       calibrationRequired: required,
@@ -93,8 +90,8 @@ export async function seedDemoFleet(tx: Scoped, timeZone: string, firm: string) 
       ...p.extra,
     };
   });
-  const ids = await tx.insertMany(Asset, rows);
-  await tx.insertMany(CustodyEvent, ids.map((assetId, i) => ({ assetId, kind: 'registered' as const, actorUserId: null, holder: firm, location: rows[i].location, note: 'Demo data' })));
+  const ids = await seedAssets(tx, rows);
+  await noteCustody(tx, null, ids, 'registered', { counterpart: firm, why: 'Demo data' });
   await tx.insertMany(AuditEvent, ids.map((id, i) => ({ actorUserId: null, action: 'asset.created', subjectType: 'asset', subjectId: id, details: { assetTag: rows[i].assetTag, via: 'demo_seed' } })));
   return ids.length;
 }

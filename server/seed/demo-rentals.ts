@@ -1,4 +1,3 @@
-import { In } from 'typeorm';
 import { taxMinor } from '../../shared/billing/quote';
 import { settle, lateDaysBetween } from '../../shared/billing/settlement';
 import type { AssetType } from '../../shared/assets/vocabulary';
@@ -8,9 +7,7 @@ import { Invoice, InvoicePayment } from '../billing/invoice.entity';
 import { nextNumber, padded } from '../billing/numbering';
 import { Booking, BookingItem } from '../bookings/booking.entity';
 import type { Scoped } from '../db/scoped';
-import { Asset } from '../fleet/asset.entity';
-import { CustodyEvent } from '../fleet/custody-event.entity';
-import { Kit } from '../fleet/kit.entity';
+import { fleetSnapshot, moveAssets, recordPastCustody, type AssetRecord } from '../fleet';
 import { Hold } from '../holds/hold.entity';
 import { Incident } from '../incidents/incident.entity';
 import { Organization } from '../organizations/organization.entity';
@@ -68,12 +65,11 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
   const customers: Customer[] = [];
   for (const r of renters) customers.push(await tx.insert(Customer, { ...r, notes: null, paymentCustomerId: null }));
   for (const [type, [d, w, m, late]] of Object.entries(rates)) await tx.insert(RateCard, { assetType: type, kitId: null, dayMinor: d, weekMinor: w, monthMinor: m, lateFeePerDayMinor: late });
-  const kits = await tx.find(Kit, {});
+  const { assets, kits } = await fleetSnapshot(tx);
   for (const name of ['Kit Birch', 'Kit Cedar']) await tx.insert(RateCard, { assetType: null, kitId: kits.find((k) => k.name === name)!.id, dayMinor: 75_000, weekMinor: 360_000, monthMinor: 1_150_000, lateFeePerDayMinor: 15_000 });
 
-  const assets = await tx.find(Asset, { order: { assetTag: 'ASC' } });
   // Spares that may go out through the window: ready, not at the lab, calibrated well past it.
-  const spare = (type: AssetType, until: string, taken: Set<string>): Asset | undefined => assets.find((a) => a.type === type && !a.kitId && a.status === 'ready' && !taken.has(a.id) && (!a.calibrationRequired || (a.dueOn ?? '') > until));
+  const spare = (type: AssetType, until: string, taken: Set<string>): AssetRecord | undefined => assets.find((a) => a.type === type && !a.kitId && a.status === 'ready' && !taken.has(a.id) && (!a.calibrationRequired || (a.dueOn ?? '') > until));
   const plans: Plan[] = [
     { renter: 0, kit: 'Kit Birch', from: -170, to: -157, settle: 'released' },
     { renter: 1, kit: 'Kit Cedar', from: -140, to: -113, back: -111, settle: 'captured' },
@@ -90,13 +86,13 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
     const startsOn = addDays(today, p.from);
     const endsOn = addDays(today, p.to);
     const kit = p.kit ? kits.find((k) => k.name === p.kit)! : null;
-    const items = kit ? assets.filter((a) => a.kitId === kit.id && a.status !== 'held') : p.spares!.map((t) => spare(t, endsOn, taken)).filter((a): a is Asset => !!a);
+    const items = kit ? assets.filter((a) => a.kitId === kit.id && a.status !== 'held') : p.spares!.map((t) => spare(t, endsOn, taken)).filter((a): a is AssetRecord => !!a);
     items.forEach((a) => taken.add(a.id));
     const out = p.settle === 'open';
     const returnedOn = out ? null : addDays(today, p.back ?? p.to);
     const quote = await priceRental(tx, { kitId: kit?.id, assetIds: kit ? undefined : items.map((a) => a.id), startsOn, endsOn });
     const damaged = p.damagedType ? items.find((a) => a.type === p.damagedType)! : null;
-    const checklist = (d: Asset | null) => items.map((a) => ({ assetId: a.id, present: true, condition: a === d ? ('damaged' as const) : ('good' as const) }));
+    const checklist = (d: AssetRecord | null) => items.map((a) => ({ assetId: a.id, present: true, condition: a === d ? ('damaged' as const) : ('good' as const) }));
     const booking = await tx.insert(Booking, {
       startsOn, endsOn, state: out ? 'out' : 'returned', purpose: 'rental', jobId: null, rentalId: null, kitId: kit?.id ?? null, note: null, createdBy: clerk.id,
       checkedOutAt: at(p.from, 8), handedOverBy: manager.id, takenBy: customers[p.renter].billingContact, takenByUserId: null, checkoutChecklist: checklist(null),
@@ -105,14 +101,19 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
     const rental = await tx.insert(Rental, { number: `R-${padded(await nextNumber(tx, 'rental'))}`, customerId: customers[p.renter].id, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: 'pm_card_visa', note: null, createdBy: clerk.id, createdAt: at(p.from - 6, 10) });
     await tx.updateWhere(Booking, { id: booking.id }, { rentalId: rental.id });
     await tx.insertMany(BookingItem, items.map((a) => ({ bookingId: booking.id, assetId: a.id, startsOn, endsOn, active: out })));
-    await tx.insertMany(CustodyEvent, items.map((a) => ({ assetId: a.id, kind: 'checked_out' as const, actorUserId: manager.id, holder: customers[p.renter].company, location: customers[p.renter].address, bookingId: booking.id, note: null })));
-    if (returnedOn) await tx.insertMany(CustodyEvent, items.filter((a) => a !== damaged).map((a) => ({ assetId: a.id, kind: 'returned' as const, actorUserId: manager.id, holder: null, location: a.location, bookingId: booking.id, note: null })));
-    if (out) await tx.updateWhere(Asset, { id: In(items.map((a) => a.id)) }, { status: 'out' });
+    const renter = { holder: customers[p.renter].company, location: customers[p.renter].address };
+    if (out) await moveAssets(tx, { userId: manager.id }, items.map((a) => a.id), 'out', { bookingId: booking.id, where: renter.location, counterpart: renter.holder });
+    else {
+      const event = { actorUserId: manager.id, bookingId: booking.id };
+      await recordPastCustody(tx, [
+        ...items.map((a) => ({ ...event, ...renter, assetId: a.id, kind: 'checked_out' as const, note: null })),
+        ...items.map((a) => ({ ...event, assetId: a.id, kind: 'returned' as const, holder: null, location: a.location, note: a === damaged ? 'damaged: dent on the housing' : null })),
+      ]);
+    }
     if (damaged) {
-      await tx.insert(CustodyEvent, { assetId: damaged.id, kind: 'returned', actorUserId: manager.id, holder: null, location: damaged.location, bookingId: booking.id, note: 'damaged: dent on the housing' });
       const incident = await tx.insert(Incident, { assetId: damaged.id, kind: 'impact', description: 'Came back with a dent on the housing; the customer says it rolled off a fixture.', occurredAt: at(-1, 15), location: 'Counter', bookingId: booking.id, state: 'reported', resolution: null, chargeAmountMinor: null, reportedBy: manager.id });
-      await tx.insert(Hold, { assetId: damaged.id, reason: 'incident', summary: 'Damaged on rental: dent on the housing', incidentId: incident.id, checkId: null, startedAt: at(-1, 15), startedBy: manager.id, releasedAt: null, releasedBy: null, releaseEvidence: null });
-      await tx.updateWhere(Asset, { id: damaged.id }, { status: 'held' });
+      const hold = await tx.insert(Hold, { assetId: damaged.id, reason: 'incident', summary: 'Damaged on rental: dent on the housing', incidentId: incident.id, checkId: null, startedAt: at(-1, 15), startedBy: manager.id, releasedAt: null, releasedBy: null, releaseEvidence: null });
+      await moveAssets(tx, { userId: manager.id }, [damaged.id], 'held', { why: hold.summary, details: { holdId: hold.id, reason: hold.reason, summary: hold.summary } });
     }
 
     // The deposit: a hold placed at checkout, settled at return for past rentals. A hold lasts

@@ -2,10 +2,9 @@ import 'reflect-metadata';
 import bcrypt from 'bcrypt';
 import { addDays, dueOnForPlan, todayIn } from '../../shared/calibration/due-date';
 import { assetTypes, type AssetType } from '../../shared/schemas/assets';
-import { createDataSource } from '../db/data-source';
+import { openDataSource } from '../data-source';
 import { Scoped } from '../db/scoped';
-import { Asset } from '../fleet/asset.entity';
-import { Kit } from '../fleet/kit.entity';
+import { seedAssets, seedKits } from '../fleet';
 import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 import { DEMO_PASSWORD } from './demo-people';
@@ -27,7 +26,7 @@ const specsFor: Partial<Record<AssetType, (i: number) => Record<string, unknown>
 const locations = ['Shop, bay 1', 'Shop, bay 2', 'Shop, spares cabinet', 'Van 1', 'Van 2', 'Shelf A', 'Shelf B', 'Shelf C'];
 
 export async function seedBenchFleet(url: string, count: number) {
-  const db = await createDataSource(url, 2).initialize();
+  const db = await openDataSource(url, 2).initialize();
   try {
     const existing = await db.getRepository(User).findOne({ where: { email: BENCH_EMAIL } });
     if (existing) return { organizationId: existing.organizationId, created: 0 };
@@ -35,8 +34,7 @@ export async function seedBenchFleet(url: string, count: number) {
       const org = await manager.save(Organization, manager.create(Organization, { name: 'Thornbury Bench Works', timeZone: 'Europe/Berlin', currency: 'EUR', settings: {} }));
       const tx = new Scoped(manager, org.id);
       await tx.insert(User, { email: BENCH_EMAIL, name: 'Bench Runner', role: 'owner', passwordHash: await bcrypt.hash(DEMO_PASSWORD, 12) });
-      const kits: string[] = [];
-      for (let k = 0; k < 200; k += 1) kits.push((await tx.insert(Kit, { name: `Bench kit ${k + 1}`, notes: null })).id);
+      const kits = await seedKits(tx, Array.from({ length: 200 }, (_, k) => ({ name: `Bench kit ${k + 1}`, notes: null })));
       const today = todayIn(org.timeZone);
       const rows = Array.from({ length: count }, (_, i) => {
         const type = assetTypes[i % assetTypes.length];
@@ -64,7 +62,7 @@ export async function seedBenchFleet(url: string, count: number) {
           dueOn: dueOnForPlan({ required, intervalMonths: required ? 12 : null, lastCalibratedOn }),
         };
       });
-      await tx.insertMany(Asset, rows, 2000);
+      await seedAssets(tx, rows, 2000);
       return { organizationId: org.id, created: count };
     });
   } finally {

@@ -1,6 +1,6 @@
 import 'reflect-metadata';
 import { dueScanJob } from '../../server/calibration/due-scan.job';
-import { createDataSource } from '../../server/db/data-source';
+import { openDataSource } from '../../server/data-source';
 
 /**
  * Calibration measurements against the benchmark firm (scripts/bench.mjs
@@ -8,7 +8,7 @@ import { createDataSource } from '../../server/db/data-source';
  * directly, and the review page's API under sequential requests.
  */
 const base = process.env.BENCH_URL!;
-const db = await createDataSource(process.env.DATABASE_URL!, 4).initialize();
+const db = await openDataSource(process.env.DATABASE_URL!, 4).initialize();
 const [{ assets }] = await db.query(`SELECT count(*)::int AS assets FROM assets`);
 const [{ bookings }] = await db.query(`SELECT count(*)::int AS bookings FROM bookings`);
 const t0 = performance.now();

@@ -1,6 +1,6 @@
 import 'reflect-metadata';
 import pg from 'pg';
-import { createDataSource } from '../../server/db/data-source';
+import { openDataSource } from '../../server/data-source';
 
 export const TEMPLATE_DB = 'nk_template';
 
@@ -14,7 +14,7 @@ export default async function setup() {
   await admin.query(`DROP DATABASE IF EXISTS ${TEMPLATE_DB}`);
   await admin.query(`CREATE DATABASE ${TEMPLATE_DB}`);
   await admin.end();
-  const db = await createDataSource(`${server}/${TEMPLATE_DB}`, 1).initialize();
+  const db = await openDataSource(`${server}/${TEMPLATE_DB}`, 1).initialize();
   await db.runMigrations({ transaction: 'each' });
   await db.destroy();
 }

@@ -2,7 +2,7 @@ import 'reflect-metadata';
 import { randomBytes } from 'node:crypto';
 import pg from 'pg';
 import type { DataSource } from 'typeorm';
-import { createDataSource } from '../../server/db/data-source';
+import { openDataSource } from '../../server/data-source';
 import { seedDemoIfEmpty } from '../../server/seed/seed-demo';
 import { waitUntil } from './eventually';
 
@@ -16,7 +16,7 @@ export async function createTestDatabase(opts: { seed?: boolean } = {}): Promise
   await admin.query(`CREATE DATABASE ${name} TEMPLATE nk_template`);
   await admin.end();
   const url = `${server}/${name}`;
-  const db = await createDataSource(url, 5).initialize();
+  const db = await openDataSource(url, 5).initialize();
   if (opts.seed) await seedDemoIfEmpty(db, 12);
   // TypeORM's destroy() releases connections mid-query: let work a response left running (the
   // sign-in limiter's bookkeeping after a successful sign-in) finish first, however slow the machine.

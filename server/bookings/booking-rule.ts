@@ -5,7 +5,7 @@ import type { Scoped } from '../db/scoped';
 import { AppError } from '../http/errors';
 import { itemFacts, type ItemFacts } from './booking-queries';
 
-export type Refusal = { assetId: string; assetTag: string; type: AssetType; reason: BlockReason };
+type Refusal = { assetId: string; assetTag: string; type: AssetType; reason: BlockReason };
 
 /** The items that may not go on a booking ending `endsOn`, in tag order: the shared rule (shared/bookings/rules.ts) applied to their facts. */
 export function refusedItems(facts: ItemFacts[], endsOn: string, purpose: BookingPurpose): Refusal[] {

@@ -3,11 +3,10 @@
  * components book, move, cancel, check out, take back and close only through
  * these functions (in their own transaction), and see bookings as plain views.
  */
-export { book, bookingIn, cancelBooking, checkOut, closeBooking, loadBooking, moveBooking, takeBack, type BookingRequest } from './lifecycle';
-export { busyDays, type BusyDays } from './booking-queries';
+export { book, cancelBooking, checkOut, closeBooking, loadBooking, moveBooking, takeBack, type BookingRequest } from './lifecycle';
+export { busyDays } from './booking-queries';
 export type { BookingView } from './booking-view';
 export type { ChecklistLine } from './booking.entity';
-export { seedBooking, seedJob, type PastBooking } from './seed';
-export { countBookings, seedBenchBookings } from './bench-seed';
-export type { BookingHooks } from './bookings.service';
 export type { HandoverGates } from './handover.service';
+export { seedBooking, seedJob } from './seed';
+export { countBookings, seedBenchBookings } from './bench-seed';

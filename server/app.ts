@@ -109,10 +109,10 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
     onReschedule: (tx, booking) => repriceRental(tx, booking),
     onCancel: (tx, booking) => deposits.releaseForCancelledBooking(tx, booking),
   });
-  const rentalRegister = new RentalRegisterService(db, bookings);
+  const rentalRegister = new RentalRegisterService(db);
   app.use(
     '/api',
-    bookingsRoutes({ bookings, handover: new HandoverService(db, bookings, rentalRegister.handoverGates), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
+    bookingsRoutes({ bookings, handover: new HandoverService(db, rentalRegister.handoverGates), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
   );
   app.use(
     '/api',

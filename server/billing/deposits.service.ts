@@ -3,7 +3,7 @@ import type { z } from 'zod';
 import { formatMoney } from '../../shared/billing/money';
 import type { capturePayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
-import { Booking } from '../bookings/booking.entity';
+import { loadBooking, type BookingView } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
@@ -38,7 +38,7 @@ export class DepositsService {
   async authorize(actor: Actor, rentalId: string, paymentMethod: string) {
     const result = await inOrganization(this.db, actor.organizationId, async (tx) => {
       const rental = await lockRental(tx, rentalId);
-      const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking');
+      const booking = await loadBooking(tx, rental.bookingId);
       // Before handing over — or again while out, should a hold have lapsed.
       if (booking.state !== 'reserved' && booking.state !== 'out') throw ruleBroken('booking_state', `The deposit is taken before handing over; this rental is ${booking.state}.`);
       if (rental.depositMinor <= 0) throw ruleBroken('no_deposit', 'This rental has no deposit to hold (the firm’s deposit policy gave nothing).');
@@ -97,7 +97,7 @@ export class DepositsService {
       const rental = await lockRental(tx, rentalId);
       const { state, hold } = depositState(await tx.find(DepositHold, { where: { rentalId } }));
       if (state !== 'authorized' || !hold?.paymentIntentId) throw ruleBroken('no_hold', 'There is no hold on the card to release.');
-      const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking');
+      const booking = await loadBooking(tx, rental.bookingId);
       if (booking.state === 'out') throw ruleBroken('booking_state', 'The kit is still out: release the hold at return.');
       await this.gateway.cancel(hold.paymentIntentId, `hold:${hold.id}:release`);
       Object.assign(hold, { state: 'released', settledAt: new Date() });
@@ -108,7 +108,7 @@ export class DepositsService {
   }
 
   /** A cancelled rental keeps nothing on the customer's card: its live hold is released with the booking. */
-  async releaseForCancelledBooking(tx: Scoped, booking: Booking) {
+  async releaseForCancelledBooking(tx: Scoped, booking: Pick<BookingView, 'rentalId'>) {
     if (!booking.rentalId) return;
     const rental = await lockRental(tx, booking.rentalId);
     const { state, hold } = depositState(await tx.find(DepositHold, { where: { rentalId: rental.id } }));
@@ -166,7 +166,7 @@ export class DepositsService {
   }
 
   private async assertSettleable(tx: Scoped, rental: Rental) {
-    const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking');
+    const booking = await loadBooking(tx, rental.bookingId);
     if (booking.state !== 'returned') throw ruleBroken('booking_state', `Charges are taken at return; this rental is ${booking.state}.`);
     if (await tx.count(Invoice, { rentalId: rental.id, kind: 'invoice' })) throw ruleBroken('already_invoiced', `Rental ${rental.number} is invoiced; correct it with a credit note.`);
   }

@@ -5,7 +5,7 @@ import { formatMoney } from '../../shared/billing/money';
 import type { InvoiceView } from '../../shared/billing/views';
 import type { creditNotePayload, invoiceListQuery, invoicePaymentPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
-import { Booking } from '../bookings/booking.entity';
+import { loadBooking } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { toCsv } from '../documents/csv';
@@ -32,7 +32,7 @@ export class InvoicesService {
       const rental = await lockRental(tx, rentalId);
       const existing = await tx.findOne(Invoice, { rentalId, kind: 'invoice' });
       if (existing) throw conflict(`Rental ${rental.number} is already invoiced as ${existing.number}; correct it with a credit note.`);
-      const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking');
+      const booking = await loadBooking(tx, rental.bookingId);
       if (booking.state !== 'returned') throw ruleBroken('booking_state', `The invoice is issued once the kit is back; this rental is ${booking.state}.`);
       const view = await loadRentalView(tx, rental);
       if (view.deposit.state === 'authorized') throw ruleBroken('deposit_unsettled', 'Capture or release the deposit hold first, so the invoice can show what was taken.');

@@ -1,29 +1,24 @@
-import type { BlockReason } from '../../shared/bookings/rules';
+import type { AssetStatus, AssetType } from '../../shared/schemas/assets';
 import type { Scoped } from '../db/scoped';
 
 /** True when a tip (alias `a`) has a mounting position whose latest validation did not pass. */
-export const TIP_NOT_VALIDATED = (a: string) => `(${a}.type = 'tip' AND EXISTS (
+const TIP_NOT_VALIDATED = (a: string) => `(${a}.type = 'tip' AND EXISTS (
   SELECT 1 FROM jsonb_array_elements_text(coalesce(${a}.specs->'positions', '[]'::jsonb)) AS pos(position)
    WHERE coalesce((SELECT fc.decision FROM field_checks fc
                     WHERE fc.organization_id = ${a}.organization_id AND fc.asset_id = ${a}.id AND fc.kind = 'tip_validation' AND fc.position = pos.position
                     ORDER BY fc.performed_at DESC, fc.created_at DESC LIMIT 1), 'none') <> 'pass'))`;
 
-/** The booking rules of shared/bookings/rules.ts as one set-based query over the requested items. */
-export function blockedItems(tx: Scoped, assetIds: string[], endsOn: string) {
-  return tx.sql<{ assetId: string; assetTag: string; type: string; reason: BlockReason }>(
-    `SELECT a.id AS "assetId", a.asset_tag AS "assetTag", a.type,
-            CASE WHEN a.status = 'retired' THEN 'retired'
-                 WHEN a.status = 'held' THEN 'held'
-                 WHEN a.status = 'at_lab' THEN 'at_lab'
-                 WHEN a.calibration_required AND (a.due_on IS NULL OR a.due_on < $3::date) THEN 'calibration_expires'
-                 ELSE 'tip_not_validated' END AS reason
+export type ItemFacts = { assetId: string; assetTag: string; type: AssetType; status: AssetStatus; calibrationRequired: boolean; dueOn: string | null; tipValidated: boolean };
+
+/** What the booking rule (shared/bookings/rules.ts) needs to know of each item, in one query. */
+export function itemFacts(tx: Scoped, assetIds: string[]) {
+  return tx.sql<ItemFacts>(
+    `SELECT a.id AS "assetId", a.asset_tag AS "assetTag", a.type, a.status, a.calibration_required AS "calibrationRequired",
+            to_char(a.due_on, 'YYYY-MM-DD') AS "dueOn", NOT ${TIP_NOT_VALIDATED('a')} AS "tipValidated"
        FROM assets a
       WHERE a.organization_id = $1 AND a.id = ANY($2)
-        AND (a.status IN ('retired', 'held', 'at_lab')
-             OR (a.calibration_required AND (a.due_on IS NULL OR a.due_on < $3::date))
-             OR ${TIP_NOT_VALIDATED('a')})
       ORDER BY a.asset_tag`,
-    [assetIds, endsOn],
+    [assetIds],
   );
 }
 
@@ -42,8 +37,10 @@ export function conflictingItems(tx: Scoped, assetIds: string[], startsOn: strin
 }
 
 /**
- * Assets of a type that are free and valid for the whole window (GET /api/availability).
- * Prepared, and shaped for the plan that stops at `limit`: assets in display
+ * Assets of a type that are free and valid for the whole window (GET /api/availability,
+ * and the alternatives a refusal offers). The booking rule written as a filter, so
+ * the list can stop at `limit`; tests/api/booking-rule.test.ts proves it equal to
+ * `blockReason` over generated fleets. Prepared, and shaped for that plan: assets in display
  * order (assets_availability_order), each probed for an overlapping active
  * booking (booking_items_active_by_asset; inclusive dates, so overlap is
  * ends_on >= start and starts_on <= end).
@@ -63,5 +60,17 @@ export function availableAssets(tx: Scoped, opts: { type?: string; startsOn: str
       ORDER BY a.kit_id IS NOT NULL, a.asset_tag
       LIMIT $6`,
     [opts.type ?? null, opts.startsOn, opts.endsOn, opts.exclude ?? [], opts.limit],
+  );
+}
+
+export type BusyDays = { bookingId: string; startsOn: string; endsOn: string; purpose: string; jobReference: string | null };
+
+/** The item's active bookings that end on or after `from`, earliest first (the lab window finder's gaps lie between them). */
+export function busyDays(tx: Scoped, assetId: string, from: string) {
+  return tx.sql<BusyDays>(
+    `SELECT b.id AS "bookingId", to_char(bi.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(bi.ends_on, 'YYYY-MM-DD') AS "endsOn", b.purpose, j.reference AS "jobReference"
+       FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id LEFT JOIN jobs j ON j.id = b.job_id
+      WHERE bi.organization_id = $1 AND bi.asset_id = $2 AND bi.active AND bi.ends_on >= $3::date ORDER BY bi.starts_on`,
+    [assetId, from],
   );
 }

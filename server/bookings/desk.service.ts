@@ -1,9 +1,10 @@
 import type { DataSource } from 'typeorm';
 import { readInOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from '../organizations/org-context';
-import { blockedItems } from './booking-queries';
+import { itemFacts } from './booking-queries';
+import { refusedItems } from './booking-rule';
+import { bookingViews } from './booking-view';
 import { Booking } from './booking.entity';
-import { bookingAssets, bookingRentals, bookingView } from './bookings.service';
 import type { Scoped } from '../db/scoped';
 
 /** What the manager's and the technician's home pages show about bookings. */
@@ -19,9 +20,7 @@ export class DeskService {
       .orderBy('b.starts_on')
       .take(100)
       .getMany();
-    const items = await bookingAssets(tx, rows.map((r) => r.id));
-    const rentals = await bookingRentals(tx, rows);
-    return rows.map((b) => bookingView(b, items.filter((i) => i.bookingId === b.id), rentals));
+    return bookingViews(tx, rows);
   }
 
   /** Today's checkouts and returns, late returns, and reserved bookings an item no longer qualifies for. */
@@ -34,11 +33,12 @@ export class DeskService {
         this.views(tx, "b.state = 'out' AND b.ends_on < :p0", [today]),
         this.views(tx, "b.state = 'reserved' AND b.ends_on >= :p0", [today]),
       ]);
-      const blocked = [];
-      for (const b of upcoming) {
-        const problems = await blockedItems(tx, b.assetIds, b.endsOn);
-        if (problems.length) blocked.push({ ...b, blocked: problems });
-      }
+      // Every upcoming item's facts in one query, judged per booking by the booking rule.
+      const facts = await itemFacts(tx, [...new Set(upcoming.flatMap((b) => b.assetIds))]);
+      const blocked = upcoming.flatMap((b) => {
+        const problems = refusedItems(facts.filter((f) => b.assetIds.includes(f.assetId)), b.endsOn, b.purpose);
+        return problems.length ? [{ ...b, blocked: problems }] : [];
+      });
       return { today, checkouts, returns, late, blocked };
     });
   }

@@ -1,8 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { blockReasonText } from '../../shared/bookings/rules';
 import type { checklistPayload } from '../../shared/schemas/bookings';
-import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { handoverSheetPdf } from '../documents/handover-sheet-pdf';
@@ -11,51 +9,43 @@ import { AppError, ruleBroken } from '../http/errors';
 import { openIncident } from '../incidents/incidents.service';
 import { loadOrgContext } from '../organizations/org-context';
 import { User } from '../users/user.entity';
-import { blockedItems } from './booking-queries';
-import { Booking, BookingItem, type ChecklistLine } from './booking.entity';
-import type { BookingsService } from './bookings.service';
+import type { BookingView } from './booking-view';
+import type { ChecklistLine } from './booking.entity';
+import { bookingIn, checkOut, loadBooking, takeBack } from './lifecycle';
 
 type Checklist = z.infer<typeof checklistPayload>;
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Rules other components add to the counter (rentals: a deposit hold before handing over, papers to the renter after). */
 export type HandoverGates = {
-  beforeCheckout?: (tx: Scoped, booking: Booking) => Promise<void>;
-  afterCheckout?: (tx: Scoped, booking: Booking) => Promise<void>;
+  beforeCheckout?: (tx: Scoped, booking: BookingView) => Promise<void>;
+  afterCheckout?: (tx: Scoped, booking: BookingView) => Promise<void>;
 };
 
 /** Checkout and return: the packing list walked at the counter, custody recorded either way. */
 export class HandoverService {
   constructor(
     private readonly db: DataSource,
-    private readonly bookings: BookingsService,
     private readonly gates: HandoverGates = {},
   ) {}
 
   checkout(actor: Actor, id: string, input: Checklist) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const booking = await tx.get(Booking, { id }, 'That booking');
-      if (booking.state !== 'reserved') throw ruleBroken('booking_state', `Only a reserved booking can be checked out; this one is ${booking.state}.`);
+      const booking = await bookingIn(tx, id, 'reserved', 'Only a reserved booking can be checked out');
       const assets = await this.walk(tx, booking, input.checklist);
       const absent = input.checklist.filter((l) => !l.present);
       if (absent.length) throw ruleBroken('checkout_incomplete', `Not here: ${tags(assets, absent)}. Find them, or take them off the booking, before handing over.`, { missing: absent.map((l) => l.assetId) });
       const damaged = input.checklist.filter((l) => l.condition === 'damaged');
       if (damaged.length) throw ruleBroken('checkout_damaged', `Damaged: ${tags(assets, damaged)}. Report the damage (the item goes on hold) and book an alternative.`, { damaged: damaged.map((l) => l.assetId) });
-      const blocked = await blockedItems(tx, assets.map((a) => a.id), booking.endsOn);
-      if (blocked.length) {
-        throw new AppError(422, 'booking_blocked', `Cannot hand over: ${blocked.map((b) => `${b.assetTag} — ${blockReasonText[b.reason]}`).join('; ')}.`, { blocked: blocked.map(({ assetId, assetTag, reason }) => ({ assetId, assetTag, reason })) });
-      }
+      const taker = await this.counterpart(tx, input.counterpart);
+      // Refuses (422) items that may no longer go; the rest of the transaction is undone with any later refusal.
+      const out = await checkOut(tx, actor, id, { takenBy: taker.name, takenByUserId: taker.userId, checklist: input.checklist as ChecklistLine[] });
       const stillOut = assets.filter((a) => a.status === 'out');
       if (stillOut.length) throw ruleBroken('still_out', `Still out on an earlier booking: ${stillOut.map((a) => a.assetTag).join(', ')}. Take them back in first.`);
-      await this.gates.beforeCheckout?.(tx, booking);
-      const taker = await this.counterpart(tx, input.counterpart);
-      const now = new Date();
+      await this.gates.beforeCheckout?.(tx, out);
       await moveAssets(tx, actor, assets.map((a) => a.id), 'out', { why: (assetId) => noteFor(input.checklist, assetId), bookingId: id, where: null, counterpart: taker.name });
-      Object.assign(booking, { state: 'out', checkedOutAt: now, handedOverBy: actor.userId, takenBy: taker.name, takenByUserId: taker.userId, checkoutChecklist: input.checklist as ChecklistLine[] });
-      await tx.save(Booking, booking);
-      await recordAudit(tx, actor, 'booking.checked_out', { type: 'booking', id }, { takenBy: taker.name, items: assets.length });
-      await this.gates.afterCheckout?.(tx, booking);
-      return this.bookings.load(tx, id);
+      await this.gates.afterCheckout?.(tx, out);
+      return loadBooking(tx, id);
     });
   }
 
@@ -63,8 +53,7 @@ export class HandoverService {
   return(actor: Actor, id: string, input: Checklist) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const booking = await tx.get(Booking, { id }, 'That booking');
-      if (booking.state !== 'out') throw ruleBroken('booking_state', `Only a booking that is out can come back; this one is ${booking.state}.`);
+      const booking = await bookingIn(tx, id, 'out', 'Only a booking that is out can come back');
       const assets = await this.walk(tx, booking, input.checklist);
       const bringer = await this.counterpart(tx, input.counterpart);
       const now = new Date();
@@ -87,11 +76,7 @@ export class HandoverService {
       const custody = { why: (assetId: string) => input.checklist.find((l) => l.assetId === assetId)?.note ?? null, bookingId: id, counterpart: ctx.name };
       await moveAssets(tx, actor, back.filter((a) => a.status === 'out').map((a) => a.id), 'ready', custody);
       await noteCustody(tx, actor, back.filter((a) => a.status !== 'out').map((a) => a.id), 'returned', custody);
-      Object.assign(booking, { state: 'returned', returnedAt: now, receivedBy: actor.userId, broughtBackBy: bringer.name, returnChecklist: input.checklist as ChecklistLine[] });
-      await tx.save(Booking, booking);
-      await tx.updateWhere(BookingItem, { bookingId: id }, { active: false });
-      await recordAudit(tx, actor, 'booking.returned', { type: 'booking', id }, { broughtBackBy: bringer.name, incidents });
-      return { ...(await this.bookings.load(tx, id)), incidents };
+      return { ...(await takeBack(tx, actor, id, { broughtBackBy: bringer.name, checklist: input.checklist as ChecklistLine[], incidents })), incidents };
     });
   }
 
@@ -99,21 +84,20 @@ export class HandoverService {
   sheet(actor: Actor, id: string) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const booking = await tx.get(Booking, { id }, 'That booking', { relations: { job: true, kit: true } });
-      const ids = (await tx.find(BookingItem, { where: { bookingId: id } })).map((i) => i.assetId);
-      const items = await assetsByIds(tx, ids, { packingOrder: true });
-      const rental = booking.rentalId ? (await tx.sql<{ number: string; company: string }>(`SELECT r.number, c.company FROM rentals r JOIN customers c ON c.id = r.customer_id WHERE r.organization_id = $1 AND r.id = $2`, [booking.rentalId]))[0] : undefined;
-      const title = booking.job ? `Job ${booking.job.reference}, ${booking.job.customerName}` : rental ? `Rental ${rental.number}, ${rental.company}` : `${booking.purpose} booking`;
+      const booking = await loadBooking(tx, id);
+      const items = await assetsByIds(tx, booking.assetIds, { packingOrder: true });
+      const { job, rental } = booking;
+      const title = job ? `Job ${job.reference}, ${job.customerName}` : rental ? `Rental ${rental.number}, ${rental.customerCompany}` : `${booking.purpose} booking`;
       return handoverSheetPdf(
         { name: ctx.name, timeZone: ctx.timeZone },
-        { title, startsOn: booking.startsOn, endsOn: booking.endsOn, kitName: booking.kit?.name ?? null, takenBy: booking.takenBy, checkedOutAt: booking.checkedOutAt?.toISOString() ?? null, items, checklist: booking.checkoutChecklist },
+        { title, startsOn: booking.startsOn, endsOn: booking.endsOn, kitName: booking.kit?.name ?? null, takenBy: booking.takenBy, checkedOutAt: booking.checkedOutAt, items, checklist: booking.checkoutChecklist },
       );
     });
   }
 
   /** The checklist must name exactly the booking's items. */
-  private async walk(tx: Scoped, booking: Booking, checklist: ChecklistLine[]) {
-    const ids = (await tx.find(BookingItem, { where: { bookingId: booking.id } })).map((i) => i.assetId);
+  private async walk(tx: Scoped, booking: BookingView, checklist: ChecklistLine[]) {
+    const ids = booking.assetIds;
     const assets = await assetsByIds(tx, ids);
     const listed = new Set(checklist.map((l) => l.assetId));
     const unticked = assets.filter((a) => !listed.has(a.id));

@@ -4,6 +4,7 @@ import { calendarDayIn, dueDate } from '../../shared/calibration/due-date';
 import { suggestInterval, type AsFound } from '../../shared/calibration/interval-review';
 import type { calibrationEventFields } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
+import { closeBooking } from '../bookings';
 import { inOrganization, type Actor } from '../db/transaction';
 import { describeActiveContent, inspectPdf } from '../documents/pdf-inspection';
 import { getAsset, lockAssets, moveAssets, noteCustody, updateCalibrationPlan } from '../fleet';
@@ -109,8 +110,8 @@ export class CalibrationService {
           const [{ open }] = await tx.sql<{ open: number }>(`SELECT count(*)::int AS open FROM lab_trip_items WHERE organization_id = $1 AND lab_trip_id = $2 AND received_on IS NULL`, [item.lab_trip_id]);
           if (open === 0) {
             await tx.updateWhere(LabTrip, { id: item.lab_trip_id }, { state: 'back' });
-            await tx.sql(`UPDATE bookings SET state = 'returned', returned_at = now() WHERE organization_id = $1 AND id = (SELECT booking_id FROM lab_trips WHERE id = $2)`, [item.lab_trip_id]);
-            await tx.sql(`UPDATE booking_items SET active = false WHERE organization_id = $1 AND booking_id = (SELECT booking_id FROM lab_trips WHERE id = $2)`, [item.lab_trip_id]);
+            const trip = await tx.get(LabTrip, { id: item.lab_trip_id }, 'That lab trip');
+            if (trip.bookingId) await closeBooking(tx, actor, trip.bookingId, `Every item is back from ${trip.provider}`);
           }
         }
       }

@@ -4,12 +4,11 @@ import { bookingDays } from '../../shared/bookings/rules';
 import { addDays } from '../../shared/calibration/due-date';
 import type { labTripPayload } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
-import { Booking, BookingItem } from '../bookings/booking.entity';
-import { conflictingItems } from '../bookings/booking-queries';
+import { book, busyDays, checkOut } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { assetsByIds, getAsset, moveAssets } from '../fleet';
-import { conflict, ruleBroken } from '../http/errors';
+import { ruleBroken } from '../http/errors';
 import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations/org-context';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
 import { listReply } from '../http/list-reply';
@@ -18,8 +17,6 @@ import { listReply } from '../http/list-reply';
 const freeDays = (from: string, to: string) => (to < from ? 0 : bookingDays(from, to));
 
 const turnaround = (ctx: OrgContext, provider: string | null) => ctx.providers.find((p) => p.name === provider)?.turnaroundDays ?? DEFAULT_TURNAROUND_DAYS;
-
-type Busy = { bookingId: string; startsOn: string; endsOn: string; purpose: string; jobReference: string | null };
 
 /** Lab trips and the window finder: when an item can go to the lab without breaking a booking. */
 export class LabService {
@@ -34,12 +31,7 @@ export class LabService {
       const ctx = await loadOrgContext(tx);
       const asset = await getAsset(tx, assetId);
       const days = turnaround(ctx, asset.calibrationProvider);
-      const busy = await tx.sql<Busy>(
-        `SELECT b.id AS "bookingId", to_char(bi.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(bi.ends_on, 'YYYY-MM-DD') AS "endsOn", b.purpose, j.reference AS "jobReference"
-           FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id LEFT JOIN jobs j ON j.id = b.job_id
-          WHERE bi.organization_id = $1 AND bi.asset_id = $2 AND bi.active AND bi.ends_on >= $3::date ORDER BY bi.starts_on`,
-        [assetId, ctx.today],
-      );
+      const busy = await busyDays(tx, assetId, ctx.today);
       const gaps: { startsOn: string; endsOn: string | null; freeDays: number | null; returnBy: string }[] = [];
       let cursor = ctx.today;
       for (const b of [...busy, null]) {
@@ -55,16 +47,13 @@ export class LabService {
     });
   }
 
-  /** Plan a trip: a lab booking holds the window on the board (overlap still refused), the trip waits to be sent. */
+  /** Plan a trip: a lab booking holds the window on the board (booked like any other, so overlap is a 409), the trip waits to be sent. */
   plan(actor: Actor, input: z.infer<typeof labTripPayload>) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const assets = await this.assets(tx, input.assetIds);
       const expectedBackOn = input.expectedBackOn ?? addDays(input.sentOn, turnaround(ctx, input.provider) - 1);
-      const clashes = await conflictingItems(tx, input.assetIds, input.sentOn, expectedBackOn);
-      if (clashes.length) throw conflict(`Booked during that window: ${clashes.map((c) => `${c.assetTag} (${c.startsOn} to ${c.endsOn})`).join('; ')}.`, { conflicts: clashes });
-      const booking = await tx.insert(Booking, { startsOn: input.sentOn, endsOn: expectedBackOn, state: 'reserved', purpose: 'lab', jobId: null, rentalId: null, kitId: null, note: `Calibration at ${input.provider}`, createdBy: actor.userId });
-      await tx.insertMany(BookingItem, assets.map((a) => ({ bookingId: booking.id, assetId: a.id, startsOn: input.sentOn, endsOn: expectedBackOn, active: true })));
+      const booking = await book(tx, actor, { assetIds: assets.map((a) => a.id), startsOn: input.sentOn, endsOn: expectedBackOn, purpose: 'lab', note: `Calibration at ${input.provider}` });
       const trip = await tx.insert(LabTrip, { provider: input.provider, sentOn: input.sentOn, expectedBackOn, state: 'planned', bookingId: booking.id, createdBy: actor.userId });
       await tx.insertMany(LabTripItem, assets.map((a) => ({ labTripId: trip.id, assetId: a.id, receivedOn: null, calibrationEventId: null })));
       await recordAudit(tx, actor, 'lab_trip.planned', { type: 'lab_trip', id: trip.id }, { provider: input.provider, assets: assets.map((a) => a.assetTag), sentOn: input.sentOn, expectedBackOn });
@@ -82,7 +71,7 @@ export class LabService {
       const moved = await moveAssets(tx, actor, items.map((i) => i.assetId), 'at_lab', { why: `Expected back ${trip.expectedBackOn}`, bookingId: trip.bookingId, where: trip.provider, counterpart: trip.provider });
       trip.state = 'at_lab';
       await tx.save(LabTrip, trip);
-      if (trip.bookingId) await tx.updateWhere(Booking, { id: trip.bookingId }, { state: 'out', checkedOutAt: new Date(), handedOverBy: actor.userId, takenBy: trip.provider });
+      if (trip.bookingId) await checkOut(tx, actor, trip.bookingId, { takenBy: trip.provider });
       await recordAudit(tx, actor, 'lab_trip.sent', { type: 'lab_trip', id: tripId }, { assets: moved.map((a) => a.assetTag) });
       return this.view(tx, trip);
     });

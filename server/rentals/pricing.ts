@@ -9,7 +9,7 @@ import { ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { RateCard } from './rate-card.entity';
 import { Rental } from './rental.entity';
-import { BookingItem, type Booking } from '../bookings/booking.entity';
+import type { BookingView } from '../bookings';
 import { DepositHold } from '../billing/deposit-hold.entity';
 
 /**
@@ -17,10 +17,10 @@ import { DepositHold } from '../billing/deposit-hold.entity';
  * rate cards of today). The deposit follows too, unless a hold for the old
  * amount is already on the card.
  */
-export async function repriceRental(tx: Scoped, booking: Booking) {
+export async function repriceRental(tx: Scoped, booking: BookingView) {
   if (!booking.rentalId) return;
   const rental = await tx.get(Rental, { id: booking.rentalId }, 'That rental');
-  const items = (await tx.find(BookingItem, { where: { bookingId: booking.id } })).map((i) => i.assetId);
+  const items = booking.assetIds;
   const kitMembers = booking.kitId ? (await membersOf(tx, booking.kitId)).map((a) => a.id) : [];
   const quote = await priceRental(tx, { kitId: booking.kitId ?? undefined, assetIds: items.filter((id) => !kitMembers.includes(id)), startsOn: booking.startsOn, endsOn: booking.endsOn });
   const held = await tx.count(DepositHold, { rentalId: rental.id, kind: 'hold', state: 'authorized' });

@@ -5,9 +5,7 @@ import type { RentalSummary } from '../../shared/billing/views';
 import { formatMoney } from '../../shared/billing/money';
 import type { rentalListQuery, rentalPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
-import type { Booking } from '../bookings/booking.entity';
-import type { BookingsService } from '../bookings/bookings.service';
-import type { HandoverGates } from '../bookings/handover.service';
+import { book, type BookingView, type HandoverGates } from '../bookings';
 import { nextNumber, padded } from '../billing/numbering';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
@@ -24,16 +22,14 @@ import { DepositHold } from '../billing/deposit-hold.entity';
 
 /** Rentals: a booking for a customer at quoted prices, its papers, and what the counter must check. */
 export class RentalRegisterService {
-  constructor(
-    private readonly db: DataSource,
-    private readonly bookings: BookingsService,
-  ) {}
+  constructor(private readonly db: DataSource) {}
 
   /** Books under the bookings rules unchanged (409/422 as there) and records the rental in the same transaction. */
   async create(actor: Actor, input: z.infer<typeof rentalPayload>) {
-    await readInOrganization(this.db, actor.organizationId, (tx) => tx.get(Customer, { id: input.customerId }, 'That customer'));
     const rentalId = randomUUID();
-    await this.bookings.create(actor, { kitId: input.kitId, assetIds: input.assetIds, startsOn: input.startsOn, endsOn: input.endsOn, rentalId, note: input.note }, async (tx, booking) => {
+    await inOrganization(this.db, actor.organizationId, async (tx) => {
+      await tx.get(Customer, { id: input.customerId }, 'That customer');
+      const booking = await book(tx, actor, { kitId: input.kitId, assetIds: input.assetIds, startsOn: input.startsOn, endsOn: input.endsOn, rentalId, note: input.note });
       const quote = await priceRental(tx, { kitId: input.kitId, assetIds: input.assetIds, startsOn: input.startsOn, endsOn: input.endsOn });
       const number = `R-${padded(await nextNumber(tx, 'rental'))}`;
       await tx.insert(Rental, { id: rentalId, number, customerId: input.customerId, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: null, note: input.note ?? null, createdBy: actor.userId });
@@ -103,7 +99,7 @@ export class RentalRegisterService {
 
   /** What the counter checks for a rental: a deposit hold before handing over; the papers go to the renter after. */
   readonly handoverGates: HandoverGates = {
-    beforeCheckout: async (tx: Scoped, booking: Booking) => {
+    beforeCheckout: async (tx: Scoped, booking: BookingView) => {
       if (!booking.rentalId) return;
       const rental = await tx.get(Rental, { id: booking.rentalId }, 'That rental');
       if (rental.depositMinor <= 0) return;
@@ -112,7 +108,7 @@ export class RentalRegisterService {
         throw ruleBroken('deposit_required', `Rental ${rental.number} needs its deposit hold of ${formatMoney(rental.depositMinor, rental.currency, 'en-GB')} on the customer's card before the kit is handed over${state === 'declined' ? ' (the last card was declined)' : ''}. The billing clerk takes it on the rental's page.`);
       }
     },
-    afterCheckout: async (tx: Scoped, booking: Booking) => {
+    afterCheckout: async (tx: Scoped, booking: BookingView) => {
       if (!booking.rentalId) return;
       const rental = await loadRentalView(tx, await tx.get(Rental, { id: booking.rentalId }, 'That rental'));
       const [agreement, pack] = [await agreementFor(tx, rental), await certificatePackFor(tx, rental)];

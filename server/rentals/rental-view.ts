@@ -2,7 +2,7 @@ import { In } from 'typeorm';
 import { settle, lateDaysBetween } from '../../shared/billing/settlement';
 import type { DepositHoldView, DepositState, InvoiceSummary, RentalState, RentalView } from '../../shared/billing/views';
 import { calendarDayIn } from '../../shared/calibration/due-date';
-import { Booking, BookingItem } from '../bookings/booking.entity';
+import { loadBooking, type BookingView } from '../bookings';
 import { DepositHold } from '../billing/deposit-hold.entity';
 import { Invoice, InvoicePayment } from '../billing/invoice.entity';
 import type { Scoped } from '../db/scoped';
@@ -70,20 +70,19 @@ export function invoiceSummaries(invoices: Invoice[], customerCompany: string, p
   });
 }
 
-export const rentalState = (booking: Booking, invoiced: boolean): RentalState => (booking.state === 'cancelled' ? 'cancelled' : invoiced ? 'invoiced' : booking.state);
+export const rentalState = (booking: Pick<BookingView, 'state'>, invoiced: boolean): RentalState => (booking.state === 'cancelled' ? 'cancelled' : invoiced ? 'invoiced' : booking.state);
 
 /** Everything the rental page shows, read in the caller's transaction. */
 export async function loadRentalView(tx: Scoped, rental: Rental): Promise<RentalView> {
   const ctx = await loadOrgContext(tx);
-  const booking = await tx.get(Booking, { id: rental.bookingId }, 'That booking', { relations: { kit: true } });
+  const booking = await loadBooking(tx, rental.bookingId);
   const customer = await tx.get(Customer, { id: rental.customerId }, 'That customer');
-  const itemIds = (await tx.find(BookingItem, { where: { bookingId: booking.id } })).map((i) => i.assetId);
-  const assets = await assetsByIds(tx, itemIds, { packingOrder: true });
+  const assets = await assetsByIds(tx, booking.assetIds, { packingOrder: true });
   const holds = await tx.find(DepositHold, { where: { rentalId: rental.id }, order: { createdAt: 'ASC' } });
   const incidents = await tx.find(Incident, { where: { bookingId: booking.id }, order: { createdAt: 'ASC' } });
   const invoices = await tx.find(Invoice, { where: { rentalId: rental.id }, order: { issuedAt: 'ASC' } });
   const deposit = depositState(holds);
-  const returnedOn = booking.returnedAt ? calendarDayIn(booking.returnedAt, ctx.timeZone) : null;
+  const returnedOn = booking.returnedAt ? calendarDayIn(new Date(booking.returnedAt), ctx.timeZone) : null;
   const lateDays = booking.state === 'returned' || booking.state === 'out' ? lateDaysBetween(booking.endsOn, returnedOn ?? ctx.today) : 0;
   const charges = incidents.map((i) => ({
     incidentId: i.id,
@@ -100,7 +99,7 @@ export async function loadRentalView(tx: Scoped, rental: Rental): Promise<Rental
     state: rentalState(booking, invoices.some((i) => i.kind === 'invoice')),
     customer: { id: customer.id, company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail },
     bookingId: booking.id,
-    kit: booking.kit ? { id: booking.kit.id, name: booking.kit.name } : null,
+    kit: booking.kit,
     items: assets.map((a) => ({ id: a.id, assetTag: a.assetTag, type: a.type, serialNumber: a.serialNumber, model: a.model, manufacturer: a.manufacturer, replacementValueMinor: a.replacementValueMinor })),
     startsOn: booking.startsOn,
     endsOn: booking.endsOn,
@@ -109,8 +108,8 @@ export async function loadRentalView(tx: Scoped, rental: Rental): Promise<Rental
     currency: rental.currency,
     depositMinor: rental.depositMinor,
     deposit: { state: deposit.state, hold: deposit.hold ? holdView(deposit.hold) : null, holds: holds.map(holdView) },
-    checkedOutAt: booking.checkedOutAt?.toISOString() ?? null,
-    returnedAt: booking.returnedAt?.toISOString() ?? null,
+    checkedOutAt: booking.checkedOutAt,
+    returnedAt: booking.returnedAt,
     charges,
     settlement: settle({
       quote: rental.quote,

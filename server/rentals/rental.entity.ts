@@ -1,6 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { Quote } from '../../shared/billing/views';
-import { Booking } from '../bookings/booking.entity';
 import { OrgOwned } from '../db/org-owned';
 import { Customer } from './customer.entity';
 
@@ -26,9 +25,10 @@ export class Rental extends OrgOwned {
   @Column({ name: 'booking_id', type: 'uuid' })
   bookingId: string;
 
-  @ManyToOne(() => Booking, { onDelete: 'RESTRICT', nullable: false })
+  // The bookings component's row, named rather than imported: rentals read it through server/bookings.
+  @ManyToOne('Booking', { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'booking_id' })
-  booking?: Booking;
+  booking?: object;
 
   /** The prices agreed: kept as quoted, whatever the rate cards say later. */
   @Column({ type: 'jsonb' })

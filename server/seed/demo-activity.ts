@@ -3,8 +3,7 @@ import { tipValidation } from '../../shared/checks/tip-validation';
 import { twoFaceErrorUm } from '../../shared/checks/two-face';
 import { lengthCheck } from '../../shared/checks/length-check';
 import { AuditEvent } from '../audit/audit-event.entity';
-import { Booking, BookingItem } from '../bookings/booking.entity';
-import { Job } from '../bookings/job.entity';
+import { seedBooking, seedJob } from '../bookings';
 import { FieldCheck } from '../checks/field-check.entity';
 import type { Scoped } from '../db/scoped';
 import { fleetSnapshot, moveAssets, recordPastCustody, type AssetRecord, type KitRecord } from '../fleet';
@@ -97,14 +96,14 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   await moveAssets(tx, { userId: tech.id }, [dropped.id], 'held', { why: 'Dropped: reported from site', details: { holdId: hold.id, reason: hold.reason, summary: hold.summary } });
 
   // Jobs and bookings.
-  const jobs = [];
+  const jobs: Awaited<ReturnType<typeof seedJob>>[] = [];
   for (const [i, c] of customers.entries()) {
     const start = [-60, -5, -12, 7, 14][i];
     const length = [6, 8, 9, 6, 6][i];
-    jobs.push(await tx.insert(Job, { ...c, startsOn: addDays(today, start), endsOn: addDays(today, start + length), leadTechnicianId: tech.id, notes: null }));
+    jobs.push(await seedJob(tx, { ...c, startsOn: addDays(today, start), endsOn: addDays(today, start + length), leadTechnicianId: tech.id, notes: null }));
   }
   const [alder, birch, cedar, damson] = kits;
-  type Plan = { kit: KitRecord; job: Job; state: 'returned' | 'out' | 'reserved' };
+  type Plan = { kit: KitRecord; job: (typeof jobs)[number]; state: 'returned' | 'out' | 'reserved' };
   const plans: Plan[] = [
     { kit: alder, job: jobs[0], state: 'returned' },
     { kit: birch, job: jobs[1], state: 'out' },
@@ -115,14 +114,13 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   for (const p of plans) {
     const items = members(p.kit).filter((a) => a.status !== 'held');
     const out = p.state !== 'reserved';
-    const booking = await tx.insert(Booking, {
-      startsOn: p.job.startsOn, endsOn: p.job.endsOn, state: p.state, purpose: 'job', jobId: p.job.id, rentalId: null, kitId: p.kit.id, note: null, createdBy: manager.id,
+    const booking = await seedBooking(tx, {
+      startsOn: p.job.startsOn, endsOn: p.job.endsOn, state: p.state, purpose: 'job', jobId: p.job.id, kitId: p.kit.id, createdBy: manager.id,
       checkedOutAt: out ? new Date(`${p.job.startsOn}T07:45:00Z`) : null, handedOverBy: out ? manager.id : null, takenBy: out ? tech.name : null, takenByUserId: out ? tech.id : null,
       checkoutChecklist: out ? items.map((a) => ({ assetId: a.id, present: true, condition: 'good' as const })) : null,
       returnedAt: p.state === 'returned' ? new Date(`${p.job.endsOn}T16:10:00Z`) : null, receivedBy: p.state === 'returned' ? manager.id : null,
       broughtBackBy: p.state === 'returned' ? tech.name : null, returnChecklist: p.state === 'returned' ? items.map((a) => ({ assetId: a.id, present: true, condition: 'good' as const })) : null,
-    });
-    await tx.insertMany(BookingItem, items.map((a) => ({ bookingId: booking.id, assetId: a.id, startsOn: p.job.startsOn, endsOn: p.job.endsOn, active: p.state !== 'returned' })));
+    }, items.map((a) => a.id));
     if (p.state === 'out') await moveAssets(tx, { userId: manager.id }, items.map((a) => a.id), 'out', { bookingId: booking.id, where: p.job.siteAddress, counterpart: tech.name });
     if (p.state === 'returned') {
       const event = { actorUserId: manager.id, bookingId: booking.id, note: null };

@@ -1,6 +1,6 @@
 import { addDays, dueDate, todayIn } from '../../shared/calibration/due-date';
 import { suggestInterval } from '../../shared/calibration/interval-review';
-import { Booking, BookingItem } from '../bookings/booking.entity';
+import { seedBooking } from '../bookings';
 import { CalibrationEvent, CertificateFile } from '../calibration/calibration-event.entity';
 import { openImpactReview } from '../calibration/impact.service';
 import { LabTrip, LabTripItem } from '../calibration/lab-trip.entity';
@@ -62,11 +62,10 @@ export async function seedDemoCalibration(tx: Scoped, firm: string, timeZone: st
   // Two spares at the lab since five days ago.
   const spares = assets.filter((a) => !a.kitId && a.status === 'ready' && a.type !== 'tip').slice(0, 2);
   const sentOn = addDays(today, -5);
-  const booking = await tx.insert(Booking, {
-    startsOn: sentOn, endsOn: addDays(sentOn, 13), state: 'out', purpose: 'lab', jobId: null, rentalId: null, kitId: null, note: 'Calibration at Fenmoor Calibration Lab', createdBy: manager.id,
+  const booking = await seedBooking(tx, {
+    startsOn: sentOn, endsOn: addDays(sentOn, 13), state: 'out', purpose: 'lab', note: 'Calibration at Fenmoor Calibration Lab', createdBy: manager.id,
     checkedOutAt: new Date(`${sentOn}T08:00:00Z`), handedOverBy: manager.id, takenBy: 'Fenmoor Calibration Lab', takenByUserId: null,
-  });
-  await tx.insertMany(BookingItem, spares.map((a) => ({ bookingId: booking.id, assetId: a.id, startsOn: sentOn, endsOn: addDays(sentOn, 13), active: true })));
+  }, spares.map((a) => a.id));
   const trip = await tx.insert(LabTrip, { provider: 'Fenmoor Calibration Lab', sentOn, expectedBackOn: addDays(sentOn, 13), state: 'at_lab', bookingId: booking.id, createdBy: manager.id });
   await tx.insertMany(LabTripItem, spares.map((a) => ({ labTripId: trip.id, assetId: a.id, receivedOn: null, calibrationEventId: null })));
   await moveAssets(tx, actor, spares.map((a) => a.id), 'at_lab', { bookingId: booking.id, where: trip.provider, counterpart: trip.provider });

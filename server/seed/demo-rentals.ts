@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { taxMinor } from '../../shared/billing/quote';
 import { settle, lateDaysBetween } from '../../shared/billing/settlement';
 import type { AssetType } from '../../shared/assets/vocabulary';
@@ -5,7 +6,7 @@ import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { DepositHold } from '../billing/deposit-hold.entity';
 import { Invoice, InvoicePayment } from '../billing/invoice.entity';
 import { nextNumber, padded } from '../billing/numbering';
-import { Booking, BookingItem } from '../bookings/booking.entity';
+import { seedBooking } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { fleetSnapshot, moveAssets, recordPastCustody, type AssetRecord } from '../fleet';
 import { Hold } from '../holds/hold.entity';
@@ -93,14 +94,13 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
     const quote = await priceRental(tx, { kitId: kit?.id, assetIds: kit ? undefined : items.map((a) => a.id), startsOn, endsOn });
     const damaged = p.damagedType ? items.find((a) => a.type === p.damagedType)! : null;
     const checklist = (d: AssetRecord | null) => items.map((a) => ({ assetId: a.id, present: true, condition: a === d ? ('damaged' as const) : ('good' as const) }));
-    const booking = await tx.insert(Booking, {
-      startsOn, endsOn, state: out ? 'out' : 'returned', purpose: 'rental', jobId: null, rentalId: null, kitId: kit?.id ?? null, note: null, createdBy: clerk.id,
+    const rentalId = randomUUID();
+    const booking = await seedBooking(tx, {
+      startsOn, endsOn, state: out ? 'out' : 'returned', purpose: 'rental', rentalId, kitId: kit?.id ?? null, createdBy: clerk.id,
       checkedOutAt: at(p.from, 8), handedOverBy: manager.id, takenBy: customers[p.renter].billingContact, takenByUserId: null, checkoutChecklist: checklist(null),
       returnedAt: returnedOn ? at(p.back ?? p.to, 15) : null, receivedBy: returnedOn ? manager.id : null, broughtBackBy: returnedOn ? customers[p.renter].billingContact : null, returnChecklist: returnedOn ? checklist(damaged) : null,
-    });
-    const rental = await tx.insert(Rental, { number: `R-${padded(await nextNumber(tx, 'rental'))}`, customerId: customers[p.renter].id, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: 'pm_card_visa', note: null, createdBy: clerk.id, createdAt: at(p.from - 6, 10) });
-    await tx.updateWhere(Booking, { id: booking.id }, { rentalId: rental.id });
-    await tx.insertMany(BookingItem, items.map((a) => ({ bookingId: booking.id, assetId: a.id, startsOn, endsOn, active: out })));
+    }, items.map((a) => a.id));
+    const rental = await tx.insert(Rental, { id: rentalId, number: `R-${padded(await nextNumber(tx, 'rental'))}`, customerId: customers[p.renter].id, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: 'pm_card_visa', note: null, createdBy: clerk.id, createdAt: at(p.from - 6, 10) });
     const renter = { holder: customers[p.renter].company, location: customers[p.renter].address };
     if (out) await moveAssets(tx, { userId: manager.id }, items.map((a) => a.id), 'out', { bookingId: booking.id, where: renter.location, counterpart: renter.holder });
     else {

@@ -20,6 +20,13 @@ describe('booking rules (DESIGN.md §4.1)', () => {
     expect(blockReason(asset({ type: 'tip', tipValidated: true }), '2026-12-02')).toBeNull();
   });
 
+  it('lets a lab trip take what may not go out on a job, except a retired item', () => {
+    for (const over of [{ status: 'held' }, { status: 'at_lab' }, { calibration: { required: true, dueOn: null } }, { type: 'tip', tipValidated: false }]) {
+      expect(blockReason(asset(over), '2027-01-31', 'lab')).toBeNull();
+    }
+    expect(blockReason(asset({ status: 'retired' }), '2027-01-31', 'lab')).toBe('retired');
+  });
+
   it('counts whole days with both ends included (checked with Luxon intervals)', () => {
     expect(bookingDays('2026-12-01', '2026-12-01')).toBe(1);
     expect(bookingDays('2026-12-01', '2026-12-14')).toBe(14);

@@ -1,5 +1,6 @@
 import { differenceInCalendarDays, parseISO } from 'date-fns';
 import type { AssetStatus, AssetType } from '../schemas/assets';
+import type { BookingPurpose } from '../schemas/bookings';
 
 /** Why an item cannot be booked for a window (API.md `booking_blocked`). */
 export type BlockReason = 'calibration_expires' | 'held' | 'retired' | 'at_lab' | 'tip_not_validated';
@@ -23,10 +24,13 @@ export type BookableAsset = {
 /**
  * The rules a booking must pass for one item (DESIGN.md §4.1). Calibration must
  * be valid through `endsOn`: an item is valid through its due date, so due on
- * the last day is fine and due the day before is not.
+ * the last day is fine and due the day before is not. The server decides with
+ * this function and the browser previews with it.
  */
-export function blockReason(asset: BookableAsset, endsOn: string): BlockReason | null {
+export function blockReason(asset: BookableAsset, endsOn: string, purpose: BookingPurpose = 'job'): BlockReason | null {
   if (asset.status === 'retired') return 'retired';
+  // A lab trip is how an item gets back into service: a hold or a lapsing calibration is the reason it goes.
+  if (purpose === 'lab') return null;
   if (asset.status === 'held') return 'held';
   if (asset.status === 'at_lab') return 'at_lab';
   if (asset.calibration.required && (!asset.calibration.dueOn || asset.calibration.dueOn < endsOn)) return 'calibration_expires';

@@ -127,7 +127,7 @@ describe('the billing desk in a real browser', () => {
     const added = await clerkApi('/customers', { company: formula, billingContact: '-2+3', billingEmail: 'grid-export@customer.test', taxNumber: '-12.50' });
     expect(added.status).toBe(201);
 
-    const { context, page } = await signedIn(rig.browser, rig.baseUrl, 'billing@demo.test', 'Billing desk');
+    const { context, page } = await signedIn(rig, 'billing@demo.test', 'Billing desk');
     await page.goto(`${rig.baseUrl}/customers`);
     const grid = page.getByRole('region', { name: 'Customers', exact: true }).filter({ has: page.getByRole('button', { name: 'Export CSV' }) });
     await grid.getByRole('gridcell', { name: formula }).waitFor();

@@ -1,0 +1,29 @@
+import { blockReason, blockReasonText, type BlockReason } from '../../shared/bookings/rules';
+import type { AssetType } from '../../shared/schemas/assets';
+import type { BookingPurpose } from '../../shared/schemas/bookings';
+import type { Scoped } from '../db/scoped';
+import { AppError } from '../http/errors';
+import { itemFacts, type ItemFacts } from './booking-queries';
+
+type Refusal = { assetId: string; assetTag: string; type: AssetType; reason: BlockReason };
+
+/** The items that may not go on a booking ending `endsOn`, in tag order: the shared rule (shared/bookings/rules.ts) applied to their facts. */
+export function refusedItems(facts: ItemFacts[], endsOn: string, purpose: BookingPurpose): Refusal[] {
+  return facts.flatMap(({ assetId, assetTag, type, status, calibrationRequired, dueOn, tipValidated }) => {
+    const reason = blockReason({ type, status, calibration: { required: calibrationRequired, dueOn }, tipValidated }, endsOn, purpose);
+    return reason ? [{ assetId, assetTag, type, reason }] : [];
+  });
+}
+
+/** `refusedItems` for items known by id: their facts in one query. */
+export async function refusals(tx: Scoped, assetIds: string[], endsOn: string, purpose: BookingPurpose) {
+  return refusedItems(await itemFacts(tx, assetIds), endsOn, purpose);
+}
+
+/** 422 `booking_blocked` naming each item and why (API.md). */
+export function blockedError(doing: string, refused: Refusal[], details: Record<string, unknown> = {}) {
+  return new AppError(422, 'booking_blocked', `${doing}: ${refused.map((r) => `${r.assetTag} — ${blockReasonText[r.reason]}`).join('; ')}.`, {
+    blocked: refused.map(({ assetId, assetTag, reason }) => ({ assetId, assetTag, reason })),
+    ...details,
+  });
+}

@@ -1,0 +1,12 @@
+/**
+ * The bookings component's public surface. Bookings own their rows: other
+ * components book, move, cancel, check out, take back and close only through
+ * these functions (in their own transaction), and see bookings as plain views.
+ */
+export { book, cancelBooking, checkOut, closeBooking, loadBooking, moveBooking, takeBack, type BookingRequest } from './lifecycle';
+export { busyDays } from './booking-queries';
+export type { BookingView } from './booking-view';
+export type { ChecklistLine } from './booking.entity';
+export type { HandoverGates } from './handover.service';
+export { seedBooking, seedJob } from './seed';
+export { countBookings, seedBenchBookings } from './bench-seed';

@@ -24,8 +24,10 @@ export default [
         { type: 'client-feature', pattern: 'src/features/*', capture: ['name'] },
         { type: 'client-base', pattern: 'src/{components,lib,styles}' },
         { type: 'client-entry', pattern: 'src/main.tsx', mode: 'file' },
-        { type: 'server-base', pattern: 'server/{db,http,config.ts}' },
-        { type: 'server-root', pattern: 'server/*.ts', mode: 'file' },
+        { type: 'server-base', pattern: 'server/{db,http,documents}' },
+        { type: 'server-base', pattern: 'server/config.ts', mode: 'file' },
+        { type: 'server-root', pattern: 'server/{*.ts,seed/**}', mode: 'file' },
+        { type: 'server-fakes', pattern: 'server/fakes' },
         { type: 'server-component', pattern: 'server/*', capture: ['name'] },
       ],
     },
@@ -43,12 +45,14 @@ export default [
             { to: { element: { types: ['client-base', 'shared'] } } },
           ] },
           { from: { element: { type: 'client-base' } }, allow: { to: { element: { types: ['client-base', 'shared'] } } } },
-          // The server's base (db, http, config) knows no component.
+          // The server's base (db, http, config, the PDF and CSV writers) knows no component.
           { from: { element: { type: 'server-base' } }, allow: { to: { element: { types: ['server-base', 'shared'] } } } },
           // A component uses another only through its index or service file, never its entities or tables.
           { from: { element: { type: 'server-component' } }, allow: [...sameOrPublic('server-component'), { to: { element: { types: ['server-base', 'shared'] } } }] },
-          // app.ts, index.ts and the other top files compose everything.
-          { from: { element: { type: 'server-root' } }, allow: { to: { element: { types: ['server-root', 'server-component', 'server-base', 'shared'] } } } },
+          // The local stand-ins for the mail and payment providers know nothing of the product.
+          { from: { element: { type: 'server-fakes' } }, allow: { to: { element: { types: ['server-fakes', 'server-base'] } } } },
+          // app.ts, index.ts, the other top files and the demo seed compose everything.
+          { from: { element: { type: 'server-root' } }, allow: { to: { element: { types: ['server-root', 'server-component', 'server-fakes', 'server-base', 'shared'] } } } },
         ],
       }],
     },

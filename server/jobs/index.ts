@@ -1,0 +1,2 @@
+/** Scheduled work's surface: the shape of a job other components define. */
+export type { JobContext, JobDefinition } from './job';

@@ -37,6 +37,14 @@ export class AuthService {
     return { token, user: publicUser(user) };
   }
 
+  /** Ends every token of the caller, the bearer tokens too (not only this browser's cookie): the token version moves on. */
+  signOut(actor: Actor) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      await tx.updateWhere(User, { id: actor.userId }, { tokenVersion: () => 'token_version + 1' });
+      await recordAudit(tx, actor, 'user.signed_out', { type: 'user', id: actor.userId });
+    });
+  }
+
   me(actor: Actor) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const user = await tx.get(User, { id: actor.userId }, 'Your account');

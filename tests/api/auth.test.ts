@@ -88,7 +88,7 @@ describe('sign-in', () => {
     const agent = (await import('supertest')).default.agent(t.app);
     const login = await agent.post('/api/auth/login').send({ email: 'owner@demo.test', password: 'nestkeeper-demo' });
     const csrf = ([] as string[]).concat(login.headers['set-cookie']).find((c) => c.startsWith('nk_csrf='))!.split(';')[0].split('=')[1];
-    const body = { email: 'csrf.check@demo.test', name: 'Csrf Check', role: 'technician', password: 'long-enough-pw' };
+    const body = { email: 'csrf.check@demo.test', name: 'Csrf Check', role: 'technician', password: 'lichen-parcel-76-wren' };
     const refused = await agent.post('/api/users').send(body);
     expect(refused.status).toBe(403);
     const allowed = await agent.post('/api/users').set('X-CSRF-Token', csrf).send(body);
@@ -143,16 +143,19 @@ describe('sign-out', () => {
 describe('own password', () => {
   it('changes the password; the old token and old password stop working', async () => {
     const token = await t.tokenFor('manager@demo.test');
-    const wrong = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nope-nope-nope', newPassword: 'a-new-long-password' });
+    const wrong = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nope-nope-nope', newPassword: 'amber-tundra-sleet-38' });
     expect(wrong.status).toBe(422);
     expect(wrong.body.error.code).toBe('wrong_password');
     const short = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'short' });
     expect(short.status).toBe(400);
     expect(short.body.error.details.fields.newPassword).toMatch(/at least 10/);
-    const ok = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'a-new-long-password' });
+    const guessable = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'nestkeeper2025' });
+    expect(guessable.status).toBe(400);
+    expect(guessable.body.error.details.fields.newPassword).toMatch(/^is too easy to guess\./);
+    const ok = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'amber-tundra-sleet-38' });
     expect(ok.status).toBe(204);
     expect((await t.api.get('/api/auth/me').set(bearer(token))).status).toBe(401);
     expect((await t.api.post('/api/auth/login').send({ email: 'manager@demo.test', password: 'nestkeeper-demo' })).status).toBe(401);
-    expect(await t.tokenFor('manager@demo.test', 'a-new-long-password')).toBeTruthy();
+    expect(await t.tokenFor('manager@demo.test', 'amber-tundra-sleet-38')).toBeTruthy();
   });
 });

@@ -7,7 +7,7 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { Asset } from '../fleet/asset.entity';
 import { Kit } from '../fleet/kit.entity';
-import { AppError, conflict, notFound, ruleBroken } from '../http/errors';
+import { AppError, conflict, ruleBroken } from '../http/errors';
 import { availableAssets, blockedItems, conflictingItems } from './booking-queries';
 import { Booking, BookingItem } from './booking.entity';
 import { Job } from './job.entity';
@@ -83,9 +83,10 @@ export class BookingsService {
     try {
       return await inOrganization(this.db, actor.organizationId, async (tx) => {
         const assetIds = await this.resolveAssets(tx, input.assetIds ?? [], input.kitId);
+        // Every id first: one that is not found is 404 before any booking rule answers.
+        if (input.jobId) await tx.get(Job, { id: input.jobId }, 'That job');
         await this.assertBookable(tx, assetIds, input.startsOn, input.endsOn, null);
         const purpose: BookingPurpose = input.rentalId ? 'rental' : input.jobId ? 'job' : 'internal';
-        if (input.jobId) await tx.get(Job, { id: input.jobId }, 'That job');
         const booking = await tx.insert(Booking, {
           startsOn: input.startsOn,
           endsOn: input.endsOn,
@@ -186,9 +187,7 @@ export class BookingsService {
       for (const m of await tx.find(Asset, { where: { kitId } })) ids.add(m.id);
       if (ids.size === 0) throw ruleBroken('kit_empty', 'That kit has no members to book.');
     }
-    const found = await tx.find(Asset, { where: { id: In([...ids]) } });
-    const missing = [...ids].filter((id) => !found.some((a) => a.id === id));
-    if (missing.length) throw notFound(`Asset ${missing[0]}`);
+    await tx.getEach(Asset, [...ids], 'Asset');
     return [...ids];
   }
 

@@ -38,6 +38,7 @@ export class HandoverService {
       const booking = await tx.get(Booking, { id }, 'That booking');
       if (booking.state !== 'reserved') throw ruleBroken('booking_state', `Only a reserved booking can be checked out; this one is ${booking.state}.`);
       const assets = await this.walk(tx, booking, input.checklist);
+      const taker = await this.counterpart(tx, input.counterpart);
       const absent = input.checklist.filter((l) => !l.present);
       if (absent.length) throw ruleBroken('checkout_incomplete', `Not here: ${tags(assets, absent)}. Find them, or take them off the booking, before handing over.`, { missing: absent.map((l) => l.assetId) });
       const damaged = input.checklist.filter((l) => l.condition === 'damaged');
@@ -49,7 +50,6 @@ export class HandoverService {
       const stillOut = assets.filter((a) => a.status === 'out');
       if (stillOut.length) throw ruleBroken('still_out', `Still out on an earlier booking: ${stillOut.map((a) => a.assetTag).join(', ')}. Take them back in first.`);
       await this.gates.beforeCheckout?.(tx, booking);
-      const taker = await this.counterpart(tx, input.counterpart);
       const now = new Date();
       await tx.updateWhere(Asset, { id: In(assets.map((a) => a.id)) }, { status: 'out' });
       await tx.insertMany(CustodyEvent, assets.map((a) => ({ assetId: a.id, kind: 'checked_out' as const, actorUserId: actor.userId, holder: taker.name, location: null, bookingId: id, note: noteFor(input.checklist, a.id) })));
@@ -133,8 +133,7 @@ export class HandoverService {
   /** A person's name, or the id of one of the firm's users. */
   private async counterpart(tx: Scoped, who: string): Promise<{ name: string; userId: string | null }> {
     if (!UUID.test(who)) return { name: who, userId: null };
-    const user = await tx.findOne(User, { id: who });
-    if (!user) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { counterpart: 'is not one of your people' } });
+    const user = await tx.get(User, { id: who }, 'That person');
     return { name: user.name, userId: user.id };
   }
 }

@@ -13,6 +13,7 @@ if (!suite) {
   process.exit(2);
 }
 import { spawn } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import net from 'node:net';
 import os from 'node:os';
@@ -44,7 +45,7 @@ try {
   ensureClientBuild();
   const url = await ensureDatabase(startCluster({ dataDir, port: await freePort(), log }), 'nestkeeper');
   const port = await freePort();
-  const env = { ...process.env, DATABASE_URL: url, JWT_SECRET: 'bench-secret-bench-secret-bench-secret', PORT: String(port), START_LOCAL_FAKES: 'false', RUN_SCHEDULER: 'false', NODE_ENV: 'production' };
+  const env = { ...process.env, DATABASE_URL: url, JWT_SECRET: randomBytes(48).toString('base64url'), PAYMENT_WEBHOOK_SECRET: `whsec_${randomBytes(32).toString('base64url')}`, PORT: String(port), START_LOCAL_FAKES: 'false', RUN_SCHEDULER: 'false', NODE_ENV: 'production' };
   runTs('server/prepare.ts', env);
   env.BENCH_ASSETS = String(suite.assets ?? 20_000);
   runTs('server/seed/seed-bench-fleet.ts', env);

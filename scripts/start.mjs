@@ -2,7 +2,7 @@
 // `npm run dev` (--dev): the same database, Vite with hot reload, server in watch mode.
 import { spawn } from 'node:child_process';
 import path from 'node:path';
-import { LOCAL_PG_PORT, localDataDir, localJwtSecret, projectRoot } from './lib/local-env.mjs';
+import { LOCAL_PG_PORT, installationSecret, localDataDir, projectRoot } from './lib/local-env.mjs';
 import { ensurePostgresInstalled, startCluster, stopCluster } from './lib/postgres.mjs';
 import { ensureClientBuild, ensureDatabase, ensureDependencies, log, runTs, waitForHealth } from './lib/steps.mjs';
 
@@ -20,9 +20,13 @@ async function main() {
     const serverUrl = startCluster({ dataDir: clusterDir, port: LOCAL_PG_PORT, log });
     log(`PostgreSQL is running on 127.0.0.1:${LOCAL_PG_PORT} (data in ${path.join(clusterDir, 'pgdata')}).`);
     env.DATABASE_URL = await ensureDatabase(serverUrl, 'nestkeeper');
-    env.JWT_SECRET ??= localJwtSecret(clusterDir);
+    env.JWT_SECRET ??= installationSecret(clusterDir, 'jwt-secret');
+    // The local payment fake signs its events with the same secret (server/index.ts hands it over).
+    env.PAYMENT_WEBHOOK_SECRET ??= installationSecret(clusterDir, 'payment-webhook-secret', 'whsec_');
   }
-  if (!env.JWT_SECRET) throw new Error('Set JWT_SECRET (32+ characters) when DATABASE_URL points at your own PostgreSQL.');
+  if (!env.JWT_SECRET || !env.PAYMENT_WEBHOOK_SECRET) {
+    throw new Error('Set JWT_SECRET (32+ characters) and PAYMENT_WEBHOOK_SECRET (your payment provider\'s webhook signing secret) when DATABASE_URL points at your own PostgreSQL.');
+  }
   runTs('server/prepare.ts', env);
 
   const tsx = ['--import', 'tsx'];

@@ -8,8 +8,12 @@ const environment = z.object({
   HOST: z.string().default('127.0.0.1'),
   /** Server processes sharing the port (1 = no workers). */
   WEB_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(1),
-  /** Express `trust proxy`: which hops may set X-Forwarded-For (the load balancer in docker/). */
-  TRUST_PROXY: z.string().default('loopback'),
+  /** Express `trust proxy`: which hops may set X-Forwarded-For. None by default, so a caller cannot pick
+   * its own address (and fresh sign-in attempts); set it where a load balancer sits in front (docker/). */
+  TRUST_PROXY: z
+    .string()
+    .default('false')
+    .transform((v) => (v === 'false' ? false : v === 'true' ? true : /^\d+$/.test(v) ? Number(v) : v)),
   DATABASE_URL: z.string().url(),
   JWT_SECRET: z.string().min(32, 'must be at least 32 characters'),
   PUBLIC_URL: z.string().url().optional(),
@@ -20,7 +24,8 @@ const environment = z.object({
   PAYMENT_API_HOST: z.string().default('127.0.0.1'),
   PAYMENT_API_PORT: z.coerce.number().int().min(0).max(65535).default(4610),
   PAYMENT_API_PROTOCOL: z.enum(['http', 'https']).default('http'),
-  PAYMENT_WEBHOOK_SECRET: z.string().default('whsec_nestkeeper_local'),
+  /** Signs the provider's webhook deliveries; made per installation (`npm start` keeps one beside the data), never built in. */
+  PAYMENT_WEBHOOK_SECRET: z.string({ message: 'is required: the signing secret of the payment provider\'s webhook endpoint' }).min(24, 'must be at least 24 characters'),
   /** How long one call to the provider may take before the SDK retries it (same idempotency key). */
   PAYMENT_TIMEOUT_MS: z.coerce.number().int().min(100).max(120_000).default(15_000),
   START_LOCAL_FAKES: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),

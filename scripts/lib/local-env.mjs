@@ -23,9 +23,10 @@ export function localDataDir() {
   return fallback;
 }
 
-/** The signing secret, created once beside the data and kept across restarts. */
-export function localJwtSecret(dataDir) {
-  const file = path.join(dataDir, 'jwt-secret');
-  if (!fs.existsSync(file)) fs.writeFileSync(file, randomBytes(48).toString('base64url'), { mode: 0o600 });
+/** A secret of this installation (the token-signing key, the payment webhook secret), created once
+ * beside the data and kept across restarts: never built in, so no two installations share one. */
+export function installationSecret(dataDir, name, prefix = '') {
+  const file = path.join(dataDir, name);
+  if (!fs.existsSync(file)) fs.writeFileSync(file, prefix + randomBytes(48).toString('base64url'), { mode: 0o600 });
   return fs.readFileSync(file, 'utf8').trim();
 }

@@ -2,10 +2,17 @@ import { randomBytes } from 'node:crypto';
 import { Router, type CookieOptions, type Response } from 'express';
 import { ipKeyGenerator, rateLimit, type Store } from 'express-rate-limit';
 import { changeOwnPasswordPayload, loginPayload } from '../../shared/schemas/users';
+import type { Actor } from '../db/transaction';
 import { endpoint } from '../http/endpoint';
 import { AppError } from '../http/errors';
 import type { AuthService } from './auth.service';
 import { CSRF_COOKIE, SESSION_COOKIE, TOKEN_LIFETIME_SECONDS } from './tokens';
+
+/** The e-mail as the login schema reads it (trimmed, lower case), so a padded or re-cased address counts against the same limit. */
+const signInName = (raw: unknown) => {
+  const read = loginPayload.shape.email.safeParse(raw);
+  return read.success ? read.data : String(raw ?? '');
+};
 
 export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; attemptsPer10Min: number; attemptStore: Store }): Router {
   const router = Router();
@@ -18,6 +25,7 @@ export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; at
   };
 
   // Per address and e-mail, so one person's typos do not lock out the whole office; counted in PostgreSQL, so the limit holds across instances.
+  // The address is the socket's unless TRUST_PROXY names the proxy in front; the e-mail is read as sign-in reads it.
   router.post(
     '/login',
     rateLimit({
@@ -27,7 +35,7 @@ export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; at
       legacyHeaders: false,
       skipSuccessfulRequests: true,
       store: opts.attemptStore,
-      keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
+      keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${signInName(req.body?.email)}`,
       handler: (_req, _res, next) => next(new AppError(429, 'rate_limited', 'Too many sign-in attempts; wait a few minutes and try again.')),
     }),
   );
@@ -37,7 +45,9 @@ export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; at
     return session;
   });
   endpoint(router, at, { method: 'get', path: '/me', summary: 'The signed-in user and their organization', access: 'signed-in' }, ({ actor }) => auth.me(actor));
-  endpoint(router, at, { method: 'post', path: '/logout', summary: 'Sign out (clears the session cookie)', access: 'public' }, ({ res }) => {
+  endpoint(router, at, { method: 'post', path: '/logout', summary: "Sign out: the caller's tokens stop working and the session cookie is cleared", access: 'if-signed-in' }, async ({ req, res }) => {
+    const caller = req.user as Actor | undefined;
+    if (caller) await auth.signOut(caller);
     res.clearCookie(SESSION_COOKIE, { path: '/' });
     res.clearCookie(CSRF_COOKIE, { path: '/' });
     return undefined;

@@ -2,7 +2,7 @@ import type { KeyObject } from 'node:crypto';
 import bcrypt from 'bcrypt';
 import type { DataSource } from 'typeorm';
 import { recordAudit } from '../audit/audit.service';
-import { inOrganization, type Actor } from '../db/transaction';
+import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { AppError, ruleBroken } from '../http/errors';
 import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
@@ -37,6 +37,14 @@ export class AuthService {
     return { token, user: publicUser(user) };
   }
 
+  /** Ends every token of the caller, the bearer tokens too (not only this browser's cookie): the token version moves on. */
+  signOut(actor: Actor) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      await tx.updateWhere(User, { id: actor.userId }, { tokenVersion: () => 'token_version + 1' });
+      await recordAudit(tx, actor, 'user.signed_out', { type: 'user', id: actor.userId });
+    });
+  }
+
   me(actor: Actor) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const user = await tx.get(User, { id: actor.userId }, 'Your account');
@@ -47,6 +55,8 @@ export class AuthService {
   }
 
   async changeOwnPassword(actor: Actor, currentPassword: string, newPassword: string) {
+    const me = await readInOrganization(this.db, actor.organizationId, (tx) => tx.get(User, { id: actor.userId }, 'Your account'));
+    await this.users.refuseGuessable(actor.organizationId, newPassword, 'newPassword', me);
     const newHash = await this.users.hashPassword(newPassword);
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const user = await tx.manager

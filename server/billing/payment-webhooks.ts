@@ -12,12 +12,30 @@ import { DepositHold } from './deposit-hold.entity';
 import { PaymentEvent } from './payment-event.entity';
 import type { PaymentGateway } from './payment-gateway';
 
+/** Events that would change a hold's state here, and the intent status each claims; the provider confirms it before it counts. */
+const CLAIMS: Partial<Record<string, Stripe.PaymentIntent.Status>> = { 'payment_intent.canceled': 'canceled', 'payment_intent.succeeded': 'succeeded' };
+
+/**
+ * The PaymentIntent as the provider holds it now, fetched for an event that
+ * would change one of our holds: a valid signature proves only who signed,
+ * so a leaked secret or a replayed event cannot lapse or capture a hold the
+ * provider still holds. Fetched before the transaction (no row locks held
+ * over the network); an outage answers 502 and the provider delivers again.
+ */
+async function providerView(db: DataSource, gateway: PaymentGateway, event: Stripe.Event): Promise<Stripe.PaymentIntent | null> {
+  if (!CLAIMS[event.type]) return null;
+  const id = (event.data.object as Stripe.PaymentIntent).id;
+  if (typeof id !== 'string' || !(await db.getRepository(DepositHold).exists({ where: { paymentIntentId: id } }))) return null;
+  return gateway.retrieve(id);
+}
+
 /**
  * What an event means here. The provider's word is final about money: a
  * hold we still count on that it cancelled on its own has lapsed; a hold we
- * did not see captured (our call timed out) was captured.
+ * did not see captured (our call timed out) was captured. Its word is what it
+ * answers when asked (`current`), not what the event body claims.
  */
-async function apply(manager: EntityManager, event: Stripe.Event): Promise<{ organizationId: string | null; outcome: string }> {
+async function apply(manager: EntityManager, event: Stripe.Event, current: Stripe.PaymentIntent | null): Promise<{ organizationId: string | null; outcome: string }> {
   if (!event.type.startsWith('payment_intent.')) return { organizationId: null, outcome: 'not used' };
   const pi = event.data.object as Stripe.PaymentIntent;
   const found = await manager.findOne(DepositHold, { where: { paymentIntentId: pi.id } });
@@ -27,23 +45,28 @@ async function apply(manager: EntityManager, event: Stripe.Event): Promise<{ org
   await tx.sql(`SELECT id FROM deposit_holds WHERE organization_id = $1 AND id = $2 FOR UPDATE`, [found.id]);
   const hold = await tx.get(DepositHold, { id: found.id }, 'That hold');
   const rental = await tx.get(Rental, { id: hold.rentalId }, 'That rental');
-  if (event.type === 'payment_intent.canceled' && hold.state === 'authorized') {
+  const claim = CLAIMS[event.type];
+  if (!claim || hold.state !== 'authorized') return { organizationId: hold.organizationId, outcome: 'already up to date' };
+  if (current?.status !== claim) {
+    return { organizationId: hold.organizationId, outcome: `not confirmed: the provider says ${pi.id} is ${current?.status ?? 'unknown'}, not ${claim}; nothing changed` };
+  }
+  if (claim === 'canceled') {
     Object.assign(hold, { state: 'lapsed', settledAt: new Date() });
     await tx.save(DepositHold, hold);
     await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), {
       subject: `Deposit hold lapsed: rental ${rental.number}`,
       heading: `The card hold for rental ${rental.number} has lapsed`,
       paragraphs: [
-        `The provider released the hold (${pi.cancellation_reason ?? 'no reason given'}). Nothing is secured on the card any more.`,
+        `The provider released the hold (${current.cancellation_reason ?? 'no reason given'}). Nothing is secured on the card any more.`,
         'Charges at return can still go on the saved card, or on the invoice.',
       ],
     });
     return { organizationId: hold.organizationId, outcome: `hold ${hold.id} lapsed` };
   }
-  if (event.type === 'payment_intent.succeeded' && hold.kind === 'hold' && hold.state === 'authorized') {
-    Object.assign(hold, { state: 'captured', capturedMinor: fromProviderAmount(pi.amount_received, pi.currency), captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
+  if (hold.kind === 'hold') {
+    Object.assign(hold, { state: 'captured', capturedMinor: fromProviderAmount(current.amount_received, current.currency), captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
     await tx.save(DepositHold, hold);
-    return { organizationId: hold.organizationId, outcome: `hold ${hold.id} captured (${pi.amount_received})` };
+    return { organizationId: hold.organizationId, outcome: `hold ${hold.id} captured (${current.amount_received})` };
   }
   return { organizationId: hold.organizationId, outcome: 'already up to date' };
 }
@@ -64,10 +87,11 @@ export function paymentWebhookRoutes(db: DataSource, gateway: PaymentGateway, se
       } catch (err) {
         throw new AppError(400, 'invalid_signature', `The webhook signature does not verify: ${(err as Error).message}`);
       }
+      const current = await providerView(db, gateway, event);
       const result = await db.transaction(async (manager) => {
         const inserted = await manager.query(`INSERT INTO payment_events (event_id, type, outcome) VALUES ($1, $2, 'received') ON CONFLICT (event_id) DO NOTHING RETURNING event_id`, [event.id, event.type]);
         if (!inserted.length) return { duplicate: true };
-        const { organizationId, outcome } = await apply(manager, event);
+        const { organizationId, outcome } = await apply(manager, event, current);
         await manager.update(PaymentEvent, { eventId: event.id }, { organizationId, outcome });
         return { duplicate: false, outcome };
       });

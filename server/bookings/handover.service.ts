@@ -33,11 +33,11 @@ export class HandoverService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const booking = await bookingIn(tx, id, 'reserved', 'Only a reserved booking can be checked out');
       const assets = await this.walk(tx, booking, input.checklist);
+      const taker = await this.counterpart(tx, input.counterpart);
       const absent = input.checklist.filter((l) => !l.present);
       if (absent.length) throw ruleBroken('checkout_incomplete', `Not here: ${tags(assets, absent)}. Find them, or take them off the booking, before handing over.`, { missing: absent.map((l) => l.assetId) });
       const damaged = input.checklist.filter((l) => l.condition === 'damaged');
       if (damaged.length) throw ruleBroken('checkout_damaged', `Damaged: ${tags(assets, damaged)}. Report the damage (the item goes on hold) and book an alternative.`, { damaged: damaged.map((l) => l.assetId) });
-      const taker = await this.counterpart(tx, input.counterpart);
       // Refuses (422) items that may no longer go; the rest of the transaction is undone with any later refusal.
       const out = await checkOut(tx, actor, id, { takenBy: taker.name, takenByUserId: taker.userId, checklist: input.checklist as ChecklistLine[] });
       const stillOut = assets.filter((a) => a.status === 'out');
@@ -114,8 +114,7 @@ export class HandoverService {
   /** A person's name, or the id of one of the firm's users. */
   private async counterpart(tx: Scoped, who: string): Promise<{ name: string; userId: string | null }> {
     if (!UUID.test(who)) return { name: who, userId: null };
-    const user = await tx.findOne(User, { id: who });
-    if (!user) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { counterpart: 'is not one of your people' } });
+    const user = await tx.get(User, { id: who }, 'That person');
     return { name: user.name, userId: user.id };
   }
 }

@@ -2,11 +2,16 @@ import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import type { jobPayload } from '../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.service';
+import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { conflict } from '../http/errors';
+import { User } from '../users/user.entity';
 import { Job } from './job.entity';
 
 type JobInput = z.infer<typeof jobPayload>;
+
+/** The lead technician is one of the firm's people: another firm's user id is not found. */
+const leadOf = (tx: Scoped, input: JobInput) => (input.leadTechnicianId ? tx.get(User, { id: input.leadTechnicianId }, 'That lead technician') : null);
 
 /** Customer site jobs: what a booking is for when the firm measures for a customer. */
 export class JobsRegisterService {
@@ -25,6 +30,7 @@ export class JobsRegisterService {
 
   create(actor: Actor, input: JobInput) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
+      await leadOf(tx, input);
       if (await tx.count(Job, { reference: input.reference })) throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
       const job = await tx.insert(Job, { ...this.fields(input) });
       await recordAudit(tx, actor, 'job.created', { type: 'job', id: job.id }, { reference: job.reference });
@@ -35,6 +41,7 @@ export class JobsRegisterService {
   update(actor: Actor, id: string, input: JobInput) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const job = await tx.get(Job, { id }, 'That job');
+      await leadOf(tx, input);
       if (input.reference !== job.reference && (await tx.count(Job, { reference: input.reference }))) throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
       Object.assign(job, this.fields(input));
       await recordAudit(tx, actor, 'job.updated', { type: 'job', id }, { reference: job.reference });

@@ -2,7 +2,7 @@ import type { BookingPayload, BookingPurpose, BookingState } from '../../shared/
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import type { Actor } from '../db/transaction';
-import { assetsByIds, getKit, kitMembers } from '../fleet';
+import { getAssets, getKit, kitMembers } from '../fleet';
 import { conflict, notFound, ruleBroken } from '../http/errors';
 import { availableAssets, conflictingItems, itemFacts } from './booking-queries';
 import { blockedError, refusals, refusedItems } from './booking-rule';
@@ -45,8 +45,9 @@ export async function book(tx: Scoped, actor: Actor, request: BookingRequest): P
   const assetIds = await resolveAssets(tx, request.assetIds ?? [], request.kitId);
   const purpose: BookingPurpose = request.purpose ?? (request.rentalId ? 'rental' : request.jobId ? 'job' : 'internal');
   const window: Window = { startsOn: request.startsOn, endsOn: request.endsOn, purpose, exceptBookingId: null };
-  await assertBookable(tx, assetIds, window);
+  // Every id first: one that is not found is 404 before any booking rule answers.
   if (request.jobId) await tx.get(Job, { id: request.jobId }, 'That job');
+  await assertBookable(tx, assetIds, window);
   const booking = await tx.insert(Booking, {
     startsOn: request.startsOn,
     endsOn: request.endsOn,
@@ -139,9 +140,7 @@ async function resolveAssets(tx: Scoped, assetIds: string[], kitId?: string) {
     for (const m of await kitMembers(tx, kitId)) ids.add(m.id);
     if (ids.size === 0) throw ruleBroken('kit_empty', 'That kit has no members to book.');
   }
-  const found = await assetsByIds(tx, [...ids]);
-  const missing = [...ids].filter((id) => !found.some((a) => a.id === id));
-  if (missing.length) throw notFound(`Asset ${missing[0]}`);
+  await getAssets(tx, [...ids]);
   return [...ids];
 }
 

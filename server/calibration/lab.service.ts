@@ -7,7 +7,7 @@ import { recordAudit } from '../audit/audit.service';
 import { book, busyDays, checkOut } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
-import { assetsByIds, getAsset, moveAssets } from '../fleet';
+import { getAsset, getAssets, moveAssets } from '../fleet';
 import { ruleBroken } from '../http/errors';
 import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations/org-context';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
@@ -85,8 +85,7 @@ export class LabService {
   }
 
   private async assets(tx: Scoped, ids: string[]) {
-    const assets = await assetsByIds(tx, ids);
-    if (assets.length !== new Set(ids).size) throw ruleBroken('unknown_asset', 'One of those items is not in your fleet.');
+    const assets = await getAssets(tx, ids);
     const retired = assets.filter((a) => a.status === 'retired');
     if (retired.length) throw ruleBroken('asset_retired', `Retired: ${retired.map((a) => a.assetTag).join(', ')}.`);
     return assets;

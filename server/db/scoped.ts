@@ -1,4 +1,4 @@
-import type { DeepPartial, EntityManager, EntityTarget, FindManyOptions, FindOptionsWhere, ObjectLiteral, QueryDeepPartialEntity } from 'typeorm';
+import { In, type DeepPartial, type EntityManager, type EntityTarget, type FindManyOptions, type FindOptionsWhere, type ObjectLiteral, type QueryDeepPartialEntity } from 'typeorm';
 import { notFound } from '../http/errors';
 import type { OrgOwned } from './org-owned';
 import { preparedQuery } from './prepared';
@@ -38,6 +38,16 @@ export class Scoped {
     const row = await this.findOne(entity, where, options);
     if (!row) throw notFound(what);
     return row;
+  }
+
+  /** Every row `ids` names (a request's `assetIds`, say), or the 404 naming the first that is not this
+   * organization's: an id in a body is not found just as one in the path is, never a 422. */
+  async getEach<T extends OrgOwned & ObjectLiteral & { id: string }>(entity: EntityTarget<T>, ids: readonly string[], what: string, options: Omit<FindManyOptions<T>, 'where'> = {}): Promise<T[]> {
+    const wanted = [...new Set(ids)];
+    const rows = wanted.length ? await this.find(entity, { ...options, where: { id: In(wanted) } as FindOptionsWhere<T> }) : [];
+    const missing = wanted.find((id) => !rows.some((row) => row.id === id));
+    if (missing) throw notFound(`${what} ${missing}`);
+    return rows;
   }
 
   async insert<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, values: DeepPartial<Omit<T, 'organizationId'>>): Promise<T> {

@@ -18,6 +18,9 @@ export const assetsByIds = (tx: Scoped, ids: string[], opts: { packingOrder?: bo
   ids.length ? tx.find(Asset, { where: { id: In([...new Set(ids)]) }, ...(opts.packingOrder ? { order: { type: 'ASC', assetTag: 'ASC' } as const } : {}) }) : Promise.resolve([]);
 
 /** The assets, row-locked until the caller's transaction ends; 404 when one is missing. */
+/** Each of these assets, or 404 naming the first that the firm does not have. */
+export const getAssets = (tx: Scoped, ids: string[]): Promise<AssetRecord[]> => tx.getEach(Asset, ids, 'Asset');
+
 export async function lockAssets(tx: Scoped, ids: string[]): Promise<AssetRecord[]> {
   const unique = [...new Set(ids)];
   if (!unique.length) return [];

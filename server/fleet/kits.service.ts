@@ -4,7 +4,7 @@ import type { KitReadiness, KitView } from '../../shared/schemas/assets';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
-import { conflict, notFound, ruleBroken } from '../http/errors';
+import { conflict, ruleBroken } from '../http/errors';
 import { loadOrgContext, type OrgContext } from '../organizations/org-context';
 import { Asset } from './asset.entity';
 import { toAssetView } from './asset-view';
@@ -93,9 +93,7 @@ export class KitsService {
   /** Replace the packing list. An asset is in at most one kit: taking one from another kit is a 409 naming it. */
   private async setMembers(tx: Scoped, kit: Kit, memberIds: string[]) {
     const wanted = [...new Set(memberIds)];
-    const assets = wanted.length ? await tx.find(Asset, { where: { id: In(wanted) }, relations: { kit: true } }) : [];
-    const missing = wanted.filter((id) => !assets.some((a) => a.id === id));
-    if (missing.length) throw notFound(`Asset ${missing[0]}`);
+    const assets = await tx.getEach(Asset, wanted, 'Asset', { relations: { kit: true } });
     const retired = assets.filter((a) => a.status === 'retired');
     if (retired.length) throw ruleBroken('asset_retired', `Retired items cannot join a kit: ${retired.map((a) => a.assetTag).join(', ')}.`);
     const elsewhere = assets.filter((a) => a.kitId && a.kitId !== kit.id);

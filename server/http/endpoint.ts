@@ -1,7 +1,7 @@
 import type { NextFunction, Request, Response, Router } from 'express';
 import { z } from 'zod';
 import type { Capability } from '../../shared/auth/roles';
-import { requireCapability, requireSignIn } from '../auth/guards';
+import { identifyCaller, requireCapability, requireSignIn } from '../auth/guards';
 import type { Actor } from '../db/transaction';
 import { notFound } from './errors';
 import { parse } from './parse';
@@ -12,8 +12,8 @@ export type EndpointSpec<B extends z.ZodType, Q extends z.ZodType> = {
   method: Method;
   path: string;
   summary: string;
-  /** `public` needs no sign-in; `signed-in` any role; else a capability. */
-  access: 'public' | 'signed-in' | Capability;
+  /** `public` needs no sign-in; `if-signed-in` is public but knows a signed-in caller; `signed-in` any role; else a capability. */
+  access: 'public' | 'if-signed-in' | 'signed-in' | Capability;
   body?: B;
   query?: Q;
   status?: number;
@@ -23,6 +23,7 @@ type Input<B extends z.ZodType, Q extends z.ZodType> = {
   body: z.infer<B>;
   query: z.infer<Q>;
   params: Record<string, string>;
+  /** Unset on `public` routes; on `if-signed-in` routes read `req.user`, which may be unset. */
   actor: Actor;
   req: Request;
   res: Response;
@@ -44,7 +45,13 @@ export function endpoint<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
 ): void {
   documentedEndpoints.push({ ...spec, path: mountedAt + (spec.path === '/' ? '' : spec.path) });
   const guards =
-    spec.access === 'public' ? [] : spec.access === 'signed-in' ? [requireSignIn] : [requireSignIn, requireCapability(spec.access)];
+    spec.access === 'public'
+      ? []
+      : spec.access === 'if-signed-in'
+        ? [identifyCaller]
+        : spec.access === 'signed-in'
+          ? [requireSignIn]
+          : [requireSignIn, requireCapability(spec.access)];
   router[spec.method](spec.path, ...guards, async (req: Request, res: Response, next: NextFunction) => {
     try {
       assertIdParams(req.params as Record<string, string>);

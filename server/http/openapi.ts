@@ -16,7 +16,7 @@ export function openApiDocument() {
     (paths[path] ??= {})[e.method] = {
       summary: e.summary,
       'x-nestkeeper-access': e.access,
-      ...(e.access === 'public' ? { security: [] } : {}),
+      ...(e.access === 'public' ? { security: [] } : e.access === 'if-signed-in' ? { security: [{}, { bearer: [] }, { session: [] }] } : {}),
       ...(parameters.length ? { parameters } : {}),
       ...(e.body
         ? { requestBody: { required: true, content: { 'application/json': { schema: z.toJSONSchema(e.body, { io: 'input', unrepresentable: 'any' }) } } } }

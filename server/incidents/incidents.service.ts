@@ -5,7 +5,7 @@ import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { findAsset, getAsset, markDamaged, type AssetRecord } from '../fleet';
-import { AppError, ruleBroken } from '../http/errors';
+import { AppError, notFound, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
 import { enqueueMail } from '../notifications/outbox';
 import { staffAddresses } from '../notifications/staff';
@@ -87,8 +87,9 @@ export class IncidentsService {
   async report(actor: Actor, input: z.infer<typeof incidentPayload>, files: UploadedPhoto[]) {
     const photos = await Promise.all(files.map(preparePhoto));
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const asset = await findAsset(tx, input.assetId);
-      if (!asset) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { assetId: 'is not an asset of your fleet' } });
+      const asset = await getAsset(tx, input.assetId);
+      // A read, not an import: bookings already calls incidents when an item comes back damaged.
+      if (input.bookingId && !(await tx.sql(`SELECT 1 FROM bookings WHERE organization_id = $1 AND id = $2`, [input.bookingId])).length) throw notFound('That booking');
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
       const { incident, photos: saved } = await openIncident(tx, actor, asset, { ...input, bookingId: input.bookingId ?? null }, photos);
       const refreshed = await getAsset(tx, asset.id);

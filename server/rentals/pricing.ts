@@ -4,7 +4,7 @@ import type { Quote, QuoteLine } from '../../shared/billing/views';
 import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
 import { bookingDays } from '../../shared/bookings/rules';
 import type { Scoped } from '../db/scoped';
-import { assetsByIds, getKit, kitMembers as membersOf, type AssetRecord } from '../fleet';
+import { assetsByIds, getAssets, getKit, kitMembers as membersOf, type AssetRecord } from '../fleet';
 import { ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { RateCard } from './rate-card.entity';
@@ -39,8 +39,7 @@ export async function priceRental(tx: Scoped, q: PriceRequest): Promise<Quote> {
   const ctx = await loadOrgContext(tx);
   const kit = q.kitId ? await getKit(tx, q.kitId) : null;
   const kitMembers = kit ? await membersOf(tx, kit.id) : [];
-  const loose = q.assetIds?.length ? await assetsByIds(tx, q.assetIds) : [];
-  if (loose.length !== new Set(q.assetIds ?? []).size) throw ruleBroken('unknown_asset', 'One of those items is not in your fleet.');
+  const loose = await getAssets(tx, q.assetIds ?? []);
   const cards = await tx.find(RateCard, {});
   const days = bookingDays(q.startsOn, q.endsOn);
   const lines: QuoteLine[] = [];

@@ -1,10 +1,13 @@
 import bcrypt from 'bcrypt';
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
+import { passwordWeakness } from '../../shared/auth/password-strength';
 import type { createUserPayload, updateUserPayload } from '../../shared/schemas/users';
 import { recordAudit } from '../audit/audit.service';
-import { inOrganization, type Actor } from '../db/transaction';
-import { conflict, ruleBroken } from '../http/errors';
+import type { Scoped } from '../db/scoped';
+import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
+import { AppError, conflict, ruleBroken } from '../http/errors';
+import { Organization } from '../organizations/organization.entity';
 import { User } from './user.entity';
 
 export type PublicUser = Pick<User, 'id' | 'email' | 'name' | 'role' | 'organizationId' | 'disabled' | 'createdAt'>;
@@ -19,6 +22,9 @@ export const publicUser = (u: User): PublicUser => ({
   createdAt: u.createdAt,
 });
 
+/** The firm's active owners, row-locked until the transaction ends (in id order, so two callers cannot deadlock). */
+const lockActiveOwners = (tx: Scoped) => tx.sql<{ id: string }>(`SELECT id FROM users WHERE organization_id = $1 AND role = 'owner' AND NOT disabled ORDER BY id FOR UPDATE`);
+
 export class UsersService {
   constructor(
     private readonly db: DataSource,
@@ -29,6 +35,13 @@ export class UsersService {
     return bcrypt.hash(password, this.bcryptCost);
   }
 
+  /** Refuses (400 on `field`, in plain words) a password a guesser would try early for this person and firm. */
+  async refuseGuessable(organizationId: string, password: string, field: string, person: Pick<User, 'email' | 'name'>) {
+    const firm = await this.db.getRepository(Organization).findOneByOrFail({ id: organizationId });
+    const weakness = await passwordWeakness(password, [person.email, person.name, firm.name]);
+    if (weakness) throw new AppError(400, 'invalid_input', 'That password is too easy to guess.', { fields: { [field]: weakness } });
+  }
+
   list(actor: Actor, paging: { limit: number; offset: number }) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const [rows, total] = await tx.findAndCount(User, { order: { name: 'ASC' }, take: paging.limit, skip: paging.offset });
@@ -37,6 +50,7 @@ export class UsersService {
   }
 
   async create(actor: Actor, input: z.infer<typeof createUserPayload>) {
+    await this.refuseGuessable(actor.organizationId, input.password, 'password', input);
     const passwordHash = await this.hashPassword(input.password);
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       // E-mail is the sign-in name across all firms, so check beyond this organization.
@@ -51,13 +65,13 @@ export class UsersService {
 
   update(actor: Actor, id: string, patch: z.infer<typeof updateUserPayload>) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
+      // Locked before anything is read: two owners demoting each other at once would otherwise
+      // each count the other and leave the firm with none. The second waits, then counts again.
+      const owners = patch.role !== undefined || patch.disabled === true ? await lockActiveOwners(tx) : [];
       const user = await tx.get(User, { id }, 'That user');
       const before = { name: user.name, role: user.role, disabled: user.disabled };
       const losesOwner = user.role === 'owner' && !user.disabled && ((patch.role && patch.role !== 'owner') || patch.disabled === true);
-      if (losesOwner) {
-        const owners = await tx.count(User, { role: 'owner', disabled: false });
-        if (owners <= 1) throw ruleBroken('last_owner', 'The firm needs at least one active owner; make someone else owner first.');
-      }
+      if (losesOwner && owners.length <= 1) throw ruleBroken('last_owner', 'The firm needs at least one active owner; make someone else owner first.');
       Object.assign(user, patch);
       if (patch.disabled === true && !before.disabled) user.tokenVersion += 1;
       const saved = await tx.save(User, user);
@@ -67,6 +81,8 @@ export class UsersService {
   }
 
   async resetPassword(actor: Actor, id: string, password: string) {
+    const person = await readInOrganization(this.db, actor.organizationId, (tx) => tx.get(User, { id }, 'That user'));
+    await this.refuseGuessable(actor.organizationId, password, 'password', person);
     const passwordHash = await this.hashPassword(password);
     await inOrganization(this.db, actor.organizationId, async (tx) => {
       const user = await tx.get(User, { id }, 'That user');

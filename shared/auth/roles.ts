@@ -19,6 +19,7 @@ export const capabilities = [
   'incidents.review',
   'holds.release',
   'impact.review',
+  'customers.read',
   'customers.write',
   'rentals.write',
   'deposits.manage',
@@ -41,9 +42,11 @@ export const capabilitiesByRole: Record<Role, readonly Capability[]> = {
     'incidents.report',
     'incidents.review',
     'holds.release',
+    // Bookings for a rental name its customer.
+    'customers.read',
   ],
   technician: ['fleet.read', 'bookings.read', 'checks.record', 'incidents.report'],
-  billing: ['fleet.read', 'bookings.read', 'customers.write', 'rentals.write', 'deposits.manage', 'reports.read'],
+  billing: ['fleet.read', 'bookings.read', 'customers.read', 'customers.write', 'rentals.write', 'deposits.manage', 'reports.read'],
 };
 
 export function can(role: Role, capability: Capability): boolean {

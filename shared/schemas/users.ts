@@ -1,10 +1,15 @@
 import { z } from 'zod';
+import { MAX_PASSWORD_BYTES, passwordBytes } from '../auth/password-strength';
 import { roles } from '../auth/roles';
 
 export const MIN_PASSWORD_LENGTH = 10;
 
 const email = z.string().trim().toLowerCase().email('is not an e-mail address');
-const password = z.string().min(MIN_PASSWORD_LENGTH, `must be at least ${MIN_PASSWORD_LENGTH} characters`).max(200, 'is too long');
+// How guessable a password is depends on the person and the firm, so the services check that (shared/auth/password-strength.ts).
+const password = z
+  .string()
+  .min(MIN_PASSWORD_LENGTH, `must be at least ${MIN_PASSWORD_LENGTH} characters`)
+  .refine((p) => passwordBytes(p) <= MAX_PASSWORD_BYTES, `must be at most ${MAX_PASSWORD_BYTES} bytes: bcrypt ignores the rest (accented letters count 2, most symbols 3)`);
 
 export const loginPayload = z.object({ email, password: z.string().min(1, 'is required').max(200) });
 

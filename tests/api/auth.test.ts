@@ -1,7 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import nodemailer from 'nodemailer';
 import request from 'supertest';
+import jwt from 'jsonwebtoken';
 import { buildApp } from '../../server/app';
+import { signSessionToken, signingKey } from '../../server/auth/tokens';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -47,6 +49,16 @@ describe('sign-in', () => {
     expect((await attempt()).body.error.code).toBe('rate_limited');
   });
 
+  it('counts a padded or re-cased e-mail and a forged X-Forwarded-For against the same limit', async () => {
+    // Sign-in reads " Visitor2@Demo.TEST " as visitor2@demo.test, so the limiter does too; no proxy is trusted by default.
+    const spellings = ['visitor2@demo.test', ' Visitor2@demo.test', 'VISITOR2@DEMO.TEST ', '\tvisitor2@Demo.Test', 'visitor2@demo.test  ', 'Visitor2@Demo.test'];
+    const statuses: number[] = [];
+    for (const [i, email] of spellings.entries()) {
+      statuses.push((await t.api.post('/api/auth/login').set('X-Forwarded-For', `203.0.113.${i + 1}`).send({ email, password: 'guessing-padded' })).status);
+    }
+    expect(statuses).toEqual([401, 401, 401, 401, 401, 429]);
+  });
+
   it('counts failed sign-ins across app instances: a second instance on the same database shares the limit', async () => {
     const second = request(buildApp({ config: t.config, db: t.db, mail: nodemailer.createTransport({ jsonTransport: true }) }).app);
     const attempt = (api: typeof t.api) => api.post('/api/auth/login').send({ email: 'visitor@demo.test', password: 'guessing-across' });
@@ -76,11 +88,25 @@ describe('sign-in', () => {
     const agent = (await import('supertest')).default.agent(t.app);
     const login = await agent.post('/api/auth/login').send({ email: 'owner@demo.test', password: 'nestkeeper-demo' });
     const csrf = ([] as string[]).concat(login.headers['set-cookie']).find((c) => c.startsWith('nk_csrf='))!.split(';')[0].split('=')[1];
-    const body = { email: 'csrf.check@demo.test', name: 'Csrf Check', role: 'technician', password: 'long-enough-pw' };
+    const body = { email: 'csrf.check@demo.test', name: 'Csrf Check', role: 'technician', password: 'lichen-parcel-76-wren' };
     const refused = await agent.post('/api/users').send(body);
     expect(refused.status).toBe(403);
     const allowed = await agent.post('/api/users').set('X-CSRF-Token', csrf).send(body);
     expect(allowed.status).toBe(201);
+  });
+
+  it('refuses a token without an expiry, even one signed with the installation key', async () => {
+    const me = (await t.api.get('/api/auth/me').set(bearer(await t.tokenFor('tech@demo.test')))).body.user;
+    const [{ token_version }] = await t.db.query(`SELECT token_version FROM users WHERE id = $1`, [me.id]);
+    const claims = { sub: me.id, org: me.organizationId, ver: token_version };
+    const key = signingKey(t.config.JWT_SECRET);
+    const forever = jwt.sign(claims, key, { algorithm: 'HS256' });
+    expect((await t.api.get('/api/auth/me').set(bearer(forever))).status).toBe(401);
+    // A far expiry on an old token does not help either: a session lasts 12 hours from its issue.
+    const old = jwt.sign({ ...claims, iat: Math.floor(Date.now() / 1000) - 13 * 3600 }, key, { algorithm: 'HS256', expiresIn: '30d' });
+    expect((await t.api.get('/api/auth/me').set(bearer(old))).status).toBe(401);
+    // The same claims with the usual expiry are accepted (the check above is not refusing everything).
+    expect((await t.api.get('/api/auth/me').set(bearer(signSessionToken(key, claims)))).status).toBe(200);
   });
 
   it('rejects a tampered token', async () => {
@@ -91,19 +117,45 @@ describe('sign-in', () => {
   });
 });
 
+describe('sign-out', () => {
+  it('ends the bearer token as well as the cookie', async () => {
+    const token = await t.tokenFor('owner@demo.test');
+    expect((await t.api.get('/api/auth/me').set(bearer(token))).status).toBe(200);
+    const out = await t.api.post('/api/auth/logout').set(bearer(token));
+    expect(out.status).toBe(204);
+    expect(([] as string[]).concat(out.headers['set-cookie'] ?? []).some((c) => /^nk_session=;/.test(c))).toBe(true);
+    expect((await t.api.get('/api/auth/me').set(bearer(token))).status).toBe(401);
+    // Signing in again gives a working token.
+    expect((await t.api.get('/api/auth/me').set(bearer(await t.tokenFor('owner@demo.test')))).status).toBe(200);
+  });
+
+  it('ends a cookie session (with the CSRF header) and answers 204 to a caller without one', async () => {
+    const agent = (await import('supertest')).default.agent(t.app);
+    const login = await agent.post('/api/auth/login').send({ email: 'tech@demo.test', password: 'nestkeeper-demo' });
+    const csrf = ([] as string[]).concat(login.headers['set-cookie']).find((c) => c.startsWith('nk_csrf='))!.split(';')[0].split('=')[1];
+    expect((await agent.post('/api/auth/logout').set('X-CSRF-Token', csrf)).status).toBe(204);
+    expect((await t.api.get('/api/auth/me').set(bearer(login.body.token))).status).toBe(401);
+    expect((await t.api.post('/api/auth/logout')).status).toBe(204);
+    expect((await t.api.post('/api/auth/logout').set(bearer('not.a.token'))).status).toBe(204);
+  });
+});
+
 describe('own password', () => {
   it('changes the password; the old token and old password stop working', async () => {
     const token = await t.tokenFor('manager@demo.test');
-    const wrong = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nope-nope-nope', newPassword: 'a-new-long-password' });
+    const wrong = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nope-nope-nope', newPassword: 'amber-tundra-sleet-38' });
     expect(wrong.status).toBe(422);
     expect(wrong.body.error.code).toBe('wrong_password');
     const short = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'short' });
     expect(short.status).toBe(400);
     expect(short.body.error.details.fields.newPassword).toMatch(/at least 10/);
-    const ok = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'a-new-long-password' });
+    const guessable = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'nestkeeper2025' });
+    expect(guessable.status).toBe(400);
+    expect(guessable.body.error.details.fields.newPassword).toMatch(/^is too easy to guess\./);
+    const ok = await t.api.post('/api/auth/password').set(bearer(token)).send({ currentPassword: 'nestkeeper-demo', newPassword: 'amber-tundra-sleet-38' });
     expect(ok.status).toBe(204);
     expect((await t.api.get('/api/auth/me').set(bearer(token))).status).toBe(401);
     expect((await t.api.post('/api/auth/login').send({ email: 'manager@demo.test', password: 'nestkeeper-demo' })).status).toBe(401);
-    expect(await t.tokenFor('manager@demo.test', 'a-new-long-password')).toBeTruthy();
+    expect(await t.tokenFor('manager@demo.test', 'amber-tundra-sleet-38')).toBeTruthy();
   });
 });

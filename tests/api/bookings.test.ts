@@ -182,3 +182,69 @@ describe('calendar feed (RFC 5545)', () => {
     expect((await t.api.get('/api/calendar.ics?token=not-a-real-token')).status).toBe(404);
   });
 });
+
+describe('an id in a body that is unknown or another firm\'s is 404, never 422', () => {
+  const unknown = '3f2b6c1e-9a7d-4e2b-8c1f-5d6e7f8a9b0c';
+  let theirs: { asset: string; kit: string; job: string; customer: string; booking: string; person: string };
+  beforeAll(async () => {
+    const otherSide = (path: string, body: object) => t.api.post(path).set(bearer(otherOwner)).send(body);
+    const asset = (await otherSide('/api/assets', { type: 'scale_bar', assetTag: 'PGS-SB-1', serialNumber: 'SB-9001', specs: { certifiedLengthMm: 1000, expansionPpmPerK: 0.5 } })).body.id;
+    theirs = {
+      asset,
+      kit: (await otherSide('/api/kits', { name: 'Pellbrook field kit' })).body.id,
+      job: (await otherSide('/api/jobs', { reference: 'PGS-1', customerName: 'Somebody Else', startsOn: '2027-10-04', endsOn: '2027-10-05' })).body.id,
+      customer: (await otherSide('/api/customers', { company: 'Pellbrook Customer', billingEmail: 'ap@pellbrook-customer.test' })).body.id,
+      booking: (await otherSide('/api/bookings', { assetIds: [asset], startsOn: '2027-10-04', endsOn: '2027-10-05' })).body.id,
+      person: (await t.api.get('/api/auth/me').set(bearer(otherOwner))).body.user.id,
+    };
+    expect(Object.values(theirs).every(Boolean), JSON.stringify(theirs)).toBe(true);
+  });
+  const notFound = (res: { status: number; body: { error?: { code: string } } }) => {
+    expect(res.status, JSON.stringify(res.body)).toBe(404);
+    expect(res.body.error?.code).toBe('not_found');
+  };
+
+  it('bookings: items, kit and job (before any booking rule: this tracker\'s calibration runs out first)', async () => {
+    const mine = await tracker();
+    const days = { startsOn: '2027-10-11', endsOn: '2027-10-12' };
+    for (const id of [theirs.asset, unknown]) notFound(await book(manager, { assetIds: [mine.id, id], ...days }));
+    for (const id of [theirs.kit, unknown]) notFound(await book(manager, { kitId: id, ...days }));
+    for (const id of [theirs.job, unknown]) notFound(await book(manager, { assetIds: [mine.id], jobId: id, ...days }));
+    expect((await t.api.get('/api/bookings').query({ assetId: mine.id }).set(bearer(manager))).body.total).toBe(0);
+  });
+
+  it('site jobs: the lead technician must be one of the firm\'s people', async () => {
+    const job = { reference: 'J-LEAD-1', customerName: 'Larkspur Aero Structures', startsOn: '2027-10-18', endsOn: '2027-10-19' };
+    for (const id of [theirs.person, unknown]) notFound(await t.api.post('/api/jobs').set(bearer(manager)).send({ ...job, leadTechnicianId: id }));
+    const techId = (await t.api.get('/api/auth/me').set(bearer(tech))).body.user.id;
+    const made = await t.api.post('/api/jobs').set(bearer(manager)).send({ ...job, leadTechnicianId: techId });
+    expect(made.status).toBe(201);
+    notFound(await t.api.put(`/api/jobs/${made.body.id}`).set(bearer(manager)).send({ ...job, leadTechnicianId: theirs.person }));
+    expect((await t.api.get(`/api/jobs/${made.body.id}`).set(bearer(manager))).body.leadTechnicianId).toBe(techId);
+  });
+
+  it('kits, lab trips, quotes and rentals', async () => {
+    const kit = (await t.api.post('/api/kits').set(bearer(manager)).send({ name: 'Kit for foreign ids' })).body;
+    notFound(await t.api.patch(`/api/kits/${kit.id}`).set(bearer(manager)).send({ memberIds: [theirs.asset] }));
+    notFound(await t.api.post('/api/lab-trips').set(bearer(manager)).send({ provider: 'Harrowgate Lab', assetIds: [theirs.asset], sentOn: '2027-11-01' }));
+    notFound(await t.api.get('/api/quotes').query({ assetIds: unknown, startsOn: '2027-10-04', endsOn: '2027-10-05' }).set(bearer(billing)));
+    notFound(await t.api.get('/api/quotes').query({ assetIds: theirs.asset, startsOn: '2027-10-04', endsOn: '2027-10-05' }).set(bearer(billing)));
+    const mine = await tracker();
+    notFound(await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId: theirs.customer, assetIds: [mine.id], startsOn: '2027-10-25', endsOn: '2027-10-26' }));
+  });
+
+  it('field checks, damage reports and the counterpart at the counter', async () => {
+    const point = { x: 0, y: 0, z: 0 };
+    notFound(await t.api.post('/api/checks').set(bearer(tech)).send({ kind: 'two_face', assetId: theirs.asset, front: point, back: point }));
+    const mine = await tracker();
+    const report = (fields: Record<string, string>) =>
+      Object.entries(fields).reduce((req, [k, v]) => req.field(k, v), t.api.post('/api/incidents').set(bearer(tech)));
+    notFound(await report({ assetId: theirs.asset, kind: 'dropped', description: 'Fell off the cart', occurredAt: '2026-11-30T10:00:00Z' }));
+    notFound(await report({ assetId: mine.id, kind: 'dropped', description: 'Fell off the cart', occurredAt: '2026-11-30T10:00:00Z', bookingId: theirs.booking }));
+    expect((await t.api.get(`/api/assets/${mine.id}`).set(bearer(manager))).body.status).not.toBe('held');
+    const today = todayIn('Europe/Berlin');
+    const booking = (await book(manager, { assetIds: [mine.id], startsOn: today, endsOn: addDays(today, 1) })).body;
+    // Answered before the packing-list rules (the item is not ticked as here): an id that is not found comes first.
+    notFound(await t.api.post(`/api/bookings/${booking.id}/checkout`).set(bearer(manager)).send({ counterpart: theirs.person, checklist: [{ assetId: mine.id, present: false, condition: 'good' }] }));
+  });
+});

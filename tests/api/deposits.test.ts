@@ -7,10 +7,10 @@ import { signPayload } from '../../server/fakes/payments/events';
 import type { RentalView } from '../../shared/billing/views';
 import { todayIn } from '../../shared/calibration/due-date';
 import { pdfText } from '../support/pdf';
-import { bearer, binaryBody, createTestApp, type TestApp } from '../support/test-app';
+import { bearer, binaryBody, createTestApp, webhookSecret, type TestApp } from '../support/test-app';
 import { eventually } from '../support/eventually';
 
-const WEBHOOK_SECRET = 'whsec_deposits_test_secret';
+const WEBHOOK_SECRET = webhookSecret();
 let t: TestApp;
 let fake: PaymentFake;
 let server: Server;
@@ -98,9 +98,9 @@ describe('a rental from quote to invoice', () => {
 
   it('technicians may not take deposits; another firm cannot see the rental', async () => {
     expect((await t.api.post(`/api/rentals/${rental.id}/deposit`).set(bearer(tech)).send({ paymentMethod: 'pm_card_visa' })).status).toBe(403);
-    // The money side of a rental is the billing desk's; technicians and the counter print its papers only.
+    // A rental and its papers are the billing desk's (the customer gets the papers by e-mail at hand-over).
     expect((await t.api.get(`/api/rentals/${rental.id}`).set(bearer(tech))).status).toBe(403);
-    expect((await t.api.get(`/api/rentals/${rental.id}/agreement.pdf`).set(bearer(manager))).status).toBe(200);
+    expect((await t.api.get(`/api/rentals/${rental.id}/agreement.pdf`).set(bearer(manager))).status).toBe(403);
     expect((await t.api.get(`/api/rentals/${rental.id}`).set(bearer(otherOwner))).status).toBe(404);
     expect((await t.api.post(`/api/rentals/${rental.id}/deposit`).set(bearer(otherOwner)).send({ paymentMethod: 'pm_card_visa' })).status).toBe(404);
   });
@@ -308,6 +308,51 @@ describe('payment webhooks', () => {
     expect((await post(body, sig)).body).toMatchObject({ received: true, duplicate: false });
     expect((await post(body, sig)).body).toMatchObject({ received: true, duplicate: true });
     expect((await t.db.query(`SELECT count(*)::int AS n FROM payment_events WHERE event_id = 'evt_twice'`))[0].n).toBe(1);
+  });
+
+  it('refuses events signed with the old built-in secret', async () => {
+    const body = event('evt_old_default');
+    expect((await post(body, signPayload(body, 'whsec_nestkeeper_local', Math.floor(Date.now() / 1000)))).status).toBe(400);
+  });
+
+  describe('a signed claim about a hold is checked with the provider first', () => {
+    const claim = (id: string, type: string, intent: string) =>
+      JSON.stringify({ id, object: 'event', type, api_version: '2026-10-28.endive', created: Math.floor(Date.now() / 1000), data: { object: { id: intent, object: 'payment_intent', status: type === 'payment_intent.canceled' ? 'canceled' : 'succeeded', amount_received: 50_000, cancellation_reason: 'automatic' } }, livemode: false, pending_webhooks: 1, request: { id: null, idempotency_key: null } });
+    const send = (body: string) => post(body, signPayload(body, WEBHOOK_SECRET, Math.floor(Date.now() / 1000)));
+    const outcomeOf = async (id: string) => (await t.db.query(`SELECT outcome FROM payment_events WHERE event_id = $1`, [id]))[0]?.outcome as string | undefined;
+
+    it('a cancellation or capture the provider does not confirm changes nothing, and is recorded as such', async () => {
+      const r = await newRental(3);
+      expect((await takeDeposit(r)).status).toBe(200);
+      const [{ payment_intent_id: intent }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE rental_id = $1 AND state = 'authorized'`, [r.id]);
+      expect((await send(claim('evt_forged_cancel', 'payment_intent.canceled', intent))).status).toBe(200);
+      expect((await send(claim('evt_forged_capture', 'payment_intent.succeeded', intent))).status).toBe(200);
+      expect(await outcomeOf('evt_forged_cancel')).toMatch(/^not confirmed: .* is requires_capture, not canceled; nothing changed$/);
+      expect(await outcomeOf('evt_forged_capture')).toMatch(/^not confirmed: .* is requires_capture, not succeeded; nothing changed$/);
+      expect((await view(r)).deposit).toMatchObject({ state: 'authorized', hold: { capturedMinor: 0 } });
+      expect((await mailTo('billing@demo.test')).map((m: { subject: string }) => m.subject)).not.toContain(`Deposit hold lapsed: rental ${r.number}`);
+      expect((await stripe.paymentIntents.retrieve(intent)).status).toBe('requires_capture');
+    });
+
+    it('when the provider cannot be asked, the delivery is refused (502) and nothing is recorded, so its retry counts', async () => {
+      const r = await newRental(3);
+      expect((await takeDeposit(r)).status).toBe(200);
+      const [{ payment_intent_id: intent }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE rental_id = $1 AND state = 'authorized'`, [r.id]);
+      // The provider really cancels it, but its own event is lost on the way; a delivery of ours stands in for it.
+      const url = fake.store.settings.webhookUrl;
+      fake.store.settings.webhookUrl = undefined;
+      await stripe.paymentIntents.cancel(intent, {}, { idempotencyKey: `test:${intent}:cancel` });
+      fake.store.settings.webhookUrl = url;
+      const fault = { path: '/v1/payment_intents/:id', method: 'GET', mode: '500', times: 10 };
+      await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(fault) });
+      const body = claim('evt_unasked_cancel', 'payment_intent.canceled', intent);
+      const refused = await send(body);
+      await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'DELETE' });
+      expect(refused.status).toBe(502);
+      expect(await outcomeOf('evt_unasked_cancel')).toBeUndefined();
+      expect((await send(body)).body).toMatchObject({ duplicate: false, outcome: expect.stringMatching(/lapsed$/) });
+      expect((await view(r)).deposit.state).toBe('lapsed');
+    }, 30_000);
   });
 
   it('a hold the provider lets lapse is marked lapsed from its signed event, and the clerk is told', async () => {

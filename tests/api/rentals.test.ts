@@ -5,11 +5,12 @@ import { bearer, createTestApp, type TestApp } from '../support/test-app';
 let t: TestApp;
 let billing: string;
 let tech: string;
+let manager: string;
 let owner: string;
 let otherOwner: string;
 beforeAll(async () => {
   t = await createTestApp();
-  [billing, tech, owner, otherOwner] = await Promise.all(['billing@demo.test', 'tech@demo.test', 'owner@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
+  [billing, tech, manager, owner, otherOwner] = await Promise.all(['billing@demo.test', 'tech@demo.test', 'manager@demo.test', 'owner@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
 });
 afterAll(() => t.close());
 
@@ -52,6 +53,45 @@ describe('customers, rate cards and quotes', () => {
     await t.api.post('/api/rate-cards').set(bearer(billing)).send({ kitId: kit.id, dayMinor: 90_000, weekMinor: 400_000, monthMinor: 1_200_000, lateFeePerDayMinor: 20_000 });
     const q = await t.api.get('/api/quotes').query({ kitId: kit.id, startsOn: '2027-03-01', endsOn: '2027-03-07' }).set(bearer(billing));
     expect(q.body.lines).toEqual([expect.objectContaining({ description: kit.name, quantity: 1, amountMinor: 400_000 })]);
+  });
+});
+
+describe('who sees customers, prices and a rental\'s papers', () => {
+  it('customers are read by the billing desk, the owner and the shop manager (bookings name them); not by technicians', async () => {
+    const customers = await t.api.get('/api/customers').set(bearer(billing));
+    expect(customers.status).toBe(200);
+    const one = customers.body.items[0].id;
+    for (const token of [owner, manager]) {
+      expect((await t.api.get('/api/customers').set(bearer(token))).status).toBe(200);
+      expect((await t.api.get(`/api/customers/${one}`).set(bearer(token))).status).toBe(200);
+    }
+    expect((await t.api.get('/api/customers').set(bearer(tech))).status).toBe(403);
+    expect((await t.api.get(`/api/customers/${one}`).set(bearer(tech))).status).toBe(403);
+    expect((await t.api.put(`/api/customers/${one}`).set(bearer(manager)).send({ company: 'Renamed Ltd', billingEmail: 'r@r.test' })).status).toBe(403);
+  });
+
+  it('rate cards and quotes are the billing desk\'s and the owner\'s', async () => {
+    const smr = (await t.api.get('/api/assets?type=smr&limit=1').set(bearer(billing))).body.items[0];
+    const quote = { assetIds: smr.id, startsOn: '2027-05-03', endsOn: '2027-05-04' };
+    for (const token of [billing, owner]) {
+      expect((await t.api.get('/api/rate-cards').set(bearer(token))).status).toBe(200);
+      expect((await t.api.get('/api/quotes').query(quote).set(bearer(token))).status).toBe(200);
+    }
+    for (const token of [manager, tech]) {
+      expect((await t.api.get('/api/rate-cards').set(bearer(token))).status).toBe(403);
+      expect((await t.api.get('/api/quotes').query(quote).set(bearer(token))).status).toBe(403);
+    }
+  });
+
+  it('the agreement and certificate pack need what the rental needs', async () => {
+    const [rental] = (await t.api.get('/api/rentals').query({ view: 'to_settle' }).set(bearer(billing))).body.items;
+    for (const paper of ['agreement.pdf', 'certificate-pack.pdf']) {
+      expect((await t.api.get(`/api/rentals/${rental.id}/${paper}`).set(bearer(billing))).status).toBe(200);
+      expect((await t.api.get(`/api/rentals/${rental.id}/${paper}`).set(bearer(owner))).status).toBe(200);
+      expect((await t.api.get(`/api/rentals/${rental.id}/${paper}`).set(bearer(manager))).status).toBe(403);
+      expect((await t.api.get(`/api/rentals/${rental.id}/${paper}`).set(bearer(tech))).status).toBe(403);
+      expect((await t.api.get(`/api/rentals/${rental.id}/${paper}`).set(bearer(otherOwner))).status).toBe(404);
+    }
   });
 });
 

@@ -58,7 +58,7 @@ describe('signing in, in a real browser', () => {
     await page.getByLabel('Name', { exact: true }).fill('Perrin Oakhollow');
     await page.getByLabel('E-mail', { exact: true }).fill('perrin@demo.test');
     await page.getByLabel('Role', { exact: true }).selectOption('technician');
-    await page.getByLabel('Temporary password').fill('a-long-enough-password');
+    await page.getByLabel('Temporary password').fill('heron-slate-copper-54');
     await page.getByRole('button', { name: /add user/i }).click();
     await eventually(() => page.getByText('perrin@demo.test').count()).toBeGreaterThan(0);
     await context.close();

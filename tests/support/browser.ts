@@ -9,6 +9,7 @@ import { startPaymentFake } from '../../server/fakes/payment-fake';
 import { launchChromium } from './chromium';
 import { WAIT_MS } from './eventually';
 import { createTestDatabase } from './test-db';
+import { webhookSecret } from './test-app';
 
 /** The real server with the built client on a free loopback port, a seeded
  * database, the payment-provider fake delivering signed webhooks to it, and
@@ -16,7 +17,8 @@ import { createTestDatabase } from './test-db';
  * its locators and navigations wait with the suite's patience. */
 export async function startBrowserRig() {
   const database = await createTestDatabase({ seed: true });
-  const payments = await startPaymentFake({ port: 0, webhookSecret: 'whsec_browser_rig' });
+  const secret = webhookSecret();
+  const payments = await startPaymentFake({ port: 0, webhookSecret: secret });
   const config = readConfig({
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
@@ -26,7 +28,7 @@ export async function startBrowserRig() {
     SMTP_PORT: '9',
     CLIENT_DIR: path.resolve('dist/client'),
     PAYMENT_API_PORT: String(payments.port),
-    PAYMENT_WEBHOOK_SECRET: 'whsec_browser_rig',
+    PAYMENT_WEBHOOK_SECRET: secret,
   });
   if (!fs.existsSync(path.join(config.CLIENT_DIR, 'index.html'))) throw new Error('The client is not built: run the suite with `npm test`.');
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: 9 });

@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto';
 import nodemailer from 'nodemailer';
 import request from 'supertest';
 import { buildApp } from '../../server/app';
@@ -15,6 +16,7 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
     START_LOCAL_FAKES: 'false',
     RUN_SCHEDULER: 'false',
     SMTP_PORT: '9', // nothing listens: tests that send mail start their own sink
+    PAYMENT_WEBHOOK_SECRET: webhookSecret(),
     ...overrides,
   });
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: config.SMTP_PORT, secure: false, ignoreTLS: true });
@@ -29,6 +31,9 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
 
   return { app, api, jobs, db: database.db, config, tokenFor, close: () => database.drop() };
 }
+
+/** A webhook signing secret of the test's own (nothing is built in). */
+export const webhookSecret = () => `whsec_${randomBytes(24).toString('base64url')}`;
 
 export type TestApp = Awaited<ReturnType<typeof createTestApp>>;
 export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });

@@ -5,24 +5,23 @@ import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { MIN_PASSWORD_LENGTH, newPasswordSchema } from '../../../lib/passwords';
 import { useChangePassword } from '../api/change-password';
+import { useSession } from './session-context';
 
-export const minPasswordLength = 10;
-
-const schema = Yup.object({
+const schemaFor = (context: string[]) => Yup.object({
   currentPassword: Yup.string().required('Enter the password you use now.'),
-  newPassword: Yup.string()
-    .required('Choose a new password.')
-    .min(minPasswordLength, `Use at least ${minPasswordLength} characters.`)
+  newPassword: newPasswordSchema('Choose a new password.', () => context)
     .notOneOf([Yup.ref('currentPassword')], 'The new password must differ from the current one.'),
   repeatPassword: Yup.string()
     .required('Type the new password again.')
     .oneOf([Yup.ref('newPassword')], 'The two new passwords do not match.'),
 });
 
-type Values = Yup.InferType<typeof schema>;
+type Values = Yup.InferType<ReturnType<typeof schemaFor>>;
 
 export function ChangePasswordForm() {
+  const { user, organization } = useSession();
   const change = useChangePassword();
   const [problem, setProblem] = useState<string>();
   const [done, setDone] = useState(false);
@@ -30,7 +29,7 @@ export function ChangePasswordForm() {
   return (
     <Formik<Values>
       initialValues={{ currentPassword: '', newPassword: '', repeatPassword: '' }}
-      validationSchema={schema}
+      validationSchema={schemaFor([user.email, user.name, organization.name])}
       onSubmit={async (values, helpers) => {
         setProblem(undefined);
         setDone(false);
@@ -58,7 +57,7 @@ export function ChangePasswordForm() {
             label="New password"
             type="password"
             autoComplete="new-password"
-            hint={`At least ${minPasswordLength} characters. A short sentence is easy to remember and hard to guess.`}
+            hint={`At least ${MIN_PASSWORD_LENGTH} characters. A few unrelated words are easy to remember and hard to guess.`}
           />
           <Field name="repeatPassword" label="Repeat new password" type="password" autoComplete="new-password" />
           <div>

@@ -5,24 +5,24 @@ import { Button } from '../../../components/button';
 import { Field, SelectField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { MIN_PASSWORD_LENGTH, newPasswordSchema } from '../../../lib/passwords';
 import { roles, type Role } from '../../../lib/roles';
 import { useCreateUser } from '../api/create-user';
 import { roleOptions } from './role-options';
-import { minPasswordLength, temporaryPassword } from './user-password-schema';
 
-const schema = Yup.object({
+const schemaFor = (firmName: string) => Yup.object({
   name: Yup.string().trim().required('Enter the person’s name.').max(120, 'Keep the name under 120 characters.'),
   email: Yup.string()
     .trim()
     .required('Enter the e-mail address they will sign in with.')
     .email('That does not look like an e-mail address.'),
   role: Yup.string<Role>().oneOf(roles, 'Pick one of the listed roles.').required('Pick a role.'),
-  password: temporaryPassword(),
+  password: newPasswordSchema('Set a temporary password.', (v) => [v.email as string, v.name as string, firmName]),
 });
 
-type Values = Yup.InferType<typeof schema>;
+type Values = Yup.InferType<ReturnType<typeof schemaFor>>;
 
-export function AddUserForm() {
+export function AddUserForm({ firmName }: { firmName: string }) {
   const create = useCreateUser();
   const [problem, setProblem] = useState<string>();
   const [added, setAdded] = useState<string>();
@@ -30,7 +30,7 @@ export function AddUserForm() {
   return (
     <Formik<Values>
       initialValues={{ name: '', email: '', role: 'technician', password: '' }}
-      validationSchema={schema}
+      validationSchema={schemaFor(firmName)}
       onSubmit={async (values, helpers) => {
         setProblem(undefined);
         setAdded(undefined);
@@ -66,7 +66,7 @@ export function AddUserForm() {
               label="Temporary password"
               type="password"
               autoComplete="new-password"
-              hint={`At least ${minPasswordLength} characters. Tell them in person, not by e-mail.`}
+              hint={`At least ${MIN_PASSWORD_LENGTH} characters, not easy to guess. Tell them in person, not by e-mail.`}
             />
           </div>
           <div>

@@ -6,25 +6,27 @@ import { Dialog } from '../../../components/dialog';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { MIN_PASSWORD_LENGTH, newPasswordSchema } from '../../../lib/passwords';
 import { useResetUserPassword } from '../api/reset-user-password';
 import type { User } from '../api/types';
-import { minPasswordLength, temporaryPassword } from './user-password-schema';
 
-const schema = Yup.object({
-  password: temporaryPassword(),
+const schemaFor = (person: User, firmName: string) => Yup.object({
+  password: newPasswordSchema('Set a temporary password.', () => [person.email, person.name, firmName]),
   repeatPassword: Yup.string()
     .required('Type the temporary password again.')
     .oneOf([Yup.ref('password')], 'The two passwords do not match.'),
 });
 
-type Values = Yup.InferType<typeof schema>;
+type Values = Yup.InferType<ReturnType<typeof schemaFor>>;
 
 export function ResetPasswordDialog({
   user,
+  firmName,
   onClose,
   onDone,
 }: {
   user: User | null;
+  firmName: string;
   onClose: () => void;
   onDone: (message: string) => void;
 }) {
@@ -44,7 +46,7 @@ export function ResetPasswordDialog({
       {user ? (
         <Formik<Values>
           initialValues={{ password: '', repeatPassword: '' }}
-          validationSchema={schema}
+          validationSchema={schemaFor(user, firmName)}
           onSubmit={async (values, helpers) => {
             setProblem(undefined);
             try {
@@ -63,7 +65,7 @@ export function ResetPasswordDialog({
                 label="New temporary password"
                 type="password"
                 autoComplete="new-password"
-                hint={`At least ${minPasswordLength} characters.`}
+                hint={`At least ${MIN_PASSWORD_LENGTH} characters, not easy to guess.`}
               />
               <Field name="repeatPassword" label="Repeat temporary password" type="password" autoComplete="new-password" />
               <div className="flex flex-wrap justify-end gap-2">

@@ -13,7 +13,7 @@ import { UsersTable, type UserRowActions } from './users-table';
 type Outcome = { tone: 'success' | 'error'; text: string } | null;
 
 /** The owner's list of people in the firm, with role, enable/disable and password reset. */
-export function UsersAdmin({ currentUserId }: { currentUserId: string }) {
+export function UsersAdmin({ currentUserId, firmName }: { currentUserId: string; firmName: string }) {
   const users = useUsers();
   const update = useUpdateUser();
   const { timeZone } = useDateFormat();
@@ -87,11 +87,11 @@ export function UsersAdmin({ currentUserId }: { currentUserId: string }) {
         <h2 id="add-user-heading" className="mb-3 text-lg font-bold">
           Add a user
         </h2>
-        <AddUserForm />
+        <AddUserForm firmName={firmName} />
       </section>
 
       <ChangeRoleDialog user={roleFor} onClose={() => setRoleFor(null)} onDone={done} />
-      <ResetPasswordDialog user={passwordFor} onClose={() => setPasswordFor(null)} onDone={done} />
+      <ResetPasswordDialog user={passwordFor} firmName={firmName} onClose={() => setPasswordFor(null)} onDone={done} />
     </div>
   );
 }

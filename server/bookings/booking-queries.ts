@@ -1,4 +1,4 @@
-import type { BlockReason } from '../../shared/bookings/rules';
+import type { BlockedItem } from '../../shared/bookings/views';
 import type { Scoped } from '../db/scoped';
 
 /** True when a tip (alias `a`) has a mounting position whose latest validation did not pass. */
@@ -10,7 +10,7 @@ export const TIP_NOT_VALIDATED = (a: string) => `(${a}.type = 'tip' AND EXISTS (
 
 /** The booking rules of shared/bookings/rules.ts as one set-based query over the requested items. */
 export function blockedItems(tx: Scoped, assetIds: string[], endsOn: string) {
-  return tx.sql<{ assetId: string; assetTag: string; type: string; reason: BlockReason }>(
+  return tx.sql<BlockedItem>(
     `SELECT a.id AS "assetId", a.asset_tag AS "assetTag", a.type,
             CASE WHEN a.status = 'retired' THEN 'retired'
                  WHEN a.status = 'held' THEN 'held'

@@ -1,6 +1,8 @@
 import { In, type DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { blockReasonText } from '../../shared/bookings/rules';
+import type { BookingView } from '../../shared/bookings/views';
+import type { Page } from '../../shared/lists/page';
 import type { availabilityQuery, BookingPayload, bookingListQuery, BookingPurpose } from '../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
@@ -25,8 +27,7 @@ export async function bookingRentals(tx: Scoped, bookings: Pick<Booking, 'rental
   return new Map(rows.map((r) => [r.id, r]));
 }
 
-export type BookingView = ReturnType<typeof bookingView>;
-export const bookingView = (b: Booking, items: Pick<Asset, 'id' | 'assetTag' | 'type' | 'status'>[], rentals: Map<string, RentalLabel>) => ({
+export const bookingView = (b: Booking, items: Pick<Asset, 'id' | 'assetTag' | 'type' | 'status'>[], rentals: Map<string, RentalLabel>): BookingView => ({
   id: b.id,
   state: b.state,
   purpose: b.purpose,
@@ -159,7 +160,7 @@ export class BookingsService {
     return bookingView(booking, await bookingAssets(tx, [id]), await bookingRentals(tx, [booking]));
   }
 
-  list(actor: Actor, q: z.infer<typeof bookingListQuery>) {
+  list(actor: Actor, q: z.infer<typeof bookingListQuery>): Promise<Page<BookingView>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const qb = tx.select(Booking, 'b').leftJoinAndSelect('b.job', 'j').leftJoinAndSelect('b.kit', 'k').orderBy('b.starts_on', 'ASC').addOrderBy('b.created_at', 'ASC');
       if (q.from) qb.andWhere('b.ends_on >= :from', { from: q.from });

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import type { CounterDayView, MyKitView } from '../../shared/bookings/views';
 import { readInOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from '../organizations/org-context';
 import { blockedItems } from './booking-queries';
@@ -25,7 +26,7 @@ export class DeskService {
   }
 
   /** Today's checkouts and returns, late returns, and reserved bookings an item no longer qualifies for. */
-  today(actor: Actor) {
+  today(actor: Actor): Promise<CounterDayView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const { today } = await loadOrgContext(tx);
       const [checkouts, returns, late, upcoming] = await Promise.all([
@@ -34,7 +35,7 @@ export class DeskService {
         this.views(tx, "b.state = 'out' AND b.ends_on < :p0", [today]),
         this.views(tx, "b.state = 'reserved' AND b.ends_on >= :p0", [today]),
       ]);
-      const blocked = [];
+      const blocked: CounterDayView['blocked'] = [];
       for (const b of upcoming) {
         const problems = await blockedItems(tx, b.assetIds, b.endsOn);
         if (problems.length) blocked.push({ ...b, blocked: problems });
@@ -44,7 +45,7 @@ export class DeskService {
   }
 
   /** Kit a technician carries now and next: taken by them, or on jobs they lead. */
-  mine(actor: Actor) {
+  mine(actor: Actor): Promise<MyKitView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const { today } = await loadOrgContext(tx);
       const mine = "(b.taken_by_user_id = :p0 OR j.lead_technician_id = :p0) AND b.ends_on >= :p1";

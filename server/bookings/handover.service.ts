@@ -13,7 +13,8 @@ import { openIncident } from '../incidents/incidents.service';
 import { loadOrgContext } from '../organizations/org-context';
 import { User } from '../users/user.entity';
 import { blockedItems } from './booking-queries';
-import { Booking, BookingItem, type ChecklistLine } from './booking.entity';
+import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
+import { Booking, BookingItem } from './booking.entity';
 import type { BookingsService } from './bookings.service';
 
 type Checklist = z.infer<typeof checklistPayload>;
@@ -62,7 +63,7 @@ export class HandoverService {
   }
 
   /** A missing or damaged item opens an incident (and so a hold) linked to the booking; the rest go back to ready. */
-  return(actor: Actor, id: string, input: Checklist) {
+  return(actor: Actor, id: string, input: Checklist): Promise<ReturnView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const booking = await tx.get(Booking, { id }, 'That booking');

@@ -2,6 +2,8 @@ import { In, type DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { bookingDays } from '../../shared/bookings/rules';
 import { addDays } from '../../shared/calibration/due-date';
+import type { LabTripView, LabWindowsView } from '../../shared/calibration/views';
+import type { Page } from '../../shared/lists/page';
 import type { labTripPayload } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
 import { Booking, BookingItem } from '../bookings/booking.entity';
@@ -30,7 +32,7 @@ export class LabService {
    * Gaps between the item's active bookings long enough for its provider's
    * turnaround, earliest first, and the bookings that sending it today would break.
    */
-  windows(actor: Actor, assetId: string) {
+  windows(actor: Actor, assetId: string): Promise<LabWindowsView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const asset = await tx.get(Asset, { id: assetId }, 'That asset');
@@ -57,7 +59,7 @@ export class LabService {
   }
 
   /** Plan a trip: a lab booking holds the window on the board (overlap still refused), the trip waits to be sent. */
-  plan(actor: Actor, input: z.infer<typeof labTripPayload>) {
+  plan(actor: Actor, input: z.infer<typeof labTripPayload>): Promise<LabTripView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const assets = await this.assets(tx, input.assetIds);
@@ -74,7 +76,7 @@ export class LabService {
   }
 
   /** The items leave for the lab: status at_lab, a custody event each. */
-  send(actor: Actor, tripId: string) {
+  send(actor: Actor, tripId: string): Promise<LabTripView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const trip = await tx.get(LabTrip, { id: tripId }, 'That lab trip');
       if (trip.state !== 'planned') throw ruleBroken('lab_trip_state', `This trip is already ${trip.state === 'at_lab' ? 'at the lab' : 'back'}.`);
@@ -92,7 +94,7 @@ export class LabService {
     });
   }
 
-  list(actor: Actor, state?: string) {
+  list(actor: Actor, state?: string): Promise<Page<LabTripView>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const trips = await tx.find(LabTrip, { where: state ? { state: state as LabTrip['state'] } : {}, order: { sentOn: 'DESC' }, take: 200 });
       return listReply(await Promise.all(trips.map((t) => this.view(tx, t))));
@@ -107,8 +109,8 @@ export class LabService {
     return assets;
   }
 
-  private async view(tx: Scoped, trip: LabTrip) {
-    const items = await tx.sql<{ assetId: string; assetTag: string; type: string; receivedOn: string | null; calibrationEventId: string | null }>(
+  private async view(tx: Scoped, trip: LabTrip): Promise<LabTripView> {
+    const items = await tx.sql<LabTripView['items'][number]>(
       `SELECT i.asset_id AS "assetId", a.asset_tag AS "assetTag", a.type, to_char(i.received_on, 'YYYY-MM-DD') AS "receivedOn", i.calibration_event_id AS "calibrationEventId"
          FROM lab_trip_items i JOIN assets a ON a.id = i.asset_id WHERE i.organization_id = $1 AND i.lab_trip_id = $2 ORDER BY a.asset_tag`,
       [trip.id],

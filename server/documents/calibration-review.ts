@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import type { DueRow } from '../calibration/review.service';
+import type { DueRow } from '../../shared/calibration/views';
 import { INK, MM, MUTED, renderPdf } from './pdf';
 
 const threatenedText = (r: DueRow) => r.threatened.map((t) => `${t.jobReference ?? 'booking'} ${t.startsOn}–${t.endsOn}`).join('; ');

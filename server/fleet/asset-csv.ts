@@ -1,6 +1,7 @@
 import Papa from 'papaparse';
 import { z } from 'zod';
-import { assetTypes, createAssetPayload, specsByType, type AssetView, type CreateAssetPayload } from '../../shared/schemas/assets';
+import type { AssetView, ImportProblem } from '../../shared/assets/views';
+import { assetTypes, createAssetPayload, specsByType, type CreateAssetPayload } from '../../shared/schemas/assets';
 
 /**
  * The fleet's CSV file (RFC 4180, parsed and written by papaparse): one row
@@ -45,7 +46,6 @@ export const importColumns = [
 const exportOnlyColumns = ['status', 'dueOn', 'calibrationState'] as const;
 const requiredColumns = ['type', 'assetTag', 'serialNumber'];
 
-export type ImportError = { row: number; column: string; message: string };
 export type ImportRow = { row: number; kit: string | null; payload: CreateAssetPayload };
 
 // A cell starting with = + - @ would run as a formula in a spreadsheet; a leading ' keeps it text.
@@ -101,10 +101,10 @@ const yes = new Set(['yes', 'true', '1', 'y']);
 const no = new Set(['no', 'false', '0', 'n']);
 
 /** Parse and check every row; nothing here touches the database. */
-export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: ImportError[]; rowCount: number } {
+export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: ImportProblem[]; rowCount: number } {
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy' });
   // A row that stops early just leaves its last cells empty; anything else is a broken file.
-  const errors: ImportError[] = parsed.errors
+  const errors: ImportProblem[] = parsed.errors
     .filter((e) => e.code !== 'TooFewFields')
     .map((e) => ({ row: (e.row ?? -1) + 1, column: '', message: `The file is not valid CSV here: ${e.message}` }));
   const header = parsed.meta.fields ?? [];
@@ -120,7 +120,7 @@ export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: Import
       const v = unguardCell((raw[c] ?? '').trim());
       return v === '' ? undefined : v;
     };
-    const rowErrors: ImportError[] = [];
+    const rowErrors: ImportProblem[] = [];
     const number = (c: string) => {
       const v = cell(c);
       if (v === undefined) return undefined;

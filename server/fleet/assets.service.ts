@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import type { AssetHistoryEntry, AssetView } from '../../shared/assets/views';
 import { dueOnForPlan } from '../../shared/calibration/due-date';
 import {
   specsByType,
@@ -17,6 +18,7 @@ import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
 import { CustodyEvent } from './custody-event.entity';
 import { listReply } from '../http/list-reply';
+import type { Page } from '../../shared/lists/page';
 
 const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
 const isUniqueViolation = (err: unknown) => (err as { code?: string })?.code === '23505';
@@ -30,7 +32,7 @@ export class AssetsService {
     private readonly publicUrl: string,
   ) {}
 
-  list(actor: Actor, query: AssetListQuery) {
+  list(actor: Actor, query: AssetListQuery): Promise<Page<AssetView>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const { assets, total } = await findAssets(tx, ctx, query, query);
@@ -143,10 +145,10 @@ export class AssetsService {
   }
 
   /** Audit trail and chain of custody together, newest first. */
-  history(actor: Actor, id: string) {
+  history(actor: Actor, id: string): Promise<Page<AssetHistoryEntry>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await tx.get(Asset, { id }, 'That asset');
-      const rows = await tx.sql<{ at: Date; source: string; action: string; actorName: string | null; details: Record<string, unknown> }>(
+      const rows = await tx.sql<{ at: Date; source: AssetHistoryEntry['source']; action: string; actorName: string | null; details: Record<string, unknown> }>(
         `SELECT e.at, 'audit' AS source, e.action, u.name AS "actorName", e.details
            FROM audit_events e LEFT JOIN users u ON u.id = e.actor_user_id
           WHERE e.organization_id = $1 AND e.subject_type = 'asset' AND e.subject_id = $2
@@ -157,7 +159,7 @@ export class AssetsService {
          ORDER BY at DESC LIMIT 500`,
         [id],
       );
-      return listReply(rows.map((r) => ({ ...r, summary: describeHistory(r.action, r.details) })));
+      return listReply(rows.map((r) => ({ ...r, at: r.at.toISOString(), summary: describeHistory(r.action, r.details) })));
     });
   }
 

@@ -1,4 +1,6 @@
 import { IsNull, type DataSource } from 'typeorm';
+import type { HoldReason, HoldView } from '../../shared/holds/views';
+import type { Page } from '../../shared/lists/page';
 import { assetTypeTitles, type TipPosition } from '../../shared/schemas/assets';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
@@ -6,7 +8,7 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { ruleBroken } from '../http/errors';
 import { Asset } from '../fleet/asset.entity';
 import { CustodyEvent } from '../fleet/custody-event.entity';
-import { Hold, type HoldReason } from './hold.entity';
+import { Hold } from './hold.entity';
 import { listReply } from '../http/list-reply';
 
 /** Take an asset out of service inside the caller's transaction. A second
@@ -60,7 +62,7 @@ export class HoldsService {
     });
   }
 
-  current(actor: Actor, assetId: string) {
+  current(actor: Actor, assetId: string): Promise<Page<HoldView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await tx.get(Asset, { id: assetId }, 'That asset');
       const holds = await tx.find(Hold, { where: { assetId }, order: { startedAt: 'DESC' }, take: 20 });
@@ -115,7 +117,7 @@ export class HoldsService {
     return { evidence: [], missing: [`a ${assetTypeTitles[asset.type].toLowerCase()} needs a calibration recorded after the hold began`] };
   }
 
-  private view(h: Hold) {
+  private view(h: Hold): HoldView {
     return {
       id: h.id,
       assetId: h.assetId,

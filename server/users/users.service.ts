@@ -1,22 +1,22 @@
 import bcrypt from 'bcrypt';
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
+import type { Page } from '../../shared/lists/page';
 import type { createUserPayload, updateUserPayload } from '../../shared/schemas/users';
+import type { UserView } from '../../shared/users/views';
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, type Actor } from '../db/transaction';
 import { conflict, ruleBroken } from '../http/errors';
 import { User } from './user.entity';
 
-export type PublicUser = Pick<User, 'id' | 'email' | 'name' | 'role' | 'organizationId' | 'disabled' | 'createdAt'>;
-
-export const publicUser = (u: User): PublicUser => ({
+export const publicUser = (u: User): UserView => ({
   id: u.id,
   email: u.email,
   name: u.name,
   role: u.role,
   organizationId: u.organizationId,
   disabled: u.disabled,
-  createdAt: u.createdAt,
+  createdAt: u.createdAt.toISOString(),
 });
 
 export class UsersService {
@@ -29,7 +29,7 @@ export class UsersService {
     return bcrypt.hash(password, this.bcryptCost);
   }
 
-  list(actor: Actor, paging: { limit: number; offset: number }) {
+  list(actor: Actor, paging: { limit: number; offset: number }): Promise<Page<UserView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const [rows, total] = await tx.findAndCount(User, { order: { name: 'ASC' }, take: paging.limit, skip: paging.offset });
       return { items: rows.map(publicUser), total };

@@ -8,7 +8,7 @@ import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { useBookings } from '../../features/bookings/api/get-bookings';
-import type { BookingState } from '../../features/bookings/api/types';
+import type { BookingState } from '../../lib/bookings';
 import { BookingBoard, type BoardTarget } from '../../features/bookings/components/booking-board';
 import { bookFormHref } from '../../features/bookings/components/book-href';
 import { BookingsList } from '../../features/bookings/components/bookings-list';

@@ -21,7 +21,8 @@ import { dayRangeRules } from '../../../lib/day-range';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateBooking } from '../api/create-booking';
 import { useBookings } from '../api/get-bookings';
-import type { Booking, BookingInput } from '../api/types';
+import type { BookingView } from '../../../../shared/bookings/views';
+import type { BookingPayload } from '../../../../shared/schemas/bookings';
 import { bookingProblems } from './booking-problems';
 import { dayRange } from './booking-words';
 
@@ -64,7 +65,7 @@ export interface BookFormProps {
   initial: Partial<BookValues>;
   /** The inline "New job" form (from the jobs feature); calls `onCreated` with the new job's id. */
   renderNewJob?: (props: { startsOn: string; endsOn: string; onCreated: (jobId: string) => void; onCancel: () => void }) => ReactNode;
-  onBooked: (booking: Booking) => void;
+  onBooked: (booking: BookingView) => void;
 }
 
 export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }: BookFormProps) {
@@ -85,7 +86,7 @@ export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }
   async function submit(values: BookValues, helpers: FormikHelpers<BookValues>) {
     setFormError(undefined);
     setTrouble(null);
-    const input: BookingInput = {
+    const input: BookingPayload = {
       startsOn: values.startsOn,
       endsOn: values.endsOn,
       ...(values.kitId ? { kitId: values.kitId } : {}),

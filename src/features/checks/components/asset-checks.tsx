@@ -6,7 +6,7 @@ import type { AssetView } from '../../../lib/assets';
 import { formatCount, useDateFormat } from '../../../lib/format';
 import { useChecks } from '../api/get-checks';
 import { useTipValidation } from '../api/get-tip-validation';
-import type { CheckView } from '../api/types';
+import type { CheckView } from '../../../../shared/checks/views';
 import { checkKindWords, positionWords, um } from './check-words';
 import { DecisionMark } from './decision-mark';
 import { TipValidationStates } from './tip-validation-states';

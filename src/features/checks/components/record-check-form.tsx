@@ -21,7 +21,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { formatNumber } from '../../../lib/format';
 import { useCreateCheck } from '../api/create-check';
 import { useTipValidation } from '../api/get-tip-validation';
-import type { CheckView } from '../api/types';
+import type { CheckView } from '../../../../shared/checks/views';
 import { CheckPreview } from './check-preview';
 import { CheckResult } from './check-result';
 import {

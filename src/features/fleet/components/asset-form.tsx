@@ -12,7 +12,7 @@ import { calibrationState, dueOnForPlan, todayIn } from '../../../lib/calibratio
 import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits, formatCalendarDate, formatNumber } from '../../../lib/format';
 import { useCreateAsset } from '../api/create-asset';
-import type { AssetInput, CreateAssetInput } from '../api/types';
+import type { CreateAssetPayload, UpdateAssetPayload } from '../../../../shared/schemas/assets';
 import { useUpdateAsset } from '../api/update-asset';
 import {
   assetFieldLabels,
@@ -163,8 +163,8 @@ export function AssetForm({ mode, asset, timeZone, currency, dueSoonDays, onSave
           const payload = formValuesToPayload(values, mode, digits);
           const saved =
             mode === 'create'
-              ? await create.mutateAsync(payload as CreateAssetInput)
-              : await update.mutateAsync({ id: asset!.id, changes: payload as AssetInput });
+              ? await create.mutateAsync(payload as CreateAssetPayload)
+              : await update.mutateAsync({ id: asset!.id, changes: payload as UpdateAssetPayload });
           onSaved(saved);
         } catch (error) {
           setProblem(

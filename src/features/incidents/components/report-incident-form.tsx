@@ -10,7 +10,8 @@ import { BatteryCaution, LaserCaution } from '../../../components/safety-caution
 import { assetTypeTitles, type AssetView } from '../../../lib/assets';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useReportIncident } from '../api/report-incident';
-import type { IncidentKind, IncidentView } from '../api/types';
+import type { IncidentKind } from '../../../../shared/incidents/vocabulary';
+import type { IncidentView } from '../../../../shared/incidents/views';
 import { incidentKindChoices, incidentKindWords } from './incident-words';
 import { PhotoPicker } from './photo-picker';
 import { MAX_PHOTOS, photoProblem } from './photo-rules';

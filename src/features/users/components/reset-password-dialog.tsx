@@ -7,7 +7,7 @@ import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useResetUserPassword } from '../api/reset-user-password';
-import type { User } from '../api/types';
+import type { UserView } from '../../../../shared/users/views';
 import { minPasswordLength, temporaryPassword } from './user-password-schema';
 
 const schema = Yup.object({
@@ -24,7 +24,7 @@ export function ResetPasswordDialog({
   onClose,
   onDone,
 }: {
-  user: User | null;
+  user: UserView | null;
   onClose: () => void;
   onDone: (message: string) => void;
 }) {

@@ -4,7 +4,7 @@ import { isApiError } from '../../../lib/api-client';
 import { useDateFormat } from '../../../lib/format';
 import { useUpdateUser } from '../api/update-user';
 import { useUsers } from '../api/get-users';
-import type { User } from '../api/types';
+import type { UserView } from '../../../../shared/users/views';
 import { AddUserForm } from './add-user-form';
 import { ChangeRoleDialog } from './change-role-dialog';
 import { ResetPasswordDialog } from './reset-password-dialog';
@@ -17,8 +17,8 @@ export function UsersAdmin({ currentUserId }: { currentUserId: string }) {
   const users = useUsers();
   const update = useUpdateUser();
   const { timeZone } = useDateFormat();
-  const [roleFor, setRoleFor] = useState<User | null>(null);
-  const [passwordFor, setPasswordFor] = useState<User | null>(null);
+  const [roleFor, setRoleFor] = useState<UserView | null>(null);
+  const [passwordFor, setPasswordFor] = useState<UserView | null>(null);
   const [outcome, setOutcome] = useState<Outcome>(null);
 
   const busyUserId = update.isPending ? update.variables?.id : undefined;

@@ -3,7 +3,7 @@ import { ArrowLeftIcon } from '../../components/icons';
 import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
-import { RentalForm } from '../../features/billing/components/rental-form';
+import { RentalForm } from '../../features/rentals/components/rental-form';
 import { useKits } from '../../features/kits/api/get-kits';
 
 const isDate = (s: string | null) => (s && /^\d{4}-\d{2}-\d{2}$/.test(s) ? s : undefined);

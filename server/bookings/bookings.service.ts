@@ -1,7 +1,7 @@
 import { In, type DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { blockReasonText } from '../../shared/bookings/rules';
-import type { BookingView } from '../../shared/bookings/views';
+import type { AlternativeItem, BookingRefusalDetails, BookingView } from '../../shared/bookings/views';
 import type { Page } from '../../shared/lists/page';
 import type { availabilityQuery, BookingPayload, bookingListQuery, BookingPurpose } from '../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.service';
@@ -198,7 +198,7 @@ export class BookingsService {
     const conflicts = blocked.length ? [] : await conflictingItems(tx, assetIds, startsOn, endsOn, exceptBookingId);
     if (!blocked.length && !conflicts.length) return;
     const troubled = [...blocked.map((b) => ({ assetId: b.assetId, type: b.type })), ...(await this.typesOf(tx, conflicts.map((c) => c.assetId)))];
-    const alternatives: Record<string, { id: string; assetTag: string; model: string | null; dueOn: string | null }[]> = {};
+    const alternatives: Record<string, AlternativeItem[]> = {};
     for (const t of troubled) {
       alternatives[t.assetId] = (await availableAssets(tx, { type: t.type, startsOn, endsOn, exclude: assetIds, limit: 5 })).map(({ id, assetTag, model, dueOn }) => ({ id, assetTag, model, dueOn }));
     }
@@ -206,9 +206,9 @@ export class BookingsService {
       throw new AppError(422, 'booking_blocked', `Cannot book: ${blocked.map((b) => `${b.assetTag} — ${blockReasonText[b.reason]}`).join('; ')}.`, {
         blocked: blocked.map(({ assetId, assetTag, reason }) => ({ assetId, assetTag, reason })),
         alternatives,
-      });
+      } satisfies BookingRefusalDetails);
     }
-    throw conflict(`Already booked: ${conflicts.map((c) => `${c.assetTag} (${c.startsOn} to ${c.endsOn})`).join('; ')}.`, { conflicts, alternatives });
+    throw conflict(`Already booked: ${conflicts.map((c) => `${c.assetTag} (${c.startsOn} to ${c.endsOn})`).join('; ')}.`, { conflicts, alternatives } satisfies BookingRefusalDetails);
   }
 
   private async typesOf(tx: Scoped, assetIds: string[]) {

@@ -8,17 +8,17 @@ import { inOrganization, readInOrganization, type Actor } from '../db/transactio
 import { handoverSheetPdf } from '../documents/handover-sheet-pdf';
 import { Asset } from '../fleet/asset.entity';
 import { CustodyEvent } from '../fleet/custody-event.entity';
+import { isRecordId } from '../http/endpoint';
 import { AppError, ruleBroken } from '../http/errors';
 import { openIncident } from '../incidents/incidents.service';
 import { loadOrgContext } from '../organizations/org-context';
 import { User } from '../users/user.entity';
 import { blockedItems } from './booking-queries';
-import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
+import type { BookingRefusalDetails, ChecklistLine, ReturnView } from '../../shared/bookings/views';
 import { Booking, BookingItem } from './booking.entity';
 import type { BookingsService } from './bookings.service';
 
 type Checklist = z.infer<typeof checklistPayload>;
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Rules other components add to the counter (rentals: a deposit hold before handing over, papers to the renter after). */
 export type HandoverGates = {
@@ -45,7 +45,7 @@ export class HandoverService {
       if (damaged.length) throw ruleBroken('checkout_damaged', `Damaged: ${tags(assets, damaged)}. Report the damage (the item goes on hold) and book an alternative.`, { damaged: damaged.map((l) => l.assetId) });
       const blocked = await blockedItems(tx, assets.map((a) => a.id), booking.endsOn);
       if (blocked.length) {
-        throw new AppError(422, 'booking_blocked', `Cannot hand over: ${blocked.map((b) => `${b.assetTag} — ${blockReasonText[b.reason]}`).join('; ')}.`, { blocked: blocked.map(({ assetId, assetTag, reason }) => ({ assetId, assetTag, reason })) });
+        throw new AppError(422, 'booking_blocked', `Cannot hand over: ${blocked.map((b) => `${b.assetTag} — ${blockReasonText[b.reason]}`).join('; ')}.`, { blocked: blocked.map(({ assetId, assetTag, reason }) => ({ assetId, assetTag, reason })) } satisfies BookingRefusalDetails);
       }
       const stillOut = assets.filter((a) => a.status === 'out');
       if (stillOut.length) throw ruleBroken('still_out', `Still out on an earlier booking: ${stillOut.map((a) => a.assetTag).join(', ')}. Take them back in first.`);
@@ -133,7 +133,7 @@ export class HandoverService {
 
   /** A person's name, or the id of one of the firm's users. */
   private async counterpart(tx: Scoped, who: string): Promise<{ name: string; userId: string | null }> {
-    if (!UUID.test(who)) return { name: who, userId: null };
+    if (!isRecordId(who)) return { name: who, userId: null };
     const user = await tx.findOne(User, { id: who });
     if (!user) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { counterpart: 'is not one of your people' } });
     return { name: user.name, userId: user.id };

@@ -19,7 +19,6 @@ export const rentalsKeys = {
   customer: (id: string) => [...rentalsKeys.customers(), 'one', id] as const,
   rateCards: () => [...rentalsKeys.all, 'rate-cards'] as const,
   quote: (scope: RentalScope) => [...rentalsKeys.all, 'quote', scope] as const,
-  assetChoices: (filter: { q?: string; kitId?: string }) => [...rentalsKeys.all, 'asset-choices', filter] as const,
   rentalLists: () => [...rentalsKeys.all, 'list'] as const,
   rentalList: (view: RentalListView, customerId?: string) => [...rentalsKeys.rentalLists(), view, { customerId }] as const,
   rental: (id: string) => [...rentalsKeys.all, 'one', id] as const,

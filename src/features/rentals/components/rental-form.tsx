@@ -1,24 +1,27 @@
+import { useQuery } from '@tanstack/react-query';
 import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
-import { useMemo, useState } from 'react';
+import { useState } from 'react';
 import * as Yup from 'yup';
-import { BookingRefusalPanel, bookingRefusalFrom, type Alternative, type BookingRefusal } from '../../../components/booking-refusal';
+import type { AssetView } from '../../../../shared/assets/views';
+import type { RentalView } from '../../../../shared/billing/views';
+import type { AlternativeItem } from '../../../../shared/bookings/views';
+import { BookingRefusalPanel, bookingRefusalFrom, type BookingRefusal } from '../../../components/booking-refusal';
 import { Button } from '../../../components/button';
 import { DayRangeFields } from '../../../components/day-range-fields';
 import { Dialog } from '../../../components/dialog';
 import { Field, SelectField } from '../../../components/field';
 import { FormSection } from '../../../components/form-section';
-import { AlertIcon, PlusIcon } from '../../../components/icons';
+import { FieldMessage } from '../../../components/field-message';
+import { PlusIcon } from '../../../components/icons';
+import { ItemPicker, type ChosenItem, type FleetPages } from '../../../components/item-picker';
 import { Notice } from '../../../components/notice';
 import { PackingListLine } from '../../../components/packing-list-line';
 import { dayRangeRules } from '../../../lib/day-range';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateRental, type RentalInput } from '../api/create-rental';
-import { useAssetChoices } from '../api/get-asset-choices';
 import { useCustomers } from '../api/get-customers';
 import type { RentalScope } from '../api/keys';
-import type { RentalView } from '../../../../shared/billing/views';
 import { CustomerForm } from './customer-form';
-import { chosenFrom, ItemPicker, type ChosenItem } from './item-picker';
 import { LiveQuote } from './live-quote';
 
 export interface RentalValues {
@@ -56,8 +59,18 @@ function scopeOf(v: RentalValues): RentalScope | null {
   };
 }
 
-/** A new rental: customer, a kit and/or items, whole days; the price follows every change. */
-export function RentalForm({ kits, initial, onCreated }: { kits: { id: string; name: string }[]; initial: Partial<RentalValues>; onCreated: (rental: RentalView) => void }) {
+/** A new rental: customer, a kit and/or items, whole days; the price follows every change. `fleet` reads the fleet a page at a time (the fleet feature's list). */
+export function RentalForm({
+  kits,
+  fleet,
+  initial,
+  onCreated,
+}: {
+  kits: { id: string; name: string }[];
+  fleet: FleetPages<AssetView>;
+  initial: Partial<RentalValues>;
+  onCreated: (rental: RentalView) => void;
+}) {
   const create = useCreateRental();
   const [formError, setFormError] = useState<string>();
   const [refusal, setRefusal] = useState<BookingRefusal | null>(null);
@@ -88,7 +101,7 @@ export function RentalForm({ kits, initial, onCreated }: { kits: { id: string; n
   return (
     <Formik initialValues={initialValues} validationSchema={schema} onSubmit={submit}>
       {({ isSubmitting }) => (
-        <RentalFormBody kits={kits} formError={formError} refusal={refusal} busy={isSubmitting} onSwapped={() => setRefusal(null)} />
+        <RentalFormBody kits={kits} fleet={fleet} formError={formError} refusal={refusal} busy={isSubmitting} onSwapped={() => setRefusal(null)} />
       )}
     </Formik>
   );
@@ -96,12 +109,14 @@ export function RentalForm({ kits, initial, onCreated }: { kits: { id: string; n
 
 function RentalFormBody({
   kits,
+  fleet,
   formError,
   refusal,
   busy,
   onSwapped,
 }: {
   kits: { id: string; name: string }[];
+  fleet: FleetPages<AssetView>;
   formError?: string;
   refusal: BookingRefusal | null;
   busy: boolean;
@@ -109,8 +124,8 @@ function RentalFormBody({
 }) {
   const { values, setFieldValue, setValues, submitForm } = useFormikContext<RentalValues>();
   const customers = useCustomers();
-  const kitMembers = useAssetChoices({ kitId: values.kitId || undefined });
-  const members = useMemo(() => (values.kitId ? (kitMembers.data?.items ?? []) : []), [values.kitId, kitMembers.data]);
+  const kitMembers = useQuery({ ...fleet({ kitId: values.kitId, sort: 'assetTag', limit: 500, offset: 0 }), enabled: !!values.kitId });
+  const members = values.kitId ? (kitMembers.data?.items ?? []) : [];
   const [newCustomerOpen, setNewCustomerOpen] = useState(false);
   const [swapNote, setSwapNote] = useState<string>();
   const scope = scopeOf(values);
@@ -119,10 +134,10 @@ function RentalFormBody({
   const kitOptions = [{ value: '', label: 'No kit: separate items only' }, ...kits.map((k) => ({ value: k.id, label: k.name }))];
 
   /** Puts the offered item in place of the refused one (a kit is then listed item by item) and tries again. */
-  function swap(refusedId: string, alternative: Alternative) {
-    const all = [...members.map(chosenFrom), ...values.items.filter((i) => !members.some((m) => m.id === i.id))];
-    const from = all.find((i) => i.id === refusedId)?.tag ?? 'the refused item';
-    const items = all.map((i) => (i.id === refusedId ? chosenFrom(alternative) : i));
+  function swap(refusedId: string, alternative: AlternativeItem) {
+    const all: ChosenItem[] = [...members, ...values.items.filter((i) => !members.some((m) => m.id === i.id))];
+    const from = all.find((i) => i.id === refusedId)?.assetTag ?? 'the refused item';
+    const items = all.map((i) => (i.id === refusedId ? alternative : i));
     void setValues({ ...values, kitId: '', items }, true);
     setSwapNote(`${alternative.assetTag} replaces ${from}.${values.kitId ? ' The rental now lists the kit’s items one by one, with the swap.' : ''}`);
     onSwapped();
@@ -148,7 +163,14 @@ function RentalFormBody({
         <FormSection legend="What goes">
           <SelectField name="kitId" label="Kit" options={kitOptions} hint="A kit rents every item on its packing list." />
           <PackingListLine tags={members.map((m) => m.assetTag)} />
-          <ItemPicker chosen={values.items} kitId={values.kitId} onChange={(items) => void setFieldValue('items', items)} />
+          {kitMembers.isError ? <Notice tone="error">{kitMembers.error.message}</Notice> : null}
+          <ItemPicker
+            pages={fleet}
+            chosen={values.items}
+            kitId={values.kitId}
+            onAdd={(item) => void setFieldValue('items', [...values.items, item])}
+            onRemove={(id) => void setFieldValue('items', values.items.filter((i) => i.id !== id))}
+          />
           <FieldMessage name="items" />
         </FormSection>
 
@@ -178,18 +200,5 @@ function RentalFormBody({
         />
       </Dialog>
     </>
-  );
-}
-
-/** The error of a field drawn by something other than <Field> (the item list). */
-function FieldMessage({ name }: { name: keyof RentalValues }) {
-  const { errors, touched, submitCount } = useFormikContext<RentalValues>();
-  const error = errors[name];
-  if (typeof error !== 'string' || (!touched[name] && !submitCount)) return null;
-  return (
-    <p className="flex items-start gap-1 text-sm text-bad">
-      <AlertIcon size={14} className="mt-0.5 shrink-0" />
-      <span>{error}</span>
-    </p>
   );
 }

@@ -11,6 +11,7 @@ import {
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
+import { isRecordId } from '../http/endpoint';
 import { AppError, conflict, ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { Asset } from './asset.entity';
@@ -20,7 +21,6 @@ import { CustodyEvent } from './custody-event.entity';
 import { listReply } from '../http/list-reply';
 import type { Page } from '../../shared/lists/page';
 
-const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
 const isUniqueViolation = (err: unknown) => (err as { code?: string })?.code === '23505';
 
 /** Fields the person edits directly (the rest are derived or belong to other flows). */
@@ -52,7 +52,8 @@ export class AssetsService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const trimmed = code.trim();
-      const id = trimmed.match(UUID)?.[0];
+      const tail = trimmed.slice(-36);
+      const id = isRecordId(tail) ? tail : undefined;
       const qb = tx.select(Asset, 'a').leftJoinAndSelect('a.kit', 'k');
       const asset = id
         ? await qb.andWhere('a.id = :id', { id }).getOne()

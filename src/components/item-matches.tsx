@@ -21,7 +21,7 @@ export function ItemMatches({
             {item.kitName ? ` · in ${item.kitName}` : ''}
           </span>
           {item.note ? (
-            <span className="text-sm text-ink-500">{item.note}</span>
+            <span className="inline-flex min-h-8 items-center px-2.5 text-sm text-ink-500">{item.note}</span>
           ) : (
             <Button size="sm" onClick={() => onAdd(item.id)}>
               Add {item.tag}

@@ -1,4 +1,4 @@
-/** Asset types and statuses (shared/assets/vocabulary.ts) and the asset and kit views (shared/assets/views.ts), as the server has them. */
+/** Asset types and statuses as the server has them (shared/assets/vocabulary.ts). */
 export {
   assetTypes,
   assetTypeTitles,
@@ -8,4 +8,3 @@ export {
   assetSortFields,
 } from '../../shared/assets/vocabulary';
 export type { AssetType, AssetStatus, TipPosition } from '../../shared/assets/vocabulary';
-export type { AssetView, KitView, KitReadiness } from '../../shared/assets/views';

@@ -3,7 +3,7 @@ import { memo, useCallback, useEffect, useMemo, useState, type CSSProperties, ty
 import { Link } from 'react-router-dom';
 import { AlertIcon, ClockIcon, PlusIcon } from '../../../components/icons';
 import { StatusChip } from '../../../components/status-chip';
-import type { AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
 import { assetTypeTitles } from '../../../lib/assets';
 import { addDays } from '../../../lib/bookings';
 import type { BookingView } from '../../../../shared/bookings/views';

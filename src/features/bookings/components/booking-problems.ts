@@ -1,4 +1,4 @@
-import type { AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
 import { blockReason, blockReasonText, rangesOverlap } from '../../../lib/bookings';
 import type { BookingView } from '../../../../shared/bookings/views';
 import { bookingStateWords, bookingTitle, dayRange, shortDay } from './booking-words';

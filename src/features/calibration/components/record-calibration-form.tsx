@@ -5,7 +5,7 @@ import { Button } from '../../../components/button';
 import { Field, SelectField } from '../../../components/field';
 import { AlertIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
-import type { AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
 import { dueDate } from '../../../lib/calibration';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { formatCalendarDate } from '../../../lib/format';

@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
-import type { AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
 import { formatCount, useDateFormat } from '../../../lib/format';
 import { useChecks } from '../api/get-checks';
 import { useTipValidation } from '../api/get-tip-validation';

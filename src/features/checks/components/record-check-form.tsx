@@ -7,7 +7,8 @@ import { Field, SelectField } from '../../../components/field';
 import { PlusIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
 import { LaserCaution } from '../../../components/safety-cautions';
-import { assetTypeTitles, type AssetView, type TipPosition } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
+import { assetTypeTitles, type TipPosition } from '../../../lib/assets';
 import {
   DEFAULT_TIP_READINGS,
   expectedLengthMm,

@@ -1,5 +1,6 @@
 import * as Yup from 'yup';
-import { assetTypes, typesWithFirmware, type AssetType, type AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
+import { assetTypes, typesWithFirmware, type AssetType } from '../../../lib/assets';
 import type { CreateAssetPayload, UpdateAssetPayload } from '../../../../shared/schemas/assets';
 
 /** Numbers as Formik holds them: a number, or '' while the box is empty. */

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { calibrationStates } from '../calibration/due-date';
 import { checkKinds, tolerancePayload } from './check-kinds';
-import { assetSortFields, assetStatuses, assetTypes, tipPositions, typesWithFirmware, type AssetStatus, type AssetType } from '../assets/vocabulary';
+import { assetSortFields, assetStatuses, assetTypes, tipPositions, typesWithFirmware, type AssetType } from '../assets/vocabulary';
 
 export * from '../assets/vocabulary';
 

@@ -1,11 +1,12 @@
 import { useQuery, type UseQueryOptions } from '@tanstack/react-query';
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import type { AssetView } from '../../shared/assets/views';
 import type { AlternativeItem } from '../../shared/bookings/views';
 import type { Page } from '../../shared/lists/page';
-import { assetTypes, assetTypeTitles, type AssetStatus, type AssetType } from '../lib/assets';
+import { assetTypeTitles, type AssetStatus, type AssetType } from '../lib/assets';
 import { formatCount } from '../lib/format';
 import { useDebouncedValue } from '../lib/use-debounced-value';
+import { AssetTypeSelect } from './asset-type-select';
 import { Button } from './button';
 import { ItemMatches } from './item-matches';
 import { RemovableTags } from './removable-tags';
@@ -67,7 +68,6 @@ export function ItemPicker<T extends PickableItem>({
   onAdd: (item: T) => void;
   onRemove: (id: string) => void;
 }) {
-  const typeId = useId();
   const [text, setText] = useState('');
   const [type, setType] = useState<AssetType | ''>('');
   const q = useDebouncedValue(text.trim(), 250);
@@ -94,24 +94,7 @@ export function ItemPicker<T extends PickableItem>({
       />
       <div className="flex flex-wrap items-end gap-2">
         <SearchBox label="Add separate items" value={text} onChange={setText} placeholder="Tag, type or model, e.g. SMR" className="min-w-56 flex-[2]" />
-        <div className="flex min-w-40 flex-1 flex-col gap-1">
-          <label htmlFor={typeId} className="text-sm font-semibold text-ink-800">
-            Item type
-          </label>
-          <select
-            id={typeId}
-            value={type}
-            onChange={(e) => setType(e.target.value as AssetType | '')}
-            className="min-h-10 w-full rounded-md border border-paper-line bg-card px-3 py-1.5 text-base text-ink-900"
-          >
-            <option value="">Any type</option>
-            {assetTypes.map((t) => (
-              <option key={t} value={t}>
-                {assetTypeTitles[t]}
-              </option>
-            ))}
-          </select>
-        </div>
+        <AssetTypeSelect label="Item type" anyLabel="Any type" value={type} onChange={setType} className="min-w-40 flex-1" />
       </div>
       {page ? (
         <>

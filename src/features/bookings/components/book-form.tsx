@@ -1,4 +1,3 @@
-import { useQuery } from '@tanstack/react-query';
 import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
@@ -11,12 +10,11 @@ import { Button } from '../../../components/button';
 import { DayRangeFields } from '../../../components/day-range-fields';
 import { Dialog } from '../../../components/dialog';
 import { Field, SelectField } from '../../../components/field';
-import { FieldMessage } from '../../../components/field-message';
 import { FormSection } from '../../../components/form-section';
 import { PlusIcon } from '../../../components/icons';
-import { ItemPicker, readFromFleet, type ChosenItem, type FleetPages } from '../../../components/item-picker';
+import { readFromFleet, type ChosenItem, type FleetPages } from '../../../components/item-picker';
+import { KitAndItemsFields, swapIn, useKitMembers } from '../../../components/kit-and-items';
 import { Notice } from '../../../components/notice';
-import { PackingListLine } from '../../../components/packing-list-line';
 import { bookingDays } from '../../../lib/bookings';
 import { dayRangeRules } from '../../../lib/day-range';
 import { applyServerErrors } from '../../../lib/form-errors';
@@ -144,11 +142,8 @@ function BookFormBody({
 }) {
   const { values, setFieldValue, setValues, submitForm } = useFormikContext<BookValues>();
   const [newJobOpen, setNewJobOpen] = useState(false);
-  // Every member, retired ones too: booking a kit books all its members, and the form explains why one cannot go.
-  const members = useQuery({ ...fleet({ kitId: values.kitId, sort: 'assetTag', limit: 500, offset: 0 }), enabled: !!values.kitId });
-  const kitMembers = values.kitId ? (members.data?.items ?? []) : [];
-  const extras = values.items.filter((i) => !kitMembers.some((m) => m.id === i.id));
-  const items = [...kitMembers, ...extras];
+  const { members, error: membersError } = useKitMembers(fleet, values.kitId);
+  const items = [...members, ...values.items.filter((i) => !members.some((m) => m.id === i.id))];
 
   const datesValid = !!values.startsOn && !!values.endsOn && values.startsOn <= values.endsOn;
   const others = useBookings({ from: values.startsOn, to: values.endsOn, state: ['reserved', 'out'] }, { enabled: datesValid });
@@ -158,13 +153,11 @@ function BookFormBody({
     { value: '', label: 'No job (the firm’s own use)' },
     ...[...jobs].sort((a, b) => (a.startsOn < b.startsOn ? 1 : -1)).map((j) => ({ value: j.id, label: `${j.reference} · ${j.customerName} (${dayRange(j.startsOn, j.endsOn)})` })),
   ];
-  const kitOptions = [{ value: '', label: 'No kit: separate items only' }, ...kits.map((k) => ({ value: k.id, label: k.name }))];
 
   function swap(troubledId: string, alternative: AlternativeItem) {
-    const replaced = items.map((i) => (i.id === troubledId ? alternative : i));
-    const from = items.find((i) => i.id === troubledId)?.assetTag ?? 'the item';
+    const { items: swapped, from = 'the item' } = swapIn(members, values, troubledId, alternative);
     const kitName = kits.find((k) => k.id === values.kitId)?.name;
-    void setValues({ ...values, kitId: '', items: replaced.filter((i, n) => replaced.findIndex((o) => o.id === i.id) === n) }, true);
+    void setValues({ ...values, kitId: '', items: swapped }, true);
     onSwapped(
       `${alternative.assetTag} replaces ${from}.${kitName ? ` The booking now lists ${kitName}’s items one by one, with the swap.` : ''}`,
     );
@@ -179,17 +172,7 @@ function BookFormBody({
         {swapNote && !trouble ? <Notice tone="info">{swapNote}</Notice> : null}
 
         <FormSection legend="What goes">
-          <SelectField name="kitId" label="Kit" options={kitOptions} hint="A kit books every item on its packing list." />
-          <PackingListLine tags={kitMembers.map((m) => m.assetTag)} />
-          {members.isError ? <Notice tone="error">{members.error.message}</Notice> : null}
-          <ItemPicker
-            pages={fleet}
-            chosen={extras}
-            kitId={values.kitId}
-            onAdd={(item) => void setFieldValue('items', [...values.items, item])}
-            onRemove={(id) => void setFieldValue('items', values.items.filter((i) => i.id !== id))}
-          />
-          <FieldMessage name="items" />
+          <KitAndItemsFields kits={kits} fleet={fleet} members={members} membersError={membersError} kitHint="A kit books every item on its packing list." />
         </FormSection>
 
         <FormSection legend="When">

@@ -1,4 +1,3 @@
-import { useQuery } from '@tanstack/react-query';
 import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
 import { useState } from 'react';
 import * as Yup from 'yup';
@@ -11,11 +10,10 @@ import { DayRangeFields } from '../../../components/day-range-fields';
 import { Dialog } from '../../../components/dialog';
 import { Field, SelectField } from '../../../components/field';
 import { FormSection } from '../../../components/form-section';
-import { FieldMessage } from '../../../components/field-message';
 import { PlusIcon } from '../../../components/icons';
-import { ItemPicker, type ChosenItem, type FleetPages } from '../../../components/item-picker';
+import type { ChosenItem, FleetPages } from '../../../components/item-picker';
+import { KitAndItemsFields, swapIn, useKitMembers } from '../../../components/kit-and-items';
 import { Notice } from '../../../components/notice';
-import { PackingListLine } from '../../../components/packing-list-line';
 import { dayRangeRules } from '../../../lib/day-range';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateRental, type RentalInput } from '../api/create-rental';
@@ -124,20 +122,16 @@ function RentalFormBody({
 }) {
   const { values, setFieldValue, setValues, submitForm } = useFormikContext<RentalValues>();
   const customers = useCustomers();
-  const kitMembers = useQuery({ ...fleet({ kitId: values.kitId, sort: 'assetTag', limit: 500, offset: 0 }), enabled: !!values.kitId });
-  const members = values.kitId ? (kitMembers.data?.items ?? []) : [];
+  const { members, error: membersError } = useKitMembers(fleet, values.kitId);
   const [newCustomerOpen, setNewCustomerOpen] = useState(false);
   const [swapNote, setSwapNote] = useState<string>();
   const scope = scopeOf(values);
 
   const customerOptions = [{ value: '', label: 'Choose the customer' }, ...(customers.data?.items ?? []).map((c) => ({ value: c.id, label: c.company }))];
-  const kitOptions = [{ value: '', label: 'No kit: separate items only' }, ...kits.map((k) => ({ value: k.id, label: k.name }))];
 
   /** Puts the offered item in place of the refused one (a kit is then listed item by item) and tries again. */
   function swap(refusedId: string, alternative: AlternativeItem) {
-    const all: ChosenItem[] = [...members, ...values.items.filter((i) => !members.some((m) => m.id === i.id))];
-    const from = all.find((i) => i.id === refusedId)?.assetTag ?? 'the refused item';
-    const items = all.map((i) => (i.id === refusedId ? alternative : i));
+    const { items, from = 'the refused item' } = swapIn(members, values, refusedId, alternative);
     void setValues({ ...values, kitId: '', items }, true);
     setSwapNote(`${alternative.assetTag} replaces ${from}.${values.kitId ? ' The rental now lists the kit’s items one by one, with the swap.' : ''}`);
     onSwapped();
@@ -161,17 +155,7 @@ function RentalFormBody({
         </FormSection>
 
         <FormSection legend="What goes">
-          <SelectField name="kitId" label="Kit" options={kitOptions} hint="A kit rents every item on its packing list." />
-          <PackingListLine tags={members.map((m) => m.assetTag)} />
-          {kitMembers.isError ? <Notice tone="error">{kitMembers.error.message}</Notice> : null}
-          <ItemPicker
-            pages={fleet}
-            chosen={values.items}
-            kitId={values.kitId}
-            onAdd={(item) => void setFieldValue('items', [...values.items, item])}
-            onRemove={(id) => void setFieldValue('items', values.items.filter((i) => i.id !== id))}
-          />
-          <FieldMessage name="items" />
+          <KitAndItemsFields kits={kits} fleet={fleet} members={members} membersError={membersError} kitHint="A kit rents every item on its packing list." />
         </FormSection>
 
         <FormSection legend="When">

@@ -7,6 +7,7 @@ import { AppError, ruleBroken } from '../http/errors';
 import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 import { publicUser, type UsersService } from '../users/users.service';
+import type { SessionView, SignInView } from '../../shared/auth/views';
 import { signSessionToken } from './tokens';
 
 const wrongCredentials = () => new AppError(401, 'unauthenticated', 'That e-mail and password do not match an active account.');
@@ -23,7 +24,7 @@ export class AuthService {
     this.decoyHash = users.hashPassword('decoy-password-never-used');
   }
 
-  async login(email: string, password: string) {
+  async login(email: string, password: string): Promise<SignInView> {
     const user = await this.db
       .getRepository(User)
       .createQueryBuilder('u')
@@ -45,7 +46,7 @@ export class AuthService {
     });
   }
 
-  me(actor: Actor) {
+  me(actor: Actor): Promise<SessionView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const user = await tx.get(User, { id: actor.userId }, 'Your account');
       const organization = await tx.manager.findOneByOrFail(Organization, { id: actor.organizationId });

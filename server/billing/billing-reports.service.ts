@@ -3,13 +3,14 @@ import type { RevenueRow, UtilisationRow } from '../../shared/billing/views';
 import { bookingDays } from '../../shared/bookings/rules';
 import { readInOrganization, type Actor } from '../db/transaction';
 import { listReply } from '../http/list-reply';
+import type { Page } from '../../shared/lists/page';
 
 /** The owner's and clerk's money views: revenue per kit and month, kit utilisation. */
 export class BillingReportsService {
   constructor(private readonly db: DataSource) {}
 
   /** Net invoiced per kit (loose items together) and month of issue, credit notes subtracted. */
-  revenue(actor: Actor, q: { from: string; to: string }) {
+  revenue(actor: Actor, q: { from: string; to: string }): Promise<Page<RevenueRow>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) =>
       listReply(
         await tx.sql<RevenueRow>(
@@ -26,7 +27,7 @@ export class BillingReportsService {
   }
 
   /** Days each kit was booked out (jobs and rentals) within the period, over the days in the period. */
-  utilisation(actor: Actor, q: { from: string; to: string }) {
+  utilisation(actor: Actor, q: { from: string; to: string }): Promise<Page<UtilisationRow>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const availableDays = bookingDays(q.from, q.to);
       const rows = await tx.sql<{ kitId: string; kitName: string; bookedDays: number }>(

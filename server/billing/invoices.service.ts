@@ -2,7 +2,8 @@ import { In, type DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { taxMinor } from '../../shared/billing/quote';
 import { formatMoney } from '../../shared/billing/money';
-import type { InvoiceView } from '../../shared/billing/views';
+import type { InvoiceSummary, InvoiceView } from '../../shared/billing/views';
+import type { Page } from '../../shared/lists/page';
 import type { creditNotePayload, invoiceListQuery, invoicePaymentPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
 import { loadBooking } from '../bookings';
@@ -108,7 +109,7 @@ export class InvoicesService {
     });
   }
 
-  list(actor: Actor, q: z.infer<typeof invoiceListQuery>) {
+  list(actor: Actor, q: z.infer<typeof invoiceListQuery>): Promise<Page<InvoiceSummary>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const qb = tx.select(Invoice, 'i').orderBy('i.issued_at', 'DESC').addOrderBy('i.number', 'DESC');
       if (q.kind) qb.andWhere('i.kind = :kind', { kind: q.kind });

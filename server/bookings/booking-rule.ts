@@ -1,3 +1,4 @@
+import type { BookingRefusalDetails } from '../../shared/bookings/views';
 import { blockReason, blockReasonText, type BlockReason } from '../../shared/bookings/rules';
 import type { AssetType } from '../../shared/schemas/assets';
 import type { BookingPurpose } from '../../shared/schemas/bookings';
@@ -21,9 +22,9 @@ export async function refusals(tx: Scoped, assetIds: string[], endsOn: string, p
 }
 
 /** 422 `booking_blocked` naming each item and why (API.md). */
-export function blockedError(doing: string, refused: Refusal[], details: Record<string, unknown> = {}) {
+export function blockedError(doing: string, refused: Refusal[], details: Pick<BookingRefusalDetails, 'alternatives'> = {}) {
   return new AppError(422, 'booking_blocked', `${doing}: ${refused.map((r) => `${r.assetTag} — ${blockReasonText[r.reason]}`).join('; ')}.`, {
     blocked: refused.map(({ assetId, assetTag, reason }) => ({ assetId, assetTag, reason })),
     ...details,
-  });
+  } satisfies BookingRefusalDetails);
 }

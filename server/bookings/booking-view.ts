@@ -1,3 +1,4 @@
+import type { BookingView } from '../../shared/bookings/views';
 import type { AssetStatus, AssetType } from '../../shared/schemas/assets';
 import type { Scoped } from '../db/scoped';
 import type { Booking } from './booking.entity';
@@ -24,9 +25,10 @@ async function bookingAssets(tx: Scoped, bookingIds: string[]) {
   );
 }
 
+export type { BookingView };
+
 /** A booking as every other component and the API see it: plain values, no entity. */
-export type BookingView = ReturnType<typeof bookingView>;
-const bookingView = (b: Booking, items: BookedItem[], rentals: Map<string, RentalLabel>) => ({
+const bookingView = (b: Booking, items: BookedItem[], rentals: Map<string, RentalLabel>): BookingView => ({
   id: b.id,
   state: b.state,
   purpose: b.purpose,

@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
+import type { Page } from '../../shared/lists/page';
 import type { availabilityQuery, BookingPayload, bookingListQuery } from '../../shared/schemas/bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
@@ -46,7 +47,7 @@ export class BookingsService {
     return readInOrganization(this.db, actor.organizationId, (tx) => loadBooking(tx, id));
   }
 
-  list(actor: Actor, q: z.infer<typeof bookingListQuery>) {
+  list(actor: Actor, q: z.infer<typeof bookingListQuery>): Promise<Page<BookingView>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const qb = tx.select(Booking, 'b').leftJoinAndSelect('b.job', 'j').leftJoinAndSelect('b.kit', 'k').orderBy('b.starts_on', 'ASC').addOrderBy('b.created_at', 'ASC');
       if (q.from) qb.andWhere('b.ends_on >= :from', { from: q.from });

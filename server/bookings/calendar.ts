@@ -7,6 +7,7 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { AppError } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { User } from '../users/user.entity';
+import type { CalendarFeedView } from '../../shared/bookings/views';
 
 /**
  * A per-person secret calendar feed (RFC 5545, written by ical-generator):
@@ -19,7 +20,7 @@ export class CalendarService {
   ) {}
 
   /** A new secret replaces the old one, so a leaked address can be shut. */
-  rotateToken(actor: Actor) {
+  rotateToken(actor: Actor): Promise<CalendarFeedView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const token = randomBytes(24).toString('base64url');
       await tx.updateWhere(User, { id: actor.userId }, { calendarToken: token });

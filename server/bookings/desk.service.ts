@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import type { CounterDayView, MyKitView } from '../../shared/bookings/views';
 import { readInOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from '../organizations/org-context';
 import { itemFacts } from './booking-queries';
@@ -24,7 +25,7 @@ export class DeskService {
   }
 
   /** Today's checkouts and returns, late returns, and reserved bookings an item no longer qualifies for. */
-  today(actor: Actor) {
+  today(actor: Actor): Promise<CounterDayView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const { today } = await loadOrgContext(tx);
       const [checkouts, returns, late, upcoming] = await Promise.all([
@@ -44,7 +45,7 @@ export class DeskService {
   }
 
   /** Kit a technician carries now and next: taken by them, or on jobs they lead. */
-  mine(actor: Actor) {
+  mine(actor: Actor): Promise<MyKitView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const { today } = await loadOrgContext(tx);
       const mine = "(b.taken_by_user_id = :p0 OR j.lead_technician_id = :p0) AND b.ends_on >= :p1";

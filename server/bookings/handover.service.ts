@@ -5,16 +5,16 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { handoverSheetPdf } from '../documents/handover-sheet-pdf';
 import { assetsByIds, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
+import { isRecordId } from '../http/endpoint';
 import { AppError, ruleBroken } from '../http/errors';
 import { openIncident } from '../incidents/incidents.service';
 import { loadOrgContext } from '../organizations/org-context';
 import { User } from '../users/user.entity';
+import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
 import type { BookingView } from './booking-view';
-import type { ChecklistLine } from './booking.entity';
 import { bookingIn, checkOut, loadBooking, takeBack } from './lifecycle';
 
 type Checklist = z.infer<typeof checklistPayload>;
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Rules other components add to the counter (rentals: a deposit hold before handing over, papers to the renter after). */
 export type HandoverGates = {
@@ -50,7 +50,7 @@ export class HandoverService {
   }
 
   /** A missing or damaged item opens an incident (and so a hold) linked to the booking; the rest go back to ready. */
-  return(actor: Actor, id: string, input: Checklist) {
+  return(actor: Actor, id: string, input: Checklist): Promise<ReturnView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const booking = await bookingIn(tx, id, 'out', 'Only a booking that is out can come back');
@@ -113,7 +113,7 @@ export class HandoverService {
 
   /** A person's name, or the id of one of the firm's users. */
   private async counterpart(tx: Scoped, who: string): Promise<{ name: string; userId: string | null }> {
-    if (!UUID.test(who)) return { name: who, userId: null };
+    if (!isRecordId(who)) return { name: who, userId: null };
     const user = await tx.get(User, { id: who }, 'That person');
     return { name: user.name, userId: user.id };
   }

@@ -1,5 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
+import type { SiteJobView } from '../../shared/bookings/views';
+import type { Page } from '../../shared/lists/page';
 import type { jobPayload } from '../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
@@ -17,18 +19,18 @@ const leadOf = (tx: Scoped, input: JobInput) => (input.leadTechnicianId ? tx.get
 export class JobsRegisterService {
   constructor(private readonly db: DataSource) {}
 
-  list(actor: Actor, paging: { limit: number; offset: number }) {
+  list(actor: Actor, paging: { limit: number; offset: number }): Promise<Page<SiteJobView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const [items, total] = await tx.findAndCount(Job, { order: { startsOn: 'DESC' }, take: paging.limit, skip: paging.offset });
       return { items, total };
     });
   }
 
-  get(actor: Actor, id: string) {
+  get(actor: Actor, id: string): Promise<SiteJobView> {
     return inOrganization(this.db, actor.organizationId, (tx) => tx.get(Job, { id }, 'That job'));
   }
 
-  create(actor: Actor, input: JobInput) {
+  create(actor: Actor, input: JobInput): Promise<SiteJobView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await leadOf(tx, input);
       if (await tx.count(Job, { reference: input.reference })) throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
@@ -38,7 +40,7 @@ export class JobsRegisterService {
     });
   }
 
-  update(actor: Actor, id: string, input: JobInput) {
+  update(actor: Actor, id: string, input: JobInput): Promise<SiteJobView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const job = await tx.get(Job, { id }, 'That job');
       await leadOf(tx, input);

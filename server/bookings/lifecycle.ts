@@ -7,7 +7,8 @@ import { conflict, notFound, ruleBroken } from '../http/errors';
 import { availableAssets, conflictingItems, itemFacts } from './booking-queries';
 import { blockedError, refusals, refusedItems } from './booking-rule';
 import { bookingViews, type BookingView } from './booking-view';
-import { Booking, BookingItem, type ChecklistLine } from './booking.entity';
+import type { AlternativeItem, BookingRefusalDetails, ChecklistLine } from '../../shared/bookings/views';
+import { Booking, BookingItem } from './booking.entity';
 import { Job } from './job.entity';
 
 /*
@@ -150,7 +151,7 @@ async function assertBookable(tx: Scoped, assetIds: string[], w: Window) {
   const refused = refusedItems(facts, w.endsOn, w.purpose);
   const conflicts = refused.length ? [] : await conflictingItems(tx, assetIds, w.startsOn, w.endsOn, w.exceptBookingId);
   if (!refused.length && !conflicts.length) return;
-  const alternatives: Record<string, { id: string; assetTag: string; model: string | null; dueOn: string | null }[]> = {};
+  const alternatives: Record<string, AlternativeItem[]> = {};
   if (w.purpose !== 'lab') {
     for (const assetId of new Set([...refused, ...conflicts].map((x) => x.assetId))) {
       const type = facts.find((f) => f.assetId === assetId)!.type;
@@ -158,7 +159,7 @@ async function assertBookable(tx: Scoped, assetIds: string[], w: Window) {
     }
   }
   if (refused.length) throw blockedError('Cannot book', refused, { alternatives });
-  throw conflict(`Already booked: ${conflicts.map((c) => `${c.assetTag} (${c.startsOn} to ${c.endsOn})`).join('; ')}.`, { conflicts, alternatives });
+  throw conflict(`Already booked: ${conflicts.map((c) => `${c.assetTag} (${c.startsOn} to ${c.endsOn})`).join('; ')}.`, { conflicts, alternatives } satisfies BookingRefusalDetails);
 }
 
 /**

@@ -7,6 +7,7 @@ import { endpoint } from '../http/endpoint';
 import { AppError } from '../http/errors';
 import { parse } from '../http/parse';
 import { sendDocument } from '../http/send-file';
+import { receiveFiles } from '../http/uploads';
 import type { CalibrationService } from './calibration.service';
 import type { ImpactService } from './impact.service';
 import type { LabService } from './lab.service';
@@ -21,12 +22,11 @@ type Services = { calibration: CalibrationService; impact: ImpactService; lab: L
 export function calibrationRoutes({ calibration, impact, lab, review }: Services): Router {
   const router = Router();
   const at = '/api';
-  router.post('/assets/:id/calibrations', (req, res, next) =>
-    upload.single('certificate')(req, res, (err: unknown) => {
-      const code = (err as { code?: string })?.code;
-      if (code === 'LIMIT_FILE_SIZE') return next(new AppError(413, 'too_large', `A certificate may be at most ${MAX_CERTIFICATE_BYTES / 1024 / 1024} MB.`));
-      if (code === 'LIMIT_UNEXPECTED_FILE' || code === 'LIMIT_FILE_COUNT') return next(new AppError(400, 'invalid_input', 'Send one PDF in the "certificate" field.', { fields: { certificate: 'one PDF only' } }));
-      next(err);
+  router.post(
+    '/assets/:id/calibrations',
+    receiveFiles(upload.single('certificate'), {
+      tooLarge: `A certificate may be at most ${MAX_CERTIFICATE_BYTES / 1024 / 1024} MB.`,
+      wrongFiles: new AppError(400, 'invalid_input', 'Send one PDF in the "certificate" field.', { fields: { certificate: 'one PDF only' } }),
     }),
   );
   endpoint(router, at, { method: 'post', path: '/assets/:id/calibrations', summary: 'Record a calibration with its certificate PDF (multipart)', access: 'calibration.record', status: 201 }, ({ actor, params, req }) =>

@@ -2,6 +2,7 @@ import { IsNull, type DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { calendarDayIn, dueDate } from '../../shared/calibration/due-date';
 import { suggestInterval, type AsFound } from '../../shared/calibration/interval-review';
+import type { CalibrationEventView } from '../../shared/calibration/views';
 import type { calibrationEventFields } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
 import { closeBooking } from '../bookings';
@@ -19,7 +20,7 @@ import { listReply } from '../http/list-reply';
 
 export type UploadedCertificate = { originalname: string; buffer: Buffer; size: number };
 
-const eventView = (e: CalibrationEvent) => ({
+const eventView = (e: CalibrationEvent): CalibrationEventView => ({
   id: e.id,
   assetId: e.assetId,
   performedOn: e.performedOn,

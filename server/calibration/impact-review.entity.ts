@@ -1,8 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { OrgOwned } from '../db/org-owned';
+import type { ImpactAssessment } from '../../shared/calibration/views';
 import { AssetBound } from '../fleet';
-
-export type ImpactAssessment = 'no_effect' | 'customer_notified' | 'remeasure_offered';
 
 /**
  * The out-of-tolerance impact review (ISO 9001:2015 §7.1.5.2, ISO/IEC

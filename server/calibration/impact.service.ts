@@ -1,4 +1,6 @@
 import type { DataSource } from 'typeorm';
+import type { AssetImpactView, ImpactAssessment, ImpactNoticesView, ImpactReviewView } from '../../shared/calibration/views';
+import type { Page } from '../../shared/lists/page';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
@@ -6,7 +8,7 @@ import { getAsset, type AssetRecord } from '../fleet';
 import { ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications/outbox';
 import { staffAddresses } from '../notifications/staff';
-import { ImpactReview, ImpactReviewItem, type ImpactAssessment } from './impact-review.entity';
+import { ImpactReview, ImpactReviewItem } from './impact-review.entity';
 import { listReply } from '../http/list-reply';
 
 /** Day of the item's last passing evidence before `foundOn`: an in-tolerance calibration or a passing field check (on the firm's calendar). */
@@ -55,7 +57,7 @@ type ReviewRow = { bookingId: string; jobId: string | null; jobReference: string
 export class ImpactService {
   constructor(private readonly db: DataSource) {}
 
-  private async view(tx: Scoped, review: ImpactReview) {
+  private async view(tx: Scoped, review: ImpactReview): Promise<ImpactReviewView> {
     const bookings = await tx.sql<ReviewRow>(
       `SELECT i.booking_id AS "bookingId", b.job_id AS "jobId", j.reference AS "jobReference", j.customer_name AS "customerName", j.contact_email AS "contactEmail",
               b.rental_id AS "rentalId", to_char(b.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(b.ends_on, 'YYYY-MM-DD') AS "endsOn",
@@ -73,13 +75,13 @@ export class ImpactService {
       since: review.since,
       foundOn: review.foundOn,
       state: review.state,
-      bookings: bookings.map((b) => ({ ...b, customerId: null })),
+      bookings: bookings.map((b) => ({ ...b, customerId: null, noticeQueuedAt: b.noticeQueuedAt?.toISOString() ?? null })),
       assessedCount: bookings.filter((b) => b.assessment).length,
     };
   }
 
   /** GET /api/assets/:id/impact — the item's latest review. */
-  forAsset(actor: Actor, assetId: string) {
+  forAsset(actor: Actor, assetId: string): Promise<AssetImpactView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await getAsset(tx, assetId);
       const review = await tx.findOne(ImpactReview, { assetId }, { order: { createdAt: 'DESC' }, relations: { asset: true } });
@@ -88,14 +90,14 @@ export class ImpactService {
     });
   }
 
-  list(actor: Actor, state?: 'open' | 'closed') {
+  list(actor: Actor, state?: 'open' | 'closed'): Promise<Page<ImpactReviewView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const reviews = await tx.find(ImpactReview, { where: state ? { state } : {}, order: { createdAt: 'DESC' }, relations: { asset: true }, take: 200 });
       return listReply(await Promise.all(reviews.map((r) => this.view(tx, r))));
     });
   }
 
-  assess(actor: Actor, reviewId: string, bookingId: string, assessment: ImpactAssessment, note?: string) {
+  assess(actor: Actor, reviewId: string, bookingId: string, assessment: ImpactAssessment, note?: string): Promise<ImpactReviewView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
       if (review.state === 'closed') throw ruleBroken('review_closed', 'This review is closed.');
@@ -107,7 +109,7 @@ export class ImpactService {
     });
   }
 
-  close(actor: Actor, reviewId: string) {
+  close(actor: Actor, reviewId: string): Promise<ImpactReviewView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
       const [{ n }] = await tx.sql<{ n: number }>(`SELECT count(*)::int AS n FROM impact_review_items WHERE organization_id = $1 AND review_id = $2 AND assessment IS NULL`, [reviewId]);
@@ -121,11 +123,11 @@ export class ImpactService {
   }
 
   /** One notice per customer with an e-mail address; `send` queues them in the outbox. */
-  notices(actor: Actor, reviewId: string, send: boolean) {
+  notices(actor: Actor, reviewId: string, send: boolean): Promise<ImpactNoticesView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
       const { bookings } = await this.view(tx, review);
-      const byCustomer = new Map<string, ReviewRow[]>();
+      const byCustomer = new Map<string, ImpactReviewView['bookings']>();
       for (const b of bookings) if (b.contactEmail) byCustomer.set(b.contactEmail, [...(byCustomer.get(b.contactEmail) ?? []), b]);
       const drafts = [...byCustomer.entries()].map(([to, rows]) => ({
         to,

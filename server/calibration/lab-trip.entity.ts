@@ -1,8 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { OrgOwned } from '../db/org-owned';
+import type { LabTripState } from '../../shared/calibration/views';
 import { AssetBound } from '../fleet';
-
-export type LabTripState = 'planned' | 'at_lab' | 'back';
 
 /** Items sent together to a calibration provider. */
 @Entity({ name: 'lab_trips' })

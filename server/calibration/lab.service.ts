@@ -2,6 +2,8 @@ import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { bookingDays } from '../../shared/bookings/rules';
 import { addDays } from '../../shared/calibration/due-date';
+import type { LabTripView, LabWindowsView } from '../../shared/calibration/views';
+import type { Page } from '../../shared/lists/page';
 import type { labTripPayload } from '../../shared/schemas/calibration';
 import { recordAudit } from '../audit/audit.service';
 import { book, busyDays, checkOut } from '../bookings';
@@ -26,7 +28,7 @@ export class LabService {
    * Gaps between the item's active bookings long enough for its provider's
    * turnaround, earliest first, and the bookings that sending it today would break.
    */
-  windows(actor: Actor, assetId: string) {
+  windows(actor: Actor, assetId: string): Promise<LabWindowsView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const asset = await getAsset(tx, assetId);
@@ -48,7 +50,7 @@ export class LabService {
   }
 
   /** Plan a trip: a lab booking holds the window on the board (booked like any other, so overlap is a 409), the trip waits to be sent. */
-  plan(actor: Actor, input: z.infer<typeof labTripPayload>) {
+  plan(actor: Actor, input: z.infer<typeof labTripPayload>): Promise<LabTripView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const assets = await this.assets(tx, input.assetIds);
@@ -62,7 +64,7 @@ export class LabService {
   }
 
   /** The items leave for the lab: status at_lab, a custody event each. */
-  send(actor: Actor, tripId: string) {
+  send(actor: Actor, tripId: string): Promise<LabTripView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const trip = await tx.get(LabTrip, { id: tripId }, 'That lab trip');
       if (trip.state !== 'planned') throw ruleBroken('lab_trip_state', `This trip is already ${trip.state === 'at_lab' ? 'at the lab' : 'back'}.`);
@@ -77,7 +79,7 @@ export class LabService {
     });
   }
 
-  list(actor: Actor, state?: string) {
+  list(actor: Actor, state?: string): Promise<Page<LabTripView>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const trips = await tx.find(LabTrip, { where: state ? { state: state as LabTrip['state'] } : {}, order: { sentOn: 'DESC' }, take: 200 });
       return listReply(await Promise.all(trips.map((t) => this.view(tx, t))));
@@ -91,8 +93,8 @@ export class LabService {
     return assets;
   }
 
-  private async view(tx: Scoped, trip: LabTrip) {
-    const items = await tx.sql<{ assetId: string; assetTag: string; type: string; receivedOn: string | null; calibrationEventId: string | null }>(
+  private async view(tx: Scoped, trip: LabTrip): Promise<LabTripView> {
+    const items = await tx.sql<LabTripView['items'][number]>(
       `SELECT i.asset_id AS "assetId", a.asset_tag AS "assetTag", a.type, to_char(i.received_on, 'YYYY-MM-DD') AS "receivedOn", i.calibration_event_id AS "calibrationEventId"
          FROM lab_trip_items i JOIN assets a ON a.id = i.asset_id WHERE i.organization_id = $1 AND i.lab_trip_id = $2 ORDER BY a.asset_tag`,
       [trip.id],

@@ -1,10 +1,8 @@
 import type { DataSource } from 'typeorm';
 import { addDays } from '../../shared/calibration/due-date';
-import type { DueRow } from '../../shared/calibration/review-types';
+import type { CalibrationReviewView, DueRow } from '../../shared/calibration/views';
 import { readInOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from '../organizations/org-context';
-
-export type { DueRow };
 
 /**
  * Items overdue or due within `withinDays`, most urgent first, each with the
@@ -55,7 +53,7 @@ export class ReviewService {
     });
   }
 
-  review(actor: Actor) {
+  review(actor: Actor): Promise<CalibrationReviewView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const [items, [counts], timeline, atLab, reviews] = await Promise.all([

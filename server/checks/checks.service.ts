@@ -7,6 +7,8 @@ import { twoFaceErrorUm } from '../../shared/checks/two-face';
 import { expandedUncertainty } from '../../shared/checks/uncertainty';
 import { assetTypeTitles, type AssetType, type TipPosition } from '../../shared/schemas/assets';
 import { checkKindTitles, checkSubjectType, type CheckPayload } from '../../shared/schemas/checks';
+import type { CheckToDo, CheckView, TipValidationStatus } from '../../shared/checks/views';
+import type { Page } from '../../shared/lists/page';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
@@ -59,7 +61,8 @@ async function compute(tx: Scoped, input: CheckPayload, subject: AssetRecord) {
   }
 }
 
-export const checkView = (c: FieldCheck) => ({
+// `kind`, `position`, `inputs` and `result` were stored together by `record`, computed for that kind.
+export const checkView = (c: FieldCheck): CheckView => ({
   id: c.id,
   kind: c.kind,
   assetId: c.assetId,
@@ -70,7 +73,7 @@ export const checkView = (c: FieldCheck) => ({
   performedAt: c.performedAt.toISOString(),
   performedBy: c.performedBy,
   note: c.note,
-});
+}) as CheckView;
 
 export class ChecksService {
   constructor(private readonly db: DataSource) {}
@@ -119,7 +122,7 @@ export class ChecksService {
     });
   }
 
-  list(actor: Actor, query: { assetId?: string; kind?: CheckPayload['kind']; limit: number; offset: number }) {
+  list(actor: Actor, query: { assetId?: string; kind?: CheckPayload['kind']; limit: number; offset: number }): Promise<Page<CheckView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const [rows, total] = await tx.findAndCount(FieldCheck, {
         where: { ...(query.assetId ? { assetId: query.assetId } : {}), ...(query.kind ? { kind: query.kind } : {}) },
@@ -136,7 +139,7 @@ export class ChecksService {
    * they carry now or take next (taken by them, or on jobs they lead) without a
    * passing latest validation — what the booking rules would refuse.
    */
-  toDo(actor: Actor) {
+  toDo(actor: Actor): Promise<Page<CheckToDo>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const { today } = await loadOrgContext(tx);
       return listReply(
@@ -170,10 +173,7 @@ export class ChecksService {
   }
 }
 
-/** A tip position in kit a technician carries now or next whose latest validation did not pass (or is missing). */
-export type CheckToDo = { assetId: string; assetTag: string; position: string; lastDecision: string | null; lastCheckedAt: string | null; bookingId: string; startsOn: string; bookingState: string };
-
-export async function tipValidationStatus(tx: Scoped, tip: AssetRecord) {
+export async function tipValidationStatus(tx: Scoped, tip: AssetRecord): Promise<TipValidationStatus> {
   const positions = (tip.specs.positions as TipPosition[] | undefined) ?? [];
   const latest = await tx.sql<{ position: string; decision: string; performedAt: Date; id: string }>(
     `SELECT DISTINCT ON (position) position, decision, performed_at AS "performedAt", id FROM field_checks
@@ -183,7 +183,7 @@ export async function tipValidationStatus(tx: Scoped, tip: AssetRecord) {
   return {
     positions: positions.map((position) => {
       const last = latest.find((l) => l.position === position);
-      return { position, state: !last ? 'not_validated' : last.decision === 'pass' ? 'validated' : 'failed', lastCheckId: last?.id ?? null, lastPerformedAt: last?.performedAt ?? null };
+      return { position, state: !last ? 'not_validated' : last.decision === 'pass' ? 'validated' : 'failed', lastCheckId: last?.id ?? null, lastPerformedAt: last?.performedAt.toISOString() ?? null };
     }),
   };
 }

@@ -1,4 +1,5 @@
-import { assetTypeTitles, type AssetView } from '../../shared/schemas/assets';
+import type { AssetView } from '../../shared/assets/views';
+import { assetTypeTitles } from '../../shared/schemas/assets';
 import { drawQr, INK, MM, MUTED, renderPdf, type Pdf } from './pdf';
 
 /** Label size: 70 × 36 mm, a common roll-label format. */

@@ -1,7 +1,8 @@
 import Papa from 'papaparse';
 import { z } from 'zod';
+import type { AssetView, ImportProblem } from '../../shared/assets/views';
 import { restoreNeutralisedCell } from '../../shared/csv/formula-guard';
-import { assetTypes, createAssetPayload, specsByType, type AssetView, type CreateAssetPayload } from '../../shared/schemas/assets';
+import { assetTypes, createAssetPayload, specsByType, type CreateAssetPayload } from '../../shared/schemas/assets';
 import { toCsv } from '../documents/csv';
 
 /**
@@ -47,7 +48,6 @@ export const importColumns = [
 const exportOnlyColumns = ['status', 'dueOn', 'calibrationState'] as const;
 const requiredColumns = ['type', 'assetTag', 'serialNumber'];
 
-export type ImportError = { row: number; column: string; message: string };
 export type ImportRow = { row: number; kit: string | null; payload: CreateAssetPayload };
 
 export function assetsToCsv(assets: AssetView[]): string {
@@ -95,10 +95,10 @@ const yes = new Set(['yes', 'true', '1', 'y']);
 const no = new Set(['no', 'false', '0', 'n']);
 
 /** Parse and check every row; nothing here touches the database. */
-export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: ImportError[]; rowCount: number } {
+export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: ImportProblem[]; rowCount: number } {
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy' });
   // A row that stops early just leaves its last cells empty; anything else is a broken file.
-  const errors: ImportError[] = parsed.errors
+  const errors: ImportProblem[] = parsed.errors
     .filter((e) => e.code !== 'TooFewFields')
     .map((e) => ({ row: (e.row ?? -1) + 1, column: '', message: `The file is not valid CSV here: ${e.message}` }));
   const header = parsed.meta.fields ?? [];
@@ -114,7 +114,7 @@ export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: Import
       const v = restoreNeutralisedCell((raw[c] ?? '').trim());
       return v === '' ? undefined : v;
     };
-    const rowErrors: ImportError[] = [];
+    const rowErrors: ImportProblem[] = [];
     const number = (c: string) => {
       const v = cell(c);
       if (v === undefined) return undefined;

@@ -1,4 +1,5 @@
 import { In, type DataSource } from 'typeorm';
+import type { AssetImportResult, ImportProblem } from '../../shared/assets/views';
 import { dueOnForPlan } from '../../shared/calibration/due-date';
 import { specsByType } from '../../shared/schemas/assets';
 import { AuditEvent } from '../audit/audit-event.entity';
@@ -7,7 +8,7 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { Asset } from './asset.entity';
-import { parseAssetCsv, type ImportError } from './asset-csv';
+import { parseAssetCsv } from './asset-csv';
 import { noteCustody } from './custody';
 import { Kit } from './kit.entity';
 
@@ -18,11 +19,11 @@ const MAX_ERRORS_SHOWN = 500;
  * `commit` writes all rows in one transaction, or nothing at all when any
  * row is wrong.
  */
-export async function importAssetsCsv(db: DataSource, actor: Actor, text: string, mode: 'preview' | 'commit') {
+export async function importAssetsCsv(db: DataSource, actor: Actor, text: string, mode: 'preview' | 'commit'): Promise<AssetImportResult> {
   const { rows, errors, rowCount } = parseAssetCsv(text);
   return inOrganization(db, actor.organizationId, async (tx) => {
     const ctx = await loadOrgContext(tx);
-    const clashes: ImportError[] = [];
+    const clashes: ImportProblem[] = [];
     const firstRowWith = new Map<string, number>();
     for (const { row, payload } of rows) {
       for (const [column, value] of [['assetTag', payload.assetTag], ['rfidTag', payload.rfidTag]] as const) {

@@ -1,5 +1,5 @@
 import { calibrationState } from '../../shared/calibration/due-date';
-import type { AssetView } from '../../shared/schemas/assets';
+import type { AssetView } from '../../shared/assets/views';
 import type { OrgContext } from '../organizations/org-context';
 import type { Asset } from './asset.entity';
 

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import type { AssetHistoryEntry, AssetView } from '../../shared/assets/views';
 import { dueOnForPlan } from '../../shared/calibration/due-date';
 import {
   specsByType,
@@ -11,6 +12,7 @@ import {
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
+import { isRecordId } from '../http/endpoint';
 import { AppError, conflict, ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations/org-context';
 import { Asset } from './asset.entity';
@@ -18,8 +20,8 @@ import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
 import { moveAssets, noteCustody, statusWords } from './custody';
 import { listReply } from '../http/list-reply';
+import type { Page } from '../../shared/lists/page';
 
-const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
 const isUniqueViolation = (err: unknown) => (err as { code?: string })?.code === '23505';
 
 /** Fields the person edits directly (the rest are derived or belong to other flows). */
@@ -31,7 +33,7 @@ export class AssetsService {
     private readonly publicUrl: string,
   ) {}
 
-  list(actor: Actor, query: AssetListQuery) {
+  list(actor: Actor, query: AssetListQuery): Promise<Page<AssetView>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const { assets, total } = await findAssets(tx, ctx, query, query);
@@ -51,7 +53,8 @@ export class AssetsService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const trimmed = code.trim();
-      const id = trimmed.match(UUID)?.[0];
+      const tail = trimmed.slice(-36);
+      const id = isRecordId(tail) ? tail : undefined;
       const qb = tx.select(Asset, 'a').leftJoinAndSelect('a.kit', 'k');
       const asset = id
         ? await qb.andWhere('a.id = :id', { id }).getOne()
@@ -144,10 +147,10 @@ export class AssetsService {
   }
 
   /** Audit trail and chain of custody together, newest first. */
-  history(actor: Actor, id: string) {
+  history(actor: Actor, id: string): Promise<Page<AssetHistoryEntry>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await tx.get(Asset, { id }, 'That asset');
-      const rows = await tx.sql<{ at: Date; source: string; action: string; actorName: string | null; details: Record<string, unknown> }>(
+      const rows = await tx.sql<{ at: Date; source: AssetHistoryEntry['source']; action: string; actorName: string | null; details: Record<string, unknown> }>(
         `SELECT e.at, 'audit' AS source, e.action, u.name AS "actorName", e.details
            FROM audit_events e LEFT JOIN users u ON u.id = e.actor_user_id
           WHERE e.organization_id = $1 AND e.subject_type = 'asset' AND e.subject_id = $2
@@ -158,7 +161,7 @@ export class AssetsService {
          ORDER BY at DESC LIMIT 500`,
         [id],
       );
-      return listReply(rows.map((r) => ({ ...r, summary: describeHistory(r.action, r.details) })));
+      return listReply(rows.map((r) => ({ ...r, at: r.at.toISOString(), summary: describeHistory(r.action, r.details) })));
     });
   }
 

@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import type { AssetView, EquipmentRecordView, ShippingSheetView } from '../../shared/assets/views';
 import { shippingSheet } from '../../shared/batteries/shipping-class';
 import type { AssetListQuery } from '../../shared/schemas/assets';
 import { inOrganization, type Actor } from '../db/transaction';
@@ -22,7 +23,7 @@ export class FleetDocumentsService {
     private readonly publicUrl: string,
   ) {}
 
-  private withAsset<T>(actor: Actor, id: string, work: (view: ReturnType<typeof toAssetView>, firm: string) => Promise<T> | T) {
+  private withAsset<T>(actor: Actor, id: string, work: (view: AssetView, firm: string) => Promise<T> | T) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const asset = await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } });
@@ -34,7 +35,7 @@ export class FleetDocumentsService {
     return this.withAsset(actor, id, (view, firm) => assetLabelPdf(view, firm));
   }
 
-  record(actor: Actor, id: string) {
+  record(actor: Actor, id: string): Promise<EquipmentRecordView> {
     return this.withAsset(actor, id, (asset, firm) => ({ asset, organization: { name: firm }, items: equipmentRecordItems(asset), generatedAt: new Date().toISOString() }));
   }
 
@@ -50,7 +51,7 @@ export class FleetDocumentsService {
     });
   }
 
-  private withKit<T>(actor: Actor, id: string, work: (kit: Kit, members: ReturnType<typeof toAssetView>[], firm: string) => Promise<T> | T) {
+  private withKit<T>(actor: Actor, id: string, work: (kit: Kit, members: AssetView[], firm: string) => Promise<T> | T) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const kit = await tx.get(Kit, { id }, 'That kit');
@@ -63,7 +64,7 @@ export class FleetDocumentsService {
     return this.withKit(actor, id, (kit, members, firm) => kitLabelSheetPdf(kit.name, members, firm));
   }
 
-  shippingSheet(actor: Actor, id: string) {
+  shippingSheet(actor: Actor, id: string): Promise<ShippingSheetView> {
     return this.withKit(actor, id, (kit, members) => ({ kit: { id: kit.id, name: kit.name }, ...batterySheet(members) }));
   }
 
@@ -72,7 +73,7 @@ export class FleetDocumentsService {
   }
 }
 
-function batterySheet(members: ReturnType<typeof toAssetView>[]) {
+function batterySheet(members: AssetView[]) {
   const batteries = members.filter((m) => m.type === 'battery');
   const sheet = shippingSheet(
     batteries.map((b) => ({

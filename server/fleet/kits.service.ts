@@ -1,6 +1,7 @@
 import { In, Not, type DataSource } from 'typeorm';
 import { calibrationState } from '../../shared/calibration/due-date';
-import type { KitReadiness, KitView } from '../../shared/schemas/assets';
+import type { KitReadiness, KitView, KitWithMembersView } from '../../shared/assets/views';
+import type { Page } from '../../shared/lists/page';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
@@ -30,25 +31,24 @@ export class KitsService {
     private readonly publicUrl: string,
   ) {}
 
-  private view(kit: Kit, members: Asset[], ctx: OrgContext, withMembers: boolean): KitView {
+  private view(kit: Kit, members: Asset[], ctx: OrgContext): KitView {
     return {
       id: kit.id,
       name: kit.name,
       notes: kit.notes,
       memberCount: members.length,
       readiness: kitReadiness(members, ctx),
-      ...(withMembers ? { members: members.map((m) => toAssetView(Object.assign(m, { kit }), ctx, this.publicUrl)) } : {}),
       createdAt: kit.createdAt.toISOString(),
       updatedAt: kit.updatedAt.toISOString(),
     };
   }
 
-  list(actor: Actor, paging: { limit: number; offset: number }) {
+  list(actor: Actor, paging: { limit: number; offset: number }): Promise<Page<KitView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const [kits, total] = await tx.findAndCount(Kit, { order: { name: 'ASC' }, take: paging.limit, skip: paging.offset });
       const members = kits.length ? await tx.find(Asset, { where: { kitId: In(kits.map((k) => k.id)) } }) : [];
-      return { items: kits.map((k) => this.view(k, members.filter((m) => m.kitId === k.id), ctx, false)), total };
+      return { items: kits.map((k) => this.view(k, members.filter((m) => m.kitId === k.id), ctx)), total };
     });
   }
 
@@ -56,10 +56,11 @@ export class KitsService {
     return inOrganization(this.db, actor.organizationId, (tx) => this.load(tx, id));
   }
 
-  private async load(tx: Scoped, id: string, ctx?: OrgContext) {
+  private async load(tx: Scoped, id: string, ctx?: OrgContext): Promise<KitWithMembersView> {
     const kit = await tx.get(Kit, { id }, 'That kit');
     const members = await tx.find(Asset, { where: { kitId: id }, order: { type: 'ASC', assetTag: 'ASC' } });
-    return this.view(kit, members, ctx ?? (await loadOrgContext(tx)), true);
+    const context = ctx ?? (await loadOrgContext(tx));
+    return { ...this.view(kit, members, context), members: members.map((m) => toAssetView(Object.assign(m, { kit }), context, this.publicUrl)) };
   }
 
   create(actor: Actor, input: { name: string; notes?: string | null; memberIds?: string[] }) {

@@ -1,7 +1,6 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import type { HoldReason, HoldReleaseEvidence } from '../../shared/holds/views';
 import { AssetBound } from '../fleet';
-
-export type HoldReason = 'incident' | 'failed_check' | 'manual';
 
 /** An asset taken out of service (ISO/IEC 17025:2017 §6.4.9). It ends only by a
  * release on evidence recorded after it began. */
@@ -37,5 +36,5 @@ export class Hold extends AssetBound {
 
   /** What the release rested on: the passing checks or calibration that cleared it. */
   @Column({ name: 'release_evidence', type: 'jsonb', nullable: true })
-  releaseEvidence: Record<string, unknown> | null;
+  releaseEvidence: HoldReleaseEvidence | null;
 }

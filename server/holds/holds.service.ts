@@ -1,4 +1,6 @@
 import { IsNull, type DataSource } from 'typeorm';
+import type { HoldReason, HoldView } from '../../shared/holds/views';
+import type { Page } from '../../shared/lists/page';
 import { assetTypeTitles, type TipPosition } from '../../shared/schemas/assets';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
@@ -7,7 +9,7 @@ import { ruleBroken } from '../http/errors';
 import { calendarDayIn } from '../../shared/calibration/due-date';
 import { getAsset, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
 import { loadOrgContext } from '../organizations/org-context';
-import { Hold, type HoldReason } from './hold.entity';
+import { Hold } from './hold.entity';
 import { listReply } from '../http/list-reply';
 
 /** Take an asset out of service inside the caller's transaction. A second
@@ -63,7 +65,7 @@ export class HoldsService {
     });
   }
 
-  current(actor: Actor, assetId: string) {
+  current(actor: Actor, assetId: string): Promise<Page<HoldView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await getAsset(tx, assetId);
       const holds = await tx.find(Hold, { where: { assetId }, order: { startedAt: 'DESC' }, take: 20 });
@@ -120,7 +122,7 @@ export class HoldsService {
     return { evidence: [], missing: [`a ${assetTypeTitles[asset.type].toLowerCase()} needs a calibration recorded after the hold began`] };
   }
 
-  private view(h: Hold) {
+  private view(h: Hold): HoldView {
     return {
       id: h.id,
       assetId: h.assetId,

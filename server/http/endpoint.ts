@@ -69,10 +69,13 @@ export function endpoint<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
+/** Record ids are UUIDs (the one test of it; path ids, and ids inside a value, use it). */
+export const isRecordId = (value: string) => UUID.test(value);
+
 /** Record ids are UUIDs; anything else cannot name a record, so it is a 404 (not a database error). */
 function assertIdParams(params: Record<string, string>) {
   for (const [name, value] of Object.entries(params)) {
-    if ((name === 'id' || name.endsWith('Id')) && !UUID.test(value)) throw notFound('That record');
+    if ((name === 'id' || name.endsWith('Id')) && !isRecordId(value)) throw notFound('That record');
   }
 }
 

@@ -5,6 +5,7 @@ import { incidentListQuery, incidentPayload, incidentUpdatePayload, MAX_INCIDENT
 import { endpoint } from '../http/endpoint';
 import { AppError } from '../http/errors';
 import { parse } from '../http/parse';
+import { receiveFiles } from '../http/uploads';
 import type { IncidentsService } from './incidents.service';
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: MAX_INCIDENT_PHOTOS, fields: 20 } });
@@ -13,12 +14,11 @@ const photoQuery = z.object({ size: z.enum(['full', 'thumbnail']).default('full'
 export function incidentsRoutes(incidents: IncidentsService): Router {
   const router = Router();
   const at = '/api/incidents';
-  router.post('/', (req, res, next) =>
-    upload.array('photos', MAX_INCIDENT_PHOTOS)(req, res, (err: unknown) => {
-      const code = (err as { code?: string })?.code;
-      if (code === 'LIMIT_FILE_COUNT' || code === 'LIMIT_UNEXPECTED_FILE') return next(new AppError(413, 'too_large', `Attach at most ${MAX_INCIDENT_PHOTOS} photos, in the "photos" field.`));
-      if (code === 'LIMIT_FILE_SIZE') return next(new AppError(413, 'too_large', `Each photo may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`));
-      next(err);
+  router.post(
+    '/',
+    receiveFiles(upload.array('photos', MAX_INCIDENT_PHOTOS), {
+      tooLarge: `Each photo may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`,
+      wrongFiles: new AppError(413, 'too_large', `Attach at most ${MAX_INCIDENT_PHOTOS} photos, in the "photos" field.`),
     }),
   );
   endpoint(router, at, { method: 'post', path: '/', summary: 'Report damage or loss (multipart, photos[]); the item is held at once', access: 'incidents.report', status: 201 }, ({ actor, req }) => {

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { incidentKindTitles, type IncidentKind, type incidentListQuery, type incidentPayload, type IncidentState, type incidentUpdatePayload } from '../../shared/schemas/incidents';
+import type { IncidentView } from '../../shared/incidents/views';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
@@ -18,7 +19,7 @@ const batteryDamageKinds = new Set(['dropped', 'impact', 'malfunction']);
 
 type PhotoRow = Pick<IncidentPhoto, 'id' | 'contentType' | 'fileName' | 'sizeBytes'> & { hasThumbnail: boolean };
 
-const view = (i: Incident, photos: PhotoRow[], asset?: AssetRecord) => ({
+const view = (i: Incident, photos: PhotoRow[], asset?: AssetRecord): IncidentView => ({
   id: i.id,
   assetId: i.assetId,
   asset: asset ? { id: asset.id, assetTag: asset.assetTag, type: asset.type, status: asset.status } : undefined,

@@ -1,6 +1,5 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-
-export type JobRunStatus = 'running' | 'succeeded' | 'failed';
+import type { JobRunStatus } from '../../shared/jobs/views';
 
 /** One execution of a scheduled job, on whichever instance won the fire. */
 @Entity({ name: 'job_runs' })

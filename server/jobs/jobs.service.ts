@@ -2,19 +2,20 @@ import { hostname } from 'node:os';
 import { randomUUID } from 'node:crypto';
 import cron, { type ScheduledTask } from 'node-cron';
 import type { DataSource } from 'typeorm';
+import type { JobRunView, ScheduledJobsView } from '../../shared/jobs/views';
 import { notFound } from '../http/errors';
 import type { JobDefinition } from './job';
 import { JobRun } from './job-run.entity';
 import { pgRunCoordinator } from './pg-run-coordinator';
 
 /** A run as a firm's owner sees it. In the run log a scheduled run's summary counts every firm's work, so it stays out of view. */
-const publicRun = (r: JobRun, showSummary = r.organizationId !== null) => ({
+const publicRun = (r: JobRun, showSummary = r.organizationId !== null): JobRunView => ({
   id: r.id,
   trigger: r.trigger,
   scope: r.organizationId ? ('your firm' as const) : ('every firm' as const),
-  scheduledFor: r.scheduledFor,
-  startedAt: r.startedAt,
-  finishedAt: r.finishedAt,
+  scheduledFor: r.scheduledFor?.toISOString() ?? null,
+  startedAt: r.startedAt.toISOString(),
+  finishedAt: r.finishedAt?.toISOString() ?? null,
   status: r.status,
   summary: showSummary ? r.summary : null,
   error: r.error,
@@ -53,7 +54,7 @@ export class JobsService {
   }
 
   /** Each job's last run that this firm may see: scheduled runs, and its own manual ones. */
-  async list(organizationId: string) {
+  async list(organizationId: string): Promise<ScheduledJobsView> {
     const last: JobRun[] = await this.db
       .getRepository(JobRun)
       .createQueryBuilder('r')

@@ -1,10 +1,12 @@
 import type { DataSource } from 'typeorm';
+import type { Page } from '../../shared/lists/page';
+import type { MailMessageView } from '../../shared/notifications/views';
 import { inOrganization, type Actor } from '../db/transaction';
 
-type MailboxRow = { id: string; messageId: string; from: string; to: string[]; subject: string; text: string; html: string | null; attachments: { fileName: string; contentType: string; sizeBytes: number }[]; receivedAt: Date };
+type MailboxRow = Omit<MailMessageView, 'receivedAt'> & { receivedAt: Date };
 
 /** What the local SMTP sink received, limited to mail this organization sent. */
-export function listMailbox(db: DataSource, actor: Actor, paging: { limit: number; offset: number }) {
+export function listMailbox(db: DataSource, actor: Actor, paging: { limit: number; offset: number }): Promise<Page<MailMessageView>> {
   return inOrganization(db, actor.organizationId, async (tx) => {
     const items = await tx.sql<MailboxRow>(
       `SELECT s.id, s.message_id AS "messageId", s.envelope_from AS "from", s.recipients AS "to", s.subject,
@@ -17,6 +19,6 @@ export function listMailbox(db: DataSource, actor: Actor, paging: { limit: numbe
     const [{ total }] = await tx.sql<{ total: number }>(
       `SELECT count(*)::int AS total FROM mail_sink_messages s JOIN outbox_messages o ON o.message_id = s.message_id WHERE o.organization_id = $1`,
     );
-    return { items, total };
+    return { items: items.map((m) => ({ ...m, receivedAt: m.receivedAt.toISOString() })), total };
   });
 }

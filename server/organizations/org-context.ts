@@ -2,9 +2,10 @@ import { DEFAULT_DUE_SOON_DAYS, todayIn } from '../../shared/calibration/due-dat
 import { defaultIntervalPolicy, type IntervalPolicy } from '../../shared/calibration/interval-review';
 import type { DecisionRule } from '../../shared/checks/decision';
 import type { Tolerance } from '../../shared/checks/tolerance';
+import type { CalibrationProvider, DepositPolicy, InvoiceIssuer } from '../../shared/organizations/views';
 import { defaultTolerances, type CheckKind } from '../../shared/schemas/checks';
 import type { Scoped } from '../db/scoped';
-import type { InvoiceIssuer, Organization } from './organization.entity';
+import type { Organization } from './organization.entity';
 
 /** The organization facts most rules need: its calendar "today", due-soon window, currency. */
 export type OrgContext = {
@@ -16,10 +17,10 @@ export type OrgContext = {
   today: string;
   decisionRule: DecisionRule;
   tolerances: Record<CheckKind, Tolerance>;
-  providers: { name: string; turnaroundDays: number }[];
+  providers: CalibrationProvider[];
   intervalPolicy: IntervalPolicy;
   taxRateBasisPoints: number;
-  depositPolicy: { percent: number; minMinor: number; maxMinor: number };
+  depositPolicy: DepositPolicy;
   issuer: InvoiceIssuer;
 };
 

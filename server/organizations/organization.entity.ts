@@ -3,6 +3,7 @@ import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeor
 import type { IntervalPolicy } from '../../shared/calibration/interval-review';
 import type { DecisionRule } from '../../shared/checks/decision';
 import type { Tolerance } from '../../shared/checks/tolerance';
+import type { CalibrationProvider, DepositPolicy, InvoiceIssuer } from '../../shared/organizations/views';
 import type { CheckKind } from '../../shared/schemas/checks';
 
 export type OrganizationSettings = {
@@ -11,16 +12,14 @@ export type OrganizationSettings = {
   /** Default tolerance per check kind; an asset may override it. */
   tolerances: Partial<Record<CheckKind, Tolerance>>;
   /** Calibration providers and their usual turnaround in days. */
-  providers: { name: string; turnaroundDays: number }[];
+  providers: CalibrationProvider[];
   intervalPolicy: IntervalPolicy;
   /** Tax on rentals in basis points (1 900 = 19 %). */
   taxRateBasisPoints: number;
-  depositPolicy: { percent: number; minMinor: number; maxMinor: number };
+  depositPolicy: DepositPolicy;
   /** The firm as it must appear on its invoices: address, tax number, how to pay. */
   issuer: InvoiceIssuer;
 };
-
-export type InvoiceIssuer = { address: string; taxNumber: string; paymentTerms: string };
 
 @Entity({ name: 'organizations' })
 export class Organization {

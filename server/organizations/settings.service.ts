@@ -1,12 +1,13 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
+import type { OrganizationSettingsView } from '../../shared/organizations/views';
 import type { organizationSettingsPayload } from '../../shared/schemas/assets';
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from './org-context';
 import { Organization } from './organization.entity';
 
-const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>) => ({
+const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>): OrganizationSettingsView => ({
   name: ctx.name,
   timeZone: ctx.timeZone,
   currency: ctx.currency,

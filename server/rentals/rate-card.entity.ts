@@ -1,5 +1,6 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import { OrgOwned } from '../db/org-owned';
+import type { AssetType } from '../../shared/assets/vocabulary';
 
 /** Rental rates for an asset type, or for a whole kit (which then rents as one line). */
 @Entity({ name: 'rate_cards' })
@@ -10,7 +11,7 @@ export class RateCard extends OrgOwned {
   id: string;
 
   @Column({ name: 'asset_type', type: 'text', nullable: true })
-  assetType: string | null;
+  assetType: AssetType | null;
 
   @Column({ name: 'kit_id', type: 'uuid', nullable: true })
   kitId: string | null;

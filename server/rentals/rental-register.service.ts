@@ -1,7 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import type { RentalSummary } from '../../shared/billing/views';
+import type { RentalSummary, RentalView } from '../../shared/billing/views';
+import type { Page } from '../../shared/lists/page';
 import { formatMoney } from '../../shared/billing/money';
 import type { rentalListQuery, rentalPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
@@ -38,11 +39,11 @@ export class RentalRegisterService {
     return this.get(actor, rentalId);
   }
 
-  get(actor: Actor, id: string) {
+  get(actor: Actor, id: string): Promise<RentalView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => loadRentalView(tx, await tx.get(Rental, { id }, 'That rental')));
   }
 
-  list(actor: Actor, q: z.infer<typeof rentalListQuery>) {
+  list(actor: Actor, q: z.infer<typeof rentalListQuery>): Promise<Page<RentalSummary>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const filter = {
         open: `b.state <> 'cancelled' AND inv.number IS NULL`,

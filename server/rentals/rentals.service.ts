@@ -1,5 +1,7 @@
 import { Not, type DataSource } from 'typeorm';
 import type { z } from 'zod';
+import type { CustomerView, Quote, RateCardView } from '../../shared/billing/views';
+import type { Page } from '../../shared/lists/page';
 import type { customerPayload, quoteQuery, rateCardPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
@@ -17,18 +19,18 @@ type RateCardInput = z.infer<typeof rateCardPayload>;
 export class RentalsService {
   constructor(private readonly db: DataSource) {}
 
-  listCustomers(actor: Actor, paging: { limit: number; offset: number }) {
+  listCustomers(actor: Actor, paging: { limit: number; offset: number }): Promise<Page<CustomerView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const [items, total] = await tx.findAndCount(Customer, { order: { company: 'ASC' }, take: paging.limit, skip: paging.offset });
       return { items, total };
     });
   }
 
-  getCustomer(actor: Actor, id: string) {
+  getCustomer(actor: Actor, id: string): Promise<CustomerView> {
     return inOrganization(this.db, actor.organizationId, (tx) => tx.get(Customer, { id }, 'That customer'));
   }
 
-  saveCustomer(actor: Actor, input: CustomerInput, id?: string) {
+  saveCustomer(actor: Actor, input: CustomerInput, id?: string): Promise<CustomerView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       if (await tx.count(Customer, { company: input.company, ...(id ? { id: Not(id) } : {}) })) {
         throw conflict(`${input.company} is already a customer.`, { fields: { company: 'is already a customer' } });
@@ -40,11 +42,11 @@ export class RentalsService {
     });
   }
 
-  listRateCards(actor: Actor) {
+  listRateCards(actor: Actor): Promise<Page<RateCardView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => listReply(await tx.find(RateCard, { order: { assetType: 'ASC' } })));
   }
 
-  saveRateCard(actor: Actor, input: RateCardInput, id?: string) {
+  saveRateCard(actor: Actor, input: RateCardInput, id?: string): Promise<RateCardView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       if (input.kitId) await getKit(tx, input.kitId);
       const subject = input.kitId ? { kitId: input.kitId } : { assetType: input.assetType! };
@@ -57,7 +59,7 @@ export class RentalsService {
     });
   }
 
-  quote(actor: Actor, q: z.infer<typeof quoteQuery>) {
+  quote(actor: Actor, q: z.infer<typeof quoteQuery>): Promise<Quote> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       if (q.customerId) await tx.get(Customer, { id: q.customerId }, 'That customer');
       return priceRental(tx, q);

@@ -65,7 +65,7 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
   });
   const customers: Customer[] = [];
   for (const r of renters) customers.push(await tx.insert(Customer, { ...r, notes: null, paymentCustomerId: null }));
-  for (const [type, [d, w, m, late]] of Object.entries(rates)) await tx.insert(RateCard, { assetType: type, kitId: null, dayMinor: d, weekMinor: w, monthMinor: m, lateFeePerDayMinor: late });
+  for (const [type, [d, w, m, late]] of Object.entries(rates)) await tx.insert(RateCard, { assetType: type as AssetType, kitId: null, dayMinor: d, weekMinor: w, monthMinor: m, lateFeePerDayMinor: late });
   const { assets, kits } = await fleetSnapshot(tx);
   for (const name of ['Kit Birch', 'Kit Cedar']) await tx.insert(RateCard, { assetType: null, kitId: kits.find((k) => k.name === name)!.id, dayMinor: 75_000, weekMinor: 360_000, monthMinor: 1_150_000, lateFeePerDayMinor: 15_000 });
 

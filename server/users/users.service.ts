@@ -2,7 +2,9 @@ import bcrypt from 'bcrypt';
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { passwordWeakness } from '../../shared/auth/password-strength';
+import type { Page } from '../../shared/lists/page';
 import type { createUserPayload, updateUserPayload } from '../../shared/schemas/users';
+import type { UserView } from '../../shared/users/views';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
@@ -10,16 +12,14 @@ import { AppError, conflict, ruleBroken } from '../http/errors';
 import { Organization } from '../organizations/organization.entity';
 import { User } from './user.entity';
 
-export type PublicUser = Pick<User, 'id' | 'email' | 'name' | 'role' | 'organizationId' | 'disabled' | 'createdAt'>;
-
-export const publicUser = (u: User): PublicUser => ({
+export const publicUser = (u: User): UserView => ({
   id: u.id,
   email: u.email,
   name: u.name,
   role: u.role,
   organizationId: u.organizationId,
   disabled: u.disabled,
-  createdAt: u.createdAt,
+  createdAt: u.createdAt.toISOString(),
 });
 
 /** The firm's active owners, row-locked until the transaction ends (in id order, so two callers cannot deadlock). */
@@ -42,7 +42,7 @@ export class UsersService {
     if (weakness) throw new AppError(400, 'invalid_input', 'That password is too easy to guess.', { fields: { [field]: weakness } });
   }
 
-  list(actor: Actor, paging: { limit: number; offset: number }) {
+  list(actor: Actor, paging: { limit: number; offset: number }): Promise<Page<UserView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const [rows, total] = await tx.findAndCount(User, { order: { name: 'ASC' }, take: paging.limit, skip: paging.offset });
       return { items: rows.map(publicUser), total };

@@ -1,8 +1,33 @@
 /**
- * What the billing API answers (rentals, deposits, invoices, reports). Plain
- * types, no zod: the browser imports them as types only.
+ * What the rentals and billing API answers (customers, rate cards, quotes,
+ * rentals, deposits, invoices, reports). Plain types, no zod: the browser
+ * imports them as types only.
  */
+import type { AssetType } from '../assets/vocabulary';
+import type { InvoiceIssuer } from '../organizations/views';
 import type { Periods } from './quote';
+
+/** A firm that rents kit (DESIGN.md §3 "Customer"). */
+export type CustomerView = {
+  id: string;
+  company: string;
+  billingContact: string | null;
+  billingEmail: string;
+  address: string | null;
+  taxNumber: string | null;
+  notes: string | null;
+};
+
+/** Rates for an asset type, or for a whole kit (which then rents as one line). */
+export type RateCardView = {
+  id: string;
+  assetType: AssetType | null;
+  kitId: string | null;
+  dayMinor: number;
+  weekMinor: number;
+  monthMinor: number;
+  lateFeePerDayMinor: number;
+};
 
 export type QuoteLine = {
   description: string;
@@ -114,7 +139,7 @@ export type InvoicePaymentView = { id: string; amountMinor: number; receivedOn: 
 export type InvoiceView = InvoiceSummary & {
   payments: InvoicePaymentView[];
   /** Who issued it: the firm's address, tax number and payment terms on the day of issue (null on invoices from before they were kept). */
-  issuer: { address: string; taxNumber: string; paymentTerms: string } | null;
+  issuer: InvoiceIssuer | null;
   lines: InvoiceLine[];
   taxRateBasisPoints: number;
   customer: { company: string; billingContact: string | null; billingEmail: string; address: string | null; taxNumber: string | null };

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { calibrationStates } from '../calibration/due-date';
 import { checkKinds, tolerancePayload } from './check-kinds';
-import { assetSortFields, assetStatuses, assetTypes, tipPositions, typesWithFirmware, type AssetStatus, type AssetType } from '../assets/vocabulary';
+import { assetSortFields, assetStatuses, assetTypes, tipPositions, typesWithFirmware, type AssetType } from '../assets/vocabulary';
 
 export * from '../assets/vocabulary';
 
@@ -147,50 +147,3 @@ export const organizationSettingsPayload = z
   })
   .partial()
   .strict();
-
-/** An asset as the API returns it. */
-export type AssetView = {
-  id: string;
-  type: AssetType;
-  assetTag: string;
-  serialNumber: string;
-  manufacturer: string | null;
-  model: string | null;
-  firmwareVersion: string | null;
-  rfidTag: string | null;
-  location: string | null;
-  replacementValueMinor: number | null;
-  currency: string;
-  notes: string | null;
-  status: AssetStatus;
-  specs: Record<string, unknown>;
-  kit: { id: string; name: string } | null;
-  calibration: {
-    required: boolean;
-    intervalMonths: number | null;
-    provider: string | null;
-    lastCalibratedOn: string | null;
-    dueOn: string | null;
-    state: import('../calibration/due-date').CalibrationState;
-  };
-  toleranceOverrides: Record<string, unknown> | null;
-  /** What the QR label encodes; `GET /api/assets/lookup?code=` resolves it. */
-  qrPayload: string;
-  retiredAt: string | null;
-  retiredReason: string | null;
-  createdAt: string;
-  updatedAt: string;
-};
-
-export type KitReadiness = { ready: boolean; reasons: { assetId: string; assetTag: string; reason: 'not_ready' | 'calibration_overdue' }[] };
-
-export type KitView = {
-  id: string;
-  name: string;
-  notes: string | null;
-  memberCount: number;
-  readiness: KitReadiness;
-  members?: AssetView[];
-  createdAt: string;
-  updatedAt: string;
-};

@@ -1,29 +1,15 @@
 import { format, parseISO } from 'date-fns';
 import { Link } from 'react-router-dom';
 import { isApiError } from '../lib/api-client';
-import { blockReasonText, type BlockReason } from '../lib/bookings';
+import type { AlternativeItem, BookingRefusalDetails } from '../../shared/bookings/views';
+import { blockReasonText } from '../lib/bookings';
 import { Button } from './button';
 import { AlertIcon } from './icons';
-
-/** A free item of the same type the server offers in place of a refused one. */
-export interface Alternative {
-  id: string;
-  assetTag: string;
-  model: string | null;
-  dueOn: string | null;
-}
-
-/** `details` of 409 `conflict` and 422 `booking_blocked` (POST /bookings, POST /rentals, moving a booking). */
-interface RefusalDetails {
-  conflicts?: { assetId: string; assetTag: string; bookingId: string; startsOn: string; endsOn: string }[];
-  blocked?: { assetId: string; assetTag: string; reason: BlockReason }[];
-  alternatives?: Record<string, Alternative[]>;
-}
 
 /** Why the server refused kit for some dates, per item, with the alternatives it offered. */
 export interface BookingRefusal {
   message: string;
-  items: { assetId: string; why: string; bookingId?: string; alternatives: Alternative[] }[];
+  items: { assetId: string; why: string; bookingId?: string; alternatives: AlternativeItem[] }[];
 }
 
 const day = (date: string) => format(parseISO(date), 'd MMM yyyy');
@@ -32,7 +18,7 @@ const fullRange = (startsOn: string, endsOn: string) => `${day(startsOn)} – ${
 /** The refusal in an API error, or null when the error is something else; `range` words the dates of the booking in the way. */
 export function bookingRefusalFrom(error: unknown, range = fullRange): BookingRefusal | null {
   if (!isApiError(error) || (error.code !== 'conflict' && error.code !== 'booking_blocked')) return null;
-  const details = (error.details ?? {}) as RefusalDetails;
+  const details = (error.details ?? {}) as BookingRefusalDetails;
   const offered = (assetId: string) => details.alternatives?.[assetId] ?? [];
   const blocked = (details.blocked ?? []).map((b) => ({ assetId: b.assetId, why: `${b.assetTag} cannot go: ${blockReasonText[b.reason]}.`, alternatives: offered(b.assetId) }));
   // The server lists every booking that holds an item; one line per item (its first clash) keeps one set of swap buttons.
@@ -43,7 +29,7 @@ export function bookingRefusalFrom(error: unknown, range = fullRange): BookingRe
 }
 
 /** The refusal in words, each refused item with a button per alternative to swap in. */
-export function BookingRefusalPanel({ refusal, onSwap }: { refusal: BookingRefusal; onSwap: (refusedId: string, alternative: Alternative) => void }) {
+export function BookingRefusalPanel({ refusal, onSwap }: { refusal: BookingRefusal; onSwap: (refusedId: string, alternative: AlternativeItem) => void }) {
   return (
     <div role="alert" className="rounded-md border border-bad/50 bg-bad-wash px-3 py-2 text-ink-900">
       <p className="flex items-start gap-2 font-semibold">

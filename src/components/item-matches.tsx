@@ -1,12 +1,12 @@
 import { Button } from './button';
 
-/** Search results that can be added, each with its own "Add" button; `none` says that nothing matched. */
+/** Search results that can be added, each with its own "Add" button (or a `note` saying why not); `none` says that nothing matched. */
 export function ItemMatches({
   items,
   none,
   onAdd,
 }: {
-  items: { id: string; tag: string; detail: string; kitName?: string }[];
+  items: { id: string; tag: string; detail: string; kitName?: string; note?: string }[];
   none: string;
   onAdd: (id: string) => void;
 }) {
@@ -20,9 +20,13 @@ export function ItemMatches({
             {item.detail}
             {item.kitName ? ` · in ${item.kitName}` : ''}
           </span>
-          <Button size="sm" onClick={() => onAdd(item.id)}>
-            Add {item.tag}
-          </Button>
+          {item.note ? (
+            <span className="inline-flex min-h-8 items-center px-2.5 text-sm text-ink-500">{item.note}</span>
+          ) : (
+            <Button size="sm" onClick={() => onAdd(item.id)}>
+              Add {item.tag}
+            </Button>
+          )}
         </li>
       ))}
     </ul>

@@ -16,6 +16,9 @@ export function invalidateAssetStatus(queryClient: QueryClient): Promise<unknown
   );
 }
 
+/** Incidents: taking kit back with an item missing or damaged opens one each. */
+export const incidentsQueryRoot = ['incidents'] as const;
+
 /**
  * The booking board's root: a lab trip reserves its window as a lab booking,
  * and sending or receiving it moves that booking along.

@@ -1,4 +1,4 @@
-/** Asset types, statuses and payload shapes shared with the server (shared/assets/vocabulary.ts; payload types from shared/schemas/assets.ts). */
+/** Asset types and statuses as the server has them (shared/assets/vocabulary.ts). */
 export {
   assetTypes,
   assetTypeTitles,
@@ -7,11 +7,4 @@ export {
   typesWithFirmware,
   assetSortFields,
 } from '../../shared/assets/vocabulary';
-export type {
-  AssetType,
-  AssetStatus,
-  TipPosition,
-  AssetView,
-  KitView,
-  KitReadiness,
-} from '../../shared/schemas/assets';
+export type { AssetType, AssetStatus, TipPosition } from '../../shared/assets/vocabulary';

@@ -1,6 +1,7 @@
 import { format, parseISO, startOfWeek } from 'date-fns';
 import { useCallback, useId, useMemo } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { AssetTypeSelect } from '../../components/asset-type-select';
 import { Button, buttonClasses } from '../../components/button';
 import { ClockIcon, PlusIcon } from '../../components/icons';
 import { LoadingPanel } from '../../components/loading-panel';
@@ -8,15 +9,14 @@ import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { useBookings } from '../../features/bookings/api/get-bookings';
-import type { BookingState } from '../../features/bookings/api/types';
 import { BookingBoard, type BoardTarget } from '../../features/bookings/components/booking-board';
 import { bookFormHref } from '../../features/bookings/components/book-href';
 import { BookingsList } from '../../features/bookings/components/bookings-list';
 import { dayRange } from '../../features/bookings/components/booking-words';
 import { CalendarFeed } from '../../features/bookings/components/calendar-feed';
 import { useAssets } from '../../features/fleet/api/get-assets';
-import { assetTypes, assetTypeTitles, type AssetStatus, type AssetType } from '../../lib/assets';
-import { addDays, todayIn } from '../../lib/bookings';
+import { assetTypes, type AssetStatus, type AssetType } from '../../lib/assets';
+import { addDays, todayIn, type BookingState } from '../../lib/bookings';
 import { can } from '../../lib/roles';
 
 const weekChoices = [2, 4, 8, 12] as const;
@@ -40,7 +40,6 @@ export default function BoardRoute() {
   const type = typeParam && (assetTypes as readonly string[]).includes(typeParam) ? (typeParam as AssetType) : '';
   const listView = params.get('view') === 'list';
   const canBook = can(user.role, 'bookings.write');
-  const typeId = useId();
   const weeksId = useId();
   const jumpId = useId();
 
@@ -131,19 +130,7 @@ export default function BoardRoute() {
             ))}
           </select>
         </div>
-        <div className="flex flex-col gap-1">
-          <label htmlFor={typeId} className="text-sm font-semibold text-ink-800">
-            Show type
-          </label>
-          <select id={typeId} value={type} onChange={(e) => setParam({ type: e.target.value || null })} className="min-h-10 rounded-md border border-paper-line bg-card px-2">
-            <option value="">All types</option>
-            {assetTypes.map((t) => (
-              <option key={t} value={t}>
-                {assetTypeTitles[t]}
-              </option>
-            ))}
-          </select>
-        </div>
+        <AssetTypeSelect label="Show type" anyLabel="All types" value={type} onChange={(t) => setParam({ type: t || null })} />
         <Button className="ml-auto" aria-pressed={listView} variant={listView ? 'primary' : 'secondary'} onClick={() => setParam({ view: listView ? null : 'list' })}>
           List view
         </Button>

@@ -7,7 +7,7 @@ import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { useBooking } from '../../features/bookings/api/get-booking';
-import type { ReturnResult } from '../../features/bookings/api/types';
+import type { ReturnView } from '../../../shared/bookings/views';
 import { bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
 import { HandoverForm, ReturnOutcome, type CounterpartSuggestion } from '../../features/bookings/components/handover-form';
 import { useSiteJob } from '../../features/site-jobs/api/get-site-job';
@@ -21,7 +21,7 @@ export default function BookingHandoverRoute() {
   const navigate = useNavigate();
   const booking = useBooking(id);
   const job = useSiteJob(booking.data?.jobId);
-  const [returned, setReturned] = useState<ReturnResult | null>(null);
+  const [returned, setReturned] = useState<ReturnView | null>(null);
 
   const back = (
     <Link to={`/bookings/${id}`} className="mb-2 inline-flex min-h-9 print:hidden items-center gap-1 text-sm font-semibold text-brass-deep">
@@ -91,7 +91,7 @@ export default function BookingHandoverRoute() {
         mode={mode}
         suggestions={suggestions}
         onDone={(result) => {
-          if (mode === 'return') setReturned(result as ReturnResult);
+          if (mode === 'return') setReturned(result as ReturnView);
           else navigate(`/bookings/${b.id}`, { state: { notice: `Handed over to ${result.takenBy ?? 'the taker'}.` } });
         }}
       />

@@ -5,7 +5,8 @@ import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { BookForm } from '../../features/bookings/components/book-form';
-import { useAssets } from '../../features/fleet/api/get-assets';
+import { useAsset } from '../../features/fleet/api/get-asset';
+import { assetsQueryOptions } from '../../features/fleet/api/get-assets';
 import { useKits } from '../../features/kits/api/get-kits';
 import { useSiteJobs } from '../../features/site-jobs/api/get-site-jobs';
 import { JobForm } from '../../features/site-jobs/components/job-form';
@@ -18,20 +19,20 @@ export default function BookingNewRoute() {
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const kits = useKits();
-  // Every item, retired ones too: booking a kit books all its members, and the form explains why one cannot go.
-  const assets = useAssets({ sort: 'assetTag', limit: 500, offset: 0 });
   const jobs = useSiteJobs();
+  // "Book this item" from an item's page starts with it on the list.
+  const assetId = params.get('assetId') ?? '';
+  const asset = useAsset(assetId);
 
-  const assetId = params.get('assetId');
   const initial = {
     kitId: params.get('kitId') ?? undefined,
-    assetIds: assetId ? [assetId] : undefined,
+    items: asset.data ? [asset.data] : undefined,
     startsOn: isDate(params.get('startsOn')),
     endsOn: isDate(params.get('endsOn')),
     jobId: params.get('jobId') ?? undefined,
   };
 
-  const error = kits.error ?? assets.error ?? jobs.error;
+  const error = kits.error ?? (assetId ? asset.error : null) ?? jobs.error;
   return (
     <>
       <Link to="/board" className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
@@ -40,13 +41,13 @@ export default function BookingNewRoute() {
       </Link>
       <PageHeader title="Book kit" description="Reserve a kit or separate items for whole days. Nestkeeper checks every item against calibration, holds and other bookings as you choose." />
       {error ? <Notice tone="error">{error.message}</Notice> : null}
-      {kits.isPending || assets.isPending || jobs.isPending ? (
-        <LoadingPanel label="Loading kits, items and jobs…" />
-      ) : kits.data && assets.data && jobs.data ? (
+      {kits.isPending || (assetId && asset.isPending) || jobs.isPending ? (
+        <LoadingPanel label="Loading kits and jobs…" />
+      ) : kits.data && jobs.data ? (
         <div className="max-w-3xl">
           <BookForm
             kits={kits.data.items}
-            assets={assets.data.items}
+            fleet={assetsQueryOptions}
             jobs={jobs.data.items}
             initial={initial}
             onBooked={(booking) => navigate(`/bookings/${booking.id}`)}

@@ -9,7 +9,7 @@ import { FactList, Panel } from '../../components/panel';
 import { useSession } from '../../features/auth/components/session-context';
 import { useLabTrips } from '../../features/calibration/api/get-lab-trips';
 import { useLabWindows } from '../../features/calibration/api/get-lab-windows';
-import type { LabTrip } from '../../features/calibration/api/types';
+import type { LabTripView } from '../../../shared/calibration/views';
 import { days } from '../../features/calibration/components/calibration-words';
 import { LabTripCard } from '../../features/calibration/components/lab-trip-card';
 import { LabWindowFinder } from '../../features/calibration/components/lab-window-finder';
@@ -45,7 +45,7 @@ export default function CalibrationPlanRoute() {
   const a = asset.data;
   const w = windows.data;
   // This item's trips that are not back yet; the one just planned first.
-  const open: LabTrip[] = (trips.data?.items ?? [])
+  const open: LabTripView[] = (trips.data?.items ?? [])
     .filter((t) => t.state !== 'back' && t.items.some((i) => i.assetId === a.id))
     .sort((x, y) => (x.id === planned ? -1 : y.id === planned ? 1 : x.sentOn.localeCompare(y.sentOn)));
 

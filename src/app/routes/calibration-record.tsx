@@ -5,7 +5,7 @@ import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
-import type { CalibrationEvent } from '../../features/calibration/api/types';
+import type { CalibrationEventView } from '../../../shared/calibration/views';
 import { CalibrationResult } from '../../features/calibration/components/calibration-result';
 import { RecordCalibrationForm } from '../../features/calibration/components/record-calibration-form';
 import { useAsset } from '../../features/fleet/api/get-asset';
@@ -19,7 +19,7 @@ export default function CalibrationRecordRoute() {
   const { id = '' } = useParams();
   const { user, organization } = useSession();
   const asset = useAsset(id);
-  const [saved, setSaved] = useState<CalibrationEvent | null>(null);
+  const [saved, setSaved] = useState<CalibrationEventView | null>(null);
 
   if (asset.isPending) return <LoadingPanel label="Loading the item…" />;
   if (asset.isError) {

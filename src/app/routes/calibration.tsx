@@ -8,7 +8,7 @@ import { PageHeader } from '../../components/page-header';
 import { Panel } from '../../components/panel';
 import { useSession } from '../../features/auth/components/session-context';
 import { calibrationReviewCsvUrl, calibrationReviewPdfUrl, useCalibrationReview } from '../../features/calibration/api/get-calibration-review';
-import type { DueRow } from '../../features/calibration/api/types';
+import type { DueRow } from '../../../shared/calibration/views';
 import { AtLabList } from '../../features/calibration/components/at-lab-list';
 import { DueGrid } from '../../features/calibration/components/due-grid';
 import { DueTimeline } from '../../features/calibration/components/due-timeline';

@@ -8,12 +8,12 @@ import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { FactList, Panel } from '../../components/panel';
 import { useSession } from '../../features/auth/components/session-context';
-import { useCustomer } from '../../features/billing/api/get-customer';
+import { useCustomer } from '../../features/rentals/api/get-customer';
 import { useInvoices } from '../../features/billing/api/get-invoices';
-import { useRentals } from '../../features/billing/api/get-rentals';
-import { CustomerDialog } from '../../features/billing/components/customer-dialog';
+import { useRentals } from '../../features/rentals/api/get-rentals';
+import { CustomerDialog } from '../../features/rentals/components/customer-dialog';
 import { InvoicesGrid } from '../../features/billing/components/invoices-grid';
-import { RentalsGrid } from '../../features/billing/components/rentals-grid';
+import { RentalsGrid } from '../../features/rentals/components/rentals-grid';
 import { can } from '../../lib/roles';
 
 /** One customer: where invoices go, and everything rented and invoiced to them. */

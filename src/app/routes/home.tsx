@@ -9,8 +9,9 @@ import { OpenImpactReviews } from '../../features/calibration/components/impact-
 import { RecalibrationsDue } from '../../features/fleet/components/due-list';
 import { ChecksToDo } from '../../features/checks/components/checks-to-do';
 import { HeldItems } from '../../features/fleet/components/held-list';
-import { BillingDeskPanels } from '../../features/billing/components/billing-desk-panels';
 import { KitUsePanel } from '../../features/billing/components/kit-use-panel';
+import { UnpaidInvoices } from '../../features/billing/components/unpaid-invoices';
+import { RentalDeskPanels } from '../../features/rentals/components/rental-desk-panels';
 import { todayIn } from '../../lib/bookings';
 import { IncidentList } from '../../features/incidents/components/incident-list';
 import type { Role } from '../../lib/roles';
@@ -34,6 +35,16 @@ interface RoleHome {
 function OwnerKitUse() {
   const { organization } = useSession();
   return <KitUsePanel today={todayIn(organization.timeZone)} currency={organization.currency} />;
+}
+
+/** The billing clerk's desk: holds near lapse, deposits to settle, rentals to invoice (rentals), then invoices to chase (billing). */
+function BillingDesk() {
+  return (
+    <>
+      <RentalDeskPanels />
+      <UnpaidInvoices />
+    </>
+  );
 }
 
 /** Each role's home: live panels drawn by the features, and plain words where a panel only points the way. */
@@ -93,7 +104,7 @@ const homes: Record<Role, RoleHome> = {
   billing: {
     title: 'Billing desk',
     description: 'Rentals to price, deposits to handle and invoices to issue.',
-    panels: [{ title: 'Billing desk', body: null, live: () => <BillingDeskPanels /> }],
+    panels: [{ title: 'Billing desk', body: null, live: () => <BillingDesk /> }],
   },
 };
 

@@ -2,7 +2,7 @@ import { useSearchParams } from 'react-router-dom';
 import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useIncidents } from '../../features/incidents/api/get-incidents';
-import type { IncidentState } from '../../features/incidents/api/types';
+import type { IncidentState } from '../../../shared/incidents/vocabulary';
 import { IncidentsGrid } from '../../features/incidents/components/incidents-grid';
 import { incidentStateChoices, incidentStateWords } from '../../features/incidents/components/incident-words';
 

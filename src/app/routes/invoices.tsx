@@ -4,7 +4,7 @@ import { DownloadIcon } from '../../components/icons';
 import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { invoicesCsvUrl, useInvoices } from '../../features/billing/api/get-invoices';
-import type { InvoiceKind } from '../../features/billing/api/types';
+import type { InvoiceKind } from '../../features/billing/api/keys';
 import { InvoicesGrid } from '../../features/billing/components/invoices-grid';
 
 const kinds: { value: InvoiceKind | 'all'; label: string }[] = [

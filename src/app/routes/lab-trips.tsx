@@ -5,7 +5,7 @@ import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { useLabTrips } from '../../features/calibration/api/get-lab-trips';
-import type { LabTripState } from '../../features/calibration/api/types';
+import type { LabTripState } from '../../../shared/calibration/views';
 import { tripStateWords } from '../../features/calibration/components/calibration-words';
 import { LabTripCard } from '../../features/calibration/components/lab-trip-card';
 import { todayIn } from '../../lib/calibration';

@@ -3,8 +3,9 @@ import { ArrowLeftIcon } from '../../components/icons';
 import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
-import { RentalForm } from '../../features/billing/components/rental-form';
+import { assetsQueryOptions } from '../../features/fleet/api/get-assets';
 import { useKits } from '../../features/kits/api/get-kits';
+import { RentalForm } from '../../features/rentals/components/rental-form';
 
 const isDate = (s: string | null) => (s && /^\d{4}-\d{2}-\d{2}$/.test(s) ? s : undefined);
 
@@ -33,6 +34,7 @@ export default function RentalNewRoute() {
         <div className="max-w-3xl">
           <RentalForm
             kits={kits.data.items}
+            fleet={assetsQueryOptions}
             initial={initial}
             onCreated={(rental) => navigate(`/rentals/${rental.id}`, { state: { notice: `Rental ${rental.number} for ${rental.customer.company} is reserved. Take the deposit when the kit is handed over.` } })}
           />

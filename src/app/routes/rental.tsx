@@ -7,12 +7,13 @@ import { LoadingPanel } from '../../components/loading-panel';
 import { FactList, Panel } from '../../components/panel';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
-import { rentalDocumentUrl, useRental } from '../../features/billing/api/get-rental';
-import { RentalStateChip } from '../../features/billing/components/billing-words';
+import { rentalDocumentUrl, useRental } from '../../features/rentals/api/get-rental';
 import { DepositPanel } from '../../features/billing/components/deposit-panel';
 import { InvoicePanel } from '../../features/billing/components/invoice-panel';
-import { QuoteLines } from '../../features/billing/components/quote-lines';
-import { RenterCautions, RentalItems } from '../../features/billing/components/rental-items';
+import { QuoteLines } from '../../features/rentals/components/quote-lines';
+import { ChargesEditor } from '../../features/rentals/components/charges-editor';
+import { RenterCautions, RentalItems } from '../../features/rentals/components/rental-items';
+import { RentalStateChip } from '../../features/rentals/components/rental-words';
 import { formatCalendarDate, useDateFormat } from '../../lib/format';
 import { can } from '../../lib/roles';
 
@@ -30,6 +31,7 @@ export default function RentalRoute() {
 
   const r = rental.data;
   const canCharge = can(user.role, 'rentals.write');
+  const charges = <ChargesEditor rental={r} canCharge={canCharge} />;
   const pdf = (document: 'agreement' | 'certificate-pack', label: string) => (
     <a key={document} href={rentalDocumentUrl(r.id, document)} target="_blank" rel="noopener" className={buttonClasses('secondary', 'sm')}>
       <DownloadIcon size={14} />
@@ -73,8 +75,8 @@ export default function RentalRoute() {
           {r.state === 'reserved' || r.state === 'out' ? <RenterCautions items={r.items} /> : null}
           <RentalItems items={r.items} />
         </div>
-        <DepositPanel rental={r} canManage={can(user.role, 'deposits.manage')} canCharge={canCharge} />
-        <InvoicePanel rental={r} canCharge={canCharge} />
+        <DepositPanel rental={r} canManage={can(user.role, 'deposits.manage')} charges={charges} />
+        <InvoicePanel rental={r} canCharge={canCharge} charges={charges} />
       </div>
     </>
   );

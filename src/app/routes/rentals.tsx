@@ -4,9 +4,9 @@ import { PlusIcon } from '../../components/icons';
 import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
-import { useRentals } from '../../features/billing/api/get-rentals';
-import type { RentalListView } from '../../features/billing/api/types';
-import { RentalsGrid } from '../../features/billing/components/rentals-grid';
+import { useRentals } from '../../features/rentals/api/get-rentals';
+import type { RentalListView } from '../../features/rentals/api/keys';
+import { RentalsGrid } from '../../features/rentals/components/rentals-grid';
 import { can } from '../../lib/roles';
 
 const views: { value: RentalListView; label: string; empty: string }[] = [

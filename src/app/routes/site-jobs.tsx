@@ -7,7 +7,7 @@ import { FactList } from '../../components/panel';
 import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { useSiteJobs } from '../../features/site-jobs/api/get-site-jobs';
-import type { SiteJob } from '../../features/site-jobs/api/types';
+import type { SiteJobView } from '../../../shared/bookings/views';
 import { JobForm } from '../../features/site-jobs/components/job-form';
 import { SiteJobsTable } from '../../features/site-jobs/components/site-jobs-table';
 import { formatCalendarDate } from '../../lib/format';
@@ -18,7 +18,7 @@ export default function SiteJobsRoute() {
   const { user } = useSession();
   const jobs = useSiteJobs();
   const canWrite = can(user.role, 'bookings.write');
-  const [editing, setEditing] = useState<SiteJob | 'new' | null>(null);
+  const [editing, setEditing] = useState<SiteJobView | 'new' | null>(null);
   const [saved, setSaved] = useState<string>();
 
   return (

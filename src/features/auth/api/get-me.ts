@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { authKeys } from './keys';
-import type { Session } from './types';
+import type { SessionView } from '../../../../shared/auth/views';
 
-export function getMe(signal?: AbortSignal): Promise<Session> {
-  return apiClient.get<Session>('/auth/me', { signal });
+export function getMe(signal?: AbortSignal): Promise<SessionView> {
+  return apiClient.get<SessionView>('/auth/me', { signal });
 }
 
 export const meQueryOptions = () =>

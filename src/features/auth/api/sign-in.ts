@@ -2,20 +2,15 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { meQueryOptions } from './get-me';
 import { authKeys } from './keys';
-import type { SessionUser } from './types';
+import type { SignInView } from '../../../../shared/auth/views';
 
 export interface SignInInput {
   email: string;
   password: string;
 }
 
-export interface SignInResult {
-  token: string;
-  user: SessionUser;
-}
-
-export function signIn(input: SignInInput): Promise<SignInResult> {
-  return apiClient.post<SignInResult>('/auth/login', input);
+export function signIn(input: SignInInput): Promise<SignInView> {
+  return apiClient.post<SignInView>('/auth/login', input);
 }
 
 /** Signs in, forgets anything cached for a previous person, and loads the new session. */

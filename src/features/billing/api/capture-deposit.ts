@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { RentalView } from '../../../../shared/billing/views';
 import { apiClient } from '../../../lib/api-client';
-import { reloadRental, storeRental } from './rental-cache';
-import type { RentalView } from './types';
+import { invalidateRentalsAndBilling } from '../../../lib/rental-status';
 
 /** Captures `amountMinor` from the hold and releases the rest; beyond the hold, the difference is charged to the saved card. */
 export function captureDeposit({ rentalId, amountMinor, reason }: { rentalId: string; amountMinor: number; reason: string }): Promise<RentalView> {
@@ -12,7 +12,7 @@ export function useCaptureDeposit() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: captureDeposit,
-    onSuccess: (rental) => storeRental(queryClient, rental),
-    onError: (_error, { rentalId }) => reloadRental(queryClient, rentalId),
+    // The rental's page, its lists, the invoices and reports show the deposit; a refused call may still have changed it (a declined card is kept on record).
+    onSettled: () => invalidateRentalsAndBilling(queryClient),
   });
 }

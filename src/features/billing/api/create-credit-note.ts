@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { InvoiceView } from '../../../../shared/billing/views';
 import { apiClient } from '../../../lib/api-client';
-import { refreshBilling } from './rental-cache';
-import type { InvoiceView } from './types';
+import { invalidateRentalsAndBilling } from '../../../lib/rental-status';
 
 /** Credits an invoice: `amountMinor` net of tax, or the whole invoice when left out. */
 export function createCreditNote({ invoiceId, reason, amountMinor }: { invoiceId: string; reason: string; amountMinor?: number }): Promise<InvoiceView> {
@@ -10,5 +10,5 @@ export function createCreditNote({ invoiceId, reason, amountMinor }: { invoiceId
 
 export function useCreateCreditNote() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createCreditNote, onSuccess: () => refreshBilling(queryClient) });
+  return useMutation({ mutationFn: createCreditNote, onSuccess: () => invalidateRentalsAndBilling(queryClient) });
 }

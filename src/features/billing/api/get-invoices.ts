@@ -1,7 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { InvoiceSummary } from '../../../../shared/billing/views';
+import type { Page } from '../../../../shared/lists/page';
 import { apiClient, apiUrl } from '../../../lib/api-client';
-import { billingKeys } from './keys';
-import type { InvoiceKind, InvoiceSummary, Page } from './types';
+import { billingKeys, type InvoiceKind } from './keys';
 
 /** Without a customer, every customer's. */
 export function getInvoices(kind: InvoiceKind | 'all', customerId?: string, signal?: AbortSignal): Promise<Page<InvoiceSummary>> {
@@ -15,6 +16,7 @@ export function useInvoices(kind: InvoiceKind | 'all', customerId?: string) {
   return useQuery(invoicesQueryOptions(kind, customerId));
 }
 
-/** Every invoice and credit note as CSV, and one document as PDF. */
+/** Every invoice and credit note as CSV, one document as PDF, and a rental's invoice as PDF. */
 export const invoicesCsvUrl = () => apiUrl('/invoices/export.csv');
 export const invoiceDocumentUrl = (id: string) => apiUrl(`/invoices/${encodeURIComponent(id)}/document.pdf`);
+export const rentalInvoiceUrl = (rentalId: string) => apiUrl(`/rentals/${encodeURIComponent(rentalId)}/invoice.pdf`);

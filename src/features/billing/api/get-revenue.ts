@@ -1,7 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { RevenueRow } from '../../../../shared/billing/views';
+import type { Page } from '../../../../shared/lists/page';
 import { apiClient } from '../../../lib/api-client';
 import { billingKeys } from './keys';
-import type { Page, RevenueRow } from './types';
 
 /** Invoiced revenue per kit per month; `from` and `to` are months YYYY-MM, both included. */
 export function getRevenue(range: { from: string; to: string }, signal?: AbortSignal): Promise<Page<RevenueRow>> {

@@ -1,7 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { UtilisationRow } from '../../../../shared/billing/views';
+import type { Page } from '../../../../shared/lists/page';
 import { apiClient } from '../../../lib/api-client';
 import { billingKeys } from './keys';
-import type { Page, UtilisationRow } from './types';
 
 /** Booked days against available days per kit; `from` and `to` are dates YYYY-MM-DD, both included. */
 export function getUtilisation(range: { from: string; to: string }, signal?: AbortSignal): Promise<Page<UtilisationRow>> {

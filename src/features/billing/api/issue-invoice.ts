@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { InvoiceView } from '../../../../shared/billing/views';
 import { apiClient } from '../../../lib/api-client';
-import { refreshBilling } from './rental-cache';
-import type { InvoiceView } from './types';
+import { invalidateRentalsAndBilling } from '../../../lib/rental-status';
 
 /** Issues the rental's invoice: only after return, once the deposit is settled (422 otherwise). */
 export function issueInvoice(rentalId: string): Promise<InvoiceView> {
@@ -10,5 +10,5 @@ export function issueInvoice(rentalId: string): Promise<InvoiceView> {
 
 export function useIssueInvoice() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: issueInvoice, onSuccess: () => refreshBilling(queryClient) });
+  return useMutation({ mutationFn: issueInvoice, onSuccess: () => invalidateRentalsAndBilling(queryClient) });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { InvoiceView } from '../../../../shared/billing/views';
 import { apiClient } from '../../../lib/api-client';
-import { refreshBilling } from './rental-cache';
-import type { InvoiceView } from './types';
+import { invalidateRentalsAndBilling } from '../../../lib/rental-status';
 
 /** Money received against an invoice (a bank transfer, say). */
 export function recordPayment({ invoiceId, ...body }: { invoiceId: string; amountMinor: number; receivedOn: string; reference: string }): Promise<InvoiceView> {
@@ -10,5 +10,5 @@ export function recordPayment({ invoiceId, ...body }: { invoiceId: string; amoun
 
 export function useRecordPayment() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: recordPayment, onSuccess: () => refreshBilling(queryClient) });
+  return useMutation({ mutationFn: recordPayment, onSuccess: () => invalidateRentalsAndBilling(queryClient) });
 }

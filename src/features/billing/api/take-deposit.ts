@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { RentalView } from '../../../../shared/billing/views';
 import { apiClient } from '../../../lib/api-client';
-import { reloadRental, storeRental } from './rental-cache';
-import type { RentalView } from './types';
+import { invalidateRentalsAndBilling } from '../../../lib/rental-status';
 
 /** Authorizes the deposit hold on a card (422 `card_declined`; 502 `payment_unavailable`). */
 export function takeDeposit({ rentalId, paymentMethod }: { rentalId: string; paymentMethod: string }): Promise<RentalView> {
@@ -12,7 +12,7 @@ export function useTakeDeposit() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: takeDeposit,
-    onSuccess: (rental) => storeRental(queryClient, rental),
-    onError: (_error, { rentalId }) => reloadRental(queryClient, rentalId),
+    // The rental's page, its lists, the invoices and reports show the deposit; a refused call may still have changed it (a declined card is kept on record).
+    onSettled: () => invalidateRentalsAndBilling(queryClient),
   });
 }

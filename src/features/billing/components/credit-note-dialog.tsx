@@ -9,7 +9,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits, formatMoney } from '../../../lib/format';
 import { amountText, parseAmount } from '../../../lib/money';
 import { useCreateCreditNote } from '../api/create-credit-note';
-import type { InvoiceSummary } from '../api/types';
+import type { InvoiceSummary } from '../../../../shared/billing/views';
 
 /** Credit part of an invoice (net of tax) or, with no amount, all of it. The invoice itself never changes. */
 export function CreditNoteDialog({ invoice, open, onClose }: { invoice: InvoiceSummary; open: boolean; onClose: () => void }) {

@@ -1,24 +1,24 @@
 import { Form, Formik } from 'formik';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import * as Yup from 'yup';
-import { testCards } from '../../../../shared/billing/views';
 import { Button } from '../../../components/button';
+import { DepositStateChip, HoldLapse } from '../../../components/deposit-state';
 import { SelectField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
+import { TableHead } from '../../../components/table-head';
 import { isApiError } from '../../../lib/api-client';
 import { formatMoney, useDateFormat } from '../../../lib/format';
 import { useTakeDeposit } from '../api/take-deposit';
-import type { DepositHoldView, RentalView } from '../api/types';
-import { DepositStateChip, HoldLapse, paymentProblem } from './billing-words';
+import { testCards, type DepositHoldView, type RentalView } from '../../../../shared/billing/views';
+import { paymentProblem } from './payment-problem';
 import { SettleDeposit } from './settle-deposit';
-import { TableHead } from './table-head';
 
 const brand = (name: string | null) => (name ? name[0].toUpperCase() + name.slice(1) : 'Card');
 const card = (hold: DepositHoldView | null) => (hold?.cardLast4 ? `${brand(hold.cardBrand)} ending ${hold.cardLast4}` : null);
 
-/** The rental's deposit: the hold on the renter's card, taking it, and settling it at return. */
-export function DepositPanel({ rental, canManage, canCharge }: { rental: RentalView; canManage: boolean; canCharge: boolean }) {
+/** The rental's deposit: the hold on the renter's card, taking it, and settling it at return (`charges`: the rental's damage and loss charges, set before settling). */
+export function DepositPanel({ rental, canManage, charges }: { rental: RentalView; canManage: boolean; charges: ReactNode }) {
   const { dateTime } = useDateFormat();
   const { state, hold, holds } = rental.deposit;
   const money = (minor: number) => formatMoney(minor, rental.currency);
@@ -43,7 +43,7 @@ export function DepositPanel({ rental, canManage, canCharge }: { rental: RentalV
           {authorized && !rental.returnedAt ? (
             <p className="text-sm text-ink-700">The hold stays on the card until the kit is back. Nestkeeper renews it on the saved card before it would lapse.</p>
           ) : null}
-          {authorized && rental.returnedAt && canManage ? <SettleDeposit rental={rental} hold={hold} canCharge={canCharge} /> : null}
+          {authorized && rental.returnedAt && canManage ? <SettleDeposit rental={rental} hold={hold} charges={charges} /> : null}
         </div>
         {holds.length ? <HoldHistory holds={holds} currency={rental.currency} dateTime={dateTime} /> : null}
       </div>

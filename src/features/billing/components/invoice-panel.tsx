@@ -1,18 +1,16 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Button, buttonClasses } from '../../../components/button';
 import { DownloadIcon } from '../../../components/icons';
+import { MoneyLines } from '../../../components/money-lines';
 import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
 import { todayIn } from '../../../lib/calibration';
 import { formatCalendarDate, formatMoney, useDateFormat } from '../../../lib/format';
-import { invoiceDocumentUrl } from '../api/get-invoices';
-import { rentalDocumentUrl } from '../api/get-rental';
+import { invoiceDocumentUrl, rentalInvoiceUrl } from '../api/get-invoices';
 import { useIssueInvoice } from '../api/issue-invoice';
-import type { InvoiceLine, InvoiceSummary, RentalView } from '../api/types';
-import { ChargesEditor } from './charges-editor';
+import type { InvoiceLine, InvoiceSummary, RentalView } from '../../../../shared/billing/views';
 import { CreditNoteDialog } from './credit-note-dialog';
 import { PaymentDialog } from './payment-dialog';
-import { MoneyLines } from './money-lines';
 
 const lineKindWords: Record<InvoiceLine['kind'], string> = { rental: 'Rental', late: 'Late days', damage: 'Damage or loss', credit: 'Credit' };
 
@@ -23,8 +21,8 @@ function notReady(rental: RentalView): string | null {
   return null;
 }
 
-/** What the rental comes to, the invoice, what was received against it and its credit notes. */
-export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCharge: boolean }) {
+/** What the rental comes to, the invoice, what was received against it and its credit notes (`charges`: the damage and loss charges, shown while settling). */
+export function InvoicePanel({ rental, canCharge, charges }: { rental: RentalView; canCharge: boolean; charges: ReactNode }) {
   const issue = useIssueInvoice();
   const { timeZone } = useDateFormat();
   const [creditOpen, setCreditOpen] = useState(false);
@@ -37,7 +35,7 @@ export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCha
   return (
     <Panel title="Invoice" className="lg:col-span-2">
       <div className="flex flex-col gap-4">
-        {settling ? <ChargesEditor rental={rental} canCharge={canCharge} /> : null}
+        {settling ? charges : null}
         <MoneyLines
           caption="What the rental comes to"
           currency={currency}
@@ -59,7 +57,7 @@ export function InvoicePanel({ rental, canCharge }: { rental: RentalView; canCha
               {invoice.receivedMinor ? `; ${formatMoney(invoice.receivedMinor, currency)} received` : ''}
               {invoice.outstandingMinor > 0 ? `; ${formatMoney(invoice.outstandingMinor, currency)} outstanding.` : '; nothing outstanding.'}
             </p>
-            <a href={rentalDocumentUrl(rental.id, 'invoice')} target="_blank" rel="noopener" className={buttonClasses('secondary', 'sm')}>
+            <a href={rentalInvoiceUrl(rental.id)} target="_blank" rel="noopener" className={buttonClasses('secondary', 'sm')}>
               <DownloadIcon size={14} />
               Download invoice (PDF)
             </a>

@@ -4,7 +4,7 @@ import { Link } from 'react-router-dom';
 import { actionsColumnType, DataGrid } from '../../../components/data-grid';
 import { formatCalendarDate, formatMoney } from '../../../lib/format';
 import { invoiceDocumentUrl } from '../api/get-invoices';
-import type { InvoiceSummary } from '../api/types';
+import type { InvoiceSummary } from '../../../../shared/billing/views';
 
 type Cell = ICellRendererParams<InvoiceSummary>;
 const kindWords: Record<InvoiceSummary['kind'], string> = { invoice: 'Invoice', credit_note: 'Credit note' };

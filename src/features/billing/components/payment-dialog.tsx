@@ -9,7 +9,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits, formatMoney } from '../../../lib/format';
 import { amountText, parseAmount } from '../../../lib/money';
 import { useRecordPayment } from '../api/record-payment';
-import type { InvoiceSummary } from '../api/types';
+import type { InvoiceSummary } from '../../../../shared/billing/views';
 
 /** Record money received against an invoice; at most what is outstanding. Payments are kept, never edited. */
 export function PaymentDialog({ invoice, today, open, onClose }: { invoice: InvoiceSummary; today: string; open: boolean; onClose: () => void }) {

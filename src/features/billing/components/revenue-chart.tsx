@@ -1,5 +1,5 @@
 import { currencyDigits, formatMoney } from '../../../lib/format';
-import type { RevenueRow } from '../api/types';
+import type { RevenueRow } from '../../../../shared/billing/views';
 import { monthLong, monthShort, monthsBetween } from './months';
 
 const W = 760;

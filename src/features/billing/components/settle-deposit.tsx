@@ -1,5 +1,5 @@
 import { Form, Formik } from 'formik';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
@@ -10,9 +10,8 @@ import { currencyDigits, formatMoney } from '../../../lib/format';
 import { amountText, parseAmount } from '../../../lib/money';
 import { useCaptureDeposit } from '../api/capture-deposit';
 import { useReleaseDeposit } from '../api/release-deposit';
-import type { DepositHoldView, RentalView } from '../api/types';
-import { paymentProblem } from './billing-words';
-import { ChargesEditor } from './charges-editor';
+import type { DepositHoldView, RentalView } from '../../../../shared/billing/views';
+import { paymentProblem } from './payment-problem';
 
 /** What the hold is there to cover, in words, as the reason the clerk starts from. */
 function suggestedReason(rental: RentalView): string {
@@ -22,7 +21,7 @@ function suggestedReason(rental: RentalView): string {
 }
 
 /** At return: set the charges, then capture what the extras come to (the rest is released) or release the whole hold. */
-export function SettleDeposit({ rental, hold, canCharge }: { rental: RentalView; hold: DepositHoldView; canCharge: boolean }) {
+export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; hold: DepositHoldView; charges: ReactNode }) {
   const capture = useCaptureDeposit();
   const release = useReleaseDeposit();
   const [problem, setProblem] = useState<string>();
@@ -52,7 +51,7 @@ export function SettleDeposit({ rental, hold, canCharge }: { rental: RentalView;
       <h3 id="settle-heading" className="font-semibold text-ink-900">
         Settle the deposit
       </h3>
-      <ChargesEditor rental={rental} canCharge={canCharge} />
+      {charges}
       <FactList
         items={[
           { term: 'Late days', value: settlement.lateDays ? `${settlement.lateDays} (day rate plus late fee each)` : 'None: back on time' },

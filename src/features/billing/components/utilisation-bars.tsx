@@ -1,5 +1,5 @@
 import { formatCount } from '../../../lib/format';
-import type { UtilisationRow } from '../api/types';
+import type { UtilisationRow } from '../../../../shared/billing/views';
 
 /** Booked days over available days per kit: a bar and the same share in words. */
 export function UtilisationBars({ rows }: { rows: UtilisationRow[] }) {

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { bookingsKeys } from './keys';
-import type { Booking } from './types';
+import type { BookingView } from '../../../../shared/bookings/views';
 
-export function cancelBooking(id: string): Promise<Booking> {
-  return apiClient.post<Booking>(`/bookings/${encodeURIComponent(id)}/cancel`);
+export function cancelBooking(id: string): Promise<BookingView> {
+  return apiClient.post<BookingView>(`/bookings/${encodeURIComponent(id)}/cancel`);
 }
 
 export function useCancelBooking() {

@@ -2,11 +2,17 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { invalidateAssetStatus } from '../../../lib/asset-status';
 import { bookingsKeys } from './keys';
-import type { Booking, HandoverInput } from './types';
+import type { BookingView, ChecklistLine } from '../../../../shared/bookings/views';
+
+/** The packing list as walked at the counter, and who takes (or brings back) the kit: a name or a user id. */
+export interface HandoverInput {
+  checklist: ChecklistLine[];
+  counterpart: string;
+}
 
 /** POST /api/bookings/:id/checkout — the kit leaves against its packing list. */
-export function checkOutBooking({ id, ...input }: HandoverInput & { id: string }): Promise<Booking> {
-  return apiClient.post<Booking>(`/bookings/${encodeURIComponent(id)}/checkout`, input);
+export function checkOutBooking({ id, ...input }: HandoverInput & { id: string }): Promise<BookingView> {
+  return apiClient.post<BookingView>(`/bookings/${encodeURIComponent(id)}/checkout`, input);
 }
 
 export function useCheckOutBooking() {

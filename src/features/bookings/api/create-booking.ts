@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { bookingsKeys } from './keys';
-import type { Booking, BookingInput } from './types';
+import type { BookingView } from '../../../../shared/bookings/views';
+import type { BookingPayload } from '../../../../shared/schemas/bookings';
 
-export function createBooking(input: BookingInput): Promise<Booking> {
-  return apiClient.post<Booking>('/bookings', input);
+export function createBooking(input: BookingPayload): Promise<BookingView> {
+  return apiClient.post<BookingView>('/bookings', input);
 }
 
 export function useCreateBooking() {

@@ -1,9 +1,10 @@
 import { useMutation } from '@tanstack/react-query';
+import type { CalendarFeedView } from '../../../../shared/bookings/views';
 import { apiClient } from '../../../lib/api-client';
 
 /** POST /api/calendar/token — a new secret feed address for the signed-in person (the old one stops working). */
-export function createCalendarToken(): Promise<{ url: string }> {
-  return apiClient.post<{ url: string }>('/calendar/token');
+export function createCalendarToken(): Promise<CalendarFeedView> {
+  return apiClient.post<CalendarFeedView>('/calendar/token');
 }
 
 export function useCreateCalendarToken() {

@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { bookingsKeys } from './keys';
-import type { Booking } from './types';
+import type { BookingView } from '../../../../shared/bookings/views';
 
-export function getBooking(id: string, signal?: AbortSignal): Promise<Booking> {
-  return apiClient.get<Booking>(`/bookings/${encodeURIComponent(id)}`, { signal });
+export function getBooking(id: string, signal?: AbortSignal): Promise<BookingView> {
+  return apiClient.get<BookingView>(`/bookings/${encodeURIComponent(id)}`, { signal });
 }
 
 export const bookingQueryOptions = (id: string) =>

@@ -1,7 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { bookingsKeys } from './keys';
-import type { Booking, BookingListParams, BookingPage } from './types';
+import { bookingsKeys, type BookingListParams } from './keys';
+import type { Page } from '../../../../shared/lists/page';
+import type { BookingView } from '../../../../shared/bookings/views';
 
 const PAGE = 500;
 /** A board window rarely holds more; past this the list says so. */
@@ -19,11 +20,11 @@ function listQuery(params: BookingListParams) {
 }
 
 /** Every booking touching the window (the API pages at 500; this reads page after page). */
-export async function getBookings(params: BookingListParams, signal?: AbortSignal): Promise<BookingPage> {
-  const items: Booking[] = [];
+export async function getBookings(params: BookingListParams, signal?: AbortSignal): Promise<Page<BookingView>> {
+  const items: BookingView[] = [];
   let total = 0;
   do {
-    const page = await apiClient.get<BookingPage>('/bookings', {
+    const page = await apiClient.get<Page<BookingView>>('/bookings', {
       query: { ...listQuery(params), limit: PAGE, offset: items.length },
       signal,
     });

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { bookingsKeys } from './keys';
-import type { CounterDay } from './types';
+import type { CounterDayView } from '../../../../shared/bookings/views';
 
 /** GET /api/bookings/today — the counter's day: checkouts, returns, late returns, blocked bookings. */
-export function getCounterDay(signal?: AbortSignal): Promise<CounterDay> {
-  return apiClient.get<CounterDay>('/bookings/today', { signal });
+export function getCounterDay(signal?: AbortSignal): Promise<CounterDayView> {
+  return apiClient.get<CounterDayView>('/bookings/today', { signal });
 }
 
 export const counterDayQueryOptions = () =>

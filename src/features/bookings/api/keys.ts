@@ -1,11 +1,20 @@
-import type { AvailabilityParams, BookingListParams } from './types';
+import { bookingsQueryRoot } from '../../../lib/asset-status';
+import type { BookingState } from '../../../lib/bookings';
+
+export interface BookingListParams {
+  from?: string;
+  to?: string;
+  assetId?: string;
+  kitId?: string;
+  jobId?: string;
+  state?: BookingState[];
+}
 
 export const bookingsKeys = {
-  all: ['bookings'] as const,
+  all: bookingsQueryRoot,
   lists: () => [...bookingsKeys.all, 'list'] as const,
   list: (params: BookingListParams) => [...bookingsKeys.lists(), params] as const,
   one: (id: string) => [...bookingsKeys.all, 'one', id] as const,
   today: () => [...bookingsKeys.all, 'today'] as const,
   mine: () => [...bookingsKeys.all, 'mine'] as const,
-  availability: (params: AvailabilityParams) => [...bookingsKeys.all, 'availability', params] as const,
 };

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { bookingsKeys } from './keys';
-import type { Booking } from './types';
+import type { BookingView } from '../../../../shared/bookings/views';
 
 export interface MoveBookingInput {
   id: string;
@@ -11,8 +11,8 @@ export interface MoveBookingInput {
 }
 
 /** PATCH /api/bookings/:id — new dates for a reserved booking (same rules as booking). */
-export function moveBooking({ id, ...dates }: MoveBookingInput): Promise<Booking> {
-  return apiClient.patch<Booking>(`/bookings/${encodeURIComponent(id)}`, dates);
+export function moveBooking({ id, ...dates }: MoveBookingInput): Promise<BookingView> {
+  return apiClient.patch<BookingView>(`/bookings/${encodeURIComponent(id)}`, dates);
 }
 
 export function useMoveBooking() {

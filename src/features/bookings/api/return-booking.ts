@@ -1,12 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { invalidateAssetStatus } from '../../../lib/asset-status';
+import { incidentsQueryRoot, invalidateAssetStatus } from '../../../lib/asset-status';
+import type { HandoverInput } from './check-out-booking';
 import { bookingsKeys } from './keys';
-import type { HandoverInput, ReturnResult } from './types';
+import type { ReturnView } from '../../../../shared/bookings/views';
 
 /** POST /api/bookings/:id/return — missing or damaged items come back with an incident each (and go on hold). */
-export function returnBooking({ id, ...input }: HandoverInput & { id: string }): Promise<ReturnResult> {
-  return apiClient.post<ReturnResult>(`/bookings/${encodeURIComponent(id)}/return`, input);
+export function returnBooking({ id, ...input }: HandoverInput & { id: string }): Promise<ReturnView> {
+  return apiClient.post<ReturnView>(`/bookings/${encodeURIComponent(id)}/return`, input);
 }
 
 export function useReturnBooking() {
@@ -19,7 +20,7 @@ export function useReturnBooking() {
       return Promise.all([
         queryClient.invalidateQueries({ queryKey: bookingsKeys.all }),
         invalidateAssetStatus(queryClient),
-        queryClient.invalidateQueries({ queryKey: ['incidents'] }),
+        queryClient.invalidateQueries({ queryKey: incidentsQueryRoot }),
       ]);
     },
   });

@@ -1,33 +1,31 @@
 import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
-import { useMemo, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import * as Yup from 'yup';
-import { BookingRefusalPanel, bookingRefusalFrom, type Alternative, type BookingRefusal } from '../../../components/booking-refusal';
+import type { AssetView } from '../../../../shared/assets/views';
+import type { AlternativeItem, BookingView } from '../../../../shared/bookings/views';
+import type { BookingPayload } from '../../../../shared/schemas/bookings';
+import { BookingRefusalPanel, bookingRefusalFrom, type BookingRefusal } from '../../../components/booking-refusal';
 import { Button } from '../../../components/button';
 import { DayRangeFields } from '../../../components/day-range-fields';
 import { Dialog } from '../../../components/dialog';
 import { Field, SelectField } from '../../../components/field';
 import { FormSection } from '../../../components/form-section';
 import { PlusIcon } from '../../../components/icons';
-import { ItemMatches } from '../../../components/item-matches';
+import { readFromFleet, type ChosenItem, type FleetPages } from '../../../components/item-picker';
+import { KitAndItemsFields, swapIn, useKitMembers } from '../../../components/kit-and-items';
 import { Notice } from '../../../components/notice';
-import { PackingListLine } from '../../../components/packing-list-line';
-import { RemovableTags } from '../../../components/removable-tags';
-import { SearchBox } from '../../../components/search-box';
-import type { AssetView } from '../../../lib/assets';
-import { assetTypeTitles } from '../../../lib/assets';
 import { bookingDays } from '../../../lib/bookings';
 import { dayRangeRules } from '../../../lib/day-range';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateBooking } from '../api/create-booking';
 import { useBookings } from '../api/get-bookings';
-import type { Booking, BookingInput } from '../api/types';
 import { bookingProblems } from './booking-problems';
 import { dayRange } from './booking-words';
 
 export interface BookValues {
   kitId: string;
-  assetIds: string[];
+  items: ChosenItem[];
   startsOn: string;
   endsOn: string;
   jobId: string;
@@ -42,13 +40,14 @@ export interface JobChoice {
   endsOn: string;
 }
 
-const fields = ['kitId', 'assetIds', 'startsOn', 'endsOn', 'jobId', 'note'];
-const labels = { startsOn: 'Starts on', endsOn: 'Ends on', assetIds: 'Items', kitId: 'Kit', jobId: 'Job' };
+const fields = ['kitId', 'items', 'startsOn', 'endsOn', 'jobId', 'note'];
+const labels = { startsOn: 'Starts on', endsOn: 'Ends on', items: 'Items', kitId: 'Kit', jobId: 'Job' };
+const aliases = { assetIds: 'items' };
 const MAX_DAYS = 400;
 
 const schema = Yup.object({
   kitId: Yup.string(),
-  assetIds: Yup.array(Yup.string().required()).test('something', 'Choose a kit or add at least one item.', function (value) {
+  items: Yup.array().test('something', 'Choose a kit or add at least one item.', function (value) {
     return (value?.length ?? 0) > 0 || !!(this.parent as BookValues).kitId;
   }),
   ...dayRangeRules({ first: 'Pick the first day.', last: 'Pick the last day.', what: 'A booking' }, MAX_DAYS),
@@ -58,16 +57,16 @@ const schema = Yup.object({
 
 export interface BookFormProps {
   kits: { id: string; name: string }[];
-  /** Every asset of the firm (retired ones too: a kit books all its members). */
-  assets: AssetView[];
+  /** The fleet a page at a time (the fleet feature's list): the item search, and the chosen kit's packing list. */
+  fleet: FleetPages<AssetView>;
   jobs: JobChoice[];
   initial: Partial<BookValues>;
   /** The inline "New job" form (from the jobs feature); calls `onCreated` with the new job's id. */
   renderNewJob?: (props: { startsOn: string; endsOn: string; onCreated: (jobId: string) => void; onCancel: () => void }) => ReactNode;
-  onBooked: (booking: Booking) => void;
+  onBooked: (booking: BookingView) => void;
 }
 
-export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }: BookFormProps) {
+export function BookForm({ kits, fleet, jobs, initial, renderNewJob, onBooked }: BookFormProps) {
   const create = useCreateBooking();
   const [formError, setFormError] = useState<string>();
   const [trouble, setTrouble] = useState<BookingRefusal | null>(null);
@@ -75,7 +74,7 @@ export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }
 
   const initialValues: BookValues = {
     kitId: initial.kitId ?? '',
-    assetIds: initial.assetIds ?? [],
+    items: initial.items ?? [],
     startsOn: initial.startsOn ?? '',
     endsOn: initial.endsOn ?? initial.startsOn ?? '',
     jobId: initial.jobId ?? '',
@@ -85,11 +84,11 @@ export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }
   async function submit(values: BookValues, helpers: FormikHelpers<BookValues>) {
     setFormError(undefined);
     setTrouble(null);
-    const input: BookingInput = {
+    const input: BookingPayload = {
       startsOn: values.startsOn,
       endsOn: values.endsOn,
       ...(values.kitId ? { kitId: values.kitId } : {}),
-      ...(values.assetIds.length ? { assetIds: values.assetIds } : {}),
+      ...(values.items.length ? { assetIds: values.items.map((i) => i.id) } : {}),
       ...(values.jobId ? { jobId: values.jobId } : {}),
       ...(values.note.trim() ? { note: values.note.trim() } : {}),
     };
@@ -98,7 +97,7 @@ export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }
     } catch (error) {
       const t = bookingRefusalFrom(error, dayRange);
       if (t) setTrouble(t);
-      else setFormError(applyServerErrors(error, helpers, { fields, labels }));
+      else setFormError(applyServerErrors(error, helpers, { fields, labels, aliases }));
     }
   }
 
@@ -107,7 +106,7 @@ export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }
       {({ isSubmitting }) => (
         <BookFormBody
           kits={kits}
-          assets={assets}
+          fleet={fleet}
           jobs={jobs}
           renderNewJob={renderNewJob}
           formError={formError}
@@ -126,7 +125,7 @@ export function BookForm({ kits, assets, jobs, initial, renderNewJob, onBooked }
 
 function BookFormBody({
   kits,
-  assets,
+  fleet,
   jobs,
   renderNewJob,
   formError,
@@ -134,7 +133,7 @@ function BookFormBody({
   swapNote,
   busy,
   onSwapped,
-}: Pick<BookFormProps, 'kits' | 'assets' | 'jobs' | 'renderNewJob'> & {
+}: Pick<BookFormProps, 'kits' | 'fleet' | 'jobs' | 'renderNewJob'> & {
   formError?: string;
   trouble: BookingRefusal | null;
   swapNote?: string;
@@ -143,28 +142,22 @@ function BookFormBody({
 }) {
   const { values, setFieldValue, setValues, submitForm } = useFormikContext<BookValues>();
   const [newJobOpen, setNewJobOpen] = useState(false);
-  const byId = useMemo(() => new Map(assets.map((a) => [a.id, a])), [assets]);
-
-  const kitMembers = useMemo(() => (values.kitId ? assets.filter((a) => a.kit?.id === values.kitId) : []), [assets, values.kitId]);
-  const extras = values.assetIds.map((id) => byId.get(id)).filter((a): a is AssetView => !!a && a.kit?.id !== values.kitId);
-  const items = [...kitMembers, ...extras];
+  const { members, error: membersError } = useKitMembers(fleet, values.kitId);
+  const items = [...members, ...values.items.filter((i) => !members.some((m) => m.id === i.id))];
 
   const datesValid = !!values.startsOn && !!values.endsOn && values.startsOn <= values.endsOn;
   const others = useBookings({ from: values.startsOn, to: values.endsOn, state: ['reserved', 'out'] }, { enabled: datesValid });
-  const problems = datesValid ? bookingProblems(items, values.startsOn, values.endsOn, others.data?.items ?? []) : [];
+  const problems = datesValid ? bookingProblems(items.filter(readFromFleet), values.startsOn, values.endsOn, others.data?.items ?? []) : [];
 
   const jobOptions = [
     { value: '', label: 'No job (the firm’s own use)' },
     ...[...jobs].sort((a, b) => (a.startsOn < b.startsOn ? 1 : -1)).map((j) => ({ value: j.id, label: `${j.reference} · ${j.customerName} (${dayRange(j.startsOn, j.endsOn)})` })),
   ];
-  const kitOptions = [{ value: '', label: 'No kit: separate items only' }, ...kits.map((k) => ({ value: k.id, label: k.name }))];
 
-  function swap(troubledId: string, alternative: Alternative) {
-    const ids = values.kitId ? [...new Set([...kitMembers.map((m) => m.id), ...values.assetIds])] : values.assetIds;
-    const replaced = ids.map((id) => (id === troubledId ? alternative.id : id));
-    const from = byId.get(troubledId)?.assetTag ?? 'the item';
+  function swap(troubledId: string, alternative: AlternativeItem) {
+    const { items: swapped, from = 'the item' } = swapIn(members, values, troubledId, alternative);
     const kitName = kits.find((k) => k.id === values.kitId)?.name;
-    void setValues({ ...values, kitId: '', assetIds: [...new Set(replaced)] }, true);
+    void setValues({ ...values, kitId: '', items: swapped }, true);
     onSwapped(
       `${alternative.assetTag} replaces ${from}.${kitName ? ` The booking now lists ${kitName}’s items one by one, with the swap.` : ''}`,
     );
@@ -179,9 +172,7 @@ function BookFormBody({
         {swapNote && !trouble ? <Notice tone="info">{swapNote}</Notice> : null}
 
         <FormSection legend="What goes">
-          <SelectField name="kitId" label="Kit" options={kitOptions} hint="A kit books every item on its packing list." />
-          <PackingListLine tags={kitMembers.map((m) => m.assetTag)} />
-          <ItemPicker assets={assets} chosen={extras} kitId={values.kitId} onChange={(ids) => void setFieldValue('assetIds', ids)} />
+          <KitAndItemsFields kits={kits} fleet={fleet} members={members} membersError={membersError} kitHint="A kit books every item on its packing list." />
         </FormSection>
 
         <FormSection legend="When">
@@ -259,35 +250,5 @@ function BookFormBody({
         </Dialog>
       ) : null}
     </>
-  );
-}
-
-/** Search the fleet and add separate items (beyond the kit's packing list). */
-function ItemPicker({ assets, chosen, kitId, onChange }: { assets: AssetView[]; chosen: AssetView[]; kitId: string; onChange: (ids: string[]) => void }) {
-  const [q, setQ] = useState('');
-  const chosenIds = new Set(chosen.map((a) => a.id));
-  const needle = q.trim().toLowerCase();
-  const matches = needle
-    ? assets
-        .filter((a) => a.status !== 'retired' && !chosenIds.has(a.id) && a.kit?.id !== kitId)
-        .filter((a) => [a.assetTag, a.model ?? '', assetTypeTitles[a.type], a.kit?.name ?? ''].some((s) => s.toLowerCase().includes(needle)))
-        .slice(0, 8)
-    : [];
-  return (
-    <div className="flex flex-col gap-2">
-      <RemovableTags
-        label="Separate items"
-        items={chosen.map((a) => ({ id: a.id, tag: a.assetTag, detail: assetTypeTitles[a.type] }))}
-        onRemove={(id) => onChange(chosen.filter((c) => c.id !== id).map((c) => c.id))}
-      />
-      <SearchBox label="Add separate items" value={q} onChange={setQ} placeholder="Tag, type or model, e.g. SMR" />
-      {needle ? (
-        <ItemMatches
-          items={matches.map((a) => ({ id: a.id, tag: a.assetTag, detail: [assetTypeTitles[a.type], a.model].filter(Boolean).join(' · '), kitName: a.kit?.name }))}
-          none={`No item matches “${q.trim()}”.`}
-          onAdd={(id) => onChange([...chosen.map((c) => c.id), id])}
-        />
-      ) : null}
-    </div>
   );
 }

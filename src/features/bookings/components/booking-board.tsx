@@ -3,10 +3,10 @@ import { memo, useCallback, useEffect, useMemo, useState, type CSSProperties, ty
 import { Link } from 'react-router-dom';
 import { AlertIcon, ClockIcon, PlusIcon } from '../../../components/icons';
 import { StatusChip } from '../../../components/status-chip';
-import type { AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
 import { assetTypeTitles } from '../../../lib/assets';
 import { addDays } from '../../../lib/bookings';
-import type { Booking } from '../api/types';
+import type { BookingView } from '../../../../shared/bookings/views';
 import './booking-board.css';
 import { bookingStateWords, bookingTitle, dayRange, shortDay } from './booking-words';
 
@@ -18,17 +18,17 @@ type AssetRow = { kind: 'asset'; key: string; asset: AssetView; inKit: boolean }
 type Row = KitRow | AssetRow;
 
 const HEAD_PX = 240;
-const noBookings: Booking[] = [];
+const noBookings: BookingView[] = [];
 const LANE_PX = 34;
 const ROW_PAD_PX = 5;
 
 /** Calibration runs out during the booking: the item is valid through its due date, so due on the last day is fine. */
-function fallsDue(asset: AssetView, booking: Booking): boolean {
+function fallsDue(asset: AssetView, booking: BookingView): boolean {
   return asset.calibration.required && !!asset.calibration.dueOn && asset.calibration.dueOn < booking.endsOn;
 }
 
 interface BarModel {
-  booking: Booking;
+  booking: BookingView;
   lane: number;
   first: number;
   last: number;
@@ -39,7 +39,7 @@ interface BarModel {
 }
 
 /** Places bars in lanes so bars that share days never cover each other. */
-function layoutBars(bookings: Booking[], from: string, days: number, today: string, rowAssets: AssetView[]): { bars: BarModel[]; lanes: number } {
+function layoutBars(bookings: BookingView[], from: string, days: number, today: string, rowAssets: AssetView[]): { bars: BarModel[]; lanes: number } {
   const base = parseISO(from);
   const sorted = [...bookings].sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : 0));
   const laneEnds: number[] = [];
@@ -85,7 +85,7 @@ export interface BookingBoardProps {
   /** Assets to show (retired left out by the caller); kit rows come from each asset's kit. */
   assets: AssetView[];
   /** Bookings touching the window (cancelled left out by the caller). */
-  bookings: Booking[];
+  bookings: BookingView[];
   /** First day shown (a Monday). */
   from: string;
   days: number;
@@ -135,8 +135,8 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
   }, [assets, collapsed]);
 
   const index = useMemo(() => {
-    const byAsset = new Map<string, Booking[]>();
-    const byKit = new Map<string, Booking[]>();
+    const byAsset = new Map<string, BookingView[]>();
+    const byKit = new Map<string, BookingView[]>();
     for (const booking of bookings) {
       for (const id of booking.assetIds) {
         const list = byAsset.get(id);
@@ -153,7 +153,7 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
   }, [bookings]);
 
   const rowBookings = useMemo(() => {
-    const map = new Map<string, Booking[]>();
+    const map = new Map<string, BookingView[]>();
     for (const row of rows) {
       map.set(row.key, row.kind === 'kit' ? kitRowBookings(row, index, collapsed.has(row.kitId)) : (index.byAsset.get(row.asset.id) ?? []));
     }
@@ -278,7 +278,7 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
 }
 
 /** A kit's row shows its own bookings; folded, it also shows its members' separate bookings. */
-function kitRowBookings(row: KitRow, index: { byAsset: Map<string, Booking[]>; byKit: Map<string, Booking[]> }, folded: boolean): Booking[] {
+function kitRowBookings(row: KitRow, index: { byAsset: Map<string, BookingView[]>; byKit: Map<string, BookingView[]> }, folded: boolean): BookingView[] {
   const own = index.byKit.get(row.kitId) ?? [];
   if (!folded) return own;
   const seen = new Set(own.map((b) => b.id));
@@ -297,7 +297,7 @@ function kitRowBookings(row: KitRow, index: { byAsset: Map<string, Booking[]>; b
 interface BoardRowProps {
   row: Row;
   rowIndex: number;
-  bookings: Booking[];
+  bookings: BookingView[];
   from: string;
   days: number;
   dayPx: number;

@@ -1,6 +1,6 @@
-import type { AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
 import { blockReason, blockReasonText, rangesOverlap } from '../../../lib/bookings';
-import type { Booking } from '../api/types';
+import type { BookingView } from '../../../../shared/bookings/views';
 import { bookingStateWords, bookingTitle, dayRange, shortDay } from './booking-words';
 
 export interface BookingProblem {
@@ -20,9 +20,9 @@ export interface BookingProblem {
  * Items held by the same other booking share one sentence. Tip validations are
  * not known here; the server still checks them.
  */
-export function bookingProblems(items: AssetView[], startsOn: string, endsOn: string, others: Booking[], exceptBookingId?: string): BookingProblem[] {
+export function bookingProblems(items: AssetView[], startsOn: string, endsOn: string, others: BookingView[], exceptBookingId?: string): BookingProblem[] {
   const problems: BookingProblem[] = [];
-  const clashes = new Map<string, { other: Booking; tags: string[] }>();
+  const clashes = new Map<string, { other: BookingView; tags: string[] }>();
   const window = { startsOn, endsOn };
   for (const item of items) {
     const reason = blockReason(item, endsOn);

@@ -15,12 +15,12 @@ import { formatDateTime } from '../../../lib/format';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCancelBooking } from '../api/cancel-booking';
 import { useMoveBooking } from '../api/move-booking';
-import type { Booking, ChecklistLine } from '../api/types';
+import type { BookingView, ChecklistLine } from '../../../../shared/bookings/views';
 import { BookingStateChip, conditionWords, dayCount, dayRange, purposeWords } from './booking-words';
 
 /** Dates, job, state and who handed what over. */
 /** `rentalLinks`: whether the reader may open rental pages (the billing desk); others see the number only. */
-export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booking: Booking; timeZone?: string; rentalLinks?: boolean }) {
+export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booking: BookingView; timeZone?: string; rentalLinks?: boolean }) {
   return (
     <Panel title="Booking">
       <FactList
@@ -64,7 +64,7 @@ function lineWords(line: ChecklistLine | undefined): string {
 }
 
 /** The packing list: every item with its status now, and what each hand-over recorded. */
-export function PackingList({ booking }: { booking: Booking }) {
+export function PackingList({ booking }: { booking: BookingView }) {
   const out = new Map(booking.checkoutChecklist?.map((l) => [l.assetId, l]));
   const back = new Map(booking.returnChecklist?.map((l) => [l.assetId, l]));
   return (
@@ -113,7 +113,7 @@ const moveSchema = Yup.object({
 });
 
 /** "Move dates": new dates for a reserved booking; the same rules as booking apply. */
-export function MoveDatesButton({ booking }: { booking: Booking }) {
+export function MoveDatesButton({ booking }: { booking: BookingView }) {
   const [open, setOpen] = useState(false);
   const move = useMoveBooking();
   const [formError, setFormError] = useState<string>();
@@ -157,7 +157,7 @@ export function MoveDatesButton({ booking }: { booking: Booking }) {
 }
 
 /** "Cancel booking", after a confirmation. */
-export function CancelBookingButton({ booking }: { booking: Booking }) {
+export function CancelBookingButton({ booking }: { booking: BookingView }) {
   const [open, setOpen] = useState(false);
   const cancel = useCancelBooking();
   return (

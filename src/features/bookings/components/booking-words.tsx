@@ -1,7 +1,8 @@
 import { format, parseISO } from 'date-fns';
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
 import { bookingDays } from '../../../lib/bookings';
-import type { Booking, BookingPurpose, BookingState, ItemCondition } from '../api/types';
+import type { BookingPurpose, BookingState } from '../../../lib/bookings';
+import type { BookingView, ItemCondition } from '../../../../shared/bookings/views';
 
 export const bookingStateWords: Record<BookingState, string> = {
   reserved: 'Reserved',
@@ -36,7 +37,7 @@ export const conditionWords: Record<ItemCondition, string> = {
 };
 
 /** What a booking is for, in a few words: the job's or rental's number and customer, or the purpose. */
-export function bookingTitle(booking: Pick<Booking, 'job' | 'purpose'> & { rental?: Booking['rental'] }): string {
+export function bookingTitle(booking: Pick<BookingView, 'job' | 'purpose'> & { rental?: BookingView['rental'] }): string {
   if (booking.job) return `${booking.job.reference} ${booking.job.customerName}`;
   if (booking.rental) return `${booking.rental.number} ${booking.rental.customerCompany}`;
   return purposeWords[booking.purpose];
@@ -59,7 +60,7 @@ export function dayCount(startsOn: string, endsOn: string): string {
 }
 
 /** "what it's used for" plus the kit or the number of items. */
-export function bookingContents(booking: Pick<Booking, 'kit' | 'items'>): string {
+export function bookingContents(booking: Pick<BookingView, 'kit' | 'items'>): string {
   const count = `${booking.items.length} ${booking.items.length === 1 ? 'item' : 'items'}`;
   return booking.kit ? `${booking.kit.name} (${count})` : count;
 }

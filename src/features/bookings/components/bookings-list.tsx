@@ -3,12 +3,12 @@ import type { CustomCellRendererProps } from 'ag-grid-react';
 import { useMemo } from 'react';
 import { DataGrid } from '../../../components/data-grid';
 import { bookingDays } from '../../../lib/bookings';
-import type { Booking } from '../api/types';
+import type { BookingView } from '../../../../shared/bookings/views';
 import { BookingStateChip, bookingContents, bookingStateWords, bookingTitle, dayRange } from './booking-words';
 
 /** The board's bookings as a table (sort, filter, CSV). */
-export function BookingsList({ bookings, onOpen, loading }: { bookings: Booking[] | undefined; onOpen: (booking: Booking) => void; loading?: boolean }) {
-  const columns = useMemo<ColDef<Booking>[]>(
+export function BookingsList({ bookings, onOpen, loading }: { bookings: BookingView[] | undefined; onOpen: (booking: BookingView) => void; loading?: boolean }) {
+  const columns = useMemo<ColDef<BookingView>[]>(
     () => [
       {
         headerName: 'Dates',
@@ -35,14 +35,14 @@ export function BookingsList({ bookings, onOpen, loading }: { bookings: Booking[
         minWidth: 130,
         maxWidth: 150,
         valueGetter: (p) => (p.data ? bookingStateWords[p.data.state] : ''),
-        cellRenderer: (p: CustomCellRendererProps<Booking>) => (p.data ? <BookingStateChip state={p.data.state} /> : null),
+        cellRenderer: (p: CustomCellRendererProps<BookingView>) => (p.data ? <BookingStateChip state={p.data.state} /> : null),
       },
       { headerName: 'Taken by', colId: 'takenBy', minWidth: 140, valueGetter: (p) => p.data?.takenBy ?? '' },
     ],
     [],
   );
   return (
-    <DataGrid<Booking>
+    <DataGrid<BookingView>
       label="Bookings list"
       rows={bookings}
       loading={loading}

@@ -6,14 +6,14 @@ import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { useCounterDay } from '../api/get-counter-day';
 import { useMyKit } from '../api/get-my-kit';
-import type { Booking } from '../api/types';
+import type { BookingView } from '../../../../shared/bookings/views';
 import { blockReasonText, todayIn } from '../../../lib/bookings';
 import { TimeZoneContext } from '../../../lib/format';
 import { BookingStateChip, bookingContents, bookingTitle, dayRange } from './booking-words';
 
 const lateWords = (days: number) => `${days} ${days === 1 ? 'day' : 'days'} late`;
 
-function BookingLine({ booking, extra }: { booking: Booking; extra?: ReactNode }) {
+function BookingLine({ booking, extra }: { booking: BookingView; extra?: ReactNode }) {
   return (
     <li>
       <Link to={`/bookings/${booking.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-0.5 px-1 py-1.5 hover:bg-brass-wash">

@@ -11,7 +11,7 @@ import { assetTypeTitles } from '../../../lib/assets';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCheckOutBooking } from '../api/check-out-booking';
 import { useReturnBooking } from '../api/return-booking';
-import type { Booking, ItemCondition, ReturnResult } from '../api/types';
+import type { BookingView, ItemCondition, ReturnView } from '../../../../shared/bookings/views';
 import { conditionWords } from './booking-words';
 
 export type HandoverMode = 'checkout' | 'return';
@@ -67,10 +67,10 @@ export function HandoverForm({
   suggestions,
   onDone,
 }: {
-  booking: Booking;
+  booking: BookingView;
   mode: HandoverMode;
   suggestions: CounterpartSuggestion[];
-  onDone: (result: Booking | ReturnResult) => void;
+  onDone: (result: BookingView | ReturnView) => void;
 }) {
   const checkout = useCheckOutBooking();
   const giveBack = useReturnBooking();
@@ -167,7 +167,7 @@ export function HandoverForm({
 }
 
 /** Items that cannot go out as things stand (the server refuses the hand-over too). */
-function NotReady({ booking }: { booking: Booking }) {
+function NotReady({ booking }: { booking: BookingView }) {
   const stillOut = booking.items.filter((i) => i.status === 'out').map((i) => i.assetTag);
   const blocked = booking.items.filter((i) => i.status === 'held' || i.status === 'at_lab' || i.status === 'retired');
   if (!stillOut.length && !blocked.length) return null;
@@ -275,7 +275,7 @@ function Cautions({ types }: { types: Set<string> }) {
 }
 
 /** After a return: which items opened incidents (and are on hold), with links. */
-export function ReturnOutcome({ result }: { result: ReturnResult }) {
+export function ReturnOutcome({ result }: { result: ReturnView }) {
   const tagOf = (assetId: string) => result.items.find((i) => i.id === assetId)?.assetTag ?? 'An item';
   if (!result.incidents.length) {
     return (

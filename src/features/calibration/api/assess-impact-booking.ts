@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { calibrationKeys } from './keys';
-import type { ImpactAssessment, ImpactReview } from './types';
+import type { ImpactAssessment, ImpactReviewView } from '../../../../shared/calibration/views';
 
 export interface AssessImpactBookingInput {
   reviewId: string;
@@ -10,8 +10,8 @@ export interface AssessImpactBookingInput {
   note?: string;
 }
 
-export function assessImpactBooking({ reviewId, bookingId, assessment, note }: AssessImpactBookingInput): Promise<ImpactReview> {
-  return apiClient.put<ImpactReview>(`/impact-reviews/${encodeURIComponent(reviewId)}/bookings/${encodeURIComponent(bookingId)}`, {
+export function assessImpactBooking({ reviewId, bookingId, assessment, note }: AssessImpactBookingInput): Promise<ImpactReviewView> {
+  return apiClient.put<ImpactReviewView>(`/impact-reviews/${encodeURIComponent(reviewId)}/bookings/${encodeURIComponent(bookingId)}`, {
     assessment,
     ...(note ? { note } : {}),
   });

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { calibrationKeys } from './keys';
-import type { ImpactReview } from './types';
+import type { ImpactReviewView } from '../../../../shared/calibration/views';
 
 /** 422 `review_incomplete` until every booking is assessed. */
-export function closeImpactReview(reviewId: string): Promise<ImpactReview> {
-  return apiClient.post<ImpactReview>(`/impact-reviews/${encodeURIComponent(reviewId)}/close`);
+export function closeImpactReview(reviewId: string): Promise<ImpactReviewView> {
+  return apiClient.post<ImpactReviewView>(`/impact-reviews/${encodeURIComponent(reviewId)}/close`);
 }
 
 export function useCloseImpactReview() {

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { calibrationKeys } from './keys';
-import type { ImpactNotice } from './types';
+import type { ImpactNoticesView } from '../../../../shared/calibration/views';
 
 /** `send: false` drafts one notice per customer; `send: true` queues the same notices in the outbox. */
-export function createImpactNotices(reviewId: string, send: boolean): Promise<{ drafts: ImpactNotice[]; sent: boolean }> {
-  return apiClient.post<{ drafts: ImpactNotice[]; sent: boolean }>(`/impact-reviews/${encodeURIComponent(reviewId)}/notices`, { send });
+export function createImpactNotices(reviewId: string, send: boolean): Promise<ImpactNoticesView> {
+  return apiClient.post<ImpactNoticesView>(`/impact-reviews/${encodeURIComponent(reviewId)}/notices`, { send });
 }
 
 export function useCreateImpactNotices(assetId: string) {

@@ -2,10 +2,10 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { invalidateAssetStatus } from '../../../lib/asset-status';
 import { calibrationKeys } from './keys';
-import type { CalibrationEvent } from './types';
+import type { CalibrationEventView } from '../../../../shared/calibration/views';
 
-export function decideInterval(eventId: string, decision: 'accept' | 'decline'): Promise<CalibrationEvent> {
-  return apiClient.post<CalibrationEvent>(`/calibrations/${encodeURIComponent(eventId)}/interval`, { decision });
+export function decideInterval(eventId: string, decision: 'accept' | 'decline'): Promise<CalibrationEventView> {
+  return apiClient.post<CalibrationEventView>(`/calibrations/${encodeURIComponent(eventId)}/interval`, { decision });
 }
 
 /** Accepting moves the item's interval and due date. */

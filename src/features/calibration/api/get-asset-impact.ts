@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { calibrationKeys } from './keys';
-import type { AssetImpact } from './types';
+import type { AssetImpactView } from '../../../../shared/calibration/views';
 
-export function getAssetImpact(assetId: string, signal?: AbortSignal): Promise<AssetImpact> {
-  return apiClient.get<AssetImpact>(`/assets/${encodeURIComponent(assetId)}/impact`, { signal });
+export function getAssetImpact(assetId: string, signal?: AbortSignal): Promise<AssetImpactView> {
+  return apiClient.get<AssetImpactView>(`/assets/${encodeURIComponent(assetId)}/impact`, { signal });
 }
 
 /** The item's latest out-of-tolerance impact review, or `state: 'none'`. */

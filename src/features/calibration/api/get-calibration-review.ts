@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, apiUrl } from '../../../lib/api-client';
 import { calibrationKeys } from './keys';
-import type { CalibrationReview } from './types';
+import type { CalibrationReviewView } from '../../../../shared/calibration/views';
 
-export function getCalibrationReview(signal?: AbortSignal): Promise<CalibrationReview> {
-  return apiClient.get<CalibrationReview>('/calibration/review', { signal });
+export function getCalibrationReview(signal?: AbortSignal): Promise<CalibrationReviewView> {
+  return apiClient.get<CalibrationReviewView>('/calibration/review', { signal });
 }
 
 export const calibrationReviewQueryOptions = () =>

@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import type { Page } from '../../../../shared/lists/page';
 import { calibrationKeys } from './keys';
-import type { CalibrationEvent } from './types';
+import type { CalibrationEventView } from '../../../../shared/calibration/views';
 
-export function getCalibrations(assetId: string, signal?: AbortSignal): Promise<{ items: CalibrationEvent[] }> {
-  return apiClient.get<{ items: CalibrationEvent[] }>(`/assets/${encodeURIComponent(assetId)}/calibrations`, { signal });
+export function getCalibrations(assetId: string, signal?: AbortSignal): Promise<Page<CalibrationEventView>> {
+  return apiClient.get<Page<CalibrationEventView>>(`/assets/${encodeURIComponent(assetId)}/calibrations`, { signal });
 }
 
 /** An item's calibrations, newest first. */

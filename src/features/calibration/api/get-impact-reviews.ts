@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import type { Page } from '../../../../shared/lists/page';
 import { calibrationKeys } from './keys';
-import type { ImpactReview } from './types';
+import type { ImpactReviewView } from '../../../../shared/calibration/views';
 
-export function getImpactReviews(state?: 'open' | 'closed', signal?: AbortSignal): Promise<{ items: ImpactReview[] }> {
-  return apiClient.get<{ items: ImpactReview[] }>('/impact-reviews', { query: { state }, signal });
+export function getImpactReviews(state?: 'open' | 'closed', signal?: AbortSignal): Promise<Page<ImpactReviewView>> {
+  return apiClient.get<Page<ImpactReviewView>>('/impact-reviews', { query: { state }, signal });
 }
 
 export const impactReviewsQueryOptions = (state?: 'open' | 'closed') =>

@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import type { Page } from '../../../../shared/lists/page';
 import { calibrationKeys } from './keys';
-import type { LabTrip, LabTripState } from './types';
+import type { LabTripState, LabTripView } from '../../../../shared/calibration/views';
 
-export function getLabTrips(state?: LabTripState, signal?: AbortSignal): Promise<{ items: LabTrip[] }> {
-  return apiClient.get<{ items: LabTrip[] }>('/lab-trips', { query: { state }, signal });
+export function getLabTrips(state?: LabTripState, signal?: AbortSignal): Promise<Page<LabTripView>> {
+  return apiClient.get<Page<LabTripView>>('/lab-trips', { query: { state }, signal });
 }
 
 export const labTripsQueryOptions = (state?: LabTripState) =>

@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { calibrationKeys } from './keys';
-import type { LabWindows } from './types';
+import type { LabWindowsView } from '../../../../shared/calibration/views';
 
-export function getLabWindows(assetId: string, signal?: AbortSignal): Promise<LabWindows> {
-  return apiClient.get<LabWindows>(`/assets/${encodeURIComponent(assetId)}/lab-windows`, { signal });
+export function getLabWindows(assetId: string, signal?: AbortSignal): Promise<LabWindowsView> {
+  return apiClient.get<LabWindowsView>(`/assets/${encodeURIComponent(assetId)}/lab-windows`, { signal });
 }
 
 export const labWindowsQueryOptions = (assetId: string) =>

@@ -1,4 +1,4 @@
-import type { LabTripState } from './types';
+import type { LabTripState } from '../../../../shared/calibration/views';
 
 export const calibrationKeys = {
   all: ['calibration'] as const,

@@ -2,11 +2,18 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { invalidateBookingBoard } from '../../../lib/asset-status';
 import { calibrationKeys } from './keys';
-import type { LabTrip, PlanLabTripInput } from './types';
+import type { LabTripView } from '../../../../shared/calibration/views';
 
 /** 409 `conflict` with `details.conflicts` when an item is booked in that window. */
-export function planLabTrip(input: PlanLabTripInput): Promise<LabTrip> {
-  return apiClient.post<LabTrip>('/lab-trips', input);
+export interface PlanLabTripInput {
+  provider: string;
+  assetIds: string[];
+  sentOn: string;
+  expectedBackOn?: string;
+}
+
+export function planLabTrip(input: PlanLabTripInput): Promise<LabTripView> {
+  return apiClient.post<LabTripView>('/lab-trips', input);
 }
 
 /** The trip reserves its window as a lab booking on the board. */

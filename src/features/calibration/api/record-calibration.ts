@@ -2,10 +2,23 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { uploadForm } from '../../../lib/api-client';
 import { invalidateAssetStatus, invalidateBookingBoard } from '../../../lib/asset-status';
 import { calibrationKeys } from './keys';
-import type { CalibrationEvent, RecordCalibrationInput } from './types';
+import type { AsFound } from '../../../../shared/calibration/interval-review';
+import type { CalibrationEventView } from '../../../../shared/calibration/views';
 
 /** Multipart: the text fields, then the certificate PDF under "certificate"; progress 0…1 as it goes up. */
-export function recordCalibration(input: RecordCalibrationInput, onProgress?: (fraction: number) => void): Promise<CalibrationEvent> {
+export interface RecordCalibrationInput {
+  assetId: string;
+  performedOn: string;
+  provider: string;
+  certificateNumber: string;
+  asFound: AsFound;
+  asLeft: AsFound;
+  intervalMonths?: number;
+  note?: string;
+  certificate: File;
+}
+
+export function recordCalibration(input: RecordCalibrationInput, onProgress?: (fraction: number) => void): Promise<CalibrationEventView> {
   const form = new FormData();
   form.set('performedOn', input.performedOn);
   form.set('provider', input.provider);
@@ -15,7 +28,7 @@ export function recordCalibration(input: RecordCalibrationInput, onProgress?: (f
   if (input.intervalMonths !== undefined) form.set('intervalMonths', String(input.intervalMonths));
   if (input.note) form.set('note', input.note);
   form.set('certificate', input.certificate, input.certificate.name);
-  return uploadForm<CalibrationEvent>(`/assets/${encodeURIComponent(input.assetId)}/calibrations`, form, { onProgress });
+  return uploadForm<CalibrationEventView>(`/assets/${encodeURIComponent(input.assetId)}/calibrations`, form, { onProgress });
 }
 
 /**

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import type { AtLabRow } from '../api/types';
+import type { AtLabRow } from '../../../../shared/calibration/views';
 import { formatCalendarDate } from '../../../lib/format';
 import { LateChip, TripStateChip } from './calibration-words';
 

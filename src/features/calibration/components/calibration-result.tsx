@@ -3,7 +3,7 @@ import { buttonClasses } from '../../../components/button';
 import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
 import { formatCalendarDate } from '../../../lib/format';
-import type { CalibrationEvent } from '../api/types';
+import type { CalibrationEventView } from '../../../../shared/calibration/views';
 import { effectiveDueOn, months, ResultChip } from './calibration-words';
 import { IntervalSuggestion } from './interval-decision';
 
@@ -14,10 +14,10 @@ export function CalibrationResult({
   canDecide,
   onDecided,
 }: {
-  event: CalibrationEvent;
+  event: CalibrationEventView;
   assetTag: string;
   canDecide: boolean;
-  onDecided: (event: CalibrationEvent) => void;
+  onDecided: (event: CalibrationEventView) => void;
 }) {
   return (
     <div className="flex flex-col gap-4">

@@ -1,7 +1,8 @@
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
 import { dueDate } from '../../../lib/calibration';
 import { formatCalendarDate } from '../../../lib/format';
-import type { AsFound, CalibrationEvent, ImpactAssessment, LabTripState } from '../api/types';
+import type { AsFound } from '../../../../shared/calibration/interval-review';
+import type { CalibrationEventView, ImpactAssessment, LabTripState } from '../../../../shared/calibration/views';
 
 /** As-found and as-left results in plain words, the order of the choices. */
 export const resultWords: Record<AsFound, string> = {
@@ -44,7 +45,7 @@ export const months = (n: number) => `${n} ${n === 1 ? 'month' : 'months'}`;
 export const days = (n: number) => `${n} ${n === 1 ? 'day' : 'days'}`;
 
 /** The suggestion in words, from the way it moves (never inferred from the numbers alone). */
-export function suggestionHeadline(event: CalibrationEvent): string {
+export function suggestionHeadline(event: CalibrationEventView): string {
   switch (event.suggestedChange) {
     case 'lengthen':
       return `Lengthen the interval from ${months(event.intervalMonths)} to ${months(event.suggestedIntervalMonths)}`;
@@ -58,7 +59,7 @@ export function suggestionHeadline(event: CalibrationEvent): string {
 }
 
 /** The due date a calibration leaves the item with: an accepted interval suggestion moves it from the same calibration day. */
-export function effectiveDueOn(event: CalibrationEvent): string {
+export function effectiveDueOn(event: CalibrationEventView): string {
   return event.intervalDecision === 'accepted' && event.suggestedIntervalMonths !== event.intervalMonths
     ? dueDate(event.performedOn, event.suggestedIntervalMonths)
     : event.dueOn;

@@ -6,7 +6,7 @@ import { buttonClasses } from '../../../components/button';
 import { actionsColumnType, DataGrid } from '../../../components/data-grid';
 import { assetTypeTitles, type AssetStatus, type AssetType } from '../../../lib/assets';
 import { formatCalendarDate } from '../../../lib/format';
-import type { DueRow } from '../api/types';
+import type { DueRow } from '../../../../shared/calibration/views';
 import { dateRange } from './calibration-words';
 
 const typeTitle = (type: string) => assetTypeTitles[type as AssetType] ?? type;

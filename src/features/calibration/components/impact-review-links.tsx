@@ -4,7 +4,7 @@ import { Notice } from '../../../components/notice';
 import { StatusChip } from '../../../components/status-chip';
 import { formatCalendarDate, formatCount } from '../../../lib/format';
 import { useImpactReviews } from '../api/get-impact-reviews';
-import type { ImpactReviewSummary } from '../api/types';
+import type { ImpactReviewSummary } from '../../../../shared/calibration/views';
 
 /** Open impact reviews as links, with how far each has got. */
 export function ImpactReviewLinks({ reviews }: { reviews: ImpactReviewSummary[] }) {

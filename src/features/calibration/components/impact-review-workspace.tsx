@@ -8,11 +8,11 @@ import { formatCalendarDate, formatDateTime } from '../../../lib/format';
 import { useAssessImpactBooking } from '../api/assess-impact-booking';
 import { useCloseImpactReview } from '../api/close-impact-review';
 import { useCreateImpactNotices } from '../api/create-impact-notices';
-import type { ImpactAssessment, ImpactBooking, ImpactNotice, ImpactReview } from '../api/types';
+import type { ImpactAssessment, ImpactBookingView, ImpactNoticesView, ImpactReviewView } from '../../../../shared/calibration/views';
 import { assessmentChoices, assessmentWords, dateRange } from './calibration-words';
 
 /** "Every job that used TRK-001 between its last passing evidence on … and the finding on …" */
-export function impactScope(review: ImpactReview, tag: string): string {
+export function impactScope(review: ImpactReviewView, tag: string): string {
   const found = formatCalendarDate(review.foundOn);
   const how = review.trigger === 'calibration' ? 'the lab found it out of tolerance as found' : 'a field check failed';
   return review.since
@@ -20,7 +20,7 @@ export function impactScope(review: ImpactReview, tag: string): string {
     : `Every job that used ${tag} up to the finding on ${found} (${how}) is listed below: no earlier passing evidence is on record.`;
 }
 
-function BookingAssessment({ review, booking, canAssess }: { review: ImpactReview; booking: ImpactBooking; canAssess: boolean }) {
+function BookingAssessment({ review, booking, canAssess }: { review: ImpactReviewView; booking: ImpactBookingView; canAssess: boolean }) {
   const assess = useAssessImpactBooking();
   const selectId = useId();
   const noteId = useId();
@@ -89,7 +89,7 @@ function BookingAssessment({ review, booking, canAssess }: { review: ImpactRevie
   );
 }
 
-function Drafts({ drafts }: { drafts: ImpactNotice[] }) {
+function Drafts({ drafts }: { drafts: ImpactNoticesView['drafts'] }) {
   return (
     <ul className="flex flex-col gap-3">
       {drafts.map((d) => (
@@ -108,7 +108,7 @@ function Drafts({ drafts }: { drafts: ImpactNotice[] }) {
 }
 
 /** Work through an impact review: assess each booking, draft and send the customer notices, close. */
-export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: ImpactReview; tag: string; canAssess: boolean }) {
+export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: ImpactReviewView; tag: string; canAssess: boolean }) {
   const notices = useCreateImpactNotices(review.assetId);
   const close = useCloseImpactReview();
   const total = review.bookings.length;

@@ -1,13 +1,13 @@
 import { Button } from '../../../components/button';
 import { Notice } from '../../../components/notice';
 import { useDecideInterval } from '../api/decide-interval';
-import type { CalibrationEvent } from '../api/types';
+import type { CalibrationEventView } from '../../../../shared/calibration/views';
 import { suggestionHeadline } from './calibration-words';
 
 const decisionWords = { accepted: 'Accepted', declined: 'Declined' } as const;
 
 /** The interval review's suggestion after a calibration, and the owner's answer (OIML D 10 / ILAC-G24 staircase method). */
-export function IntervalSuggestion({ event, canDecide, onDecided }: { event: CalibrationEvent; canDecide: boolean; onDecided?: (event: CalibrationEvent) => void }) {
+export function IntervalSuggestion({ event, canDecide, onDecided }: { event: CalibrationEventView; canDecide: boolean; onDecided?: (event: CalibrationEventView) => void }) {
   const decide = useDecideInterval();
   const moves = event.suggestedChange === 'lengthen' || event.suggestedChange === 'shorten';
   const outside = event.suggestedChange === 'outside_policy';

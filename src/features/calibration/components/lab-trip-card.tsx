@@ -3,11 +3,11 @@ import { Button } from '../../../components/button';
 import { Notice } from '../../../components/notice';
 import { formatCalendarDate } from '../../../lib/format';
 import { useSendLabTrip } from '../api/send-lab-trip';
-import type { LabTrip } from '../api/types';
+import type { LabTripView } from '../../../../shared/calibration/views';
 import { TripStateChip } from './calibration-words';
 
 /** One lab trip: where, when, which items; "Send to the lab" while it is planned. */
-export function LabTripCard({ trip, today, canSend, headingLevel = 3 }: { trip: LabTrip; today: string; canSend: boolean; headingLevel?: 2 | 3 }) {
+export function LabTripCard({ trip, today, canSend, headingLevel = 3 }: { trip: LabTripView; today: string; canSend: boolean; headingLevel?: 2 | 3 }) {
   const send = useSendLabTrip();
   const Heading = headingLevel === 2 ? 'h2' : 'h3';
   const late = trip.state === 'at_lab' && trip.expectedBackOn < today;

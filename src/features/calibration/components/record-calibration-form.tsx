@@ -5,12 +5,13 @@ import { Button } from '../../../components/button';
 import { Field, SelectField } from '../../../components/field';
 import { AlertIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
-import type { AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
 import { dueDate } from '../../../lib/calibration';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { formatCalendarDate } from '../../../lib/format';
 import { useRecordCalibration } from '../api/record-calibration';
-import type { AsFound, CalibrationEvent } from '../api/types';
+import type { AsFound } from '../../../../shared/calibration/interval-review';
+import type { CalibrationEventView } from '../../../../shared/calibration/views';
 import { resultChoices, resultWords } from './calibration-words';
 import { UploadProgress } from '../../../components/upload-progress';
 
@@ -110,7 +111,7 @@ function DuePreview({ fallbackMonths }: { fallbackMonths: number }) {
 }
 
 /** Record the lab's certificate: live due-date preview, upload progress, server errors back on their fields. */
-export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetView; today: string; onSaved: (event: CalibrationEvent) => void }) {
+export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetView; today: string; onSaved: (event: CalibrationEventView) => void }) {
   const [progress, setProgress] = useState<number | null>(null);
   const record = useRecordCalibration((f) => setProgress(f));
   const [problem, setProblem] = useState<string>();

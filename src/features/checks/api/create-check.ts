@@ -2,7 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { invalidateAssetStatus } from '../../../lib/asset-status';
 import { checksKeys } from './keys';
-import type { CheckPayload, CheckView } from './types';
+import type { CheckPayload } from '../../../../shared/schemas/checks';
+import type { CheckView } from '../../../../shared/checks/views';
 
 export function createCheck(payload: CheckPayload): Promise<CheckView> {
   return apiClient.post<CheckView>('/checks', payload);

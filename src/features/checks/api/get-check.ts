@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { checksKeys } from './keys';
-import type { CheckView } from './types';
+import type { CheckView } from '../../../../shared/checks/views';
 
 export function getCheck(id: string, signal?: AbortSignal): Promise<CheckView> {
   return apiClient.get<CheckView>(`/checks/${encodeURIComponent(id)}`, { signal });

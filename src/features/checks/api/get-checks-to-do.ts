@@ -1,21 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { checksKeys } from './keys';
+import type { Page } from '../../../../shared/lists/page';
+import type { CheckToDo } from '../../../../shared/checks/views';
 
-/** A tip position in the kit I carry now or next whose latest validation did not pass (or never happened). */
-export interface CheckToDo {
-  assetId: string;
-  assetTag: string;
-  position: string;
-  lastDecision: 'pass' | 'fail' | null;
-  lastCheckedAt: string | null;
-  bookingId: string;
-  startsOn: string;
-  bookingState: 'out' | 'reserved';
-}
-
-export function getChecksToDo(signal?: AbortSignal): Promise<{ items: CheckToDo[]; total: number }> {
-  return apiClient.get('/checks/to-do', { signal });
+export function getChecksToDo(signal?: AbortSignal): Promise<Page<CheckToDo>> {
+  return apiClient.get<Page<CheckToDo>>('/checks/to-do', { signal });
 }
 
 export const checksToDoQueryOptions = () => queryOptions({ queryKey: checksKeys.toDo(), queryFn: ({ signal }) => getChecksToDo(signal) });

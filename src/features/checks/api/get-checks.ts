@@ -1,10 +1,11 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { checksKeys } from './keys';
-import type { CheckListParams, CheckPage } from './types';
+import { checksKeys, type CheckListParams } from './keys';
+import type { Page } from '../../../../shared/lists/page';
+import type { CheckView } from '../../../../shared/checks/views';
 
-export function getChecks(params: CheckListParams, signal?: AbortSignal): Promise<CheckPage> {
-  return apiClient.get<CheckPage>('/checks', { query: { ...params }, signal });
+export function getChecks(params: CheckListParams, signal?: AbortSignal): Promise<Page<CheckView>> {
+  return apiClient.get<Page<CheckView>>('/checks', { query: { ...params }, signal });
 }
 
 export const checksQueryOptions = (params: CheckListParams) =>

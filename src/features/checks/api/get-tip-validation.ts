@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { checksKeys } from './keys';
-import type { TipValidationStatus } from './types';
+import type { TipValidationStatus } from '../../../../shared/checks/views';
 
 /** A tip's validation state per mounting position (validated only when the latest check there passed). */
 export function getTipValidation(assetId: string, signal?: AbortSignal): Promise<TipValidationStatus> {

@@ -1,4 +1,11 @@
-import type { CheckListParams } from './types';
+import type { CheckKind } from '../../../lib/checks';
+
+export interface CheckListParams {
+  assetId?: string;
+  kind?: CheckKind;
+  limit: number;
+  offset: number;
+}
 
 export const checksKeys = {
   all: ['checks'] as const,

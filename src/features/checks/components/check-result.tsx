@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { Notice } from '../../../components/notice';
 import { FactList } from '../../../components/panel';
 import { formatNumber, useDateFormat } from '../../../lib/format';
-import type { CheckView } from '../api/types';
+import type { CheckView } from '../../../../shared/checks/views';
 import { checkKindWords, decisionRuleWords, positionWords, toleranceText, um } from './check-words';
 import { DecisionMark } from './decision-mark';
 import { ReadingsSketch } from './readings-sketch';

@@ -14,7 +14,7 @@ import {
   type Point,
   type Tolerance,
 } from '../../../lib/checks';
-import type { CheckPayload } from '../api/types';
+import type { CheckPayload } from '../../../../shared/schemas/checks';
 import { parseDecimal, parseNumberList, toPoint, type PointText } from './parse-readings';
 
 export const MAX_TIP_READINGS = 20;

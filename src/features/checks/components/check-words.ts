@@ -1,7 +1,7 @@
 import type { AssetType, TipPosition } from '../../../lib/assets';
 import type { CheckKind, DecisionRule, Tolerance } from '../../../lib/checks';
 import { formatNumber } from '../../../lib/format';
-import type { TipValidationState } from '../api/types';
+import type { TipValidationState } from '../../../../shared/checks/views';
 
 export { checkKindWords } from '../../../lib/checks';
 

@@ -7,7 +7,8 @@ import { Field, SelectField } from '../../../components/field';
 import { PlusIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
 import { LaserCaution } from '../../../components/safety-cautions';
-import { assetTypeTitles, type AssetView, type TipPosition } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
+import { assetTypeTitles, type TipPosition } from '../../../lib/assets';
 import {
   DEFAULT_TIP_READINGS,
   expectedLengthMm,
@@ -21,7 +22,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { formatNumber } from '../../../lib/format';
 import { useCreateCheck } from '../api/create-check';
 import { useTipValidation } from '../api/get-tip-validation';
-import type { CheckView } from '../api/types';
+import type { CheckView } from '../../../../shared/checks/views';
 import { CheckPreview } from './check-preview';
 import { CheckResult } from './check-result';
 import {

@@ -1,5 +1,5 @@
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
-import type { TipValidationState, TipValidationStatus } from '../api/types';
+import type { TipValidationState, TipValidationStatus } from '../../../../shared/checks/views';
 import { positionWords, tipStateWords } from './check-words';
 
 const tones: Record<TipValidationState, StatusTone> = { validated: 'ok', not_validated: 'warn', failed: 'bad' };

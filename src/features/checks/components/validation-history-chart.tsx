@@ -1,6 +1,6 @@
 import type { TipPosition } from '../../../lib/assets';
 import { formatDate, formatNumber } from '../../../lib/format';
-import type { CheckView } from '../api/types';
+import type { CheckView } from '../../../../shared/checks/views';
 import { positionWords } from './check-words';
 
 type TipCheck = Extract<CheckView, { kind: 'tip_validation' }>;

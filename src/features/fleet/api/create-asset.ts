@@ -1,9 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { fleetKeys } from './keys';
-import type { AssetView, CreateAssetInput } from './types';
+import type { AssetView } from '../../../../shared/assets/views';
+import type { CreateAssetPayload } from '../../../../shared/schemas/assets';
 
-export function createAsset(input: CreateAssetInput): Promise<AssetView> {
+export function createAsset(input: CreateAssetPayload): Promise<AssetView> {
   return apiClient.post<AssetView>('/assets', input);
 }
 

@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, apiUrl } from '../../../lib/api-client';
 import { fleetKeys } from './keys';
-import type { EquipmentRecord } from './types';
+import type { EquipmentRecordView } from '../../../../shared/assets/views';
 
-export function getAssetRecord(id: string, signal?: AbortSignal): Promise<EquipmentRecord> {
-  return apiClient.get<EquipmentRecord>(`/assets/${encodeURIComponent(id)}/record`, { signal });
+export function getAssetRecord(id: string, signal?: AbortSignal): Promise<EquipmentRecordView> {
+  return apiClient.get<EquipmentRecordView>(`/assets/${encodeURIComponent(id)}/record`, { signal });
 }
 
 /** The same record as a PDF (GET /api/assets/:id/record.pdf). */

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { fleetKeys } from './keys';
-import type { AssetView } from './types';
+import type { AssetView } from '../../../../shared/assets/views';
 
 export function getAsset(id: string, signal?: AbortSignal): Promise<AssetView> {
   return apiClient.get<AssetView>(`/assets/${encodeURIComponent(id)}`, { signal });

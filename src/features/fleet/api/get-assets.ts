@@ -1,7 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { fleetKeys } from './keys';
-import type { AssetFilter, AssetListParams, AssetPage } from './types';
+import { fleetKeys, type AssetFilter, type AssetListParams } from './keys';
+import type { Page } from '../../../../shared/lists/page';
+import type { AssetView } from '../../../../shared/assets/views';
 
 /** The filter as the API's query string values (lists comma-separated, empty ones left out). */
 export function assetFilterQuery(filter: AssetFilter): Record<string, string | undefined> {
@@ -15,8 +16,8 @@ export function assetFilterQuery(filter: AssetFilter): Record<string, string | u
   };
 }
 
-export function getAssets(params: AssetListParams, signal?: AbortSignal): Promise<AssetPage> {
-  return apiClient.get<AssetPage>('/assets', {
+export function getAssets(params: AssetListParams, signal?: AbortSignal): Promise<Page<AssetView>> {
+  return apiClient.get<Page<AssetView>>('/assets', {
     query: { ...assetFilterQuery(params), sort: params.sort, limit: params.limit, offset: params.offset },
     signal,
   });

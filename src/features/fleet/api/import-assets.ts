@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiUrl, uploadFile } from '../../../lib/api-client';
 import { fleetKeys } from './keys';
-import type { ImportResult } from './types';
+import type { AssetImportResult } from '../../../../shared/assets/views';
 
 export interface ImportAssetsInput {
   file: File;
@@ -11,8 +11,8 @@ export interface ImportAssetsInput {
 }
 
 /** POST /api/assets/import?mode=… with the raw CSV as the body, reporting upload progress. */
-export function importAssets({ file, mode, onProgress }: ImportAssetsInput): Promise<ImportResult> {
-  return uploadFile<ImportResult>('/assets/import', file, { query: { mode }, contentType: 'text/csv', onProgress });
+export function importAssets({ file, mode, onProgress }: ImportAssetsInput): Promise<AssetImportResult> {
+  return uploadFile<AssetImportResult>('/assets/import', file, { query: { mode }, contentType: 'text/csv', onProgress });
 }
 
 /** The columns explained: a header row and two example rows. */

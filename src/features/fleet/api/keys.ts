@@ -1,5 +1,23 @@
 import { fleetQueryRoot } from '../../../lib/asset-status';
-import type { AssetFilter, AssetListParams } from './types';
+import type { AssetStatus, AssetType } from '../../../lib/assets';
+import type { CalibrationState } from '../../../lib/calibration';
+
+/** The fleet list's filters (the filter bar; also the CSV export's). */
+export interface AssetFilter {
+  q?: string;
+  type?: AssetType[];
+  status?: AssetStatus[];
+  calibration?: CalibrationState[];
+  /** A kit's id, or `none` for assets in no kit. */
+  kitId?: string;
+}
+
+export interface AssetListParams extends AssetFilter {
+  /** A sort field, `-` first for descending (e.g. `-dueOn`). */
+  sort?: string;
+  limit: number;
+  offset: number;
+}
 
 export const fleetKeys = {
   all: fleetQueryRoot,

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { fleetKeys } from './keys';
-import type { AssetView } from './types';
+import type { AssetView } from '../../../../shared/assets/views';
 
 /** Finds an asset by its asset tag, RFID tag or QR label payload; 404 when nothing matches. */
 export function lookupAsset(code: string, signal?: AbortSignal): Promise<AssetView> {

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { fleetKeys } from './keys';
-import type { AssetView } from './types';
+import type { AssetView } from '../../../../shared/assets/views';
 
 export interface RetireAssetInput {
   id: string;

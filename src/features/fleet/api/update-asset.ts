@@ -1,11 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { fleetKeys } from './keys';
-import type { AssetInput, AssetView } from './types';
+import type { AssetView } from '../../../../shared/assets/views';
+import type { UpdateAssetPayload } from '../../../../shared/schemas/assets';
 
 export interface UpdateAssetInput {
   id: string;
-  changes: Partial<AssetInput>;
+  changes: UpdateAssetPayload;
 }
 
 export function updateAsset({ id, changes }: UpdateAssetInput): Promise<AssetView> {

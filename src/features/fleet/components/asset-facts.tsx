@@ -3,7 +3,8 @@ import { FactList, Panel } from '../../../components/panel';
 import { Link } from 'react-router-dom';
 import { AssetStatusChip, CalibrationChip } from '../../../components/asset-status';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
-import { assetTypeTitles, typesWithFirmware, type AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
+import { assetTypeTitles, typesWithFirmware } from '../../../lib/assets';
 import { formatWattHours, shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
 import { formatCalendarDate, formatCount, formatMoney, formatNumber, useDateFormat } from '../../../lib/format';
 

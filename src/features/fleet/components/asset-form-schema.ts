@@ -1,6 +1,7 @@
 import * as Yup from 'yup';
-import { assetTypes, typesWithFirmware, type AssetType, type AssetView } from '../../../lib/assets';
-import type { AssetInput, CreateAssetInput } from '../api/types';
+import type { AssetView } from '../../../../shared/assets/views';
+import { assetTypes, typesWithFirmware, type AssetType } from '../../../lib/assets';
+import type { CreateAssetPayload, UpdateAssetPayload } from '../../../../shared/schemas/assets';
 
 /** Numbers as Formik holds them: a number, or '' while the box is empty. */
 type NumberInput = number | '';
@@ -233,7 +234,7 @@ export function assetToFormValues(asset: AssetView, digits: number): AssetFormVa
 }
 
 /** The payload for POST (empty fields left out) or PATCH (empty fields cleared with null). */
-export function formValuesToPayload(values: AssetFormValues, mode: 'create' | 'edit', digits: number): CreateAssetInput | AssetInput {
+export function formValuesToPayload(values: AssetFormValues, mode: 'create' | 'edit', digits: number): CreateAssetPayload | UpdateAssetPayload {
   const type = values.type as AssetType;
   const empty = mode === 'create' ? undefined : null;
   const optional = (v: string) => (v.trim() ? v.trim() : empty);
@@ -247,7 +248,7 @@ export function formValuesToPayload(values: AssetFormValues, mode: 'create' | 'e
     } else if (value !== '') specs[key] = value;
   }
   const cal = values.calibration;
-  const payload: AssetInput = {
+  const payload: UpdateAssetPayload = {
     assetTag: values.assetTag.trim(),
     serialNumber: values.serialNumber.trim(),
     manufacturer: optional(values.manufacturer),

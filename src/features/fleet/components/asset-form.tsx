@@ -6,13 +6,14 @@ import { Button } from '../../../components/button';
 import { CheckboxField, CheckboxGroup, Field, SelectField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
-import { assetTypes, assetTypeTitles, typesWithFirmware, type AssetType, type AssetView } from '../../../lib/assets';
+import type { AssetView } from '../../../../shared/assets/views';
+import { assetTypes, assetTypeTitles, typesWithFirmware, type AssetType } from '../../../lib/assets';
 import { formatWattHours, shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
 import { calibrationState, dueOnForPlan, todayIn } from '../../../lib/calibration';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits, formatCalendarDate, formatNumber } from '../../../lib/format';
 import { useCreateAsset } from '../api/create-asset';
-import type { AssetInput, CreateAssetInput } from '../api/types';
+import type { CreateAssetPayload, UpdateAssetPayload } from '../../../../shared/schemas/assets';
 import { useUpdateAsset } from '../api/update-asset';
 import {
   assetFieldLabels,
@@ -163,8 +164,8 @@ export function AssetForm({ mode, asset, timeZone, currency, dueSoonDays, onSave
           const payload = formValuesToPayload(values, mode, digits);
           const saved =
             mode === 'create'
-              ? await create.mutateAsync(payload as CreateAssetInput)
-              : await update.mutateAsync({ id: asset!.id, changes: payload as AssetInput });
+              ? await create.mutateAsync(payload as CreateAssetPayload)
+              : await update.mutateAsync({ id: asset!.id, changes: payload as UpdateAssetPayload });
           onSaved(saved);
         } catch (error) {
           setProblem(

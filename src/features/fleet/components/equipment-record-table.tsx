@@ -1,4 +1,4 @@
-import type { EquipmentRecordItem } from '../api/types';
+import type { EquipmentRecordItem } from '../../../../shared/assets/views';
 
 /** The §6.4.13 items beside what Nestkeeper holds for each; gaps are said plainly. */
 export function EquipmentRecordTable({ items }: { items: EquipmentRecordItem[] }) {

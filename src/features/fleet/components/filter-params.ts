@@ -1,6 +1,6 @@
 import { assetStatuses, assetTypes, type AssetStatus, type AssetType } from '../../../lib/assets';
 import { calibrationStates, type CalibrationState } from '../../../lib/calibration';
-import type { AssetFilter } from '../api/types';
+import type { AssetFilter } from '../api/keys';
 
 /** The fleet filter lives in the address (so Back returns to the same list, and links can share it). */
 export function filterFromSearchParams(params: URLSearchParams): AssetFilter {

@@ -5,7 +5,7 @@ import { ScanIcon, SearchIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
 import { lookupAssetQueryOptions } from '../api/lookup-asset';
-import type { AssetView } from '../api/types';
+import type { AssetView } from '../../../../shared/assets/views';
 import { canScanQr, QrScanner } from './qr-scanner';
 
 /**

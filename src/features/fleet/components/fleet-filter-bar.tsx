@@ -7,7 +7,7 @@ import { SearchBox } from '../../../components/search-box';
 import { assetStatuses, assetTypes, assetTypeTitles, type AssetStatus, type AssetType } from '../../../lib/assets';
 import { calibrationStates, type CalibrationState } from '../../../lib/calibration';
 import { useDebouncedValue } from '../../../lib/use-debounced-value';
-import type { AssetFilter } from '../api/types';
+import type { AssetFilter } from '../api/keys';
 
 export interface KitOption {
   value: string;

@@ -7,7 +7,8 @@ import { InfiniteDataGrid, type RowsRequest } from '../../../components/infinite
 import { assetTypeTitles } from '../../../lib/assets';
 import { formatCalendarDate } from '../../../lib/format';
 import { assetsQueryOptions } from '../api/get-assets';
-import type { AssetFilter, AssetView } from '../api/types';
+import type { AssetFilter } from '../api/keys';
+import type { AssetView } from '../../../../shared/assets/views';
 
 /** Grid columns that the server can sort by (colId = the API's sort field). */
 const serverSortable = new Set(['assetTag', 'type', 'serialNumber', 'manufacturer', 'model', 'location', 'status', 'dueOn']);

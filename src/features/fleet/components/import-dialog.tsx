@@ -6,15 +6,15 @@ import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
 import { formatCount } from '../../../lib/format';
 import { importTemplateUrl, useImportAssets } from '../api/import-assets';
-import type { ImportProblem, ImportResult } from '../api/types';
+import type { AssetImportResult, ImportProblem } from '../../../../shared/assets/views';
 import { UploadProgress } from '../../../components/upload-progress';
 
 type Step =
   | { kind: 'pick' }
   | { kind: 'uploading'; mode: 'preview' | 'commit'; progress: number }
-  | { kind: 'checked'; result: ImportResult }
+  | { kind: 'checked'; result: AssetImportResult }
   | { kind: 'done'; created: number }
-  | { kind: 'failed'; message: string; problems?: ImportProblem[]; result?: ImportResult };
+  | { kind: 'failed'; message: string; problems?: ImportProblem[]; result?: AssetImportResult };
 
 function problemsFrom(error: unknown): ImportProblem[] | undefined {
   if (!isApiError(error) || error.code !== 'import_invalid') return undefined;
@@ -48,7 +48,7 @@ function ProblemsTable({ problems }: { problems: ImportProblem[] }) {
   );
 }
 
-function PreviewTable({ result }: { result: ImportResult }) {
+function PreviewTable({ result }: { result: AssetImportResult }) {
   if (!result.preview.length) return null;
   return (
     <div className="max-h-72 overflow-auto rounded-md border border-paper-line">

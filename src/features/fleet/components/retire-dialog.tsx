@@ -7,7 +7,7 @@ import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useRetireAsset } from '../api/retire-asset';
-import type { AssetView } from '../api/types';
+import type { AssetView } from '../../../../shared/assets/views';
 
 const schema = Yup.object({
   reason: Yup.string().trim().required('Say briefly why the item leaves the fleet.').min(3, 'Say briefly why — a few words at least.').max(500, 'Keep the reason under 500 characters.'),

@@ -1,11 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { holdsKeys } from './keys';
-import type { HoldList } from './types';
+import type { Page } from '../../../../shared/lists/page';
+import type { HoldView } from '../../../../shared/holds/views';
 
 /** An item's holds, newest first; the open one has no `releasedAt`. */
-export function getHolds(assetId: string, signal?: AbortSignal): Promise<HoldList> {
-  return apiClient.get<HoldList>(`/assets/${encodeURIComponent(assetId)}/holds`, { signal });
+export function getHolds(assetId: string, signal?: AbortSignal): Promise<Page<HoldView>> {
+  return apiClient.get<Page<HoldView>>(`/assets/${encodeURIComponent(assetId)}/holds`, { signal });
 }
 
 export const holdsQueryOptions = (assetId: string) =>

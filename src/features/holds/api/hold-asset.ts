@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { invalidateAssetStatus } from '../../../lib/asset-status';
-import type { HoldView } from './types';
+import type { HoldView } from '../../../../shared/holds/views';
 
 export interface HoldAssetInput {
   assetId: string;

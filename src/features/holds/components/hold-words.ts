@@ -1,4 +1,4 @@
-import type { HoldReason } from '../api/types';
+import type { HoldReason } from '../../../../shared/holds/views';
 
 export const holdReasonWords: Record<HoldReason, string> = {
   incident: 'Damage or loss reported',

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { incidentsKeys } from './keys';
-import type { IncidentView } from './types';
+import type { IncidentView } from '../../../../shared/incidents/views';
 
 export function getIncident(id: string, signal?: AbortSignal): Promise<IncidentView> {
   return apiClient.get<IncidentView>(`/incidents/${encodeURIComponent(id)}`, { signal });

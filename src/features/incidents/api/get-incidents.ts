@@ -1,10 +1,11 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
-import { incidentsKeys } from './keys';
-import type { IncidentListParams, IncidentPage } from './types';
+import { incidentsKeys, type IncidentListParams } from './keys';
+import type { Page } from '../../../../shared/lists/page';
+import type { IncidentView } from '../../../../shared/incidents/views';
 
-export function getIncidents(params: IncidentListParams, signal?: AbortSignal): Promise<IncidentPage> {
-  return apiClient.get<IncidentPage>('/incidents', {
+export function getIncidents(params: IncidentListParams, signal?: AbortSignal): Promise<Page<IncidentView>> {
+  return apiClient.get<Page<IncidentView>>('/incidents', {
     query: { assetId: params.assetId, state: params.state?.length ? params.state.join(',') : undefined, limit: params.limit, offset: params.offset },
     signal,
   });

@@ -2,7 +2,19 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { uploadForm } from '../../../lib/api-client';
 import { invalidateAssetStatus } from '../../../lib/asset-status';
 import { incidentsKeys } from './keys';
-import type { IncidentView, ReportIncidentInput } from './types';
+import type { IncidentKind } from '../../../../shared/incidents/vocabulary';
+import type { IncidentView } from '../../../../shared/incidents/views';
+
+export interface ReportIncidentInput {
+  assetId: string;
+  kind: IncidentKind;
+  description: string;
+  /** ISO date-time with offset. */
+  occurredAt: string;
+  location?: string;
+  bookingId?: string;
+  photos: File[];
+}
 
 /** Multipart: the text fields, then up to six photos under "photos"; progress 0…1 as it goes up. */
 export function reportIncident(input: ReportIncidentInput, onProgress?: (fraction: number) => void): Promise<IncidentView> {

@@ -4,7 +4,7 @@ import { DownloadIcon } from '../../../components/icons';
 import { FactList, Panel } from '../../../components/panel';
 import { assetTypeTitles } from '../../../lib/assets';
 import { formatFileSize, formatMoney, useDateFormat } from '../../../lib/format';
-import type { IncidentView } from '../api/types';
+import type { IncidentView } from '../../../../shared/incidents/views';
 import { IncidentStateChip, incidentKindWords } from './incident-words';
 
 export function IncidentFacts({ incident, currency }: { incident: IncidentView; currency: string }) {

@@ -3,7 +3,7 @@ import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { formatCount, useDateFormat } from '../../../lib/format';
 import { useIncidents } from '../api/get-incidents';
-import type { IncidentListParams } from '../api/types';
+import type { IncidentListParams } from '../api/keys';
 import { IncidentStateChip, incidentKindWords } from './incident-words';
 
 /** A short list of incidents (home pages, the asset page), each a link to its page. */

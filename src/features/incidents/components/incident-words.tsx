@@ -1,5 +1,5 @@
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
-import type { IncidentKind, IncidentState } from '../api/types';
+import type { IncidentKind, IncidentState } from '../../../../shared/incidents/vocabulary';
 
 /** What people pick when they report; the order is the order of the choices. */
 export const incidentKindWords: Record<IncidentKind, string> = {

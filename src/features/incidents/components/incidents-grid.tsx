@@ -4,7 +4,7 @@ import { useNavigate } from 'react-router-dom';
 import { DataGrid } from '../../../components/data-grid';
 import { assetTypeTitles } from '../../../lib/assets';
 import { isoTimestamp, useDateFormat } from '../../../lib/format';
-import type { IncidentView } from '../api/types';
+import type { IncidentView } from '../../../../shared/incidents/views';
 import { IncidentStateChip, incidentKindWords, incidentStateWords } from './incident-words';
 
 /** Every incident as a table: sort, filter, export; a click opens it. */

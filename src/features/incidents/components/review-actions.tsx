@@ -9,7 +9,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits } from '../../../lib/format';
 import { parseAmount } from '../../../lib/money';
 import { useUpdateIncident } from '../api/update-incident';
-import type { IncidentView } from '../api/types';
+import type { IncidentView } from '../../../../shared/incidents/views';
 
 /** "Start review" and "Resolve" for those who review incidents. A resolved incident is closed. */
 export function ReviewActions({ incident, currency }: { incident: IncidentView; currency: string }) {

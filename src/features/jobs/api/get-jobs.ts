@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { jobsKeys } from './keys';
-import type { JobList } from './types';
+import type { ScheduledJobsView } from '../../../../shared/jobs/views';
 
-export function getJobs(signal?: AbortSignal): Promise<JobList> {
-  return apiClient.get<JobList>('/admin/jobs', { signal });
+export function getJobs(signal?: AbortSignal): Promise<ScheduledJobsView> {
+  return apiClient.get<ScheduledJobsView>('/admin/jobs', { signal });
 }
 
 export const jobsQueryOptions = () =>

@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { jobsKeys } from './keys';
-import type { JobRun } from './types';
+import type { JobRunReply } from '../../../../shared/jobs/views';
 
-export function runJob(name: string): Promise<{ run: JobRun }> {
-  return apiClient.post<{ run: JobRun }>(`/admin/jobs/${encodeURIComponent(name)}/run`);
+export function runJob(name: string): Promise<JobRunReply> {
+  return apiClient.post<JobRunReply>(`/admin/jobs/${encodeURIComponent(name)}/run`);
 }
 
 export function useRunJob() {

@@ -7,10 +7,10 @@ import { isApiError } from '../../../lib/api-client';
 import { useDateFormat } from '../../../lib/format';
 import { useJobs } from '../api/get-jobs';
 import { useRunJob } from '../api/run-job';
-import type { JobRun, ScheduledJob } from '../api/types';
+import type { JobRunView, ScheduledJobView } from '../../../../shared/jobs/views';
 import { JobRunStatus } from './job-run-status';
 
-type RunOutcome = { run?: JobRun; error?: string };
+type RunOutcome = { run?: JobRunView; error?: string };
 
 /** Scheduled jobs, their last run, and a "Run now" per job. Few rows, so a plain table. */
 export function JobsTable() {
@@ -31,7 +31,7 @@ export function JobsTable() {
     return <EmptyState title="No scheduled jobs">The server has no scheduled jobs registered.</EmptyState>;
   }
 
-  const runNow = (job: ScheduledJob) => {
+  const runNow = (job: ScheduledJobView) => {
     setOutcomes((o) => ({ ...o, [job.name]: {} }));
     runJob.mutate(job.name, {
       onSuccess: ({ run }) => setOutcomes((o) => ({ ...o, [job.name]: { run } })),
@@ -127,7 +127,7 @@ function RunOutcomeNote({ outcome }: { outcome: RunOutcome }) {
 }
 
 /** `{ lateBookings: 2, firms: 1 }` → "late bookings 2, firms 1". */
-function summaryWords(summary: NonNullable<JobRun['summary']>): string {
+function summaryWords(summary: NonNullable<JobRunView['summary']>): string {
   return Object.entries(summary)
     .map(([key, value]) => `${key.replace(/([A-Z])/g, ' $1').toLowerCase()} ${value}`)
     .join(', ');

@@ -1,10 +1,17 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { kitsKeys } from './keys';
-import type { KitInput, KitView } from './types';
+import type { KitWithMembersView } from '../../../../shared/assets/views';
 
-export function createKit(input: KitInput): Promise<KitView> {
-  return apiClient.post<KitView>('/kits', input);
+/** A kit's name, notes and (replacing the whole list) its members. */
+export interface KitInput {
+  name: string;
+  notes?: string | null;
+  memberIds?: string[];
+}
+
+export function createKit(input: KitInput): Promise<KitWithMembersView> {
+  return apiClient.post<KitWithMembersView>('/kits', input);
 }
 
 export function useCreateKit() {

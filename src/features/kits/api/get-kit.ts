@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { kitsKeys } from './keys';
-import type { KitWithMembers } from './types';
+import type { KitWithMembersView } from '../../../../shared/assets/views';
 
-export function getKit(id: string, signal?: AbortSignal): Promise<KitWithMembers> {
-  return apiClient.get<KitWithMembers>(`/kits/${encodeURIComponent(id)}`, { signal });
+export function getKit(id: string, signal?: AbortSignal): Promise<KitWithMembersView> {
+  return apiClient.get<KitWithMembersView>(`/kits/${encodeURIComponent(id)}`, { signal });
 }
 
 export const kitQueryOptions = (id: string) =>

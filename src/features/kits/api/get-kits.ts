@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { kitsKeys } from './keys';
-import type { KitPage } from './types';
+import type { Page } from '../../../../shared/lists/page';
+import type { KitView } from '../../../../shared/assets/views';
 
-export function getKits(page: { limit: number; offset: number }, signal?: AbortSignal): Promise<KitPage> {
-  return apiClient.get<KitPage>('/kits', { query: page, signal });
+export function getKits(page: { limit: number; offset: number }, signal?: AbortSignal): Promise<Page<KitView>> {
+  return apiClient.get<Page<KitView>>('/kits', { query: page, signal });
 }
 
 export const kitsQueryOptions = (page = { limit: 500, offset: 0 }) =>

@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, apiUrl } from '../../../lib/api-client';
 import { kitsKeys } from './keys';
-import type { ShippingSheet } from './types';
+import type { ShippingSheetView } from '../../../../shared/assets/views';
 
-export function getShippingSheet(id: string, signal?: AbortSignal): Promise<ShippingSheet> {
-  return apiClient.get<ShippingSheet>(`/kits/${encodeURIComponent(id)}/shipping-sheet`, { signal });
+export function getShippingSheet(id: string, signal?: AbortSignal): Promise<ShippingSheetView> {
+  return apiClient.get<ShippingSheetView>(`/kits/${encodeURIComponent(id)}/shipping-sheet`, { signal });
 }
 
 export const shippingSheetPdfUrl = (id: string) => apiUrl(`/kits/${encodeURIComponent(id)}/shipping-sheet.pdf`);

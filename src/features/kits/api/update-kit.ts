@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, isApiError } from '../../../lib/api-client';
+import type { KitInput } from './create-kit';
 import { kitsKeys } from './keys';
-import type { KitInput, KitMemberConflict, KitView } from './types';
+import type { KitMemberConflict, KitWithMembersView } from '../../../../shared/assets/views';
 
 export interface UpdateKitInput {
   id: string;
@@ -9,8 +10,8 @@ export interface UpdateKitInput {
   changes: Partial<KitInput>;
 }
 
-export function updateKit({ id, changes }: UpdateKitInput): Promise<KitView> {
-  return apiClient.patch<KitView>(`/kits/${encodeURIComponent(id)}`, changes);
+export function updateKit({ id, changes }: UpdateKitInput): Promise<KitWithMembersView> {
+  return apiClient.patch<KitWithMembersView>(`/kits/${encodeURIComponent(id)}`, changes);
 }
 
 /** The assets a 409 names as already belonging to another kit. */

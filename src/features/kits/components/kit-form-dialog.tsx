@@ -7,7 +7,7 @@ import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateKit } from '../api/create-kit';
-import type { KitView } from '../api/types';
+import type { KitView } from '../../../../shared/assets/views';
 import { useUpdateKit } from '../api/update-kit';
 
 const schema = Yup.object({

@@ -10,7 +10,7 @@ import { assetTypeTitles } from '../../../lib/assets';
 import { formatCalendarDate } from '../../../lib/format';
 import { useDebouncedValue } from '../../../lib/use-debounced-value';
 import { useKitCandidates } from '../api/get-kit-candidates';
-import type { AssetView, KitWithMembers } from '../api/types';
+import type { AssetView, KitWithMembersView } from '../../../../shared/assets/views';
 import { memberConflicts, useUpdateKit } from '../api/update-kit';
 
 /** The members at a glance: one card each with its status and calibration. */
@@ -91,7 +91,7 @@ export function KitMembers({
   canWrite,
   onMembersChanged,
 }: {
-  kit: KitWithMembers;
+  kit: KitWithMembersView;
   canWrite: boolean;
   /** Told after a member was added or removed (other views show kit membership too). */
   onMembersChanged?: () => void;

@@ -3,7 +3,7 @@ import type { CustomCellRendererProps } from 'ag-grid-react';
 import { useMemo } from 'react';
 import { DataGrid } from '../../../components/data-grid';
 import { formatCount } from '../../../lib/format';
-import type { KitView } from '../api/types';
+import type { KitView } from '../../../../shared/assets/views';
 import { ReadinessChip, readinessReasonText } from './readiness';
 
 export function KitsTable({ kits, onOpen }: { kits: KitView[] | undefined; onOpen: (kit: KitView) => void }) {

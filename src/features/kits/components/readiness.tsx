@@ -1,5 +1,5 @@
 import { StatusChip } from '../../../components/status-chip';
-import type { KitReadiness } from '../api/types';
+import type { KitReadiness } from '../../../../shared/assets/views';
 
 const reasonWords: Record<KitReadiness['reasons'][number]['reason'], string> = {
   not_ready: 'not on the shelf ready',

@@ -1,10 +1,11 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { mailboxKeys, type MailboxPageParams } from './keys';
-import type { MailPage } from './types';
+import type { Page } from '../../../../shared/lists/page';
+import type { MailMessageView } from '../../../../shared/notifications/views';
 
-export function getMessages(page: MailboxPageParams, signal?: AbortSignal): Promise<MailPage> {
-  return apiClient.get<MailPage>('/mailbox', { query: { limit: page.limit, offset: page.offset }, signal });
+export function getMessages(page: MailboxPageParams, signal?: AbortSignal): Promise<Page<MailMessageView>> {
+  return apiClient.get<Page<MailMessageView>>('/mailbox', { query: { limit: page.limit, offset: page.offset }, signal });
 }
 
 export const messagesQueryOptions = (page: MailboxPageParams) =>

@@ -2,14 +2,14 @@ import { useState } from 'react';
 import { Button } from '../../../components/button';
 import { ArrowLeftIcon } from '../../../components/icons';
 import { formatFileSize, useDateFormat } from '../../../lib/format';
-import type { MailMessage } from '../api/types';
+import type { MailMessageView } from '../../../../shared/notifications/views';
 
 /**
  * Shows one message. The plain-text body is the default; an HTML body is only
  * ever rendered inside an iframe with an empty sandbox (no scripts, no forms,
  * no same-origin access, no navigation).
  */
-export function MessageReader({ message, onBack }: { message: MailMessage; onBack?: () => void }) {
+export function MessageReader({ message, onBack }: { message: MailMessageView; onBack?: () => void }) {
   const fmt = useDateFormat();
   const hasText = Boolean(message.text?.trim());
   const hasHtml = Boolean(message.html?.trim());

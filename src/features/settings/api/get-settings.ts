@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { settingsKeys } from './keys';
-import type { OrganizationSettings } from './types';
+import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 
-export function getSettings(signal?: AbortSignal): Promise<OrganizationSettings> {
-  return apiClient.get<OrganizationSettings>('/settings', { signal });
+export function getSettings(signal?: AbortSignal): Promise<OrganizationSettingsView> {
+  return apiClient.get<OrganizationSettingsView>('/settings', { signal });
 }
 
 export const settingsQueryOptions = () =>

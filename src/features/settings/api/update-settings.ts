@@ -2,7 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { settingsKeys } from './keys';
 import type { CheckKind, DecisionRule, Tolerance } from '../../../lib/checks';
-import type { CalibrationProvider, DepositPolicy, IntervalPolicy, InvoiceIssuer, OrganizationSettings } from './types';
+import type { IntervalPolicy } from '../../../../shared/calibration/interval-review';
+import type { CalibrationProvider, DepositPolicy, InvoiceIssuer, OrganizationSettingsView } from '../../../../shared/organizations/views';
 
 export interface UpdateSettingsInput {
   dueSoonDays?: number;
@@ -19,8 +20,8 @@ export interface UpdateSettingsInput {
   issuer?: InvoiceIssuer;
 }
 
-export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettings> {
-  return apiClient.patch<OrganizationSettings>('/settings', input);
+export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettingsView> {
+  return apiClient.patch<OrganizationSettingsView>('/settings', input);
 }
 
 /** Everything else that shows dates or due states reads the session and lists again. */

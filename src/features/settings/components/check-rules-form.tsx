@@ -4,7 +4,7 @@ import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { checkKindWords, type CheckKind, type DecisionRule, type Tolerance } from '../../../lib/checks';
-import type { OrganizationSettings } from '../api/types';
+import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
 
 const kinds = Object.keys(checkKindWords) as CheckKind[];
@@ -81,7 +81,7 @@ function ToleranceFields({ kind }: { kind: CheckKind }) {
 }
 
 /** How field checks are judged: the decision rule and the firm's tolerance per check kind (owner only). */
-export function CheckRulesForm({ settings }: { settings: OrganizationSettings }) {
+export function CheckRulesForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
   if (!settings.decisionRule || !settings.tolerances) {
     return <Notice tone="info">This server does not offer field-check settings yet.</Notice>;

@@ -4,7 +4,8 @@ import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { formatNumber } from '../../../lib/format';
-import type { IntervalPolicy, OrganizationSettings } from '../api/types';
+import type { IntervalPolicy } from '../../../../shared/calibration/interval-review';
+import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
 
 type Values = { lengthenAfter: number | ''; lengthenFactor: string; shortenFactor: string; minMonths: number | ''; maxMonths: number | '' };
@@ -67,7 +68,7 @@ function Explanation({ values, saved }: { values: Values; saved: IntervalPolicy 
 }
 
 /** The staircase interval review of OIML D 10 / ILAC-G24: when to suggest a longer or shorter calibration interval (owner only). */
-export function IntervalPolicyForm({ settings }: { settings: OrganizationSettings }) {
+export function IntervalPolicyForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
   const policy = settings.intervalPolicy;
   if (!policy) {

@@ -3,7 +3,7 @@ import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
-import type { InvoiceIssuer, OrganizationSettings } from '../api/types';
+import type { InvoiceIssuer, OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
 
 const fields = ['address', 'taxNumber', 'paymentTerms'] as const;
@@ -15,7 +15,7 @@ const schema = Yup.object({
 });
 
 /** The firm as its invoices and credit notes name it (owner only); each invoice keeps the details it was issued with. */
-export function InvoiceIssuerForm({ settings }: { settings: OrganizationSettings }) {
+export function InvoiceIssuerForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
   if (!settings.issuer) return <Notice tone="info">This server does not offer invoice details yet.</Notice>;
   return (

@@ -4,7 +4,7 @@ import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { AlertIcon, PlusIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
-import type { OrganizationSettings } from '../api/types';
+import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
 
 /** What the server allows (shared/schemas/assets.ts, organizationSettingsPayload.providers). */
@@ -113,7 +113,7 @@ function ProviderRows() {
 }
 
 /** The calibration labs the firm uses and each one's usual turnaround, for planning lab trips (owner only). */
-export function ProvidersForm({ settings }: { settings: OrganizationSettings }) {
+export function ProvidersForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
   if (!settings.providers) {
     return <Notice tone="info">This server does not offer calibration provider settings yet.</Notice>;

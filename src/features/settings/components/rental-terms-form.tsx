@@ -5,7 +5,7 @@ import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { currencyDigits, formatMoney } from '../../../lib/format';
 import { amountText, parseAmount } from '../../../lib/money';
-import type { OrganizationSettings } from '../api/types';
+import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
 
 type Values = { taxPercent: string; depositPercent: string; depositMin: string; depositMax: string };
@@ -15,7 +15,7 @@ const fields = ['taxPercent', 'depositPercent', 'depositMin', 'depositMax'] as c
 const percent = (v: string | undefined) => (v && /^\d{1,3}([.,]\d{1,2})?$/.test(v.trim()) ? Number(v.trim().replace(',', '.')) : null);
 
 /** Tax on rentals and how deposits are worked out (owner only): the rental form and every quote use these. */
-export function RentalTermsForm({ settings }: { settings: OrganizationSettings }) {
+export function RentalTermsForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
   const { currency } = settings;
   const digits = currencyDigits(currency);

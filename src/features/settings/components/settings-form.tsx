@@ -4,7 +4,7 @@ import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
-import type { OrganizationSettings } from '../api/types';
+import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
 
 function isTimeZone(value: string | undefined): boolean {
@@ -29,7 +29,7 @@ const schema = Yup.object({
 
 type Values = { dueSoonDays: number | ''; timeZone: string };
 
-export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
+export function SettingsForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
   const listId = useId();
   const zones = useMemo(() => {

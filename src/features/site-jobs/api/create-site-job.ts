@@ -1,10 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { siteJobsKeys } from './keys';
-import type { SiteJob, SiteJobInput } from './types';
+import type { SiteJobView } from '../../../../shared/bookings/views';
 
-export function createSiteJob(input: SiteJobInput): Promise<SiteJob> {
-  return apiClient.post<SiteJob>('/jobs', input);
+/** What the job form sends (POST and PUT /api/jobs). */
+export type SiteJobInput = Omit<SiteJobView, 'id'>;
+
+export function createSiteJob(input: SiteJobInput): Promise<SiteJobView> {
+  return apiClient.post<SiteJobView>('/jobs', input);
 }
 
 export function useCreateSiteJob() {

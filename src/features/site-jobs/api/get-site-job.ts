@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { siteJobsKeys } from './keys';
-import type { SiteJob } from './types';
+import type { SiteJobView } from '../../../../shared/bookings/views';
 
-export function getSiteJob(id: string, signal?: AbortSignal): Promise<SiteJob> {
-  return apiClient.get<SiteJob>(`/jobs/${encodeURIComponent(id)}`, { signal });
+export function getSiteJob(id: string, signal?: AbortSignal): Promise<SiteJobView> {
+  return apiClient.get<SiteJobView>(`/jobs/${encodeURIComponent(id)}`, { signal });
 }
 
 export const siteJobQueryOptions = (id: string) =>

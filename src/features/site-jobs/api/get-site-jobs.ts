@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { siteJobsKeys } from './keys';
-import type { SiteJobPage } from './types';
+import type { Page } from '../../../../shared/lists/page';
+import type { SiteJobView } from '../../../../shared/bookings/views';
 
-export function getSiteJobs(page: { limit: number; offset: number }, signal?: AbortSignal): Promise<SiteJobPage> {
-  return apiClient.get<SiteJobPage>('/jobs', { query: page, signal });
+export function getSiteJobs(page: { limit: number; offset: number }, signal?: AbortSignal): Promise<Page<SiteJobView>> {
+  return apiClient.get<Page<SiteJobView>>('/jobs', { query: page, signal });
 }
 
 export const siteJobsQueryOptions = (page = { limit: 500, offset: 0 }) =>

@@ -1,10 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import { invalidateBookingBoard } from '../../../lib/asset-status';
 import { siteJobsKeys } from './keys';
-import type { SiteJob, SiteJobInput } from './types';
+import type { SiteJobView } from '../../../../shared/bookings/views';
+import type { SiteJobInput } from './create-site-job';
 
-export function updateSiteJob({ id, ...input }: SiteJobInput & { id: string }): Promise<SiteJob> {
-  return apiClient.put<SiteJob>(`/jobs/${encodeURIComponent(id)}`, input);
+export function updateSiteJob({ id, ...input }: SiteJobInput & { id: string }): Promise<SiteJobView> {
+  return apiClient.put<SiteJobView>(`/jobs/${encodeURIComponent(id)}`, input);
 }
 
 export function useUpdateSiteJob() {
@@ -16,7 +18,7 @@ export function useUpdateSiteJob() {
       // Bookings show the job's reference and customer: those lists refresh too.
       return Promise.all([
         queryClient.invalidateQueries({ queryKey: siteJobsKeys.all }),
-        queryClient.invalidateQueries({ queryKey: ['bookings'] }),
+        invalidateBookingBoard(queryClient),
       ]);
     },
   });

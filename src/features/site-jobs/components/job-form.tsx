@@ -6,7 +6,8 @@ import { Field, SelectField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateSiteJob } from '../api/create-site-job';
-import type { SiteJob, SiteJobInput } from '../api/types';
+import type { SiteJobView } from '../../../../shared/bookings/views';
+import type { SiteJobInput } from '../api/create-site-job';
 import { useUpdateSiteJob } from '../api/update-site-job';
 
 interface JobValues {
@@ -57,7 +58,7 @@ const schema = Yup.object({
   notes: Yup.string().trim().max(4000, 'Keep the notes to 4000 characters.'),
 });
 
-function toValues(job: SiteJob | undefined, defaults: Partial<JobValues>): JobValues {
+function toValues(job: SiteJobView | undefined, defaults: Partial<JobValues>): JobValues {
   return {
     reference: job?.reference ?? '',
     customerName: job?.customerName ?? '',
@@ -85,10 +86,10 @@ export function JobForm({
   onCancel,
   submitLabel,
 }: {
-  job?: SiteJob;
+  job?: SiteJobView;
   me: { id: string; name: string };
   defaults?: { startsOn?: string; endsOn?: string };
-  onSaved: (job: SiteJob) => void;
+  onSaved: (job: SiteJobView) => void;
   onCancel?: () => void;
   submitLabel?: string;
 }) {

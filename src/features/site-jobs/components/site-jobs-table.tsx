@@ -2,10 +2,10 @@ import type { ColDef } from 'ag-grid-community';
 import { useMemo } from 'react';
 import { DataGrid } from '../../../components/data-grid';
 import { formatCalendarDate } from '../../../lib/format';
-import type { SiteJob } from '../api/types';
+import type { SiteJobView } from '../../../../shared/bookings/views';
 
-export function SiteJobsTable({ jobs, onOpen, loading }: { jobs: SiteJob[] | undefined; onOpen: (job: SiteJob) => void; loading?: boolean }) {
-  const columns = useMemo<ColDef<SiteJob>[]>(
+export function SiteJobsTable({ jobs, onOpen, loading }: { jobs: SiteJobView[] | undefined; onOpen: (job: SiteJobView) => void; loading?: boolean }) {
+  const columns = useMemo<ColDef<SiteJobView>[]>(
     () => [
       { headerName: 'Reference', field: 'reference', minWidth: 120, maxWidth: 160, cellClass: 'font-mono font-semibold' },
       { headerName: 'Customer', field: 'customerName', minWidth: 180, flex: 2 },
@@ -30,7 +30,7 @@ export function SiteJobsTable({ jobs, onOpen, loading }: { jobs: SiteJob[] | und
     [],
   );
   return (
-    <DataGrid<SiteJob>
+    <DataGrid<SiteJobView>
       label="Jobs"
       rows={jobs}
       loading={loading}

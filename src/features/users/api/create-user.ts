@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import type { Role } from '../../../lib/roles';
 import { usersKeys } from './keys';
-import type { User } from './types';
+import type { UserView } from '../../../../shared/users/views';
 
 export interface CreateUserInput {
   email: string;
@@ -11,8 +11,8 @@ export interface CreateUserInput {
   password: string;
 }
 
-export function createUser(input: CreateUserInput): Promise<User> {
-  return apiClient.post<User>('/users', input);
+export function createUser(input: CreateUserInput): Promise<UserView> {
+  return apiClient.post<UserView>('/users', input);
 }
 
 export function useCreateUser() {

@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { usersKeys } from './keys';
-import type { UserList } from './types';
+import type { Page } from '../../../../shared/lists/page';
+import type { UserView } from '../../../../shared/users/views';
 
-export function getUsers(signal?: AbortSignal): Promise<UserList> {
-  return apiClient.get<UserList>('/users', { signal });
+export function getUsers(signal?: AbortSignal): Promise<Page<UserView>> {
+  return apiClient.get<Page<UserView>>('/users', { signal });
 }
 
 export const usersQueryOptions = () =>

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import type { Role } from '../../../lib/roles';
 import { usersKeys } from './keys';
-import type { User } from './types';
+import type { UserView } from '../../../../shared/users/views';
 
 export interface UpdateUserInput {
   id: string;
@@ -11,8 +11,8 @@ export interface UpdateUserInput {
   disabled?: boolean;
 }
 
-export function updateUser({ id, ...changes }: UpdateUserInput): Promise<User> {
-  return apiClient.patch<User>(`/users/${encodeURIComponent(id)}`, changes);
+export function updateUser({ id, ...changes }: UpdateUserInput): Promise<UserView> {
+  return apiClient.patch<UserView>(`/users/${encodeURIComponent(id)}`, changes);
 }
 
 export function useUpdateUser() {

@@ -8,7 +8,7 @@ import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { roles, roleTitles, type Role } from '../../../lib/roles';
 import { useUpdateUser } from '../api/update-user';
-import type { User } from '../api/types';
+import type { UserView } from '../../../../shared/users/views';
 import { roleOptions } from './role-options';
 
 const schema = Yup.object({
@@ -20,7 +20,7 @@ export function ChangeRoleDialog({
   onClose,
   onDone,
 }: {
-  user: User | null;
+  user: UserView | null;
   onClose: () => void;
   onDone: (message: string) => void;
 }) {

@@ -8,9 +8,9 @@ import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { MIN_PASSWORD_LENGTH, newPasswordSchema } from '../../../lib/passwords';
 import { useResetUserPassword } from '../api/reset-user-password';
-import type { User } from '../api/types';
+import type { UserView } from '../../../../shared/users/views';
 
-const schemaFor = (person: User, firmName: string) => Yup.object({
+const schemaFor = (person: UserView, firmName: string) => Yup.object({
   password: newPasswordSchema('Set a temporary password.', () => [person.email, person.name, firmName]),
   repeatPassword: Yup.string()
     .required('Type the temporary password again.')
@@ -25,7 +25,7 @@ export function ResetPasswordDialog({
   onClose,
   onDone,
 }: {
-  user: User | null;
+  user: UserView | null;
   firmName: string;
   onClose: () => void;
   onDone: (message: string) => void;

@@ -6,17 +6,17 @@ import { actionsColumnType, DataGrid } from '../../../components/data-grid';
 import { StatusChip } from '../../../components/status-chip';
 import { formatDate, isoTimestamp } from '../../../lib/format';
 import { roleTitles } from '../../../lib/roles';
-import type { User } from '../api/types';
+import type { UserView } from '../../../../shared/users/views';
 
 export interface UserRowActions {
-  onChangeRole: (user: User) => void;
-  onToggleDisabled: (user: User) => void;
-  onResetPassword: (user: User) => void;
+  onChangeRole: (user: UserView) => void;
+  onToggleDisabled: (user: UserView) => void;
+  onResetPassword: (user: UserView) => void;
   /** The row whose disable/enable is in flight. */
   busyUserId?: string;
 }
 
-const statusWord = (user: User) => (user.disabled ? 'Disabled' : 'Active');
+const statusWord = (user: UserView) => (user.disabled ? 'Disabled' : 'Active');
 
 export function UsersTable({
   users,
@@ -24,18 +24,18 @@ export function UsersTable({
   timeZone,
   actions,
 }: {
-  users: User[] | undefined;
+  users: UserView[] | undefined;
   currentUserId: string;
   timeZone?: string;
   actions: UserRowActions;
 }) {
-  const columns = useMemo<ColDef<User>[]>(
+  const columns = useMemo<ColDef<UserView>[]>(
     () => [
       {
         headerName: 'Name',
         field: 'name',
         minWidth: 140,
-        cellRenderer: (p: CustomCellRendererProps<User, string>) =>
+        cellRenderer: (p: CustomCellRendererProps<UserView, string>) =>
           p.data ? (
             <span>
               {p.data.name}
@@ -61,7 +61,7 @@ export function UsersTable({
         minWidth: 110,
         maxWidth: 140,
         valueGetter: (p) => (p.data ? statusWord(p.data) : ''),
-        cellRenderer: (p: CustomCellRendererProps<User>) =>
+        cellRenderer: (p: CustomCellRendererProps<UserView>) =>
           p.data ? (
             <StatusChip tone={p.data.disabled ? 'paused' : 'ok'} label={statusWord(p.data)} />
           ) : null,
@@ -83,7 +83,7 @@ export function UsersTable({
         type: actionsColumnType,
         minWidth: 340,
         flex: 2,
-        cellRenderer: (p: CustomCellRendererProps<User>) => {
+        cellRenderer: (p: CustomCellRendererProps<UserView>) => {
           const user = p.data;
           if (!user) return null;
           if (user.id === currentUserId) {
@@ -114,7 +114,7 @@ export function UsersTable({
   );
 
   return (
-    <DataGrid<User>
+    <DataGrid<UserView>
       label="Users"
       rows={users}
       columns={columns}

@@ -1,0 +1,75 @@
+/** What the field-checks API answers. Plain types, no zod: the browser imports them as types only. */
+import type { TipPosition } from '../assets/vocabulary';
+import type { Decision, DecisionRule } from './decision';
+import type { Point } from './geometry';
+import type { Tolerance } from './tolerance';
+
+/** How the decision was reached, stored with every check (µm). */
+export type CheckDecisionFields = {
+  toleranceUm: number;
+  guardBandUm: number;
+  expandedUncertaintyUm: number;
+  decisionRule: DecisionRule;
+  decision: Decision;
+};
+
+/** What each kind reports besides the decision (µm unless named mm). */
+export type TipValidationResult = { deviationsUm: number[]; meanOffsetUm: number; spreadUm: number; maxDeviationUm: number };
+export type TwoFaceResult = { errorUm: number };
+export type LengthCheckResult = { measuredMm: number; expectedMm: number; errorUm: number };
+
+type CheckBase = {
+  id: string;
+  assetId: string;
+  relatedAssetId: string | null;
+  performedAt: string;
+  performedBy: string;
+  note: string | null;
+};
+
+type CommonInputs = { distanceM: number | null; tolerance: Tolerance; uncertaintyComponentsUm: number[] | null };
+
+/** A field check as recorded: its inputs, the computed result and the decision. */
+export type CheckView =
+  | (CheckBase & {
+      kind: 'tip_validation';
+      position: TipPosition;
+      inputs: CommonInputs & { reference: Point; readings: Point[] };
+      result: TipValidationResult & CheckDecisionFields;
+    })
+  | (CheckBase & {
+      kind: 'two_face';
+      position: null;
+      inputs: CommonInputs & { front: Point; back: Point };
+      result: TwoFaceResult & CheckDecisionFields;
+    })
+  | (CheckBase & {
+      kind: 'length_check';
+      position: null;
+      inputs: CommonInputs & {
+        endA: Point;
+        endB: Point;
+        temperatureC: number;
+        scaleBar: { assetTag: string; certifiedLengthMm: number; expansionPpmPerK: number };
+      };
+      result: LengthCheckResult & CheckDecisionFields;
+    });
+
+export type TipValidationState = 'validated' | 'not_validated' | 'failed';
+
+/** `GET /api/assets/:id/tip-validation`: validated only where the latest validation in that position passed. */
+export type TipValidationStatus = {
+  positions: { position: TipPosition; state: TipValidationState; lastCheckId: string | null; lastPerformedAt: string | null }[];
+};
+
+/** `GET /api/checks/to-do`: a tip position in kit I carry now or next whose latest validation did not pass (or never happened). */
+export type CheckToDo = {
+  assetId: string;
+  assetTag: string;
+  position: TipPosition;
+  lastDecision: Decision | null;
+  lastCheckedAt: string | null;
+  bookingId: string;
+  startsOn: string;
+  bookingState: 'out' | 'reserved';
+};

@@ -1,0 +1,36 @@
+/** What the settings API answers. Plain types, no zod: the browser imports them as types only. */
+import type { IntervalPolicy } from '../calibration/interval-review';
+import type { DecisionRule } from '../checks/decision';
+import type { Tolerance } from '../checks/tolerance';
+import type { CheckKind } from '../schemas/check-kinds';
+
+/** A calibration lab the firm sends items to, and its usual turnaround (whole days, 1–180). */
+export type CalibrationProvider = { name: string; turnaroundDays: number };
+
+/** How rental deposits are worked out: a percentage of the replacement value, kept between a minimum and a maximum. */
+export type DepositPolicy = { percent: number; minMinor: number; maxMinor: number };
+
+/** What every invoice must say about who issues it; kept on each invoice as it was on the day of issue. */
+export type InvoiceIssuer = { address: string; taxNumber: string; paymentTerms: string };
+
+/** `GET /api/settings`: the firm's settings, each with its default filled in. */
+export type OrganizationSettingsView = {
+  name: string;
+  timeZone: string;
+  currency: string;
+  /** Days before the due date an item counts as "due soon". */
+  dueSoonDays: number;
+  /** ILAC-G8 decision rule for field checks. */
+  decisionRule: DecisionRule;
+  /** The firm's tolerance per check kind. */
+  tolerances: Record<CheckKind, Tolerance>;
+  /** Tax on rentals in basis points (1 % = 100). */
+  taxRateBasisPoints: number;
+  depositPolicy: DepositPolicy;
+  /** Calibration providers and their turnaround; the window finder uses 14 days for a provider not listed. */
+  providers: CalibrationProvider[];
+  /** The staircase interval review (OIML D 10 / ILAC-G24). */
+  intervalPolicy: IntervalPolicy;
+  /** The firm as its invoices name it. */
+  issuer: InvoiceIssuer;
+};

@@ -1,0 +1,13 @@
+/** What the users API answers. Plain types, no zod: the browser imports them as types only. */
+import type { Role } from '../auth/roles';
+
+/** A person of the firm as the API shows them (never the password). */
+export type UserView = {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  organizationId: string;
+  disabled: boolean;
+  createdAt: string;
+};

@@ -1,4 +1,4 @@
-// `npm test`: the type check (tsc --noEmit), a throwaway PostgreSQL, the built client,
+// `npm test`: the type check (tsc --noEmit), the lint (import boundaries, layout), a throwaway PostgreSQL, the built client,
 // Debian's Chromium, then every Vitest suite (unit, API, browser) with TZ=UTC, then the
 // pure tests in shared/ again under other time zones. Ends with one line "N passed, M failed"
 // (the type check counts as one) and exits non-zero on any failure.
@@ -75,14 +75,22 @@ function cleanUp() {
 
 const tally = { passed: 0, failed: 0 };
 
-/** `tsc --noEmit` over the whole project: one check in the tally. */
-function typeCheck() {
-  log('Type check (tsc --noEmit)…');
-  const r = spawnSync(process.execPath, [path.join(projectRoot, 'node_modules/typescript/bin/tsc'), '--noEmit'], { cwd: projectRoot, stdio: 'inherit' });
-  if (r.status === 0) tally.passed += 1;
-  else {
-    log('The type check failed; see the errors above.');
-    tally.failed += 1;
+/** Whole-project checks, each one line in the tally: the types, the import boundaries, the layout. */
+const projectChecks = [
+  ['Type check (tsc --noEmit)', 'typescript/bin/tsc', ['--noEmit']],
+  ['Import boundaries (eslint)', 'eslint/bin/eslint.js', ['.']],
+  ['Layout (prettier --check)', 'prettier/bin/prettier.cjs', ['--check', '--log-level', 'warn', '.']],
+];
+
+function checkProject() {
+  for (const [label, bin, args] of projectChecks) {
+    log(`${label}…`);
+    const r = spawnSync(process.execPath, [path.join(projectRoot, 'node_modules', bin), ...args], { cwd: projectRoot, stdio: 'inherit' });
+    if (r.status === 0) tally.passed += 1;
+    else {
+      log(`${label} failed; see above.`);
+      tally.failed += 1;
+    }
   }
 }
 
@@ -120,8 +128,8 @@ async function main() {
 
   ensureDependencies();
   reportDir = fs.mkdtempSync(path.join(os.tmpdir(), 'nestkeeper-reports-'));
-  if (wholeSuite) typeCheck();
-  else log('Type check skipped for a partial run (npm run typecheck).');
+  if (wholeSuite) checkProject();
+  else log('Type check and lint skipped for a partial run (npm run typecheck, npm run lint).');
 
   const env = { ...baseEnv, TZ: MAIN_TIME_ZONE };
   if (pureOnly) log('Only shared/ requested: no PostgreSQL, client build or Chromium.');

@@ -1,20 +1,20 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
+import type { ChecklistLine } from '../../shared/bookings/checklist';
 import type { checklistPayload } from '../../shared/schemas/bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { handoverSheetPdf } from '../documents/handover-sheet-pdf';
 import { assetsByIds, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
 import { AppError, ruleBroken } from '../http/errors';
+import { isUuid } from '../http/ids';
 import { openIncident } from '../incidents/incidents.service';
-import { loadOrgContext } from '../organizations/org-context';
-import { User } from '../users/user.entity';
+import { loadOrgContext } from '../organizations';
+import { findPerson } from '../users';
 import type { BookingView } from './booking-view';
-import type { ChecklistLine } from './booking.entity';
 import { bookingIn, checkOut, loadBooking, takeBack } from './lifecycle';
 
 type Checklist = z.infer<typeof checklistPayload>;
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Rules other components add to the counter (rentals: a deposit hold before handing over, papers to the renter after). */
 export type HandoverGates = {
@@ -113,8 +113,8 @@ export class HandoverService {
 
   /** A person's name, or the id of one of the firm's users. */
   private async counterpart(tx: Scoped, who: string): Promise<{ name: string; userId: string | null }> {
-    if (!UUID.test(who)) return { name: who, userId: null };
-    const user = await tx.findOne(User, { id: who });
+    if (!isUuid(who)) return { name: who, userId: null };
+    const user = await findPerson(tx, who);
     if (!user) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { counterpart: 'is not one of your people' } });
     return { name: user.name, userId: user.id };
   }

@@ -12,14 +12,14 @@ import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
-import { loadOrgContext } from '../organizations/org-context';
+import { findUuid } from '../http/ids';
+import { loadOrgContext } from '../organizations';
 import { Asset } from './asset.entity';
 import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
 import { moveAssets, noteCustody, statusWords } from './custody';
 import { listReply } from '../http/list-reply';
 
-const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
 const isUniqueViolation = (err: unknown) => (err as { code?: string })?.code === '23505';
 
 /** Fields the person edits directly (the rest are derived or belong to other flows). */
@@ -51,7 +51,7 @@ export class AssetsService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const trimmed = code.trim();
-      const id = trimmed.match(UUID)?.[0];
+      const id = findUuid(trimmed);
       const qb = tx.select(Asset, 'a').leftJoinAndSelect('a.kit', 'k');
       const asset = id
         ? await qb.andWhere('a.id = :id', { id }).getOne()

@@ -5,19 +5,9 @@ import type { createUserPayload, updateUserPayload } from '../../shared/schemas/
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, type Actor } from '../db/transaction';
 import { conflict, ruleBroken } from '../http/errors';
+import { replacePasswordHash } from './accounts';
+import { publicUser } from './people';
 import { User } from './user.entity';
-
-export type PublicUser = Pick<User, 'id' | 'email' | 'name' | 'role' | 'organizationId' | 'disabled' | 'createdAt'>;
-
-export const publicUser = (u: User): PublicUser => ({
-  id: u.id,
-  email: u.email,
-  name: u.name,
-  role: u.role,
-  organizationId: u.organizationId,
-  disabled: u.disabled,
-  createdAt: u.createdAt,
-});
 
 export class UsersService {
   constructor(
@@ -69,10 +59,7 @@ export class UsersService {
   async resetPassword(actor: Actor, id: string, password: string) {
     const passwordHash = await this.hashPassword(password);
     await inOrganization(this.db, actor.organizationId, async (tx) => {
-      const user = await tx.get(User, { id }, 'That user');
-      user.passwordHash = passwordHash;
-      user.tokenVersion += 1;
-      await tx.save(User, user);
+      await replacePasswordHash(tx, id, passwordHash);
       await recordAudit(tx, actor, 'user.password_reset', { type: 'user', id });
     });
   }

@@ -1,10 +1,9 @@
 import { Column, CreateDateColumn, Entity, Exclusion, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { ChecklistLine } from '../../shared/bookings/checklist';
 import type { BookingPurpose, BookingState } from '../../shared/schemas/bookings';
 import { OrgOwned } from '../db/org-owned';
 import type { AssetRecord, KitRecord } from '../fleet';
 import { Job } from './job.entity';
-
-export type ChecklistLine = { assetId: string; present: boolean; condition: 'good' | 'worn' | 'damaged'; note?: string };
 
 /** Assets (or a kit) reserved for whole days, `startsOn`..`endsOn` inclusive. */
 @Entity({ name: 'bookings' })

@@ -6,7 +6,6 @@
 export { book, cancelBooking, checkOut, closeBooking, loadBooking, moveBooking, takeBack, type BookingRequest } from './lifecycle';
 export { busyDays } from './booking-queries';
 export type { BookingView } from './booking-view';
-export type { ChecklistLine } from './booking.entity';
 export type { HandoverGates } from './handover.service';
 export { seedBooking, seedJob } from './seed';
 export { countBookings, seedBenchBookings } from './bench-seed';

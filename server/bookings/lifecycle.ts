@@ -7,7 +7,8 @@ import { conflict, notFound, ruleBroken } from '../http/errors';
 import { availableAssets, conflictingItems, itemFacts } from './booking-queries';
 import { blockedError, refusals, refusedItems } from './booking-rule';
 import { bookingViews, type BookingView } from './booking-view';
-import { Booking, BookingItem, type ChecklistLine } from './booking.entity';
+import type { ChecklistLine } from '../../shared/bookings/checklist';
+import { Booking, BookingItem } from './booking.entity';
 import { Job } from './job.entity';
 
 /*

@@ -1,6 +1,7 @@
 import type { BookingPurpose, BookingState } from '../../shared/schemas/bookings';
 import type { Scoped } from '../db/scoped';
-import { Booking, BookingItem, type ChecklistLine } from './booking.entity';
+import type { ChecklistLine } from '../../shared/bookings/checklist';
+import { Booking, BookingItem } from './booking.entity';
 import { Job } from './job.entity';
 
 /** A booking as it stands after its past steps, for the invented demo firms. */

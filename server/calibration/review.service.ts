@@ -2,9 +2,7 @@ import type { DataSource } from 'typeorm';
 import { addDays } from '../../shared/calibration/due-date';
 import type { DueRow } from '../../shared/calibration/review-types';
 import { readInOrganization, type Actor } from '../db/transaction';
-import { loadOrgContext } from '../organizations/org-context';
-
-export type { DueRow };
+import { loadOrgContext } from '../organizations';
 
 /**
  * Items overdue or due within `withinDays`, most urgent first, each with the

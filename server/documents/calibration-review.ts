@@ -1,4 +1,4 @@
-import type { DueRow } from '../calibration/review.service';
+import type { DueRow } from '../../shared/calibration/review-types';
 import { toCsv } from './csv';
 import { INK, MM, MUTED, renderPdf } from './pdf';
 

@@ -1,8 +1,8 @@
 import type { AssetView } from '../../shared/schemas/assets';
-import type { RecordItem } from '../fleet/equipment-record';
+import type { EquipmentRecordItem } from '../../shared/assets/equipment-record';
 import { INK, MM, MUTED, renderPdf } from './pdf';
 
-export const equipmentRecordPdf = (a: AssetView, items: RecordItem[], firm: string, generatedAt: Date) =>
+export const equipmentRecordPdf = (a: AssetView, items: EquipmentRecordItem[], firm: string, generatedAt: Date) =>
   renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: `Equipment record ${a.assetTag}` } }, (doc) => {
     const left = doc.page.margins.left;
     const width = doc.page.width - left - doc.page.margins.right;

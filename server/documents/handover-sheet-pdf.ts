@@ -1,4 +1,4 @@
-import type { ChecklistLine } from '../bookings';
+import type { ChecklistLine } from '../../shared/bookings/checklist';
 import { bullets, calendarDate, facts, firmDateTime, heading, rentalCautions, section, signatureLines, table, typeTitle } from './document-layout';
 import { MM, renderPdf } from './pdf';
 

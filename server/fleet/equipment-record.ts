@@ -1,6 +1,5 @@
+import type { EquipmentRecordItem } from '../../shared/assets/equipment-record';
 import { assetTypeTitles, typesWithFirmware, type AssetView } from '../../shared/schemas/assets';
-
-export type RecordItem = { clause: string; requirement: string; value: string | null; note?: string };
 
 const text = (...parts: (string | null | undefined)[]) => parts.filter(Boolean).join(' · ') || null;
 
@@ -9,7 +8,7 @@ const text = (...parts: (string | null | undefined)[]) => parts.filter(Boolean).
  * ISO/IEC 17025:2017 §6.4.13 a)–h) (the items' wording paraphrased from
  * memory of the standard), each saying what Nestkeeper holds for it.
  */
-export function equipmentRecordItems(a: AssetView): RecordItem[] {
+export function equipmentRecordItems(a: AssetView): EquipmentRecordItem[] {
   const cal = a.calibration;
   const specs = a.specs as Record<string, unknown>;
   const reference =

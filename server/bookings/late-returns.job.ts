@@ -1,7 +1,6 @@
 import type { JobDefinition } from '../jobs/job';
 import { Scoped } from '../db/scoped';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
+import { enqueueMail, staffAddresses } from '../notifications';
 import { todayIn } from '../../shared/calibration/due-date';
 
 type LateRow = { organization_id: string; time_zone: string; id: string; starts_on: string; ends_on: string; taken_by: string | null; reference: string | null; tags: string };

@@ -1,8 +1,7 @@
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { Scoped } from '../db/scoped';
 import type { JobDefinition } from '../jobs/job';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
+import { enqueueMail, staffAddresses } from '../notifications';
 import { dueItems } from './review.service';
 
 type Changed = { organization_id: string; asset_tag: string; state: string };

@@ -5,7 +5,7 @@ import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { conflict, notFound, ruleBroken } from '../http/errors';
-import { loadOrgContext, type OrgContext } from '../organizations/org-context';
+import { loadOrgContext, type OrgContext } from '../organizations';
 import { Asset } from './asset.entity';
 import { toAssetView } from './asset-view';
 import { Kit } from './kit.entity';

@@ -5,8 +5,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { renderPdf } from '../../server/documents/pdf';
 import { pgSinkStore, startSmtpSink } from '../../server/fakes/smtp-sink';
-import { JobsService } from '../../server/jobs/jobs.service';
-import { dueScanJob } from '../../server/calibration/due-scan.job';
+import { RoutinesService } from '../../server/routines/routines.service';
+import { dueScanRoutine } from '../../server/calibration/due-scan.routine';
 import { deliverOutbox } from '../../server/notifications/outbox-sender';
 import { activeChanges, certificateWith } from '../support/pdf-fixtures';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
@@ -275,8 +275,8 @@ describe("the owner's review and the daily scan", () => {
     const sink = await startSmtpSink({ port: 0, store: pgSinkStore(pool) });
     const transport = nodemailer.createTransport({ host: '127.0.0.1', port: sink.port, secure: false, ignoreTLS: true });
     const digests = () => t.db.query(`SELECT recipients FROM outbox_messages WHERE subject LIKE 'Calibration:%'`);
-    const a = new JobsService(t.db, [dueScanJob()]);
-    const b = new JobsService(t.db, [dueScanJob()]);
+    const a = new RoutinesService(t.db, [dueScanRoutine()]);
+    const b = new RoutinesService(t.db, [dueScanRoutine()]);
     const runs = await Promise.all([a.run('due-scan', 'manual'), b.run('due-scan', 'manual')]);
     expect(runs.map((r) => r.status)).toEqual(['succeeded', 'succeeded']);
     // Each firm with changes gets one digest to its owners and managers, not one per item or per run.
@@ -300,16 +300,16 @@ describe("the owner's review and the daily scan", () => {
 
 describe('due scan timing and settings', () => {
   it("scans a firm on schedule only in the hour its own clock reads six, and every firm on a manual run", async () => {
-    const job = dueScanJob();
+    const scan = dueScanRoutine();
     await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
     // 03:10 UTC is 04:10 in Wrenhallow (Europe/Berlin): not the demo firm's hour, nothing is scanned.
-    expect(await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule', organizationId: null })).toMatchObject({ itemsChanged: 0, digests: 0 });
+    expect(await scan.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule', organizationId: null })).toMatchObject({ itemsChanged: 0, digests: 0 });
     // 05:10 UTC is 06:10 there (and 05:10 in the London firm, which waits for its own six o'clock).
-    const atSix = await job.run({ db: t.db, now: new Date('2026-12-01T05:10:00Z'), trigger: 'schedule', organizationId: null });
+    const atSix = await scan.run({ db: t.db, now: new Date('2026-12-01T05:10:00Z'), trigger: 'schedule', organizationId: null });
     expect(atSix.itemsChanged).toBeGreaterThan(0);
     expect(atSix.digests).toBe(1);
     await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
-    expect((await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'manual', organizationId: null })).itemsChanged).toBeGreaterThan(0);
+    expect((await scan.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'manual', organizationId: null })).itemsChanged).toBeGreaterThan(0);
   });
 
   it('lets the owner set providers with turnarounds and the interval policy', async () => {

@@ -7,7 +7,7 @@ const looks: Record<JobRun['status'], { tone: StatusTone; label: string }> = {
   running: { tone: 'busy', label: 'Running' },
 };
 
-export function JobRunStatus({ run }: { run: JobRun | null }) {
+export function RoutineRunStatus({ run }: { run: JobRun | null }) {
   if (!run) return <StatusChip tone="none" label="Never run" />;
   const look = looks[run.status] ?? { tone: 'info' as const, label: run.status };
   return <StatusChip tone={look.tone} label={look.label} />;

@@ -1,16 +1,19 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 
-export type JobRunStatus = 'running' | 'succeeded' | 'failed';
+export type RoutineRunStatus = 'running' | 'succeeded' | 'failed';
 
-/** One execution of a scheduled job, on whichever instance won the fire. */
+// Tables and the name column keep their first names (job_…): instances still on the old version during a
+// rolling update keep claiming and logging in the same tables, so no fire runs twice.
+
+/** One execution of a routine, on whichever instance won the fire. */
 @Entity({ name: 'job_runs' })
-@Index(['jobName', 'startedAt'])
-export class JobRun {
+@Index(['routineName', 'startedAt'])
+export class RoutineRun {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
   @Column({ name: 'job_name', type: 'text' })
-  jobName: string;
+  routineName: string;
 
   @Column({ type: 'text' })
   trigger: 'schedule' | 'manual';
@@ -29,7 +32,7 @@ export class JobRun {
   finishedAt: Date | null;
 
   @Column({ type: 'text' })
-  status: JobRunStatus;
+  status: RoutineRunStatus;
 
   @Column({ type: 'jsonb', nullable: true })
   summary: Record<string, unknown> | null;
@@ -44,7 +47,7 @@ export class JobRun {
 
 /** A claim on one cron slot: the first instance to insert the key runs it. */
 @Entity({ name: 'job_leases' })
-export class JobLease {
+export class RoutineLease {
   @Column({ type: 'text', primary: true })
   key: string;
 

@@ -28,5 +28,3 @@ export const labTripPayload = z
 export const impactAssessments = ['no_effect', 'customer_notified', 'remeasure_offered'] as const;
 export const impactAssessmentPayload = z.object({ assessment: z.enum(impactAssessments, { message: `must be one of ${impactAssessments.join(', ')}` }), note: z.string().trim().max(2000).optional() });
 export const noticePayload = z.object({ send: z.boolean().default(false) });
-
-export const providerPayload = z.array(z.object({ name: z.string().trim().min(1).max(120), turnaroundDays: z.number().int().min(1).max(180) })).max(50);

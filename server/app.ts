@@ -14,7 +14,7 @@ import type { Config } from './config';
 import { healthRoutes } from './health/health.routes';
 import { errorHandler, unknownApiRoute } from './http/error-handler';
 import { notificationsRoutes } from './notifications/notifications.routes';
-import { outboxRoutine } from './notifications/outbox-routine';
+import { outboxRoutine } from './notifications/deliver-outbox.routine';
 import { AssetsService } from './fleet/assets.service';
 import { FleetDocumentsService } from './fleet/fleet-documents.service';
 import { fleetRoutes } from './fleet/fleet.routes';

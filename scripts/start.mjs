@@ -44,7 +44,7 @@ async function main() {
   Nestkeeper is running at ${url}
 
   Demo sign-ins (password for all: nestkeeper-demo)
-    owner@demo.test     owner — overview, users, mailbox, scheduled jobs
+    owner@demo.test     owner — overview, users, mailbox, routines
     manager@demo.test   shop manager — fleet, bookings, checkout and return
     tech@demo.test      field technician — my kit, checks, damage reports
     billing@demo.test   billing clerk — rentals, deposits, invoices

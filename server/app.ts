@@ -13,10 +13,10 @@ import { signingKey } from './auth/tokens';
 import type { Config } from './config';
 import { healthRoutes } from './health/health.routes';
 import { errorHandler, unknownApiRoute } from './http/error-handler';
-import { JobsService } from './jobs/jobs.service';
-import { jobsRoutes } from './jobs/jobs.routes';
+import { OLD_JOBS_PATH, ROUTINES_PATH, routinesRoutes } from './routines/routines.routes';
+import { RoutinesService } from './routines/routines.service';
 import { notificationsRoutes } from './notifications/notifications.routes';
-import { outboxJob } from './notifications/outbox-job';
+import { outboxRoutine } from './notifications/deliver-outbox.routine';
 import { AssetsService } from './fleet/assets.service';
 import { FleetDocumentsService } from './fleet/fleet-documents.service';
 import { fleetRoutes } from './fleet/fleet.routes';
@@ -29,10 +29,10 @@ import { CalendarService } from './bookings/calendar';
 import { DeskService } from './bookings/desk.service';
 import { HandoverService } from './bookings/handover.service';
 import { JobsRegisterService } from './bookings/jobs.service';
-import { lateReturnsJob } from './bookings/late-returns.job';
+import { lateReturnsRoutine } from './bookings/late-returns.routine';
 import { CalibrationService } from './calibration/calibration.service';
 import { calibrationRoutes } from './calibration/calibration.routes';
-import { dueScanJob } from './calibration/due-scan.job';
+import { dueScanRoutine } from './calibration/due-scan.routine';
 import { ImpactService } from './calibration/impact.service';
 import { LabService } from './calibration/lab.service';
 import { ReviewService } from './calibration/review.service';
@@ -60,13 +60,13 @@ import { usersRoutes } from './users/users.routes';
 export type AppDeps = { config: Config; db: DataSource; mail: Transporter };
 
 /** Builds the Express app and its services; `index.ts` decides when to listen. */
-export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: JobsService } {
+export function buildApp({ config, db, mail }: AppDeps): { app: Express; routines: RoutinesService } {
   const users = new UsersService(db, config.BCRYPT_COST);
   const key = signingKey(config.JWT_SECRET);
   const auth = new AuthService(db, users, key);
   const gateway = new PaymentGateway(createPaymentClient(config));
   const deposits = new DepositsService(db, gateway);
-  const jobs = new JobsService(db, [outboxJob(mail, config.MAIL_FROM), lateReturnsJob(), dueScanJob(), depositRenewalsJob(deposits)]);
+  const routines = new RoutinesService(db, [outboxRoutine(mail, config.MAIL_FROM), lateReturnsRoutine(), dueScanRoutine(), depositRenewalsJob(deposits)]);
   const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
   const assets = new AssetsService(db, publicUrl);
   const kits = new KitsService(db, publicUrl);
@@ -98,7 +98,8 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use('/api/auth', authRoutes(auth, { secureCookies: (config.PUBLIC_URL ?? '').startsWith('https:'), attemptsPer10Min: config.LOGIN_ATTEMPTS_PER_10_MIN, attemptStore: new PgRateLimitStore(db) }));
   app.use('/api/users', usersRoutes(users));
   app.use('/api/mailbox', notificationsRoutes(db));
-  app.use('/api/admin/jobs', jobsRoutes(jobs));
+  app.use(ROUTINES_PATH, routinesRoutes(routines));
+  app.use(OLD_JOBS_PATH, routinesRoutes(routines, OLD_JOBS_PATH));
   app.use('/api/settings', settingsRoutes(db));
   app.use('/api/assets', fleetRoutes(db, assets, fleetDocuments));
   app.use('/api/kits', kitsRoutes(kits, fleetDocuments));
@@ -126,5 +127,5 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; jobs: J
   app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
   app.get(/^\/(?!api\/).*/, (_req, res, next) => res.sendFile(path.join(clientDir, 'index.html'), (err) => err && next()));
   app.use(errorHandler);
-  return { app, jobs };
+  return { app, routines };
 }

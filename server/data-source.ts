@@ -1,33 +1,28 @@
-import { AuditEvent } from './audit/audit-event.entity';
-import { LoginAttempt } from './auth/login-attempt.entity';
+import { auditEntities } from './audit';
+import { authEntities } from './auth';
 import { DepositHold } from './billing/deposit-hold.entity';
 import { DocumentCounter, Invoice, InvoicePayment } from './billing/invoice.entity';
 import { PaymentEvent } from './billing/payment-event.entity';
-import { Booking, BookingItem } from './bookings/booking.entity';
-import { Job } from './bookings/job.entity';
-import { CalibrationEvent, CertificateFile } from './calibration/calibration-event.entity';
-import { ImpactReview, ImpactReviewItem } from './calibration/impact-review.entity';
-import { LabTrip, LabTripItem } from './calibration/lab-trip.entity';
-import { FieldCheck } from './checks/field-check.entity';
+import { bookingEntities } from './bookings';
+import { calibrationEntities } from './calibration';
+import { checkEntities } from './checks';
 import { createDataSource } from './db/data-source';
 import { fleetEntities } from './fleet';
-import { Hold } from './holds/hold.entity';
-import { Incident, IncidentPhoto } from './incidents/incident.entity';
-import { JobLease, JobRun } from './jobs/job-run.entity';
-import { OutboxAttachment } from './notifications/outbox-attachment.entity';
-import { OutboxMessage } from './notifications/outbox-message.entity';
-import { SinkMessage } from './notifications/sink-message.entity';
-import { Organization } from './organizations/organization.entity';
+import { holdEntities } from './holds';
+import { incidentEntities } from './incidents';
+import { notificationEntities } from './notifications';
+import { organizationEntities } from './organizations';
 import { Customer } from './rentals/customer.entity';
 import { RateCard } from './rentals/rate-card.entity';
 import { Rental } from './rentals/rental.entity';
-import { User } from './users/user.entity';
+import { routineEntities } from './routines';
+import { userEntities } from './users';
 
-/** Every entity the data source knows, composed here at the top; a new component adds its own. */
+/** Every entity the data source knows, composed here at the top; each component's index.ts lists its own. */
 export const entities = [
-  Organization, User, LoginAttempt, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, ...fleetEntities, FieldCheck, Hold, Incident, IncidentPhoto,
-  Job, Booking, BookingItem, CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem, Customer, RateCard, Rental,
-  DepositHold, Invoice, InvoicePayment, DocumentCounter, PaymentEvent, OutboxAttachment,
+  ...organizationEntities, ...userEntities, ...authEntities, ...auditEntities, ...notificationEntities, ...routineEntities, ...fleetEntities, ...checkEntities,
+  ...holdEntities, ...incidentEntities, ...bookingEntities, ...calibrationEntities, Customer, RateCard, Rental,
+  DepositHold, Invoice, InvoicePayment, DocumentCounter, PaymentEvent,
 ];
 
 /** Nestkeeper's database: the entities above over db/'s connection settings. */

@@ -12,7 +12,7 @@ import { PaymentGateway } from './billing/payment-gateway';
 import { restoreHoldsOnLocalFake } from './seed/demo-holds';
 
 /**
- * Listens, starts the scheduler and (locally) the fakes; drains on SIGTERM.
+ * Listens, starts the routines' scheduler and (locally) the fakes; drains on SIGTERM.
  * With WEB_CONCURRENCY > 1 the primary process starts the fakes and that many
  * workers share the port (the app is stateless, so they are interchangeable).
  */
@@ -20,16 +20,16 @@ async function serve(config: Config) {
   const db = await openDataSource(config.DATABASE_URL).initialize();
   const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config, { paymentWebhookUrl: webhookUrl(config) }) : null;
   const mail = createMailTransport(config);
-  const { app, jobs } = buildApp({ config, db, mail });
+  const { app, routines } = buildApp({ config, db, mail });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
   if (fakes) await restoreLocalHolds(config, db, fakes.paymentPort);
-  if (config.RUN_SCHEDULER) jobs.start();
+  if (config.RUN_SCHEDULER) routines.start();
   if (cluster.isPrimary || cluster.worker?.id === 1) console.log(`Nestkeeper is listening on http://${config.HOST}:${config.PORT}`);
 
   onStop(async () => {
-    await jobs.stop();
+    await routines.stop();
     const closed = new Promise((resolve) => server.close(resolve));
     server.closeIdleConnections();
     // Requests still running after ten seconds are cut off.

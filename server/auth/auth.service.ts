@@ -3,10 +3,10 @@ import bcrypt from 'bcrypt';
 import type { DataSource } from 'typeorm';
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
-import { AppError, ruleBroken } from '../http/errors';
-import { Organization } from '../organizations/organization.entity';
-import { User } from '../users/user.entity';
-import { publicUser, type UsersService } from '../users/users.service';
+import { AppError, notFound, ruleBroken } from '../http/errors';
+import { loadOrgContext } from '../organizations';
+import { accountByEmail, endSessions, findPerson, ownAccount, replacePasswordHash } from '../users';
+import type { UsersService } from '../users/users.service';
 import type { SessionView, SignInView } from '../../shared/auth/views';
 import { signSessionToken } from './tokens';
 
@@ -25,54 +25,44 @@ export class AuthService {
   }
 
   async login(email: string, password: string): Promise<SignInView> {
-    const user = await this.db
-      .getRepository(User)
-      .createQueryBuilder('u')
-      .addSelect('u.passwordHash')
-      .where('u.email = :email', { email })
-      .getOne();
-    const matches = await bcrypt.compare(password, user?.passwordHash ?? (await this.decoyHash));
-    if (!user || !matches || user.disabled) throw wrongCredentials();
-    const token = signSessionToken(this.key, { sub: user.id, org: user.organizationId, ver: user.tokenVersion });
+    const account = await accountByEmail(this.db, email);
+    const matches = await bcrypt.compare(password, account?.passwordHash ?? (await this.decoyHash));
+    if (!account || !matches || account.user.disabled) throw wrongCredentials();
+    const { user } = account;
+    const token = signSessionToken(this.key, { sub: user.id, org: user.organizationId, ver: account.tokenVersion });
     await inOrganization(this.db, user.organizationId, (tx) => recordAudit(tx, { userId: user.id }, 'user.signed_in', { type: 'user', id: user.id }));
-    return { token, user: publicUser(user) };
+    return { token, user };
   }
 
   /** Ends every token of the caller, the bearer tokens too (not only this browser's cookie): the token version moves on. */
   signOut(actor: Actor) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      await tx.updateWhere(User, { id: actor.userId }, { tokenVersion: () => 'token_version + 1' });
+      await endSessions(tx, actor.userId);
       await recordAudit(tx, actor, 'user.signed_out', { type: 'user', id: actor.userId });
     });
   }
 
   me(actor: Actor): Promise<SessionView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const user = await tx.get(User, { id: actor.userId }, 'Your account');
-      const organization = await tx.manager.findOneByOrFail(Organization, { id: actor.organizationId });
-      const { id, name, timeZone, currency } = organization;
-      return { user: publicUser(user), organization: { id, name, timeZone, currency } };
+      const user = await findPerson(tx, actor.userId);
+      if (!user) throw notFound('Your account');
+      const { id, name, timeZone, currency } = await loadOrgContext(tx);
+      return { user, organization: { id, name, timeZone, currency } };
     });
   }
 
   async changeOwnPassword(actor: Actor, currentPassword: string, newPassword: string) {
-    const me = await readInOrganization(this.db, actor.organizationId, (tx) => tx.get(User, { id: actor.userId }, 'Your account'));
+    const { user: me } = await readInOrganization(this.db, actor.organizationId, (tx) => ownAccount(tx, actor.userId));
     await this.users.refuseGuessable(actor.organizationId, newPassword, 'newPassword', me);
     const newHash = await this.users.hashPassword(newPassword);
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const user = await tx.manager
-        .createQueryBuilder(User, 'u')
-        .addSelect('u.passwordHash')
-        .where('u.id = :id AND u.organization_id = :org', { id: actor.userId, org: actor.organizationId })
-        .getOneOrFail();
-      if (!(await bcrypt.compare(currentPassword, user.passwordHash))) {
+      const { passwordHash } = await ownAccount(tx, actor.userId);
+      if (!(await bcrypt.compare(currentPassword, passwordHash))) {
         throw ruleBroken('wrong_password', 'Your current password is not right.', { fields: { currentPassword: 'is not your current password' } });
       }
-      user.passwordHash = newHash;
-      user.tokenVersion += 1;
-      await tx.save(User, user);
-      await recordAudit(tx, actor, 'user.password_changed', { type: 'user', id: user.id });
-      return signSessionToken(this.key, { sub: user.id, org: user.organizationId, ver: user.tokenVersion });
+      const tokenVersion = await replacePasswordHash(tx, actor.userId, newHash);
+      await recordAudit(tx, actor, 'user.password_changed', { type: 'user', id: actor.userId });
+      return signSessionToken(this.key, { sub: actor.userId, org: actor.organizationId, ver: tokenVersion });
     });
   }
 }

@@ -5,8 +5,8 @@ import { addDays } from '../../shared/calibration/due-date';
 import { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { AppError } from '../http/errors';
-import { loadOrgContext } from '../organizations/org-context';
-import { User } from '../users/user.entity';
+import { loadOrgContext } from '../organizations';
+import { calendarOwner, setCalendarToken } from '../users';
 import type { CalendarFeedView } from '../../shared/bookings/views';
 
 /**
@@ -23,15 +23,15 @@ export class CalendarService {
   rotateToken(actor: Actor): Promise<CalendarFeedView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const token = randomBytes(24).toString('base64url');
-      await tx.updateWhere(User, { id: actor.userId }, { calendarToken: token });
+      await setCalendarToken(tx, actor.userId, token);
       return { url: `${this.publicUrl.replace(/\/$/, '')}/api/calendar.ics?token=${token}` };
     });
   }
 
   async feed(token: string) {
-    const [user] = await this.db.query(`SELECT id, organization_id FROM users WHERE calendar_token = $1 AND NOT disabled`, [token]);
-    if (!user) throw new AppError(404, 'not_found', 'There is no calendar at that address (it may have been replaced).');
-    const tx = new Scoped(this.db.manager, user.organization_id);
+    const owner = await calendarOwner(this.db, token);
+    if (!owner) throw new AppError(404, 'not_found', 'There is no calendar at that address (it may have been replaced).');
+    const tx = new Scoped(this.db.manager, owner.organizationId);
     const ctx = await loadOrgContext(tx);
     const from = addDays(ctx.today, -90);
     const to = addDays(ctx.today, 365);

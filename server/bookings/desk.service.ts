@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { CounterDayView, MyKitView } from '../../shared/bookings/views';
 import { readInOrganization, type Actor } from '../db/transaction';
-import { loadOrgContext } from '../organizations/org-context';
+import { loadOrgContext } from '../organizations';
 import { itemFacts } from './booking-queries';
 import { refusedItems } from './booking-rule';
 import { bookingViews } from './booking-view';

@@ -5,11 +5,11 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { handoverSheetPdf } from '../documents/handover-sheet-pdf';
 import { assetsByIds, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
-import { isRecordId } from '../http/endpoint';
-import { AppError, ruleBroken } from '../http/errors';
+import { AppError, notFound, ruleBroken } from '../http/errors';
+import { isUuid } from '../http/ids';
 import { openIncident } from '../incidents/incidents.service';
-import { loadOrgContext } from '../organizations/org-context';
-import { User } from '../users/user.entity';
+import { loadOrgContext } from '../organizations';
+import { findPerson } from '../users';
 import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
 import type { BookingView } from './booking-view';
 import { bookingIn, checkOut, loadBooking, takeBack } from './lifecycle';
@@ -113,8 +113,9 @@ export class HandoverService {
 
   /** A person's name, or the id of one of the firm's users. */
   private async counterpart(tx: Scoped, who: string): Promise<{ name: string; userId: string | null }> {
-    if (!isRecordId(who)) return { name: who, userId: null };
-    const user = await tx.get(User, { id: who }, 'That person');
+    if (!isUuid(who)) return { name: who, userId: null };
+    const user = await findPerson(tx, who);
+    if (!user) throw notFound('That person');
     return { name: user.name, userId: user.id };
   }
 }

@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import multer from 'multer';
 import { z } from 'zod';
 import { calibrationEventFields, impactAssessmentPayload, intervalDecisionPayload, labTripPayload, noticePayload } from '../../shared/schemas/calibration';
 import { dueItemsCsv, dueItemsPdf } from '../documents/calibration-review';
@@ -7,14 +6,20 @@ import { endpoint } from '../http/endpoint';
 import { AppError } from '../http/errors';
 import { parse } from '../http/parse';
 import { sendDocument } from '../http/send-file';
-import { receiveFiles } from '../http/uploads';
+import { memoryUpload } from '../http/upload';
 import type { CalibrationService } from './calibration.service';
 import type { ImpactService } from './impact.service';
 import type { LabService } from './lab.service';
 import type { ReviewService } from './review.service';
 
 const MAX_CERTIFICATE_BYTES = 20 * 1024 * 1024;
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_CERTIFICATE_BYTES, files: 1, fields: 20 } });
+const upload = memoryUpload({
+  field: 'certificate',
+  maxFiles: 1,
+  maxBytes: MAX_CERTIFICATE_BYTES,
+  eachFile: 'A certificate',
+  wrongFiles: new AppError(400, 'invalid_input', 'Send one PDF in the "certificate" field.', { fields: { certificate: 'one PDF only' } }),
+});
 
 type Services = { calibration: CalibrationService; impact: ImpactService; lab: LabService; review: ReviewService };
 
@@ -22,13 +27,7 @@ type Services = { calibration: CalibrationService; impact: ImpactService; lab: L
 export function calibrationRoutes({ calibration, impact, lab, review }: Services): Router {
   const router = Router();
   const at = '/api';
-  router.post(
-    '/assets/:id/calibrations',
-    receiveFiles(upload.single('certificate'), {
-      tooLarge: `A certificate may be at most ${MAX_CERTIFICATE_BYTES / 1024 / 1024} MB.`,
-      wrongFiles: new AppError(400, 'invalid_input', 'Send one PDF in the "certificate" field.', { fields: { certificate: 'one PDF only' } }),
-    }),
-  );
+  router.post('/assets/:id/calibrations', upload);
   endpoint(router, at, { method: 'post', path: '/assets/:id/calibrations', summary: 'Record a calibration with its certificate PDF (multipart)', access: 'calibration.record', status: 201 }, ({ actor, params, req }) =>
     calibration.record(actor, params.id, parse(calibrationEventFields, req.body), req.file),
   );

@@ -1,4 +1,4 @@
-import { IsNull, type DataSource } from 'typeorm';
+import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
 import { calendarDayIn, dueDate } from '../../shared/calibration/due-date';
 import { suggestInterval, type AsFound } from '../../shared/calibration/interval-review';
@@ -9,10 +9,9 @@ import { closeBooking } from '../bookings';
 import { inOrganization, type Actor } from '../db/transaction';
 import { describeActiveContent, inspectPdf } from '../documents/pdf-inspection';
 import { getAsset, lockAssets, moveAssets, noteCustody, updateCalibrationPlan } from '../fleet';
-import { Hold } from '../holds/hold.entity';
-import { releaseHold } from '../holds/holds.service';
+import { openHoldFor, releaseHold } from '../holds/holds.service';
 import { AppError, ruleBroken } from '../http/errors';
-import { loadOrgContext } from '../organizations/org-context';
+import { loadOrgContext } from '../organizations';
 import { CalibrationEvent, CertificateFile } from './calibration-event.entity';
 import { openImpactReview } from './impact.service';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
@@ -121,7 +120,7 @@ export class CalibrationService {
       else await noteCustody(tx, actor, [assetId], 'calibrated', custody);
       await recordAudit(tx, actor, 'calibration.recorded', { type: 'asset', id: assetId }, { eventId: event.id, asFound: fields.asFound, asLeft: fields.asLeft, dueOn: event.dueOn });
       if (fields.asFound === 'out_of_tolerance') await openImpactReview(tx, actor, asset, { trigger: 'calibration', triggerId: event.id, foundOn: fields.performedOn });
-      const hold = await tx.findOne(Hold, { assetId, releasedAt: IsNull() });
+      const hold = await openHoldFor(tx, assetId);
       if (hold && fields.asLeft === 'in_tolerance' && fields.performedOn >= calendarDayIn(hold.startedAt, ctx.timeZone)) {
         await releaseHold(tx, actor, hold, [{ kind: 'calibration', id: event.id, performedAt: fields.performedOn }], `Calibrated: certificate ${fields.certificateNumber}`);
       } else if (hold && wasAtLab) {

@@ -6,8 +6,7 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { getAsset, type AssetRecord } from '../fleet';
 import { ruleBroken } from '../http/errors';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
+import { enqueueMail, staffAddresses } from '../notifications';
 import { ImpactReview, ImpactReviewItem } from './impact-review.entity';
 import { listReply } from '../http/list-reply';
 

@@ -11,7 +11,7 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { getAsset, getAssets, moveAssets } from '../fleet';
 import { ruleBroken } from '../http/errors';
-import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations/org-context';
+import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
 import { listReply } from '../http/list-reply';
 

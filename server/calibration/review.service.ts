@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { addDays } from '../../shared/calibration/due-date';
 import type { CalibrationReviewView, DueRow } from '../../shared/calibration/views';
 import { readInOrganization, type Actor } from '../db/transaction';
-import { loadOrgContext } from '../organizations/org-context';
+import { loadOrgContext } from '../organizations';
 
 /**
  * Items overdue or due within `withinDays`, most urgent first, each with the

@@ -18,9 +18,8 @@ import { AppError, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
 import { openImpactReview } from '../calibration/impact.service';
 import { calendarDayIn } from '../../shared/calibration/due-date';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
-import { loadOrgContext } from '../organizations/org-context';
+import { enqueueMail, staffAddresses } from '../notifications';
+import { loadOrgContext } from '../organizations';
 import { FieldCheck } from './field-check.entity';
 
 const badField = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { [field]: message } });

@@ -1,9 +1,8 @@
 import type { DataSource } from 'typeorm';
 import { Scoped } from './scoped';
 
-/** Who is acting: every service call carries it, so rules can be checked and
- * records can say who did what. */
-export type Actor = { userId: string; organizationId: string; role: import('../../shared/auth/roles').Role };
+/** Services take the actor from here, beside the transaction helpers they pass it into. */
+export type { Actor } from '../http/guards';
 
 /** Run `work` in one transaction, scoped to the actor's organization. */
 export function inOrganization<T>(db: DataSource, organizationId: string, work: (tx: Scoped) => Promise<T>): Promise<T> {

@@ -2,11 +2,10 @@ import { In, type DataSource } from 'typeorm';
 import type { AssetImportResult, ImportProblem } from '../../shared/assets/views';
 import { dueOnForPlan } from '../../shared/calibration/due-date';
 import { specsByType } from '../../shared/schemas/assets';
-import { AuditEvent } from '../audit/audit-event.entity';
-import { recordAudit } from '../audit/audit.service';
+import { recordAudit, recordAudits } from '../audit/audit.service';
 import { inOrganization, type Actor } from '../db/transaction';
 import { ruleBroken } from '../http/errors';
-import { loadOrgContext } from '../organizations/org-context';
+import { loadOrgContext } from '../organizations';
 import { Asset } from './asset.entity';
 import { parseAssetCsv } from './asset-csv';
 import { noteCustody } from './custody';
@@ -88,7 +87,7 @@ export async function importAssetsCsv(db: DataSource, actor: Actor, text: string
       }),
     );
     await noteCustody(tx, actor, ids, 'registered', { counterpart: ctx.name, why: 'Imported from CSV' });
-    await tx.insertMany(AuditEvent, ids.map((id, i) => ({ actorUserId: actor.userId, action: 'asset.created', subjectType: 'asset', subjectId: id, details: { assetTag: rows[i].payload.assetTag, via: 'csv_import' } })));
+    await recordAudits(tx, actor, ids.map((id, i) => ({ action: 'asset.created', subject: { type: 'asset', id }, details: { assetTag: rows[i].payload.assetTag, via: 'csv_import' } })));
     await recordAudit(tx, actor, 'assets.imported', { type: 'organization', id: actor.organizationId }, { count: ids.length, kitsCreated: kitNames.length });
     return { ...summary, created: ids.length };
   });

@@ -1,7 +1,7 @@
 import { addDays } from '../../shared/calibration/due-date';
 import type { AssetListQuery } from '../../shared/schemas/assets';
 import type { Scoped } from '../db/scoped';
-import type { OrgContext } from '../organizations/org-context';
+import type { OrgContext } from '../organizations';
 import type { Asset } from './asset.entity';
 
 

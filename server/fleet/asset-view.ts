@@ -1,6 +1,6 @@
 import { calibrationState } from '../../shared/calibration/due-date';
 import type { AssetView } from '../../shared/assets/views';
-import type { OrgContext } from '../organizations/org-context';
+import type { OrgContext } from '../organizations';
 import type { Asset } from './asset.entity';
 
 /** The QR label's payload: an address a phone camera can open, which lookup also resolves. */

@@ -12,9 +12,9 @@ import {
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
-import { isRecordId } from '../http/endpoint';
 import { AppError, conflict, ruleBroken } from '../http/errors';
-import { loadOrgContext } from '../organizations/org-context';
+import { isUuid } from '../http/ids';
+import { loadOrgContext } from '../organizations';
 import { Asset } from './asset.entity';
 import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
@@ -54,7 +54,7 @@ export class AssetsService {
       const ctx = await loadOrgContext(tx);
       const trimmed = code.trim();
       const tail = trimmed.slice(-36);
-      const id = isRecordId(tail) ? tail : undefined;
+      const id = isUuid(tail) ? tail : undefined;
       const qb = tx.select(Asset, 'a').leftJoinAndSelect('a.kit', 'k');
       const asset = id
         ? await qb.andWhere('a.id = :id', { id }).getOne()

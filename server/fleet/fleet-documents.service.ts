@@ -6,7 +6,7 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { assetLabelPdf, kitLabelSheetPdf } from '../documents/asset-label';
 import { equipmentRecordPdf } from '../documents/equipment-record-pdf';
 import { shippingSheetPdf } from '../documents/shipping-sheet-pdf';
-import { loadOrgContext } from '../organizations/org-context';
+import { loadOrgContext } from '../organizations';
 import { Asset } from './asset.entity';
 import { assetsToCsv } from './asset-csv';
 import { findAssets } from './asset-list';

@@ -8,14 +8,14 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { ruleBroken } from '../http/errors';
 import { calendarDayIn } from '../../shared/calibration/due-date';
 import { getAsset, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
-import { loadOrgContext } from '../organizations/org-context';
+import { loadOrgContext } from '../organizations';
 import { Hold } from './hold.entity';
 import { listReply } from '../http/list-reply';
 
 /** Take an asset out of service inside the caller's transaction. A second
  * reason while already held is recorded on the audit trail, not as a new hold. */
 export async function placeHold(tx: Scoped, actor: Actor, asset: Pick<AssetRecord, 'id'>, hold: { reason: HoldReason; summary: string; incidentId?: string; checkId?: string }) {
-  const current = await tx.findOne(Hold, { assetId: asset.id, releasedAt: IsNull() });
+  const current = await openHoldFor(tx, asset.id);
   if (current) {
     await recordAudit(tx, actor, 'asset.hold_reason_added', { type: 'asset', id: asset.id }, { holdId: current.id, ...hold });
     return current;
@@ -34,6 +34,11 @@ export async function placeHold(tx: Scoped, actor: Actor, asset: Pick<AssetRecor
   });
   await moveAssets(tx, actor, [asset.id], 'held', { why: hold.summary, details: { holdId: created.id, reason: hold.reason, summary: hold.summary } });
   return created;
+}
+
+/** The asset's hold that is not released yet, if any (an asset has at most one). */
+export function openHoldFor(tx: Scoped, assetId: string) {
+  return tx.findOne(Hold, { assetId, releasedAt: IsNull() });
 }
 
 type Evidence = { kind: string; id: string; performedAt: string; position?: string | null };
@@ -77,7 +82,7 @@ export class HoldsService {
   release(actor: Actor, assetId: string, note?: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const asset = await getAsset(tx, assetId);
-      const hold = await tx.findOne(Hold, { assetId, releasedAt: IsNull() });
+      const hold = await openHoldFor(tx, assetId);
       if (!hold) throw ruleBroken('not_held', `${asset.assetTag} is not on hold.`);
       const { timeZone } = await loadOrgContext(tx);
       const { evidence, missing } = await this.evidenceSince(tx, asset, hold.startedAt, timeZone);

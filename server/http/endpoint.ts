@@ -1,9 +1,9 @@
 import type { NextFunction, Request, Response, Router } from 'express';
 import { z } from 'zod';
 import type { Capability } from '../../shared/auth/roles';
-import { identifyCaller, requireCapability, requireSignIn } from '../auth/guards';
-import type { Actor } from '../db/transaction';
 import { notFound } from './errors';
+import { identifyCaller, requireCapability, requireSignIn, type Actor } from './guards';
+import { isUuid } from './ids';
 import { parse } from './parse';
 
 type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
@@ -67,15 +67,10 @@ export function endpoint<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
   });
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
-/** Record ids are UUIDs (the one test of it; path ids, and ids inside a value, use it). */
-export const isRecordId = (value: string) => UUID.test(value);
-
 /** Record ids are UUIDs; anything else cannot name a record, so it is a 404 (not a database error). */
 function assertIdParams(params: Record<string, string>) {
   for (const [name, value] of Object.entries(params)) {
-    if ((name === 'id' || name.endsWith('Id')) && !isRecordId(value)) throw notFound('That record');
+    if ((name === 'id' || name.endsWith('Id')) && !isUuid(value)) throw notFound('That record');
   }
 }
 

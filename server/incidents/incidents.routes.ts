@@ -1,26 +1,25 @@
 import { Router } from 'express';
-import multer from 'multer';
 import { z } from 'zod';
 import { incidentListQuery, incidentPayload, incidentUpdatePayload, MAX_INCIDENT_PHOTOS, MAX_PHOTO_BYTES } from '../../shared/schemas/incidents';
 import { endpoint } from '../http/endpoint';
 import { AppError } from '../http/errors';
 import { parse } from '../http/parse';
-import { receiveFiles } from '../http/uploads';
+import { memoryUpload } from '../http/upload';
 import type { IncidentsService } from './incidents.service';
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_PHOTO_BYTES, files: MAX_INCIDENT_PHOTOS, fields: 20 } });
+const upload = memoryUpload({
+  field: 'photos',
+  maxFiles: MAX_INCIDENT_PHOTOS,
+  maxBytes: MAX_PHOTO_BYTES,
+  eachFile: 'Each photo',
+  wrongFiles: new AppError(413, 'too_large', `Attach at most ${MAX_INCIDENT_PHOTOS} photos, in the "photos" field.`),
+});
 const photoQuery = z.object({ size: z.enum(['full', 'thumbnail']).default('full') });
 
 export function incidentsRoutes(incidents: IncidentsService): Router {
   const router = Router();
   const at = '/api/incidents';
-  router.post(
-    '/',
-    receiveFiles(upload.array('photos', MAX_INCIDENT_PHOTOS), {
-      tooLarge: `Each photo may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`,
-      wrongFiles: new AppError(413, 'too_large', `Attach at most ${MAX_INCIDENT_PHOTOS} photos, in the "photos" field.`),
-    }),
-  );
+  router.post('/', upload);
   endpoint(router, at, { method: 'post', path: '/', summary: 'Report damage or loss (multipart, photos[]); the item is held at once', access: 'incidents.report', status: 201 }, ({ actor, req }) => {
     const fields = parse(incidentPayload, req.body);
     return incidents.report(actor, fields, (req.files as Express.Multer.File[] | undefined) ?? []);

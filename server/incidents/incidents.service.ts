@@ -8,8 +8,7 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { findAsset, getAsset, markDamaged, type AssetRecord } from '../fleet';
 import { AppError, notFound, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
+import { enqueueMail, staffAddresses } from '../notifications';
 import { Incident, IncidentPhoto } from './incident.entity';
 import { preparePhoto, type UploadedPhoto } from './photos';
 

@@ -1,3 +1,8 @@
-/** Notifications' surface: mail is queued in the caller's transaction and sent by the outbox job. */
+/** Notifications' surface: mail is queued in the caller's transaction and sent by the deliver-outbox routine. */
+import { OutboxAttachment } from './outbox-attachment.entity';
+import { OutboxMessage } from './outbox-message.entity';
+import { SinkMessage } from './sink-message.entity';
+
+export const notificationEntities = [OutboxMessage, OutboxAttachment, SinkMessage];
 export { enqueueMail, type MailAttachment } from './outbox';
 export { staffAddresses } from './staff';

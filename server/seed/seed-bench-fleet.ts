@@ -2,10 +2,12 @@ import 'reflect-metadata';
 import bcrypt from 'bcrypt';
 import { addDays, dueOnForPlan, todayIn } from '../../shared/calibration/due-date';
 import { assetTypes, type AssetType } from '../../shared/schemas/assets';
-import { openDataSource } from '../data-source';
+import { createDataSource } from '../db/data-source';
 import { Scoped } from '../db/scoped';
-import { seedAssets, seedKits } from '../fleet';
+import { fleetEntities, seedAssets, seedKits } from '../fleet';
+import { organizationEntities } from '../organizations';
 import { Organization } from '../organizations/organization.entity';
+import { userEntities } from '../users';
 import { User } from '../users/user.entity';
 import { DEMO_PASSWORD } from './demo-people';
 
@@ -26,7 +28,8 @@ const specsFor: Partial<Record<AssetType, (i: number) => Record<string, unknown>
 const locations = ['Shop, bay 1', 'Shop, bay 2', 'Shop, spares cabinet', 'Van 1', 'Van 2', 'Shelf A', 'Shelf B', 'Shelf C'];
 
 export async function seedBenchFleet(url: string, count: number) {
-  const db = await openDataSource(url, 2).initialize();
+  // Only the tables this seed writes, so the seeds never import the top-level composition (which imports them).
+  const db = await createDataSource(url, [...organizationEntities, ...userEntities, ...fleetEntities], 2).initialize();
   try {
     const existing = await db.getRepository(User).findOne({ where: { email: BENCH_EMAIL } });
     if (existing) return { organizationId: existing.organizationId, created: 0 };

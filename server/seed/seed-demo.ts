@@ -1,7 +1,7 @@
 import bcrypt from 'bcrypt';
 import type { DataSource } from 'typeorm';
 import { Scoped } from '../db/scoped';
-import { enqueueMail } from '../notifications/outbox';
+import { enqueueMail } from '../notifications';
 import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 import { DEMO_PASSWORD, demoFirm, otherFirm } from './demo-people';

@@ -9,18 +9,10 @@ import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
-import { Organization } from '../organizations/organization.entity';
+import { loadOrgContext } from '../organizations';
+import { replacePasswordHash } from './accounts';
+import { publicUser } from './people';
 import { User } from './user.entity';
-
-export const publicUser = (u: User): UserView => ({
-  id: u.id,
-  email: u.email,
-  name: u.name,
-  role: u.role,
-  organizationId: u.organizationId,
-  disabled: u.disabled,
-  createdAt: u.createdAt.toISOString(),
-});
 
 /** The firm's active owners, row-locked until the transaction ends (in id order, so two callers cannot deadlock). */
 const lockActiveOwners = (tx: Scoped) => tx.sql<{ id: string }>(`SELECT id FROM users WHERE organization_id = $1 AND role = 'owner' AND NOT disabled ORDER BY id FOR UPDATE`);
@@ -37,7 +29,7 @@ export class UsersService {
 
   /** Refuses (400 on `field`, in plain words) a password a guesser would try early for this person and firm. */
   async refuseGuessable(organizationId: string, password: string, field: string, person: Pick<User, 'email' | 'name'>) {
-    const firm = await this.db.getRepository(Organization).findOneByOrFail({ id: organizationId });
+    const firm = await inOrganization(this.db, organizationId, (tx) => loadOrgContext(tx));
     const weakness = await passwordWeakness(password, [person.email, person.name, firm.name]);
     if (weakness) throw new AppError(400, 'invalid_input', 'That password is too easy to guess.', { fields: { [field]: weakness } });
   }
@@ -85,10 +77,7 @@ export class UsersService {
     await this.refuseGuessable(actor.organizationId, password, 'password', person);
     const passwordHash = await this.hashPassword(password);
     await inOrganization(this.db, actor.organizationId, async (tx) => {
-      const user = await tx.get(User, { id }, 'That user');
-      user.passwordHash = passwordHash;
-      user.tokenVersion += 1;
-      await tx.save(User, user);
+      await replacePasswordHash(tx, id, passwordHash);
       await recordAudit(tx, actor, 'user.password_reset', { type: 'user', id });
     });
   }

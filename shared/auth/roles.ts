@@ -7,7 +7,7 @@ export const capabilities = [
   'users.manage',
   'settings.manage',
   'mailbox.read',
-  'jobs.run',
+  'routines.run',
   'fleet.read',
   'fleet.write',
   'calibration.record',

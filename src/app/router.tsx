@@ -1,4 +1,4 @@
-import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, redirect, type RouteObject } from 'react-router-dom';
 import type { ComponentType } from 'react';
 import { RequireSession } from '../features/auth/components/require-session';
 import type { Capability } from '../lib/roles';
@@ -86,7 +86,11 @@ export const routes: RouteObject[] = [
           gated('settings.manage', [{ path: 'settings', lazy: screen(() => import('./routes/settings')) }]),
           gated('users.manage', [{ path: 'users', lazy: screen(() => import('./routes/users')) }]),
           gated('mailbox.read', [{ path: 'mailbox', lazy: screen(() => import('./routes/mailbox')) }]),
-          gated('jobs.run', [{ path: 'admin/jobs', lazy: screen(() => import('./routes/jobs')) }]),
+          gated('routines.run', [
+            { path: 'admin/routines', lazy: screen(() => import('./routes/routines')) },
+            // The screen's first address, from when routines were "scheduled jobs".
+            { path: 'admin/jobs', loader: () => redirect('/admin/routines') },
+          ]),
           { path: 'account/password', lazy: screen(() => import('./routes/account-password')) },
           { path: '*', lazy: screen(() => import('./routes/not-found')) },
         ],

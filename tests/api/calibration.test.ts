@@ -5,8 +5,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { renderPdf } from '../../server/documents/pdf';
 import { pgSinkStore, startSmtpSink } from '../../server/fakes/smtp-sink';
-import { JobsService } from '../../server/jobs/jobs.service';
-import { dueScanJob } from '../../server/calibration/due-scan.job';
+import { RoutinesService } from '../../server/routines/routines.service';
+import { dueScanRoutine } from '../../server/calibration/due-scan.routine';
 import { deliverOutbox } from '../../server/notifications/outbox-sender';
 import { activeChanges, certificateWith } from '../support/pdf-fixtures';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
@@ -60,6 +60,18 @@ describe('recording calibrations', () => {
     const none = await t.api.post(`/api/assets/${a.id}/calibrations`).set(bearer(manager)).field('performedOn', '2026-11-01');
     expect(none.status).toBe(400);
     expect(Object.keys(none.body.error.details.fields).sort()).toEqual(['asFound', 'asLeft', 'certificateNumber', 'provider']);
+    expect((await t.api.get(`/api/assets/${a.id}/calibrations`).set(bearer(manager))).body.items).toHaveLength(0);
+  });
+
+  it('refuses two certificates or one in another field (400) and an oversized form (413), keeping nothing', async () => {
+    const a = await tracker('2026-01-01');
+    const twice = record(manager, a.id, fields('2026-11-01')).attach('certificate', certificate, { filename: 'again.pdf', contentType: 'application/pdf' });
+    expect((await twice).body.error).toMatchObject({ code: 'invalid_input', details: { fields: { certificate: 'one PDF only' } } });
+    const elsewhere = t.api.post(`/api/assets/${a.id}/calibrations`).set(bearer(manager)).attach('file', certificate, { filename: 'certificate.pdf', contentType: 'application/pdf' });
+    expect((await elsewhere).status).toBe(400);
+    const crowded = t.api.post(`/api/assets/${a.id}/calibrations`).set(bearer(manager));
+    for (let i = 0; i < 21; i += 1) crowded.field(`note${i}`, 'x');
+    expect((await crowded).body.error).toMatchObject({ code: 'too_large', message: 'The form is larger than Nestkeeper accepts.' });
     expect((await t.api.get(`/api/assets/${a.id}/calibrations`).set(bearer(manager))).body.items).toHaveLength(0);
   });
 
@@ -275,8 +287,8 @@ describe("the owner's review and the daily scan", () => {
     const sink = await startSmtpSink({ port: 0, store: pgSinkStore(pool) });
     const transport = nodemailer.createTransport({ host: '127.0.0.1', port: sink.port, secure: false, ignoreTLS: true });
     const digests = () => t.db.query(`SELECT recipients FROM outbox_messages WHERE subject LIKE 'Calibration:%'`);
-    const a = new JobsService(t.db, [dueScanJob()]);
-    const b = new JobsService(t.db, [dueScanJob()]);
+    const a = new RoutinesService(t.db, [dueScanRoutine()]);
+    const b = new RoutinesService(t.db, [dueScanRoutine()]);
     const runs = await Promise.all([a.run('due-scan', 'manual'), b.run('due-scan', 'manual')]);
     expect(runs.map((r) => r.status)).toEqual(['succeeded', 'succeeded']);
     // Each firm with changes gets one digest to its owners and managers, not one per item or per run.
@@ -300,16 +312,16 @@ describe("the owner's review and the daily scan", () => {
 
 describe('due scan timing and settings', () => {
   it("scans a firm on schedule only in the hour its own clock reads six, and every firm on a manual run", async () => {
-    const job = dueScanJob();
+    const scan = dueScanRoutine();
     await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
     // 03:10 UTC is 04:10 in Wrenhallow (Europe/Berlin): not the demo firm's hour, nothing is scanned.
-    expect(await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule', organizationId: null })).toMatchObject({ itemsChanged: 0, digests: 0 });
+    expect(await scan.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule', organizationId: null })).toMatchObject({ itemsChanged: 0, digests: 0 });
     // 05:10 UTC is 06:10 there (and 05:10 in the London firm, which waits for its own six o'clock).
-    const atSix = await job.run({ db: t.db, now: new Date('2026-12-01T05:10:00Z'), trigger: 'schedule', organizationId: null });
+    const atSix = await scan.run({ db: t.db, now: new Date('2026-12-01T05:10:00Z'), trigger: 'schedule', organizationId: null });
     expect(atSix.itemsChanged).toBeGreaterThan(0);
     expect(atSix.digests).toBe(1);
     await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
-    expect((await job.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'manual', organizationId: null })).itemsChanged).toBeGreaterThan(0);
+    expect((await scan.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'manual', organizationId: null })).itemsChanged).toBeGreaterThan(0);
   });
 
   it('lets the owner set providers with turnarounds and the interval policy', async () => {

@@ -368,7 +368,7 @@ describe('payment webhooks', () => {
 });
 
 describe('the daily renewal of holds near lapse', () => {
-  const runRenewals = (now: Date) => t.jobs.definitions.find((j) => j.name === 'deposit-renewals')!.run({ db: t.db, now, trigger: 'manual', organizationId: null });
+  const runRenewals = (now: Date) => t.routines.definitions.find((j) => j.name === 'deposit-renewals')!.run({ db: t.db, now, trigger: 'manual', organizationId: null });
 
   it('renews on the saved card (merchant-initiated: Visa 4 days 18 hours) and lets the old hold go', async () => {
     const r = await newRental(20);

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { JobDefinition } from '../../server/jobs/job';
-import { JobsService } from '../../server/jobs/jobs.service';
-import { pgRunCoordinator } from '../../server/jobs/pg-run-coordinator';
+import type { Routine } from '../../server/routines';
+import { pgRunCoordinator } from '../../server/routines/pg-run-coordinator';
+import { RoutinesService } from '../../server/routines/routines.service';
 import { waitUntil } from '../support/eventually';
 import { createTestDatabase } from '../support/test-db';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
@@ -12,24 +12,24 @@ beforeAll(async () => {
 });
 afterAll(() => t.drop());
 
-describe('scheduled work', () => {
+describe('routines (scheduled work)', () => {
   it('runs each fire on exactly one of two instances sharing the database', async () => {
     const fired: string[] = [];
-    const job = (instance: string): JobDefinition => ({
+    const tick = (instance: string): Routine => ({
       name: 'tick',
-      description: 'test job',
+      description: 'test routine',
       schedule: '* * * * * *',
       run: async () => {
         fired.push(instance);
         return { instance };
       },
     });
-    const a = new JobsService(t.db, [job('a')]);
-    const b = new JobsService(t.db, [job('b')]);
+    const a = new RoutinesService(t.db, [tick('a')]);
+    const b = new RoutinesService(t.db, [tick('b')]);
     a.start();
     b.start();
     // Two fires, however late a busy machine lets them come.
-    await waitUntil('two fires of the every-second job', () => fired.length >= 2);
+    await waitUntil('two fires of the every-second routine', () => fired.length >= 2);
     await a.stop();
     await b.stop();
     // Stopping does not wait for a fire already claimed: let every claimed slot finish its run before counting.
@@ -58,38 +58,51 @@ describe('scheduled work', () => {
   });
 });
 
-describe('jobs admin API', () => {
+describe('routines admin API', () => {
   let app: TestApp;
   beforeAll(async () => {
     app = await createTestApp();
   });
   afterAll(() => app.close());
 
-  it('lets the owner run a job now, logs the run, and refuses other roles', async () => {
+  it('lets the owner run a routine now, logs the run, and refuses other roles', async () => {
     const owner = await app.tokenFor('owner@demo.test');
     const [{ queued }] = await app.db.query(`SELECT count(*)::int AS queued FROM outbox_messages m JOIN users u ON u.organization_id = m.organization_id AND u.email = 'owner@demo.test' WHERE m.status = 'pending'`);
     expect(queued).toBeGreaterThan(0);
-    const run = await app.api.post('/api/admin/jobs/deliver-outbox/run').set(bearer(owner));
+    const run = await app.api.post('/api/admin/routines/deliver-outbox/run').set(bearer(owner));
     expect(run.status).toBe(200);
     // SMTP is not listening in this app: the run succeeds and the mail waits. "Run now" covers the owner's own firm only.
     expect(run.body.run).toMatchObject({ status: 'succeeded', trigger: 'manual', scope: 'your firm', summary: { sent: 0, deferred: queued, pending: queued } });
-    const list = await app.api.get('/api/admin/jobs').set(bearer(owner));
+    const list = await app.api.get('/api/admin/routines').set(bearer(owner));
     expect(list.body.items).toEqual(expect.arrayContaining([expect.objectContaining({ name: 'deliver-outbox', lastRun: expect.objectContaining({ id: run.body.run.id }) }), expect.objectContaining({ name: 'late-returns', lastRun: null })]));
-    expect((await app.api.post('/api/admin/jobs/no-such-job/run').set(bearer(owner))).status).toBe(404);
+    expect((await app.api.post('/api/admin/routines/no-such-routine/run').set(bearer(owner))).status).toBe(404);
     const manager = await app.tokenFor('manager@demo.test');
-    expect((await app.api.get('/api/admin/jobs').set(bearer(manager))).status).toBe(403);
+    expect((await app.api.get('/api/admin/routines').set(bearer(manager))).status).toBe(403);
   });
 
   it("keeps one firm's run now to that firm, and out of the other firm's view", async () => {
     const other = await app.tokenFor('owner@other.test');
     const demo = await app.tokenFor('owner@demo.test');
     // The demo firm has a late return (seeded); the other firm has none, and its run must not touch the demo firm's.
-    const run = await app.api.post('/api/admin/jobs/late-returns/run').set(bearer(other));
+    const run = await app.api.post('/api/admin/routines/late-returns/run').set(bearer(other));
     expect(run.body.run).toMatchObject({ status: 'succeeded', scope: 'your firm', summary: { firms: 0, lateBookings: 0 } });
-    const demoView = (await app.api.get('/api/admin/jobs').set(bearer(demo))).body.items.find((j: { name: string }) => j.name === 'late-returns');
+    const demoView = (await app.api.get('/api/admin/routines').set(bearer(demo))).body.items.find((j: { name: string }) => j.name === 'late-returns');
     expect(demoView.lastRun).toBeNull();
-    const own = await app.api.post('/api/admin/jobs/late-returns/run').set(bearer(demo));
+    const own = await app.api.post('/api/admin/routines/late-returns/run').set(bearer(demo));
     expect(own.body.run.summary).toMatchObject({ firms: 1 });
     expect(own.body.run.summary.lateBookings).toBeGreaterThan(0);
+  });
+
+  it('still answers at /api/admin/jobs, the paths API.md first published', async () => {
+    const owner = await app.tokenFor('owner@demo.test');
+    const run = await app.api.post('/api/admin/jobs/late-returns/run').set(bearer(owner));
+    expect(run.status).toBe(200);
+    expect(run.body.run).toMatchObject({ status: 'succeeded', scope: 'your firm' });
+    const oldList = await app.api.get('/api/admin/jobs').set(bearer(owner));
+    const newList = await app.api.get('/api/admin/routines').set(bearer(owner));
+    expect(oldList.status).toBe(200);
+    expect(oldList.body).toEqual(newList.body);
+    expect(oldList.body.items.find((r: { name: string }) => r.name === 'late-returns').lastRun.id).toBe(run.body.run.id);
+    expect((await app.api.get('/api/admin/jobs').set(bearer(await app.tokenFor('manager@demo.test')))).status).toBe(403);
   });
 });

@@ -124,7 +124,7 @@ describe('bad input', () => {
     expect((await t.api.get('/api/health')).body).toEqual({ status: 'ok' });
     const doc = (await t.api.get('/api/openapi.json')).body;
     expect(doc.openapi).toBe('3.1.0');
-    expect(Object.keys(doc.paths)).toEqual(expect.arrayContaining(['/api/auth/login', '/api/users/{id}', '/api/mailbox', '/api/admin/jobs/{name}/run']));
+    expect(Object.keys(doc.paths)).toEqual(expect.arrayContaining(['/api/auth/login', '/api/users/{id}', '/api/mailbox', '/api/admin/routines/{name}/run', '/api/admin/jobs/{name}/run']));
   });
 });
 

@@ -1,5 +1,5 @@
 import 'reflect-metadata';
-import { dueScanJob } from '../../server/calibration/due-scan.job';
+import { dueScanRoutine } from '../../server/calibration/due-scan.routine';
 import { openDataSource } from '../../server/data-source';
 
 /**
@@ -12,7 +12,7 @@ const db = await openDataSource(process.env.DATABASE_URL!, 4).initialize();
 const [{ assets }] = await db.query(`SELECT count(*)::int AS assets FROM assets`);
 const [{ bookings }] = await db.query(`SELECT count(*)::int AS bookings FROM bookings`);
 const t0 = performance.now();
-const summary = await dueScanJob().run({ db, now: new Date(), trigger: 'manual', organizationId: null });
+const summary = await dueScanRoutine().run({ db, now: new Date(), trigger: 'manual', organizationId: null });
 const scanMs = performance.now() - t0;
 console.log(`\nDaily due scan over ${assets} assets and ${bookings} bookings: ${(scanMs / 1000).toFixed(2)} s (${JSON.stringify(summary)})`);
 await db.destroy();

@@ -20,7 +20,7 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
     ...overrides,
   });
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: config.SMTP_PORT, secure: false, ignoreTLS: true });
-  const { app, jobs } = buildApp({ config, db: database.db, mail });
+  const { app, routines } = buildApp({ config, db: database.db, mail });
   const api = request(app);
 
   async function tokenFor(email: string, password = DEMO_PASSWORD): Promise<string> {
@@ -29,7 +29,7 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
     return res.body.token as string;
   }
 
-  return { app, api, jobs, db: database.db, config, tokenFor, close: () => database.drop() };
+  return { app, api, routines, db: database.db, config, tokenFor, close: () => database.drop() };
 }
 
 /** A webhook signing secret of the test's own (nothing is built in). */

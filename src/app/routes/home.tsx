@@ -75,7 +75,7 @@ const homes: Record<Role, RoleHome> = {
     links: [
       { to: '/users', label: 'Users', note: 'Add the people in your firm and give each a role.' },
       { to: '/mailbox', label: 'Mailbox', note: 'Read every e-mail Nestkeeper has sent.' },
-      { to: '/admin/jobs', label: 'Scheduled jobs', note: 'See when the daily scans last ran, or run one now.' },
+      { to: '/admin/routines', label: 'Routines', note: 'See when the daily scans and other routines last ran, or run one now.' },
     ],
   },
   manager: {

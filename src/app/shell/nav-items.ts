@@ -26,7 +26,7 @@ export const navItems: readonly NavItem[] = [
   { to: '/incidents', label: 'Incidents', capability: 'fleet.read' },
   { to: '/users', label: 'Users', capability: 'users.manage' },
   { to: '/mailbox', label: 'Mailbox', capability: 'mailbox.read' },
-  { to: '/admin/jobs', label: 'Scheduled jobs', capability: 'jobs.run' },
+  { to: '/admin/routines', label: 'Routines', capability: 'routines.run' },
   { to: '/settings', label: 'Settings', capability: 'settings.manage' },
   { to: '/account/password', label: 'My password' },
 ];

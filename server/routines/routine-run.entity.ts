@@ -1,15 +1,18 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-import type { JobRunStatus } from '../../shared/jobs/views';
+import type { RoutineRunStatus } from '../../shared/routines/views';
 
-/** One execution of a scheduled job, on whichever instance won the fire. */
+// Tables and the name column keep their first names (job_…): instances still on the old version during a
+// rolling update keep claiming and logging in the same tables, so no fire runs twice.
+
+/** One execution of a routine, on whichever instance won the fire. */
 @Entity({ name: 'job_runs' })
-@Index(['jobName', 'startedAt'])
-export class JobRun {
+@Index(['routineName', 'startedAt'])
+export class RoutineRun {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
   @Column({ name: 'job_name', type: 'text' })
-  jobName: string;
+  routineName: string;
 
   @Column({ type: 'text' })
   trigger: 'schedule' | 'manual';
@@ -28,7 +31,7 @@ export class JobRun {
   finishedAt: Date | null;
 
   @Column({ type: 'text' })
-  status: JobRunStatus;
+  status: RoutineRunStatus;
 
   @Column({ type: 'jsonb', nullable: true })
   summary: Record<string, unknown> | null;
@@ -43,7 +46,7 @@ export class JobRun {
 
 /** A claim on one cron slot: the first instance to insert the key runs it. */
 @Entity({ name: 'job_leases' })
-export class JobLease {
+export class RoutineLease {
   @Column({ type: 'text', primary: true })
   key: string;
 

@@ -1,9 +1,13 @@
 import type { RequestHandler } from 'express';
 import type { PassportStatic } from 'passport';
-import { can, type Capability } from '../../shared/auth/roles';
-import type { Actor } from '../db/transaction';
-import { AppError, forbidden } from '../http/errors';
+import { can, type Capability, type Role } from '../../shared/auth/roles';
+import { AppError, forbidden } from './errors';
 
+/** Who is acting: the sign-in guard puts it on the request, every service call carries it,
+ * so rules can be checked and records can say who did what. */
+export type Actor = { userId: string; organizationId: string; role: Role };
+
+/** The passport instance comes from `app.locals` (auth/ builds it), so this base knows no component. */
 const signIn =
   (required: boolean): RequestHandler =>
   (req, res, next) => {

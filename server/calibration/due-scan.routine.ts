@@ -1,8 +1,7 @@
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { Scoped } from '../db/scoped';
-import type { JobDefinition } from '../jobs/job';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
+import { enqueueMail, staffAddresses } from '../notifications';
+import type { Routine } from '../routines';
 import { dueItems } from './review.service';
 
 type Changed = { organization_id: string; asset_tag: string; state: string };
@@ -13,7 +12,7 @@ type Changed = { organization_id: string; asset_tag: string; state: string };
  * change is reported once, however many instances or re-runs), then each
  * firm's owners and managers get one digest through the outbox.
  */
-export const dueScanJob = (): JobDefinition => ({
+export const dueScanRoutine = (): Routine => ({
   name: 'due-scan',
   description: 'Marks calibration states and e-mails each owner and manager one digest of newly due-soon and overdue items and the bookings they threaten.',
   // Hourly; a firm is scanned in the hour its own clock reads 06:00 (every firm on "run now").

@@ -5,40 +5,40 @@ import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
 import { useDateFormat } from '../../../lib/format';
-import { useJobs } from '../api/get-jobs';
-import { useRunJob } from '../api/run-job';
-import type { JobRunView, ScheduledJobView } from '../../../../shared/jobs/views';
-import { JobRunStatus } from './job-run-status';
+import { useRoutines } from '../api/get-routines';
+import { useRunRoutine } from '../api/run-routine';
+import type { RoutineRunView, RoutineView } from '../../../../shared/routines/views';
+import { RoutineRunStatus } from './routine-run-status';
 
-type RunOutcome = { run?: JobRunView; error?: string };
+type RunOutcome = { run?: RoutineRunView; error?: string };
 
-/** Scheduled jobs, their last run, and a "Run now" per job. Few rows, so a plain table. */
-export function JobsTable() {
-  const jobs = useJobs();
-  const runJob = useRunJob();
+/** Routines, their last run, and a "Run now" per routine. Few rows, so a plain table. */
+export function RoutinesTable() {
+  const routines = useRoutines();
+  const runRoutine = useRunRoutine();
   const [outcomes, setOutcomes] = useState<Record<string, RunOutcome>>({});
   const fmt = useDateFormat();
 
-  if (jobs.isPending) return <LoadingPanel label="Loading scheduled jobs…" />;
-  if (jobs.isError) {
+  if (routines.isPending) return <LoadingPanel label="Loading routines…" />;
+  if (routines.isError) {
     return (
-      <Notice tone="error" title="The job list could not be loaded">
-        {jobs.error.message}
+      <Notice tone="error" title="The routines could not be loaded">
+        {routines.error.message}
       </Notice>
     );
   }
-  if (jobs.data.items.length === 0) {
-    return <EmptyState title="No scheduled jobs">The server has no scheduled jobs registered.</EmptyState>;
+  if (routines.data.items.length === 0) {
+    return <EmptyState title="No routines">The server has no routines registered.</EmptyState>;
   }
 
-  const runNow = (job: ScheduledJobView) => {
-    setOutcomes((o) => ({ ...o, [job.name]: {} }));
-    runJob.mutate(job.name, {
-      onSuccess: ({ run }) => setOutcomes((o) => ({ ...o, [job.name]: { run } })),
+  const runNow = (routine: RoutineView) => {
+    setOutcomes((o) => ({ ...o, [routine.name]: {} }));
+    runRoutine.mutate(routine.name, {
+      onSuccess: ({ run }) => setOutcomes((o) => ({ ...o, [routine.name]: { run } })),
       onError: (error) =>
         setOutcomes((o) => ({
           ...o,
-          [job.name]: { error: isApiError(error) ? error.message : 'The job could not be started.' },
+          [routine.name]: { error: isApiError(error) ? error.message : 'The routine could not be started.' },
         })),
     });
   };
@@ -46,32 +46,32 @@ export function JobsTable() {
   return (
     <div className="overflow-x-auto rounded-lg border border-paper-line bg-card">
       <table className="w-full min-w-[40rem] border-collapse text-left">
-        <caption className="sr-only">Scheduled jobs and their last run</caption>
+        <caption className="sr-only">Routines and their last run</caption>
         <thead className="bg-paper-deep text-sm">
           <tr>
-            <th scope="col" className="px-3 py-2 font-semibold">Job</th>
+            <th scope="col" className="px-3 py-2 font-semibold">Routine</th>
             <th scope="col" className="px-3 py-2 font-semibold">Schedule</th>
             <th scope="col" className="px-3 py-2 font-semibold">Last run</th>
             <th scope="col" className="px-3 py-2 font-semibold"><span className="sr-only">Actions</span></th>
           </tr>
         </thead>
         <tbody className="divide-y divide-paper-line">
-          {jobs.data.items.map((job) => {
-            const outcome = outcomes[job.name];
-            const running = runJob.isPending && runJob.variables === job.name;
-            const last = job.lastRun;
+          {routines.data.items.map((routine) => {
+            const outcome = outcomes[routine.name];
+            const running = runRoutine.isPending && runRoutine.variables === routine.name;
+            const last = routine.lastRun;
             return (
-              <tr key={job.name} className="align-top">
+              <tr key={routine.name} className="align-top">
                 <th scope="row" className="px-3 py-3 font-normal">
-                  <span className="block font-mono text-sm font-semibold">{job.name}</span>
-                  <span className="block text-sm text-ink-700">{job.description}</span>
+                  <span className="block font-mono text-sm font-semibold">{routine.name}</span>
+                  <span className="block text-sm text-ink-700">{routine.description}</span>
                 </th>
                 <td className="px-3 py-3">
-                  <code className="rounded bg-paper-deep px-1.5 py-0.5 text-sm">{job.schedule}</code>
+                  <code className="rounded bg-paper-deep px-1.5 py-0.5 text-sm">{routine.schedule}</code>
                 </td>
                 <td className="px-3 py-3 text-sm">
                   <div className="flex flex-col items-start gap-1">
-                    <JobRunStatus run={last} />
+                    <RoutineRunStatus run={last} />
                     {last ? (
                       <>
                         <span className="text-ink-700">
@@ -90,7 +90,7 @@ export function JobsTable() {
                 </td>
                 <td className="px-3 py-3">
                   <div className="flex flex-col items-end gap-2">
-                    <Button size="sm" variant="primary" busy={running} onClick={() => runNow(job)}>
+                    <Button size="sm" variant="primary" busy={running} onClick={() => runNow(routine)}>
                       Run now
                     </Button>
                   </div>
@@ -127,7 +127,7 @@ function RunOutcomeNote({ outcome }: { outcome: RunOutcome }) {
 }
 
 /** `{ lateBookings: 2, firms: 1 }` → "late bookings 2, firms 1". */
-function summaryWords(summary: NonNullable<JobRunView['summary']>): string {
+function summaryWords(summary: NonNullable<RoutineRunView['summary']>): string {
   return Object.entries(summary)
     .map(([key, value]) => `${key.replace(/([A-Z])/g, ' $1').toLowerCase()} ${value}`)
     .join(', ');

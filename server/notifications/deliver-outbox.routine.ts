@@ -1,8 +1,8 @@
 import type { Transporter } from 'nodemailer';
-import type { JobDefinition } from '../jobs/job';
+import type { Routine } from '../routines';
 import { deliverOutbox } from './outbox-sender';
 
-export const outboxJob = (transport: Transporter, from: string): JobDefinition => ({
+export const outboxRoutine = (transport: Transporter, from: string): Routine => ({
   name: 'deliver-outbox',
   description: 'Sends queued e-mail; retries with growing pauses while the mail server is unreachable.',
   schedule: '*/15 * * * * *',

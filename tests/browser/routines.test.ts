@@ -9,11 +9,11 @@ beforeAll(async () => {
 });
 afterAll(() => rig?.close());
 
-describe('scheduled jobs in a real browser', () => {
-  it('the owner runs the late-returns job for the firm and reads what it did', async () => {
+describe('routines in a real browser', () => {
+  it('the owner runs the late-returns routine for the firm and reads what it did', async () => {
     const { context, page, nav } = await signedIn(rig, 'owner@demo.test', "Owner's overview");
-    await nav.getByRole('link', { name: 'Scheduled jobs' }).click();
-    await page.getByRole('heading', { level: 1, name: 'Scheduled jobs' }).waitFor();
+    await nav.getByRole('link', { name: 'Routines' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Routines' }).waitFor();
     const row = page.getByRole('row').filter({ hasText: 'late-returns' });
     await row.getByRole('button', { name: 'Run now' }).click();
     // The demo firm has one kit back late: one firm, at least one late booking, e-mailed.

@@ -2,14 +2,14 @@ import { hostname } from 'node:os';
 import { randomUUID } from 'node:crypto';
 import cron, { type ScheduledTask } from 'node-cron';
 import type { DataSource } from 'typeorm';
-import type { JobRunView, ScheduledJobsView } from '../../shared/jobs/views';
+import type { RoutineRunView, RoutinesView } from '../../shared/routines/views';
 import { notFound } from '../http/errors';
-import type { JobDefinition } from './job';
-import { JobRun } from './job-run.entity';
 import { pgRunCoordinator } from './pg-run-coordinator';
+import type { Routine } from './routine';
+import { RoutineRun } from './routine-run.entity';
 
 /** A run as a firm's owner sees it. In the run log a scheduled run's summary counts every firm's work, so it stays out of view. */
-const publicRun = (r: JobRun, showSummary = r.organizationId !== null): JobRunView => ({
+const publicRun = (r: RoutineRun, showSummary = r.organizationId !== null): RoutineRunView => ({
   id: r.id,
   trigger: r.trigger,
   scope: r.organizationId ? ('your firm' as const) : ('every firm' as const),
@@ -21,28 +21,28 @@ const publicRun = (r: JobRun, showSummary = r.organizationId !== null): JobRunVi
   error: r.error,
 });
 
-export class JobsService {
+export class RoutinesService {
   readonly instanceId = `${hostname()}:${process.pid}:${randomUUID().slice(0, 8)}`;
   private tasks: ScheduledTask[] = [];
 
   constructor(
     private readonly db: DataSource,
-    readonly definitions: JobDefinition[],
+    readonly definitions: Routine[],
   ) {}
 
   private find(name: string) {
-    const job = this.definitions.find((j) => j.name === name);
-    if (!job) throw notFound(`The scheduled job "${name}"`);
-    return job;
+    const routine = this.definitions.find((r) => r.name === name);
+    if (!routine) throw notFound(`The routine "${name}"`);
+    return routine;
   }
 
-  /** Run one job now and log it; failures are logged, not thrown, so the schedule carries on. */
+  /** Run one routine now and log it; failures are logged, not thrown, so the schedule carries on. */
   async run(name: string, trigger: 'schedule' | 'manual', scheduledFor: Date | null = null, organizationId: string | null = null) {
-    const job = this.find(name);
-    const repo = this.db.getRepository(JobRun);
-    const run = await repo.save(repo.create({ jobName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running', organizationId }));
+    const routine = this.find(name);
+    const repo = this.db.getRepository(RoutineRun);
+    const run = await repo.save(repo.create({ routineName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running', organizationId }));
     try {
-      run.summary = await job.run({ db: this.db, now: new Date(), trigger, organizationId });
+      run.summary = await routine.run({ db: this.db, now: new Date(), trigger, organizationId });
       run.status = 'succeeded';
     } catch (err) {
       run.status = 'failed';
@@ -53,10 +53,10 @@ export class JobsService {
     return publicRun(await repo.save(run), true);
   }
 
-  /** Each job's last run that this firm may see: scheduled runs, and its own manual ones. */
-  async list(organizationId: string): Promise<ScheduledJobsView> {
-    const last: JobRun[] = await this.db
-      .getRepository(JobRun)
+  /** Each routine's last run that this firm may see: scheduled runs, and its own manual ones. */
+  async list(organizationId: string): Promise<RoutinesView> {
+    const last: RoutineRun[] = await this.db
+      .getRepository(RoutineRun)
       .createQueryBuilder('r')
       .where('r.organization_id IS NULL OR r.organization_id = :organizationId', { organizationId })
       .distinctOn(['r.job_name'])
@@ -64,20 +64,20 @@ export class JobsService {
       .addOrderBy('r.started_at', 'DESC')
       .getMany();
     return {
-      items: this.definitions.map((j) => {
-        const lastRun = last.find((r) => r.jobName === j.name);
-        return { name: j.name, description: j.description, schedule: j.schedule, lastRun: lastRun ? publicRun(lastRun) : null };
+      items: this.definitions.map((routine) => {
+        const lastRun = last.find((r) => r.routineName === routine.name);
+        return { name: routine.name, description: routine.description, schedule: routine.schedule, lastRun: lastRun ? publicRun(lastRun) : null };
       }),
     };
   }
 
-  /** Start every job's cron; each fire runs on exactly one instance (pgRunCoordinator). */
+  /** Start every routine's cron; each fire runs on exactly one instance (pgRunCoordinator). */
   start() {
     const runCoordinator = pgRunCoordinator(this.db, this.instanceId);
-    this.tasks = this.definitions.map((job) =>
-      cron.schedule(job.schedule, (ctx) => this.run(job.name, 'schedule', ctx.date).then(() => undefined), {
-        name: job.name,
-        timezone: job.timeZone,
+    this.tasks = this.definitions.map((routine) =>
+      cron.schedule(routine.schedule, (ctx) => this.run(routine.name, 'schedule', ctx.date).then(() => undefined), {
+        name: routine.name,
+        timezone: routine.timeZone,
         noOverlap: true,
         distributed: true,
         runCoordinator,

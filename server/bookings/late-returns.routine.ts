@@ -1,13 +1,12 @@
-import type { JobDefinition } from '../jobs/job';
 import { Scoped } from '../db/scoped';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
+import { enqueueMail, staffAddresses } from '../notifications';
+import type { Routine } from '../routines';
 import { todayIn } from '../../shared/calibration/due-date';
 
 type LateRow = { organization_id: string; time_zone: string; id: string; starts_on: string; ends_on: string; taken_by: string | null; reference: string | null; tags: string };
 
 /** Once a day: one e-mail per firm listing bookings past their end date and not back. Set-based, one query. */
-export const lateReturnsJob = (): JobDefinition => ({
+export const lateReturnsRoutine = (): Routine => ({
   name: 'late-returns',
   description: 'E-mails each firm one list of bookings that are past their end date and not returned.',
   schedule: '0 7 * * *',

@@ -1,0 +1,4 @@
+/** Field checks' table for the data source. */
+import { FieldCheck } from './field-check.entity';
+
+export const checkEntities = [FieldCheck];

@@ -1,0 +1,6 @@
+/** Users' surface: the firm's people as plain records; the sign-in secrets only for auth and the calendar feed. */
+import { User } from './user.entity';
+
+export const userEntities = [User];
+export { activeStaff, findPerson, publicUser, type PublicUser } from './people';
+export { accountByEmail, calendarOwner, endSessions, ownAccount, replacePasswordHash, setCalendarToken, type Account } from './accounts';

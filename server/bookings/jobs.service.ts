@@ -6,14 +6,20 @@ import type { jobPayload } from '../../shared/schemas/bookings';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
-import { conflict } from '../http/errors';
-import { User } from '../users/user.entity';
+import { conflict, notFound } from '../http/errors';
+import { findPerson } from '../users';
 import { Job } from './job.entity';
 
 type JobInput = z.infer<typeof jobPayload>;
 
 /** The lead technician is one of the firm's people: another firm's user id is not found. */
-const leadOf = (tx: Scoped, input: JobInput) => (input.leadTechnicianId ? tx.get(User, { id: input.leadTechnicianId }, 'That lead technician') : null);
+/** The lead technician must be one of the firm's people: 404 otherwise, like any other id. */
+async function leadOf(tx: Scoped, input: JobInput) {
+  if (!input.leadTechnicianId) return null;
+  const lead = await findPerson(tx, input.leadTechnicianId);
+  if (!lead) throw notFound('That lead technician');
+  return lead;
+}
 
 /** Customer site jobs: what a booking is for when the firm measures for a customer. */
 export class JobsRegisterService {

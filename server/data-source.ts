@@ -1,7 +1,7 @@
 import { AuditEvent } from './audit/audit-event.entity';
 import { LoginAttempt } from './auth/login-attempt.entity';
 import { DepositHold } from './billing/deposit-hold.entity';
-import { DocumentCounter, Invoice, InvoicePayment } from './billing/invoice.entity';
+import { Invoice, InvoicePayment } from './billing/invoice.entity';
 import { PaymentEvent } from './billing/payment-event.entity';
 import { Booking, BookingItem } from './bookings/booking.entity';
 import { Job } from './bookings/job.entity';
@@ -10,6 +10,7 @@ import { ImpactReview, ImpactReviewItem } from './calibration/impact-review.enti
 import { LabTrip, LabTripItem } from './calibration/lab-trip.entity';
 import { FieldCheck } from './checks/field-check.entity';
 import { createDataSource } from './db/data-source';
+import { DocumentCounter } from './db/document-counter.entity';
 import { fleetEntities } from './fleet';
 import { Hold } from './holds/hold.entity';
 import { Incident, IncidentPhoto } from './incidents/incident.entity';

@@ -92,19 +92,6 @@ export class Invoice extends OrgOwned {
   reason: string | null;
 }
 
-/** The last number issued per organization and series; bumped in the issuing transaction, so numbers have no gaps. */
-@Entity({ name: 'document_counters' })
-export class DocumentCounter {
-  @Column({ name: 'organization_id', type: 'uuid', primary: true })
-  organizationId: string;
-
-  @Column({ type: 'text', primary: true })
-  series: string;
-
-  @Column({ name: 'last_number', type: 'integer' })
-  lastNumber: number;
-}
-
 /** Money received against an invoice (a bank transfer, say). Append-only like the invoice itself. */
 @Entity({ name: 'invoice_payments' })
 @Index(['organizationId', 'invoiceId'])

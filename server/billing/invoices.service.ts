@@ -17,7 +17,7 @@ import { Customer } from '../rentals/customer.entity';
 import { invoiceSummaries, loadRentalView } from '../rentals/rental-view';
 import { lockRental } from './deposits.service';
 import { Invoice, InvoicePayment } from './invoice.entity';
-import { nextNumber, padded } from './numbering';
+import { nextNumber, padded } from '../db/numbering';
 
 /**
  * Invoices and credit notes: numbered per firm and year without gaps (the

@@ -6,7 +6,7 @@ import { formatMoney } from '../../shared/billing/money';
 import type { rentalListQuery, rentalPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
 import { book, type BookingView, type HandoverGates } from '../bookings';
-import { nextNumber, padded } from '../billing/numbering';
+import { nextNumber, padded } from '../db/numbering';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { ruleBroken } from '../http/errors';

@@ -5,7 +5,7 @@ import type { AssetType } from '../../shared/assets/vocabulary';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { DepositHold } from '../billing/deposit-hold.entity';
 import { Invoice, InvoicePayment } from '../billing/invoice.entity';
-import { nextNumber, padded } from '../billing/numbering';
+import { nextNumber, padded } from '../db/numbering';
 import { seedBooking } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { fleetSnapshot, moveAssets, recordPastCustody, type AssetRecord } from '../fleet';

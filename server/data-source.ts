@@ -1,6 +1,6 @@
 import { AuditEvent } from './audit/audit-event.entity';
 import { LoginAttempt } from './auth/login-attempt.entity';
-import { DepositHold } from './billing/deposit-hold.entity';
+import { DepositAuthorization } from './billing/deposit-authorization.entity';
 import { Invoice, InvoicePayment } from './billing/invoice.entity';
 import { PaymentEvent } from './billing/payment-event.entity';
 import { Booking, BookingItem } from './bookings/booking.entity';
@@ -28,7 +28,7 @@ import { User } from './users/user.entity';
 export const entities = [
   Organization, User, LoginAttempt, AuditEvent, OutboxMessage, SinkMessage, JobRun, JobLease, ...fleetEntities, FieldCheck, Hold, Incident, IncidentPhoto,
   Job, Booking, BookingItem, CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem, Customer, RateCard, Rental,
-  DepositHold, Invoice, InvoicePayment, DocumentCounter, PaymentEvent, OutboxAttachment,
+  DepositAuthorization, Invoice, InvoicePayment, DocumentCounter, PaymentEvent, OutboxAttachment,
 ];
 
 /** Nestkeeper's database: the entities above over db/'s connection settings. */

@@ -1,8 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { InvoiceLine, InvoiceView } from '../../shared/billing/views';
 import { OrgOwned } from '../db/org-owned';
-import { Customer } from '../rentals/customer.entity';
-import { Rental } from '../rentals/rental.entity';
 
 /**
  * An issued invoice or credit note. Append-only (a database trigger refuses
@@ -25,16 +23,17 @@ export class Invoice extends OrgOwned {
   @Column({ name: 'rental_id', type: 'uuid' })
   rentalId: string;
 
-  @ManyToOne(() => Rental, { onDelete: 'RESTRICT', nullable: false })
+  // Rentals' rows, named rather than imported: billing reads rentals and customers through server/rentals.
+  @ManyToOne('Rental', { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'rental_id' })
-  rental?: Rental;
+  rental?: object;
 
   @Column({ name: 'customer_id', type: 'uuid' })
   customerId: string;
 
-  @ManyToOne(() => Customer, { onDelete: 'RESTRICT', nullable: false })
+  @ManyToOne('Customer', { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'customer_id' })
-  customerRow?: Customer;
+  customerRow?: object;
 
   @Column({ name: 'corrects_invoice_id', type: 'uuid', nullable: true })
   correctsInvoiceId: string | null;

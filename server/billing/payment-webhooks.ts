@@ -5,47 +5,46 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { Scoped } from '../db/scoped';
 import { documentedEndpoints } from '../http/endpoint';
 import { AppError } from '../http/errors';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
-import { Rental } from '../rentals/rental.entity';
-import { DepositHold } from './deposit-hold.entity';
+import { enqueueMail, staffAddresses } from '../notifications';
+import { getRental } from '../rentals';
+import { DepositAuthorization } from './deposit-authorization.entity';
 import { PaymentEvent } from './payment-event.entity';
 import type { PaymentGateway } from './payment-gateway';
 
 /**
- * What an event means here. The provider's word is final about money: a
- * hold we still count on that it cancelled on its own has lapsed; a hold we
- * did not see captured (our call timed out) was captured.
+ * What an event means here. The provider's word is final about money: an
+ * authorization we still count on that it cancelled on its own has lapsed;
+ * one we did not see captured (our call timed out) was captured.
  */
 async function apply(manager: EntityManager, event: Stripe.Event): Promise<{ organizationId: string | null; outcome: string }> {
   if (!event.type.startsWith('payment_intent.')) return { organizationId: null, outcome: 'not used' };
   const pi = event.data.object as Stripe.PaymentIntent;
-  const found = await manager.findOne(DepositHold, { where: { paymentIntentId: pi.id } });
+  const found = await manager.findOne(DepositAuthorization, { where: { paymentIntentId: pi.id } });
   if (!found) return { organizationId: null, outcome: 'no deposit of ours' };
   const tx = new Scoped(manager, found.organizationId);
-  // Locked: a clerk settling the same hold right now finishes first or waits.
-  await tx.sql(`SELECT id FROM deposit_holds WHERE organization_id = $1 AND id = $2 FOR UPDATE`, [found.id]);
-  const hold = await tx.get(DepositHold, { id: found.id }, 'That hold');
-  const rental = await tx.get(Rental, { id: hold.rentalId }, 'That rental');
-  if (event.type === 'payment_intent.canceled' && hold.state === 'authorized') {
-    Object.assign(hold, { state: 'lapsed', settledAt: new Date() });
-    await tx.save(DepositHold, hold);
+  // Locked: a clerk settling the same authorization right now finishes first or waits.
+  await tx.sql(`SELECT id FROM deposit_authorizations WHERE organization_id = $1 AND id = $2 FOR UPDATE`, [found.id]);
+  const authorization = await tx.get(DepositAuthorization, { id: found.id }, 'That card authorization');
+  const rental = await getRental(tx, authorization.rentalId);
+  if (event.type === 'payment_intent.canceled' && authorization.state === 'authorized') {
+    Object.assign(authorization, { state: 'lapsed', settledAt: new Date() });
+    await tx.save(DepositAuthorization, authorization);
     await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), {
-      subject: `Deposit hold lapsed: rental ${rental.number}`,
-      heading: `The card hold for rental ${rental.number} has lapsed`,
+      subject: `Deposit authorization lapsed: rental ${rental.number}`,
+      heading: `The card authorization for rental ${rental.number} has lapsed`,
       paragraphs: [
-        `The provider released the hold (${pi.cancellation_reason ?? 'no reason given'}). Nothing is secured on the card any more.`,
+        `The provider released the authorization (${pi.cancellation_reason ?? 'no reason given'}). Nothing is secured on the card any more.`,
         'Charges at return can still go on the saved card, or on the invoice.',
       ],
     });
-    return { organizationId: hold.organizationId, outcome: `hold ${hold.id} lapsed` };
+    return { organizationId: authorization.organizationId, outcome: `authorization ${authorization.id} lapsed` };
   }
-  if (event.type === 'payment_intent.succeeded' && hold.kind === 'hold' && hold.state === 'authorized') {
-    Object.assign(hold, { state: 'captured', capturedMinor: fromProviderAmount(pi.amount_received, pi.currency), captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
-    await tx.save(DepositHold, hold);
-    return { organizationId: hold.organizationId, outcome: `hold ${hold.id} captured (${pi.amount_received})` };
+  if (event.type === 'payment_intent.succeeded' && authorization.kind === 'authorization' && authorization.state === 'authorized') {
+    Object.assign(authorization, { state: 'captured', capturedMinor: fromProviderAmount(pi.amount_received, pi.currency), captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
+    await tx.save(DepositAuthorization, authorization);
+    return { organizationId: authorization.organizationId, outcome: `authorization ${authorization.id} captured (${pi.amount_received})` };
   }
-  return { organizationId: hold.organizationId, outcome: 'already up to date' };
+  return { organizationId: authorization.organizationId, outcome: 'already up to date' };
 }
 
 /**

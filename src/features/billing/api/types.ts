@@ -1,9 +1,9 @@
 import type { AssetType } from '../../../lib/assets';
 
 export type {
-  DepositHoldView,
+  AuthorizationState,
+  DepositAuthorizationView,
   DepositState,
-  HoldState,
   InvoiceLine,
   InvoiceSummary,
   InvoiceView,

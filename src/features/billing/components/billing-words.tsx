@@ -1,7 +1,7 @@
 import { ClockIcon } from '../../../components/icons';
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
 import { isApiError } from '../../../lib/api-client';
-import type { DepositState, HoldState, RentalState } from '../api/types';
+import type { AuthorizationState, DepositState, RentalState } from '../api/types';
 
 const rentalStates: Record<RentalState, [string, StatusTone]> = {
   reserved: ['Reserved', 'paused'],
@@ -15,7 +15,7 @@ export function RentalStateChip({ state }: { state: RentalState }) {
   return <StatusChip tone={rentalStates[state][1]} label={rentalStates[state][0]} />;
 }
 
-const holdStates: Record<HoldState, [string, StatusTone]> = {
+const holdStates: Record<AuthorizationState, [string, StatusTone]> = {
   authorized: ['Held on card', 'info'],
   captured: ['Captured', 'ok'],
   released: ['Released', 'ok'],
@@ -24,9 +24,9 @@ const holdStates: Record<HoldState, [string, StatusTone]> = {
   replaced: ['Renewed', 'none'],
 };
 const noDeposit: [string, StatusTone] = ['No hold yet', 'none'];
-const depositEntry = (state: DepositState | HoldState) => (state === 'none' ? noDeposit : holdStates[state]);
-export const depositStateWord = (state: DepositState | HoldState) => depositEntry(state)[0];
-export function DepositStateChip({ state }: { state: DepositState | HoldState }) {
+const depositEntry = (state: DepositState | AuthorizationState) => (state === 'none' ? noDeposit : holdStates[state]);
+export const depositStateWord = (state: DepositState | AuthorizationState) => depositEntry(state)[0];
+export function DepositStateChip({ state }: { state: DepositState | AuthorizationState }) {
   const [label, tone] = depositEntry(state);
   return <StatusChip tone={tone} label={label} />;
 }

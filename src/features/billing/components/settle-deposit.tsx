@@ -10,7 +10,7 @@ import { currencyDigits, formatMoney } from '../../../lib/format';
 import { amountText, parseAmount } from '../../../lib/money';
 import { useCaptureDeposit } from '../api/capture-deposit';
 import { useReleaseDeposit } from '../api/release-deposit';
-import type { DepositHoldView, RentalView } from '../api/types';
+import type { DepositAuthorizationView, RentalView } from '../api/types';
 import { paymentProblem } from './billing-words';
 import { ChargesEditor } from './charges-editor';
 
@@ -22,7 +22,7 @@ function suggestedReason(rental: RentalView): string {
 }
 
 /** At return: set the charges, then capture what the extras come to (the rest is released) or release the whole hold. */
-export function SettleDeposit({ rental, hold, canCharge }: { rental: RentalView; hold: DepositHoldView; canCharge: boolean }) {
+export function SettleDeposit({ rental, hold, canCharge }: { rental: RentalView; hold: DepositAuthorizationView; canCharge: boolean }) {
   const capture = useCaptureDeposit();
   const release = useReleaseDeposit();
   const [problem, setProblem] = useState<string>();

@@ -36,18 +36,20 @@ import { dueScanRoutine } from './calibration/due-scan.routine';
 import { ImpactService } from './calibration/impact.service';
 import { LabService } from './calibration/lab.service';
 import { ReviewService } from './calibration/review.service';
+import { CustomersService } from './rentals/customers.service';
+import { RateCardsService } from './rentals/rate-cards.service';
 import { RentalsService } from './rentals/rentals.service';
 import { rentalsRoutes } from './rentals/rentals.routes';
 import { repriceRental } from './rentals/pricing';
-import { RentalRegisterService } from './rentals/rental-register.service';
 import { billingRoutes } from './billing/billing.routes';
 import { BillingReportsService } from './billing/billing-reports.service';
-import { depositRenewalsJob } from './billing/deposit-renewals.job';
+import { depositRenewalsRoutine } from './billing/deposit-renewals.routine';
 import { DepositsService } from './billing/deposits.service';
 import { InvoicesService } from './billing/invoices.service';
 import { createPaymentClient } from './billing/payment-client';
 import { PaymentGateway } from './billing/payment-gateway';
 import { paymentWebhookRoutes } from './billing/payment-webhooks';
+import { rentalMoney } from './billing/rental-money';
 import { ChecksService } from './checks/checks.service';
 import { checksRoutes } from './checks/checks.routes';
 import { HoldsService } from './holds/holds.service';
@@ -66,7 +68,7 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
   const auth = new AuthService(db, users, key);
   const gateway = new PaymentGateway(createPaymentClient(config));
   const deposits = new DepositsService(db, gateway);
-  const routines = new RoutinesService(db, [outboxRoutine(mail, config.MAIL_FROM), lateReturnsRoutine(), dueScanRoutine(), depositRenewalsJob(deposits)]);
+  const routines = new RoutinesService(db, [outboxRoutine(mail, config.MAIL_FROM), lateReturnsRoutine(), dueScanRoutine(), depositRenewalsRoutine(deposits)]);
   const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
   const assets = new AssetsService(db, publicUrl);
   const kits = new KitsService(db, publicUrl);
@@ -107,19 +109,20 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
   app.use('/api/assets', holdsRoutes(new HoldsService(db)));
   app.use('/api/incidents', incidentsRoutes(new IncidentsService(db)));
   const bookings = new BookingsService(db, {
-    onReschedule: (tx, booking) => repriceRental(tx, booking),
+    onReschedule: (tx, booking) => repriceRental(tx, booking, rentalMoney),
     onCancel: (tx, booking) => deposits.releaseForCancelledBooking(tx, booking),
   });
-  const rentalRegister = new RentalRegisterService(db);
+  // Rentals learn a rental's money from billing's answer; billing builds on rentals' surface.
+  const rentals = new RentalsService(db, rentalMoney);
   app.use(
     '/api',
-    bookingsRoutes({ bookings, handover: new HandoverService(db, rentalRegister.handoverGates), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
+    bookingsRoutes({ bookings, handover: new HandoverService(db, rentals.handoverGates), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
   );
   app.use(
     '/api',
     calibrationRoutes({ calibration: new CalibrationService(db), impact: new ImpactService(db), lab: new LabService(db), review: new ReviewService(db) }),
   );
-  app.use('/api', rentalsRoutes(new RentalsService(db), rentalRegister));
+  app.use('/api', rentalsRoutes({ customers: new CustomersService(db), rateCards: new RateCardsService(db), rentals }));
   app.use('/api', billingRoutes({ deposits, invoices: new InvoicesService(db), reports: new BillingReportsService(db) }));
   app.use('/api', unknownApiRoute);
 

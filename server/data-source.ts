@@ -1,12 +1,13 @@
 import { auditEntities } from './audit';
 import { authEntities } from './auth';
-import { DepositHold } from './billing/deposit-hold.entity';
-import { DocumentCounter, Invoice, InvoicePayment } from './billing/invoice.entity';
+import { DepositAuthorization } from './billing/deposit-authorization.entity';
+import { Invoice, InvoicePayment } from './billing/invoice.entity';
 import { PaymentEvent } from './billing/payment-event.entity';
 import { bookingEntities } from './bookings';
 import { calibrationEntities } from './calibration';
 import { checkEntities } from './checks';
 import { createDataSource } from './db/data-source';
+import { DocumentCounter } from './db/document-counter.entity';
 import { fleetEntities } from './fleet';
 import { holdEntities } from './holds';
 import { incidentEntities } from './incidents';
@@ -22,7 +23,7 @@ import { userEntities } from './users';
 export const entities = [
   ...organizationEntities, ...userEntities, ...authEntities, ...auditEntities, ...notificationEntities, ...routineEntities, ...fleetEntities, ...checkEntities,
   ...holdEntities, ...incidentEntities, ...bookingEntities, ...calibrationEntities, Customer, RateCard, Rental,
-  DepositHold, Invoice, InvoicePayment, DocumentCounter, PaymentEvent,
+  DepositAuthorization, Invoice, InvoicePayment, DocumentCounter, PaymentEvent,
 ];
 
 /** Nestkeeper's database: the entities above over db/'s connection settings. */

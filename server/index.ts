@@ -9,7 +9,7 @@ import { startLocalFakes } from './fakes/local-fakes';
 import { createMailTransport } from './notifications/mail-transport';
 import { createPaymentClient } from './billing/payment-client';
 import { PaymentGateway } from './billing/payment-gateway';
-import { restoreHoldsOnLocalFake } from './seed/demo-holds';
+import { restoreAuthorizationsOnLocalFake } from './seed/demo-deposit-authorizations';
 
 /**
  * Listens, starts the routines' scheduler and (locally) the fakes; drains on SIGTERM.
@@ -24,7 +24,7 @@ async function serve(config: Config) {
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
-  if (fakes) await restoreLocalHolds(config, db, fakes.paymentPort);
+  if (fakes) await restoreLocalAuthorizations(config, db, fakes.paymentPort);
   if (config.RUN_SCHEDULER) routines.start();
   if (cluster.isPrimary || cluster.worker?.id === 1) console.log(`Nestkeeper is listening on http://${config.HOST}:${config.PORT}`);
 
@@ -45,7 +45,7 @@ async function supervise(config: Config) {
   const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config, { paymentWebhookUrl: webhookUrl(config) }) : null;
   if (fakes) {
     const db = await openDataSource(config.DATABASE_URL, 1).initialize();
-    await restoreLocalHolds(config, db, fakes.paymentPort).finally(() => db.destroy());
+    await restoreLocalAuthorizations(config, db, fakes.paymentPort).finally(() => db.destroy());
   }
   const workerEnv = { START_LOCAL_FAKES: 'false' };
   let stopping = false;
@@ -63,10 +63,10 @@ async function supervise(config: Config) {
   });
 }
 
-/** The local payment fake starts empty: place the holds the database still counts on again (server/seed/demo-holds.ts). */
-async function restoreLocalHolds(config: Config, db: DataSource, paymentPort: number) {
-  const restored = await restoreHoldsOnLocalFake(db, new PaymentGateway(createPaymentClient(config)), `http://127.0.0.1:${paymentPort}`);
-  if (restored) console.log(`Placed ${restored} open deposit hold(s) again on the local payment fake.`);
+/** The local payment fake starts empty: place the card authorizations the database still counts on again (server/seed/demo-deposit-authorizations.ts). */
+async function restoreLocalAuthorizations(config: Config, db: DataSource, paymentPort: number) {
+  const restored = await restoreAuthorizationsOnLocalFake(db, new PaymentGateway(createPaymentClient(config)), `http://127.0.0.1:${paymentPort}`);
+  if (restored) console.log(`Placed ${restored} open deposit authorization(s) again on the local payment fake.`);
 }
 
 /** Where the local payment fake delivers its signed events. */

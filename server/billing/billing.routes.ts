@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { capturePayload, creditNotePayload, depositPayload, invoiceListQuery, invoicePaymentPayload, revenueQuery, utilisationQuery } from '../../shared/schemas/rentals';
+import { capturePayload, creditNotePayload, depositPayload, invoiceListQuery, invoicePaymentPayload, rentalListQuery, revenueQuery, utilisationQuery } from '../../shared/schemas/rentals';
 import { endpoint } from '../http/endpoint';
 import { sendDocument } from '../http/send-file';
 import type { BillingReportsService } from './billing-reports.service';
@@ -8,13 +8,14 @@ import type { InvoicesService } from './invoices.service';
 
 type BillingServices = { deposits: DepositsService; invoices: InvoicesService; reports: BillingReportsService };
 
-/** Mounted at /api: deposit holds, invoices and credit notes, billing reports. */
+/** Mounted at /api: the rentals' money (deposits as card authorizations, the list by what is left to settle), invoices and credit notes, billing reports. */
 export function billingRoutes({ deposits, invoices, reports }: BillingServices): Router {
   const router = Router();
   const at = '/api';
-  endpoint(router, at, { method: 'post', path: '/rentals/:id/deposit', summary: 'Authorize the deposit hold on the customer’s card', access: 'deposits.manage', body: depositPayload }, ({ actor, params, body }) => deposits.authorize(actor, params.id, body.paymentMethod));
-  endpoint(router, at, { method: 'post', path: '/rentals/:id/deposit/capture', summary: 'Take charges from the hold (the rest is released); above the hold, charge the card', access: 'deposits.manage', body: capturePayload }, ({ actor, params, body }) => deposits.capture(actor, params.id, body));
-  endpoint(router, at, { method: 'post', path: '/rentals/:id/deposit/release', summary: 'Release the whole hold', access: 'deposits.manage' }, ({ actor, params }) => deposits.release(actor, params.id));
+  endpoint(router, at, { method: 'get', path: '/rentals', summary: 'Rentals: open, to settle at return, or all', access: 'reports.read', query: rentalListQuery }, ({ actor, query }) => reports.rentals(actor, query));
+  endpoint(router, at, { method: 'post', path: '/rentals/:id/deposit', summary: 'Authorize the deposit on the customer’s card', access: 'deposits.manage', body: depositPayload }, ({ actor, params, body }) => deposits.authorize(actor, params.id, body.paymentMethod));
+  endpoint(router, at, { method: 'post', path: '/rentals/:id/deposit/capture', summary: 'Take charges from the card authorization (the rest is released); above it, charge the card', access: 'deposits.manage', body: capturePayload }, ({ actor, params, body }) => deposits.capture(actor, params.id, body));
+  endpoint(router, at, { method: 'post', path: '/rentals/:id/deposit/release', summary: 'Release the whole card authorization', access: 'deposits.manage' }, ({ actor, params }) => deposits.release(actor, params.id));
   endpoint(router, at, { method: 'post', path: '/rentals/:id/invoice', summary: 'Issue the rental’s invoice', access: 'rentals.write', status: 201 }, ({ actor, params }) => invoices.issue(actor, params.id));
   endpoint(router, at, { method: 'get', path: '/rentals/:id/invoice.pdf', summary: 'The rental’s invoice (PDF)', access: 'reports.read' }, async ({ actor, params, res }) => {
     const { pdf, number } = await invoices.rentalPdf(actor, params.id);

@@ -7,27 +7,23 @@ import { loadBooking, type BookingView } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
-import { Customer } from '../rentals/customer.entity';
-import { depositState, loadRentalView } from '../rentals/rental-view';
-import { Rental } from '../rentals/rental.entity';
-import { DepositHold } from './deposit-hold.entity';
+import { getCustomer, loadRentalView, lockRental, rememberPaymentCustomer, rememberRentalCard, type RentalRecord } from '../rentals';
+import { DepositAuthorization } from './deposit-authorization.entity';
+import { depositState } from './deposit-state';
 import { Invoice } from './invoice.entity';
 import type { IntentOutcome, PaymentGateway } from './payment-gateway';
+import { rentalMoney } from './rental-money';
 
-/** Locks the rental row so two clerks (or a clerk and the renewal job) never act on one deposit at once. */
-export async function lockRental(tx: Scoped, id: string): Promise<Rental> {
-  await tx.sql(`SELECT id FROM rentals WHERE organization_id = $1 AND id = $2 FOR UPDATE`, [id]);
-  return tx.get(Rental, { id }, 'That rental');
-}
-
-const money = (rental: Rental, minor: number) => formatMoney(minor, rental.currency, 'en-GB');
+const money = (rental: RentalRecord, minor: number) => formatMoney(minor, rental.currency, 'en-GB');
 
 /**
- * Deposit holds through the provider: authorize at checkout, capture damage
- * and late charges at return (the rest released), charge the saved card for
- * anything above the hold, release, renew before the hold lapses. Every
- * provider call carries a key derived from the operation and the hold it acts
- * on, so a retry replays instead of charging again.
+ * Deposits as card authorizations through the provider: authorize at
+ * checkout, capture damage and late charges at return (the rest released),
+ * charge the saved card for anything above the authorization, release, renew
+ * before it lapses. Every provider call carries a key derived from the
+ * operation and the authorization it acts on, so a retry replays instead of
+ * charging again. (The keys still read `hold`: they are stored and replayed,
+ * so they keep the spelling the provider has already seen.)
  */
 export class DepositsService {
   constructor(
@@ -39,13 +35,13 @@ export class DepositsService {
     const result = await inOrganization(this.db, actor.organizationId, async (tx) => {
       const rental = await lockRental(tx, rentalId);
       const booking = await loadBooking(tx, rental.bookingId);
-      // Before handing over — or again while out, should a hold have lapsed.
+      // Before handing over — or again while out, should the authorization have lapsed.
       if (booking.state !== 'reserved' && booking.state !== 'out') throw ruleBroken('booking_state', `The deposit is taken before handing over; this rental is ${booking.state}.`);
-      if (rental.depositMinor <= 0) throw ruleBroken('no_deposit', 'This rental has no deposit to hold (the firm’s deposit policy gave nothing).');
-      const holds = await tx.find(DepositHold, { where: { rentalId } });
-      if (depositState(holds).state === 'authorized') throw conflict(`A hold of ${money(rental, rental.depositMinor)} is already on the card.`);
+      if (rental.depositMinor <= 0) throw ruleBroken('no_deposit', 'This rental has no deposit to authorize (the firm’s deposit policy gave nothing).');
+      const rows = await tx.find(DepositAuthorization, { where: { rentalId } });
+      if (depositState(rows).state === 'authorized') throw conflict(`The card is already authorized for ${money(rental, rental.depositMinor)}.`);
       const customer = await this.providerCustomer(tx, rental.customerId);
-      const key = `rental:${rental.id}:hold:${holds.length + 1}`;
+      const key = `rental:${rental.id}:hold:${rows.length + 1}`;
       const card = await this.gateway.saveCard(paymentMethod, customer, `${key}:card`);
       const outcome = await this.gateway.confirmIntent({
         amountMinor: rental.depositMinor,
@@ -58,124 +54,122 @@ export class DepositsService {
         metadata: { rentalId: rental.id, organizationId: actor.organizationId, purpose: 'deposit' },
         key,
       });
-      await this.record(tx, rental, { kind: 'hold', key, amountMinor: rental.depositMinor, initiatedBy: 'customer', outcome });
-      if (outcome.ok) {
-        rental.paymentMethodId = card;
-        await tx.save(Rental, rental);
-      }
+      await this.record(tx, rental, { kind: 'authorization', key, amountMinor: rental.depositMinor, initiatedBy: 'customer', outcome });
+      if (outcome.ok) await rememberRentalCard(tx, rental.id, card);
       await recordAudit(tx, actor, outcome.ok ? 'deposit.authorized' : 'deposit.declined', { type: 'rental', id: rentalId }, { amountMinor: rental.depositMinor, message: outcome.ok ? null : outcome.message });
-      return { view: await loadRentalView(tx, rental), declined: outcome.ok ? null : outcome.message };
+      return { view: await loadRentalView(tx, rental, rentalMoney), declined: outcome.ok ? null : outcome.message };
     });
     // The declined attempt stays on record (committed above); the clerk is told why.
-    if (result.declined) throw new AppError(422, 'card_declined', `The card was declined: ${result.declined} Checkout stays blocked until a hold is in place; try another card.`, { rental: result.view });
+    if (result.declined) throw new AppError(422, 'card_declined', `The card was declined: ${result.declined} Checkout stays blocked until the deposit is authorized; try another card.`, { rental: result.view });
     return result.view;
   }
 
   /**
-   * Takes `amountMinor` at return: from the hold first (the provider releases
-   * what is not captured), the rest as a charge on the saved card. Without a
-   * live hold (it lapsed or was released) the whole amount goes on the card.
+   * Takes `amountMinor` at return: from the authorization first (the provider
+   * releases what is not captured), the rest as a charge on the saved card.
+   * Without a live authorization (it lapsed or was released) the whole amount
+   * goes on the card.
    */
   capture(actor: Actor, rentalId: string, input: z.infer<typeof capturePayload>) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const rental = await lockRental(tx, rentalId);
       await this.assertSettleable(tx, rental);
-      const { state, hold } = depositState(await tx.find(DepositHold, { where: { rentalId } }));
+      const { state, authorization } = depositState(await tx.find(DepositAuthorization, { where: { rentalId } }));
       // Once captured, a repeat (a double click, a retry after an error page) must not reach the card.
-      if (state === 'captured') throw conflict(`The hold was already captured (${money(rental, hold!.capturedMinor)}); anything further goes on the invoice.`);
-      let fromHold = 0;
-      if (state === 'authorized' && hold?.paymentIntentId) fromHold = await this.captureHold(tx, hold, rental.currency, Math.min(input.amountMinor, hold.amountMinor), input.reason);
-      const above = input.amountMinor - fromHold;
-      if (above > 0) await this.chargeCard(tx, rental, above, input.reason, hold);
-      await recordAudit(tx, actor, 'deposit.captured', { type: 'rental', id: rentalId }, { amountMinor: input.amountMinor, fromHoldMinor: fromHold, chargedMinor: above, reason: input.reason });
-      return loadRentalView(tx, rental);
+      if (state === 'captured') throw conflict(`The deposit was already captured (${money(rental, authorization!.capturedMinor)}); anything further goes on the invoice.`);
+      let fromAuthorization = 0;
+      if (state === 'authorized' && authorization?.paymentIntentId) fromAuthorization = await this.captureAuthorization(tx, authorization, rental.currency, Math.min(input.amountMinor, authorization.amountMinor), input.reason);
+      const above = input.amountMinor - fromAuthorization;
+      if (above > 0) await this.chargeCard(tx, rental, above, input.reason, authorization);
+      await recordAudit(tx, actor, 'deposit.captured', { type: 'rental', id: rentalId }, { amountMinor: input.amountMinor, fromAuthorizationMinor: fromAuthorization, chargedMinor: above, reason: input.reason });
+      return loadRentalView(tx, rental, rentalMoney);
     });
   }
 
   release(actor: Actor, rentalId: string) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const rental = await lockRental(tx, rentalId);
-      const { state, hold } = depositState(await tx.find(DepositHold, { where: { rentalId } }));
-      if (state !== 'authorized' || !hold?.paymentIntentId) throw ruleBroken('no_hold', 'There is no hold on the card to release.');
+      const { state, authorization } = depositState(await tx.find(DepositAuthorization, { where: { rentalId } }));
+      if (state !== 'authorized' || !authorization?.paymentIntentId) throw ruleBroken('no_authorization', 'No deposit is authorized on the card to release.');
       const booking = await loadBooking(tx, rental.bookingId);
-      if (booking.state === 'out') throw ruleBroken('booking_state', 'The kit is still out: release the hold at return.');
-      await this.gateway.cancel(hold.paymentIntentId, `hold:${hold.id}:release`);
-      Object.assign(hold, { state: 'released', settledAt: new Date() });
-      await tx.save(DepositHold, hold);
-      await recordAudit(tx, actor, 'deposit.released', { type: 'rental', id: rentalId }, { amountMinor: hold.amountMinor });
-      return loadRentalView(tx, rental);
+      if (booking.state === 'out') throw ruleBroken('booking_state', 'The kit is still out: release the deposit at return.');
+      await this.gateway.cancel(authorization.paymentIntentId, `hold:${authorization.id}:release`);
+      Object.assign(authorization, { state: 'released', settledAt: new Date() });
+      await tx.save(DepositAuthorization, authorization);
+      await recordAudit(tx, actor, 'deposit.released', { type: 'rental', id: rentalId }, { amountMinor: authorization.amountMinor });
+      return loadRentalView(tx, rental, rentalMoney);
     });
   }
 
-  /** A cancelled rental keeps nothing on the customer's card: its live hold is released with the booking. */
+  /** A cancelled rental keeps nothing on the customer's card: its live authorization is released with the booking. */
   async releaseForCancelledBooking(tx: Scoped, booking: Pick<BookingView, 'rentalId'>) {
     if (!booking.rentalId) return;
     const rental = await lockRental(tx, booking.rentalId);
-    const { state, hold } = depositState(await tx.find(DepositHold, { where: { rentalId: rental.id } }));
-    if (state !== 'authorized' || !hold?.paymentIntentId) return;
-    await this.gateway.cancel(hold.paymentIntentId, `hold:${hold.id}:release`);
-    Object.assign(hold, { state: 'released', settledAt: new Date() });
-    await tx.save(DepositHold, hold);
+    const { state, authorization } = depositState(await tx.find(DepositAuthorization, { where: { rentalId: rental.id } }));
+    if (state !== 'authorized' || !authorization?.paymentIntentId) return;
+    await this.gateway.cancel(authorization.paymentIntentId, `hold:${authorization.id}:release`);
+    Object.assign(authorization, { state: 'released', settledAt: new Date() });
+    await tx.save(DepositAuthorization, authorization);
   }
 
   /**
-   * Places a fresh hold on the saved card (merchant-initiated, so the card
-   * network's shorter window applies) and lets the old one go. Returns the
-   * failure in words when the card will not take it.
+   * Authorizes the card afresh (merchant-initiated on the saved card, so the
+   * card network's shorter window applies) and lets the old authorization go.
+   * Returns the failure in words when the card will not take it.
    */
-  async renew(tx: Scoped, rental: Rental, hold: DepositHold, day: string): Promise<{ ok: true } | { ok: false; message: string }> {
+  async renew(tx: Scoped, rental: RentalRecord, authorization: DepositAuthorization, day: string): Promise<{ ok: true } | { ok: false; message: string }> {
     const customer = await this.providerCustomer(tx, rental.customerId);
     if (!rental.paymentMethodId) return { ok: false, message: 'no card is saved for this rental' };
-    const key = `hold:${hold.id}:renewal:${day}`;
+    const key = `hold:${authorization.id}:renewal:${day}`;
     const outcome = await this.gateway.confirmIntent({
-      amountMinor: hold.amountMinor,
+      amountMinor: authorization.amountMinor,
       currency: rental.currency,
       customer,
       paymentMethod: rental.paymentMethodId,
       capture: 'manual',
       offSession: true,
       description: `Deposit for rental ${rental.number} (renewed)`,
-      metadata: { rentalId: rental.id, organizationId: tx.organizationId, purpose: 'deposit', renews: hold.id },
+      metadata: { rentalId: rental.id, organizationId: tx.organizationId, purpose: 'deposit', renews: authorization.id },
       key,
     });
-    await this.record(tx, rental, { kind: 'hold', key, amountMinor: hold.amountMinor, initiatedBy: 'merchant', outcome });
+    await this.record(tx, rental, { kind: 'authorization', key, amountMinor: authorization.amountMinor, initiatedBy: 'merchant', outcome });
     if (!outcome.ok) return { ok: false, message: outcome.message };
-    await this.gateway.cancel(hold.paymentIntentId!, `hold:${hold.id}:release`);
-    Object.assign(hold, { state: 'replaced', settledAt: new Date() });
-    await tx.save(DepositHold, hold);
+    await this.gateway.cancel(authorization.paymentIntentId!, `hold:${authorization.id}:release`);
+    Object.assign(authorization, { state: 'replaced', settledAt: new Date() });
+    await tx.save(DepositAuthorization, authorization);
     return { ok: true };
   }
 
   /**
-   * Captures from the hold and returns what it took. A hold that lapsed at the
-   * provider before its event reached us is recorded as lapsed and takes
-   * nothing, so the whole amount goes on the card instead.
+   * Captures from the authorization and returns what it took. One that lapsed
+   * at the provider before its event reached us is recorded as lapsed and
+   * takes nothing, so the whole amount goes on the card instead.
    */
-  private async captureHold(tx: Scoped, hold: DepositHold, currency: string, amountMinor: number, reason: string): Promise<number> {
+  private async captureAuthorization(tx: Scoped, authorization: DepositAuthorization, currency: string, amountMinor: number, reason: string): Promise<number> {
     try {
-      const captured = await this.gateway.capture(hold.paymentIntentId!, amountMinor, currency, `hold:${hold.id}:capture`);
-      Object.assign(hold, { state: 'captured', capturedMinor: captured.ok ? captured.capturedMinor : amountMinor, captureReason: reason, settledAt: new Date() });
-      await tx.save(DepositHold, hold);
+      const captured = await this.gateway.capture(authorization.paymentIntentId!, amountMinor, currency, `hold:${authorization.id}:capture`);
+      Object.assign(authorization, { state: 'captured', capturedMinor: captured.ok ? captured.capturedMinor : amountMinor, captureReason: reason, settledAt: new Date() });
+      await tx.save(DepositAuthorization, authorization);
       return amountMinor;
     } catch (err) {
-      if (!(err instanceof AppError && err.code === 'payment_refused') || (await this.gateway.retrieve(hold.paymentIntentId!)).status !== 'canceled') throw err;
-      Object.assign(hold, { state: 'lapsed', settledAt: new Date() });
-      await tx.save(DepositHold, hold);
+      if (!(err instanceof AppError && err.code === 'payment_refused') || (await this.gateway.retrieve(authorization.paymentIntentId!)).status !== 'canceled') throw err;
+      Object.assign(authorization, { state: 'lapsed', settledAt: new Date() });
+      await tx.save(DepositAuthorization, authorization);
       return 0;
     }
   }
 
-  private async assertSettleable(tx: Scoped, rental: Rental) {
+  private async assertSettleable(tx: Scoped, rental: RentalRecord) {
     const booking = await loadBooking(tx, rental.bookingId);
     if (booking.state !== 'returned') throw ruleBroken('booking_state', `Charges are taken at return; this rental is ${booking.state}.`);
     if (await tx.count(Invoice, { rentalId: rental.id, kind: 'invoice' })) throw ruleBroken('already_invoiced', `Rental ${rental.number} is invoiced; correct it with a credit note.`);
   }
 
   /** Charges the saved card at once (merchant-initiated); a decline is recorded and reported. */
-  private async chargeCard(tx: Scoped, rental: Rental, amountMinor: number, reason: string, hold: DepositHold | null) {
+  private async chargeCard(tx: Scoped, rental: RentalRecord, amountMinor: number, reason: string, authorization: DepositAuthorization | null) {
     if (!rental.paymentMethodId) throw ruleBroken('no_card', `No card is saved for rental ${rental.number}: put ${money(rental, amountMinor)} on the invoice instead.`);
-    const charges = await tx.count(DepositHold, { rentalId: rental.id, kind: 'charge' });
-    const key = `rental:${rental.id}:charge:${hold?.id ?? 'card'}:${charges + 1}`;
+    const charges = await tx.count(DepositAuthorization, { rentalId: rental.id, kind: 'charge' });
+    const key = `rental:${rental.id}:charge:${authorization?.id ?? 'card'}:${charges + 1}`;
     const outcome = await this.gateway.confirmIntent({
       amountMinor,
       currency: rental.currency,
@@ -190,11 +184,11 @@ export class DepositsService {
     await this.record(tx, rental, { kind: 'charge', key, amountMinor, initiatedBy: 'merchant', outcome, reason });
   }
 
-  private async record(tx: Scoped, rental: Rental, r: { kind: DepositHold['kind']; key: string; amountMinor: number; initiatedBy: DepositHold['initiatedBy']; outcome: IntentOutcome; reason?: string }) {
+  private async record(tx: Scoped, rental: RentalRecord, r: { kind: DepositAuthorization['kind']; key: string; amountMinor: number; initiatedBy: DepositAuthorization['initiatedBy']; outcome: IntentOutcome; reason?: string }) {
     const o = r.outcome;
-    const existing = await tx.findOne(DepositHold, { idempotencyKey: r.key });
+    const existing = await tx.findOne(DepositAuthorization, { idempotencyKey: r.key });
     if (existing) return existing; // a replayed request: already on record
-    return tx.insert(DepositHold, {
+    return tx.insert(DepositAuthorization, {
       rentalId: rental.id,
       kind: r.kind,
       paymentIntentId: o.id,
@@ -204,7 +198,7 @@ export class DepositsService {
       capturedMinor: o.ok && r.kind === 'charge' ? o.capturedMinor : 0,
       cardBrand: o.ok ? o.cardBrand : null,
       cardLast4: o.ok ? o.cardLast4 : null,
-      captureBefore: o.ok && r.kind === 'hold' ? o.captureBefore : null,
+      captureBefore: o.ok && r.kind === 'authorization' ? o.captureBefore : null,
       initiatedBy: r.initiatedBy,
       failureMessage: o.ok ? null : o.message,
       captureReason: r.reason ?? null,
@@ -213,10 +207,10 @@ export class DepositsService {
   }
 
   private async providerCustomer(tx: Scoped, customerId: string): Promise<string> {
-    const customer = await tx.get(Customer, { id: customerId }, 'That customer');
+    const customer = await getCustomer(tx, customerId);
     if (customer.paymentCustomerId) return customer.paymentCustomerId;
-    customer.paymentCustomerId = await this.gateway.ensureCustomer(customer);
-    await tx.save(Customer, customer);
-    return customer.paymentCustomerId;
+    const paymentCustomerId = await this.gateway.ensureCustomer(customer);
+    await rememberPaymentCustomer(tx, customer.id, paymentCustomerId);
+    return paymentCustomerId;
   }
 }

@@ -1,8 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { InvoiceLine, InvoiceView } from '../../shared/billing/views';
 import { OrgOwned } from '../db/org-owned';
-import { Customer } from '../rentals/customer.entity';
-import { Rental } from '../rentals/rental.entity';
 
 /**
  * An issued invoice or credit note. Append-only (a database trigger refuses
@@ -25,16 +23,17 @@ export class Invoice extends OrgOwned {
   @Column({ name: 'rental_id', type: 'uuid' })
   rentalId: string;
 
-  @ManyToOne(() => Rental, { onDelete: 'RESTRICT', nullable: false })
+  // Rentals' rows, named rather than imported: billing reads rentals and customers through server/rentals.
+  @ManyToOne('Rental', { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'rental_id' })
-  rental?: Rental;
+  rental?: object;
 
   @Column({ name: 'customer_id', type: 'uuid' })
   customerId: string;
 
-  @ManyToOne(() => Customer, { onDelete: 'RESTRICT', nullable: false })
+  @ManyToOne('Customer', { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'customer_id' })
-  customerRow?: Customer;
+  customerRow?: object;
 
   @Column({ name: 'corrects_invoice_id', type: 'uuid', nullable: true })
   correctsInvoiceId: string | null;
@@ -90,19 +89,6 @@ export class Invoice extends OrgOwned {
   /** Why a credit note was issued. */
   @Column({ type: 'text', nullable: true })
   reason: string | null;
-}
-
-/** The last number issued per organization and series; bumped in the issuing transaction, so numbers have no gaps. */
-@Entity({ name: 'document_counters' })
-export class DocumentCounter {
-  @Column({ name: 'organization_id', type: 'uuid', primary: true })
-  organizationId: string;
-
-  @Column({ type: 'text', primary: true })
-  series: string;
-
-  @Column({ name: 'last_number', type: 'integer' })
-  lastNumber: number;
 }
 
 /** Money received against an invoice (a bank transfer, say). Append-only like the invoice itself. */

@@ -12,13 +12,13 @@ import { inOrganization, readInOrganization, type Actor } from '../db/transactio
 import { toCsv } from '../documents/csv';
 import { invoicePdf } from '../documents/invoice-pdf';
 import { conflict, ruleBroken } from '../http/errors';
-import { enqueueMail } from '../notifications/outbox';
-import { loadOrgContext } from '../organizations/org-context';
-import { Customer } from '../rentals/customer.entity';
-import { invoiceSummaries, loadRentalView } from '../rentals/rental-view';
-import { lockRental } from './deposits.service';
+import { enqueueMail } from '../notifications';
+import { loadOrgContext } from '../organizations';
+import { getCustomer, loadRentalView, lockRental, type CustomerRecord } from '../rentals';
+import { invoiceSummaries } from './invoice-summaries';
 import { Invoice, InvoicePayment } from './invoice.entity';
-import { nextNumber, padded } from './numbering';
+import { rentalMoney } from './rental-money';
+import { nextNumber, padded } from '../db/numbering';
 
 /**
  * Invoices and credit notes: numbered per firm and year without gaps (the
@@ -35,11 +35,11 @@ export class InvoicesService {
       if (existing) throw conflict(`Rental ${rental.number} is already invoiced as ${existing.number}; correct it with a credit note.`);
       const booking = await loadBooking(tx, rental.bookingId);
       if (booking.state !== 'returned') throw ruleBroken('booking_state', `The invoice is issued once the kit is back; this rental is ${booking.state}.`);
-      const view = await loadRentalView(tx, rental);
-      if (view.deposit.state === 'authorized') throw ruleBroken('deposit_unsettled', 'Capture or release the deposit hold first, so the invoice can show what was taken.');
+      const view = await loadRentalView(tx, rental, rentalMoney);
+      if (view.deposit.state === 'authorized') throw ruleBroken('deposit_unsettled', 'Capture or release the deposit’s card authorization first, so the invoice can show what was taken.');
       const unpriced = view.charges.filter((c) => c.amountMinor === null);
       if (unpriced.length) throw ruleBroken('charge_unpriced', `Set a charge (or 0) for: ${unpriced.map((c) => c.assetTag).join(', ')}.`);
-      const customer = await tx.get(Customer, { id: rental.customerId }, 'That customer');
+      const customer = await getCustomer(tx, rental.customerId);
       const s = view.settlement;
       return this.write(tx, actor, {
         kind: 'invoice',
@@ -73,7 +73,7 @@ export class InvoicesService {
         throw ruleBroken('credit_too_large', `At most ${formatMoney(left, invoice.currency, 'en-GB')} (net) of invoice ${invoice.number} is left to credit.`, { leftMinor: left });
       }
       const tax = taxMinor(amount, invoice.taxRateBasisPoints);
-      const customer = await tx.get(Customer, { id: invoice.customerId }, 'That customer');
+      const customer = await getCustomer(tx, invoice.customerId);
       return this.write(tx, actor, {
         kind: 'credit_note',
         number: await this.number(tx, 'credit_note'),
@@ -167,7 +167,7 @@ export class InvoicesService {
     return kind === 'invoice' ? `${year}-${padded(n)}` : `CN-${year}-${padded(n)}`;
   }
 
-  private async write(tx: Scoped, actor: Actor, v: Omit<Invoice, 'id' | 'organizationId' | 'issuedOn' | 'issuedAt' | 'issuedBy' | 'customer' | 'customerId' | 'issuer'> & { customer: Customer }) {
+  private async write(tx: Scoped, actor: Actor, v: Omit<Invoice, 'id' | 'organizationId' | 'issuedOn' | 'issuedAt' | 'issuedBy' | 'customer' | 'customerId' | 'issuer'> & { customer: CustomerRecord }) {
     const ctx = await loadOrgContext(tx);
     const { customer, ...rest } = v;
     const invoice = await tx.insert(Invoice, {

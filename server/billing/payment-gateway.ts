@@ -75,7 +75,7 @@ export class PaymentGateway {
     return pm.id;
   }
 
-  /** Places a hold (manual capture) or, with `capture: 'automatic'`, charges at once. Declines come back as `ok: false`. */
+  /** Authorizes the card (manual capture) or, with `capture: 'automatic'`, charges at once. Declines come back as `ok: false`. */
   async confirmIntent(p: { amountMinor: number; currency: string; customer: string; paymentMethod: string; capture: 'manual' | 'automatic'; offSession: boolean; description: string; metadata: Record<string, string>; key: string }): Promise<IntentOutcome> {
     const create = () =>
       this.client.paymentIntents.create(

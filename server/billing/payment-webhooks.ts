@@ -5,70 +5,69 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { Scoped } from '../db/scoped';
 import { documentedEndpoints } from '../http/endpoint';
 import { AppError } from '../http/errors';
-import { enqueueMail } from '../notifications/outbox';
-import { staffAddresses } from '../notifications/staff';
-import { Rental } from '../rentals/rental.entity';
-import { DepositHold } from './deposit-hold.entity';
+import { enqueueMail, staffAddresses } from '../notifications';
+import { getRental } from '../rentals';
+import { DepositAuthorization } from './deposit-authorization.entity';
 import { PaymentEvent } from './payment-event.entity';
 import type { PaymentGateway } from './payment-gateway';
 
-/** Events that would change a hold's state here, and the intent status each claims; the provider confirms it before it counts. */
+/** Events that would change a card authorization's state here, and the intent status each claims; the provider confirms it before it counts. */
 const CLAIMS: Partial<Record<string, Stripe.PaymentIntent.Status>> = { 'payment_intent.canceled': 'canceled', 'payment_intent.succeeded': 'succeeded' };
 
 /**
  * The PaymentIntent as the provider holds it now, fetched for an event that
  * would change one of our holds: a valid signature proves only who signed,
- * so a leaked secret or a replayed event cannot lapse or capture a hold the
+ * so a leaked secret or a replayed event cannot lapse or capture an authorization the
  * provider still holds. Fetched before the transaction (no row locks held
  * over the network); an outage answers 502 and the provider delivers again.
  */
 async function providerView(db: DataSource, gateway: PaymentGateway, event: Stripe.Event): Promise<Stripe.PaymentIntent | null> {
   if (!CLAIMS[event.type]) return null;
   const id = (event.data.object as Stripe.PaymentIntent).id;
-  if (typeof id !== 'string' || !(await db.getRepository(DepositHold).exists({ where: { paymentIntentId: id } }))) return null;
+  if (typeof id !== 'string' || !(await db.getRepository(DepositAuthorization).exists({ where: { paymentIntentId: id } }))) return null;
   return gateway.retrieve(id);
 }
 
 /**
- * What an event means here. The provider's word is final about money: a
- * hold we still count on that it cancelled on its own has lapsed; a hold we
- * did not see captured (our call timed out) was captured. Its word is what it
- * answers when asked (`current`), not what the event body claims.
+ * What an event means here. The provider's word is final about money: an
+ * authorization we still count on that it cancelled on its own has lapsed;
+ * one we did not see captured (our call timed out) was captured. Its word is
+ * what it answers when asked (`current`), not what the event body claims.
  */
 async function apply(manager: EntityManager, event: Stripe.Event, current: Stripe.PaymentIntent | null): Promise<{ organizationId: string | null; outcome: string }> {
   if (!event.type.startsWith('payment_intent.')) return { organizationId: null, outcome: 'not used' };
   const pi = event.data.object as Stripe.PaymentIntent;
-  const found = await manager.findOne(DepositHold, { where: { paymentIntentId: pi.id } });
+  const found = await manager.findOne(DepositAuthorization, { where: { paymentIntentId: pi.id } });
   if (!found) return { organizationId: null, outcome: 'no deposit of ours' };
   const tx = new Scoped(manager, found.organizationId);
-  // Locked: a clerk settling the same hold right now finishes first or waits.
-  await tx.sql(`SELECT id FROM deposit_holds WHERE organization_id = $1 AND id = $2 FOR UPDATE`, [found.id]);
-  const hold = await tx.get(DepositHold, { id: found.id }, 'That hold');
-  const rental = await tx.get(Rental, { id: hold.rentalId }, 'That rental');
+  // Locked: a clerk settling the same authorization right now finishes first or waits.
+  await tx.sql(`SELECT id FROM deposit_authorizations WHERE organization_id = $1 AND id = $2 FOR UPDATE`, [found.id]);
+  const authorization = await tx.get(DepositAuthorization, { id: found.id }, 'That card authorization');
+  const rental = await getRental(tx, authorization.rentalId);
   const claim = CLAIMS[event.type];
-  if (!claim || hold.state !== 'authorized') return { organizationId: hold.organizationId, outcome: 'already up to date' };
+  if (!claim || authorization.state !== 'authorized') return { organizationId: authorization.organizationId, outcome: 'already up to date' };
   if (current?.status !== claim) {
-    return { organizationId: hold.organizationId, outcome: `not confirmed: the provider says ${pi.id} is ${current?.status ?? 'unknown'}, not ${claim}; nothing changed` };
+    return { organizationId: authorization.organizationId, outcome: `not confirmed: the provider says ${pi.id} is ${current?.status ?? 'unknown'}, not ${claim}; nothing changed` };
   }
   if (claim === 'canceled') {
-    Object.assign(hold, { state: 'lapsed', settledAt: new Date() });
-    await tx.save(DepositHold, hold);
+    Object.assign(authorization, { state: 'lapsed', settledAt: new Date() });
+    await tx.save(DepositAuthorization, authorization);
     await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), {
-      subject: `Deposit hold lapsed: rental ${rental.number}`,
-      heading: `The card hold for rental ${rental.number} has lapsed`,
+      subject: `Deposit authorization lapsed: rental ${rental.number}`,
+      heading: `The card authorization for rental ${rental.number} has lapsed`,
       paragraphs: [
-        `The provider released the hold (${current.cancellation_reason ?? 'no reason given'}). Nothing is secured on the card any more.`,
+        `The provider released the authorization (${current.cancellation_reason ?? 'no reason given'}). Nothing is secured on the card any more.`,
         'Charges at return can still go on the saved card, or on the invoice.',
       ],
     });
-    return { organizationId: hold.organizationId, outcome: `hold ${hold.id} lapsed` };
+    return { organizationId: authorization.organizationId, outcome: `authorization ${authorization.id} lapsed` };
   }
-  if (hold.kind === 'hold') {
-    Object.assign(hold, { state: 'captured', capturedMinor: fromProviderAmount(current.amount_received, current.currency), captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
-    await tx.save(DepositHold, hold);
-    return { organizationId: hold.organizationId, outcome: `hold ${hold.id} captured (${current.amount_received})` };
+  if (authorization.kind === 'authorization') {
+    Object.assign(authorization, { state: 'captured', capturedMinor: fromProviderAmount(current.amount_received, current.currency), captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
+    await tx.save(DepositAuthorization, authorization);
+    return { organizationId: authorization.organizationId, outcome: `authorization ${authorization.id} captured (${current.amount_received})` };
   }
-  return { organizationId: hold.organizationId, outcome: 'already up to date' };
+  return { organizationId: authorization.organizationId, outcome: 'already up to date' };
 }
 
 /**

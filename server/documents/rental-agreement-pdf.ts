@@ -9,8 +9,8 @@ function terms(rental: RentalView, currency: string) {
     .join('; ');
   return [
     `Late return: for every day after ${calendarDate(rental.endsOn)} that an item is not back, it is charged its day rate plus a late fee per day, with tax on top. ${late}.`,
-    `Deposit: ${money(rental.depositMinor, currency)} is held on your card. It is a hold, not a charge; what is not needed is released when the kit is back.`,
-    'Damage or loss: the repair or replacement is charged against the deposit hold; any amount above the hold is charged to the same card.',
+    `Deposit: ${money(rental.depositMinor, currency)} is authorized on your card. It is an authorization, not a charge; what is not needed is released when the kit is back.`,
+    'Damage or loss: the repair or replacement is charged against the deposit authorization; any amount above it is charged to the same card.',
     `Calibration: the kit is rented calibrated. The certificate pack for every item travels by e-mail to ${rental.customer.billingEmail}.`,
     'Tell us at once about any drop, knock or damage: a knocked item may no longer measure true and must be checked before it is used again.',
   ];

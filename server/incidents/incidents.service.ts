@@ -81,6 +81,20 @@ export async function openIncident(tx: Scoped, actor: Actor, asset: AssetRecord,
   return { incident, photos: saved };
 }
 
+/** An incident opened against a booking (damaged or missing at return), with the charge a rental set on it. */
+export type BookingIncident = Readonly<Pick<Incident, 'id' | 'assetId' | 'kind' | 'description' | 'chargeAmountMinor'>>;
+
+/** The incidents opened against a booking, oldest first. */
+export const bookingIncidents = (tx: Scoped, bookingId: string): Promise<BookingIncident[]> => tx.find(Incident, { where: { bookingId }, order: { createdAt: 'ASC' } });
+
+/** Sets the repair or replacement charge (net of tax) on an incident of the booking; returns the charge it replaced. */
+export async function setIncidentCharge(tx: Scoped, bookingId: string, incidentId: string, amountMinor: number): Promise<number | null> {
+  const incident = await tx.get(Incident, { id: incidentId, bookingId }, 'That incident on this booking');
+  const before = incident.chargeAmountMinor;
+  await tx.updateWhere(Incident, { id: incident.id }, { chargeAmountMinor: amountMinor });
+  return before;
+}
+
 export class IncidentsService {
   constructor(private readonly db: DataSource) {}
 

@@ -3,28 +3,28 @@ import { roundUpToProviderStep } from '../../shared/billing/provider-amounts';
 import type { Quote, QuoteLine } from '../../shared/billing/views';
 import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
 import { bookingDays } from '../../shared/bookings/rules';
+import type { BookingView } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { assetsByIds, getAssets, getKit, kitMembers as membersOf, type AssetRecord } from '../fleet';
 import { ruleBroken } from '../http/errors';
-import { loadOrgContext } from '../organizations/org-context';
+import { loadOrgContext } from '../organizations';
 import { RateCard } from './rate-card.entity';
+import type { RentalMoney } from './rental-money';
 import { Rental } from './rental.entity';
-import type { BookingView } from '../bookings';
-import { DepositHold } from '../billing/deposit-hold.entity';
 
 /**
  * A rental's booking moved: its prices follow the new dates (same items, the
- * rate cards of today). The deposit follows too, unless a hold for the old
- * amount is already on the card.
+ * rate cards of today). The deposit follows too, unless the card is already
+ * authorized for the old amount.
  */
-export async function repriceRental(tx: Scoped, booking: BookingView) {
+export async function repriceRental(tx: Scoped, booking: BookingView, money: RentalMoney) {
   if (!booking.rentalId) return;
   const rental = await tx.get(Rental, { id: booking.rentalId }, 'That rental');
   const items = booking.assetIds;
   const kitMembers = booking.kitId ? (await membersOf(tx, booking.kitId)).map((a) => a.id) : [];
   const quote = await priceRental(tx, { kitId: booking.kitId ?? undefined, assetIds: items.filter((id) => !kitMembers.includes(id)), startsOn: booking.startsOn, endsOn: booking.endsOn });
-  const held = await tx.count(DepositHold, { rentalId: rental.id, kind: 'hold', state: 'authorized' });
-  Object.assign(rental, { quote, depositMinor: held ? rental.depositMinor : quote.depositMinor });
+  const authorized = (await money.depositState(tx, rental.id)) === 'authorized';
+  Object.assign(rental, { quote, depositMinor: authorized ? rental.depositMinor : quote.depositMinor });
   await tx.save(Rental, rental);
 }
 
@@ -68,7 +68,7 @@ export async function priceRental(tx: Scoped, q: PriceRequest): Promise<Quote> {
     taxRateBasisPoints: ctx.taxRateBasisPoints,
     taxMinor: tax,
     totalMinor: subtotalMinor + tax,
-    // Rounded up to a step the payment provider can hold (KWD in 0.010, MGA in whole ariary).
+    // Rounded up to a step the payment provider can authorize (KWD in 0.010, MGA in whole ariary).
     depositMinor: roundUpToProviderStep(depositMinor(replacement, ctx.depositPolicy), ctx.currency),
     currency: ctx.currency,
   };

@@ -2,7 +2,7 @@ import type { RentalView } from '../../shared/billing/views';
 import type { Scoped } from '../db/scoped';
 import { certificatePackPdf, type CertificateEntry } from '../documents/certificate-pack';
 import { rentalAgreementPdf } from '../documents/rental-agreement-pdf';
-import { loadOrgContext } from '../organizations/org-context';
+import { loadOrgContext } from '../organizations';
 
 /** The rental agreement as a PDF. */
 export async function agreementFor(tx: Scoped, rental: RentalView): Promise<Buffer> {

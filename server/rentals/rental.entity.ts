@@ -40,7 +40,7 @@ export class Rental extends OrgOwned {
   @Column({ type: 'text' })
   currency: string;
 
-  /** The customer's card saved with the provider at the first hold, for renewals and charges above the hold. */
+  /** The customer's card saved with the provider when the deposit was first authorized, for renewals and charges above the authorization. */
   @Column({ name: 'payment_method_id', type: 'text', nullable: true })
   paymentMethodId: string | null;
 

@@ -1,68 +1,105 @@
-import { Not, type DataSource } from 'typeorm';
+import { randomUUID } from 'node:crypto';
+import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import type { CustomerView, Quote, RateCardView } from '../../shared/billing/views';
-import type { Page } from '../../shared/lists/page';
-import type { customerPayload, quoteQuery, rateCardPayload } from '../../shared/schemas/rentals';
+import { formatMoney } from '../../shared/billing/money';
+import type { rentalPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
+import { book, type BookingView, type HandoverGates } from '../bookings';
+import { nextNumber, padded } from '../db/numbering';
+import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
-import { getKit } from '../fleet';
-import { conflict } from '../http/errors';
-import { Customer } from './customer.entity';
+import { ruleBroken } from '../http/errors';
+import { setIncidentCharge } from '../incidents/incidents.service';
+import { enqueueMail } from '../notifications';
 import { priceRental } from './pricing';
-import { RateCard } from './rate-card.entity';
-import { listReply } from '../http/list-reply';
+import type { RentalMoney } from './rental-money';
+import { agreementFor, certificatePackFor } from './rental-papers';
+import { getCustomer, getRental } from './rental-records';
+import { loadRentalView } from './rental-view';
+import { Rental } from './rental.entity';
 
-type CustomerInput = z.infer<typeof customerPayload>;
-type RateCardInput = z.infer<typeof rateCardPayload>;
-
-/** Customers, rate cards and quotes: the ground a rental stands on. */
+/** Rentals: a booking for a customer at quoted prices, its papers, and what the counter must check. */
 export class RentalsService {
-  constructor(private readonly db: DataSource) {}
+  constructor(
+    private readonly db: DataSource,
+    private readonly money: RentalMoney,
+  ) {}
 
-  listCustomers(actor: Actor, paging: { limit: number; offset: number }): Promise<Page<CustomerView>> {
+  /** Books under the bookings rules unchanged (409/422 as there) and records the rental in the same transaction. */
+  async create(actor: Actor, input: z.infer<typeof rentalPayload>) {
+    const rentalId = randomUUID();
+    await inOrganization(this.db, actor.organizationId, async (tx) => {
+      await getCustomer(tx, input.customerId);
+      const booking = await book(tx, actor, { kitId: input.kitId, assetIds: input.assetIds, startsOn: input.startsOn, endsOn: input.endsOn, rentalId, note: input.note });
+      const quote = await priceRental(tx, { kitId: input.kitId, assetIds: input.assetIds, startsOn: input.startsOn, endsOn: input.endsOn });
+      const number = `R-${padded(await nextNumber(tx, 'rental'))}`;
+      await tx.insert(Rental, { id: rentalId, number, customerId: input.customerId, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: null, note: input.note ?? null, createdBy: actor.userId });
+      await recordAudit(tx, actor, 'rental.created', { type: 'rental', id: rentalId }, { number, customerId: input.customerId, totalMinor: quote.totalMinor, depositMinor: quote.depositMinor });
+    });
+    return this.get(actor, rentalId);
+  }
+
+  get(actor: Actor, id: string) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => loadRentalView(tx, await getRental(tx, id), this.money));
+  }
+
+  /** The repair or replacement charge for an item that came back damaged or not at all (net of tax). */
+  setCharge(actor: Actor, rentalId: string, incidentId: string, amountMinor: number) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const [items, total] = await tx.findAndCount(Customer, { order: { company: 'ASC' }, take: paging.limit, skip: paging.offset });
-      return { items, total };
+      const rental = await getRental(tx, rentalId);
+      if (await this.money.invoiced(tx, rental.id)) throw ruleBroken('already_invoiced', 'This rental is invoiced; correct it with a credit note.');
+      const before = await setIncidentCharge(tx, rental.bookingId, incidentId, amountMinor);
+      await recordAudit(tx, actor, 'rental.charge_set', { type: 'rental', id: rentalId }, { incidentId, before, after: amountMinor });
+      return loadRentalView(tx, rental, this.money);
     });
   }
 
-  getCustomer(actor: Actor, id: string): Promise<CustomerView> {
-    return inOrganization(this.db, actor.organizationId, (tx) => tx.get(Customer, { id }, 'That customer'));
-  }
-
-  saveCustomer(actor: Actor, input: CustomerInput, id?: string): Promise<CustomerView> {
-    return inOrganization(this.db, actor.organizationId, async (tx) => {
-      if (await tx.count(Customer, { company: input.company, ...(id ? { id: Not(id) } : {}) })) {
-        throw conflict(`${input.company} is already a customer.`, { fields: { company: 'is already a customer' } });
-      }
-      const values = { company: input.company, billingContact: input.billingContact ?? null, billingEmail: input.billingEmail, address: input.address ?? null, taxNumber: input.taxNumber ?? null, notes: input.notes ?? null };
-      const customer = id ? await tx.save(Customer, Object.assign(await tx.get(Customer, { id }, 'That customer'), values)) : await tx.insert(Customer, values);
-      await recordAudit(tx, actor, id ? 'customer.updated' : 'customer.created', { type: 'customer', id: customer.id }, { company: customer.company });
-      return customer;
-    });
-  }
-
-  listRateCards(actor: Actor): Promise<Page<RateCardView>> {
-    return inOrganization(this.db, actor.organizationId, async (tx) => listReply(await tx.find(RateCard, { order: { assetType: 'ASC' } })));
-  }
-
-  saveRateCard(actor: Actor, input: RateCardInput, id?: string): Promise<RateCardView> {
-    return inOrganization(this.db, actor.organizationId, async (tx) => {
-      if (input.kitId) await getKit(tx, input.kitId);
-      const subject = input.kitId ? { kitId: input.kitId } : { assetType: input.assetType! };
-      const clash = await tx.findOne(RateCard, subject);
-      if (clash && clash.id !== id) throw conflict('That type or kit already has a rate card; change that one.', { fields: { [input.kitId ? 'kitId' : 'assetType']: 'already has a rate card' } });
-      const values = { assetType: input.assetType ?? null, kitId: input.kitId ?? null, dayMinor: input.dayMinor, weekMinor: input.weekMinor, monthMinor: input.monthMinor, lateFeePerDayMinor: input.lateFeePerDayMinor };
-      const card = id ? await tx.save(RateCard, Object.assign(await tx.get(RateCard, { id }, 'That rate card'), values)) : await tx.insert(RateCard, values);
-      await recordAudit(tx, actor, 'rate_card.saved', { type: 'rate_card', id: card.id }, values);
-      return card;
-    });
-  }
-
-  quote(actor: Actor, q: z.infer<typeof quoteQuery>): Promise<Quote> {
+  agreementPdf(actor: Actor, id: string) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
-      if (q.customerId) await tx.get(Customer, { id: q.customerId }, 'That customer');
-      return priceRental(tx, q);
+      const rental = await loadRentalView(tx, await getRental(tx, id), this.money);
+      return { pdf: await agreementFor(tx, rental), number: rental.number };
     });
   }
+
+  certificatePackPdf(actor: Actor, id: string) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const rental = await loadRentalView(tx, await getRental(tx, id), this.money);
+      return { pdf: await certificatePackFor(tx, rental), number: rental.number };
+    });
+  }
+
+  /** What the counter checks for a rental: the deposit authorized on the card before handing over; the papers go to the renter after. */
+  readonly handoverGates: HandoverGates = {
+    beforeCheckout: async (tx: Scoped, booking: BookingView) => {
+      if (!booking.rentalId) return;
+      const rental = await getRental(tx, booking.rentalId);
+      if (rental.depositMinor <= 0) return;
+      const state = await this.money.depositState(tx, rental.id);
+      if (state !== 'authorized') {
+        throw ruleBroken('deposit_required', `Rental ${rental.number} needs its deposit of ${formatMoney(rental.depositMinor, rental.currency, 'en-GB')} authorized on the customer's card before the kit is handed over${state === 'declined' ? ' (the last card was declined)' : ''}. The billing clerk takes it on the rental's page.`);
+      }
+    },
+    afterCheckout: async (tx: Scoped, booking: BookingView) => {
+      if (!booking.rentalId) return;
+      const rental = await loadRentalView(tx, await getRental(tx, booking.rentalId), this.money);
+      const [agreement, pack] = [await agreementFor(tx, rental), await certificatePackFor(tx, rental)];
+      await enqueueMail(
+        tx,
+        [rental.customer.billingEmail],
+        {
+          subject: `Rental ${rental.number}: agreement and calibration certificates`,
+          heading: `Your rental ${rental.number}, ${rental.startsOn} to ${rental.endsOn}`,
+          paragraphs: [
+            `${rental.customer.billingContact ? `Dear ${rental.customer.billingContact}, the` : 'The'} kit for rental ${rental.number} was handed over today. Attached are the rental agreement and a certificate pack with the current calibration certificate of every rented item that needs one, for your own auditors.`,
+            `Items: ${rental.items.map((i) => i.assetTag).join(', ')}. Please bring everything back by ${rental.endsOn}.`,
+            "Laser trackers emit a laser beam: do not stare into it. Damaged lithium-ion batteries are a fire risk: do not charge or fly them. Cases are heavy. Follow local codes, the carrier's rules and the instrument maker's instructions.",
+          ],
+        },
+        [
+          { fileName: `agreement-${rental.number}.pdf`, contentType: 'application/pdf', content: agreement },
+          { fileName: `certificates-${rental.number}.pdf`, contentType: 'application/pdf', content: pack },
+        ],
+      );
+    },
+  };
 }

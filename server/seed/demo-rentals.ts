@@ -3,9 +3,9 @@ import { taxMinor } from '../../shared/billing/quote';
 import { settle, lateDaysBetween } from '../../shared/billing/settlement';
 import type { AssetType } from '../../shared/assets/vocabulary';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
-import { DepositHold } from '../billing/deposit-hold.entity';
+import { DepositAuthorization } from '../billing/deposit-authorization.entity';
 import { Invoice, InvoicePayment } from '../billing/invoice.entity';
-import { nextNumber, padded } from '../billing/numbering';
+import { nextNumber, padded } from '../db/numbering';
 import { seedBooking } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { fleetSnapshot, moveAssets, recordPastCustody, type AssetRecord } from '../fleet';
@@ -45,14 +45,15 @@ const rates: Record<AssetType, [number, number, number, number]> = {
   accessory: [500, 2500, 8000, 100],
 };
 
-type Plan = { renter: number; kit?: string; spares?: AssetType[]; from: number; to: number; back?: number; holdFrom?: number; settle: 'released' | 'captured' | 'open' | 'to_settle'; credit?: string; damagedType?: AssetType };
+type Plan = { renter: number; kit?: string; spares?: AssetType[]; from: number; to: number; back?: number; authorizedFrom?: number; settle: 'released' | 'captured' | 'open' | 'to_settle'; credit?: string; damagedType?: AssetType };
 
 /**
  * Customers, rate cards and rentals: five past rentals with their invoices
- * (one late, one corrected by a credit note), one out now whose deposit hold
- * lapses within two days, and one back yesterday with a damaged SMR whose
- * deposit waits to be settled. Open holds carry no provider id here; with the
- * local payment fake the server places them at start (server/seed/demo-holds.ts).
+ * (one late, one corrected by a credit note), one out now whose deposit's card
+ * authorization lapses within two days, and one back yesterday with a damaged
+ * SMR whose deposit waits to be settled. Open authorizations carry no provider
+ * id here; with the local payment fake the server places them at start
+ * (server/seed/demo-deposit-authorizations.ts).
  */
 export async function seedDemoRentals(tx: Scoped, timeZone: string) {
   const today = todayIn(timeZone);
@@ -77,8 +78,8 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
     { renter: 2, kit: 'Kit Birch', from: -100, to: -94, settle: 'released', credit: 'Two days of bad weather on site; goodwill as agreed by phone' },
     { renter: 3, kit: 'Kit Cedar', from: -75, to: -62, settle: 'released' },
     { renter: 0, spares: ['scale_bar', 'weather_station'], from: -45, to: -39, settle: 'released' },
-    { renter: 1, spares: ['weather_station', 'battery', 'nest'], from: -5, to: 9, holdFrom: -5, settle: 'open' },
-    { renter: 3, spares: ['smr', 'nest'], from: -6, to: -1, holdFrom: -6, settle: 'to_settle', damagedType: 'smr' },
+    { renter: 1, spares: ['weather_station', 'battery', 'nest'], from: -5, to: 9, authorizedFrom: -5, settle: 'open' },
+    { renter: 3, spares: ['smr', 'nest'], from: -6, to: -1, authorizedFrom: -6, settle: 'to_settle', damagedType: 'smr' },
   ];
   const taken = new Set<string>();
   let n = 0;
@@ -116,26 +117,26 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
       await moveAssets(tx, { userId: manager.id }, [damaged.id], 'held', { why: hold.summary, details: { holdId: hold.id, reason: hold.reason, summary: hold.summary } });
     }
 
-    // The deposit: a hold placed at checkout, settled at return for past rentals. A hold lasts
+    // The deposit: a card authorization at checkout, settled at return for past rentals. One lasts
     // 7 days; longer past rentals show its renewals on the saved card (4 days 18 hours each on Visa).
     const lateDays = returnedOn ? lateDaysBetween(endsOn, returnedOn) : 0;
     const extras = settle({ quote, lateDays, damage: [], depositCapturedMinor: 0, cardChargedMinor: 0 }).extrasGrossMinor;
     const captured = p.settle === 'captured' ? Math.min(extras, quote.depositMinor) : 0;
     const settledAt = p.settle === 'captured' || p.settle === 'released' ? at(p.back ?? p.to, 16) : null;
-    const holds: { createdAt: Date; captureBefore: Date; initiatedBy: 'customer' | 'merchant' }[] = [];
-    let createdAt = p.holdFrom !== undefined ? new Date(at(p.holdFrom, 9).getTime() - 12 * 3_600_000) : at(p.from, 8);
-    holds.push({ createdAt, captureBefore: new Date(createdAt.getTime() + 7 * 86_400_000), initiatedBy: 'customer' });
-    while (settledAt && holds.at(-1)!.captureBefore < settledAt) {
-      createdAt = new Date(holds.at(-1)!.captureBefore.getTime() - 36 * 3_600_000);
-      holds.push({ createdAt, captureBefore: new Date(createdAt.getTime() + (4 * 24 + 18) * 3_600_000), initiatedBy: 'merchant' });
+    const authorizations: { createdAt: Date; captureBefore: Date; initiatedBy: 'customer' | 'merchant' }[] = [];
+    let createdAt = p.authorizedFrom !== undefined ? new Date(at(p.authorizedFrom, 9).getTime() - 12 * 3_600_000) : at(p.from, 8);
+    authorizations.push({ createdAt, captureBefore: new Date(createdAt.getTime() + 7 * 86_400_000), initiatedBy: 'customer' });
+    while (settledAt && authorizations.at(-1)!.captureBefore < settledAt) {
+      createdAt = new Date(authorizations.at(-1)!.captureBefore.getTime() - 36 * 3_600_000);
+      authorizations.push({ createdAt, captureBefore: new Date(createdAt.getTime() + (4 * 24 + 18) * 3_600_000), initiatedBy: 'merchant' });
     }
-    for (const [i, h] of holds.entries()) {
-      const last = i === holds.length - 1;
-      await tx.insert(DepositHold, {
-        rentalId: rental.id, kind: 'hold', paymentIntentId: null, idempotencyKey: `demo:${rental.id}:hold:${i + 1}`,
+    for (const [i, h] of authorizations.entries()) {
+      const last = i === authorizations.length - 1;
+      await tx.insert(DepositAuthorization, {
+        rentalId: rental.id, kind: 'authorization', paymentIntentId: null, idempotencyKey: `demo:${rental.id}:authorization:${i + 1}`,
         state: !last ? 'replaced' : p.settle === 'captured' ? 'captured' : p.settle === 'released' ? 'released' : 'authorized',
         amountMinor: quote.depositMinor, capturedMinor: last ? captured : 0, cardBrand: 'visa', cardLast4: '4242', captureBefore: h.captureBefore, initiatedBy: h.initiatedBy,
-        failureMessage: null, captureReason: last && captured ? `${lateDays} late days` : null, settledAt: last ? settledAt : holds[i + 1].createdAt, createdAt: h.createdAt,
+        failureMessage: null, captureReason: last && captured ? `${lateDays} late days` : null, settledAt: last ? settledAt : authorizations[i + 1].createdAt, createdAt: h.createdAt,
       });
     }
     if (!returnedOn || p.settle === 'to_settle') continue;

@@ -21,7 +21,7 @@ describe('settling a rental at return', () => {
   it('adds late days per item and damage, taxes the sum, and subtracts what was taken', () => {
     // Worked by hand: late 2 days × (15.00 + 5.00) × 2 SMRs = 80.00; damage 180.00;
     // net 300.00 + 80.00 + 180.00 = 560.00; tax 19 % = 106.40; total 666.40.
-    // Extras 260.00 + 19 % = 309.40 captured from the hold; the balance is the rental's own 357.00.
+    // Extras 260.00 + 19 % = 309.40 captured from the card authorization; the balance is the rental's own 357.00.
     const s = settle({ quote, lateDays: 2, damage: [{ description: 'SMR-004 dented', amountMinor: 18_000 }], depositCapturedMinor: 30_940, cardChargedMinor: 0 });
     expect(s.lines.map((l) => [l.kind, l.amountMinor])).toEqual([
       ['rental', 30_000],

@@ -55,16 +55,16 @@ export type Quote = {
   currency: string;
 };
 
-/** One card authorization. A renewal replaces a hold with a new one; a declined attempt is kept for the record. */
-export type HoldState = 'authorized' | 'captured' | 'released' | 'lapsed' | 'declined' | 'replaced';
-/** The rental's deposit as a whole: `none` until a hold is taken. */
+/** One card authorization. A renewal replaces an authorization with a new one; a declined attempt is kept for the record. */
+export type AuthorizationState = 'authorized' | 'captured' | 'released' | 'lapsed' | 'declined' | 'replaced';
+/** The rental's deposit as a whole: `none` until the card is authorized. */
 export type DepositState = 'none' | 'authorized' | 'captured' | 'released' | 'lapsed' | 'declined';
 
-export type DepositHoldView = {
+export type DepositAuthorizationView = {
   id: string;
-  /** A deposit authorization, or a charge above the hold on the saved card. */
-  kind: 'hold' | 'charge';
-  state: HoldState;
+  /** The deposit's card authorization, or a charge above it on the saved card. */
+  kind: 'authorization' | 'charge';
+  state: AuthorizationState;
   amountMinor: number;
   capturedMinor: number;
   cardBrand: string | null;
@@ -101,7 +101,7 @@ export type Settlement = {
   subtotalMinor: number;
   taxMinor: number;
   totalMinor: number;
-  /** Late days and charges with their tax: what the deposit hold is there to cover. */
+  /** Late days and charges with their tax: what the deposit's card authorization is there to cover. */
   extrasGrossMinor: number;
   depositCapturedMinor: number;
   cardChargedMinor: number;
@@ -162,7 +162,7 @@ export type RentalView = {
   quote: Quote;
   currency: string;
   depositMinor: number;
-  deposit: { state: DepositState; hold: DepositHoldView | null; holds: DepositHoldView[] };
+  deposit: { state: DepositState; authorization: DepositAuthorizationView | null; authorizations: DepositAuthorizationView[] };
   checkedOutAt: string | null;
   returnedAt: string | null;
   charges: RentalChargeView[];
@@ -185,7 +185,7 @@ export type RentalSummary = {
   totalMinor: number;
   depositMinor: number;
   depositState: DepositState;
-  holdCaptureBefore: string | null;
+  authorizationCaptureBefore: string | null;
   invoiceNumber: string | null;
 };
 

@@ -1,8 +1,8 @@
-import type { DepositState, HoldState } from '../../shared/billing/views';
+import type { DepositState, AuthorizationState } from '../../shared/billing/views';
 import { ClockIcon } from './icons';
 import { StatusChip, type StatusTone } from './status-chip';
 
-const holdStates: Record<HoldState, [string, StatusTone]> = {
+const holdStates: Record<AuthorizationState, [string, StatusTone]> = {
   authorized: ['Held on card', 'info'],
   captured: ['Captured', 'ok'],
   released: ['Released', 'ok'],
@@ -11,11 +11,11 @@ const holdStates: Record<HoldState, [string, StatusTone]> = {
   replaced: ['Renewed', 'none'],
 };
 const noDeposit: [string, StatusTone] = ['No hold yet', 'none'];
-const depositEntry = (state: DepositState | HoldState) => (state === 'none' ? noDeposit : holdStates[state]);
-export const depositStateWord = (state: DepositState | HoldState) => depositEntry(state)[0];
+const depositEntry = (state: DepositState | AuthorizationState) => (state === 'none' ? noDeposit : holdStates[state]);
+export const depositStateWord = (state: DepositState | AuthorizationState) => depositEntry(state)[0];
 
 /** A rental's deposit, or one card hold, as a chip (rental lists and the deposit panel). */
-export function DepositStateChip({ state }: { state: DepositState | HoldState }) {
+export function DepositStateChip({ state }: { state: DepositState | AuthorizationState }) {
   const [label, tone] = depositEntry(state);
   return <StatusChip tone={tone} label={label} />;
 }

@@ -82,7 +82,7 @@ describe('a rental from quote to invoice', () => {
     expect(clash.body.error.details.conflicts[0].bookingId).toBe(rental.bookingId);
   });
 
-  it('refuses checkout until a deposit hold is on the card; a declined card says so and keeps blocking', async () => {
+  it('refuses checkout until the deposit is authorized on the card; a declined card says so and keeps blocking', async () => {
     const blocked = await checkout(rental);
     expect(blocked.status).toBe(422);
     expect(blocked.body.error.code).toBe('deposit_required');
@@ -108,19 +108,19 @@ describe('a rental from quote to invoice', () => {
   it('authorizes with the success card (manual capture, 7-day window) and hands over with papers mailed', async () => {
     const held = await takeDeposit(rental);
     expect(held.status, JSON.stringify(held.body)).toBe(200);
-    const hold = held.body.deposit.hold;
-    expect(hold).toMatchObject({ state: 'authorized', amountMinor: 50_000, cardBrand: 'visa', cardLast4: '4242', initiatedBy: 'customer' });
+    const authorization = held.body.deposit.authorization;
+    expect(authorization).toMatchObject({ state: 'authorized', amountMinor: 50_000, cardBrand: 'visa', cardLast4: '4242', initiatedBy: 'customer' });
     // Provider reference ("Place a hold on a payment method"): 7 days for a customer-initiated online card authorization.
-    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE id = $1`, [hold.id]);
+    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE id = $1`, [authorization.id]);
     const intent = await stripe.paymentIntents.retrieve(payment_intent_id);
     expect(intent).toMatchObject({ status: 'requires_capture', capture_method: 'manual', amount: 50_000, amount_capturable: 50_000 });
-    expect(Date.parse(hold.captureBefore) / 1000 - intent.created).toBe(7 * 24 * 3600);
+    expect(Date.parse(authorization.captureBefore) / 1000 - intent.created).toBe(7 * 24 * 3600);
     expect((await checkout(rental)).status).toBe(200);
     const mails = await mailTo('accounts@quillon.test');
     expect(mails.at(-1)).toMatchObject({ subject: expect.stringContaining(rental.number), files: [`agreement-${rental.number}.pdf`, `certificates-${rental.number}.pdf`] });
   });
 
-  it('comes back with a damaged SMR: the repair and tax are captured from the hold, the rest released', async () => {
+  it('comes back with a damaged SMR: the repair and tax are captured from the card authorization, the rest released', async () => {
     const damaged = rental.items[1];
     const back = await giveBack(rental, damaged.id);
     expect(back.status).toBe(200);
@@ -129,13 +129,13 @@ describe('a rental from quote to invoice', () => {
     expect(r.charges).toEqual([expect.objectContaining({ assetId: damaged.id, amountMinor: null })]);
     expect((await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing))).body.error.code).toBe('deposit_unsettled');
     r = (await t.api.put(`/api/rentals/${rental.id}/charges/${r.charges[0].incidentId}`).set(bearer(billing)).send({ amountMinor: 18_000 })).body;
-    // Worked by hand: repair 180.00 + 19 % = 214.20 to take from the 500.00 hold.
+    // Worked by hand: repair 180.00 + 19 % = 214.20 to take from the 500.00 authorization.
     expect(r.settlement.extrasGrossMinor).toBe(21_420);
     expect((await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(tech)).send({ amountMinor: 21_420, reason: 'SMR repair' })).status).toBe(403);
     const captured = await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 21_420, reason: 'Dented SMR: re-coat and recertify' });
     expect(captured.status, JSON.stringify(captured.body)).toBe(200);
-    expect(captured.body.deposit).toMatchObject({ state: 'captured', hold: { capturedMinor: 21_420 } });
-    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE id = $1`, [captured.body.deposit.hold.id]);
+    expect(captured.body.deposit).toMatchObject({ state: 'captured', authorization: { capturedMinor: 21_420 } });
+    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE id = $1`, [captured.body.deposit.authorization.id]);
     // Provider reference (capture, amount_to_capture): the uncaptured rest is released.
     expect(await stripe.paymentIntents.retrieve(payment_intent_id)).toMatchObject({ status: 'succeeded', amount_received: 21_420, amount_capturable: 0 });
     const again = await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 100, reason: 'twice' });
@@ -150,7 +150,7 @@ describe('a rental from quote to invoice', () => {
     const creditNo = `CN-${year}-${String(credits + 1).padStart(4, '0')}`;
     const issued = await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing));
     expect(issued.status, JSON.stringify(issued.body)).toBe(201);
-    // 300.00 rental + 180.00 repair = 480.00; tax 91.20; total 571.20; 214.20 taken from the hold → 357.00 due (worked by hand).
+    // 300.00 rental + 180.00 repair = 480.00; tax 91.20; total 571.20; 214.20 taken from the authorization → 357.00 due (worked by hand).
     expect(issued.body).toMatchObject({ number: invoiceNo, subtotalMinor: 48_000, taxMinor: 9120, totalMinor: 57_120, depositCapturedMinor: 21_420, balanceMinor: 35_700 });
     expect((await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing))).status).toBe(409);
     const pdf = await t.api.get(`/api/rentals/${rental.id}/invoice.pdf`).set(bearer(billing)).buffer(true).parse(binaryBody);
@@ -189,18 +189,18 @@ describe('a rental from quote to invoice', () => {
 });
 
 describe('when the provider misbehaves', () => {
-  async function returnedWithHold() {
+  async function returnedWithAuthorization() {
     const r = await newRental(3);
     expect((await takeDeposit(r)).status).toBe(200);
     expect((await checkout(r)).status).toBe(200);
     expect((await giveBack(r)).status).toBe(200);
     return r;
   }
-  const intentOf = async (r: RentalView) => (await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE rental_id = $1 AND kind = 'hold' AND state <> 'declined' ORDER BY created_at DESC LIMIT 1`, [r.id]))[0].payment_intent_id as string;
+  const intentOf = async (r: RentalView) => (await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND kind = 'authorization' AND state <> 'declined' ORDER BY created_at DESC LIMIT 1`, [r.id]))[0].payment_intent_id as string;
   const captureCharges = async (pi: string) => (await stripe.charges.list({ payment_intent: pi })).data.filter((c) => c.captured);
 
   it('a capture whose reply is lost is retried under the same key: captured exactly once', async () => {
-    const r = await returnedWithHold();
+    const r = await returnedWithAuthorization();
     // The fake applies the capture but withholds its reply past the SDK's 2 s timeout — once.
     await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 1, hangMs: 10_000 }) });
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 5000, reason: 'Scratched case' });
@@ -211,13 +211,13 @@ describe('when the provider misbehaves', () => {
   });
 
   it('when every attempt times out the clerk is told to retry; the provider\'s event tells the truth and nothing is captured twice', async () => {
-    const r = await returnedWithHold();
+    const r = await returnedWithAuthorization();
     await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 3, hangMs: 10_000 }) });
     const failed = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 7000, reason: 'Late by two days' });
     expect(failed.status).toBe(502);
     expect(failed.body.error.code).toBe('payment_unavailable');
-    // The capture did happen at the provider; its signed payment_intent.succeeded event brings the hold up to date.
-    await eventually(async () => (await view(r)).deposit.hold?.capturedMinor).toBe(7000);
+    // The capture did happen at the provider; its signed payment_intent.succeeded event brings the authorization up to date.
+    await eventually(async () => (await view(r)).deposit.authorization?.capturedMinor).toBe(7000);
     const retried = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 7000, reason: 'Late by two days' });
     expect(retried.status).toBe(409);
     const pi = await stripe.paymentIntents.retrieve(await intentOf(r));
@@ -226,7 +226,7 @@ describe('when the provider misbehaves', () => {
   }, 30_000);
 
   it('a provider answering 500 captures nothing; the clerk is told to try again, and the retry captures once', async () => {
-    const r = await returnedWithHold();
+    const r = await returnedWithAuthorization();
     // Three faults: the first call and both of the SDK's retries fail, nothing applied (provider reference: api_error).
     await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: '500', times: 3 }) });
     const failed = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 4000, reason: 'Cleaning' });
@@ -240,8 +240,8 @@ describe('when the provider misbehaves', () => {
     expect((await stripe.paymentIntents.retrieve(await intentOf(r))).amount_received).toBe(4000);
   }, 30_000);
 
-  it('a hold that lapsed before its event reached us: the capture finds out and goes on the saved card', async () => {
-    const r = await returnedWithHold();
+  it('an authorization that lapsed before its event reached us: the capture finds out and goes on the saved card', async () => {
+    const r = await returnedWithAuthorization();
     const url = fake.store.settings.webhookUrl;
     fake.store.settings.webhookUrl = undefined; // the event is lost on the way
     await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }) });
@@ -253,12 +253,12 @@ describe('when the provider misbehaves', () => {
     expect(res.body.settlement).toMatchObject({ depositCapturedMinor: 0, cardChargedMinor: 6000 });
   });
 
-  it('a charge above the hold: the hold is captured whole and the rest charged to the saved card', async () => {
-    const r = await returnedWithHold();
+  it('a charge above the authorization: it is captured whole and the rest charged to the saved card', async () => {
+    const r = await returnedWithAuthorization();
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 80_000, reason: 'SMR lost' });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     expect(res.body.settlement).toMatchObject({ depositCapturedMinor: 50_000, cardChargedMinor: 30_000 });
-    expect(res.body.deposit.holds.at(-1)).toMatchObject({ kind: 'charge', state: 'captured', capturedMinor: 30_000, initiatedBy: 'merchant' });
+    expect(res.body.deposit.authorizations.at(-1)).toMatchObject({ kind: 'charge', state: 'captured', capturedMinor: 30_000, initiatedBy: 'merchant' });
   });
 
   it('moving a rental to other dates prices it for the new days', async () => {
@@ -269,7 +269,7 @@ describe('when the provider misbehaves', () => {
     expect((await view(r)).quote).toMatchObject({ days: 6, endsOn, subtotalMinor: 15_000, taxMinor: 2850 });
   });
 
-  it('cancelling a reserved rental releases its deposit hold', async () => {
+  it('cancelling a reserved rental releases the card authorization of its deposit', async () => {
     const r = await newRental(3);
     expect((await takeDeposit(r)).status).toBe(200);
     expect((await t.api.post(`/api/bookings/${r.bookingId}/cancel`).set(bearer(manager))).status).toBe(200);
@@ -278,8 +278,8 @@ describe('when the provider misbehaves', () => {
     expect((await stripe.paymentIntents.retrieve(await intentOf(r))).status).toBe('canceled');
   });
 
-  it('releases a hold in full', async () => {
-    const r = await returnedWithHold();
+  it('releases an authorization in full', async () => {
+    const r = await returnedWithAuthorization();
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/release`).set(bearer(billing));
     expect(res.body.deposit.state).toBe('released');
     expect((await stripe.paymentIntents.retrieve(await intentOf(r))).status).toBe('canceled');
@@ -315,7 +315,7 @@ describe('payment webhooks', () => {
     expect((await post(body, signPayload(body, 'whsec_nestkeeper_local', Math.floor(Date.now() / 1000)))).status).toBe(400);
   });
 
-  describe('a signed claim about a hold is checked with the provider first', () => {
+  describe('a signed claim about a card authorization is checked with the provider first', () => {
     const claim = (id: string, type: string, intent: string) =>
       JSON.stringify({ id, object: 'event', type, api_version: '2026-10-28.endive', created: Math.floor(Date.now() / 1000), data: { object: { id: intent, object: 'payment_intent', status: type === 'payment_intent.canceled' ? 'canceled' : 'succeeded', amount_received: 50_000, cancellation_reason: 'automatic' } }, livemode: false, pending_webhooks: 1, request: { id: null, idempotency_key: null } });
     const send = (body: string) => post(body, signPayload(body, WEBHOOK_SECRET, Math.floor(Date.now() / 1000)));
@@ -324,20 +324,20 @@ describe('payment webhooks', () => {
     it('a cancellation or capture the provider does not confirm changes nothing, and is recorded as such', async () => {
       const r = await newRental(3);
       expect((await takeDeposit(r)).status).toBe(200);
-      const [{ payment_intent_id: intent }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE rental_id = $1 AND state = 'authorized'`, [r.id]);
+      const [{ payment_intent_id: intent }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND state = 'authorized'`, [r.id]);
       expect((await send(claim('evt_forged_cancel', 'payment_intent.canceled', intent))).status).toBe(200);
       expect((await send(claim('evt_forged_capture', 'payment_intent.succeeded', intent))).status).toBe(200);
       expect(await outcomeOf('evt_forged_cancel')).toMatch(/^not confirmed: .* is requires_capture, not canceled; nothing changed$/);
       expect(await outcomeOf('evt_forged_capture')).toMatch(/^not confirmed: .* is requires_capture, not succeeded; nothing changed$/);
-      expect((await view(r)).deposit).toMatchObject({ state: 'authorized', hold: { capturedMinor: 0 } });
-      expect((await mailTo('billing@demo.test')).map((m: { subject: string }) => m.subject)).not.toContain(`Deposit hold lapsed: rental ${r.number}`);
+      expect((await view(r)).deposit).toMatchObject({ state: 'authorized', authorization: { capturedMinor: 0 } });
+      expect((await mailTo('billing@demo.test')).map((m: { subject: string }) => m.subject)).not.toContain(`Deposit authorization lapsed: rental ${r.number}`);
       expect((await stripe.paymentIntents.retrieve(intent)).status).toBe('requires_capture');
     });
 
     it('when the provider cannot be asked, the delivery is refused (502) and nothing is recorded, so its retry counts', async () => {
       const r = await newRental(3);
       expect((await takeDeposit(r)).status).toBe(200);
-      const [{ payment_intent_id: intent }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE rental_id = $1 AND state = 'authorized'`, [r.id]);
+      const [{ payment_intent_id: intent }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND state = 'authorized'`, [r.id]);
       // The provider really cancels it, but its own event is lost on the way; a delivery of ours stands in for it.
       const url = fake.store.settings.webhookUrl;
       fake.store.settings.webhookUrl = undefined;
@@ -355,7 +355,7 @@ describe('payment webhooks', () => {
     }, 30_000);
   });
 
-  it('a hold the provider lets lapse is marked lapsed from its signed event, and the clerk is told', async () => {
+  it('an authorization the provider lets lapse is marked lapsed from its signed event, and the clerk is told', async () => {
     const r = await newRental(3);
     await takeDeposit(r);
     await checkout(r);
@@ -363,29 +363,29 @@ describe('payment webhooks', () => {
     await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }) });
     await eventually(async () => (await view(r)).deposit.state).toBe('lapsed');
     const mails = await mailTo('billing@demo.test');
-    expect(mails.at(-1).subject).toBe(`Deposit hold lapsed: rental ${r.number}`);
+    expect(mails.at(-1).subject).toBe(`Deposit authorization lapsed: rental ${r.number}`);
   });
 });
 
-describe('the daily renewal of holds near lapse', () => {
+describe('the daily renewal of card authorizations near lapse', () => {
   const runRenewals = (now: Date) => t.routines.definitions.find((j) => j.name === 'deposit-renewals')!.run({ db: t.db, now, trigger: 'manual', organizationId: null });
 
-  it('renews on the saved card (merchant-initiated: Visa 4 days 18 hours) and lets the old hold go', async () => {
+  it('renews on the saved card (merchant-initiated: Visa 4 days 18 hours) and lets the old authorization go', async () => {
     const r = await newRental(20);
     await takeDeposit(r);
     await checkout(r);
-    const first = (await view(r)).deposit.hold!;
-    // Six days on, the hold lapses within 48 hours.
+    const first = (await view(r)).deposit.authorization!;
+    // Six days on, the authorization lapses within 48 hours.
     const summary = await runRenewals(new Date(Date.parse(first.captureBefore!) - 24 * 3600_000));
     expect(summary).toMatchObject({ renewed: 1, refused: 0 });
     const after = await view(r);
-    expect(after.deposit.hold).toMatchObject({ state: 'authorized', initiatedBy: 'merchant', amountMinor: first.amountMinor });
-    expect(after.deposit.holds.find((h) => h.id === first.id)!.state).toBe('replaced');
-    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE id = $1`, [after.deposit.hold!.id]);
+    expect(after.deposit.authorization).toMatchObject({ state: 'authorized', initiatedBy: 'merchant', amountMinor: first.amountMinor });
+    expect(after.deposit.authorizations.find((h) => h.id === first.id)!.state).toBe('replaced');
+    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE id = $1`, [after.deposit.authorization!.id]);
     const pi = await stripe.paymentIntents.retrieve(payment_intent_id);
     // Provider reference: merchant-initiated authorizations on Visa are held 4 days 18 hours.
-    expect(Date.parse(after.deposit.hold!.captureBefore!) / 1000 - pi.created).toBe(4 * 24 * 3600 + 18 * 3600);
-    const [{ payment_intent_id: old }] = await t.db.query(`SELECT payment_intent_id FROM deposit_holds WHERE id = $1`, [first.id]);
+    expect(Date.parse(after.deposit.authorization!.captureBefore!) / 1000 - pi.created).toBe(4 * 24 * 3600 + 18 * 3600);
+    const [{ payment_intent_id: old }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE id = $1`, [first.id]);
     expect((await stripe.paymentIntents.retrieve(old)).status).toBe('canceled');
   });
 
@@ -393,15 +393,15 @@ describe('the daily renewal of holds near lapse', () => {
     const r = await newRental(20);
     await takeDeposit(r);
     await checkout(r);
-    const hold = (await view(r)).deposit.hold!;
+    const authorization = (await view(r)).deposit.authorization!;
     await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents', method: 'POST', mode: 'decline', times: 10 }) });
-    const summary = await runRenewals(new Date(Date.parse(hold.captureBefore!) - 24 * 3600_000));
+    const summary = await runRenewals(new Date(Date.parse(authorization.captureBefore!) - 24 * 3600_000));
     await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'DELETE' });
     expect(summary.refused).toBeGreaterThanOrEqual(1);
     const after = await view(r);
-    expect(after.deposit).toMatchObject({ state: 'authorized', hold: { id: hold.id } });
-    expect(after.deposit.holds.at(-1)).toMatchObject({ state: 'declined', initiatedBy: 'merchant' });
-    expect((await mailTo('billing@demo.test')).map((m: { subject: string }) => m.subject)).toContain(`Deposit hold not renewed: rental ${r.number}`);
+    expect(after.deposit).toMatchObject({ state: 'authorized', authorization: { id: authorization.id } });
+    expect(after.deposit.authorizations.at(-1)).toMatchObject({ state: 'declined', initiatedBy: 'merchant' });
+    expect((await mailTo('billing@demo.test')).map((m: { subject: string }) => m.subject)).toContain(`Deposit authorization not renewed: rental ${r.number}`);
   });
 });
 

@@ -66,7 +66,7 @@ describe('the billing desk in a real browser', () => {
     // Repair 180.00 + 19 % = 214.20 from the 500.00 hold (worked by hand); the rest is released.
     await eventually(() => page.getByLabel('Amount to capture (EUR)').inputValue()).toMatch(/^214\.20?$/);
     await page.getByRole('button', { name: 'Capture and release the rest' }).click();
-    await eventually(async () => (await rig.db.query(`SELECT state, captured_minor FROM deposit_holds WHERE rental_id = $1 AND kind = 'hold' AND state <> 'declined'`, [rentalId]))[0]).toEqual({ state: 'captured', captured_minor: 21_420 });
+    await eventually(async () => (await rig.db.query(`SELECT state, captured_minor FROM deposit_authorizations WHERE rental_id = $1 AND kind = 'authorization' AND state <> 'declined'`, [rentalId]))[0]).toEqual({ state: 'captured', captured_minor: 21_420 });
 
     await page.getByRole('button', { name: 'Issue invoice' }).click();
     const download = page.getByRole('link', { name: 'Download invoice (PDF)' });

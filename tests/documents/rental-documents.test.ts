@@ -55,7 +55,7 @@ function rental(items: RentalItem[]): RentalView {
     quote,
     currency: 'EUR',
     depositMinor: 150_000,
-    deposit: { state: 'none', hold: null, holds: [] },
+    deposit: { state: 'none', authorization: null, authorizations: [] },
     checkedOutAt: null,
     returnedAt: null,
     charges: [],
@@ -83,7 +83,7 @@ describe('rental agreement PDF', () => {
       '€1,500.00', // the deposit in the fixture
       // Late day for the tracker: 250.00 day rate + 50.00 late fee = 300.00 (worked by hand).
       '€250.00 day rate + €50.00 late fee = €300.00 a day',
-      'charged against the deposit hold',
+      'charged against the deposit authorization',
       'IEC 60825-1 Class 2',
       'do not stare into the beam',
       'do not charge them and do not ship them by air',

@@ -10,17 +10,17 @@ import { TableHead } from '../../../components/table-head';
 import { isApiError } from '../../../lib/api-client';
 import { formatMoney, useDateFormat } from '../../../lib/format';
 import { useTakeDeposit } from '../api/take-deposit';
-import { testCards, type DepositHoldView, type RentalView } from '../../../../shared/billing/views';
+import { testCards, type DepositAuthorizationView, type RentalView } from '../../../../shared/billing/views';
 import { paymentProblem } from './payment-problem';
 import { SettleDeposit } from './settle-deposit';
 
 const brand = (name: string | null) => (name ? name[0].toUpperCase() + name.slice(1) : 'Card');
-const card = (hold: DepositHoldView | null) => (hold?.cardLast4 ? `${brand(hold.cardBrand)} ending ${hold.cardLast4}` : null);
+const card = (hold: DepositAuthorizationView | null) => (hold?.cardLast4 ? `${brand(hold.cardBrand)} ending ${hold.cardLast4}` : null);
 
 /** The rental's deposit: the hold on the renter's card, taking it, and settling it at return (`charges`: the rental's damage and loss charges, set before settling). */
 export function DepositPanel({ rental, canManage, charges }: { rental: RentalView; canManage: boolean; charges: ReactNode }) {
   const { dateTime } = useDateFormat();
-  const { state, hold, holds } = rental.deposit;
+  const { state, authorization: hold, authorizations: holds } = rental.deposit;
   const money = (minor: number) => formatMoney(minor, rental.currency);
   const stillOut = rental.state === 'reserved' || rental.state === 'out';
   const canTake = stillOut && (state === 'none' || state === 'declined' || state === 'lapsed');
@@ -94,9 +94,9 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
 }
 
 /** A charge above the hold and a renewal are both merchant-initiated on the saved card; the kind tells them apart. */
-const howTaken = (h: DepositHoldView) => (h.kind === 'charge' ? 'Charged to the saved card' : h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card');
+const howTaken = (h: DepositAuthorizationView) => (h.kind === 'charge' ? 'Charged to the saved card' : h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card');
 
-function HoldHistory({ holds, currency, dateTime }: { holds: DepositHoldView[]; currency: string; dateTime: (value: string) => string }) {
+function HoldHistory({ holds, currency, dateTime }: { holds: DepositAuthorizationView[]; currency: string; dateTime: (value: string) => string }) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm">

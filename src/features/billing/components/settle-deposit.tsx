@@ -10,7 +10,7 @@ import { currencyDigits, formatMoney } from '../../../lib/format';
 import { amountText, parseAmount } from '../../../lib/money';
 import { useCaptureDeposit } from '../api/capture-deposit';
 import { useReleaseDeposit } from '../api/release-deposit';
-import type { DepositHoldView, RentalView } from '../../../../shared/billing/views';
+import type { DepositAuthorizationView, RentalView } from '../../../../shared/billing/views';
 import { paymentProblem } from './payment-problem';
 
 /** What the hold is there to cover, in words, as the reason the clerk starts from. */
@@ -21,7 +21,7 @@ function suggestedReason(rental: RentalView): string {
 }
 
 /** At return: set the charges, then capture what the extras come to (the rest is released) or release the whole hold. */
-export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; hold: DepositHoldView; charges: ReactNode }) {
+export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; hold: DepositAuthorizationView; charges: ReactNode }) {
   const capture = useCaptureDeposit();
   const release = useReleaseDeposit();
   const [problem, setProblem] = useState<string>();

@@ -9,7 +9,7 @@ import { useRentals } from '../api/get-rentals';
 import type { RentalListView } from '../api/keys';
 import { RentalStateChip } from './rental-words';
 
-const holdNearLapse = (r: RentalSummary) => r.depositState === 'authorized' && lapsesSoon(r.holdCaptureBefore);
+const holdNearLapse = (r: RentalSummary) => r.depositState === 'authorized' && lapsesSoon(r.authorizationCaptureBefore);
 
 /** One home panel: a short list of rentals, each a link to its page. */
 function RentalsPanel({ id, title, view, pick, empty, chip }: { id: string; title: string; view: RentalListView; pick: (r: RentalSummary) => boolean; empty: string; chip: (r: RentalSummary) => React.ReactNode }) {
@@ -41,7 +41,7 @@ export function RentalDeskPanels() {
   const { dateTime } = useDateFormat();
   return (
     <>
-      <RentalsPanel id="lapsing-heading" title="Holds lapsing within two days" view="open" pick={holdNearLapse} empty="No card hold lapses within two days." chip={(r) => <HoldLapse at={r.holdCaptureBefore} dateTime={dateTime} />} />
+      <RentalsPanel id="lapsing-heading" title="Holds lapsing within two days" view="open" pick={holdNearLapse} empty="No card hold lapses within two days." chip={(r) => <HoldLapse at={r.authorizationCaptureBefore} dateTime={dateTime} />} />
       <RentalsPanel id="settle-heading" title="Deposits to settle at return" view="to_settle" pick={(r) => r.depositState === 'authorized'} empty="No returned rental is waiting on its deposit." chip={(r) => <DepositStateChip state={r.depositState} />} />
       <RentalsPanel
         id="invoice-heading"

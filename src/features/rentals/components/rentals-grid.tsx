@@ -57,7 +57,7 @@ export function RentalsGrid({ rows, label, emptyMessage, exportFileName }: { row
         colId: 'lapses',
         headerName: 'Hold lapses at',
         minWidth: 230,
-        valueGetter: (p) => (p.data?.depositState === 'authorized' && p.data.holdCaptureBefore ? isoTimestamp(p.data.holdCaptureBefore) : ''),
+        valueGetter: (p) => (p.data?.depositState === 'authorized' && p.data.authorizationCaptureBefore ? isoTimestamp(p.data.authorizationCaptureBefore) : ''),
         cellRenderer: (p: Cell) => (p.value ? <HoldLapse at={p.value as string} dateTime={dateTime} /> : '—'),
       },
     ],

@@ -1,9 +1,10 @@
-import type { Scoped } from '../db/scoped';
+import type { Scoped } from './scoped';
 
 /**
- * The next number of a series (per organization), taken inside the caller's
- * transaction: the counter row stays locked until commit, so concurrent
- * issuers queue, and a rollback gives the number back — no gaps, no repeats.
+ * The next number of a series per organization (rentals, invoices, credit
+ * notes), taken inside the caller's transaction: the counter row stays locked
+ * until commit, so concurrent issuers queue, and a rollback gives the number
+ * back — no gaps, no repeats.
  */
 export async function nextNumber(tx: Scoped, series: string): Promise<number> {
   const [row] = await tx.sql<{ last_number: number }>(

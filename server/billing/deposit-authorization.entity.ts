@@ -1,29 +1,30 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { HoldState } from '../../shared/billing/views';
+import type { AuthorizationState } from '../../shared/billing/views';
 import { OrgOwned } from '../db/org-owned';
-import { Rental } from '../rentals/rental.entity';
 
 /**
- * One PaymentIntent for a rental: a deposit authorization (`hold`, manual
- * capture) or a charge above the hold (`charge`). Declined attempts stay on
- * record; a renewal marks the hold it replaced.
+ * One PaymentIntent for a rental: the deposit's card authorization
+ * (`authorization`, manual capture) or a charge above it on the saved card
+ * (`charge`). Declined attempts stay on record; a renewal marks the
+ * authorization it replaced.
  */
-@Entity({ name: 'deposit_holds' })
+@Entity({ name: 'deposit_authorizations' })
 @Index(['organizationId', 'rentalId'])
 @Index(['state', 'captureBefore'])
-export class DepositHold extends OrgOwned {
+export class DepositAuthorization extends OrgOwned {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
   @Column({ name: 'rental_id', type: 'uuid' })
   rentalId: string;
 
-  @ManyToOne(() => Rental, { onDelete: 'RESTRICT', nullable: false })
+  // Rentals' row, named rather than imported: billing reads rentals through server/rentals.
+  @ManyToOne('Rental', { onDelete: 'RESTRICT', nullable: false })
   @JoinColumn({ name: 'rental_id' })
-  rental?: Rental;
+  rental?: object;
 
-  @Column({ type: 'text', default: 'hold' })
-  kind: 'hold' | 'charge';
+  @Column({ type: 'text', default: 'authorization' })
+  kind: 'authorization' | 'charge';
 
   @Index({ unique: true, where: '"payment_intent_id" IS NOT NULL' })
   @Column({ name: 'payment_intent_id', type: 'text', nullable: true })
@@ -35,7 +36,7 @@ export class DepositHold extends OrgOwned {
   idempotencyKey: string;
 
   @Column({ type: 'text' })
-  state: HoldState;
+  state: AuthorizationState;
 
   @Column({ name: 'amount_minor', type: 'integer' })
   amountMinor: number;

@@ -1,0 +1,67 @@
+import { formatMoney } from '../../shared/billing/money';
+import { todayIn } from '../../shared/calibration/due-date';
+import { Scoped } from '../db/scoped';
+import type { Routine } from '../routines';
+import { enqueueMail, staffAddresses } from '../notifications';
+import { lockRental } from '../rentals';
+import { DepositAuthorization } from './deposit-authorization.entity';
+import type { DepositsService } from './deposits.service';
+
+/** Renew an authorization when it would lapse within this long: a daily job then always has a second chance. */
+export const RENEW_WITHIN_HOURS = 48;
+
+type DueAuthorization = { id: string; organization_id: string; rental_id: string; time_zone: string };
+
+/**
+ * Once a day: every deposit authorization still counted on (rental not
+ * invoiced or cancelled) that lapses within 48 hours is renewed on the saved
+ * card; when the card will not take it, the firm's billing clerk and owner
+ * are told.
+ */
+export const depositRenewalsRoutine = (deposits: DepositsService): Routine => ({
+  name: 'deposit-renewals',
+  description: 'Renews the card authorizations of deposits that would lapse within two days, and says when a card refuses.',
+  schedule: '30 5 * * *',
+  run: async ({ db, now, organizationId }) => {
+    const due: DueAuthorization[] = await db.query(
+      `SELECT d.id, d.organization_id, d.rental_id, o.time_zone
+         FROM deposit_authorizations d JOIN rentals r ON r.id = d.rental_id JOIN bookings b ON b.id = r.booking_id
+         JOIN organizations o ON o.id = d.organization_id
+        WHERE d.kind = 'authorization' AND d.state = 'authorized' AND d.payment_intent_id IS NOT NULL AND d.capture_before < $1 AND b.state <> 'cancelled'
+          AND ($2::uuid IS NULL OR d.organization_id = $2)
+          AND NOT EXISTS (SELECT 1 FROM invoices i WHERE i.rental_id = r.id AND i.kind = 'invoice')
+        ORDER BY d.capture_before`,
+      [new Date(now.getTime() + RENEW_WITHIN_HOURS * 3_600_000), organizationId],
+    );
+    let renewed = 0;
+    let refused = 0;
+    let unreachable = 0;
+    for (const row of due) {
+      // One rental's trouble (the provider down, say) must not stop the others; tomorrow's run tries again.
+      await db.transaction(async (manager) => {
+        const tx = new Scoped(manager, row.organization_id);
+        const rental = await lockRental(tx, row.rental_id);
+        const authorization = await tx.get(DepositAuthorization, { id: row.id }, 'That card authorization');
+        if (authorization.state !== 'authorized') return; // settled meanwhile
+        const result = await deposits.renew(tx, rental, authorization, todayIn(row.time_zone, now));
+        if (result.ok) {
+          renewed += 1;
+          return;
+        }
+        refused += 1;
+        await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), {
+          subject: `Deposit authorization not renewed: rental ${rental.number}`,
+          heading: `The card refused to renew the deposit authorization for rental ${rental.number}`,
+          paragraphs: [
+            `The authorization of ${formatMoney(authorization.amountMinor, rental.currency, 'en-GB')} lapses at ${authorization.captureBefore?.toISOString() ?? 'an unknown time'}; renewing it on the saved card failed: ${result.message}`,
+            'Ask the customer for another card, or settle the rental before the authorization lapses.',
+          ],
+        });
+      }).catch((err: Error) => {
+        unreachable += 1;
+        console.error(`[deposit-renewals] card authorization ${row.id}: ${err.message}`);
+      });
+    }
+    return { due: due.length, renewed, refused, unreachable };
+  },
+});

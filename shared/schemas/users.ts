@@ -1,9 +1,10 @@
 import { z } from 'zod';
 import { roles } from '../auth/roles';
+import { emailAddress } from './common';
 
 export const MIN_PASSWORD_LENGTH = 10;
 
-const email = z.string().trim().toLowerCase().email('is not an e-mail address');
+const email = emailAddress;
 const password = z.string().min(MIN_PASSWORD_LENGTH, `must be at least ${MIN_PASSWORD_LENGTH} characters`).max(200, 'is too long');
 
 export const loginPayload = z.object({ email, password: z.string().min(1, 'is required').max(200) });

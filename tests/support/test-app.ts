@@ -2,12 +2,15 @@ import nodemailer from 'nodemailer';
 import request from 'supertest';
 import { buildApp } from '../../server/app';
 import { readConfig, type Config } from '../../server/config';
+import { createDataSource } from '../../server/db/data-source';
 import { DEMO_PASSWORD } from '../../server/seed/demo-people';
 import { createTestDatabase } from './test-db';
 
-/** The real app on a fresh seeded database, with supertest and sign-in helpers. */
-export async function createTestApp(overrides: Partial<Record<keyof Config, string>> = {}) {
+/** The real app on a fresh seeded database, with supertest and sign-in helpers.
+ * `reachDatabaseVia` lets the app reach the database another way (a proxy a test can cut). */
+export async function createTestApp(overrides: Partial<Record<keyof Config, string>> = {}, opts: { reachDatabaseVia?: (url: string) => string } = {}) {
   const database = await createTestDatabase({ seed: true });
+  const appDb = opts.reachDatabaseVia ? await createDataSource(opts.reachDatabaseVia(database.url), 2).initialize() : database.db;
   const config = readConfig({
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
@@ -18,7 +21,7 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
     ...overrides,
   });
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: config.SMTP_PORT, secure: false, ignoreTLS: true });
-  const { app, jobs } = buildApp({ config, db: database.db, mail });
+  const { app, jobs } = buildApp({ config, db: appDb, mail });
   const api = request(app);
 
   async function tokenFor(email: string, password = DEMO_PASSWORD): Promise<string> {
@@ -28,7 +31,10 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
   }
 
   // A moment for work that runs after a response (the sign-in limiter's bookkeeping) before the database goes.
-  const close = () => new Promise((resolve) => setTimeout(resolve, 100)).then(() => database.drop());
+  const close = () =>
+    new Promise((resolve) => setTimeout(resolve, 100))
+      .then(() => (appDb !== database.db && appDb.isInitialized ? appDb.destroy() : undefined))
+      .then(() => database.drop());
   return { app, api, jobs, db: database.db, config, tokenFor, close };
 }
 

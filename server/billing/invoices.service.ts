@@ -14,6 +14,7 @@ import { conflict, ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications/outbox';
 import { loadOrgContext } from '../organizations/org-context';
 import { Customer } from '../rentals/customer.entity';
+import { Rental } from '../rentals/rental.entity';
 import { invoiceSummaries, loadRentalView } from '../rentals/rental-view';
 import { lockRental } from './deposits.service';
 import { Invoice, InvoicePayment } from './invoice.entity';
@@ -129,6 +130,7 @@ export class InvoicesService {
   /** The rental's invoice (its latest document when credit notes followed). */
   async rentalPdf(actor: Actor, rentalId: string) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      await tx.get(Rental, { id: rentalId }, 'That rental');
       const invoice = await tx.findOne(Invoice, { rentalId, kind: 'invoice' });
       if (!invoice) throw ruleBroken('not_invoiced', 'This rental has no invoice yet.');
       return this.render(tx, await this.view(tx, invoice));

@@ -82,10 +82,11 @@ export class BookingsService {
   async create(actor: Actor, input: BookingPayload, within?: (tx: Scoped, booking: BookingView) => Promise<void>) {
     try {
       return await inOrganization(this.db, actor.organizationId, async (tx) => {
+        // Every record the request names is the firm's (else 404) before any rule about them is judged.
         const assetIds = await this.resolveAssets(tx, input.assetIds ?? [], input.kitId);
+        if (input.jobId) await tx.get(Job, { id: input.jobId }, 'That job');
         await this.assertBookable(tx, assetIds, input.startsOn, input.endsOn, null);
         const purpose: BookingPurpose = input.rentalId ? 'rental' : input.jobId ? 'job' : 'internal';
-        if (input.jobId) await tx.get(Job, { id: input.jobId }, 'That job');
         const booking = await tx.insert(Booking, {
           startsOn: input.startsOn,
           endsOn: input.endsOn,

@@ -100,8 +100,7 @@ export class LabService {
   }
 
   private async assets(tx: Scoped, ids: string[]) {
-    const assets = await tx.find(Asset, { where: { id: In(ids) } });
-    if (assets.length !== new Set(ids).size) throw ruleBroken('unknown_asset', 'One of those items is not in your fleet.');
+    const assets = await tx.getEach(Asset, ids, 'One of those items');
     const retired = assets.filter((a) => a.status === 'retired');
     if (retired.length) throw ruleBroken('asset_retired', `Retired: ${retired.map((a) => a.assetTag).join(', ')}.`);
     return assets;

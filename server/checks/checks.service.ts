@@ -24,8 +24,7 @@ import { FieldCheck } from './field-check.entity';
 const badField = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { [field]: message } });
 
 async function assetOfType(tx: Scoped, id: string, type: AssetType, field: string) {
-  const asset = await tx.findOne(Asset, { id });
-  if (!asset) throw badField(field, 'is not an asset of your fleet');
+  const asset = await tx.get(Asset, { id }, 'That asset');
   if (asset.type !== type) throw badField(field, `is a ${assetTypeTitles[asset.type].toLowerCase()}, not a ${assetTypeTitles[type].toLowerCase()}`);
   if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
   return asset;

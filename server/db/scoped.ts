@@ -1,4 +1,4 @@
-import type { DeepPartial, EntityManager, EntityTarget, FindManyOptions, FindOptionsWhere, ObjectLiteral, QueryDeepPartialEntity } from 'typeorm';
+import { In, type DeepPartial, type EntityManager, type EntityTarget, type FindManyOptions, type FindOptionsWhere, type ObjectLiteral, type QueryDeepPartialEntity } from 'typeorm';
 import { notFound } from '../http/errors';
 import type { OrgOwned } from './org-owned';
 import { preparedQuery } from './prepared';
@@ -38,6 +38,15 @@ export class Scoped {
     const row = await this.findOne(entity, where, options);
     if (!row) throw notFound(what);
     return row;
+  }
+
+  /** Every row named by `ids`, or the API's 404 naming `what` when any is unknown or another organization's. */
+  async getEach<T extends OrgOwned & ObjectLiteral & { id: string }>(entity: EntityTarget<T>, ids: readonly string[], what: string): Promise<T[]> {
+    const unique = [...new Set(ids)];
+    if (!unique.length) return [];
+    const rows = await this.find(entity, { where: { id: In(unique) } as FindOptionsWhere<T> });
+    if (rows.length !== unique.length) throw notFound(what);
+    return rows;
   }
 
   async insert<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, values: DeepPartial<Omit<T, 'organizationId'>>): Promise<T> {

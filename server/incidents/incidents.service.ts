@@ -6,6 +6,7 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { Asset } from '../fleet/asset.entity';
 import { AppError, ruleBroken } from '../http/errors';
+import { Booking } from '../bookings/booking.entity';
 import { placeHold } from '../holds/holds.service';
 import { enqueueMail } from '../notifications/outbox';
 import { staffAddresses } from '../notifications/staff';
@@ -87,8 +88,8 @@ export class IncidentsService {
   async report(actor: Actor, input: z.infer<typeof incidentPayload>, files: UploadedPhoto[]) {
     const photos = await Promise.all(files.map(preparePhoto));
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const asset = await tx.findOne(Asset, { id: input.assetId });
-      if (!asset) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { assetId: 'is not an asset of your fleet' } });
+      const asset = await tx.get(Asset, { id: input.assetId }, 'That asset');
+      if (input.bookingId) await tx.get(Booking, { id: input.bookingId }, 'That booking');
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
       const { incident, photos: saved } = await openIncident(tx, actor, asset, { ...input, bookingId: input.bookingId ?? null }, photos);
       const refreshed = await tx.get(Asset, { id: asset.id }, 'That asset');

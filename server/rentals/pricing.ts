@@ -1,4 +1,3 @@
-import { In } from 'typeorm';
 import { cheapestCover, depositMinor, taxMinor } from '../../shared/billing/quote';
 import type { Quote, QuoteLine } from '../../shared/billing/views';
 import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
@@ -40,8 +39,7 @@ export async function priceRental(tx: Scoped, q: PriceRequest): Promise<Quote> {
   const ctx = await loadOrgContext(tx);
   const kit = q.kitId ? await tx.get(Kit, { id: q.kitId }, 'That kit') : null;
   const kitMembers = kit ? await tx.find(Asset, { where: { kitId: kit.id } }) : [];
-  const loose = q.assetIds?.length ? await tx.find(Asset, { where: { id: In(q.assetIds) } }) : [];
-  if (loose.length !== new Set(q.assetIds ?? []).size) throw ruleBroken('unknown_asset', 'One of those items is not in your fleet.');
+  const loose = await tx.getEach(Asset, q.assetIds ?? [], 'One of those items');
   const cards = await tx.find(RateCard, {});
   const days = bookingDays(q.startsOn, q.endsOn);
   const lines: QuoteLine[] = [];

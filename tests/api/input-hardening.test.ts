@@ -109,3 +109,26 @@ describe('e-mail addresses (RFC 5321: at most 254 characters)', () => {
     expect((await t.api.post('/api/auth/login').send({ email: exactly254, password: 'whatever-it-is' })).status).toBe(401);
   });
 });
+
+describe("ids in a request that name no record of the caller's firm", () => {
+  it('are 404 — unknown or another firm’s alike — before any rule about them is judged', async () => {
+    const otherOwner = await t.tokenFor('owner@other.test');
+    const theirs = await t.api.post('/api/assets').set(bearer(otherOwner)).send({ type: 'accessory', assetTag: 'THEIRS-1', serialNumber: 'T1' });
+    const theirUser = (await t.api.get('/api/auth/me').set(bearer(otherOwner))).body.user.id;
+    const unknown = '7d1e2f3a-4b5c-4d6e-8f90-a1b2c3d4e5f6';
+    for (const id of [unknown, theirs.body.id]) {
+      const answers = {
+        'lab trip assetIds': await t.api.post('/api/lab-trips').set(bearer(owner)).send({ provider: 'Gauge House', assetIds: [id], sentOn: '2031-01-10' }),
+        'quote assetIds': await t.api.get(`/api/quotes?assetIds=${id}&startsOn=2031-01-10&endsOn=2031-01-12`).set(bearer(owner)),
+        'incident assetId': await t.api.post('/api/incidents').set(bearer(owner)).field('assetId', id).field('kind', 'impact').field('description', 'Knocked over').field('occurredAt', '2026-11-30T10:00:00Z'),
+        'incident bookingId': await t.api.post('/api/incidents').set(bearer(owner)).field('assetId', assetId).field('bookingId', id).field('kind', 'impact').field('description', 'Knocked over').field('occurredAt', '2026-11-30T10:00:00Z'),
+        'rental invoice PDF': await t.api.get(`/api/rentals/${id}/invoice.pdf`).set(bearer(owner)),
+      };
+      for (const [what, res] of Object.entries(answers)) expect([what, res.status, res.body.error?.code]).toEqual([what, 404, 'not_found']);
+    }
+    for (const lead of [unknown, theirUser]) {
+      const job = await t.api.post('/api/jobs').set(bearer(owner)).send({ reference: `J-LEAD-${lead.slice(0, 4)}`, customerName: 'Someone', startsOn: '2031-01-10', endsOn: '2031-01-11', leadTechnicianId: lead });
+      expect(job.status).toBe(404);
+    }
+  });
+});

@@ -1,9 +1,9 @@
 import { writeFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import type { Server } from 'node:http';
+import { PDFDocument } from 'pdf-lib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { capabilitiesByRole, roles, type Capability, type Role } from '../../shared/auth/roles';
-import { PDFDocument } from 'pdf-lib';
 import { breakages, concrete, fresh, isOptional, jsonWithRaw, leafPaths, queryBreakages, sample, withAt, without, type Breakage, type IdPool, type JsonSchema } from '../support/fuzz-values';
 import { createTestApp, type TestApp } from '../support/test-app';
 
@@ -103,7 +103,7 @@ function formOf(body: Record<string, unknown>, schema: JsonSchema, file: Blob | 
     form.append(k, typeof v === 'string' ? v : JSON.stringify(v));
   }
   const fileField = Object.entries(schema.properties ?? {}).find(([, p]) => isFile(p));
-  if (fileField && file) form.append(fileField[0], file, 'upload.pdf');
+  if (fileField && file) form.append(fileField[0], file, file.type === 'image/png' ? 'photo.png' : 'upload.pdf');
   return form;
 }
 

@@ -14,7 +14,7 @@ import { invoicePdf } from '../documents/invoice-pdf';
 import { conflict, ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications';
 import { loadOrgContext } from '../organizations';
-import { getCustomer, loadRentalView, lockRental, type CustomerRecord } from '../rentals';
+import { getCustomer, getRental, loadRentalView, lockRental, type CustomerRecord } from '../rentals';
 import { invoiceSummaries } from './invoice-summaries';
 import { Invoice, InvoicePayment } from './invoice.entity';
 import { rentalMoney } from './rental-money';
@@ -130,6 +130,7 @@ export class InvoicesService {
   /** The rental's invoice (its latest document when credit notes followed). */
   async rentalPdf(actor: Actor, rentalId: string) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      await getRental(tx, rentalId);
       const invoice = await tx.findOne(Invoice, { rentalId, kind: 'invoice' });
       if (!invoice) throw ruleBroken('not_invoiced', 'This rental has no invoice yet.');
       return this.render(tx, await this.view(tx, invoice));

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { availabilityQuery, bookingDatesPayload, bookingListQuery, bookingPayload, checklistPayload, jobPayload } from '../../shared/schemas/bookings';
+import { text } from '../../shared/schemas/common';
 import { endpoint, paging } from '../http/endpoint';
 import { ruleBroken } from '../http/errors';
 import { sendDocument } from '../http/send-file';
@@ -46,7 +47,7 @@ export function bookingsRoutes({ bookings, handover, desk, jobs, calendar }: Ser
   endpoint(router, at, { method: 'get', path: '/jobs/:id', summary: 'One job', access: 'bookings.read' }, ({ actor, params }) => jobs.get(actor, params.id));
   endpoint(router, at, { method: 'put', path: '/jobs/:id', summary: 'Change a job', access: 'bookings.write', body: jobPayload }, ({ actor, params, body }) => jobs.update(actor, params.id, body));
   endpoint(router, at, { method: 'post', path: '/calendar/token', summary: 'A new secret address for my calendar feed', access: 'bookings.read' }, ({ actor }) => calendar.rotateToken(actor));
-  endpoint(router, at, { method: 'get', path: '/calendar.ics', summary: 'Bookings and due dates as an iCalendar feed (RFC 5545)', access: 'public', query: z.object({ token: z.string().min(10, 'is required') }) }, async ({ query, res }) =>
+  endpoint(router, at, { method: 'get', path: '/calendar.ics', summary: 'Bookings and due dates as an iCalendar feed (RFC 5545)', access: 'public', query: z.object({ token: text(200).min(10, 'is required') }) }, async ({ query, res }) =>
     sendDocument(res, await calendar.feed(query.token), 'text/calendar; charset=utf-8', 'nestkeeper.ics', true),
   );
   return router;

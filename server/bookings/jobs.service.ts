@@ -57,6 +57,7 @@ export class JobsRegisterService {
     });
   }
 
+
   private fields(input: JobInput) {
     return {
       reference: input.reference,

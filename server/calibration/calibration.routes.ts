@@ -3,23 +3,13 @@ import { z } from 'zod';
 import { calibrationEventFields, impactAssessmentPayload, intervalDecisionPayload, labTripPayload, noticePayload } from '../../shared/schemas/calibration';
 import { dueItemsCsv, dueItemsPdf } from '../documents/calibration-review';
 import { endpoint } from '../http/endpoint';
-import { AppError } from '../http/errors';
-import { parse } from '../http/parse';
 import { sendDocument } from '../http/send-file';
-import { memoryUpload } from '../http/upload';
 import type { CalibrationService } from './calibration.service';
 import type { ImpactService } from './impact.service';
 import type { LabService } from './lab.service';
 import type { ReviewService } from './review.service';
 
-const MAX_CERTIFICATE_BYTES = 20 * 1024 * 1024;
-const upload = memoryUpload({
-  field: 'certificate',
-  maxFiles: 1,
-  maxBytes: MAX_CERTIFICATE_BYTES,
-  eachFile: 'A certificate',
-  wrongFiles: new AppError(400, 'invalid_input', 'Send one PDF in the "certificate" field.', { fields: { certificate: 'one PDF only' } }),
-});
+const certificateUpload = { files: 'certificate', maxFiles: 1, maxBytes: 20 * 1024 * 1024 };
 
 type Services = { calibration: CalibrationService; impact: ImpactService; lab: LabService; review: ReviewService };
 
@@ -27,9 +17,8 @@ type Services = { calibration: CalibrationService; impact: ImpactService; lab: L
 export function calibrationRoutes({ calibration, impact, lab, review }: Services): Router {
   const router = Router();
   const at = '/api';
-  router.post('/assets/:id/calibrations', upload);
-  endpoint(router, at, { method: 'post', path: '/assets/:id/calibrations', summary: 'Record a calibration with its certificate PDF (multipart)', access: 'calibration.record', status: 201 }, ({ actor, params, req }) =>
-    calibration.record(actor, params.id, parse(calibrationEventFields, req.body), req.file),
+  endpoint(router, at, { method: 'post', path: '/assets/:id/calibrations', summary: 'Record a calibration with its certificate PDF (multipart)', access: 'calibration.record', body: calibrationEventFields, upload: certificateUpload, status: 201 }, ({ actor, params, body, files }) =>
+    calibration.record(actor, params.id, body, files[0]),
   );
   endpoint(router, at, { method: 'get', path: '/assets/:id/calibrations', summary: "An item's calibrations, newest first", access: 'fleet.read' }, ({ actor, params }) => calibration.list(actor, params.id));
   endpoint(router, at, { method: 'get', path: '/calibrations/:id/certificate.pdf', summary: 'The certificate PDF (organization only)', access: 'fleet.read' }, async ({ actor, params, res }) => {

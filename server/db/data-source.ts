@@ -18,6 +18,7 @@ export function createDataSource(url: string, entities: DataSourceOptions['entit
     uuidExtension: 'pgcrypto',
     // Tests provoke constraint violations on purpose; elsewhere a failed query is worth a log line.
     logging: process.env.NODE_ENV === 'test' ? false : ['error'],
-    extra: { max: poolSize },
+    // A request waits at most this long for a connection; then it is answered 503 rather than left hanging.
+    extra: { max: poolSize, connectionTimeoutMillis: 10_000 },
   });
 }

@@ -2,7 +2,7 @@ import Papa from 'papaparse';
 import { z } from 'zod';
 import type { AssetView, ImportProblem } from '../../shared/assets/views';
 import { restoreNeutralisedCell } from '../../shared/csv/formula-guard';
-import { assetTypes, createAssetPayload, specsByType, type CreateAssetPayload } from '../../shared/schemas/assets';
+import { assetTypes, createAssetPayload, kitPayload, specsByType, type CreateAssetPayload } from '../../shared/schemas/assets';
 import { toCsv } from '../documents/csv';
 
 /**
@@ -153,8 +153,11 @@ export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: Import
     };
     const result = createAssetPayload.safeParse(candidate);
     if (!result.success) for (const issue of result.error.issues) rowErrors.push({ row, column: columnFor(issue.path), message: issue.message });
+    // The kit is made by name on import: the same rules as a kit made by hand.
+    const kit = kitPayload.shape.name.optional().safeParse(cell('kit'));
+    if (!kit.success) rowErrors.push({ row, column: 'kit', message: kit.error.issues[0].message });
     if (rowErrors.length) errors.push(...rowErrors);
-    else rows.push({ row, kit: cell('kit') ?? null, payload: result.data! });
+    else rows.push({ row, kit: kit.data ?? null, payload: result.data! });
   });
   if (parsed.data.length === 0) errors.push({ row: 0, column: '', message: 'The file has a header row but no assets.' });
   return { rows, errors, rowCount: parsed.data.length };

@@ -1,9 +1,9 @@
-import express, { Router } from 'express';
+import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { z } from 'zod';
 import { assetListQuery, createAssetPayload, retireAssetPayload, updateAssetPayload } from '../../shared/schemas/assets';
+import { text } from '../../shared/schemas/common';
 import { endpoint } from '../http/endpoint';
-import { AppError } from '../http/errors';
 import { sendDocument } from '../http/send-file';
 import { importTemplateCsv } from './asset-csv';
 import { importAssetsCsv } from './asset-import.service';
@@ -11,7 +11,8 @@ import type { AssetsService } from './assets.service';
 import type { FleetDocumentsService } from './fleet-documents.service';
 
 const importQuery = z.object({ mode: z.enum(['preview', 'commit']).default('preview') });
-const lookupQuery = z.object({ code: z.string().trim().min(1, 'give an asset tag, RFID tag or label code').max(500) });
+const lookupQuery = z.object({ code: text(500).min(1, 'give an asset tag, RFID tag or label code') });
+const csvUpload = { text: ['text/csv', 'text/plain', 'application/csv'], maxBytes: 25 * 1024 * 1024 };
 const exportQuery = assetListQuery.omit({ limit: true, offset: true });
 
 export function fleetRoutes(db: DataSource, assets: AssetsService, documents: FleetDocumentsService): Router {
@@ -30,11 +31,9 @@ export function fleetRoutes(db: DataSource, assets: AssetsService, documents: Fl
   endpoint(router, at, { method: 'get', path: '/import/template.csv', summary: 'An example import file with every column', access: read }, ({ res }) =>
     sendDocument(res, importTemplateCsv(), 'text/csv; charset=utf-8', 'nestkeeper-import-template.csv'),
   );
-  router.post('/import', express.text({ type: ['text/csv', 'text/plain', 'application/csv'], limit: '25mb' }));
-  endpoint(router, at, { method: 'post', path: '/import', summary: 'Import assets from CSV: mode=preview checks, mode=commit writes all or nothing', access: write, query: importQuery }, ({ actor, query, req }) => {
-    if (typeof req.body !== 'string') throw new AppError(415, 'unsupported_type', 'Send the CSV file itself with Content-Type: text/csv.');
-    return importAssetsCsv(db, actor, req.body, query.mode);
-  });
+  endpoint(router, at, { method: 'post', path: '/import', summary: 'Import assets from CSV: mode=preview checks, mode=commit writes all or nothing', access: write, query: importQuery, upload: csvUpload }, ({ actor, query, req }) =>
+    importAssetsCsv(db, actor, req.body as string, query.mode),
+  );
 
   endpoint(router, at, { method: 'get', path: '/', summary: 'List assets with search, filters and sort', access: read, query: assetListQuery }, ({ actor, query }) => assets.list(actor, query));
   endpoint(router, at, { method: 'post', path: '/', summary: 'Register an asset', access: write, body: createAssetPayload, status: 201 }, ({ actor, body }) => assets.create(actor, body));

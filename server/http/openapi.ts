@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { documentedEndpoints } from './endpoint';
+import { uploadRequestBody } from './upload';
 
 /** GET /api/openapi.json — built from the endpoints as they are registered. */
 export function openApiDocument() {
@@ -18,7 +19,9 @@ export function openApiDocument() {
       'x-nestkeeper-access': e.access,
       ...(e.access === 'public' ? { security: [] } : e.access === 'if-signed-in' ? { security: [{}, { bearer: [] }, { session: [] }] } : {}),
       ...(parameters.length ? { parameters } : {}),
-      ...(e.body
+      ...(e.upload
+        ? { requestBody: uploadRequestBody(e.upload, e.body) }
+        : e.body
         ? { requestBody: { required: true, content: { 'application/json': { schema: z.toJSONSchema(e.body, { io: 'input', unrepresentable: 'any' }) } } } }
         : {}),
       responses: { default: { description: 'JSON body, or `{error: {code, message, details?}}`' } },

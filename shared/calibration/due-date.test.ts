@@ -1,5 +1,6 @@
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
+import { NotACalendarDate } from '../dates/calendar-date';
 import { addDays, calendarDayIn, calibrationState, dueDate, dueOnForPlan, todayIn } from './due-date';
 
 // Independent reference: Luxon's DateTime.plus({ months }), which also clamps to
@@ -27,6 +28,17 @@ describe('calibration due date (DESIGN.md §5)', () => {
       for (const m of [1, 3, 6, 12, 24]) if (dueDate(d.toISODate()!, m) !== luxonDue(d.toISODate()!, m)) mismatches += 1;
     }
     expect(mismatches).toBe(0);
+  });
+
+  it('refuses dates that do not exist (and years outside 1900–2199) with NotACalendarDate, not date-fns\' "Invalid time value"', () => {
+    const missing = ['2026-02-30', '2026-02-29', '2026-13-01', '2026-00-10'];
+    // Luxon, the independent reference, finds no such days either.
+    for (const d of missing) expect(DateTime.fromFormat(d, 'yyyy-MM-dd', { zone: 'utc' }).isValid, d).toBe(false);
+    for (const d of [...missing, '0000-01-01']) {
+      expect(() => dueDate(d, 12), d).toThrow(NotACalendarDate);
+      expect(() => dueOnForPlan({ required: true, intervalMonths: 12, lastCalibratedOn: d }), d).toThrow(NotACalendarDate);
+      expect(() => addDays(d, 1), d).toThrow(NotACalendarDate);
+    }
   });
 
   it('has no due date when calibration is not required or never recorded', () => {

@@ -1,4 +1,5 @@
 import { addMonths, differenceInCalendarDays, format, parseISO } from 'date-fns';
+import { assertCalendarDate } from '../dates/calendar-date';
 
 /** DESIGN.md §5 "Due date". Dates are calendar dates (`YYYY-MM-DD`) in the organization's time zone. */
 export type CalibrationState = 'current' | 'due_soon' | 'overdue' | 'not_required';
@@ -8,9 +9,10 @@ export const DEFAULT_DUE_SOON_DAYS = 30;
 export type CalibrationPlan = { required: boolean; intervalMonths: number | null; lastCalibratedOn: string | null };
 
 /** Last calibration + interval in calendar months; a day past the month's end
- * clamps to its last day (31 Jan + 1 month = 28/29 Feb) — date-fns addMonths does exactly that. */
+ * clamps to its last day (31 Jan + 1 month = 28/29 Feb) — date-fns addMonths does exactly that.
+ * Throws `NotACalendarDate` for a date that does not exist (the API answers 400). */
 export function dueDate(lastCalibratedOn: string, intervalMonths: number): string {
-  return format(addMonths(parseISO(lastCalibratedOn), intervalMonths), 'yyyy-MM-dd');
+  return format(addMonths(parseISO(assertCalendarDate(lastCalibratedOn)), intervalMonths), 'yyyy-MM-dd');
 }
 
 /** The plan's due date, or null when not required or never calibrated. */
@@ -54,9 +56,9 @@ export function calendarDayIn(instant: Date, timeZone: string): string {
 /** Today's calendar date in an IANA time zone. */
 export const todayIn = (timeZone: string, now: Date = new Date()): string => calendarDayIn(now, timeZone);
 
-/** The date `days` after `date` (negative for before). */
+/** The date `days` after `date` (negative for before); `NotACalendarDate` for a date that does not exist. */
 export function addDays(date: string, days: number): string {
-  const d = parseISO(date);
+  const d = parseISO(assertCalendarDate(date));
   d.setDate(d.getDate() + days);
   return format(d, 'yyyy-MM-dd');
 }

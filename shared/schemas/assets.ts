@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { calibrationStates } from '../calibration/due-date';
+import { calendarDate, text } from './common';
 import { checkKinds, tolerancePayload } from './check-kinds';
 import { assetSortFields, assetStatuses, assetTypes, tipPositions, typesWithFirmware, type AssetType } from '../assets/vocabulary';
 
@@ -26,7 +27,7 @@ export const specsByType = {
       expansionPpmPerK: z.number({ message: 'must be a number' }).min(-50, 'is outside −50…100 µm/(m·K)').max(100, 'is outside −50…100 µm/(m·K)'),
     })
     .strict(),
-  tracker: z.object({ laserClass: z.string().max(20).optional(), maxRangeM: z.number().positive().optional() }).strict(),
+  tracker: z.object({ laserClass: text(20).optional(), maxRangeM: z.number().positive().optional() }).strict(),
   controller: z.object({}).strict(),
   probe: z.object({}).strict(),
   nest: z.object({ sizeMm: positiveMm.optional() }).strict(),
@@ -37,25 +38,24 @@ export const specsByType = {
 
 export type AssetSpecs = { [T in AssetType]: z.infer<(typeof specsByType)[T]> };
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD').refine((s) => !Number.isNaN(Date.parse(s)), 'is not a real date');
-const optionalText = (max: number) => z.string().trim().max(max, `must be at most ${max} characters`).nullable().optional();
+const optionalText = (max: number) => text(max).nullable().optional();
 
 export const calibrationPlanPayload = z
   .object({
     required: z.boolean(),
     intervalMonths: z.number().int('must be a whole number of months').min(1, 'must be at least 1 month').max(120, 'must be at most 120 months').nullable().optional(),
     provider: optionalText(120),
-    lastCalibratedOn: isoDate.nullable().optional(),
+    lastCalibratedOn: calendarDate.nullable().optional(),
   })
   .refine((p) => !p.required || !!p.intervalMonths, { message: 'is needed when calibration is required', path: ['intervalMonths'] });
 
 const assetFields = {
-  assetTag: z.string().trim().min(1, 'is required').max(40, 'must be at most 40 characters').regex(/^[A-Za-z0-9][A-Za-z0-9._\-/]*$/, 'may use letters, digits and . _ - / only'),
-  serialNumber: z.string().trim().min(1, 'is required').max(80),
+  assetTag: text(40).min(1, 'is required').regex(/^[A-Za-z0-9][A-Za-z0-9._\-/]*$/, 'may use letters, digits and . _ - / only'),
+  serialNumber: text(80).min(1, 'is required'),
   manufacturer: optionalText(80),
   model: optionalText(80),
   firmwareVersion: optionalText(40),
-  rfidTag: z.string().trim().max(64).regex(/^[A-Za-z0-9:\-]*$/, 'may use letters, digits, : and - only').nullable().optional(),
+  rfidTag: text(64).regex(/^[A-Za-z0-9:\-]*$/, 'may use letters, digits, : and - only').nullable().optional(),
   location: optionalText(120),
   replacementValueMinor: z.number().int('must be whole minor units').min(0, 'cannot be negative').max(1e12).nullable().optional(),
   notes: optionalText(4000),
@@ -82,14 +82,14 @@ export const updateAssetPayload = z
   .strict();
 export type UpdateAssetPayload = z.infer<typeof updateAssetPayload>;
 
-export const retireAssetPayload = z.object({ reason: z.string().trim().min(3, 'say briefly why').max(500) });
+export const retireAssetPayload = z.object({ reason: text(500).min(3, 'say briefly why') });
 
 const listOf = <T extends z.ZodType>(item: T) =>
   z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(item)).optional();
 
 
 export const assetListQuery = z.object({
-  q: z.string().trim().max(100).optional(),
+  q: text(100).optional(),
   type: listOf(z.enum(assetTypes)),
   status: listOf(z.enum(assetStatuses)),
   calibration: listOf(z.enum(calibrationStates as [string, ...string[]])),
@@ -104,7 +104,7 @@ export const assetListQuery = z.object({
 export type AssetListQuery = z.infer<typeof assetListQuery>;
 
 export const kitPayload = z.object({
-  name: z.string().trim().min(1, 'is required').max(80),
+  name: text(80).min(1, 'is required'),
   notes: optionalText(2000),
   memberIds: z.array(z.uuid('is not an asset id')).max(200).optional(),
 });
@@ -115,7 +115,7 @@ export const organizationSettingsPayload = z
     decisionRule: z.enum(['simple', 'guarded'], { message: 'must be simple or guarded' }),
     taxRateBasisPoints: z.number().int('must be whole basis points').min(0).max(10_000),
     providers: z
-      .array(z.object({ name: z.string().trim().min(1, 'is required').max(120), turnaroundDays: z.number().int('must be whole days').min(1).max(180) }))
+      .array(z.object({ name: text(120).min(1, 'is required'), turnaroundDays: z.number().int('must be whole days').min(1).max(180) }))
       .max(50),
     intervalPolicy: z
       .object({
@@ -131,12 +131,12 @@ export const organizationSettingsPayload = z
       .refine((p) => p.minMinor <= p.maxMinor, { message: 'the minimum must not exceed the maximum', path: ['maxMinor'] }),
     tolerances: z.partialRecord(z.enum(checkKinds), tolerancePayload),
     issuer: z.object({
-      address: z.string().trim().max(400),
-      taxNumber: z.string().trim().max(40),
-      paymentTerms: z.string().trim().max(600),
+      address: text(400),
+      taxNumber: text(40),
+      paymentTerms: text(600),
     }),
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
-    timeZone: z.string().refine((tz) => {
+    timeZone: text(64).refine((tz) => {
       try {
         new Intl.DateTimeFormat('en', { timeZone: tz });
         return true;

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { assetTypes } from '../assets/vocabulary';
+import { calendarDate, emailAddress, text } from './common';
 
 export const bookingStates = ['reserved', 'out', 'returned', 'cancelled'] as const;
 export type BookingState = (typeof bookingStates)[number];
@@ -6,13 +8,12 @@ export type BookingState = (typeof bookingStates)[number];
 export const bookingPurposes = ['job', 'rental', 'lab', 'internal'] as const;
 export type BookingPurpose = (typeof bookingPurposes)[number];
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD').refine((s) => !Number.isNaN(Date.parse(s)), 'is not a real date');
 const MAX_DAYS = 400;
 
 type DateRange = { startsOn: string; endsOn: string };
 const dates = <T extends z.ZodRawShape>(shape: T) =>
   z
-    .object({ startsOn: isoDate, endsOn: isoDate, ...shape })
+    .object({ startsOn: calendarDate, endsOn: calendarDate, ...shape })
     .refine((b) => (b as DateRange).startsOn <= (b as DateRange).endsOn, { message: 'must be on or after the start', path: ['endsOn'] })
     .refine((b) => (Date.parse((b as DateRange).endsOn) - Date.parse((b as DateRange).startsOn)) / 86_400_000 < MAX_DAYS, {
       message: `a booking may span at most ${MAX_DAYS} days`,
@@ -24,11 +25,11 @@ export const bookingPayload = dates({
   kitId: z.uuid('is not a kit id').optional(),
   jobId: z.uuid('is not a job id').optional(),
   rentalId: z.uuid('is not a rental id').optional(),
-  note: z.string().trim().max(2000).optional(),
+  note: text(2000).optional(),
 }).refine((b) => (b.assetIds?.length ?? 0) > 0 || !!b.kitId, { message: 'pick a kit or at least one asset', path: ['assetIds'] });
 export type BookingPayload = z.infer<typeof bookingPayload>;
 
-export const bookingDatesPayload = dates({ note: z.string().trim().max(2000).optional() });
+export const bookingDatesPayload = dates({ note: text(2000).optional() });
 
 export const checklistPayload = z.object({
   checklist: z
@@ -37,17 +38,17 @@ export const checklistPayload = z.object({
         assetId: z.uuid('is not an asset id'),
         present: z.boolean({ message: 'tick present or not' }),
         condition: z.enum(['good', 'worn', 'damaged'], { message: 'must be good, worn or damaged' }),
-        note: z.string().trim().max(1000).optional(),
+        note: text(1000).optional(),
       }),
     )
     .min(1, 'walk the packing list'),
   /** Who takes the kit (checkout) or brings it back (return): a person's name or a user id. */
-  counterpart: z.string().trim().min(2, 'say who takes or brings the kit').max(120),
+  counterpart: text(120).min(2, 'say who takes or brings the kit'),
 });
 
 export const bookingListQuery = z.object({
-  from: isoDate.optional(),
-  to: isoDate.optional(),
+  from: calendarDate.optional(),
+  to: calendarDate.optional(),
   assetId: z.uuid().optional(),
   kitId: z.uuid().optional(),
   jobId: z.uuid().optional(),
@@ -57,19 +58,19 @@ export const bookingListQuery = z.object({
 });
 
 export const availabilityQuery = z
-  .object({ type: z.string().optional(), startsOn: isoDate, endsOn: isoDate, limit: z.coerce.number().int().min(1).max(500).default(100) })
+  .object({ type: z.enum(assetTypes, { message: `must be one of ${assetTypes.join(', ')}` }).optional(), startsOn: calendarDate, endsOn: calendarDate, limit: z.coerce.number().int().min(1).max(500).default(100) })
   .refine((b) => b.startsOn <= b.endsOn, { message: 'must be on or after the start', path: ['endsOn'] });
 
 export const jobPayload = z
   .object({
-    reference: z.string().trim().min(1, 'is required').max(40),
-    customerName: z.string().trim().min(1, 'is required').max(120),
-    contactName: z.string().trim().max(120).nullable().optional(),
-    contactEmail: z.string().trim().email('is not an e-mail address').nullable().optional().or(z.literal('').transform(() => null)),
-    siteAddress: z.string().trim().max(400).nullable().optional(),
-    startsOn: isoDate,
-    endsOn: isoDate,
+    reference: text(40).min(1, 'is required'),
+    customerName: text(120).min(1, 'is required'),
+    contactName: text(120).nullable().optional(),
+    contactEmail: emailAddress.nullable().optional().or(z.literal('').transform(() => null)),
+    siteAddress: text(400).nullable().optional(),
+    startsOn: calendarDate,
+    endsOn: calendarDate,
     leadTechnicianId: z.uuid('is not a user id').nullable().optional(),
-    notes: z.string().trim().max(4000).nullable().optional(),
+    notes: text(4000).nullable().optional(),
   })
   .refine((b) => b.startsOn <= b.endsOn, { message: 'must be on or after the start', path: ['endsOn'] });

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { MIN_TIP_READINGS } from '../checks/tip-validation';
 import { tipPositions } from './assets';
 import { checkKinds, type CheckKind } from './check-kinds';
+import { instant, text } from './common';
 
 export { checkKinds, defaultTolerances, tolerancePayload, type CheckKind } from './check-kinds';
 export * from '../checks/vocabulary';
@@ -18,8 +19,8 @@ const common = {
   uncertaintyUm: z.number().min(0, 'cannot be negative').max(100_000).nullable().optional(),
   /** Standard uncertainties to combine by root sum of squares (then U = 2·u). */
   uncertaintyComponentsUm: z.array(z.number().min(0, 'cannot be negative').max(100_000)).max(20).optional(),
-  performedAt: z.iso.datetime({ offset: true, message: 'must be a date and time' }).optional(),
-  note: z.string().trim().max(2000).nullable().optional(),
+  performedAt: instant.optional(),
+  note: text(2000).nullable().optional(),
 };
 
 export const checkPayload = z

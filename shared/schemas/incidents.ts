@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { incidentKinds, incidentStates } from '../incidents/vocabulary';
+import { instant, text } from './common';
 
 export * from '../incidents/vocabulary';
 
@@ -7,16 +8,16 @@ export * from '../incidents/vocabulary';
 export const incidentPayload = z.object({
   assetId: z.uuid('is not an asset id'),
   kind: z.enum(incidentKinds, { message: `must be one of ${incidentKinds.join(', ')}` }),
-  description: z.string().trim().min(3, 'say briefly what happened').max(4000),
-  occurredAt: z.iso.datetime({ offset: true, message: 'must be a date and time' }),
-  location: z.string().trim().max(200).optional().transform((v) => v || null),
+  description: text(4000).min(3, 'say briefly what happened'),
+  occurredAt: instant,
+  location: text(200).optional().transform((v) => v || null),
   bookingId: z.uuid('is not a booking id').optional().or(z.literal('').transform(() => undefined)),
 });
 
 export const incidentUpdatePayload = z
   .object({
     state: z.enum(incidentStates).optional(),
-    resolution: z.string().trim().max(4000).nullable().optional(),
+    resolution: text(4000).nullable().optional(),
     chargeAmountMinor: z.number().int('must be whole minor units').min(0, 'cannot be negative').max(1e9).nullable().optional(),
   })
   .strict();
@@ -28,5 +29,5 @@ export const incidentListQuery = z.object({
   offset: z.coerce.number().int().min(0).default(0),
 });
 
-export const releasePayload = z.object({ note: z.string().trim().max(2000).optional() });
-export const holdPayload = z.object({ summary: z.string().trim().min(3, 'say why the item is held').max(500) });
+export const releasePayload = z.object({ note: text(2000).optional() });
+export const holdPayload = z.object({ summary: text(500).min(3, 'say why the item is held') });

@@ -1,16 +1,16 @@
 import { z } from 'zod';
 import { assetTypes } from '../assets/vocabulary';
+import { calendarDate, calendarMonth, emailAddress, text } from './common';
 
 const minor = z.number().int('must be whole minor units').min(0, 'cannot be negative').max(1e9);
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date YYYY-MM-DD');
 
 export const customerPayload = z.object({
-  company: z.string().trim().min(1, 'is required').max(160),
-  billingContact: z.string().trim().max(120).nullable().optional(),
-  billingEmail: z.string().trim().toLowerCase().email('is not an e-mail address'),
-  address: z.string().trim().max(400).nullable().optional(),
-  taxNumber: z.string().trim().max(40).nullable().optional(),
-  notes: z.string().trim().max(4000).nullable().optional(),
+  company: text(160).min(1, 'is required'),
+  billingContact: text(120).nullable().optional(),
+  billingEmail: emailAddress,
+  address: text(400).nullable().optional(),
+  taxNumber: text(40).nullable().optional(),
+  notes: text(4000).nullable().optional(),
 });
 
 export const rateCardPayload = z
@@ -28,8 +28,8 @@ export const quoteQuery = z
   .object({
     assetIds: z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(z.uuid('is not an asset id')).max(200)).optional(),
     kitId: z.uuid('is not a kit id').optional(),
-    startsOn: isoDate,
-    endsOn: isoDate,
+    startsOn: calendarDate,
+    endsOn: calendarDate,
     customerId: z.uuid('is not a customer id').optional(),
   })
   .refine((q) => q.startsOn <= q.endsOn, { message: 'must be on or after the start', path: ['endsOn'] })
@@ -40,9 +40,9 @@ export const rentalPayload = z
     customerId: z.uuid('pick a customer'),
     kitId: z.uuid('is not a kit id').optional(),
     assetIds: z.array(z.uuid('is not an asset id')).max(200).optional(),
-    startsOn: isoDate,
-    endsOn: isoDate,
-    note: z.string().trim().max(2000).optional(),
+    startsOn: calendarDate,
+    endsOn: calendarDate,
+    note: text(2000).optional(),
   })
   .refine((q) => q.startsOn <= q.endsOn, { message: 'must be on or after the start', path: ['endsOn'] })
   .refine((q) => (q.assetIds?.length ?? 0) > 0 || !!q.kitId, { message: 'pick a kit or at least one asset', path: ['assetIds'] });
@@ -56,28 +56,26 @@ export const rentalListQuery = z.object({
 
 /** A payment method made by the provider's card form (locally: one of its published test cards). Never a card number. */
 export const depositPayload = z.object({
-  paymentMethod: z
-    .string()
-    .trim()
+  paymentMethod: text(255)
     .regex(/^pm_[A-Za-z0-9_]+$/, 'pick a card (a payment method id from the card form)'),
 });
 
 export const capturePayload = z.object({
   amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing; release the hold instead').max(1e9),
-  reason: z.string().trim().min(3, 'say what the money is for').max(500),
+  reason: text(500).min(3, 'say what the money is for'),
 });
 
 export const chargePayload = z.object({ amountMinor: minor });
 
 export const creditNotePayload = z.object({
-  reason: z.string().trim().min(3, 'say why the invoice is corrected').max(500),
+  reason: text(500).min(3, 'say why the invoice is corrected'),
   amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing').max(1e9).optional(),
 });
 
 export const invoicePaymentPayload = z.object({
   amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing').max(1e9),
-  receivedOn: isoDate,
-  reference: z.string().trim().min(2, 'say where it came from (a bank reference, say)').max(200),
+  receivedOn: calendarDate,
+  reference: text(200).min(2, 'say where it came from (a bank reference, say)'),
 });
 
 export const invoiceListQuery = z.object({
@@ -87,6 +85,5 @@ export const invoiceListQuery = z.object({
   offset: z.coerce.number().int().min(0).default(0),
 });
 
-const month = z.string().regex(/^\d{4}-\d{2}$/, 'must be a month YYYY-MM');
-export const revenueQuery = z.object({ from: month, to: month }).refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });
-export const utilisationQuery = z.object({ from: isoDate, to: isoDate }).refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });
+export const revenueQuery = z.object({ from: calendarMonth, to: calendarMonth }).refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });
+export const utilisationQuery = z.object({ from: calendarDate, to: calendarDate }).refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });

@@ -1,10 +1,11 @@
 import { z } from 'zod';
 import { MAX_PASSWORD_BYTES, passwordBytes } from '../auth/password-strength';
 import { roles } from '../auth/roles';
+import { emailAddress } from './common';
 
 export const MIN_PASSWORD_LENGTH = 10;
 
-const email = z.string().trim().toLowerCase().email('is not an e-mail address');
+const email = emailAddress;
 // How guessable a password is depends on the person and the firm, so the services check that (shared/auth/password-strength.ts).
 const password = z
   .string()

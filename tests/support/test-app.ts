@@ -3,12 +3,15 @@ import nodemailer from 'nodemailer';
 import request from 'supertest';
 import { buildApp } from '../../server/app';
 import { readConfig, type Config } from '../../server/config';
+import { openDataSource } from '../../server/data-source';
 import { DEMO_PASSWORD } from '../../server/seed/demo-people';
 import { createTestDatabase } from './test-db';
 
-/** The real app on a fresh seeded database, with supertest and sign-in helpers. */
-export async function createTestApp(overrides: Partial<Record<keyof Config, string>> = {}) {
+/** The real app on a fresh seeded database, with supertest and sign-in helpers.
+ * `reachDatabaseVia` lets the app reach the database another way (a proxy a test can cut). */
+export async function createTestApp(overrides: Partial<Record<keyof Config, string>> = {}, opts: { reachDatabaseVia?: (url: string) => string } = {}) {
   const database = await createTestDatabase({ seed: true });
+  const appDb = opts.reachDatabaseVia ? await openDataSource(opts.reachDatabaseVia(database.url), 2).initialize() : database.db;
   const config = readConfig({
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
@@ -20,7 +23,7 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
     ...overrides,
   });
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: config.SMTP_PORT, secure: false, ignoreTLS: true });
-  const { app, routines } = buildApp({ config, db: database.db, mail });
+  const { app, routines } = buildApp({ config, db: appDb, mail });
   const api = request(app);
 
   async function tokenFor(email: string, password = DEMO_PASSWORD): Promise<string> {
@@ -29,7 +32,11 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
     return res.body.token as string;
   }
 
-  return { app, api, routines, db: database.db, config, tokenFor, close: () => database.drop() };
+  const close = async () => {
+    if (appDb !== database.db && appDb.isInitialized) await appDb.destroy();
+    await database.drop();
+  };
+  return { app, api, routines, db: database.db, config, tokenFor, close };
 }
 
 /** A webhook signing secret of the test's own (nothing is built in). */

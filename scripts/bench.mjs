@@ -45,7 +45,16 @@ try {
   ensureClientBuild();
   const url = await ensureDatabase(startCluster({ dataDir, port: await freePort(), log }), 'nestkeeper');
   const port = await freePort();
-  const env = { ...process.env, DATABASE_URL: url, JWT_SECRET: randomBytes(48).toString('base64url'), PAYMENT_WEBHOOK_SECRET: `whsec_${randomBytes(32).toString('base64url')}`, PORT: String(port), START_LOCAL_FAKES: 'false', RUN_SCHEDULER: 'false', NODE_ENV: 'production' };
+  const env = {
+    ...process.env,
+    DATABASE_URL: url,
+    JWT_SECRET: randomBytes(48).toString('base64url'),
+    PAYMENT_WEBHOOK_SECRET: `whsec_${randomBytes(32).toString('base64url')}`,
+    PORT: String(port),
+    START_LOCAL_FAKES: 'false',
+    RUN_SCHEDULER: 'false',
+    NODE_ENV: 'production',
+  };
   runTs('server/prepare.ts', env);
   env.BENCH_ASSETS = String(suite.assets ?? 20_000);
   runTs('server/seed/seed-bench-fleet.ts', env);
@@ -55,7 +64,11 @@ try {
   await waitForHealth(port);
   let code = 0;
   for (const script of suite.run) {
-    const child = spawn(process.execPath, ['--import', 'tsx', script], { cwd: projectRoot, env: { ...env, BENCH_URL: `http://127.0.0.1:${port}` }, stdio: 'inherit' });
+    const child = spawn(process.execPath, ['--import', 'tsx', script], {
+      cwd: projectRoot,
+      env: { ...env, BENCH_URL: `http://127.0.0.1:${port}` },
+      stdio: 'inherit',
+    });
     code = (await new Promise((r) => child.on('exit', r))) ?? 1;
     if (code !== 0) break;
   }

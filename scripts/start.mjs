@@ -25,7 +25,9 @@ async function main() {
     env.PAYMENT_WEBHOOK_SECRET ??= installationSecret(clusterDir, 'payment-webhook-secret', 'whsec_');
   }
   if (!env.JWT_SECRET || !env.PAYMENT_WEBHOOK_SECRET) {
-    throw new Error('Set JWT_SECRET (32+ characters) and PAYMENT_WEBHOOK_SECRET (your payment provider\'s webhook signing secret) when DATABASE_URL points at your own PostgreSQL.');
+    throw new Error(
+      "Set JWT_SECRET (32+ characters) and PAYMENT_WEBHOOK_SECRET (your payment provider's webhook signing secret) when DATABASE_URL points at your own PostgreSQL.",
+    );
   }
   runTs('server/prepare.ts', env);
 
@@ -60,7 +62,14 @@ async function shutdown(reason, code = 0) {
   stopping = true;
   log(`Stopping (${reason})…`);
   await Promise.all(
-    children.map((c) => (c.exitCode !== null ? null : new Promise((resolve) => { c.once('exit', resolve); c.kill('SIGTERM'); }))),
+    children.map((c) =>
+      c.exitCode !== null
+        ? null
+        : new Promise((resolve) => {
+            c.once('exit', resolve);
+            c.kill('SIGTERM');
+          }),
+    ),
   );
   if (clusterDir) {
     stopCluster(clusterDir);

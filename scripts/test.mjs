@@ -25,7 +25,10 @@ function ensureChromium() {
   if (fs.existsSync(CHROMIUM)) return;
   if (process.getuid?.() !== 0) throw new Error(`Browser tests need Chromium at ${CHROMIUM}: sudo apt-get install -y chromium`);
   log('Installing Chromium from Debian packages for the browser tests (one time)…');
-  for (const args of [['update', '-qq'], ['install', '-y', '-qq', 'chromium']]) {
+  for (const args of [
+    ['update', '-qq'],
+    ['install', '-y', '-qq', 'chromium'],
+  ]) {
     const r = spawnSync('apt-get', args, { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
     if (r.status !== 0) throw new Error(`apt-get ${args.join(' ')} failed`);
   }
@@ -160,7 +163,11 @@ async function main() {
   process.exit(tally.failed > 0 ? 1 : 0);
 }
 
-for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => { cleanUp(); process.exit(130); });
+for (const signal of ['SIGINT', 'SIGTERM'])
+  process.on(signal, () => {
+    cleanUp();
+    process.exit(130);
+  });
 main().catch((err) => {
   console.error(`[nestkeeper] ${err.message}`);
   cleanUp();

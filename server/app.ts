@@ -97,7 +97,14 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
   app.use('/api', express.json({ limit: '1mb' }), csrfGuard);
 
   app.use('/api', healthRoutes(db));
-  app.use('/api/auth', authRoutes(auth, { secureCookies: (config.PUBLIC_URL ?? '').startsWith('https:'), attemptsPer10Min: config.LOGIN_ATTEMPTS_PER_10_MIN, attemptStore: new PgRateLimitStore(db) }));
+  app.use(
+    '/api/auth',
+    authRoutes(auth, {
+      secureCookies: (config.PUBLIC_URL ?? '').startsWith('https:'),
+      attemptsPer10Min: config.LOGIN_ATTEMPTS_PER_10_MIN,
+      attemptStore: new PgRateLimitStore(db),
+    }),
+  );
   app.use('/api/users', usersRoutes(users));
   app.use('/api/mailbox', notificationsRoutes(db));
   app.use(ROUTINES_PATH, routinesRoutes(routines));
@@ -116,7 +123,13 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
   const rentals = new RentalsService(db, rentalMoney);
   app.use(
     '/api',
-    bookingsRoutes({ bookings, handover: new HandoverService(db, rentals.handoverGates), desk: new DeskService(db), jobs: new JobsRegisterService(db), calendar: new CalendarService(db, publicUrl) }),
+    bookingsRoutes({
+      bookings,
+      handover: new HandoverService(db, rentals.handoverGates),
+      desk: new DeskService(db),
+      jobs: new JobsRegisterService(db),
+      calendar: new CalendarService(db, publicUrl),
+    }),
   );
   app.use(
     '/api',

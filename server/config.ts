@@ -25,11 +25,19 @@ const environment = z.object({
   PAYMENT_API_PORT: z.coerce.number().int().min(0).max(65535).default(4610),
   PAYMENT_API_PROTOCOL: z.enum(['http', 'https']).default('http'),
   /** Signs the provider's webhook deliveries; made per installation (`npm start` keeps one beside the data), never built in. */
-  PAYMENT_WEBHOOK_SECRET: z.string({ message: 'is required: the signing secret of the payment provider\'s webhook endpoint' }).min(24, 'must be at least 24 characters'),
+  PAYMENT_WEBHOOK_SECRET: z
+    .string({ message: "is required: the signing secret of the payment provider's webhook endpoint" })
+    .min(24, 'must be at least 24 characters'),
   /** How long one call to the provider may take before the SDK retries it (same idempotency key). */
   PAYMENT_TIMEOUT_MS: z.coerce.number().int().min(100).max(120_000).default(15_000),
-  START_LOCAL_FAKES: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
-  RUN_SCHEDULER: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
+  START_LOCAL_FAKES: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((v) => v === 'true'),
+  RUN_SCHEDULER: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((v) => v === 'true'),
   CLIENT_DIR: z.string().default('dist/client'),
   BCRYPT_COST: z.coerce.number().int().min(12).max(15).default(12),
   LOGIN_ATTEMPTS_PER_10_MIN: z.coerce.number().int().min(1).default(10),

@@ -21,9 +21,26 @@ import { userEntities } from './users';
 
 /** Every entity the data source knows, composed here at the top; each component's index.ts lists its own. */
 export const entities = [
-  ...organizationEntities, ...userEntities, ...authEntities, ...auditEntities, ...notificationEntities, ...routineEntities, ...fleetEntities, ...checkEntities,
-  ...holdEntities, ...incidentEntities, ...bookingEntities, ...calibrationEntities, Customer, RateCard, Rental,
-  DepositAuthorization, Invoice, InvoicePayment, DocumentCounter, PaymentEvent,
+  ...organizationEntities,
+  ...userEntities,
+  ...authEntities,
+  ...auditEntities,
+  ...notificationEntities,
+  ...routineEntities,
+  ...fleetEntities,
+  ...checkEntities,
+  ...holdEntities,
+  ...incidentEntities,
+  ...bookingEntities,
+  ...calibrationEntities,
+  Customer,
+  RateCard,
+  Rental,
+  DepositAuthorization,
+  Invoice,
+  InvoicePayment,
+  DocumentCounter,
+  PaymentEvent,
 ];
 
 /** Nestkeeper's database: the entities above over db/'s connection settings. */

@@ -58,7 +58,15 @@ async function supervise(config: Config) {
   onStop(async () => {
     stopping = true;
     const workers = Object.values(cluster.workers ?? {}).filter((w) => !!w);
-    await Promise.all(workers.map((w) => new Promise((resolve) => { w!.once('exit', resolve); w!.process.kill('SIGTERM'); })));
+    await Promise.all(
+      workers.map(
+        (w) =>
+          new Promise((resolve) => {
+            w!.once('exit', resolve);
+            w!.process.kill('SIGTERM');
+          }),
+      ),
+    );
     await fakes?.close();
   });
 }

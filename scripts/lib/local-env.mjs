@@ -19,7 +19,10 @@ export function localDataDir() {
   const tag = createHash('sha256').update(projectRoot).digest('hex').slice(0, 12);
   const fallback = path.join(fs.existsSync('/var/lib/postgresql') ? '/var/lib/postgresql' : os.tmpdir(), `nestkeeper-${tag}`);
   fs.mkdirSync(fallback, { recursive: true });
-  fs.writeFileSync(path.join(inCheckout, 'WHERE-THE-DATA-IS.txt'), `The database cluster lives in ${fallback} because the postgres user cannot reach this folder.\n`);
+  fs.writeFileSync(
+    path.join(inCheckout, 'WHERE-THE-DATA-IS.txt'),
+    `The database cluster lives in ${fallback} because the postgres user cannot reach this folder.\n`,
+  );
   return fallback;
 }
 

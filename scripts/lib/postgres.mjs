@@ -60,10 +60,24 @@ export function startCluster({ dataDir, port, log }) {
     const pwTmp = path.join(dataDir, '.initdb-pw');
     fs.writeFileSync(pwTmp, password);
     if (isRoot) execFileSync('chown', ['postgres:postgres', pwTmp]);
-    asServerUser('initdb', ['-D', pgData, '-U', 'postgres', '--auth-host=scram-sha-256', '--auth-local=peer', `--pwfile=${pwTmp}`, '-E', 'UTF8', '--locale=C.UTF-8']);
+    asServerUser('initdb', [
+      '-D',
+      pgData,
+      '-U',
+      'postgres',
+      '--auth-host=scram-sha-256',
+      '--auth-local=peer',
+      `--pwfile=${pwTmp}`,
+      '-E',
+      'UTF8',
+      '--locale=C.UTF-8',
+    ]);
     fs.rmSync(pwTmp);
   }
-  const status = spawnSync(isRoot ? 'runuser' : path.join(BIN, 'pg_ctl'), isRoot ? ['-u', 'postgres', '--', path.join(BIN, 'pg_ctl'), 'status', '-D', pgData] : ['status', '-D', pgData]);
+  const status = spawnSync(
+    isRoot ? 'runuser' : path.join(BIN, 'pg_ctl'),
+    isRoot ? ['-u', 'postgres', '--', path.join(BIN, 'pg_ctl'), 'status', '-D', pgData] : ['status', '-D', pgData],
+  );
   if (status.status !== 0) {
     const options = `-c listen_addresses=127.0.0.1 -p ${port} -k ${socketDir} -c fsync=${process.env.PG_FSYNC ?? 'on'}`;
     asServerUser('pg_ctl', ['start', '-w', '-t', '60', '-D', pgData, '-l', path.join(dataDir, 'postgres.log'), '-o', options]);

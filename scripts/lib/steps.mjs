@@ -44,7 +44,10 @@ export function ensureClientBuild() {
   const builtAt = fs.existsSync(built) ? fs.statSync(built).mtimeMs : 0;
   if (builtAt > Math.max(...sources.map(newestMtime))) return;
   log('Building the web client…');
-  const r = spawnSync(process.execPath, [path.join(projectRoot, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], { cwd: projectRoot, stdio: 'inherit' });
+  const r = spawnSync(process.execPath, [path.join(projectRoot, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], {
+    cwd: projectRoot,
+    stdio: 'inherit',
+  });
   if (r.status !== 0) throw new Error('The client build failed; see the output above.');
 }
 

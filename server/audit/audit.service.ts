@@ -14,7 +14,20 @@ export function recordAudit(
 }
 
 /** Several lines at once (one statement), e.g. one per item of a checkout. */
-export async function recordAudits(tx: Scoped, actor: Pick<Actor, 'userId'> | null, entries: { action: string; subject: { type: string; id: string }; details?: Record<string, unknown> }[]) {
+export async function recordAudits(
+  tx: Scoped,
+  actor: Pick<Actor, 'userId'> | null,
+  entries: { action: string; subject: { type: string; id: string }; details?: Record<string, unknown> }[],
+) {
   if (!entries.length) return;
-  await tx.insertMany(AuditEvent, entries.map((e) => ({ actorUserId: actor?.userId ?? null, action: e.action, subjectType: e.subject.type, subjectId: e.subject.id, details: e.details ?? {} })));
+  await tx.insertMany(
+    AuditEvent,
+    entries.map((e) => ({
+      actorUserId: actor?.userId ?? null,
+      action: e.action,
+      subjectType: e.subject.type,
+      subjectId: e.subject.id,
+      details: e.details ?? {},
+    })),
+  );
 }

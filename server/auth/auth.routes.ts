@@ -39,23 +39,40 @@ export function authRoutes(auth: AuthService, opts: { secureCookies: boolean; at
       handler: (_req, _res, next) => next(new AppError(429, 'rate_limited', 'Too many sign-in attempts; wait a few minutes and try again.')),
     }),
   );
-  endpoint(router, at, { method: 'post', path: '/login', summary: 'Sign in; returns a token and sets the session cookie', access: 'public', body: loginPayload }, async ({ body, res }) => {
-    const session = await auth.login(body.email, body.password);
-    startSession(res, session.token);
-    return session;
-  });
-  endpoint(router, at, { method: 'get', path: '/me', summary: 'The signed-in user and their organization', access: 'signed-in' }, ({ actor }) => auth.me(actor));
-  endpoint(router, at, { method: 'post', path: '/logout', summary: "Sign out: the caller's tokens stop working and the session cookie is cleared", access: 'if-signed-in' }, async ({ req, res }) => {
-    const caller = req.user as Actor | undefined;
-    if (caller) await auth.signOut(caller);
-    res.clearCookie(SESSION_COOKIE, { path: '/' });
-    res.clearCookie(CSRF_COOKIE, { path: '/' });
-    return undefined;
-  });
-  endpoint(router, at, { method: 'post', path: '/password', summary: 'Change your own password', access: 'signed-in', body: changeOwnPasswordPayload }, async ({ actor, body, res }) => {
-    // Older tokens stop working; this browser keeps going with a fresh one.
-    startSession(res, await auth.changeOwnPassword(actor, body.currentPassword, body.newPassword));
-    return undefined;
-  });
+  endpoint(
+    router,
+    at,
+    { method: 'post', path: '/login', summary: 'Sign in; returns a token and sets the session cookie', access: 'public', body: loginPayload },
+    async ({ body, res }) => {
+      const session = await auth.login(body.email, body.password);
+      startSession(res, session.token);
+      return session;
+    },
+  );
+  endpoint(router, at, { method: 'get', path: '/me', summary: 'The signed-in user and their organization', access: 'signed-in' }, ({ actor }) =>
+    auth.me(actor),
+  );
+  endpoint(
+    router,
+    at,
+    { method: 'post', path: '/logout', summary: "Sign out: the caller's tokens stop working and the session cookie is cleared", access: 'if-signed-in' },
+    async ({ req, res }) => {
+      const caller = req.user as Actor | undefined;
+      if (caller) await auth.signOut(caller);
+      res.clearCookie(SESSION_COOKIE, { path: '/' });
+      res.clearCookie(CSRF_COOKIE, { path: '/' });
+      return undefined;
+    },
+  );
+  endpoint(
+    router,
+    at,
+    { method: 'post', path: '/password', summary: 'Change your own password', access: 'signed-in', body: changeOwnPasswordPayload },
+    async ({ actor, body, res }) => {
+      // Older tokens stop working; this browser keeps going with a fresh one.
+      startSession(res, await auth.changeOwnPassword(actor, body.currentPassword, body.newPassword));
+      return undefined;
+    },
+  );
   return router;
 }

@@ -28,7 +28,12 @@ export function createPassport(db: DataSource, key: KeyObject): PassportStatic {
       (claims: TokenClaims & { exp?: unknown }, done: (err: unknown, user?: Actor | false) => void) => {
         if (typeof claims.exp !== 'number') return done(null, false);
         // A prepared statement: this runs on every request.
-        preparedQuery<{ role: Actor['role']; disabled: boolean; token_version: number }>(db, 'auth_user', `SELECT role, disabled, token_version FROM users WHERE id = $1 AND organization_id = $2`, [claims.sub, claims.org])
+        preparedQuery<{ role: Actor['role']; disabled: boolean; token_version: number }>(
+          db,
+          'auth_user',
+          `SELECT role, disabled, token_version FROM users WHERE id = $1 AND organization_id = $2`,
+          [claims.sub, claims.org],
+        )
           .then(([user]) => {
             if (!user || user.disabled || user.token_version !== claims.ver) return done(null, false);
             done(null, { userId: claims.sub, organizationId: claims.org, role: user.role });

@@ -41,7 +41,10 @@ export class BillingReportsService {
         [q.customerId ?? null, q.limit, q.offset],
       );
       return {
-        items: rows.map(({ total: _t, ...r }) => ({ ...r, authorizationCaptureBefore: r.authorizationCaptureBefore ? new Date(r.authorizationCaptureBefore).toISOString() : null })),
+        items: rows.map(({ total: _t, ...r }) => ({
+          ...r,
+          authorizationCaptureBefore: r.authorizationCaptureBefore ? new Date(r.authorizationCaptureBefore).toISOString() : null,
+        })),
         total: rows[0]?.total ?? 0,
       };
     });

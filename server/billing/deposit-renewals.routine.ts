@@ -38,29 +38,31 @@ export const depositRenewalsRoutine = (deposits: DepositsService): Routine => ({
     let unreachable = 0;
     for (const row of due) {
       // One rental's trouble (the provider down, say) must not stop the others; tomorrow's run tries again.
-      await db.transaction(async (manager) => {
-        const tx = new Scoped(manager, row.organization_id);
-        const rental = await lockRental(tx, row.rental_id);
-        const authorization = await tx.get(DepositAuthorization, { id: row.id }, 'That card authorization');
-        if (authorization.state !== 'authorized') return; // settled meanwhile
-        const result = await deposits.renew(tx, rental, authorization, todayIn(row.time_zone, now));
-        if (result.ok) {
-          renewed += 1;
-          return;
-        }
-        refused += 1;
-        await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), {
-          subject: `Deposit authorization not renewed: rental ${rental.number}`,
-          heading: `The card refused to renew the deposit authorization for rental ${rental.number}`,
-          paragraphs: [
-            `The authorization of ${formatMoney(authorization.amountMinor, rental.currency, 'en-GB')} lapses at ${authorization.captureBefore?.toISOString() ?? 'an unknown time'}; renewing it on the saved card failed: ${result.message}`,
-            'Ask the customer for another card, or settle the rental before the authorization lapses.',
-          ],
+      await db
+        .transaction(async (manager) => {
+          const tx = new Scoped(manager, row.organization_id);
+          const rental = await lockRental(tx, row.rental_id);
+          const authorization = await tx.get(DepositAuthorization, { id: row.id }, 'That card authorization');
+          if (authorization.state !== 'authorized') return; // settled meanwhile
+          const result = await deposits.renew(tx, rental, authorization, todayIn(row.time_zone, now));
+          if (result.ok) {
+            renewed += 1;
+            return;
+          }
+          refused += 1;
+          await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), {
+            subject: `Deposit authorization not renewed: rental ${rental.number}`,
+            heading: `The card refused to renew the deposit authorization for rental ${rental.number}`,
+            paragraphs: [
+              `The authorization of ${formatMoney(authorization.amountMinor, rental.currency, 'en-GB')} lapses at ${authorization.captureBefore?.toISOString() ?? 'an unknown time'}; renewing it on the saved card failed: ${result.message}`,
+              'Ask the customer for another card, or settle the rental before the authorization lapses.',
+            ],
+          });
+        })
+        .catch((err: Error) => {
+          unreachable += 1;
+          console.error(`[deposit-renewals] card authorization ${row.id}: ${err.message}`);
         });
-      }).catch((err: Error) => {
-        unreachable += 1;
-        console.error(`[deposit-renewals] card authorization ${row.id}: ${err.message}`);
-      });
     }
     return { due: due.length, renewed, refused, unreachable };
   },

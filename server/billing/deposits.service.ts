@@ -36,7 +36,8 @@ export class DepositsService {
       const rental = await lockRental(tx, rentalId);
       const booking = await loadBooking(tx, rental.bookingId);
       // Before handing over — or again while out, should the authorization have lapsed.
-      if (booking.state !== 'reserved' && booking.state !== 'out') throw ruleBroken('booking_state', `The deposit is taken before handing over; this rental is ${booking.state}.`);
+      if (booking.state !== 'reserved' && booking.state !== 'out')
+        throw ruleBroken('booking_state', `The deposit is taken before handing over; this rental is ${booking.state}.`);
       if (rental.depositMinor <= 0) throw ruleBroken('no_deposit', 'This rental has no deposit to authorize (the firm’s deposit policy gave nothing).');
       const rows = await tx.find(DepositAuthorization, { where: { rentalId } });
       if (depositState(rows).state === 'authorized') throw conflict(`The card is already authorized for ${money(rental, rental.depositMinor)}.`);
@@ -56,11 +57,23 @@ export class DepositsService {
       });
       await this.record(tx, rental, { kind: 'authorization', key, amountMinor: rental.depositMinor, initiatedBy: 'customer', outcome });
       if (outcome.ok) await rememberRentalCard(tx, rental.id, card);
-      await recordAudit(tx, actor, outcome.ok ? 'deposit.authorized' : 'deposit.declined', { type: 'rental', id: rentalId }, { amountMinor: rental.depositMinor, message: outcome.ok ? null : outcome.message });
+      await recordAudit(
+        tx,
+        actor,
+        outcome.ok ? 'deposit.authorized' : 'deposit.declined',
+        { type: 'rental', id: rentalId },
+        { amountMinor: rental.depositMinor, message: outcome.ok ? null : outcome.message },
+      );
       return { view: await loadRentalView(tx, rental, rentalMoney), declined: outcome.ok ? null : outcome.message };
     });
     // The declined attempt stays on record (committed above); the clerk is told why.
-    if (result.declined) throw new AppError(422, 'card_declined', `The card was declined: ${result.declined} Checkout stays blocked until the deposit is authorized; try another card.`, { rental: result.view });
+    if (result.declined)
+      throw new AppError(
+        422,
+        'card_declined',
+        `The card was declined: ${result.declined} Checkout stays blocked until the deposit is authorized; try another card.`,
+        { rental: result.view },
+      );
     return result.view;
   }
 
@@ -76,12 +89,26 @@ export class DepositsService {
       await this.assertSettleable(tx, rental);
       const { state, authorization } = depositState(await tx.find(DepositAuthorization, { where: { rentalId } }));
       // Once captured, a repeat (a double click, a retry after an error page) must not reach the card.
-      if (state === 'captured') throw conflict(`The deposit was already captured (${money(rental, authorization!.capturedMinor)}); anything further goes on the invoice.`);
+      if (state === 'captured')
+        throw conflict(`The deposit was already captured (${money(rental, authorization!.capturedMinor)}); anything further goes on the invoice.`);
       let fromAuthorization = 0;
-      if (state === 'authorized' && authorization?.paymentIntentId) fromAuthorization = await this.captureAuthorization(tx, authorization, rental.currency, Math.min(input.amountMinor, authorization.amountMinor), input.reason);
+      if (state === 'authorized' && authorization?.paymentIntentId)
+        fromAuthorization = await this.captureAuthorization(
+          tx,
+          authorization,
+          rental.currency,
+          Math.min(input.amountMinor, authorization.amountMinor),
+          input.reason,
+        );
       const above = input.amountMinor - fromAuthorization;
       if (above > 0) await this.chargeCard(tx, rental, above, input.reason, authorization);
-      await recordAudit(tx, actor, 'deposit.captured', { type: 'rental', id: rentalId }, { amountMinor: input.amountMinor, fromAuthorizationMinor: fromAuthorization, chargedMinor: above, reason: input.reason });
+      await recordAudit(
+        tx,
+        actor,
+        'deposit.captured',
+        { type: 'rental', id: rentalId },
+        { amountMinor: input.amountMinor, fromAuthorizationMinor: fromAuthorization, chargedMinor: above, reason: input.reason },
+      );
       return loadRentalView(tx, rental, rentalMoney);
     });
   }
@@ -148,11 +175,17 @@ export class DepositsService {
   private async captureAuthorization(tx: Scoped, authorization: DepositAuthorization, currency: string, amountMinor: number, reason: string): Promise<number> {
     try {
       const captured = await this.gateway.capture(authorization.paymentIntentId!, amountMinor, currency, `hold:${authorization.id}:capture`);
-      Object.assign(authorization, { state: 'captured', capturedMinor: captured.ok ? captured.capturedMinor : amountMinor, captureReason: reason, settledAt: new Date() });
+      Object.assign(authorization, {
+        state: 'captured',
+        capturedMinor: captured.ok ? captured.capturedMinor : amountMinor,
+        captureReason: reason,
+        settledAt: new Date(),
+      });
       await tx.save(DepositAuthorization, authorization);
       return amountMinor;
     } catch (err) {
-      if (!(err instanceof AppError && err.code === 'payment_refused') || (await this.gateway.retrieve(authorization.paymentIntentId!)).status !== 'canceled') throw err;
+      if (!(err instanceof AppError && err.code === 'payment_refused') || (await this.gateway.retrieve(authorization.paymentIntentId!)).status !== 'canceled')
+        throw err;
       Object.assign(authorization, { state: 'lapsed', settledAt: new Date() });
       await tx.save(DepositAuthorization, authorization);
       return 0;
@@ -162,12 +195,14 @@ export class DepositsService {
   private async assertSettleable(tx: Scoped, rental: RentalRecord) {
     const booking = await loadBooking(tx, rental.bookingId);
     if (booking.state !== 'returned') throw ruleBroken('booking_state', `Charges are taken at return; this rental is ${booking.state}.`);
-    if (await tx.count(Invoice, { rentalId: rental.id, kind: 'invoice' })) throw ruleBroken('already_invoiced', `Rental ${rental.number} is invoiced; correct it with a credit note.`);
+    if (await tx.count(Invoice, { rentalId: rental.id, kind: 'invoice' }))
+      throw ruleBroken('already_invoiced', `Rental ${rental.number} is invoiced; correct it with a credit note.`);
   }
 
   /** Charges the saved card at once (merchant-initiated); a decline is recorded and reported. */
   private async chargeCard(tx: Scoped, rental: RentalRecord, amountMinor: number, reason: string, authorization: DepositAuthorization | null) {
-    if (!rental.paymentMethodId) throw ruleBroken('no_card', `No card is saved for rental ${rental.number}: put ${money(rental, amountMinor)} on the invoice instead.`);
+    if (!rental.paymentMethodId)
+      throw ruleBroken('no_card', `No card is saved for rental ${rental.number}: put ${money(rental, amountMinor)} on the invoice instead.`);
     const charges = await tx.count(DepositAuthorization, { rentalId: rental.id, kind: 'charge' });
     const key = `rental:${rental.id}:charge:${authorization?.id ?? 'card'}:${charges + 1}`;
     const outcome = await this.gateway.confirmIntent({
@@ -184,7 +219,18 @@ export class DepositsService {
     await this.record(tx, rental, { kind: 'charge', key, amountMinor, initiatedBy: 'merchant', outcome, reason });
   }
 
-  private async record(tx: Scoped, rental: RentalRecord, r: { kind: DepositAuthorization['kind']; key: string; amountMinor: number; initiatedBy: DepositAuthorization['initiatedBy']; outcome: IntentOutcome; reason?: string }) {
+  private async record(
+    tx: Scoped,
+    rental: RentalRecord,
+    r: {
+      kind: DepositAuthorization['kind'];
+      key: string;
+      amountMinor: number;
+      initiatedBy: DepositAuthorization['initiatedBy'];
+      outcome: IntentOutcome;
+      reason?: string;
+    },
+  ) {
     const o = r.outcome;
     const existing = await tx.findOne(DepositAuthorization, { idempotencyKey: r.key });
     if (existing) return existing; // a replayed request: already on record

@@ -5,7 +5,11 @@ import type { Invoice, InvoicePayment } from './invoice.entity';
  * Invoices of a rental, each with what credit notes took off it and what was
  * received against it; what is outstanding follows from those.
  */
-export function invoiceSummaries(invoices: Invoice[], customerCompany: string, payments: Pick<InvoicePayment, 'invoiceId' | 'amountMinor'>[]): InvoiceSummary[] {
+export function invoiceSummaries(
+  invoices: Invoice[],
+  customerCompany: string,
+  payments: Pick<InvoicePayment, 'invoiceId' | 'amountMinor'>[],
+): InvoiceSummary[] {
   const byId = new Map(invoices.map((i) => [i.id, i]));
   return invoices.map((i) => {
     const credits = invoices.filter((c) => c.correctsInvoiceId === i.id);

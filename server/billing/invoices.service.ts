@@ -36,7 +36,8 @@ export class InvoicesService {
       const booking = await loadBooking(tx, rental.bookingId);
       if (booking.state !== 'returned') throw ruleBroken('booking_state', `The invoice is issued once the kit is back; this rental is ${booking.state}.`);
       const view = await loadRentalView(tx, rental, rentalMoney);
-      if (view.deposit.state === 'authorized') throw ruleBroken('deposit_unsettled', 'Capture or release the deposit’s card authorization first, so the invoice can show what was taken.');
+      if (view.deposit.state === 'authorized')
+        throw ruleBroken('deposit_unsettled', 'Capture or release the deposit’s card authorization first, so the invoice can show what was taken.');
       const unpriced = view.charges.filter((c) => c.amountMinor === null);
       if (unpriced.length) throw ruleBroken('charge_unpriced', `Set a charge (or 0) for: ${unpriced.map((c) => c.assetTag).join(', ')}.`);
       const customer = await getCustomer(tx, rental.customerId);
@@ -70,7 +71,9 @@ export class InvoicesService {
       const left = invoice.subtotalMinor - credited;
       const amount = input.amountMinor ?? left;
       if (amount <= 0 || amount > left) {
-        throw ruleBroken('credit_too_large', `At most ${formatMoney(left, invoice.currency, 'en-GB')} (net) of invoice ${invoice.number} is left to credit.`, { leftMinor: left });
+        throw ruleBroken('credit_too_large', `At most ${formatMoney(left, invoice.currency, 'en-GB')} (net) of invoice ${invoice.number} is left to credit.`, {
+          leftMinor: left,
+        });
       }
       const tax = taxMinor(amount, invoice.taxRateBasisPoints);
       const customer = await getCustomer(tx, invoice.customerId);
@@ -81,7 +84,9 @@ export class InvoicesService {
         customer,
         correctsInvoiceId: invoice.id,
         currency: invoice.currency,
-        lines: [{ kind: 'credit', description: `Credit against invoice ${invoice.number}: ${input.reason}`, quantity: 1, unitMinor: amount, amountMinor: amount }],
+        lines: [
+          { kind: 'credit', description: `Credit against invoice ${invoice.number}: ${input.reason}`, quantity: 1, unitMinor: amount, amountMinor: amount },
+        ],
         subtotalMinor: amount,
         taxRateBasisPoints: invoice.taxRateBasisPoints,
         taxMinor: tax,
@@ -99,12 +104,28 @@ export class InvoicesService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const invoice = await tx.get(Invoice, { id: invoiceId, kind: 'invoice' }, 'That invoice');
       await lockRental(tx, invoice.rentalId);
-      const { outstandingMinor } = (await this.view(tx, invoice));
+      const { outstandingMinor } = await this.view(tx, invoice);
       if (input.amountMinor > outstandingMinor) {
-        throw ruleBroken('overpaid', `Invoice ${invoice.number} has ${formatMoney(outstandingMinor, invoice.currency, 'en-GB')} outstanding; record at most that.`, { outstandingMinor });
+        throw ruleBroken(
+          'overpaid',
+          `Invoice ${invoice.number} has ${formatMoney(outstandingMinor, invoice.currency, 'en-GB')} outstanding; record at most that.`,
+          { outstandingMinor },
+        );
       }
-      const payment = await tx.insert(InvoicePayment, { invoiceId, amountMinor: input.amountMinor, receivedOn: input.receivedOn, reference: input.reference, recordedBy: actor.userId });
-      await recordAudit(tx, actor, 'invoice.payment_recorded', { type: 'invoice', id: invoiceId }, { paymentId: payment.id, amountMinor: input.amountMinor, receivedOn: input.receivedOn, reference: input.reference });
+      const payment = await tx.insert(InvoicePayment, {
+        invoiceId,
+        amountMinor: input.amountMinor,
+        receivedOn: input.receivedOn,
+        reference: input.reference,
+        recordedBy: actor.userId,
+      });
+      await recordAudit(
+        tx,
+        actor,
+        'invoice.payment_recorded',
+        { type: 'invoice', id: invoiceId },
+        { paymentId: payment.id, amountMinor: input.amountMinor, receivedOn: input.receivedOn, reference: input.reference },
+      );
       return this.view(tx, invoice);
     });
   }
@@ -141,7 +162,23 @@ export class InvoicesService {
   async csv(actor: Actor) {
     const { items } = await this.list(actor, { limit: 100_000, offset: 0 } as z.infer<typeof invoiceListQuery>);
     return toCsv(
-      ['number', 'kind', 'issued_on', 'customer', 'corrects', 'currency', 'subtotal_minor', 'tax_minor', 'total_minor', 'deposit_captured_minor', 'card_charged_minor', 'balance_minor', 'credited_minor', 'received_minor', 'outstanding_minor'],
+      [
+        'number',
+        'kind',
+        'issued_on',
+        'customer',
+        'corrects',
+        'currency',
+        'subtotal_minor',
+        'tax_minor',
+        'total_minor',
+        'deposit_captured_minor',
+        'card_charged_minor',
+        'balance_minor',
+        'credited_minor',
+        'received_minor',
+        'outstanding_minor',
+      ],
       items.map((i) => [
         i.number,
         i.kind,
@@ -168,19 +205,35 @@ export class InvoicesService {
     return kind === 'invoice' ? `${year}-${padded(n)}` : `CN-${year}-${padded(n)}`;
   }
 
-  private async write(tx: Scoped, actor: Actor, v: Omit<Invoice, 'id' | 'organizationId' | 'issuedOn' | 'issuedAt' | 'issuedBy' | 'customer' | 'customerId' | 'issuer'> & { customer: CustomerRecord }) {
+  private async write(
+    tx: Scoped,
+    actor: Actor,
+    v: Omit<Invoice, 'id' | 'organizationId' | 'issuedOn' | 'issuedAt' | 'issuedBy' | 'customer' | 'customerId' | 'issuer'> & { customer: CustomerRecord },
+  ) {
     const ctx = await loadOrgContext(tx);
     const { customer, ...rest } = v;
     const invoice = await tx.insert(Invoice, {
       ...rest,
       customerId: customer.id,
-      customer: { company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail, address: customer.address, taxNumber: customer.taxNumber },
+      customer: {
+        company: customer.company,
+        billingContact: customer.billingContact,
+        billingEmail: customer.billingEmail,
+        address: customer.address,
+        taxNumber: customer.taxNumber,
+      },
       issuer: ctx.issuer,
       issuedOn: ctx.today,
       issuedAt: new Date(),
       issuedBy: actor.userId,
     });
-    await recordAudit(tx, actor, v.kind === 'invoice' ? 'invoice.issued' : 'credit_note.issued', { type: 'invoice', id: invoice.id }, { number: invoice.number, totalMinor: invoice.totalMinor, rentalId: invoice.rentalId });
+    await recordAudit(
+      tx,
+      actor,
+      v.kind === 'invoice' ? 'invoice.issued' : 'credit_note.issued',
+      { type: 'invoice', id: invoice.id },
+      { number: invoice.number, totalMinor: invoice.totalMinor, rentalId: invoice.rentalId },
+    );
     const view = await this.view(tx, invoice);
     const title = v.kind === 'invoice' ? `Invoice ${view.number}` : `Credit note ${view.number}`;
     await enqueueMail(
@@ -191,10 +244,20 @@ export class InvoicesService {
         heading: title,
         paragraphs: [
           `${customer.billingContact ? `Dear ${customer.billingContact}, please` : 'Please'} find ${v.kind === 'invoice' ? 'our invoice' : 'our credit note'} ${view.number} attached (${formatMoney(view.totalMinor, view.currency, 'en-GB')}).`,
-          v.kind === 'invoice' ? (view.balanceMinor > 0 ? `Balance due: ${formatMoney(view.balanceMinor, view.currency, 'en-GB')}.` : 'Nothing is left to pay.') : `It corrects invoice ${view.correctsNumber}: ${view.reason}`,
+          v.kind === 'invoice'
+            ? view.balanceMinor > 0
+              ? `Balance due: ${formatMoney(view.balanceMinor, view.currency, 'en-GB')}.`
+              : 'Nothing is left to pay.'
+            : `It corrects invoice ${view.correctsNumber}: ${view.reason}`,
         ],
       },
-      [{ fileName: `${v.kind === 'invoice' ? 'invoice' : 'credit-note'}-${view.number}.pdf`, contentType: 'application/pdf', content: (await this.render(tx, view)).pdf }],
+      [
+        {
+          fileName: `${v.kind === 'invoice' ? 'invoice' : 'credit-note'}-${view.number}.pdf`,
+          contentType: 'application/pdf',
+          content: (await this.render(tx, view)).pdf,
+        },
+      ],
     );
     return view;
   }
@@ -204,7 +267,13 @@ export class InvoicesService {
     if (!rows.length) return [];
     const siblings = await tx.find(Invoice, { where: { rentalId: In([...new Set(rows.map((r) => r.rentalId))]) } });
     const payments = await tx.find(InvoicePayment, { where: { invoiceId: In(siblings.map((i) => i.id)) } });
-    return rows.map((r) => invoiceSummaries(siblings.filter((i) => i.rentalId === r.rentalId), r.customer.company, payments).find((s) => s.id === r.id)!);
+    return rows.map((r) =>
+      invoiceSummaries(
+        siblings.filter((i) => i.rentalId === r.rentalId),
+        r.customer.company,
+        payments,
+      ).find((s) => s.id === r.id)!,
+    );
   }
 
   private async view(tx: Scoped, invoice: Invoice): Promise<InvoiceView> {
@@ -212,7 +281,13 @@ export class InvoicesService {
     const payments = await tx.find(InvoicePayment, { where: { invoiceId: invoice.id }, order: { receivedOn: 'ASC', createdAt: 'ASC' } });
     return {
       ...summary,
-      payments: payments.map((p) => ({ id: p.id, amountMinor: p.amountMinor, receivedOn: p.receivedOn, reference: p.reference, createdAt: p.createdAt.toISOString() })),
+      payments: payments.map((p) => ({
+        id: p.id,
+        amountMinor: p.amountMinor,
+        receivedOn: p.receivedOn,
+        reference: p.reference,
+        createdAt: p.createdAt.toISOString(),
+      })),
       issuer: invoice.issuer,
       lines: invoice.lines,
       taxRateBasisPoints: invoice.taxRateBasisPoints,

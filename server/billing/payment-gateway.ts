@@ -5,7 +5,16 @@ import { AppError } from '../http/errors';
 
 /** What Nestkeeper needs from a PaymentIntent. */
 export type IntentOutcome =
-  | { ok: true; id: string; status: string; amountMinor: number; capturedMinor: number; captureBefore: Date | null; cardBrand: string | null; cardLast4: string | null }
+  | {
+      ok: true;
+      id: string;
+      status: string;
+      amountMinor: number;
+      capturedMinor: number;
+      captureBefore: Date | null;
+      cardBrand: string | null;
+      cardLast4: string | null;
+    }
   | { ok: false; id: string | null; message: string; declineCode: string | null };
 
 const cardOf = (charge: Stripe.Charge | string | null) => (charge && typeof charge === 'object' ? charge.payment_method_details?.card : undefined);
@@ -33,20 +42,36 @@ function outcome(pi: Stripe.PaymentIntent): IntentOutcome {
 function providerAmount(minor: number, currency: string): number {
   const step = providerStepMinor(currency);
   if (minor % step !== 0) {
-    throw new AppError(422, 'amount_not_accepted', `The payment provider takes ${currency} in steps of ${formatMoney(step, currency, 'en-GB')}; ${formatMoney(minor, currency, 'en-GB')} is not one. Round it to a step.`, { stepMinor: step });
+    throw new AppError(
+      422,
+      'amount_not_accepted',
+      `The payment provider takes ${currency} in steps of ${formatMoney(step, currency, 'en-GB')}; ${formatMoney(minor, currency, 'en-GB')} is not one. Round it to a step.`,
+      { stepMinor: step },
+    );
   }
   return toProviderAmount(minor, currency);
 }
 
 /** The provider could not be reached or failed on its side: nothing to show the customer, try again (same key, no double charge). */
 const unavailable = (err: Error) =>
-  new AppError(502, 'payment_unavailable', `The payment provider did not answer (${err.message}). Try again: a repeated request is recognised, so nothing is charged twice.`);
+  new AppError(
+    502,
+    'payment_unavailable',
+    `The payment provider did not answer (${err.message}). Try again: a repeated request is recognised, so nothing is charged twice.`,
+  );
 
 /** The SDK's errors as the API's: outages as 502, a clashing replay as 409, the rest as 422 naming the provider's words. */
 function providerError(err: unknown): unknown {
-  if (err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError || (err instanceof Stripe.errors.StripeError && (err.statusCode ?? 0) >= 500)) return unavailable(err);
-  if (err instanceof Stripe.errors.StripeIdempotencyError) return new AppError(409, 'conflict', 'A different request with the same purpose is already under way at the payment provider; reload and try again.');
-  if (err instanceof Stripe.errors.StripeError) return new AppError(422, 'payment_refused', `The payment provider refused: ${err.message}`, { providerCode: err.code ?? null });
+  if (
+    err instanceof Stripe.errors.StripeConnectionError ||
+    err instanceof Stripe.errors.StripeAPIError ||
+    (err instanceof Stripe.errors.StripeError && (err.statusCode ?? 0) >= 500)
+  )
+    return unavailable(err);
+  if (err instanceof Stripe.errors.StripeIdempotencyError)
+    return new AppError(409, 'conflict', 'A different request with the same purpose is already under way at the payment provider; reload and try again.');
+  if (err instanceof Stripe.errors.StripeError)
+    return new AppError(422, 'payment_refused', `The payment provider refused: ${err.message}`, { providerCode: err.code ?? null });
   return err;
 }
 
@@ -65,7 +90,12 @@ export class PaymentGateway {
 
   /** The provider's customer record for one of our customers. */
   async ensureCustomer(customer: { id: string; company: string; billingEmail: string }): Promise<string> {
-    const created = await call(() => this.client.customers.create({ name: customer.company, email: customer.billingEmail, metadata: { nestkeeperCustomerId: customer.id } }, { idempotencyKey: `customer:${customer.id}` }));
+    const created = await call(() =>
+      this.client.customers.create(
+        { name: customer.company, email: customer.billingEmail, metadata: { nestkeeperCustomerId: customer.id } },
+        { idempotencyKey: `customer:${customer.id}` },
+      ),
+    );
     return created.id;
   }
 
@@ -76,7 +106,17 @@ export class PaymentGateway {
   }
 
   /** Authorizes the card (manual capture) or, with `capture: 'automatic'`, charges at once. Declines come back as `ok: false`. */
-  async confirmIntent(p: { amountMinor: number; currency: string; customer: string; paymentMethod: string; capture: 'manual' | 'automatic'; offSession: boolean; description: string; metadata: Record<string, string>; key: string }): Promise<IntentOutcome> {
+  async confirmIntent(p: {
+    amountMinor: number;
+    currency: string;
+    customer: string;
+    paymentMethod: string;
+    capture: 'manual' | 'automatic';
+    offSession: boolean;
+    description: string;
+    metadata: Record<string, string>;
+    key: string;
+  }): Promise<IntentOutcome> {
     const create = () =>
       this.client.paymentIntents.create(
         {
@@ -97,18 +137,25 @@ export class PaymentGateway {
       return outcome(await create());
     } catch (err) {
       // A declined card is an answer, not a failure: it is recorded and shown.
-      if (err instanceof Stripe.errors.StripeCardError) return { ok: false, id: err.payment_intent?.id ?? null, message: err.message, declineCode: err.decline_code ?? null };
+      if (err instanceof Stripe.errors.StripeCardError)
+        return { ok: false, id: err.payment_intent?.id ?? null, message: err.message, declineCode: err.decline_code ?? null };
       throw providerError(err);
     }
   }
 
   async capture(intentId: string, amountMinor: number, currency: string, key: string): Promise<IntentOutcome> {
     const amount = providerAmount(amountMinor, currency);
-    return outcome(await call(() => this.client.paymentIntents.capture(intentId, { amount_to_capture: amount, expand: ['latest_charge'] }, { idempotencyKey: key })));
+    return outcome(
+      await call(() => this.client.paymentIntents.capture(intentId, { amount_to_capture: amount, expand: ['latest_charge'] }, { idempotencyKey: key })),
+    );
   }
 
   async cancel(intentId: string, key: string): Promise<IntentOutcome> {
-    return outcome(await call(() => this.client.paymentIntents.cancel(intentId, { cancellation_reason: 'requested_by_customer', expand: ['latest_charge'] }, { idempotencyKey: key })));
+    return outcome(
+      await call(() =>
+        this.client.paymentIntents.cancel(intentId, { cancellation_reason: 'requested_by_customer', expand: ['latest_charge'] }, { idempotencyKey: key }),
+      ),
+    );
   }
 
   async retrieve(intentId: string): Promise<Stripe.PaymentIntent> {

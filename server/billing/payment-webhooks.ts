@@ -34,7 +34,11 @@ async function providerView(db: DataSource, gateway: PaymentGateway, event: Stri
  * one we did not see captured (our call timed out) was captured. Its word is
  * what it answers when asked (`current`), not what the event body claims.
  */
-async function apply(manager: EntityManager, event: Stripe.Event, current: Stripe.PaymentIntent | null): Promise<{ organizationId: string | null; outcome: string }> {
+async function apply(
+  manager: EntityManager,
+  event: Stripe.Event,
+  current: Stripe.PaymentIntent | null,
+): Promise<{ organizationId: string | null; outcome: string }> {
   if (!event.type.startsWith('payment_intent.')) return { organizationId: null, outcome: 'not used' };
   const pi = event.data.object as Stripe.PaymentIntent;
   const found = await manager.findOne(DepositAuthorization, { where: { paymentIntentId: pi.id } });
@@ -47,7 +51,10 @@ async function apply(manager: EntityManager, event: Stripe.Event, current: Strip
   const claim = CLAIMS[event.type];
   if (!claim || authorization.state !== 'authorized') return { organizationId: authorization.organizationId, outcome: 'already up to date' };
   if (current?.status !== claim) {
-    return { organizationId: authorization.organizationId, outcome: `not confirmed: the provider says ${pi.id} is ${current?.status ?? 'unknown'}, not ${claim}; nothing changed` };
+    return {
+      organizationId: authorization.organizationId,
+      outcome: `not confirmed: the provider says ${pi.id} is ${current?.status ?? 'unknown'}, not ${claim}; nothing changed`,
+    };
   }
   if (claim === 'canceled') {
     Object.assign(authorization, { state: 'lapsed', settledAt: new Date() });
@@ -63,7 +70,12 @@ async function apply(manager: EntityManager, event: Stripe.Event, current: Strip
     return { organizationId: authorization.organizationId, outcome: `authorization ${authorization.id} lapsed` };
   }
   if (authorization.kind === 'authorization') {
-    Object.assign(authorization, { state: 'captured', capturedMinor: fromProviderAmount(current.amount_received, current.currency), captureReason: 'captured at the provider; its reply to us was lost', settledAt: new Date() });
+    Object.assign(authorization, {
+      state: 'captured',
+      capturedMinor: fromProviderAmount(current.amount_received, current.currency),
+      captureReason: 'captured at the provider; its reply to us was lost',
+      settledAt: new Date(),
+    });
     await tx.save(DepositAuthorization, authorization);
     return { organizationId: authorization.organizationId, outcome: `authorization ${authorization.id} captured (${current.amount_received})` };
   }
@@ -77,7 +89,12 @@ async function apply(manager: EntityManager, event: Stripe.Event, current: Strip
  */
 export function paymentWebhookRoutes(db: DataSource, gateway: PaymentGateway, secret: string): Router {
   const router = Router();
-  documentedEndpoints.push({ method: 'post', path: '/api/webhooks/payments', summary: 'Payment provider events (signed; verified with the SDK)', access: 'public' });
+  documentedEndpoints.push({
+    method: 'post',
+    path: '/api/webhooks/payments',
+    summary: 'Payment provider events (signed; verified with the SDK)',
+    access: 'public',
+  });
   router.post('/api/webhooks/payments', express.raw({ type: () => true, limit: '1mb' }), async (req, res, next) => {
     try {
       let event: Stripe.Event;
@@ -88,7 +105,10 @@ export function paymentWebhookRoutes(db: DataSource, gateway: PaymentGateway, se
       }
       const current = await providerView(db, gateway, event);
       const result = await db.transaction(async (manager) => {
-        const inserted = await manager.query(`INSERT INTO payment_events (event_id, type, outcome) VALUES ($1, $2, 'received') ON CONFLICT (event_id) DO NOTHING RETURNING event_id`, [event.id, event.type]);
+        const inserted = await manager.query(
+          `INSERT INTO payment_events (event_id, type, outcome) VALUES ($1, $2, 'received') ON CONFLICT (event_id) DO NOTHING RETURNING event_id`,
+          [event.id, event.type],
+        );
         if (!inserted.length) return { duplicate: true };
         const { organizationId, outcome } = await apply(manager, event, current);
         await manager.update(PaymentEvent, { eventId: event.id }, { organizationId, outcome });

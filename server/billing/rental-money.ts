@@ -22,7 +22,11 @@ export const rentalMoney: RentalMoney = {
     const deposit = depositState(authorizations);
     const sum = (kind: DepositAuthorization['kind']) => authorizations.filter((a) => a.kind === kind).reduce((s, a) => s + a.capturedMinor, 0);
     return {
-      deposit: { state: deposit.state, authorization: deposit.authorization ? authorizationView(deposit.authorization) : null, authorizations: authorizations.map(authorizationView) },
+      deposit: {
+        state: deposit.state,
+        authorization: deposit.authorization ? authorizationView(deposit.authorization) : null,
+        authorizations: authorizations.map(authorizationView),
+      },
       depositCapturedMinor: sum('authorization'),
       cardChargedMinor: sum('charge'),
       invoices: invoiceSummaries(invoices, rental.customerCompany, payments),

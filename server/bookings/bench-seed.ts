@@ -12,17 +12,26 @@ export async function countBookings(client: pg.ClientBase, organizationId: strin
  * Set-based SQL inside the caller's transaction: a few statements, not a query per row.
  */
 export async function seedBenchBookings(client: pg.ClientBase, organizationId: string, createdBy: string) {
-  await client.query(`
+  await client.query(
+    `
     CREATE TEMP TABLE plan ON COMMIT DROP AS
     SELECT gen_random_uuid() AS booking_id, a.id AS asset_id,
            current_date - 700 + g.k * 100 + (a.rn % 30)::int AS starts_on,
            current_date - 700 + g.k * 100 + (a.rn % 30)::int + 4 + ((a.rn + g.k) % 20)::int AS ends_on
       FROM (SELECT id, row_number() OVER (ORDER BY asset_tag) AS rn FROM assets WHERE organization_id = $1) a
-      CROSS JOIN generate_series(0, 9) AS g(k)`, [organizationId]);
-  await client.query(`
+      CROSS JOIN generate_series(0, 9) AS g(k)`,
+    [organizationId],
+  );
+  await client.query(
+    `
     INSERT INTO bookings (id, organization_id, starts_on, ends_on, state, purpose, created_by, created_at, updated_at)
-    SELECT booking_id, $1, starts_on, ends_on, CASE WHEN ends_on < current_date THEN 'returned' ELSE 'reserved' END, 'internal', $2, now(), now() FROM plan`, [organizationId, createdBy]);
-  await client.query(`
+    SELECT booking_id, $1, starts_on, ends_on, CASE WHEN ends_on < current_date THEN 'returned' ELSE 'reserved' END, 'internal', $2, now(), now() FROM plan`,
+    [organizationId, createdBy],
+  );
+  await client.query(
+    `
     INSERT INTO booking_items (organization_id, booking_id, asset_id, starts_on, ends_on, active)
-    SELECT $1, booking_id, asset_id, starts_on, ends_on, ends_on >= current_date FROM plan`, [organizationId]);
+    SELECT $1, booking_id, asset_id, starts_on, ends_on, ends_on >= current_date FROM plan`,
+    [organizationId],
+  );
 }

@@ -8,7 +8,15 @@ const TIP_NOT_VALIDATED = (a: string) => `(${a}.type = 'tip' AND EXISTS (
                     WHERE fc.organization_id = ${a}.organization_id AND fc.asset_id = ${a}.id AND fc.kind = 'tip_validation' AND fc.position = pos.position
                     ORDER BY fc.performed_at DESC, fc.created_at DESC LIMIT 1), 'none') <> 'pass'))`;
 
-export type ItemFacts = { assetId: string; assetTag: string; type: AssetType; status: AssetStatus; calibrationRequired: boolean; dueOn: string | null; tipValidated: boolean };
+export type ItemFacts = {
+  assetId: string;
+  assetTag: string;
+  type: AssetType;
+  status: AssetStatus;
+  calibrationRequired: boolean;
+  dueOn: string | null;
+  tipValidated: boolean;
+};
 
 /** What the booking rule (shared/bookings/rules.ts) needs to know of each item, in one query. */
 export function itemFacts(tx: Scoped, assetIds: string[]) {

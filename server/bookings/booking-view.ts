@@ -10,7 +10,10 @@ type BookedItem = { bookingId: string; id: string; assetTag: string; type: Asset
 async function bookingRentals(tx: Scoped, bookings: Pick<Booking, 'rentalId'>[]): Promise<Map<string, RentalLabel>> {
   const ids = [...new Set(bookings.map((b) => b.rentalId).filter((id): id is string => !!id))];
   if (!ids.length) return new Map();
-  const rows = await tx.sql<RentalLabel>(`SELECT r.id, r.number, c.company AS "customerCompany" FROM rentals r JOIN customers c ON c.id = r.customer_id WHERE r.organization_id = $1 AND r.id = ANY($2)`, [ids]);
+  const rows = await tx.sql<RentalLabel>(
+    `SELECT r.id, r.number, c.company AS "customerCompany" FROM rentals r JOIN customers c ON c.id = r.customer_id WHERE r.organization_id = $1 AND r.id = ANY($2)`,
+    [ids],
+  );
   return new Map(rows.map((r) => [r.id, r]));
 }
 
@@ -55,7 +58,16 @@ const bookingView = (b: Booking, items: BookedItem[], rentals: Map<string, Renta
 
 /** Views of booking rows loaded with their job and kit: items and rental labels in one query each. */
 export async function bookingViews(tx: Scoped, rows: Booking[]): Promise<BookingView[]> {
-  const items = await bookingAssets(tx, rows.map((r) => r.id));
+  const items = await bookingAssets(
+    tx,
+    rows.map((r) => r.id),
+  );
   const rentals = await bookingRentals(tx, rows);
-  return rows.map((b) => bookingView(b, items.filter((i) => i.bookingId === b.id), rentals));
+  return rows.map((b) =>
+    bookingView(
+      b,
+      items.filter((i) => i.bookingId === b.id),
+      rentals,
+    ),
+  );
 }

@@ -49,7 +49,12 @@ export class BookingsService {
 
   list(actor: Actor, q: z.infer<typeof bookingListQuery>): Promise<Page<BookingView>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
-      const qb = tx.select(Booking, 'b').leftJoinAndSelect('b.job', 'j').leftJoinAndSelect('b.kit', 'k').orderBy('b.starts_on', 'ASC').addOrderBy('b.created_at', 'ASC');
+      const qb = tx
+        .select(Booking, 'b')
+        .leftJoinAndSelect('b.job', 'j')
+        .leftJoinAndSelect('b.kit', 'k')
+        .orderBy('b.starts_on', 'ASC')
+        .addOrderBy('b.created_at', 'ASC');
       if (q.from) qb.andWhere('b.ends_on >= :from', { from: q.from });
       if (q.to) qb.andWhere('b.starts_on <= :to', { to: q.to });
       if (q.state?.length) qb.andWhere('b.state IN (:...states)', { states: q.state });
@@ -62,6 +67,8 @@ export class BookingsService {
   }
 
   availability(actor: Actor, q: z.infer<typeof availabilityQuery>) {
-    return readInOrganization(this.db, actor.organizationId, async (tx) => listReply(await availableAssets(tx, { type: q.type, startsOn: q.startsOn, endsOn: q.endsOn, limit: q.limit })));
+    return readInOrganization(this.db, actor.organizationId, async (tx) =>
+      listReply(await availableAssets(tx, { type: q.type, startsOn: q.startsOn, endsOn: q.endsOn, limit: q.limit })),
+    );
   }
 }

@@ -35,7 +35,16 @@ export class CalendarService {
     const ctx = await loadOrgContext(tx);
     const from = addDays(ctx.today, -90);
     const to = addDays(ctx.today, 365);
-    const bookings = await tx.sql<{ id: string; starts_on: string; ends_on: string; state: string; reference: string | null; customer_name: string | null; tags: string; kit_name: string | null }>(
+    const bookings = await tx.sql<{
+      id: string;
+      starts_on: string;
+      ends_on: string;
+      state: string;
+      reference: string | null;
+      customer_name: string | null;
+      tags: string;
+      kit_name: string | null;
+    }>(
       `SELECT b.id, to_char(b.starts_on, 'YYYY-MM-DD') AS starts_on, to_char(b.ends_on, 'YYYY-MM-DD') AS ends_on, b.state,
               j.reference, j.customer_name, k.name AS kit_name, string_agg(a.asset_tag, ', ' ORDER BY a.asset_tag) AS tags
          FROM bookings b LEFT JOIN jobs j ON j.id = b.job_id LEFT JOIN kits k ON k.id = b.kit_id
@@ -49,7 +58,11 @@ export class CalendarService {
         WHERE organization_id = $1 AND calibration_required AND status <> 'retired' AND due_on BETWEEN $2 AND $3`,
       [from, to],
     );
-    const cal = ical({ name: `Nestkeeper — ${ctx.name}`, method: ICalCalendarMethod.PUBLISH, prodId: { company: 'Nestkeeper', product: 'bookings', language: 'EN' } });
+    const cal = ical({
+      name: `Nestkeeper — ${ctx.name}`,
+      method: ICalCalendarMethod.PUBLISH,
+      prodId: { company: 'Nestkeeper', product: 'bookings', language: 'EN' },
+    });
     // All-day events: DTEND is the day after the last day (RFC 5545 §3.6.1).
     const day = (d: string) => new Date(`${d}T00:00:00Z`);
     for (const b of bookings) {
@@ -64,7 +77,13 @@ export class CalendarService {
       });
     }
     for (const d of due) {
-      cal.createEvent({ id: `due-${d.id}-${d.due_on}@nestkeeper`, start: day(d.due_on), end: day(addDays(d.due_on, 1)), allDay: true, summary: `Calibration due: ${d.asset_tag}` });
+      cal.createEvent({
+        id: `due-${d.id}-${d.due_on}@nestkeeper`,
+        start: day(d.due_on),
+        end: day(addDays(d.due_on, 1)),
+        allDay: true,
+        summary: `Calibration due: ${d.asset_tag}`,
+      });
     }
     return cal.toString();
   }

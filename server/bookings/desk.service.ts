@@ -37,7 +37,11 @@ export class DeskService {
       // Every upcoming item's facts in one query, judged per booking by the booking rule.
       const facts = await itemFacts(tx, [...new Set(upcoming.flatMap((b) => b.assetIds))]);
       const blocked = upcoming.flatMap((b) => {
-        const problems = refusedItems(facts.filter((f) => b.assetIds.includes(f.assetId)), b.endsOn, b.purpose);
+        const problems = refusedItems(
+          facts.filter((f) => b.assetIds.includes(f.assetId)),
+          b.endsOn,
+          b.purpose,
+        );
         return problems.length ? [{ ...b, blocked: problems }] : [];
       });
       return { today, checkouts, returns, late, blocked };
@@ -48,7 +52,7 @@ export class DeskService {
   mine(actor: Actor): Promise<MyKitView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const { today } = await loadOrgContext(tx);
-      const mine = "(b.taken_by_user_id = :p0 OR j.lead_technician_id = :p0) AND b.ends_on >= :p1";
+      const mine = '(b.taken_by_user_id = :p0 OR j.lead_technician_id = :p0) AND b.ends_on >= :p1';
       const [now, next] = await Promise.all([
         this.views(tx, `${mine} AND b.state = 'out'`, [actor.userId, '0001-01-01']),
         this.views(tx, `${mine} AND b.state = 'reserved'`, [actor.userId, today]),

@@ -35,15 +35,28 @@ export class HandoverService {
       const assets = await this.walk(tx, booking, input.checklist);
       const taker = await this.counterpart(tx, input.counterpart);
       const absent = input.checklist.filter((l) => !l.present);
-      if (absent.length) throw ruleBroken('checkout_incomplete', `Not here: ${tags(assets, absent)}. Find them, or take them off the booking, before handing over.`, { missing: absent.map((l) => l.assetId) });
+      if (absent.length)
+        throw ruleBroken('checkout_incomplete', `Not here: ${tags(assets, absent)}. Find them, or take them off the booking, before handing over.`, {
+          missing: absent.map((l) => l.assetId),
+        });
       const damaged = input.checklist.filter((l) => l.condition === 'damaged');
-      if (damaged.length) throw ruleBroken('checkout_damaged', `Damaged: ${tags(assets, damaged)}. Report the damage (the item goes on hold) and book an alternative.`, { damaged: damaged.map((l) => l.assetId) });
+      if (damaged.length)
+        throw ruleBroken('checkout_damaged', `Damaged: ${tags(assets, damaged)}. Report the damage (the item goes on hold) and book an alternative.`, {
+          damaged: damaged.map((l) => l.assetId),
+        });
       // Refuses (422) items that may no longer go; the rest of the transaction is undone with any later refusal.
       const out = await checkOut(tx, actor, id, { takenBy: taker.name, takenByUserId: taker.userId, checklist: input.checklist as ChecklistLine[] });
       const stillOut = assets.filter((a) => a.status === 'out');
-      if (stillOut.length) throw ruleBroken('still_out', `Still out on an earlier booking: ${stillOut.map((a) => a.assetTag).join(', ')}. Take them back in first.`);
+      if (stillOut.length)
+        throw ruleBroken('still_out', `Still out on an earlier booking: ${stillOut.map((a) => a.assetTag).join(', ')}. Take them back in first.`);
       await this.gates.beforeCheckout?.(tx, out);
-      await moveAssets(tx, actor, assets.map((a) => a.id), 'out', { why: (assetId) => noteFor(input.checklist, assetId), bookingId: id, where: null, counterpart: taker.name });
+      await moveAssets(
+        tx,
+        actor,
+        assets.map((a) => a.id),
+        'out',
+        { why: (assetId) => noteFor(input.checklist, assetId), bookingId: id, where: null, counterpart: taker.name },
+      );
       await this.gates.afterCheckout?.(tx, out);
       return loadBooking(tx, id);
     });
@@ -63,7 +76,11 @@ export class HandoverService {
         if (!line.present || line.condition === 'damaged') {
           const { incident } = await openIncident(tx, actor, asset, {
             kind: line.present ? 'impact' : 'missing',
-            description: line.note || (line.present ? `Came back damaged from booking ${booking.startsOn}–${booking.endsOn}.` : `Not returned with booking ${booking.startsOn}–${booking.endsOn}.`),
+            description:
+              line.note ||
+              (line.present
+                ? `Came back damaged from booking ${booking.startsOn}–${booking.endsOn}.`
+                : `Not returned with booking ${booking.startsOn}–${booking.endsOn}.`),
             occurredAt: now.toISOString(),
             location: ctx.name,
             bookingId: id,
@@ -72,10 +89,25 @@ export class HandoverService {
         }
       }
       // Back at the counter: ready again if simply out; still held if something holds it (this damage, a failed field check).
-      const back = await lockAssets(tx, input.checklist.filter((l) => l.present).map((l) => l.assetId));
+      const back = await lockAssets(
+        tx,
+        input.checklist.filter((l) => l.present).map((l) => l.assetId),
+      );
       const custody = { why: (assetId: string) => input.checklist.find((l) => l.assetId === assetId)?.note ?? null, bookingId: id, counterpart: ctx.name };
-      await moveAssets(tx, actor, back.filter((a) => a.status === 'out').map((a) => a.id), 'ready', custody);
-      await noteCustody(tx, actor, back.filter((a) => a.status !== 'out').map((a) => a.id), 'returned', custody);
+      await moveAssets(
+        tx,
+        actor,
+        back.filter((a) => a.status === 'out').map((a) => a.id),
+        'ready',
+        custody,
+      );
+      await noteCustody(
+        tx,
+        actor,
+        back.filter((a) => a.status !== 'out').map((a) => a.id),
+        'returned',
+        custody,
+      );
       return { ...(await takeBack(tx, actor, id, { broughtBackBy: bringer.name, checklist: input.checklist as ChecklistLine[], incidents })), incidents };
     });
   }
@@ -87,10 +119,23 @@ export class HandoverService {
       const booking = await loadBooking(tx, id);
       const items = await assetsByIds(tx, booking.assetIds, { packingOrder: true });
       const { job, rental } = booking;
-      const title = job ? `Job ${job.reference}, ${job.customerName}` : rental ? `Rental ${rental.number}, ${rental.customerCompany}` : `${booking.purpose} booking`;
+      const title = job
+        ? `Job ${job.reference}, ${job.customerName}`
+        : rental
+          ? `Rental ${rental.number}, ${rental.customerCompany}`
+          : `${booking.purpose} booking`;
       return handoverSheetPdf(
         { name: ctx.name, timeZone: ctx.timeZone },
-        { title, startsOn: booking.startsOn, endsOn: booking.endsOn, kitName: booking.kit?.name ?? null, takenBy: booking.takenBy, checkedOutAt: booking.checkedOutAt, items, checklist: booking.checkoutChecklist },
+        {
+          title,
+          startsOn: booking.startsOn,
+          endsOn: booking.endsOn,
+          kitName: booking.kit?.name ?? null,
+          takenBy: booking.takenBy,
+          checkedOutAt: booking.checkedOutAt,
+          items,
+          checklist: booking.checkoutChecklist,
+        },
       );
     });
   }

@@ -39,7 +39,8 @@ export class JobsRegisterService {
   create(actor: Actor, input: JobInput): Promise<SiteJobView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       await leadOf(tx, input);
-      if (await tx.count(Job, { reference: input.reference })) throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
+      if (await tx.count(Job, { reference: input.reference }))
+        throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
       const job = await tx.insert(Job, { ...this.fields(input) });
       await recordAudit(tx, actor, 'job.created', { type: 'job', id: job.id }, { reference: job.reference });
       return job;
@@ -50,13 +51,13 @@ export class JobsRegisterService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const job = await tx.get(Job, { id }, 'That job');
       await leadOf(tx, input);
-      if (input.reference !== job.reference && (await tx.count(Job, { reference: input.reference }))) throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
+      if (input.reference !== job.reference && (await tx.count(Job, { reference: input.reference })))
+        throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
       Object.assign(job, this.fields(input));
       await recordAudit(tx, actor, 'job.updated', { type: 'job', id }, { reference: job.reference });
       return tx.save(Job, job);
     });
   }
-
 
   private fields(input: JobInput) {
     return {

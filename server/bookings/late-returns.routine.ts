@@ -3,7 +3,16 @@ import { enqueueMail, staffAddresses } from '../notifications';
 import type { Routine } from '../routines';
 import { todayIn } from '../../shared/calibration/due-date';
 
-type LateRow = { organization_id: string; time_zone: string; id: string; starts_on: string; ends_on: string; taken_by: string | null; reference: string | null; tags: string };
+type LateRow = {
+  organization_id: string;
+  time_zone: string;
+  id: string;
+  starts_on: string;
+  ends_on: string;
+  taken_by: string | null;
+  reference: string | null;
+  tags: string;
+};
 
 /** Once a day: one e-mail per firm listing bookings past their end date and not back. Set-based, one query. */
 export const lateReturnsRoutine = (): Routine => ({
@@ -30,7 +39,10 @@ export const lateReturnsRoutine = (): Routine => ({
         await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
           subject: `${late.length} late return${late.length === 1 ? '' : 's'} on ${today}`,
           heading: 'Kit that should be back by now',
-          paragraphs: late.map((r) => `${r.reference ? `Job ${r.reference}` : 'Booking'} ${r.starts_on} to ${r.ends_on}${r.taken_by ? `, taken by ${r.taken_by}` : ''}: ${r.tags}.`),
+          paragraphs: late.map(
+            (r) =>
+              `${r.reference ? `Job ${r.reference}` : 'Booking'} ${r.starts_on} to ${r.ends_on}${r.taken_by ? `, taken by ${r.taken_by}` : ''}: ${r.tags}.`,
+          ),
         });
       });
     }

@@ -60,8 +60,19 @@ export async function book(tx: Scoped, actor: Actor, request: BookingRequest): P
     note: request.note ?? null,
     createdBy: actor.userId,
   });
-  await holdingDates(tx, assetIds, window, () => tx.insertMany(BookingItem, assetIds.map((assetId) => ({ bookingId: booking.id, assetId, startsOn: request.startsOn, endsOn: request.endsOn, active: true }))));
-  await recordAudit(tx, actor, 'booking.created', { type: 'booking', id: booking.id }, { assetIds, startsOn: request.startsOn, endsOn: request.endsOn, purpose });
+  await holdingDates(tx, assetIds, window, () =>
+    tx.insertMany(
+      BookingItem,
+      assetIds.map((assetId) => ({ bookingId: booking.id, assetId, startsOn: request.startsOn, endsOn: request.endsOn, active: true })),
+    ),
+  );
+  await recordAudit(
+    tx,
+    actor,
+    'booking.created',
+    { type: 'booking', id: booking.id },
+    { assetIds, startsOn: request.startsOn, endsOn: request.endsOn, purpose },
+  );
   return loadBooking(tx, booking.id);
 }
 
@@ -93,19 +104,36 @@ export async function cancelBooking(tx: Scoped, actor: Actor, id: string): Promi
  * The booking goes out: to a person at the counter (with the packing list as
  * ticked) or to a calibration lab. Refuses (422) items that may no longer go.
  */
-export async function checkOut(tx: Scoped, actor: Actor, id: string, to: { takenBy: string; takenByUserId?: string | null; checklist?: ChecklistLine[] }): Promise<BookingView> {
+export async function checkOut(
+  tx: Scoped,
+  actor: Actor,
+  id: string,
+  to: { takenBy: string; takenByUserId?: string | null; checklist?: ChecklistLine[] },
+): Promise<BookingView> {
   const booking = await lockedIn(tx, id, 'reserved', 'Only a reserved booking can be checked out');
   const assetIds = await itemsOf(tx, id);
   const refused = await refusals(tx, assetIds, booking.endsOn, booking.purpose);
   if (refused.length) throw blockedError('Cannot hand over', refused);
-  Object.assign(booking, { state: 'out', checkedOutAt: new Date(), handedOverBy: actor.userId, takenBy: to.takenBy, takenByUserId: to.takenByUserId ?? null, checkoutChecklist: to.checklist ?? null });
+  Object.assign(booking, {
+    state: 'out',
+    checkedOutAt: new Date(),
+    handedOverBy: actor.userId,
+    takenBy: to.takenBy,
+    takenByUserId: to.takenByUserId ?? null,
+    checkoutChecklist: to.checklist ?? null,
+  });
   await tx.save(Booking, booking);
   await recordAudit(tx, actor, 'booking.checked_out', { type: 'booking', id }, { takenBy: to.takenBy, items: assetIds.length });
   return loadBooking(tx, id);
 }
 
 /** Taken back at the counter against the packing list; what the return opened (incidents) goes on the record. */
-export async function takeBack(tx: Scoped, actor: Actor, id: string, from: { broughtBackBy: string; checklist: ChecklistLine[]; incidents: { assetId: string; incidentId: string }[] }): Promise<BookingView> {
+export async function takeBack(
+  tx: Scoped,
+  actor: Actor,
+  id: string,
+  from: { broughtBackBy: string; checklist: ChecklistLine[]; incidents: { assetId: string; incidentId: string }[] },
+): Promise<BookingView> {
   const booking = await lockedIn(tx, id, 'out', 'Only a booking that is out can come back');
   Object.assign(booking, { receivedBy: actor.userId, broughtBackBy: from.broughtBackBy, returnChecklist: from.checklist });
   return end(tx, actor, booking, 'booking.returned', { broughtBackBy: from.broughtBackBy, incidents: from.incidents });
@@ -155,11 +183,16 @@ async function assertBookable(tx: Scoped, assetIds: string[], w: Window) {
   if (w.purpose !== 'lab') {
     for (const assetId of new Set([...refused, ...conflicts].map((x) => x.assetId))) {
       const type = facts.find((f) => f.assetId === assetId)!.type;
-      alternatives[assetId] = (await availableAssets(tx, { type, startsOn: w.startsOn, endsOn: w.endsOn, exclude: assetIds, limit: 5 })).map(({ id, assetTag, model, dueOn }) => ({ id, assetTag, model, dueOn }));
+      alternatives[assetId] = (await availableAssets(tx, { type, startsOn: w.startsOn, endsOn: w.endsOn, exclude: assetIds, limit: 5 })).map(
+        ({ id, assetTag, model, dueOn }) => ({ id, assetTag, model, dueOn }),
+      );
     }
   }
   if (refused.length) throw blockedError('Cannot book', refused, { alternatives });
-  throw conflict(`Already booked: ${conflicts.map((c) => `${c.assetTag} (${c.startsOn} to ${c.endsOn})`).join('; ')}.`, { conflicts, alternatives } satisfies BookingRefusalDetails);
+  throw conflict(`Already booked: ${conflicts.map((c) => `${c.assetTag} (${c.startsOn} to ${c.endsOn})`).join('; ')}.`, {
+    conflicts,
+    alternatives,
+  } satisfies BookingRefusalDetails);
 }
 
 /**

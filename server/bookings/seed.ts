@@ -34,7 +34,10 @@ export type PastBooking = {
 export async function seedBooking(tx: Scoped, booking: PastBooking, assetIds: string[]): Promise<{ id: string }> {
   const row = await tx.insert(Booking, { jobId: null, rentalId: null, kitId: null, note: null, ...booking });
   const active = booking.state === 'reserved' || booking.state === 'out';
-  await tx.insertMany(BookingItem, assetIds.map((assetId) => ({ bookingId: row.id, assetId, startsOn: booking.startsOn, endsOn: booking.endsOn, active })));
+  await tx.insertMany(
+    BookingItem,
+    assetIds.map((assetId) => ({ bookingId: row.id, assetId, startsOn: booking.startsOn, endsOn: booking.endsOn, active })),
+  );
   return { id: row.id };
 }
 

@@ -49,9 +49,17 @@ async function refuseUnlessPlainPdf(file: UploadedCertificate) {
   const result = await inspectPdf(file.buffer);
   const name = `"${file.originalname}"`;
   if (result.kind === 'not_pdf') throw new AppError(415, 'unsupported_type', `${name} is not a PDF: ${result.reason}.`);
-  if (result.kind === 'encrypted') throw ruleBroken('certificate_encrypted', `${name} is encrypted or password-protected, so Nestkeeper cannot check what it contains. Ask the lab for an unprotected copy.`);
+  if (result.kind === 'encrypted')
+    throw ruleBroken(
+      'certificate_encrypted',
+      `${name} is encrypted or password-protected, so Nestkeeper cannot check what it contains. Ask the lab for an unprotected copy.`,
+    );
   if (result.activeContent.length) {
-    throw ruleBroken('certificate_active_content', `${name} contains ${describeActiveContent(result.activeContent)}. A certificate is kept as a plain PDF: ask the lab for a copy without scripts or attachments, or print it to a new PDF.`, { found: result.activeContent });
+    throw ruleBroken(
+      'certificate_active_content',
+      `${name} contains ${describeActiveContent(result.activeContent)}. A certificate is kept as a plain PDF: ask the lab for a copy without scripts or attachments, or print it to a new PDF.`,
+      { found: result.activeContent },
+    );
   }
 }
 
@@ -70,7 +78,8 @@ export class CalibrationService {
       const ctx = await loadOrgContext(tx);
       const [asset] = await lockAssets(tx, [assetId]);
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
-      if (fields.performedOn > ctx.today) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { performedOn: 'cannot be in the future' } });
+      if (fields.performedOn > ctx.today)
+        throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { performedOn: 'cannot be in the future' } });
       const stored = await tx.insert(CertificateFile, { fileName: file.originalname.slice(0, 200), sizeBytes: file.size, data: file.buffer });
       const intervalMonths = fields.intervalMonths ?? asset.calibrationIntervalMonths ?? 12;
       const history = (await tx.find(CalibrationEvent, { where: { assetId }, order: { performedOn: 'ASC' } })).map((e) => e.asFound);
@@ -95,7 +104,14 @@ export class CalibrationService {
       });
       // The newest calibration sets the plan; an older certificate entered late only joins the history.
       if (!asset.lastCalibratedOn || fields.performedOn >= asset.lastCalibratedOn) {
-        await updateCalibrationPlan(tx, assetId, { calibrationRequired: true, lastCalibratedOn: fields.performedOn, calibrationIntervalMonths: intervalMonths, calibrationProvider: fields.provider, dueOn: event.dueOn, notifiedCalibrationState: null });
+        await updateCalibrationPlan(tx, assetId, {
+          calibrationRequired: true,
+          lastCalibratedOn: fields.performedOn,
+          calibrationIntervalMonths: intervalMonths,
+          calibrationProvider: fields.provider,
+          dueOn: event.dueOn,
+          notifiedCalibrationState: null,
+        });
       }
       const wasAtLab = asset.status === 'at_lab';
       if (wasAtLab) {
@@ -107,7 +123,10 @@ export class CalibrationService {
           event.labTripId = item.lab_trip_id;
           await tx.manager.save(CalibrationEvent, event);
           await tx.updateWhere(LabTripItem, { id: item.id }, { receivedOn: ctx.today, calibrationEventId: event.id });
-          const [{ open }] = await tx.sql<{ open: number }>(`SELECT count(*)::int AS open FROM lab_trip_items WHERE organization_id = $1 AND lab_trip_id = $2 AND received_on IS NULL`, [item.lab_trip_id]);
+          const [{ open }] = await tx.sql<{ open: number }>(
+            `SELECT count(*)::int AS open FROM lab_trip_items WHERE organization_id = $1 AND lab_trip_id = $2 AND received_on IS NULL`,
+            [item.lab_trip_id],
+          );
           if (open === 0) {
             await tx.updateWhere(LabTrip, { id: item.lab_trip_id }, { state: 'back' });
             const trip = await tx.get(LabTrip, { id: item.lab_trip_id }, 'That lab trip');
@@ -118,11 +137,24 @@ export class CalibrationService {
       const custody = { why: `Certificate ${fields.certificateNumber} from ${fields.provider}`, counterpart: ctx.name };
       if (wasAtLab) await moveAssets(tx, actor, [assetId], 'ready', custody);
       else await noteCustody(tx, actor, [assetId], 'calibrated', custody);
-      await recordAudit(tx, actor, 'calibration.recorded', { type: 'asset', id: assetId }, { eventId: event.id, asFound: fields.asFound, asLeft: fields.asLeft, dueOn: event.dueOn });
-      if (fields.asFound === 'out_of_tolerance') await openImpactReview(tx, actor, asset, { trigger: 'calibration', triggerId: event.id, foundOn: fields.performedOn });
+      await recordAudit(
+        tx,
+        actor,
+        'calibration.recorded',
+        { type: 'asset', id: assetId },
+        { eventId: event.id, asFound: fields.asFound, asLeft: fields.asLeft, dueOn: event.dueOn },
+      );
+      if (fields.asFound === 'out_of_tolerance')
+        await openImpactReview(tx, actor, asset, { trigger: 'calibration', triggerId: event.id, foundOn: fields.performedOn });
       const hold = await openHoldFor(tx, assetId);
       if (hold && fields.asLeft === 'in_tolerance' && fields.performedOn >= calendarDayIn(hold.startedAt, ctx.timeZone)) {
-        await releaseHold(tx, actor, hold, [{ kind: 'calibration', id: event.id, performedAt: fields.performedOn }], `Calibrated: certificate ${fields.certificateNumber}`);
+        await releaseHold(
+          tx,
+          actor,
+          hold,
+          [{ kind: 'calibration', id: event.id, performedAt: fields.performedOn }],
+          `Calibrated: certificate ${fields.certificateNumber}`,
+        );
       } else if (hold && wasAtLab) {
         // Back from the lab without the evidence that ends its hold: it stays held, not bookable.
         await moveAssets(tx, actor, [assetId], 'held', { why: `Still on hold: ${hold.summary}`, details: { holdId: hold.id } });
@@ -157,19 +189,30 @@ export class CalibrationService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const event = await tx.get(CalibrationEvent, { id: eventId }, 'That calibration');
       if (event.intervalDecision) throw ruleBroken('interval_decided', `This suggestion was already ${event.intervalDecision}.`);
-      if (event.suggestedChange === 'outside_policy') throw ruleBroken('interval_outside_policy', `There is no suggestion to decide: ${event.suggestionReason}`);
+      if (event.suggestedChange === 'outside_policy')
+        throw ruleBroken('interval_outside_policy', `There is no suggestion to decide: ${event.suggestionReason}`);
       event.intervalDecision = decision === 'accept' ? 'accepted' : 'declined';
       await tx.manager.save(CalibrationEvent, event);
       const asset = await getAsset(tx, event.assetId);
       if (decision === 'accept' && asset.lastCalibratedOn === event.performedOn) {
-        await updateCalibrationPlan(tx, asset.id, { calibrationIntervalMonths: event.suggestedIntervalMonths, dueOn: dueDate(event.performedOn, event.suggestedIntervalMonths), notifiedCalibrationState: null });
+        await updateCalibrationPlan(tx, asset.id, {
+          calibrationIntervalMonths: event.suggestedIntervalMonths,
+          dueOn: dueDate(event.performedOn, event.suggestedIntervalMonths),
+          notifiedCalibrationState: null,
+        });
       }
-      await recordAudit(tx, actor, 'calibration.interval_' + event.intervalDecision, { type: 'asset', id: event.assetId }, {
-        eventId,
-        from: event.intervalMonths,
-        suggested: event.suggestedIntervalMonths,
-        reason: event.suggestionReason,
-      });
+      await recordAudit(
+        tx,
+        actor,
+        'calibration.interval_' + event.intervalDecision,
+        { type: 'asset', id: event.assetId },
+        {
+          eventId,
+          from: event.intervalMonths,
+          suggested: event.suggestedIntervalMonths,
+          reason: event.suggestionReason,
+        },
+      );
       return eventView(event);
     });
   }

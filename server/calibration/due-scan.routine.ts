@@ -40,7 +40,9 @@ export const dueScanRoutine = (): Routine => ({
     for (const [organizationId, rows] of byOrg) {
       await db.transaction(async (manager) => {
         const tx = new Scoped(manager, organizationId);
-        const [org] = await tx.sql<{ time_zone: string; due_soon: number | null }>(`SELECT time_zone, (settings->>'dueSoonDays')::int AS due_soon FROM organizations WHERE id = $1`);
+        const [org] = await tx.sql<{ time_zone: string; due_soon: number | null }>(
+          `SELECT time_zone, (settings->>'dueSoonDays')::int AS due_soon FROM organizations WHERE id = $1`,
+        );
         const today = todayIn(org.time_zone, now);
         const tags = new Set(rows.map((r) => r.asset_tag));
         const details = (await dueItems(tx, today, org.due_soon ?? 30)).filter((d) => tags.has(d.assetTag));
@@ -56,7 +58,9 @@ export const dueScanRoutine = (): Routine => ({
           paragraphs: [
             ...(overdue.length ? ['Overdue now:', ...overdue.slice(0, DIGEST_LINES).map(line)] : []),
             ...(overdue.length > DIGEST_LINES ? [`…and ${overdue.length - DIGEST_LINES} more overdue.`] : []),
-            ...(soon.length ? [`Due within ${org.due_soon ?? 30} days (by ${addDays(today, org.due_soon ?? 30)}):`, ...soon.slice(0, DIGEST_LINES).map(line)] : []),
+            ...(soon.length
+              ? [`Due within ${org.due_soon ?? 30} days (by ${addDays(today, org.due_soon ?? 30)}):`, ...soon.slice(0, DIGEST_LINES).map(line)]
+              : []),
             ...(soon.length > DIGEST_LINES ? [`…and ${soon.length - DIGEST_LINES} more due soon.`] : []),
             'Plan lab trips from the review page; the window finder shows when each item can go without breaking a booking.',
           ],

@@ -29,17 +29,47 @@ async function lastPassingEvidence(tx: Scoped, assetId: string, foundOn: string,
  * transaction: every booking that took it out between its last passing
  * evidence and the finding, both days included.
  */
-export async function openImpactReview(tx: Scoped, actor: Actor, asset: Pick<AssetRecord, 'id' | 'assetTag'>, found: { trigger: 'calibration' | 'check'; triggerId: string; foundOn: string }) {
+export async function openImpactReview(
+  tx: Scoped,
+  actor: Actor,
+  asset: Pick<AssetRecord, 'id' | 'assetTag'>,
+  found: { trigger: 'calibration' | 'check'; triggerId: string; foundOn: string },
+) {
   const since = await lastPassingEvidence(tx, asset.id, found.foundOn, found.trigger === 'check' ? found.triggerId : undefined);
-  const review = await tx.insert(ImpactReview, { assetId: asset.id, trigger: found.trigger, triggerId: found.triggerId, since, foundOn: found.foundOn, state: 'open', closedAt: null });
+  const review = await tx.insert(ImpactReview, {
+    assetId: asset.id,
+    trigger: found.trigger,
+    triggerId: found.triggerId,
+    since,
+    foundOn: found.foundOn,
+    state: 'open',
+    closedAt: null,
+  });
   const bookings = await tx.sql<{ bookingId: string }>(
     `SELECT DISTINCT b.id AS "bookingId" FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id
       WHERE bi.organization_id = $1 AND bi.asset_id = $2 AND b.state IN ('out', 'returned') AND b.purpose <> 'lab'
         AND b.starts_on <= $4::date AND ($3::date IS NULL OR b.ends_on >= $3::date)`,
     [asset.id, since, found.foundOn],
   );
-  await tx.insertMany(ImpactReviewItem, bookings.map((b) => ({ reviewId: review.id, bookingId: b.bookingId, assessment: null, note: null, assessedBy: null, assessedAt: null, noticeQueuedAt: null })));
-  await recordAudit(tx, actor, 'impact_review.opened', { type: 'asset', id: asset.id }, { reviewId: review.id, since, foundOn: found.foundOn, bookings: bookings.length });
+  await tx.insertMany(
+    ImpactReviewItem,
+    bookings.map((b) => ({
+      reviewId: review.id,
+      bookingId: b.bookingId,
+      assessment: null,
+      note: null,
+      assessedBy: null,
+      assessedAt: null,
+      noticeQueuedAt: null,
+    })),
+  );
+  await recordAudit(
+    tx,
+    actor,
+    'impact_review.opened',
+    { type: 'asset', id: asset.id },
+    { reviewId: review.id, since, foundOn: found.foundOn, bookings: bookings.length },
+  );
   await enqueueMail(tx, await staffAddresses(tx, ['owner']), {
     subject: `Impact review opened for ${asset.assetTag}: ${bookings.length} booking(s) to assess`,
     heading: `${asset.assetTag} was found out of tolerance`,
@@ -51,7 +81,19 @@ export async function openImpactReview(tx: Scoped, actor: Actor, asset: Pick<Ass
   return review;
 }
 
-type ReviewRow = { bookingId: string; jobId: string | null; jobReference: string | null; customerName: string | null; contactEmail: string | null; rentalId: string | null; startsOn: string; endsOn: string; assessment: ImpactAssessment | null; note: string | null; noticeQueuedAt: Date | null };
+type ReviewRow = {
+  bookingId: string;
+  jobId: string | null;
+  jobReference: string | null;
+  customerName: string | null;
+  contactEmail: string | null;
+  rentalId: string | null;
+  startsOn: string;
+  endsOn: string;
+  assessment: ImpactAssessment | null;
+  note: string | null;
+  noticeQueuedAt: Date | null;
+};
 
 export class ImpactService {
   constructor(private readonly db: DataSource) {}
@@ -111,7 +153,10 @@ export class ImpactService {
   close(actor: Actor, reviewId: string): Promise<ImpactReviewView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
-      const [{ n }] = await tx.sql<{ n: number }>(`SELECT count(*)::int AS n FROM impact_review_items WHERE organization_id = $1 AND review_id = $2 AND assessment IS NULL`, [reviewId]);
+      const [{ n }] = await tx.sql<{ n: number }>(
+        `SELECT count(*)::int AS n FROM impact_review_items WHERE organization_id = $1 AND review_id = $2 AND assessment IS NULL`,
+        [reviewId],
+      );
       if (n > 0) throw ruleBroken('review_incomplete', `${n} booking(s) still need an assessment before the review can close.`);
       review.state = 'closed';
       review.closedAt = new Date();
@@ -140,7 +185,10 @@ export class ImpactService {
       }));
       if (send) {
         for (const d of drafts) await enqueueMail(tx, [d.to], d);
-        await tx.sql(`UPDATE impact_review_items SET notice_queued_at = now() WHERE organization_id = $1 AND review_id = $2 AND booking_id = ANY($3)`, [reviewId, bookings.filter((b) => b.contactEmail).map((b) => b.bookingId)]);
+        await tx.sql(`UPDATE impact_review_items SET notice_queued_at = now() WHERE organization_id = $1 AND review_id = $2 AND booking_id = ANY($3)`, [
+          reviewId,
+          bookings.filter((b) => b.contactEmail).map((b) => b.bookingId),
+        ]);
         await recordAudit(tx, actor, 'impact_review.notices_sent', { type: 'asset', id: review.assetId }, { reviewId, recipients: drafts.map((d) => d.to) });
       }
       return { drafts: drafts.map(({ to, customerName, subject, paragraphs }) => ({ to, customerName, subject, text: paragraphs.join('\n\n') })), sent: send };

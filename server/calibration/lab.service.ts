@@ -55,10 +55,32 @@ export class LabService {
       const ctx = await loadOrgContext(tx);
       const assets = await this.assets(tx, input.assetIds);
       const expectedBackOn = input.expectedBackOn ?? addDays(input.sentOn, turnaround(ctx, input.provider) - 1);
-      const booking = await book(tx, actor, { assetIds: assets.map((a) => a.id), startsOn: input.sentOn, endsOn: expectedBackOn, purpose: 'lab', note: `Calibration at ${input.provider}` });
-      const trip = await tx.insert(LabTrip, { provider: input.provider, sentOn: input.sentOn, expectedBackOn, state: 'planned', bookingId: booking.id, createdBy: actor.userId });
-      await tx.insertMany(LabTripItem, assets.map((a) => ({ labTripId: trip.id, assetId: a.id, receivedOn: null, calibrationEventId: null })));
-      await recordAudit(tx, actor, 'lab_trip.planned', { type: 'lab_trip', id: trip.id }, { provider: input.provider, assets: assets.map((a) => a.assetTag), sentOn: input.sentOn, expectedBackOn });
+      const booking = await book(tx, actor, {
+        assetIds: assets.map((a) => a.id),
+        startsOn: input.sentOn,
+        endsOn: expectedBackOn,
+        purpose: 'lab',
+        note: `Calibration at ${input.provider}`,
+      });
+      const trip = await tx.insert(LabTrip, {
+        provider: input.provider,
+        sentOn: input.sentOn,
+        expectedBackOn,
+        state: 'planned',
+        bookingId: booking.id,
+        createdBy: actor.userId,
+      });
+      await tx.insertMany(
+        LabTripItem,
+        assets.map((a) => ({ labTripId: trip.id, assetId: a.id, receivedOn: null, calibrationEventId: null })),
+      );
+      await recordAudit(
+        tx,
+        actor,
+        'lab_trip.planned',
+        { type: 'lab_trip', id: trip.id },
+        { provider: input.provider, assets: assets.map((a) => a.assetTag), sentOn: input.sentOn, expectedBackOn },
+      );
       return this.view(tx, trip);
     });
   }
@@ -70,7 +92,13 @@ export class LabService {
       if (trip.state !== 'planned') throw ruleBroken('lab_trip_state', `This trip is already ${trip.state === 'at_lab' ? 'at the lab' : 'back'}.`);
       const items = await tx.find(LabTripItem, { where: { labTripId: tripId } });
       // Only what is in the shop (ready or held) may leave for the lab: custody.ts refuses the rest.
-      const moved = await moveAssets(tx, actor, items.map((i) => i.assetId), 'at_lab', { why: `Expected back ${trip.expectedBackOn}`, bookingId: trip.bookingId, where: trip.provider, counterpart: trip.provider });
+      const moved = await moveAssets(
+        tx,
+        actor,
+        items.map((i) => i.assetId),
+        'at_lab',
+        { why: `Expected back ${trip.expectedBackOn}`, bookingId: trip.bookingId, where: trip.provider, counterpart: trip.provider },
+      );
       trip.state = 'at_lab';
       await tx.save(LabTrip, trip);
       if (trip.bookingId) await checkOut(tx, actor, trip.bookingId, { takenBy: trip.provider });
@@ -99,6 +127,14 @@ export class LabService {
          FROM lab_trip_items i JOIN assets a ON a.id = i.asset_id WHERE i.organization_id = $1 AND i.lab_trip_id = $2 ORDER BY a.asset_tag`,
       [trip.id],
     );
-    return { id: trip.id, provider: trip.provider, sentOn: trip.sentOn, expectedBackOn: trip.expectedBackOn, state: trip.state, bookingId: trip.bookingId, items };
+    return {
+      id: trip.id,
+      provider: trip.provider,
+      sentOn: trip.sentOn,
+      expectedBackOn: trip.expectedBackOn,
+      state: trip.state,
+      bookingId: trip.bookingId,
+      items,
+    };
   }
 }

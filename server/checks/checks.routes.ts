@@ -6,14 +6,39 @@ import type { ChecksService } from './checks.service';
 export function checksRoutes(checks: ChecksService): Router {
   const router = Router();
   const at = '/api';
-  endpoint(router, at, { method: 'post', path: '/checks', summary: 'Record a field check (tip validation, two-face, length check); a failure holds the item', access: 'checks.record', body: checkPayload, status: 201 }, ({ actor, body }) =>
-    checks.record(actor, body),
+  endpoint(
+    router,
+    at,
+    {
+      method: 'post',
+      path: '/checks',
+      summary: 'Record a field check (tip validation, two-face, length check); a failure holds the item',
+      access: 'checks.record',
+      body: checkPayload,
+      status: 201,
+    },
+    ({ actor, body }) => checks.record(actor, body),
   );
-  endpoint(router, at, { method: 'get', path: '/checks', summary: 'Field checks, newest first', access: 'fleet.read', query: checkListQuery }, ({ actor, query }) => checks.list(actor, query));
-  endpoint(router, at, { method: 'get', path: '/checks/to-do', summary: 'Tip positions without a passing validation in the kit I carry now or next', access: 'fleet.read' }, ({ actor }) => checks.toDo(actor));
-  endpoint(router, at, { method: 'get', path: '/checks/:id', summary: 'One field check with inputs and results', access: 'fleet.read' }, ({ actor, params }) => checks.get(actor, params.id));
-  endpoint(router, at, { method: 'get', path: '/assets/:id/tip-validation', summary: "A tip's validation state per mounting position", access: 'fleet.read' }, ({ actor, params }) =>
-    checks.tipStatus(actor, params.id),
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/checks', summary: 'Field checks, newest first', access: 'fleet.read', query: checkListQuery },
+    ({ actor, query }) => checks.list(actor, query),
+  );
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/checks/to-do', summary: 'Tip positions without a passing validation in the kit I carry now or next', access: 'fleet.read' },
+    ({ actor }) => checks.toDo(actor),
+  );
+  endpoint(router, at, { method: 'get', path: '/checks/:id', summary: 'One field check with inputs and results', access: 'fleet.read' }, ({ actor, params }) =>
+    checks.get(actor, params.id),
+  );
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/assets/:id/tip-validation', summary: "A tip's validation state per mounting position", access: 'fleet.read' },
+    ({ actor, params }) => checks.tipStatus(actor, params.id),
   );
   return router;
 }

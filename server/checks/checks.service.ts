@@ -36,7 +36,11 @@ async function compute(tx: Scoped, input: CheckPayload, subject: AssetRecord) {
   switch (input.kind) {
     case 'tip_validation': {
       const positions = (subject.specs.positions as TipPosition[] | undefined) ?? [];
-      if (!positions.includes(input.position)) throw badField('position', `${subject.assetTag} is not used in the ${input.position} position (it is used: ${positions.join(', ') || 'none recorded'})`);
+      if (!positions.includes(input.position))
+        throw badField(
+          'position',
+          `${subject.assetTag} is not used in the ${input.position} position (it is used: ${positions.join(', ') || 'none recorded'})`,
+        );
       if (input.probeId) await assetOfType(tx, input.probeId, 'probe', 'probeId');
       const result = tipValidation(input.reference, input.readings);
       return { result, judged: result.maxDeviationUm, related: input.probeId ?? null, inputs: { reference: input.reference, readings: input.readings } };
@@ -54,25 +58,38 @@ async function compute(tx: Scoped, input: CheckPayload, subject: AssetRecord) {
         result: { measuredMm: r.measuredMm, expectedMm: r.expectedMm, errorUm: r.errorUm },
         judged: r.errorUm,
         related: bar.id,
-        inputs: { endA: input.endA, endB: input.endB, temperatureC: input.temperatureC, scaleBar: { assetTag: bar.assetTag, certifiedLengthMm, expansionPpmPerK } },
+        inputs: {
+          endA: input.endA,
+          endB: input.endB,
+          temperatureC: input.temperatureC,
+          scaleBar: { assetTag: bar.assetTag, certifiedLengthMm, expansionPpmPerK },
+        },
       };
     }
   }
 }
 
 // `kind`, `position`, `inputs` and `result` were stored together by `record`, computed for that kind.
-export const checkView = (c: FieldCheck): CheckView => ({
-  id: c.id,
-  kind: c.kind,
-  assetId: c.assetId,
-  relatedAssetId: c.relatedAssetId,
-  position: c.position,
-  inputs: c.inputs,
-  result: { ...c.result, toleranceUm: c.toleranceUm, guardBandUm: c.guardBandUm, expandedUncertaintyUm: c.expandedUncertaintyUm, decisionRule: c.decisionRule, decision: c.decision },
-  performedAt: c.performedAt.toISOString(),
-  performedBy: c.performedBy,
-  note: c.note,
-}) as CheckView;
+export const checkView = (c: FieldCheck): CheckView =>
+  ({
+    id: c.id,
+    kind: c.kind,
+    assetId: c.assetId,
+    relatedAssetId: c.relatedAssetId,
+    position: c.position,
+    inputs: c.inputs,
+    result: {
+      ...c.result,
+      toleranceUm: c.toleranceUm,
+      guardBandUm: c.guardBandUm,
+      expandedUncertaintyUm: c.expandedUncertaintyUm,
+      decisionRule: c.decisionRule,
+      decision: c.decision,
+    },
+    performedAt: c.performedAt.toISOString(),
+    performedBy: c.performedBy,
+    note: c.note,
+  }) as CheckView;
 
 export class ChecksService {
   constructor(private readonly db: DataSource) {}
@@ -83,8 +100,11 @@ export class ChecksService {
       const subject = await assetOfType(tx, input.assetId, checkSubjectType[input.kind], 'assetId');
       const { result, judged, related, inputs } = await compute(tx, input, subject);
 
-      const tolerance = input.toleranceUm ? { kind: 'fixed' as const, um: input.toleranceUm } : (subject.toleranceOverrides?.[input.kind] ?? ctx.tolerances[input.kind]);
-      if (tolerance.kind === 'range' && input.distanceM == null) throw badField('distanceM', 'is needed: the tolerance for this check depends on the distance from the tracker');
+      const tolerance = input.toleranceUm
+        ? { kind: 'fixed' as const, um: input.toleranceUm }
+        : (subject.toleranceOverrides?.[input.kind] ?? ctx.tolerances[input.kind]);
+      if (tolerance.kind === 'range' && input.distanceM == null)
+        throw badField('distanceM', 'is needed: the tolerance for this check depends on the distance from the tracker');
       const limitUm = toleranceUm(tolerance, input.distanceM);
       const uUm = input.uncertaintyUm ?? (input.uncertaintyComponentsUm?.length ? expandedUncertainty(input.uncertaintyComponentsUm) : 0);
       const decided = decide(judged, limitUm, ctx.decisionRule, uUm);
@@ -106,7 +126,13 @@ export class ChecksService {
         performedBy: actor.userId,
         note: input.note ?? null,
       });
-      await recordAudit(tx, actor, 'check.recorded', { type: 'asset', id: subject.id }, { checkId: check.id, kind: check.kind, decision, position: check.position });
+      await recordAudit(
+        tx,
+        actor,
+        'check.recorded',
+        { type: 'asset', id: subject.id },
+        { checkId: check.id, kind: check.kind, decision, position: check.position },
+      );
       if (decision === 'fail') {
         const what = `${checkKindTitles[input.kind]}${check.position ? ` (${check.position})` : ''} failed: ${decided.resultUm.toFixed(1)} µm against ${decided.acceptanceLimitUm.toFixed(1)} µm${decided.guardBandUm > 0 ? ` (tolerance ${decided.toleranceUm.toFixed(1)} µm less a guard band of ${decided.guardBandUm.toFixed(1)} µm)` : ''}`;
         await placeHold(tx, actor, subject, { reason: 'failed_check', summary: what, checkId: check.id });
@@ -114,7 +140,10 @@ export class ChecksService {
         await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
           subject: `${subject.assetTag} is on hold: ${checkKindTitles[input.kind].toLowerCase()} failed`,
           heading: `${subject.assetTag} failed a field check and is on hold`,
-          paragraphs: [what + '.', 'It cannot be booked or checked out until it is recalibrated or passes the check again and someone releases it. Jobs it measured since its last good check may need a look.'],
+          paragraphs: [
+            what + '.',
+            'It cannot be booked or checked out until it is recalibrated or passes the check again and someone releases it. Jobs it measured since its last good check may need a look.',
+          ],
         });
       }
       return checkView(check);
@@ -182,7 +211,12 @@ export async function tipValidationStatus(tx: Scoped, tip: AssetRecord): Promise
   return {
     positions: positions.map((position) => {
       const last = latest.find((l) => l.position === position);
-      return { position, state: !last ? 'not_validated' : last.decision === 'pass' ? 'validated' : 'failed', lastCheckId: last?.id ?? null, lastPerformedAt: last?.performedAt.toISOString() ?? null };
+      return {
+        position,
+        state: !last ? 'not_validated' : last.decision === 'pass' ? 'validated' : 'failed',
+        lastCheckId: last?.id ?? null,
+        lastPerformedAt: last?.performedAt.toISOString() ?? null,
+      };
     }),
   };
 }

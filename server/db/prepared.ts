@@ -13,7 +13,7 @@ type PgQueryRunner = QueryRunner & { connect(): Promise<PgQueryable> };
 export async function preparedQuery<R>(manager: EntityManager | DataSource, name: string, text: string, values: unknown[]): Promise<R[]> {
   const runner = manager instanceof DataSource ? undefined : (manager.queryRunner as PgQueryRunner | undefined);
   const source = manager instanceof DataSource ? manager : manager.connection;
-  const client = (runner?.isTransactionActive && !runner.isReleased ? await runner.connect() : (source.driver as unknown as { master: PgQueryable }).master);
+  const client = runner?.isTransactionActive && !runner.isReleased ? await runner.connect() : (source.driver as unknown as { master: PgQueryable }).master;
   const result = await client.query({ name, text, values });
   return result.rows as R[];
 }

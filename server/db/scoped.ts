@@ -1,4 +1,13 @@
-import { In, type DeepPartial, type EntityManager, type EntityTarget, type FindManyOptions, type FindOptionsWhere, type ObjectLiteral, type QueryDeepPartialEntity } from 'typeorm';
+import {
+  In,
+  type DeepPartial,
+  type EntityManager,
+  type EntityTarget,
+  type FindManyOptions,
+  type FindOptionsWhere,
+  type ObjectLiteral,
+  type QueryDeepPartialEntity,
+} from 'typeorm';
 import { notFound } from '../http/errors';
 import type { OrgOwned } from './org-owned';
 import { preparedQuery } from './prepared';
@@ -34,7 +43,12 @@ export class Scoped {
   }
 
   /** The row, or the API's 404 naming `what` — another organization's row is simply not found. */
-  async get<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, where: FindOptionsWhere<T>, what: string, options: Omit<FindManyOptions<T>, 'where'> = {}) {
+  async get<T extends OrgOwned & ObjectLiteral>(
+    entity: EntityTarget<T>,
+    where: FindOptionsWhere<T>,
+    what: string,
+    options: Omit<FindManyOptions<T>, 'where'> = {},
+  ) {
     const row = await this.findOne(entity, where, options);
     if (!row) throw notFound(what);
     return row;
@@ -42,7 +56,12 @@ export class Scoped {
 
   /** Every row `ids` names (a request's `assetIds`, say), or the 404 naming the first that is not this
    * organization's: an id in a body is not found just as one in the path is, never a 422. */
-  async getEach<T extends OrgOwned & ObjectLiteral & { id: string }>(entity: EntityTarget<T>, ids: readonly string[], what: string, options: Omit<FindManyOptions<T>, 'where'> = {}): Promise<T[]> {
+  async getEach<T extends OrgOwned & ObjectLiteral & { id: string }>(
+    entity: EntityTarget<T>,
+    ids: readonly string[],
+    what: string,
+    options: Omit<FindManyOptions<T>, 'where'> = {},
+  ): Promise<T[]> {
     const wanted = [...new Set(ids)];
     const rows = wanted.length ? await this.find(entity, { ...options, where: { id: In(wanted) } as FindOptionsWhere<T> }) : [];
     const missing = wanted.find((id) => !rows.some((row) => row.id === id));
@@ -56,7 +75,11 @@ export class Scoped {
   }
 
   /** Insert many rows in chunks (one statement per chunk); returns the generated ids in order. */
-  async insertMany<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, rows: DeepPartial<Omit<T, 'organizationId'>>[], chunk = 1000): Promise<string[]> {
+  async insertMany<T extends OrgOwned & ObjectLiteral>(
+    entity: EntityTarget<T>,
+    rows: DeepPartial<Omit<T, 'organizationId'>>[],
+    chunk = 1000,
+  ): Promise<string[]> {
     const ids: string[] = [];
     for (let i = 0; i < rows.length; i += chunk) {
       const values = rows.slice(i, i + chunk).map((r) => ({ ...r, organizationId: this.organizationId }) as QueryDeepPartialEntity<T>);
@@ -84,7 +107,9 @@ export class Scoped {
   /** A query builder already limited to this organization. Add conditions with
    * `andWhere` — a later `where` would replace the organization condition. */
   select<T extends OrgOwned & ObjectLiteral>(entity: EntityTarget<T>, alias: string) {
-    return this.manager.createQueryBuilder(entity, alias).where(`${alias}.organization_id = :scopeOrganizationId`, { scopeOrganizationId: this.organizationId });
+    return this.manager
+      .createQueryBuilder(entity, alias)
+      .where(`${alias}.organization_id = :scopeOrganizationId`, { scopeOrganizationId: this.organizationId });
   }
 
   sql<R = Record<string, unknown>>(text: string, params: unknown[] = []): Promise<R[]> {

@@ -21,11 +21,22 @@ function drawLabel(doc: Pdf, a: AssetView, firm: string, x: number, y: number, w
   const tx = x + pad + qr + 2 * MM;
   const tw = w - (tx - x) - pad;
   const size = Math.max(6, Math.min(9, h / 11));
-  doc.fillColor(INK).font('Courier-Bold').fontSize(size * 1.55).text(a.assetTag, tx, y + pad, { width: tw, lineBreak: false, ellipsis: true });
+  doc
+    .fillColor(INK)
+    .font('Courier-Bold')
+    .fontSize(size * 1.55)
+    .text(a.assetTag, tx, y + pad, { width: tw, lineBreak: false, ellipsis: true });
   doc.font('Helvetica').fontSize(size).fillColor(INK).text(assetTypeTitles[a.type], { width: tw, lineBreak: false, ellipsis: true });
-  doc.font('Courier').fontSize(size * 0.95).text(`S/N ${a.serialNumber}`, { width: tw, lineBreak: false, ellipsis: true });
+  doc
+    .font('Courier')
+    .fontSize(size * 0.95)
+    .text(`S/N ${a.serialNumber}`, { width: tw, lineBreak: false, ellipsis: true });
   doc.moveDown(0.3).font('Helvetica-Bold').fontSize(size).text(calibrationLine(a), { width: tw });
-  doc.font('Helvetica').fontSize(size * 0.8).fillColor(MUTED).text(firm, tx, y + h - pad - size, { width: tw, height: size, ellipsis: true });
+  doc
+    .font('Helvetica')
+    .fontSize(size * 0.8)
+    .fillColor(MUTED)
+    .text(firm, tx, y + h - pad - size, { width: tw, height: size, ellipsis: true });
 }
 
 export const assetLabelPdf = (a: AssetView, firm: string) =>
@@ -40,6 +51,10 @@ export const kitLabelSheetPdf = (kitName: string, members: AssetView[], firm: st
     const w = (doc.page.width - 2 * left) / cols;
     const rows = Math.max(1, Math.ceil(members.length / cols));
     const h = Math.min(LABEL_H, (doc.page.height - top - 10 * MM) / rows);
-    doc.font('Helvetica-Bold').fontSize(11).fillColor(INK).text(`${kitName} — ${members.length} labels`, left, 10 * MM);
+    doc
+      .font('Helvetica-Bold')
+      .fontSize(11)
+      .fillColor(INK)
+      .text(`${kitName} — ${members.length} labels`, left, 10 * MM);
     members.forEach((a, i) => drawLabel(doc, a, firm, left + (i % cols) * w, top + Math.floor(i / cols) * h, w, h));
   });

@@ -29,8 +29,20 @@ export const dueItemsPdf = (firm: string, today: string, rows: DueRow[]) =>
         doc.addPage();
         y = doc.page.margins.top;
       }
-      const cells = [r.assetTag, r.type.replace('_', ' '), r.state === 'overdue' ? 'OVERDUE' : 'due soon', r.dueOn ?? 'none on record', r.provider ?? '', r.kitName ?? '', threatenedText(r) || '—'];
-      cells.forEach((c, i) => doc.font(i === 0 ? 'Courier-Bold' : i === 2 && r.state === 'overdue' ? 'Helvetica-Bold' : 'Helvetica').text(c, cols[i], y, { width: i === 6 ? 90 * MM : 30 * MM, lineBreak: false, ellipsis: true }));
+      const cells = [
+        r.assetTag,
+        r.type.replace('_', ' '),
+        r.state === 'overdue' ? 'OVERDUE' : 'due soon',
+        r.dueOn ?? 'none on record',
+        r.provider ?? '',
+        r.kitName ?? '',
+        threatenedText(r) || '—',
+      ];
+      cells.forEach((c, i) =>
+        doc
+          .font(i === 0 ? 'Courier-Bold' : i === 2 && r.state === 'overdue' ? 'Helvetica-Bold' : 'Helvetica')
+          .text(c, cols[i], y, { width: i === 6 ? 90 * MM : 30 * MM, lineBreak: false, ellipsis: true }),
+      );
       y += 13;
     }
     if (!rows.length) doc.text('Nothing is overdue or due soon.', cols[0], y);

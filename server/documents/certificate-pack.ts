@@ -40,8 +40,13 @@ async function certificatePages(pack: PDFDocument, pdf: Buffer | null): Promise<
 
 type Found = Awaited<ReturnType<typeof certificatePages>>;
 
-const statusText = { missing: 'no certificate on file', unreadable: 'certificate could not be read', withheld: 'certificate left out: it carries scripts or files' } as const;
-const foundText = (found: Found) => (typeof found === 'string' ? statusText[found] : found.contentOnly ? 'pages attached; scripts and files removed' : 'certificate attached');
+const statusText = {
+  missing: 'no certificate on file',
+  unreadable: 'certificate could not be read',
+  withheld: 'certificate left out: it carries scripts or files',
+} as const;
+const foundText = (found: Found) =>
+  typeof found === 'string' ? statusText[found] : found.contentOnly ? 'pages attached; scripts and files removed' : 'certificate attached';
 const dateOrDash = (d: string | null) => (d ? calendarDate(d) : '—');
 
 function coverPdf(input: PackInput, found: Found[]) {

@@ -18,10 +18,12 @@ export const money = (minor: number, currency: string) => formatMoney(minor, cur
 export const taxRateText = (basisPoints: number) => `${new Intl.NumberFormat(LOCALE, { maximumFractionDigits: 2 }).format(basisPoints / 100)} %`;
 
 /** A calendar date `YYYY-MM-DD` is already the firm's date: format it in UTC so it does not shift. */
-export const calendarDate = (isoDate: string) => new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
+export const calendarDate = (isoDate: string) =>
+  new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
 
 /** A moment (ISO timestamp) as the firm's wall-clock date and time. */
-export const firmDateTime = (iso: string, timeZone: string) => new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeStyle: 'short', timeZone }).format(new Date(iso));
+export const firmDateTime = (iso: string, timeZone: string) =>
+  new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeStyle: 'short', timeZone }).format(new Date(iso));
 
 export const typeTitle = (type: string) => assetTypeTitles[type as AssetType] ?? type;
 
@@ -59,7 +61,11 @@ export function facts(doc: Pdf, rows: [label: string, value: string | null][]) {
     if (value === null) continue;
     keepTogether(doc, 14);
     const y = doc.y;
-    doc.font('Helvetica').fontSize(BODY).fillColor(MUTED).text(label, left, y, { width: 40 * MM });
+    doc
+      .font('Helvetica')
+      .fontSize(BODY)
+      .fillColor(MUTED)
+      .text(label, left, y, { width: 40 * MM });
     const labelEnd = doc.y;
     doc.fillColor(INK).text(value, left + 42 * MM, y, { width: contentWidth(doc) - 42 * MM });
     doc.x = left;
@@ -84,18 +90,36 @@ export function table(doc: Pdf, columns: Column[], rows: string[][], fontSize = 
   const left = doc.page.margins.left;
   const widths = columns.map((c) => c.share * contentWidth(doc));
   const height = (cells: string[], header: boolean) =>
-    Math.max(...cells.map((text, i) => doc.font(cellFont(columns[i], header)).fontSize(fontSize).heightOfString(text, { width: widths[i] - GAP }))) + 3;
+    Math.max(
+      ...cells.map((text, i) =>
+        doc
+          .font(cellFont(columns[i], header))
+          .fontSize(fontSize)
+          .heightOfString(text, { width: widths[i] - GAP }),
+      ),
+    ) + 3;
   const draw = (cells: string[], header: boolean) => {
     const y = doc.y;
     let x = left;
     doc.fillColor(header ? MUTED : INK);
     cells.forEach((text, i) => {
-      doc.font(cellFont(columns[i], header)).fontSize(fontSize).text(text, x, y, { width: widths[i] - GAP, align: columns[i].right ? 'right' : 'left' });
+      doc
+        .font(cellFont(columns[i], header))
+        .fontSize(fontSize)
+        .text(text, x, y, { width: widths[i] - GAP, align: columns[i].right ? 'right' : 'left' });
       x += widths[i];
     });
     doc.x = left;
     doc.y = y + height(cells, header);
-    if (header) doc.save().strokeColor('#d8d1c2').lineWidth(0.5).moveTo(left, doc.y - 1.5).lineTo(left + contentWidth(doc), doc.y - 1.5).stroke().restore();
+    if (header)
+      doc
+        .save()
+        .strokeColor('#d8d1c2')
+        .lineWidth(0.5)
+        .moveTo(left, doc.y - 1.5)
+        .lineTo(left + contentWidth(doc), doc.y - 1.5)
+        .stroke()
+        .restore();
   };
   const header = columns.map((c) => c.header);
   keepTogether(doc, height(header, true) + (rows[0] ? height(rows[0], false) : 0));
@@ -119,7 +143,10 @@ export function totals(doc: Pdf, rows: { label: string; value: string; strong?: 
   doc.moveDown(0.4);
   for (const row of rows) {
     const y = doc.y;
-    doc.font(row.strong ? 'Helvetica-Bold' : 'Helvetica').fontSize(BODY).fillColor(INK);
+    doc
+      .font(row.strong ? 'Helvetica-Bold' : 'Helvetica')
+      .fontSize(BODY)
+      .fillColor(INK);
     doc.text(row.label, labelX, y, { width: valueX - labelX - GAP, align: 'right' });
     doc.text(row.value, valueX, y, { width: width * 0.25 - GAP, align: 'right' });
     doc.y = Math.max(doc.y, y + 13);
@@ -141,9 +168,23 @@ export function signatureLines(doc: Pdf, parties: string[]) {
   const width = contentWidth(doc) / parties.length;
   parties.forEach((party, i) => {
     const x = doc.page.margins.left + i * width;
-    doc.save().strokeColor(INK).lineWidth(0.6).moveTo(x, y).lineTo(x + width - 12 * MM, y).stroke().restore();
-    doc.font('Helvetica-Bold').fontSize(9).fillColor(INK).text(`For ${party}`, x, y + 4, { width: width - 12 * MM });
-    doc.font('Helvetica').fillColor(MUTED).text('Name, signature and date', x, doc.y, { width: width - 12 * MM });
+    doc
+      .save()
+      .strokeColor(INK)
+      .lineWidth(0.6)
+      .moveTo(x, y)
+      .lineTo(x + width - 12 * MM, y)
+      .stroke()
+      .restore();
+    doc
+      .font('Helvetica-Bold')
+      .fontSize(9)
+      .fillColor(INK)
+      .text(`For ${party}`, x, y + 4, { width: width - 12 * MM });
+    doc
+      .font('Helvetica')
+      .fillColor(MUTED)
+      .text('Name, signature and date', x, doc.y, { width: width - 12 * MM });
   });
   doc.x = doc.page.margins.left;
 }

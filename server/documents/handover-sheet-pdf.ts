@@ -42,7 +42,13 @@ export function handoverSheetPdf(firm: { name: string; timeZone: string }, sheet
       sheet.items.map((i) => {
         const line = sheet.checklist?.find((l) => l.assetId === i.id);
         // pdfkit's built-in fonts have no ballot-box glyphs: ticked lines say what was ticked, open ones leave a line to write on.
-        return [i.assetTag, typeTitle(i.type), i.serialNumber, line ? `yes, ${conditionWords[line.condition]}${line.note ? `: ${line.note}` : ''}` : '________', '________'];
+        return [
+          i.assetTag,
+          typeTitle(i.type),
+          i.serialNumber,
+          line ? `yes, ${conditionWords[line.condition]}${line.note ? `: ${line.note}` : ''}` : '________',
+          '________',
+        ];
       }),
     );
     section(doc, 'Cautions');

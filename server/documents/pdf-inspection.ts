@@ -10,9 +10,7 @@ import { PDFArray, PDFDict, PDFDocument, PDFName, PDFRef, PDFStream, type PDFCon
 export type ActiveContent = '/JavaScript' | '/Launch' | '/EmbeddedFiles' | '/RichMedia' | '/XFA' | '/OpenAction' | '/AA';
 
 export type PdfInspection =
-  | { kind: 'pdf'; document: PDFDocument; pages: number; activeContent: ActiveContent[] }
-  | { kind: 'encrypted' }
-  | { kind: 'not_pdf'; reason: string };
+  { kind: 'pdf'; document: PDFDocument; pages: number; activeContent: ActiveContent[] } | { kind: 'encrypted' } | { kind: 'not_pdf'; reason: string };
 
 /** How each finding reads in an error message, in the order it is reported. */
 const words: Record<ActiveContent, string> = {
@@ -118,7 +116,20 @@ export function describeActiveContent(found: ActiveContent[]): string {
 }
 
 /** Page entries that draw the page; everything else (annotations, /AA, beads, thumbnails…) is left behind. */
-const drawingEntries = new Set(['Type', 'Parent', 'MediaBox', 'CropBox', 'BleedBox', 'TrimBox', 'ArtBox', 'Rotate', 'UserUnit', 'Resources', 'Contents', 'Group']);
+const drawingEntries = new Set([
+  'Type',
+  'Parent',
+  'MediaBox',
+  'CropBox',
+  'BleedBox',
+  'TrimBox',
+  'ArtBox',
+  'Rotate',
+  'UserUnit',
+  'Resources',
+  'Contents',
+  'Group',
+]);
 
 /** Reduce a page of a loaded document to what it draws, so copying it brings no annotations or actions along. */
 export function keepDrawingOnly(page: PDFPage) {

@@ -1,11 +1,28 @@
 import { lateChargeMinor, periodWords } from '../../shared/billing/quote';
 import type { RentalView } from '../../shared/billing/views';
-import { bullets, calendarDate, facts, firmDateTime, heading, money, rentalCautions, section, signatureLines, table, taxRateText, totals, typeTitle } from './document-layout';
+import {
+  bullets,
+  calendarDate,
+  facts,
+  firmDateTime,
+  heading,
+  money,
+  rentalCautions,
+  section,
+  signatureLines,
+  table,
+  taxRateText,
+  totals,
+  typeTitle,
+} from './document-layout';
 import { MM, renderPdf } from './pdf';
 
 function terms(rental: RentalView, currency: string) {
   const late = rental.quote.lines
-    .map((l) => `${l.description}: ${money(l.rates.dayMinor, currency)} day rate + ${money(l.lateFeePerDayMinor, currency)} late fee = ${money(lateChargeMinor(1, l.rates, l.lateFeePerDayMinor), currency)} a day each`)
+    .map(
+      (l) =>
+        `${l.description}: ${money(l.rates.dayMinor, currency)} day rate + ${money(l.lateFeePerDayMinor, currency)} late fee = ${money(lateChargeMinor(1, l.rates, l.lateFeePerDayMinor), currency)} a day each`,
+    )
     .join('; ');
   return [
     `Late return: for every day after ${calendarDate(rental.endsOn)} that an item is not back, it is charged its day rate plus a late fee per day, with tax on top. ${late}.`,

@@ -5,7 +5,7 @@ import { BRASS, INK, MM, MUTED, renderPdf } from './pdf';
 export const batteryCautions = [
   'Lithium-ion batteries that were dropped, are swollen or damaged are a fire risk: do not charge them and do not ship them by air.',
   'Over 100 Wh up to 160 Wh: the carrier must approve. Over 160 Wh: not in passenger baggage.',
-  "Tracker cases are heavy: lift with two people or use a trolley.",
+  'Tracker cases are heavy: lift with two people or use a trolley.',
   "These lines summarise common rules; the carrier's current rules, local codes and the instrument maker's instructions come first.",
 ];
 
@@ -14,7 +14,11 @@ export const shippingSheetPdf = (kitName: string, firm: string, sheet: ReturnTyp
     const left = doc.page.margins.left;
     doc.font('Helvetica').fontSize(9).fillColor(MUTED).text(firm);
     doc.font('Helvetica-Bold').fontSize(16).fillColor(INK).text(`Battery shipping sheet — ${kitName}`);
-    doc.font('Helvetica').fontSize(9).fillColor(MUTED).text('Watt-hours = nominal voltage × rated capacity. Classes follow the IATA lithium-ion passenger limits.');
+    doc
+      .font('Helvetica')
+      .fontSize(9)
+      .fillColor(MUTED)
+      .text('Watt-hours = nominal voltage × rated capacity. Classes follow the IATA lithium-ion passenger limits.');
     doc.moveDown(1);
     const cols = [left, left + 35 * MM, left + 60 * MM, left + 82 * MM, left + 104 * MM];
     const header = ['Battery', 'Nominal V', 'Rated Ah', 'Energy', 'Class'];
@@ -24,7 +28,13 @@ export const shippingSheetPdf = (kitName: string, firm: string, sheet: ReturnTyp
     y += 14;
     doc.font('Helvetica').fontSize(9);
     for (const line of sheet.lines) {
-      const cells = [line.assetTag, String(line.nominalVoltageV), String(line.ratedCapacityAh), formatWattHours(line.wattHours, 'en-GB'), shippingClassText[line.class]];
+      const cells = [
+        line.assetTag,
+        String(line.nominalVoltageV),
+        String(line.ratedCapacityAh),
+        formatWattHours(line.wattHours, 'en-GB'),
+        shippingClassText[line.class],
+      ];
       cells.forEach((c, i) => doc.font(i === 0 ? 'Courier' : 'Helvetica').text(c, cols[i], y, { width: i === 4 ? 70 * MM : 30 * MM }));
       y += 14;
     }
@@ -34,7 +44,11 @@ export const shippingSheetPdf = (kitName: string, firm: string, sheet: ReturnTyp
     }
     doc.font('Helvetica-Bold').text(`Total: ${sheet.count} batteries, ${formatWattHours(sheet.totalWattHours, 'en-GB')}`, left, y + 6);
     doc.moveDown(2);
-    doc.save().rect(left, doc.y, doc.page.width - 2 * left, 3).fill(BRASS).restore();
+    doc
+      .save()
+      .rect(left, doc.y, doc.page.width - 2 * left, 3)
+      .fill(BRASS)
+      .restore();
     doc.moveDown(0.8);
     doc.font('Helvetica-Bold').fontSize(11).fillColor(INK).text('Cautions', left);
     doc.font('Helvetica').fontSize(9);

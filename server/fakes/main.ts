@@ -31,9 +31,7 @@ async function main() {
     paymentWebhookUrl: env.PAYMENT_WEBHOOK_URL,
     paymentWebhookSecret: env.PAYMENT_WEBHOOK_SECRET,
   });
-  console.log(
-    `Nestkeeper fakes: SMTP sink on ${env.FAKES_HOST}:${fakes.smtpPort}, payment provider on http://${env.FAKES_HOST}:${fakes.paymentPort}`,
-  );
+  console.log(`Nestkeeper fakes: SMTP sink on ${env.FAKES_HOST}:${fakes.smtpPort}, payment provider on http://${env.FAKES_HOST}:${fakes.paymentPort}`);
 
   let stopping = false;
   const stop = async (signal: string) => {

@@ -62,7 +62,10 @@ export function createPaymentFakeApp(store: PaymentStore): express.Express {
     res.json({ status: 'ok' });
   });
   // Test-only controls (clock, faults, webhook log); see ./payments/control.ts.
-  app.use('/__fake', controlRouter(store, () => sweepPaymentFake(store)));
+  app.use(
+    '/__fake',
+    controlRouter(store, () => sweepPaymentFake(store)),
+  );
   app.use('/v1', express.urlencoded({ extended: true, limit: '1mb', parameterLimit: 2000 }));
   app.use('/v1', requireApiKey(store));
   // Before idempotency, so a "timeout" fault's response is still kept for replay.

@@ -42,7 +42,10 @@ const smtpError = (responseCode: number, message: string) => Object.assign(new E
 export function headerRecord(mail: ParsedMail): Record<string, string> {
   const out: Record<string, string> = {};
   for (const { key, line } of mail.headerLines) {
-    const value = line.slice(line.indexOf(':') + 1).replace(/\r?\n[ \t]+/g, ' ').trim();
+    const value = line
+      .slice(line.indexOf(':') + 1)
+      .replace(/\r?\n[ \t]+/g, ' ')
+      .trim();
     out[key] = out[key] === undefined ? value : `${out[key]}\n${value}`;
   }
   for (const [key, value] of mail.headers) {

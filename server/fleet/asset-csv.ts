@@ -83,13 +83,68 @@ export function assetsToCsv(assets: AssetView[]): string {
 }
 
 export const importTemplateCsv = () =>
-  toCsv(
-    importColumns,
+  toCsv(importColumns, [
     [
-      ['tip', 'TIP-101', 'PT-55012', 'Example Maker', 'Tip 6 mm', '', 'E2:00:01:5A', 'Shelf B2', '18000', '', 'yes', '12', 'Example Lab', '2026-06-01', 'Kit A', '120', 'vertical;horizontal', '', '', '', '', '', '', '', '', '', '', ''],
-      ['battery', 'BAT-101', 'BP-9921', 'Example Maker', 'Pack 14.4', '', '', 'Shelf C1', '90000', '', 'no', '', '', '', '', '', '', '14.4', '6.8', '120', 'no', '', '', '', '', '', '', ''],
+      'tip',
+      'TIP-101',
+      'PT-55012',
+      'Example Maker',
+      'Tip 6 mm',
+      '',
+      'E2:00:01:5A',
+      'Shelf B2',
+      '18000',
+      '',
+      'yes',
+      '12',
+      'Example Lab',
+      '2026-06-01',
+      'Kit A',
+      '120',
+      'vertical;horizontal',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
     ],
-  );
+    [
+      'battery',
+      'BAT-101',
+      'BP-9921',
+      'Example Maker',
+      'Pack 14.4',
+      '',
+      '',
+      'Shelf C1',
+      '90000',
+      '',
+      'no',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '14.4',
+      '6.8',
+      '120',
+      'no',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+      '',
+    ],
+  ]);
 
 const yes = new Set(['yes', 'true', '1', 'y']);
 const no = new Set(['no', 'false', '0', 'n']);
@@ -134,7 +189,17 @@ export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: Import
     for (const [key, kind] of Object.entries(specColumns)) {
       const column = `spec.${key}`;
       if (cell(column) === undefined) continue;
-      specs[key] = kind === 'number' ? number(column) : kind === 'boolean' ? bool(column) : kind === 'list' ? cell(column)!.split(';').map((s) => s.trim()).filter(Boolean) : cell(column);
+      specs[key] =
+        kind === 'number'
+          ? number(column)
+          : kind === 'boolean'
+            ? bool(column)
+            : kind === 'list'
+              ? cell(column)!
+                  .split(';')
+                  .map((s) => s.trim())
+                  .filter(Boolean)
+              : cell(column);
     }
     const required = bool('calibrationRequired') ?? false;
     const candidate = {
@@ -148,7 +213,12 @@ export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: Import
       location: cell('location') ?? null,
       replacementValueMinor: number('replacementValueMinor') ?? null,
       notes: cell('notes') ?? null,
-      calibration: { required, intervalMonths: number('calibrationIntervalMonths') ?? null, provider: cell('calibrationProvider') ?? null, lastCalibratedOn: cell('lastCalibratedOn') ?? null },
+      calibration: {
+        required,
+        intervalMonths: number('calibrationIntervalMonths') ?? null,
+        provider: cell('calibrationProvider') ?? null,
+        lastCalibratedOn: cell('lastCalibratedOn') ?? null,
+      },
       specs,
     };
     const result = createAssetPayload.safeParse(candidate);
@@ -166,7 +236,12 @@ export function parseAssetCsv(text: string): { rows: ImportRow[]; errors: Import
 function columnFor(path: PropertyKey[]): string {
   const [head, ...rest] = path.map(String);
   if (head === 'specs') return `spec.${rest[0] ?? ''}`;
-  if (head === 'calibration') return { required: 'calibrationRequired', intervalMonths: 'calibrationIntervalMonths', provider: 'calibrationProvider', lastCalibratedOn: 'lastCalibratedOn' }[rest[0]] ?? 'calibrationRequired';
+  if (head === 'calibration')
+    return (
+      { required: 'calibrationRequired', intervalMonths: 'calibrationIntervalMonths', provider: 'calibrationProvider', lastCalibratedOn: 'lastCalibratedOn' }[
+        rest[0]
+      ] ?? 'calibrationRequired'
+    );
   return head;
 }
 

@@ -25,7 +25,10 @@ export async function importAssetsCsv(db: DataSource, actor: Actor, text: string
     const clashes: ImportProblem[] = [];
     const firstRowWith = new Map<string, number>();
     for (const { row, payload } of rows) {
-      for (const [column, value] of [['assetTag', payload.assetTag], ['rfidTag', payload.rfidTag]] as const) {
+      for (const [column, value] of [
+        ['assetTag', payload.assetTag],
+        ['rfidTag', payload.rfidTag],
+      ] as const) {
         if (!value) continue;
         const key = `${column}:${value}`;
         const earlier = firstRowWith.get(key);
@@ -45,14 +48,34 @@ export async function importAssetsCsv(db: DataSource, actor: Actor, text: string
     const takenRfids = new Set(taken.map((t) => t.rfid_tag));
     for (const { row, payload } of rows) {
       if (takenTags.has(payload.assetTag)) clashes.push({ row, column: 'assetTag', message: `${payload.assetTag} is already in your fleet` });
-      if (payload.rfidTag && takenRfids.has(payload.rfidTag)) clashes.push({ row, column: 'rfidTag', message: `${payload.rfidTag} is already on an asset in your fleet` });
+      if (payload.rfidTag && takenRfids.has(payload.rfidTag))
+        clashes.push({ row, column: 'rfidTag', message: `${payload.rfidTag} is already on an asset in your fleet` });
     }
     const allErrors = [...errors, ...clashes].sort((a, b) => a.row - b.row);
-    const preview = rows.slice(0, 20).map(({ row, kit, payload }) => ({ row, kit, type: payload.type, assetTag: payload.assetTag, serialNumber: payload.serialNumber, manufacturer: payload.manufacturer, model: payload.model }));
-    const summary = { mode, rowCount, valid: allErrors.length === 0, errors: allErrors.slice(0, MAX_ERRORS_SHOWN), errorCount: allErrors.length, preview, created: 0 };
+    const preview = rows.slice(0, 20).map(({ row, kit, payload }) => ({
+      row,
+      kit,
+      type: payload.type,
+      assetTag: payload.assetTag,
+      serialNumber: payload.serialNumber,
+      manufacturer: payload.manufacturer,
+      model: payload.model,
+    }));
+    const summary = {
+      mode,
+      rowCount,
+      valid: allErrors.length === 0,
+      errors: allErrors.slice(0, MAX_ERRORS_SHOWN),
+      errorCount: allErrors.length,
+      preview,
+      created: 0,
+    };
     if (mode === 'preview') return summary;
     if (allErrors.length) {
-      throw ruleBroken('import_invalid', `Nothing was imported: ${allErrors.length} problem(s) in the file.`, { errors: summary.errors, errorCount: allErrors.length });
+      throw ruleBroken('import_invalid', `Nothing was imported: ${allErrors.length} problem(s) in the file.`, {
+        errors: summary.errors,
+        errorCount: allErrors.length,
+      });
     }
 
     const kitNames = [...new Set(rows.map((r) => r.kit).filter((k): k is string => !!k))];
@@ -87,7 +110,11 @@ export async function importAssetsCsv(db: DataSource, actor: Actor, text: string
       }),
     );
     await noteCustody(tx, actor, ids, 'registered', { counterpart: ctx.name, why: 'Imported from CSV' });
-    await recordAudits(tx, actor, ids.map((id, i) => ({ action: 'asset.created', subject: { type: 'asset', id }, details: { assetTag: rows[i].payload.assetTag, via: 'csv_import' } })));
+    await recordAudits(
+      tx,
+      actor,
+      ids.map((id, i) => ({ action: 'asset.created', subject: { type: 'asset', id }, details: { assetTag: rows[i].payload.assetTag, via: 'csv_import' } })),
+    );
     await recordAudit(tx, actor, 'assets.imported', { type: 'organization', id: actor.organizationId }, { count: ids.length, kitsCreated: kitNames.length });
     return { ...summary, created: ids.length };
   });

@@ -4,7 +4,6 @@ import type { Scoped } from '../db/scoped';
 import type { OrgContext } from '../organizations';
 import type { Asset } from './asset.entity';
 
-
 const sortColumns: Record<string, string> = {
   assetTag: 'a.asset_tag',
   type: 'a.type',
@@ -37,7 +36,8 @@ const COLUMNS = `a.id, a.organization_id AS "organizationId", a.type, a.asset_ta
 const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 type Row = Asset & { kitName: string | null };
-const toAsset = ({ kitName, ...row }: Row): Asset => Object.assign(row, { kit: row.kitId ? ({ id: row.kitId, name: kitName } as Asset['kit']) : null }) as Asset;
+const toAsset = ({ kitName, ...row }: Row): Asset =>
+  Object.assign(row, { kit: row.kitId ? ({ id: row.kitId, name: kitName } as Asset['kit']) : null }) as Asset;
 
 /**
  * The filtered, sorted asset list (one page and the total), shared by the list, the CSV export and the home pages. Plain SQL
@@ -76,7 +76,9 @@ export async function findAssets(tx: Scoped, ctx: OrgContext, filter: Omit<Asset
        SELECT ${COLUMNS}, (SELECT count(*) FROM hits) AS total FROM hits a LEFT JOIN kits k ON k.id = a.kit_id ORDER BY ${order}${limit}`,
       params,
     );
-    const total = rows.length ? Number(rows[0].total) : Number((await tx.sql<{ n: string }>(`SELECT count(*) AS n FROM assets a WHERE ${filters}`, params))[0].n);
+    const total = rows.length
+      ? Number(rows[0].total)
+      : Number((await tx.sql<{ n: string }>(`SELECT count(*) AS n FROM assets a WHERE ${filters}`, params))[0].n);
     return { assets: rows.map(({ total: _total, ...row }) => toAsset(row as Row)), total };
   }
   // Unfiltered: the page straight off the sort index, and the total from the organization index.

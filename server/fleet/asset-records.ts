@@ -15,7 +15,9 @@ export const findAsset = (tx: Scoped, id: string): Promise<AssetRecord | null> =
 
 /** The assets among `ids` that exist; in packing-list order (type, then tag) when asked. */
 export const assetsByIds = (tx: Scoped, ids: string[], opts: { packingOrder?: boolean } = {}): Promise<AssetRecord[]> =>
-  ids.length ? tx.find(Asset, { where: { id: In([...new Set(ids)]) }, ...(opts.packingOrder ? { order: { type: 'ASC', assetTag: 'ASC' } as const } : {}) }) : Promise.resolve([]);
+  ids.length
+    ? tx.find(Asset, { where: { id: In([...new Set(ids)]) }, ...(opts.packingOrder ? { order: { type: 'ASC', assetTag: 'ASC' } as const } : {}) })
+    : Promise.resolve([]);
 
 /** The assets, row-locked until the caller's transaction ends; 404 when one is missing. */
 /** Each of these assets, or 404 naming the first that the firm does not have. */
@@ -39,7 +41,9 @@ export async function markDamaged(tx: Scoped, asset: Pick<AssetRecord, 'id' | 's
   await tx.updateWhere(Asset, { id: asset.id }, { specs: { ...asset.specs, damaged: true } });
 }
 
-export type CalibrationPlan = Partial<Pick<Asset, 'calibrationRequired' | 'calibrationIntervalMonths' | 'calibrationProvider' | 'lastCalibratedOn' | 'dueOn' | 'notifiedCalibrationState'>>;
+export type CalibrationPlan = Partial<
+  Pick<Asset, 'calibrationRequired' | 'calibrationIntervalMonths' | 'calibrationProvider' | 'lastCalibratedOn' | 'dueOn' | 'notifiedCalibrationState'>
+>;
 
 /** The plan a certificate or an interval decision sets (calibration owns the rule, fleet the row). */
 export async function updateCalibrationPlan(tx: Scoped, assetId: string, plan: CalibrationPlan) {

@@ -25,7 +25,17 @@ import type { Page } from '../../shared/lists/page';
 const isUniqueViolation = (err: unknown) => (err as { code?: string })?.code === '23505';
 
 /** Fields the person edits directly (the rest are derived or belong to other flows). */
-const editableFields = ['assetTag', 'serialNumber', 'manufacturer', 'model', 'firmwareVersion', 'rfidTag', 'location', 'replacementValueMinor', 'notes'] as const;
+const editableFields = [
+  'assetTag',
+  'serialNumber',
+  'manufacturer',
+  'model',
+  'firmwareVersion',
+  'rfidTag',
+  'location',
+  'replacementValueMinor',
+  'notes',
+] as const;
 
 export class AssetsService {
   constructor(
@@ -120,9 +130,13 @@ export class AssetsService {
         if (plan.intervalMonths !== undefined) change('calibrationIntervalMonths', plan.intervalMonths);
         if (plan.provider !== undefined) change('calibrationProvider', plan.provider);
         if (plan.lastCalibratedOn !== undefined) change('lastCalibratedOn', plan.lastCalibratedOn);
-        change('dueOn', dueOnForPlan({ required: asset.calibrationRequired, intervalMonths: asset.calibrationIntervalMonths, lastCalibratedOn: asset.lastCalibratedOn }));
+        change(
+          'dueOn',
+          dueOnForPlan({ required: asset.calibrationRequired, intervalMonths: asset.calibrationIntervalMonths, lastCalibratedOn: asset.lastCalibratedOn }),
+        );
       }
-      if (changes.assetTag || changes.rfidTag) await this.assertIdentityFree(tx, changes.assetTag ? asset.assetTag : null, changes.rfidTag ? asset.rfidTag : null, asset.id);
+      if (changes.assetTag || changes.rfidTag)
+        await this.assertIdentityFree(tx, changes.assetTag ? asset.assetTag : null, changes.rfidTag ? asset.rfidTag : null, asset.id);
       if (Object.keys(changes).length === 0) return toAssetView(asset, ctx, this.publicUrl);
       // Only the changed fields: the status is custody.ts's to write, even if it moved meanwhile.
       await this.saving(() => tx.updateWhere(Asset, { id }, Object.fromEntries(Object.keys(changes).map((k) => [k, asset[k as keyof Asset]]))));
@@ -182,7 +196,11 @@ export class AssetsService {
   /** 409 naming the clash; the unique indexes catch a race between two requests. */
   private async assertIdentityFree(tx: Scoped, assetTag: string | null, rfidTag: string | null, exceptId?: string) {
     const clash = async (column: string, value: string) =>
-      (await tx.select(Asset, 'a').andWhere(`a.${column} = :value`, { value }).andWhere(exceptId ? 'a.id <> :exceptId' : 'TRUE', { exceptId }).getOne()) ?? null;
+      (await tx
+        .select(Asset, 'a')
+        .andWhere(`a.${column} = :value`, { value })
+        .andWhere(exceptId ? 'a.id <> :exceptId' : 'TRUE', { exceptId })
+        .getOne()) ?? null;
     const fields: Record<string, string> = {};
     const messages: string[] = [];
     if (assetTag) {

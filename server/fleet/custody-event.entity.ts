@@ -1,7 +1,8 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { AssetBound } from './asset-bound';
 
-export type CustodyKind = 'registered' | 'checked_out' | 'returned' | 'sent_to_lab' | 'back_from_lab' | 'held' | 'released' | 'retired' | 'moved' | 'calibrated';
+export type CustodyKind =
+  'registered' | 'checked_out' | 'returned' | 'sent_to_lab' | 'back_from_lab' | 'held' | 'released' | 'retired' | 'moved' | 'calibrated';
 
 /** Append-only chain of custody: who had an item, where, from when (DESIGN.md §3).
  * The database refuses UPDATE and DELETE on this table. */

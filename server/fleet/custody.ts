@@ -49,7 +49,12 @@ type Locked = Pick<Asset, 'id' | 'assetTag' | 'status' | 'location'>;
 async function lockRows(tx: Scoped, assetIds: string[]): Promise<Locked[]> {
   const ids = [...new Set(assetIds)];
   if (!ids.length) return [];
-  const rows = await tx.find(Asset, { select: { id: true, assetTag: true, status: true, location: true }, where: { id: In(ids) }, order: { id: 'ASC' }, lock: { mode: 'pessimistic_write' } });
+  const rows = await tx.find(Asset, {
+    select: { id: true, assetTag: true, status: true, location: true },
+    where: { id: In(ids) },
+    order: { id: 'ASC' },
+    lock: { mode: 'pessimistic_write' },
+  });
   if (rows.length !== ids.length) throw notFound('That asset');
   return rows;
 }
@@ -72,7 +77,13 @@ function custodyRows(rows: Locked[], kindOf: (row: Locked) => CustodyKind, actor
  * the table, then sets the status and writes one custody event and one audit
  * entry (`asset.<kind>`, with `details`) per item.
  */
-export async function moveAssets(tx: Scoped, actor: Pick<Actor, 'userId'> | null, assetIds: string[], to: AssetStatus, d: CustodyDetails & { details?: Record<string, unknown> } = {}) {
+export async function moveAssets(
+  tx: Scoped,
+  actor: Pick<Actor, 'userId'> | null,
+  assetIds: string[],
+  to: AssetStatus,
+  d: CustodyDetails & { details?: Record<string, unknown> } = {},
+) {
   const rows = await lockRows(tx, assetIds);
   const refused = rows.filter((r) => !moveKind(r.status, to));
   if (refused.length) {
@@ -106,14 +117,33 @@ export async function noteCustody(tx: Scoped, actor: Pick<Actor, 'userId'> | nul
   const rows = await lockRows(tx, assetIds);
   const shouldMove = rows.filter((r) => Object.values(movesFrom(r.status)).includes(kind));
   if (shouldMove.length) {
-    throw ruleBroken('custody_note_refused', `${shouldMove.map((r) => `${r.assetTag} is ${statusWords[r.status]}: "${kind.replace(/_/g, ' ')}" changes its status`).join('; ')}.`, {
-      refused: shouldMove.map((r) => ({ assetId: r.id, assetTag: r.assetTag, status: r.status, kind })),
-    });
+    throw ruleBroken(
+      'custody_note_refused',
+      `${shouldMove.map((r) => `${r.assetTag} is ${statusWords[r.status]}: "${kind.replace(/_/g, ' ')}" changes its status`).join('; ')}.`,
+      {
+        refused: shouldMove.map((r) => ({ assetId: r.id, assetTag: r.assetTag, status: r.status, kind })),
+      },
+    );
   }
-  if (rows.length) await tx.insertMany(CustodyEvent, custodyRows(rows, () => kind, actor, d));
+  if (rows.length)
+    await tx.insertMany(
+      CustodyEvent,
+      custodyRows(rows, () => kind, actor, d),
+    );
 }
 
 /** Demo seeds only: events from before the items' present state (past bookings), written as history. */
-export async function recordPastCustody(tx: Scoped, events: { assetId: string; kind: CustodyKind; actorUserId: string | null; holder: string | null; location: string | null; bookingId: string | null; note: string | null }[]) {
+export async function recordPastCustody(
+  tx: Scoped,
+  events: {
+    assetId: string;
+    kind: CustodyKind;
+    actorUserId: string | null;
+    holder: string | null;
+    location: string | null;
+    bookingId: string | null;
+    note: string | null;
+  }[],
+) {
   if (events.length) await tx.insertMany(CustodyEvent, events);
 }

@@ -21,7 +21,11 @@ export function equipmentRecordItems(a: AssetView): EquipmentRecordItem[] {
     {
       clause: '6.4.13 a)',
       requirement: 'Identity of the equipment, including software and firmware version',
-      value: text(`${a.assetTag} (${assetTypeTitles[a.type]})`, a.firmwareVersion ? `firmware ${a.firmwareVersion}` : null, a.rfidTag ? `RFID ${a.rfidTag}` : null),
+      value: text(
+        `${a.assetTag} (${assetTypeTitles[a.type]})`,
+        a.firmwareVersion ? `firmware ${a.firmwareVersion}` : null,
+        a.rfidTag ? `RFID ${a.rfidTag}` : null,
+      ),
       ...(typesWithFirmware.includes(a.type) && !a.firmwareVersion ? { note: 'No firmware version recorded.' } : {}),
     },
     {
@@ -35,12 +39,21 @@ export function equipmentRecordItems(a: AssetView): EquipmentRecordItem[] {
       value: cal.lastCalibratedOn ? `Calibrated on ${cal.lastCalibratedOn}${cal.provider ? ` by ${cal.provider}` : ''}` : null,
       note: 'Certificates and field checks are listed here once they are recorded.',
     },
-    { clause: '6.4.13 d)', requirement: 'Current location', value: text(a.location, `status: ${a.status.replace('_', ' ')}`, a.kit ? `kit ${a.kit.name}` : null) },
+    {
+      clause: '6.4.13 d)',
+      requirement: 'Current location',
+      value: text(a.location, `status: ${a.status.replace('_', ' ')}`, a.kit ? `kit ${a.kit.name}` : null),
+    },
     {
       clause: '6.4.13 e)',
       requirement: 'Calibration dates, results, adjustments, acceptance criteria, and the due date of the next calibration or the calibration interval',
       value: cal.required
-        ? text(cal.lastCalibratedOn ? `last ${cal.lastCalibratedOn}` : 'no calibration on record', cal.intervalMonths ? `interval ${cal.intervalMonths} months` : null, cal.dueOn ? `due ${cal.dueOn}` : null, `state: ${cal.state.replace('_', ' ')}`)
+        ? text(
+            cal.lastCalibratedOn ? `last ${cal.lastCalibratedOn}` : 'no calibration on record',
+            cal.intervalMonths ? `interval ${cal.intervalMonths} months` : null,
+            cal.dueOn ? `due ${cal.dueOn}` : null,
+            `state: ${cal.state.replace('_', ' ')}`,
+          )
         : 'Calibration not required for this item',
     },
     {
@@ -60,7 +73,7 @@ export function equipmentRecordItems(a: AssetView): EquipmentRecordItem[] {
     {
       clause: '6.4.13 h)',
       requirement: 'Details of any damage, malfunction, modification to, or repair of, the equipment',
-      value: a.status === 'retired' ? `Retired: ${a.retiredReason}` : (specs.damaged ? 'Marked damaged' : 'None recorded'),
+      value: a.status === 'retired' ? `Retired: ${a.retiredReason}` : specs.damaged ? 'Marked damaged' : 'None recorded',
       note: 'Damage reports appear here once incidents are recorded.',
     },
   ];

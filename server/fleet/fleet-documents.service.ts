@@ -36,7 +36,12 @@ export class FleetDocumentsService {
   }
 
   record(actor: Actor, id: string): Promise<EquipmentRecordView> {
-    return this.withAsset(actor, id, (asset, firm) => ({ asset, organization: { name: firm }, items: equipmentRecordItems(asset), generatedAt: new Date().toISOString() }));
+    return this.withAsset(actor, id, (asset, firm) => ({
+      asset,
+      organization: { name: firm },
+      items: equipmentRecordItems(asset),
+      generatedAt: new Date().toISOString(),
+    }));
   }
 
   recordPdf(actor: Actor, id: string) {
@@ -56,7 +61,11 @@ export class FleetDocumentsService {
       const ctx = await loadOrgContext(tx);
       const kit = await tx.get(Kit, { id }, 'That kit');
       const members = await tx.find(Asset, { where: { kitId: id }, order: { type: 'ASC', assetTag: 'ASC' } });
-      return work(kit, members.map((m) => toAssetView(Object.assign(m, { kit }), ctx, this.publicUrl)), ctx.name);
+      return work(
+        kit,
+        members.map((m) => toAssetView(Object.assign(m, { kit }), ctx, this.publicUrl)),
+        ctx.name,
+      );
     });
   }
 

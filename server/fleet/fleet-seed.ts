@@ -4,7 +4,8 @@ import { Asset } from './asset.entity';
 import { Kit } from './kit.entity';
 
 /** An asset row as a seed writes it (demo and benchmark firms). */
-export type SeedAsset = Partial<Omit<AssetRecord, 'id' | 'organizationId' | 'createdAt' | 'updatedAt'>> & Pick<AssetRecord, 'type' | 'assetTag' | 'serialNumber'>;
+export type SeedAsset = Partial<Omit<AssetRecord, 'id' | 'organizationId' | 'createdAt' | 'updatedAt'>> &
+  Pick<AssetRecord, 'type' | 'assetTag' | 'serialNumber'>;
 
 /** Seeds only: kits by name; returns their ids in order. */
 export async function seedKits(tx: Scoped, kits: { name: string; notes: string | null }[]): Promise<string[]> {

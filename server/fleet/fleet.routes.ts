@@ -22,35 +22,71 @@ export function fleetRoutes(db: DataSource, assets: AssetsService, documents: Fl
   const write = 'fleet.write' as const;
 
   // Fixed paths before `/:id`.
-  endpoint(router, at, { method: 'get', path: '/lookup', summary: 'Find an asset by asset tag, RFID tag or QR label payload', access: read, query: lookupQuery }, ({ actor, query }) =>
-    assets.lookup(actor, query.code),
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/lookup', summary: 'Find an asset by asset tag, RFID tag or QR label payload', access: read, query: lookupQuery },
+    ({ actor, query }) => assets.lookup(actor, query.code),
   );
-  endpoint(router, at, { method: 'get', path: '/export.csv', summary: 'The filtered list as CSV (RFC 4180)', access: read, query: exportQuery }, async ({ actor, query, res }) =>
-    sendDocument(res, await documents.exportCsv(actor, query), 'text/csv; charset=utf-8', 'nestkeeper-fleet.csv'),
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/export.csv', summary: 'The filtered list as CSV (RFC 4180)', access: read, query: exportQuery },
+    async ({ actor, query, res }) => sendDocument(res, await documents.exportCsv(actor, query), 'text/csv; charset=utf-8', 'nestkeeper-fleet.csv'),
   );
   endpoint(router, at, { method: 'get', path: '/import/template.csv', summary: 'An example import file with every column', access: read }, ({ res }) =>
     sendDocument(res, importTemplateCsv(), 'text/csv; charset=utf-8', 'nestkeeper-import-template.csv'),
   );
-  endpoint(router, at, { method: 'post', path: '/import', summary: 'Import assets from CSV: mode=preview checks, mode=commit writes all or nothing', access: write, query: importQuery, upload: csvUpload }, ({ actor, query, req }) =>
-    importAssetsCsv(db, actor, req.body as string, query.mode),
+  endpoint(
+    router,
+    at,
+    {
+      method: 'post',
+      path: '/import',
+      summary: 'Import assets from CSV: mode=preview checks, mode=commit writes all or nothing',
+      access: write,
+      query: importQuery,
+      upload: csvUpload,
+    },
+    ({ actor, query, req }) => importAssetsCsv(db, actor, req.body as string, query.mode),
   );
 
-  endpoint(router, at, { method: 'get', path: '/', summary: 'List assets with search, filters and sort', access: read, query: assetListQuery }, ({ actor, query }) => assets.list(actor, query));
-  endpoint(router, at, { method: 'post', path: '/', summary: 'Register an asset', access: write, body: createAssetPayload, status: 201 }, ({ actor, body }) => assets.create(actor, body));
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/', summary: 'List assets with search, filters and sort', access: read, query: assetListQuery },
+    ({ actor, query }) => assets.list(actor, query),
+  );
+  endpoint(router, at, { method: 'post', path: '/', summary: 'Register an asset', access: write, body: createAssetPayload, status: 201 }, ({ actor, body }) =>
+    assets.create(actor, body),
+  );
   endpoint(router, at, { method: 'get', path: '/:id', summary: 'One asset', access: read }, ({ actor, params }) => assets.get(actor, params.id));
-  endpoint(router, at, { method: 'patch', path: '/:id', summary: 'Change an asset (not its type)', access: write, body: updateAssetPayload }, ({ actor, params, body }) =>
-    assets.update(actor, params.id, body),
+  endpoint(
+    router,
+    at,
+    { method: 'patch', path: '/:id', summary: 'Change an asset (not its type)', access: write, body: updateAssetPayload },
+    ({ actor, params, body }) => assets.update(actor, params.id, body),
   );
-  endpoint(router, at, { method: 'post', path: '/:id/retire', summary: 'Take an asset out of service for good', access: write, body: retireAssetPayload }, ({ actor, params, body }) =>
-    assets.retire(actor, params.id, body.reason),
+  endpoint(
+    router,
+    at,
+    { method: 'post', path: '/:id/retire', summary: 'Take an asset out of service for good', access: write, body: retireAssetPayload },
+    ({ actor, params, body }) => assets.retire(actor, params.id, body.reason),
   );
-  endpoint(router, at, { method: 'get', path: '/:id/history', summary: 'Audit trail and chain of custody', access: read }, ({ actor, params }) => assets.history(actor, params.id));
-  endpoint(router, at, { method: 'get', path: '/:id/record', summary: 'Equipment record (ISO/IEC 17025:2017 §6.4.13)', access: read }, ({ actor, params }) => documents.record(actor, params.id));
+  endpoint(router, at, { method: 'get', path: '/:id/history', summary: 'Audit trail and chain of custody', access: read }, ({ actor, params }) =>
+    assets.history(actor, params.id),
+  );
+  endpoint(router, at, { method: 'get', path: '/:id/record', summary: 'Equipment record (ISO/IEC 17025:2017 §6.4.13)', access: read }, ({ actor, params }) =>
+    documents.record(actor, params.id),
+  );
   endpoint(router, at, { method: 'get', path: '/:id/record.pdf', summary: 'Equipment record as PDF', access: read }, async ({ actor, params, res }) =>
     sendDocument(res, await documents.recordPdf(actor, params.id), 'application/pdf', 'equipment-record.pdf', true),
   );
-  endpoint(router, at, { method: 'get', path: '/:id/label.pdf', summary: 'Printable label with QR code and calibration due date', access: read }, async ({ actor, params, res }) =>
-    sendDocument(res, await documents.label(actor, params.id), 'application/pdf', 'label.pdf', true),
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/:id/label.pdf', summary: 'Printable label with QR code and calibration due date', access: read },
+    async ({ actor, params, res }) => sendDocument(res, await documents.label(actor, params.id), 'application/pdf', 'label.pdf', true),
   );
   return router;
 }

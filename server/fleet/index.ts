@@ -7,5 +7,18 @@ export const fleetEntities = [Asset, Kit, CustodyEvent];
 export { AssetBound } from './asset-bound';
 export type { CustodyKind } from './custody-event.entity';
 export { assetMoves, moveAssets, noteCustody, recordPastCustody, type CustodyDetails, type CustodyNote } from './custody';
-export { assetsByIds, findAsset, getAsset, getAssets, getKit, kitMembers, lockAssets, markDamaged, updateCalibrationPlan, type AssetRecord, type CalibrationPlan, type KitRecord } from './asset-records';
+export {
+  assetsByIds,
+  findAsset,
+  getAsset,
+  getAssets,
+  getKit,
+  kitMembers,
+  lockAssets,
+  markDamaged,
+  updateCalibrationPlan,
+  type AssetRecord,
+  type CalibrationPlan,
+  type KitRecord,
+} from './asset-records';
 export { fleetSnapshot, seedAssets, seedKits, type SeedAsset } from './fleet-seed';

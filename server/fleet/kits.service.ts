@@ -48,7 +48,16 @@ export class KitsService {
       const ctx = await loadOrgContext(tx);
       const [kits, total] = await tx.findAndCount(Kit, { order: { name: 'ASC' }, take: paging.limit, skip: paging.offset });
       const members = kits.length ? await tx.find(Asset, { where: { kitId: In(kits.map((k) => k.id)) } }) : [];
-      return { items: kits.map((k) => this.view(k, members.filter((m) => m.kitId === k.id), ctx)), total };
+      return {
+        items: kits.map((k) =>
+          this.view(
+            k,
+            members.filter((m) => m.kitId === k.id),
+            ctx,
+          ),
+        ),
+        total,
+      };
     });
   }
 
@@ -65,7 +74,8 @@ export class KitsService {
 
   create(actor: Actor, input: { name: string; notes?: string | null; memberIds?: string[] }) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      if (await tx.count(Kit, { name: input.name })) throw conflict(`There is already a kit called "${input.name}".`, { fields: { name: 'is already used by another kit' } });
+      if (await tx.count(Kit, { name: input.name }))
+        throw conflict(`There is already a kit called "${input.name}".`, { fields: { name: 'is already used by another kit' } });
       const kit = await tx.insert(Kit, { name: input.name, notes: input.notes ?? null }).catch((err) => {
         throw isUniqueViolation(err) ? conflict(`There is already a kit called "${input.name}".`) : err;
       });
@@ -80,7 +90,8 @@ export class KitsService {
       const kit = await tx.get(Kit, { id }, 'That kit');
       const before = { name: kit.name, notes: kit.notes };
       if (patch.name && patch.name !== kit.name) {
-        if (await tx.count(Kit, { name: patch.name, id: Not(id) })) throw conflict(`There is already a kit called "${patch.name}".`, { fields: { name: 'is already used by another kit' } });
+        if (await tx.count(Kit, { name: patch.name, id: Not(id) }))
+          throw conflict(`There is already a kit called "${patch.name}".`, { fields: { name: 'is already used by another kit' } });
         kit.name = patch.name;
       }
       if (patch.notes !== undefined) kit.notes = patch.notes;

@@ -14,7 +14,12 @@ import { listReply } from '../http/list-reply';
 
 /** Take an asset out of service inside the caller's transaction. A second
  * reason while already held is recorded on the audit trail, not as a new hold. */
-export async function placeHold(tx: Scoped, actor: Actor, asset: Pick<AssetRecord, 'id'>, hold: { reason: HoldReason; summary: string; incidentId?: string; checkId?: string }) {
+export async function placeHold(
+  tx: Scoped,
+  actor: Actor,
+  asset: Pick<AssetRecord, 'id'>,
+  hold: { reason: HoldReason; summary: string; incidentId?: string; checkId?: string },
+) {
   const current = await openHoldFor(tx, asset.id);
   if (current) {
     await recordAudit(tx, actor, 'asset.hold_reason_added', { type: 'asset', id: asset.id }, { holdId: current.id, ...hold });
@@ -87,7 +92,10 @@ export class HoldsService {
       const { timeZone } = await loadOrgContext(tx);
       const { evidence, missing } = await this.evidenceSince(tx, asset, hold.startedAt, timeZone);
       if (missing.length) {
-        throw ruleBroken('release_needs_evidence', `${asset.assetTag} stays on hold: ${missing.join('; ')}.`, { missing, holdStartedAt: hold.startedAt.toISOString() });
+        throw ruleBroken('release_needs_evidence', `${asset.assetTag} stays on hold: ${missing.join('; ')}.`, {
+          missing,
+          holdStartedAt: hold.startedAt.toISOString(),
+        });
       }
       await releaseHold(tx, actor, hold, evidence, note);
       return this.view(hold);
@@ -115,7 +123,7 @@ export class HoldsService {
     );
     if (calibration) return { evidence: [{ kind: 'calibration', id: calibration.id, performedAt: calibration.performedOn }], missing: [] };
     if (asset.type === 'tip') {
-      const positions = ((asset.specs.positions as TipPosition[] | undefined) ?? ['vertical']);
+      const positions = (asset.specs.positions as TipPosition[] | undefined) ?? ['vertical'];
       const found = positions.map((p) => passing.find((c) => c.kind === 'tip_validation' && c.position === p));
       const missing = positions.filter((_, i) => !found[i]).map((p) => `no passing ${p} tip validation since the hold began`);
       return { evidence: found.filter((f): f is (typeof passing)[number] => !!f), missing };

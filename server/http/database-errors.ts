@@ -9,8 +9,19 @@ export const databaseUnavailable = () =>
 type DriverError = { code?: unknown; severity?: unknown; detail?: unknown; message?: unknown };
 
 // Socket failures on the way to PostgreSQL, and node-postgres' own words for a lost or unobtainable connection.
-const UNREACHABLE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'EHOSTUNREACH', 'ENETUNREACH', 'ENOTFOUND', 'EAI_AGAIN', 'ECONNABORTED']);
-const UNREACHABLE_MESSAGES = /Connection terminated|Connection ended unexpectedly|timeout exceeded when trying to connect|is not queryable|Cannot use a pool after calling end/i;
+const UNREACHABLE_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'EHOSTUNREACH',
+  'ENETUNREACH',
+  'ENOTFOUND',
+  'EAI_AGAIN',
+  'ECONNABORTED',
+]);
+const UNREACHABLE_MESSAGES =
+  /Connection terminated|Connection ended unexpectedly|timeout exceeded when trying to connect|is not queryable|Cannot use a pool after calling end/i;
 
 /**
  * PostgreSQL's refusals as the API's errors, by SQLSTATE class (PostgreSQL 15

@@ -102,7 +102,6 @@ function refuseUnstorableText(input: { body: unknown; query: unknown }) {
   if (Object.keys(fields).length) throw new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields });
 }
 
-
 /** Record ids are UUIDs; anything else cannot name a record, so it is a 404 (not a database error). */
 const checkIdParams: RequestHandler = (req, _res, next) => {
   const bad = Object.entries(req.params as Record<string, string>).some(([name, value]) => (name === 'id' || name.endsWith('Id')) && !isUuid(value));

@@ -33,9 +33,11 @@ function toAppError(err: unknown): AppError | null {
   const fromDatabase = fromDatabaseError(err);
   if (fromDatabase) return fromDatabase;
   const e = err as { type?: string; status?: number; code?: string; field?: string };
-  if (e?.type === 'entity.parse.failed') return new AppError(400, 'invalid_input', 'The request body is not valid JSON.', { fields: { '(body)': 'not valid JSON' } });
+  if (e?.type === 'entity.parse.failed')
+    return new AppError(400, 'invalid_input', 'The request body is not valid JSON.', { fields: { '(body)': 'not valid JSON' } });
   if (e?.type === 'entity.too.large') return new AppError(413, 'too_large', 'The request is larger than Nestkeeper accepts.');
-  if (e?.type === 'charset.unsupported' || e?.type === 'encoding.unsupported') return new AppError(415, 'unsupported_type', 'That body encoding is not supported.');
+  if (e?.type === 'charset.unsupported' || e?.type === 'encoding.unsupported')
+    return new AppError(415, 'unsupported_type', 'That body encoding is not supported.');
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) return new AppError(e.status, 'invalid_input', 'The request could not be read.');
   return null;
 }

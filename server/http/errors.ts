@@ -16,10 +16,8 @@ export class AppError extends Error {
 
 export const notFound = (what: string) => new AppError(404, 'not_found', `${what} was not found.`);
 export const forbidden = (message = 'Your role may not do this.') => new AppError(403, 'forbidden', message);
-export const conflict = (message: string, details?: Record<string, unknown>) =>
-  new AppError(409, 'conflict', message, details);
-export const ruleBroken = (code: string, message: string, details?: Record<string, unknown>) =>
-  new AppError(422, code, message, details);
+export const conflict = (message: string, details?: Record<string, unknown>) => new AppError(409, 'conflict', message, details);
+export const ruleBroken = (code: string, message: string, details?: Record<string, unknown>) => new AppError(422, code, message, details);
 
 export function invalidInput(error: ZodError): AppError {
   const fields: Record<string, string> = {};

@@ -22,14 +22,18 @@ export function openApiDocument() {
       ...(e.upload
         ? { requestBody: uploadRequestBody(e.upload, e.body) }
         : e.body
-        ? { requestBody: { required: true, content: { 'application/json': { schema: z.toJSONSchema(e.body, { io: 'input', unrepresentable: 'any' }) } } } }
-        : {}),
+          ? { requestBody: { required: true, content: { 'application/json': { schema: z.toJSONSchema(e.body, { io: 'input', unrepresentable: 'any' }) } } } }
+          : {}),
       responses: { default: { description: 'JSON body, or `{error: {code, message, details?}}`' } },
     };
   }
   return {
     openapi: '3.1.0',
-    info: { title: 'Nestkeeper API', version: '0.1.0', description: 'Fleet register, calibration calendar, bookings, checks, incidents and rentals for portable metrology kit.' },
+    info: {
+      title: 'Nestkeeper API',
+      version: '0.1.0',
+      description: 'Fleet register, calibration calendar, bookings, checks, incidents and rentals for portable metrology kit.',
+    },
     components: {
       securitySchemes: {
         bearer: { type: 'http', scheme: 'bearer', bearerFormat: 'JWT' },

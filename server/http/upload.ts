@@ -26,7 +26,10 @@ export function readUpload(upload: Upload): RequestHandler {
         next();
       });
   }
-  const read = multer({ storage: multer.memoryStorage(), limits: { fileSize: upload.maxBytes, files: upload.maxFiles, fields: 20, fieldSize: 64 * 1024 } }).array(upload.files, upload.maxFiles);
+  const read = multer({
+    storage: multer.memoryStorage(),
+    limits: { fileSize: upload.maxBytes, files: upload.maxFiles, fields: 20, fieldSize: 64 * 1024 },
+  }).array(upload.files, upload.maxFiles);
   return (req, res, next) => read(req, res, (err?: unknown) => next(err ? uploadError(err, upload) : undefined));
 }
 
@@ -38,7 +41,8 @@ function uploadError(err: unknown, upload: Extract<Upload, { files: string }>): 
     if (err.code === 'LIMIT_FILE_COUNT' || (err.code === 'LIMIT_UNEXPECTED_FILE' && err.field === upload.files)) {
       return new AppError(413, 'too_large', `Attach at most ${upload.maxFiles} file${upload.maxFiles === 1 ? '' : 's'}, in the "${upload.files}" field.`);
     }
-    if (err.code === 'LIMIT_UNEXPECTED_FILE') return new AppError(400, 'invalid_input', `Files go in the "${upload.files}" field.`, { fields: { [err.field ?? '(body)']: 'is not a file field' } });
+    if (err.code === 'LIMIT_UNEXPECTED_FILE')
+      return new AppError(400, 'invalid_input', `Files go in the "${upload.files}" field.`, { fields: { [err.field ?? '(body)']: 'is not a file field' } });
     return new AppError(413, 'too_large', `The form is larger than Nestkeeper accepts (${err.message.toLowerCase()}).`);
   }
   // busboy's words for a body that is not well-formed multipart.
@@ -48,7 +52,9 @@ function uploadError(err: unknown, upload: Extract<Upload, { files: string }>): 
 /** The upload as the OpenAPI document describes it. */
 export function uploadRequestBody(upload: Upload, fields?: z.ZodType) {
   if ('text' in upload) return { required: true, content: Object.fromEntries(upload.text.map((type) => [type, { schema: { type: 'string' } }])) };
-  const schema = (fields ? z.toJSONSchema(fields, { io: 'input', unrepresentable: 'any' }) : { type: 'object', properties: {} }) as { properties?: Record<string, unknown> };
+  const schema = (fields ? z.toJSONSchema(fields, { io: 'input', unrepresentable: 'any' }) : { type: 'object', properties: {} }) as {
+    properties?: Record<string, unknown>;
+  };
   const file = { type: 'string', format: 'binary', maxLength: upload.maxBytes };
   schema.properties = { ...schema.properties, [upload.files]: upload.maxFiles === 1 ? file : { type: 'array', items: file, maxItems: upload.maxFiles } };
   return { required: true, content: { 'multipart/form-data': { schema } } };

@@ -1,6 +1,13 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { incidentKindTitles, type IncidentKind, type incidentListQuery, type incidentPayload, type IncidentState, type incidentUpdatePayload } from '../../shared/schemas/incidents';
+import {
+  incidentKindTitles,
+  type IncidentKind,
+  type incidentListQuery,
+  type incidentPayload,
+  type IncidentState,
+  type incidentUpdatePayload,
+} from '../../shared/schemas/incidents';
 import type { IncidentView } from '../../shared/incidents/views';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
@@ -50,7 +57,13 @@ type IncidentFields = { kind: IncidentKind; description: string; occurredAt: str
  * knocked lithium battery as damaged, and queue the e-mail to the manager and
  * owner. Also used by the return desk for missing or damaged items.
  */
-export async function openIncident(tx: Scoped, actor: Actor, asset: AssetRecord, input: IncidentFields, photos: Awaited<ReturnType<typeof preparePhoto>>[] = []) {
+export async function openIncident(
+  tx: Scoped,
+  actor: Actor,
+  asset: AssetRecord,
+  input: IncidentFields,
+  photos: Awaited<ReturnType<typeof preparePhoto>>[] = [],
+) {
   const incident = await tx.insert(Incident, {
     assetId: asset.id,
     kind: input.kind,
@@ -67,15 +80,29 @@ export async function openIncident(tx: Scoped, actor: Actor, asset: AssetRecord,
   for (const p of photos) saved.push(await tx.insert(IncidentPhoto, { incidentId: incident.id, ...p }));
   const flagBattery = asset.type === 'battery' && batteryDamageKinds.has(input.kind);
   if (flagBattery) await markDamaged(tx, asset);
-  await placeHold(tx, actor, asset, { reason: 'incident', summary: `${incidentKindTitles[input.kind]}: ${input.description.slice(0, 200)}`, incidentId: incident.id });
-  await recordAudit(tx, actor, 'incident.reported', { type: 'asset', id: asset.id }, { incidentId: incident.id, kind: input.kind, photos: saved.length, batteryFlaggedDamaged: flagBattery });
+  await placeHold(tx, actor, asset, {
+    reason: 'incident',
+    summary: `${incidentKindTitles[input.kind]}: ${input.description.slice(0, 200)}`,
+    incidentId: incident.id,
+  });
+  await recordAudit(
+    tx,
+    actor,
+    'incident.reported',
+    { type: 'asset', id: asset.id },
+    { incidentId: incident.id, kind: input.kind, photos: saved.length, batteryFlaggedDamaged: flagBattery },
+  );
   await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
     subject: `${asset.assetTag} reported ${incidentKindTitles[input.kind].toLowerCase()} — now on hold`,
     heading: `${asset.assetTag}: ${incidentKindTitles[input.kind].toLowerCase()}`,
     paragraphs: [
       input.description,
       `Reported for ${input.occurredAt.slice(0, 16).replace('T', ' ')} UTC${input.location ? ` at ${input.location}` : ''}, with ${saved.length} photo(s). The item is on hold and cannot be booked until it is checked or recalibrated and released.`,
-      ...(flagBattery ? ["This is a lithium-ion battery: treat it as damaged. Do not charge it and do not ship it by air; keep it apart in a fire-safe place and follow local rules and the maker's instructions for disposal."] : []),
+      ...(flagBattery
+        ? [
+            "This is a lithium-ion battery: treat it as damaged. Do not charge it and do not ship it by air; keep it apart in a fire-safe place and follow local rules and the maker's instructions for disposal.",
+          ]
+        : []),
     ],
   });
   return { incident, photos: saved };
@@ -85,7 +112,8 @@ export async function openIncident(tx: Scoped, actor: Actor, asset: AssetRecord,
 export type BookingIncident = Readonly<Pick<Incident, 'id' | 'assetId' | 'kind' | 'description' | 'chargeAmountMinor'>>;
 
 /** The incidents opened against a booking, oldest first. */
-export const bookingIncidents = (tx: Scoped, bookingId: string): Promise<BookingIncident[]> => tx.find(Incident, { where: { bookingId }, order: { createdAt: 'ASC' } });
+export const bookingIncidents = (tx: Scoped, bookingId: string): Promise<BookingIncident[]> =>
+  tx.find(Incident, { where: { bookingId }, order: { createdAt: 'ASC' } });
 
 /** Sets the repair or replacement charge (net of tax) on an incident of the booking; returns the charge it replaced. */
 export async function setIncidentCharge(tx: Scoped, bookingId: string, incidentId: string, amountMinor: number): Promise<number | null> {
@@ -103,11 +131,16 @@ export class IncidentsService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const asset = await getAsset(tx, input.assetId);
       // A read, not an import: bookings already calls incidents when an item comes back damaged.
-      if (input.bookingId && !(await tx.sql(`SELECT 1 FROM bookings WHERE organization_id = $1 AND id = $2`, [input.bookingId])).length) throw notFound('That booking');
+      if (input.bookingId && !(await tx.sql(`SELECT 1 FROM bookings WHERE organization_id = $1 AND id = $2`, [input.bookingId])).length)
+        throw notFound('That booking');
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
       const { incident, photos: saved } = await openIncident(tx, actor, asset, { ...input, bookingId: input.bookingId ?? null }, photos);
       const refreshed = await getAsset(tx, asset.id);
-      return view(incident, saved.map((p) => ({ ...p, hasThumbnail: !!p.thumbnail })), refreshed);
+      return view(
+        incident,
+        saved.map((p) => ({ ...p, hasThumbnail: !!p.thumbnail })),
+        refreshed,
+      );
     });
   }
 
@@ -117,8 +150,22 @@ export class IncidentsService {
       if (query.assetId) qb.andWhere('i.asset_id = :assetId', { assetId: query.assetId });
       if (query.state?.length) qb.andWhere('i.state IN (:...states)', { states: query.state });
       const [rows, total] = await qb.getManyAndCount();
-      const photos = rows.length ? await this.photoRows(tx, rows.map((r) => r.id)) : [];
-      return { items: rows.map((r) => view(r, photos.filter((p) => p.incidentId === r.id), r.asset)), total };
+      const photos = rows.length
+        ? await this.photoRows(
+            tx,
+            rows.map((r) => r.id),
+          )
+        : [];
+      return {
+        items: rows.map((r) =>
+          view(
+            r,
+            photos.filter((p) => p.incidentId === r.id),
+            r.asset,
+          ),
+        ),
+        total,
+      };
     });
   }
 
@@ -156,7 +203,9 @@ export class IncidentsService {
         [incidentId, photoId],
       );
       if (!row || (thumbnail && !row.thumbnail)) throw new AppError(404, 'not_found', 'That photo was not found.');
-      return thumbnail ? { contentType: 'image/jpeg', data: row.thumbnail!, fileName: 'thumbnail.jpg' } : { contentType: row.content_type, data: row.data, fileName: row.file_name };
+      return thumbnail
+        ? { contentType: 'image/jpeg', data: row.thumbnail!, fileName: 'thumbnail.jpg' }
+        : { contentType: row.content_type, data: row.data, fileName: row.file_name };
     });
   }
 

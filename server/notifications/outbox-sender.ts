@@ -58,6 +58,9 @@ export async function deliverOutbox(db: DataSource, transport: Transporter, from
     });
     if (batch < BATCH || deferred > 0) break;
   }
-  const [{ pending }] = await db.query(`SELECT count(*)::int AS pending FROM outbox_messages WHERE status = 'pending' AND ($1::uuid IS NULL OR organization_id = $1)`, [organizationId]);
+  const [{ pending }] = await db.query(
+    `SELECT count(*)::int AS pending FROM outbox_messages WHERE status = 'pending' AND ($1::uuid IS NULL OR organization_id = $1)`,
+    [organizationId],
+  );
   return { sent, deferred, pending };
 }

@@ -20,6 +20,10 @@ export async function enqueueMail(tx: Scoped, recipients: string[], content: Mai
     textBody: text,
     htmlBody: html,
   });
-  if (attachments.length) await tx.manager.insert(OutboxAttachment, attachments.map((a) => ({ ...a, messageId: message.id })));
+  if (attachments.length)
+    await tx.manager.insert(
+      OutboxAttachment,
+      attachments.map((a) => ({ ...a, messageId: message.id })),
+    );
   return message;
 }

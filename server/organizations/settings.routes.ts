@@ -8,8 +8,11 @@ export function settingsRoutes(db: DataSource): Router {
   const router = Router();
   const at = '/api/settings';
   endpoint(router, at, { method: 'get', path: '/', summary: "The firm's settings", access: 'signed-in' }, ({ actor }) => getSettings(db, actor));
-  endpoint(router, at, { method: 'patch', path: '/', summary: 'Change the due-soon window or time zone', access: 'settings.manage', body: organizationSettingsPayload }, ({ actor, body }) =>
-    updateSettings(db, actor, body),
+  endpoint(
+    router,
+    at,
+    { method: 'patch', path: '/', summary: 'Change the due-soon window or time zone', access: 'settings.manage', body: organizationSettingsPayload },
+    ({ actor, body }) => updateSettings(db, actor, body),
   );
   return router;
 }

@@ -28,7 +28,14 @@ export class CustomersService {
       if (await tx.count(Customer, { company: input.company, ...(id ? { id: Not(id) } : {}) })) {
         throw conflict(`${input.company} is already a customer.`, { fields: { company: 'is already a customer' } });
       }
-      const values = { company: input.company, billingContact: input.billingContact ?? null, billingEmail: input.billingEmail, address: input.address ?? null, taxNumber: input.taxNumber ?? null, notes: input.notes ?? null };
+      const values = {
+        company: input.company,
+        billingContact: input.billingContact ?? null,
+        billingEmail: input.billingEmail,
+        address: input.address ?? null,
+        taxNumber: input.taxNumber ?? null,
+        notes: input.notes ?? null,
+      };
       const customer = id ? await tx.save(Customer, Object.assign(await tx.get(Customer, { id }, 'That customer'), values)) : await tx.insert(Customer, values);
       await recordAudit(tx, actor, id ? 'customer.updated' : 'customer.created', { type: 'customer', id: customer.id }, { company: customer.company });
       return customer;

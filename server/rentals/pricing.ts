@@ -22,7 +22,12 @@ export async function repriceRental(tx: Scoped, booking: BookingView, money: Ren
   const rental = await tx.get(Rental, { id: booking.rentalId }, 'That rental');
   const items = booking.assetIds;
   const kitMembers = booking.kitId ? (await membersOf(tx, booking.kitId)).map((a) => a.id) : [];
-  const quote = await priceRental(tx, { kitId: booking.kitId ?? undefined, assetIds: items.filter((id) => !kitMembers.includes(id)), startsOn: booking.startsOn, endsOn: booking.endsOn });
+  const quote = await priceRental(tx, {
+    kitId: booking.kitId ?? undefined,
+    assetIds: items.filter((id) => !kitMembers.includes(id)),
+    startsOn: booking.startsOn,
+    endsOn: booking.endsOn,
+  });
   const authorized = (await money.depositState(tx, rental.id)) === 'authorized';
   Object.assign(rental, { quote, depositMinor: authorized ? rental.depositMinor : quote.depositMinor });
   await tx.save(Rental, rental);
@@ -47,15 +52,31 @@ export async function priceRental(tx: Scoped, q: PriceRequest): Promise<Quote> {
     const rates = { dayMinor: card.dayMinor, weekMinor: card.weekMinor, monthMinor: card.monthMinor };
     const cover = cheapestCover(days, rates);
     const quantity = fields.kitId ? 1 : fields.assetIds.length;
-    return { ...fields, quantity, periods: cover.periods, unitMinor: cover.totalMinor, amountMinor: cover.totalMinor * quantity, rates, lateFeePerDayMinor: card.lateFeePerDayMinor };
+    return {
+      ...fields,
+      quantity,
+      periods: cover.periods,
+      unitMinor: cover.totalMinor,
+      amountMinor: cover.totalMinor * quantity,
+      rates,
+      lateFeePerDayMinor: card.lateFeePerDayMinor,
+    };
   };
   const kitCard = kit ? cards.find((c) => c.kitId === kit.id) : undefined;
   if (kit && kitCard) lines.push(line(kitCard, { description: kit.name, assetIds: kitMembers.map((m) => m.id), kitId: kit.id }));
   const byType = new Map<AssetType, AssetRecord[]>();
-  for (const a of [...(kitCard ? [] : kitMembers), ...loose.filter((a) => !kitMembers.some((m) => m.id === a.id))]) byType.set(a.type, [...(byType.get(a.type) ?? []), a]);
+  for (const a of [...(kitCard ? [] : kitMembers), ...loose.filter((a) => !kitMembers.some((m) => m.id === a.id))])
+    byType.set(a.type, [...(byType.get(a.type) ?? []), a]);
   const unpriced = [...byType.keys()].filter((t) => !cards.some((c) => c.assetType === t));
-  if (unpriced.length) throw ruleBroken('no_rate', `No rate card for: ${unpriced.map((t) => assetTypeTitles[t]).join(', ')}. Add one under rate cards.`, { types: unpriced });
-  for (const [type, assets] of byType) lines.push(line(cards.find((c) => c.assetType === type)!, { description: assetTypeTitles[type], assetIds: assets.map((a) => a.id), kitId: null }));
+  if (unpriced.length)
+    throw ruleBroken('no_rate', `No rate card for: ${unpriced.map((t) => assetTypeTitles[t]).join(', ')}. Add one under rate cards.`, { types: unpriced });
+  for (const [type, assets] of byType)
+    lines.push(
+      line(
+        cards.find((c) => c.assetType === type)!,
+        { description: assetTypeTitles[type], assetIds: assets.map((a) => a.id), kitId: null },
+      ),
+    );
   const subtotalMinor = lines.reduce((s, l) => s + l.amountMinor, 0);
   const tax = taxMinor(subtotalMinor, ctx.taxRateBasisPoints);
   const replacement = [...kitMembers, ...loose].reduce((s, a) => s + (a.replacementValueMinor ?? 0), 0);

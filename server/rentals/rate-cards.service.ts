@@ -25,8 +25,18 @@ export class RateCardsService {
       if (input.kitId) await getKit(tx, input.kitId);
       const subject = input.kitId ? { kitId: input.kitId } : { assetType: input.assetType! };
       const clash = await tx.findOne(RateCard, subject);
-      if (clash && clash.id !== id) throw conflict('That type or kit already has a rate card; change that one.', { fields: { [input.kitId ? 'kitId' : 'assetType']: 'already has a rate card' } });
-      const values = { assetType: input.assetType ?? null, kitId: input.kitId ?? null, dayMinor: input.dayMinor, weekMinor: input.weekMinor, monthMinor: input.monthMinor, lateFeePerDayMinor: input.lateFeePerDayMinor };
+      if (clash && clash.id !== id)
+        throw conflict('That type or kit already has a rate card; change that one.', {
+          fields: { [input.kitId ? 'kitId' : 'assetType']: 'already has a rate card' },
+        });
+      const values = {
+        assetType: input.assetType ?? null,
+        kitId: input.kitId ?? null,
+        dayMinor: input.dayMinor,
+        weekMinor: input.weekMinor,
+        monthMinor: input.monthMinor,
+        lateFeePerDayMinor: input.lateFeePerDayMinor,
+      };
       const card = id ? await tx.save(RateCard, Object.assign(await tx.get(RateCard, { id }, 'That rate card'), values)) : await tx.insert(RateCard, values);
       await recordAudit(tx, actor, 'rate_card.saved', { type: 'rate_card', id: card.id }, values);
       return card;

@@ -17,7 +17,15 @@ export async function agreementFor(tx: Scoped, rental: RentalView): Promise<Buff
  */
 export async function certificatePackFor(tx: Scoped, rental: RentalView): Promise<Buffer> {
   const ctx = await loadOrgContext(tx);
-  const rows = await tx.sql<{ asset_id: string; certificate_number: string | null; performed_on: string | null; due_on: string | null; provider: string | null; data: Buffer | null; calibration_required: boolean }>(
+  const rows = await tx.sql<{
+    asset_id: string;
+    certificate_number: string | null;
+    performed_on: string | null;
+    due_on: string | null;
+    provider: string | null;
+    data: Buffer | null;
+    calibration_required: boolean;
+  }>(
     `SELECT a.id AS asset_id, a.calibration_required, ev.certificate_number, to_char(ev.performed_on, 'YYYY-MM-DD') AS performed_on,
             to_char(coalesce(ev.due_on, a.due_on), 'YYYY-MM-DD') AS due_on, ev.provider, f.data
        FROM assets a
@@ -29,7 +37,26 @@ export async function certificatePackFor(tx: Scoped, rental: RentalView): Promis
   const entries: CertificateEntry[] = rental.items.flatMap((item) => {
     const row = rows.find((r) => r.asset_id === item.id);
     if (!row?.calibration_required) return [];
-    return [{ assetTag: item.assetTag, type: item.type, serialNumber: item.serialNumber, model: item.model, certificateNumber: row.certificate_number, performedOn: row.performed_on, dueOn: row.due_on, provider: row.provider, pdf: row.data }];
+    return [
+      {
+        assetTag: item.assetTag,
+        type: item.type,
+        serialNumber: item.serialNumber,
+        model: item.model,
+        certificateNumber: row.certificate_number,
+        performedOn: row.performed_on,
+        dueOn: row.due_on,
+        provider: row.provider,
+        pdf: row.data,
+      },
+    ];
   });
-  return certificatePackPdf({ firm: { name: ctx.name }, rentalNumber: rental.number, customerCompany: rental.customer.company, startsOn: rental.startsOn, endsOn: rental.endsOn, entries });
+  return certificatePackPdf({
+    firm: { name: ctx.name },
+    rentalNumber: rental.number,
+    customerCompany: rental.customer.company,
+    startsOn: rental.startsOn,
+    endsOn: rental.endsOn,
+    entries,
+  });
 }

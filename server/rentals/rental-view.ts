@@ -9,7 +9,8 @@ import { loadOrgContext } from '../organizations';
 import type { RentalMoney } from './rental-money';
 import { getCustomer, type RentalRecord } from './rental-records';
 
-const rentalState = (booking: Pick<BookingView, 'state'>, invoiced: boolean): RentalState => (booking.state === 'cancelled' ? 'cancelled' : invoiced ? 'invoiced' : booking.state);
+const rentalState = (booking: Pick<BookingView, 'state'>, invoiced: boolean): RentalState =>
+  booking.state === 'cancelled' ? 'cancelled' : invoiced ? 'invoiced' : booking.state;
 
 /** Everything the rental page shows, read in the caller's transaction; its deposit and invoices as billing tells them. */
 export async function loadRentalView(tx: Scoped, rental: RentalRecord, money: RentalMoney): Promise<RentalView> {
@@ -32,11 +33,22 @@ export async function loadRentalView(tx: Scoped, rental: RentalRecord, money: Re
   return {
     id: rental.id,
     number: rental.number,
-    state: rentalState(booking, invoices.some((i) => i.kind === 'invoice')),
+    state: rentalState(
+      booking,
+      invoices.some((i) => i.kind === 'invoice'),
+    ),
     customer: { id: customer.id, company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail },
     bookingId: booking.id,
     kit: booking.kit,
-    items: assets.map((a) => ({ id: a.id, assetTag: a.assetTag, type: a.type, serialNumber: a.serialNumber, model: a.model, manufacturer: a.manufacturer, replacementValueMinor: a.replacementValueMinor })),
+    items: assets.map((a) => ({
+      id: a.id,
+      assetTag: a.assetTag,
+      type: a.type,
+      serialNumber: a.serialNumber,
+      model: a.model,
+      manufacturer: a.manufacturer,
+      replacementValueMinor: a.replacementValueMinor,
+    })),
     startsOn: booking.startsOn,
     endsOn: booking.endsOn,
     note: rental.note,
@@ -50,7 +62,9 @@ export async function loadRentalView(tx: Scoped, rental: RentalRecord, money: Re
     settlement: settle({
       quote: rental.quote,
       lateDays,
-      damage: charges.filter((c) => c.amountMinor).map((c) => ({ description: `${c.assetTag} — ${c.kind === 'missing' ? 'not returned' : 'damage'}: ${c.description}`, amountMinor: c.amountMinor! })),
+      damage: charges
+        .filter((c) => c.amountMinor)
+        .map((c) => ({ description: `${c.assetTag} — ${c.kind === 'missing' ? 'not returned' : 'damage'}: ${c.description}`, amountMinor: c.amountMinor! })),
       depositCapturedMinor,
       cardChargedMinor,
     }),

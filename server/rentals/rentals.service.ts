@@ -30,11 +30,35 @@ export class RentalsService {
     const rentalId = randomUUID();
     await inOrganization(this.db, actor.organizationId, async (tx) => {
       await getCustomer(tx, input.customerId);
-      const booking = await book(tx, actor, { kitId: input.kitId, assetIds: input.assetIds, startsOn: input.startsOn, endsOn: input.endsOn, rentalId, note: input.note });
+      const booking = await book(tx, actor, {
+        kitId: input.kitId,
+        assetIds: input.assetIds,
+        startsOn: input.startsOn,
+        endsOn: input.endsOn,
+        rentalId,
+        note: input.note,
+      });
       const quote = await priceRental(tx, { kitId: input.kitId, assetIds: input.assetIds, startsOn: input.startsOn, endsOn: input.endsOn });
       const number = `R-${padded(await nextNumber(tx, 'rental'))}`;
-      await tx.insert(Rental, { id: rentalId, number, customerId: input.customerId, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: null, note: input.note ?? null, createdBy: actor.userId });
-      await recordAudit(tx, actor, 'rental.created', { type: 'rental', id: rentalId }, { number, customerId: input.customerId, totalMinor: quote.totalMinor, depositMinor: quote.depositMinor });
+      await tx.insert(Rental, {
+        id: rentalId,
+        number,
+        customerId: input.customerId,
+        bookingId: booking.id,
+        quote,
+        depositMinor: quote.depositMinor,
+        currency: quote.currency,
+        paymentMethodId: null,
+        note: input.note ?? null,
+        createdBy: actor.userId,
+      });
+      await recordAudit(
+        tx,
+        actor,
+        'rental.created',
+        { type: 'rental', id: rentalId },
+        { number, customerId: input.customerId, totalMinor: quote.totalMinor, depositMinor: quote.depositMinor },
+      );
     });
     return this.get(actor, rentalId);
   }
@@ -76,7 +100,10 @@ export class RentalsService {
       if (rental.depositMinor <= 0) return;
       const state = await this.money.depositState(tx, rental.id);
       if (state !== 'authorized') {
-        throw ruleBroken('deposit_required', `Rental ${rental.number} needs its deposit of ${formatMoney(rental.depositMinor, rental.currency, 'en-GB')} authorized on the customer's card before the kit is handed over${state === 'declined' ? ' (the last card was declined)' : ''}. The billing clerk takes it on the rental's page.`);
+        throw ruleBroken(
+          'deposit_required',
+          `Rental ${rental.number} needs its deposit of ${formatMoney(rental.depositMinor, rental.currency, 'en-GB')} authorized on the customer's card before the kit is handed over${state === 'declined' ? ' (the last card was declined)' : ''}. The billing clerk takes it on the rental's page.`,
+        );
       }
     },
     afterCheckout: async (tx: Scoped, booking: BookingView) => {

@@ -10,9 +10,16 @@ export const OLD_JOBS_PATH = '/api/admin/jobs';
 export function routinesRoutes(routines: RoutinesService, at: string = ROUTINES_PATH): Router {
   const router = Router();
   const alias = at === ROUTINES_PATH ? '' : ` (same as ${ROUTINES_PATH}; kept for existing callers)`;
-  endpoint(router, at, { method: 'get', path: '/', summary: `Routines and their last runs${alias}`, access: 'routines.run' }, ({ actor }) => routines.list(actor.organizationId));
-  endpoint(router, at, { method: 'post', path: '/:name/run', summary: `Run a routine now for your firm and return its summary${alias}`, access: 'routines.run' }, async ({ params, actor }) => ({
-    run: await routines.run(params.name, 'manual', null, actor.organizationId),
-  }));
+  endpoint(router, at, { method: 'get', path: '/', summary: `Routines and their last runs${alias}`, access: 'routines.run' }, ({ actor }) =>
+    routines.list(actor.organizationId),
+  );
+  endpoint(
+    router,
+    at,
+    { method: 'post', path: '/:name/run', summary: `Run a routine now for your firm and return its summary${alias}`, access: 'routines.run' },
+    async ({ params, actor }) => ({
+      run: await routines.run(params.name, 'manual', null, actor.organizationId),
+    }),
+  );
   return router;
 }

@@ -40,7 +40,9 @@ export class RoutinesService {
   async run(name: string, trigger: 'schedule' | 'manual', scheduledFor: Date | null = null, organizationId: string | null = null) {
     const routine = this.find(name);
     const repo = this.db.getRepository(RoutineRun);
-    const run = await repo.save(repo.create({ routineName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running', organizationId }));
+    const run = await repo.save(
+      repo.create({ routineName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running', organizationId }),
+    );
     try {
       run.summary = await routine.run({ db: this.db, now: new Date(), trigger, organizationId });
       run.status = 'succeeded';

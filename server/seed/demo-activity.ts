@@ -13,11 +13,41 @@ import { User } from '../users/user.entity';
 
 /** Invented customers of the invented demo firm. */
 const customers = [
-  { reference: 'J-2611', customerName: 'Larkspur Aero Structures', contactName: 'Quality office', contactEmail: 'quality@larkspur-aero.test', siteAddress: 'Hangar 3, Larkspur Field, Wrenhallow' },
-  { reference: 'J-2614', customerName: 'Hollowmere Turbine Works', contactName: 'Inspection lead', contactEmail: 'inspection@hollowmere.test', siteAddress: 'Bay 7, Hollowmere Road, Ostby' },
-  { reference: 'J-2620', customerName: 'Quarrington Rail Fabrication', contactName: 'Works manager', contactEmail: 'works@quarrington-rail.test', siteAddress: 'Shop 2, Quarrington Sidings' },
-  { reference: 'J-2623', customerName: 'Fenwick Yard Shipbuilders', contactName: 'Hull survey', contactEmail: 'survey@fenwick-yard.test', siteAddress: 'Dry dock 1, Fenwick Quay' },
-  { reference: 'J-2630', customerName: 'Larkspur Aero Structures', contactName: 'Quality office', contactEmail: 'quality@larkspur-aero.test', siteAddress: 'Jig hall, Larkspur Field, Wrenhallow' },
+  {
+    reference: 'J-2611',
+    customerName: 'Larkspur Aero Structures',
+    contactName: 'Quality office',
+    contactEmail: 'quality@larkspur-aero.test',
+    siteAddress: 'Hangar 3, Larkspur Field, Wrenhallow',
+  },
+  {
+    reference: 'J-2614',
+    customerName: 'Hollowmere Turbine Works',
+    contactName: 'Inspection lead',
+    contactEmail: 'inspection@hollowmere.test',
+    siteAddress: 'Bay 7, Hollowmere Road, Ostby',
+  },
+  {
+    reference: 'J-2620',
+    customerName: 'Quarrington Rail Fabrication',
+    contactName: 'Works manager',
+    contactEmail: 'works@quarrington-rail.test',
+    siteAddress: 'Shop 2, Quarrington Sidings',
+  },
+  {
+    reference: 'J-2623',
+    customerName: 'Fenwick Yard Shipbuilders',
+    contactName: 'Hull survey',
+    contactEmail: 'survey@fenwick-yard.test',
+    siteAddress: 'Dry dock 1, Fenwick Quay',
+  },
+  {
+    reference: 'J-2630',
+    customerName: 'Larkspur Aero Structures',
+    contactName: 'Quality office',
+    contactEmail: 'quality@larkspur-aero.test',
+    siteAddress: 'Jig hall, Larkspur Field, Wrenhallow',
+  },
 ];
 
 /** A reading `um` micrometres from the reference along a different axis each time. */
@@ -54,9 +84,20 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   const validation = (tip: AssetRecord, position: string, um: number, daysAgo: number) => {
     const r = tipValidation(ref, around(ref, um));
     checks.push({
-      kind: 'tip_validation', assetId: tip.id, relatedAssetId: byTag('PRB-001').id, position, inputs: { reference: ref, readings: around(ref, um), tolerance: { kind: 'fixed', um: 60 } },
-      result: r, toleranceUm: 60, expandedUncertaintyUm: 0, guardBandUm: 0, decisionRule: 'simple', decision: r.maxDeviationUm <= 60 ? 'pass' : 'fail',
-      performedAt: at(-daysAgo), performedBy: tech.id, note: null,
+      kind: 'tip_validation',
+      assetId: tip.id,
+      relatedAssetId: byTag('PRB-001').id,
+      position,
+      inputs: { reference: ref, readings: around(ref, um), tolerance: { kind: 'fixed', um: 60 } },
+      result: r,
+      toleranceUm: 60,
+      expandedUncertaintyUm: 0,
+      guardBandUm: 0,
+      decisionRule: 'simple',
+      decision: r.maxDeviationUm <= 60 ? 'pass' : 'fail',
+      performedAt: at(-daysAgo),
+      performedBy: tech.id,
+      note: null,
     });
   };
   for (const tip of assets.filter((a) => a.type === 'tip' && a.kitId)) {
@@ -70,18 +111,46 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   const tracker = byTag('TRK-001');
   const bar = byTag('BAR-001');
   // After its last calibration (40 days ago, see the calibration seed), so they do not count as evidence before it.
-  for (const [daysAgo, errUm] of [[30, 22], [20, 31], [8, 27]] as const) {
+  for (const [daysAgo, errUm] of [
+    [30, 22],
+    [20, 31],
+    [8, 27],
+  ] as const) {
     const front = { x: 6200, y: 150, z: 1400 };
     const back = { x: 6200 + errUm / 1000, y: 150, z: 1400 };
     checks.push({
-      kind: 'two_face', assetId: tracker.id, relatedAssetId: null, position: null, inputs: { front, back, distanceM: 6.2 }, result: { errorUm: twoFaceErrorUm(front, back) },
-      toleranceUm: 69.6, expandedUncertaintyUm: 0, guardBandUm: 0, decisionRule: 'simple', decision: 'pass', performedAt: at(-daysAgo), performedBy: tech.id, note: null,
+      kind: 'two_face',
+      assetId: tracker.id,
+      relatedAssetId: null,
+      position: null,
+      inputs: { front, back, distanceM: 6.2 },
+      result: { errorUm: twoFaceErrorUm(front, back) },
+      toleranceUm: 69.6,
+      expandedUncertaintyUm: 0,
+      guardBandUm: 0,
+      decisionRule: 'simple',
+      decision: 'pass',
+      performedAt: at(-daysAgo),
+      performedBy: tech.id,
+      note: null,
     });
     const endB = { x: 2300.012 + 0.0276 + errUm / 2000, y: 0, z: 0 };
     const length = lengthCheck({ x: 0, y: 0, z: 0 }, endB, 2300.012, 0.5, 44);
     checks.push({
-      kind: 'length_check', assetId: tracker.id, relatedAssetId: bar.id, position: null, inputs: { endA: { x: 0, y: 0, z: 0 }, endB, temperatureC: 44, distanceM: 4 }, result: length,
-      toleranceUm: 52, expandedUncertaintyUm: 0, guardBandUm: 0, decisionRule: 'simple', decision: Math.abs(length.errorUm) <= 52 ? 'pass' : 'fail', performedAt: at(-daysAgo, 11), performedBy: tech.id, note: null,
+      kind: 'length_check',
+      assetId: tracker.id,
+      relatedAssetId: bar.id,
+      position: null,
+      inputs: { endA: { x: 0, y: 0, z: 0 }, endB, temperatureC: 44, distanceM: 4 },
+      result: length,
+      toleranceUm: 52,
+      expandedUncertaintyUm: 0,
+      guardBandUm: 0,
+      decisionRule: 'simple',
+      decision: Math.abs(length.errorUm) <= 52 ? 'pass' : 'fail',
+      performedAt: at(-daysAgo, 11),
+      performedBy: tech.id,
+      note: null,
     });
   }
   await tx.insertMany(FieldCheck, checks);
@@ -89,11 +158,33 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   // A spare tip dropped two days ago: held, with an open incident.
   const dropped = assets.find((a) => a.type === 'tip' && !a.kitId)!;
   const incident = await tx.insert(Incident, {
-    assetId: dropped.id, kind: 'dropped', description: 'Slipped off the probe during a tip change and hit the floor plate. Ball looks fine, shank may be bent.',
-    occurredAt: at(-2, 14), location: customers[1].siteAddress, bookingId: null, state: 'reported', resolution: null, chargeAmountMinor: null, reportedBy: tech.id,
+    assetId: dropped.id,
+    kind: 'dropped',
+    description: 'Slipped off the probe during a tip change and hit the floor plate. Ball looks fine, shank may be bent.',
+    occurredAt: at(-2, 14),
+    location: customers[1].siteAddress,
+    bookingId: null,
+    state: 'reported',
+    resolution: null,
+    chargeAmountMinor: null,
+    reportedBy: tech.id,
   });
-  const hold = await tx.insert(Hold, { assetId: dropped.id, reason: 'incident', summary: 'Dropped: slipped off the probe during a tip change', incidentId: incident.id, checkId: null, startedAt: at(-2, 14), startedBy: tech.id, releasedAt: null, releasedBy: null, releaseEvidence: null });
-  await moveAssets(tx, { userId: tech.id }, [dropped.id], 'held', { why: 'Dropped: reported from site', details: { holdId: hold.id, reason: hold.reason, summary: hold.summary } });
+  const hold = await tx.insert(Hold, {
+    assetId: dropped.id,
+    reason: 'incident',
+    summary: 'Dropped: slipped off the probe during a tip change',
+    incidentId: incident.id,
+    checkId: null,
+    startedAt: at(-2, 14),
+    startedBy: tech.id,
+    releasedAt: null,
+    releasedBy: null,
+    releaseEvidence: null,
+  });
+  await moveAssets(tx, { userId: tech.id }, [dropped.id], 'held', {
+    why: 'Dropped: reported from site',
+    details: { holdId: hold.id, reason: hold.reason, summary: hold.summary },
+  });
 
   // Jobs and bookings.
   const jobs: Awaited<ReturnType<typeof seedJob>>[] = [];
@@ -114,14 +205,36 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   for (const p of plans) {
     const items = members(p.kit).filter((a) => a.status !== 'held');
     const out = p.state !== 'reserved';
-    const booking = await seedBooking(tx, {
-      startsOn: p.job.startsOn, endsOn: p.job.endsOn, state: p.state, purpose: 'job', jobId: p.job.id, kitId: p.kit.id, createdBy: manager.id,
-      checkedOutAt: out ? new Date(`${p.job.startsOn}T07:45:00Z`) : null, handedOverBy: out ? manager.id : null, takenBy: out ? tech.name : null, takenByUserId: out ? tech.id : null,
-      checkoutChecklist: out ? items.map((a) => ({ assetId: a.id, present: true, condition: 'good' as const })) : null,
-      returnedAt: p.state === 'returned' ? new Date(`${p.job.endsOn}T16:10:00Z`) : null, receivedBy: p.state === 'returned' ? manager.id : null,
-      broughtBackBy: p.state === 'returned' ? tech.name : null, returnChecklist: p.state === 'returned' ? items.map((a) => ({ assetId: a.id, present: true, condition: 'good' as const })) : null,
-    }, items.map((a) => a.id));
-    if (p.state === 'out') await moveAssets(tx, { userId: manager.id }, items.map((a) => a.id), 'out', { bookingId: booking.id, where: p.job.siteAddress, counterpart: tech.name });
+    const booking = await seedBooking(
+      tx,
+      {
+        startsOn: p.job.startsOn,
+        endsOn: p.job.endsOn,
+        state: p.state,
+        purpose: 'job',
+        jobId: p.job.id,
+        kitId: p.kit.id,
+        createdBy: manager.id,
+        checkedOutAt: out ? new Date(`${p.job.startsOn}T07:45:00Z`) : null,
+        handedOverBy: out ? manager.id : null,
+        takenBy: out ? tech.name : null,
+        takenByUserId: out ? tech.id : null,
+        checkoutChecklist: out ? items.map((a) => ({ assetId: a.id, present: true, condition: 'good' as const })) : null,
+        returnedAt: p.state === 'returned' ? new Date(`${p.job.endsOn}T16:10:00Z`) : null,
+        receivedBy: p.state === 'returned' ? manager.id : null,
+        broughtBackBy: p.state === 'returned' ? tech.name : null,
+        returnChecklist: p.state === 'returned' ? items.map((a) => ({ assetId: a.id, present: true, condition: 'good' as const })) : null,
+      },
+      items.map((a) => a.id),
+    );
+    if (p.state === 'out')
+      await moveAssets(
+        tx,
+        { userId: manager.id },
+        items.map((a) => a.id),
+        'out',
+        { bookingId: booking.id, where: p.job.siteAddress, counterpart: tech.name },
+      );
     if (p.state === 'returned') {
       const event = { actorUserId: manager.id, bookingId: booking.id, note: null };
       await recordPastCustody(tx, [
@@ -129,7 +242,13 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
         ...items.map((a) => ({ ...event, assetId: a.id, kind: 'returned' as const, holder: null, location: a.location })),
       ]);
     }
-    await tx.insert(AuditEvent, { actorUserId: manager.id, action: 'booking.created', subjectType: 'booking', subjectId: booking.id, details: { via: 'demo_seed' } });
+    await tx.insert(AuditEvent, {
+      actorUserId: manager.id,
+      action: 'booking.created',
+      subjectType: 'booking',
+      subjectId: booking.id,
+      details: { via: 'demo_seed' },
+    });
   }
   return { checks: checks.length, bookings: plans.length };
 }

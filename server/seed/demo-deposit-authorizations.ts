@@ -19,7 +19,9 @@ const known = (gateway: PaymentGateway, id: string) =>
  * with the success test card and aged so it lapses when the database says it does.
  */
 export async function restoreAuthorizationsOnLocalFake(db: DataSource, gateway: PaymentGateway, fakeBaseUrl: string): Promise<number> {
-  const rows: { id: string; organization_id: string; payment_intent_id: string | null }[] = await db.query(`SELECT id, organization_id, payment_intent_id FROM deposit_authorizations WHERE kind = 'authorization' AND state = 'authorized'`);
+  const rows: { id: string; organization_id: string; payment_intent_id: string | null }[] = await db.query(
+    `SELECT id, organization_id, payment_intent_id FROM deposit_authorizations WHERE kind = 'authorization' AND state = 'authorized'`,
+  );
   let restored = 0;
   for (const row of rows) {
     if (row.payment_intent_id && (await known(gateway, row.payment_intent_id))) continue;
@@ -30,10 +32,24 @@ export async function restoreAuthorizationsOnLocalFake(db: DataSource, gateway: 
       const customer = await tx.get(Customer, { id: rental.customerId }, 'That customer');
       customer.paymentCustomerId = await gateway.ensureCustomer(customer);
       const card = await gateway.saveCard('pm_card_visa', customer.paymentCustomerId, `restore:${authorization.id}:card`);
-      const placed = await gateway.confirmIntent({ amountMinor: authorization.amountMinor, currency: rental.currency, customer: customer.paymentCustomerId, paymentMethod: card, capture: 'manual', offSession: false, description: `Deposit for rental ${rental.number}`, metadata: { rentalId: rental.id, organizationId: row.organization_id, purpose: 'deposit' }, key: `restore:${authorization.id}` });
+      const placed = await gateway.confirmIntent({
+        amountMinor: authorization.amountMinor,
+        currency: rental.currency,
+        customer: customer.paymentCustomerId,
+        paymentMethod: card,
+        capture: 'manual',
+        offSession: false,
+        description: `Deposit for rental ${rental.number}`,
+        metadata: { rentalId: rental.id, organizationId: row.organization_id, purpose: 'deposit' },
+        key: `restore:${authorization.id}`,
+      });
       if (!placed.ok || !placed.captureBefore || !authorization.captureBefore) return;
       const seconds = Math.max(0, Math.round((placed.captureBefore.getTime() - authorization.captureBefore.getTime()) / 1000));
-      await fetch(`${fakeBaseUrl}/__fake/authorizations/${placed.id}/age`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ seconds }) });
+      await fetch(`${fakeBaseUrl}/__fake/authorizations/${placed.id}/age`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ seconds }),
+      });
       await tx.save(Customer, customer);
       Object.assign(rental, { paymentMethodId: card });
       await tx.save(Rental, rental);

@@ -9,25 +9,61 @@ const makers: Record<AssetType, { maker: string; model: string; interval: number
   tracker: { maker: 'Orrinvale Optics', model: 'Sightline 12', interval: 12, value: 9_800_000, specs: () => ({ laserClass: '2', maxRangeM: 60 }) },
   controller: { maker: 'Orrinvale Optics', model: 'Hub 3', interval: null, value: 850_000, specs: () => ({}) },
   probe: { maker: 'Thistlegate Instruments', model: 'Wand 6', interval: 12, value: 3_200_000, specs: () => ({}) },
-  tip: { maker: 'Thistlegate Instruments', model: 'Stylus 4 mm', interval: 12, value: 45_000, specs: () => ({ lengthMm: 100, positions: ['vertical', 'horizontal'] }) },
-  battery: { maker: 'Brindlecell', model: 'Pack 14V7', interval: null, value: 38_000, specs: () => ({ nominalVoltageV: 14.4, ratedCapacityAh: 6.7, chargeCycles: 120 }) },
+  tip: {
+    maker: 'Thistlegate Instruments',
+    model: 'Stylus 4 mm',
+    interval: 12,
+    value: 45_000,
+    specs: () => ({ lengthMm: 100, positions: ['vertical', 'horizontal'] }),
+  },
+  battery: {
+    maker: 'Brindlecell',
+    model: 'Pack 14V7',
+    interval: null,
+    value: 38_000,
+    specs: () => ({ nominalVoltageV: 14.4, ratedCapacityAh: 6.7, chargeCycles: 120 }),
+  },
   smr: { maker: 'Carrow & Finch', model: 'Retro 1.5', interval: 24, value: 160_000, specs: () => ({ diameterMm: 38.1 }) },
   reference_sphere: { maker: 'Carrow & Finch', model: 'Datum Ball 38', interval: 24, value: 60_000, specs: () => ({ diameterMm: 38.1 }) },
   nest: { maker: 'Carrow & Finch', model: 'Mag Seat 38', interval: null, value: 12_000, specs: () => ({ sizeMm: 38.1 }) },
-  scale_bar: { maker: 'Ashmere Gauge', model: 'Carbon Span 2300', interval: 12, value: 420_000, specs: () => ({ certifiedLengthMm: 2300.012, expansionPpmPerK: 0.5 }) },
+  scale_bar: {
+    maker: 'Ashmere Gauge',
+    model: 'Carbon Span 2300',
+    interval: 12,
+    value: 420_000,
+    specs: () => ({ certifiedLengthMm: 2300.012, expansionPpmPerK: 0.5 }),
+  },
   weather_station: { maker: 'Wexcombe Sensing', model: 'AirLog 3', interval: 12, value: 140_000, specs: () => ({}) },
   case: { maker: 'Hollin Cases', model: 'Roadbox 90', interval: null, value: 65_000, specs: () => ({ massKg: 31 }) },
   accessory: { maker: 'Carrow & Finch', model: 'Tripod Adapter', interval: null, value: 9_000, specs: () => ({}) },
 };
 
 const prefixes: Record<AssetType, string> = {
-  tracker: 'TRK', controller: 'CTL', probe: 'PRB', tip: 'TIP', battery: 'BAT', smr: 'SMR',
-  reference_sphere: 'SPH', nest: 'NST', scale_bar: 'BAR', weather_station: 'WX', case: 'CASE', accessory: 'ACC',
+  tracker: 'TRK',
+  controller: 'CTL',
+  probe: 'PRB',
+  tip: 'TIP',
+  battery: 'BAT',
+  smr: 'SMR',
+  reference_sphere: 'SPH',
+  nest: 'NST',
+  scale_bar: 'BAR',
+  weather_station: 'WX',
+  case: 'CASE',
+  accessory: 'ACC',
 };
 
 /** What travels in each demo kit. */
 const kitContents: [AssetType, number][] = [
-  ['tracker', 1], ['controller', 1], ['probe', 1], ['tip', 4], ['battery', 2], ['smr', 3], ['reference_sphere', 1], ['nest', 3], ['case', 1],
+  ['tracker', 1],
+  ['controller', 1],
+  ['probe', 1],
+  ['tip', 4],
+  ['battery', 2],
+  ['smr', 3],
+  ['reference_sphere', 1],
+  ['nest', 3],
+  ['case', 1],
 ];
 const kitNames = ['Kit Alder', 'Kit Birch', 'Kit Cedar', 'Kit Damson'];
 
@@ -52,14 +88,38 @@ export async function seedDemoFleet(tx: Scoped, timeZone: string, firm: string) 
     }
   }
   let m = 0;
-  for (const [type, count] of [['tip', 4], ['battery', 3], ['smr', 2], ['scale_bar', 2], ['weather_station', 2], ['nest', 2], ['accessory', 2]] as [AssetType, number][]) {
+  for (const [type, count] of [
+    ['tip', 4],
+    ['battery', 3],
+    ['smr', 2],
+    ['scale_bar', 2],
+    ['weather_station', 2],
+    ['nest', 2],
+    ['accessory', 2],
+  ] as [AssetType, number][]) {
     for (let i = 0; i < count; i += 1) plan.push({ type, kit: null, lastCalibratedDaysAgo: spareAges[m++ % spareAges.length] });
   }
   // A large pack that needs carrier approval, and one that was dropped.
-  plan.push({ type: 'battery', kit: null, lastCalibratedDaysAgo: null, extra: { model: 'Pack 14V10', specs: { nominalVoltageV: 14.4, ratedCapacityAh: 10.4, chargeCycles: 48 } } });
-  plan.push({ type: 'battery', kit: null, lastCalibratedDaysAgo: null, extra: { specs: { nominalVoltageV: 14.4, ratedCapacityAh: 6.7, chargeCycles: 310, damaged: true }, notes: 'Dropped from the van tail-lift; casing cracked. Do not charge.' } });
+  plan.push({
+    type: 'battery',
+    kit: null,
+    lastCalibratedDaysAgo: null,
+    extra: { model: 'Pack 14V10', specs: { nominalVoltageV: 14.4, ratedCapacityAh: 10.4, chargeCycles: 48 } },
+  });
+  plan.push({
+    type: 'battery',
+    kit: null,
+    lastCalibratedDaysAgo: null,
+    extra: {
+      specs: { nominalVoltageV: 14.4, ratedCapacityAh: 6.7, chargeCycles: 310, damaged: true },
+      notes: 'Dropped from the van tail-lift; casing cracked. Do not charge.',
+    },
+  });
 
-  const kitIds = await seedKits(tx, kitNames.map((name) => ({ name, notes: `Travels in one case set; packed at the ${firm} shop.` })));
+  const kitIds = await seedKits(
+    tx,
+    kitNames.map((name) => ({ name, notes: `Travels in one case set; packed at the ${firm} shop.` })),
+  );
   const kits = new Map(kitNames.map((name, i) => [name, kitIds[i]]));
 
   const rows = plan.map((p, index) => {
@@ -92,6 +152,15 @@ export async function seedDemoFleet(tx: Scoped, timeZone: string, firm: string) 
   });
   const ids = await seedAssets(tx, rows);
   await noteCustody(tx, null, ids, 'registered', { counterpart: firm, why: 'Demo data' });
-  await tx.insertMany(AuditEvent, ids.map((id, i) => ({ actorUserId: null, action: 'asset.created', subjectType: 'asset', subjectId: id, details: { assetTag: rows[i].assetTag, via: 'demo_seed' } })));
+  await tx.insertMany(
+    AuditEvent,
+    ids.map((id, i) => ({
+      actorUserId: null,
+      action: 'asset.created',
+      subjectType: 'asset',
+      subjectId: id,
+      details: { assetTag: rows[i].assetTag, via: 'demo_seed' },
+    })),
+  );
   return ids.length;
 }

@@ -20,14 +20,36 @@ import { User } from '../users/user.entity';
 
 /** Invented renters of the invented demo firm. */
 const renters = [
-  { company: 'Larkspur Aero Structures', billingContact: 'Accounts payable', billingEmail: 'payables@larkspur-aero.test', address: 'Larkspur Field 1, Wrenhallow', taxNumber: 'WH-4471-2209' },
-  { company: 'Hollowmere Turbine Works', billingContact: 'Edda Marchbank', billingEmail: 'finance@hollowmere.test', address: 'Hollowmere Road 40, Ostby', taxNumber: 'OB-1187-3310' },
+  {
+    company: 'Larkspur Aero Structures',
+    billingContact: 'Accounts payable',
+    billingEmail: 'payables@larkspur-aero.test',
+    address: 'Larkspur Field 1, Wrenhallow',
+    taxNumber: 'WH-4471-2209',
+  },
+  {
+    company: 'Hollowmere Turbine Works',
+    billingContact: 'Edda Marchbank',
+    billingEmail: 'finance@hollowmere.test',
+    address: 'Hollowmere Road 40, Ostby',
+    taxNumber: 'OB-1187-3310',
+  },
   { company: 'Ostby Mould & Die', billingContact: 'Purchasing', billingEmail: 'purchasing@ostby-mould.test', address: 'Kiln Lane 5, Ostby', taxNumber: null },
-  { company: 'Quarrington Rail Fabrication', billingContact: 'Works office', billingEmail: 'office@quarrington-rail.test', address: 'Quarrington Sidings 2', taxNumber: 'QR-5520-0418' },
+  {
+    company: 'Quarrington Rail Fabrication',
+    billingContact: 'Works office',
+    billingEmail: 'office@quarrington-rail.test',
+    address: 'Quarrington Sidings 2',
+    taxNumber: 'QR-5520-0418',
+  },
 ];
 
 /** The demo firm's own invoice details (invented). */
-const issuer = { address: 'Forge Lane 12, 41877 Wrenhallow', taxNumber: 'WH-7781-0042', paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.' };
+const issuer = {
+  address: 'Forge Lane 12, 41877 Wrenhallow',
+  taxNumber: 'WH-7781-0042',
+  paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.',
+};
 
 /** Day, week (7 days), month (28 days) and late fee per day, in cents (invented prices). */
 const rates: Record<AssetType, [number, number, number, number]> = {
@@ -45,7 +67,18 @@ const rates: Record<AssetType, [number, number, number, number]> = {
   accessory: [500, 2500, 8000, 100],
 };
 
-type Plan = { renter: number; kit?: string; spares?: AssetType[]; from: number; to: number; back?: number; authorizedFrom?: number; settle: 'released' | 'captured' | 'open' | 'to_settle'; credit?: string; damagedType?: AssetType };
+type Plan = {
+  renter: number;
+  kit?: string;
+  spares?: AssetType[];
+  from: number;
+  to: number;
+  back?: number;
+  authorizedFrom?: number;
+  settle: 'released' | 'captured' | 'open' | 'to_settle';
+  credit?: string;
+  damagedType?: AssetType;
+};
 
 /**
  * Customers, rate cards and rentals: five past rentals with their invoices
@@ -61,17 +94,32 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
   const people = await tx.find(User, {});
   const clerk = people.find((p) => p.role === 'billing')!;
   const manager = people.find((p) => p.role === 'manager')!;
-  await tx.manager.update(Organization, { id: tx.organizationId }, {
-    settings: () => `settings || '${JSON.stringify({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 }, issuer })}'::jsonb`,
-  });
+  await tx.manager.update(
+    Organization,
+    { id: tx.organizationId },
+    {
+      settings: () =>
+        `settings || '${JSON.stringify({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 }, issuer })}'::jsonb`,
+    },
+  );
   const customers: Customer[] = [];
   for (const r of renters) customers.push(await tx.insert(Customer, { ...r, notes: null, paymentCustomerId: null }));
-  for (const [type, [d, w, m, late]] of Object.entries(rates)) await tx.insert(RateCard, { assetType: type as AssetType, kitId: null, dayMinor: d, weekMinor: w, monthMinor: m, lateFeePerDayMinor: late });
+  for (const [type, [d, w, m, late]] of Object.entries(rates))
+    await tx.insert(RateCard, { assetType: type as AssetType, kitId: null, dayMinor: d, weekMinor: w, monthMinor: m, lateFeePerDayMinor: late });
   const { assets, kits } = await fleetSnapshot(tx);
-  for (const name of ['Kit Birch', 'Kit Cedar']) await tx.insert(RateCard, { assetType: null, kitId: kits.find((k) => k.name === name)!.id, dayMinor: 75_000, weekMinor: 360_000, monthMinor: 1_150_000, lateFeePerDayMinor: 15_000 });
+  for (const name of ['Kit Birch', 'Kit Cedar'])
+    await tx.insert(RateCard, {
+      assetType: null,
+      kitId: kits.find((k) => k.name === name)!.id,
+      dayMinor: 75_000,
+      weekMinor: 360_000,
+      monthMinor: 1_150_000,
+      lateFeePerDayMinor: 15_000,
+    });
 
   // Spares that may go out through the window: ready, not at the lab, calibrated well past it.
-  const spare = (type: AssetType, until: string, taken: Set<string>): AssetRecord | undefined => assets.find((a) => a.type === type && !a.kitId && a.status === 'ready' && !taken.has(a.id) && (!a.calibrationRequired || (a.dueOn ?? '') > until));
+  const spare = (type: AssetType, until: string, taken: Set<string>): AssetRecord | undefined =>
+    assets.find((a) => a.type === type && !a.kitId && a.status === 'ready' && !taken.has(a.id) && (!a.calibrationRequired || (a.dueOn ?? '') > until));
   const plans: Plan[] = [
     { renter: 0, kit: 'Kit Birch', from: -170, to: -157, settle: 'released' },
     { renter: 1, kit: 'Kit Cedar', from: -140, to: -113, back: -111, settle: 'captured' },
@@ -88,33 +136,104 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
     const startsOn = addDays(today, p.from);
     const endsOn = addDays(today, p.to);
     const kit = p.kit ? kits.find((k) => k.name === p.kit)! : null;
-    const items = kit ? assets.filter((a) => a.kitId === kit.id && a.status !== 'held') : p.spares!.map((t) => spare(t, endsOn, taken)).filter((a): a is AssetRecord => !!a);
+    const items = kit
+      ? assets.filter((a) => a.kitId === kit.id && a.status !== 'held')
+      : p.spares!.map((t) => spare(t, endsOn, taken)).filter((a): a is AssetRecord => !!a);
     items.forEach((a) => taken.add(a.id));
     const out = p.settle === 'open';
     const returnedOn = out ? null : addDays(today, p.back ?? p.to);
     const quote = await priceRental(tx, { kitId: kit?.id, assetIds: kit ? undefined : items.map((a) => a.id), startsOn, endsOn });
     const damaged = p.damagedType ? items.find((a) => a.type === p.damagedType)! : null;
-    const checklist = (d: AssetRecord | null) => items.map((a) => ({ assetId: a.id, present: true, condition: a === d ? ('damaged' as const) : ('good' as const) }));
+    const checklist = (d: AssetRecord | null) =>
+      items.map((a) => ({ assetId: a.id, present: true, condition: a === d ? ('damaged' as const) : ('good' as const) }));
     const rentalId = randomUUID();
-    const booking = await seedBooking(tx, {
-      startsOn, endsOn, state: out ? 'out' : 'returned', purpose: 'rental', rentalId, kitId: kit?.id ?? null, createdBy: clerk.id,
-      checkedOutAt: at(p.from, 8), handedOverBy: manager.id, takenBy: customers[p.renter].billingContact, takenByUserId: null, checkoutChecklist: checklist(null),
-      returnedAt: returnedOn ? at(p.back ?? p.to, 15) : null, receivedBy: returnedOn ? manager.id : null, broughtBackBy: returnedOn ? customers[p.renter].billingContact : null, returnChecklist: returnedOn ? checklist(damaged) : null,
-    }, items.map((a) => a.id));
-    const rental = await tx.insert(Rental, { id: rentalId, number: `R-${padded(await nextNumber(tx, 'rental'))}`, customerId: customers[p.renter].id, bookingId: booking.id, quote, depositMinor: quote.depositMinor, currency: quote.currency, paymentMethodId: 'pm_card_visa', note: null, createdBy: clerk.id, createdAt: at(p.from - 6, 10) });
+    const booking = await seedBooking(
+      tx,
+      {
+        startsOn,
+        endsOn,
+        state: out ? 'out' : 'returned',
+        purpose: 'rental',
+        rentalId,
+        kitId: kit?.id ?? null,
+        createdBy: clerk.id,
+        checkedOutAt: at(p.from, 8),
+        handedOverBy: manager.id,
+        takenBy: customers[p.renter].billingContact,
+        takenByUserId: null,
+        checkoutChecklist: checklist(null),
+        returnedAt: returnedOn ? at(p.back ?? p.to, 15) : null,
+        receivedBy: returnedOn ? manager.id : null,
+        broughtBackBy: returnedOn ? customers[p.renter].billingContact : null,
+        returnChecklist: returnedOn ? checklist(damaged) : null,
+      },
+      items.map((a) => a.id),
+    );
+    const rental = await tx.insert(Rental, {
+      id: rentalId,
+      number: `R-${padded(await nextNumber(tx, 'rental'))}`,
+      customerId: customers[p.renter].id,
+      bookingId: booking.id,
+      quote,
+      depositMinor: quote.depositMinor,
+      currency: quote.currency,
+      paymentMethodId: 'pm_card_visa',
+      note: null,
+      createdBy: clerk.id,
+      createdAt: at(p.from - 6, 10),
+    });
     const renter = { holder: customers[p.renter].company, location: customers[p.renter].address };
-    if (out) await moveAssets(tx, { userId: manager.id }, items.map((a) => a.id), 'out', { bookingId: booking.id, where: renter.location, counterpart: renter.holder });
+    if (out)
+      await moveAssets(
+        tx,
+        { userId: manager.id },
+        items.map((a) => a.id),
+        'out',
+        { bookingId: booking.id, where: renter.location, counterpart: renter.holder },
+      );
     else {
       const event = { actorUserId: manager.id, bookingId: booking.id };
       await recordPastCustody(tx, [
         ...items.map((a) => ({ ...event, ...renter, assetId: a.id, kind: 'checked_out' as const, note: null })),
-        ...items.map((a) => ({ ...event, assetId: a.id, kind: 'returned' as const, holder: null, location: a.location, note: a === damaged ? 'damaged: dent on the housing' : null })),
+        ...items.map((a) => ({
+          ...event,
+          assetId: a.id,
+          kind: 'returned' as const,
+          holder: null,
+          location: a.location,
+          note: a === damaged ? 'damaged: dent on the housing' : null,
+        })),
       ]);
     }
     if (damaged) {
-      const incident = await tx.insert(Incident, { assetId: damaged.id, kind: 'impact', description: 'Came back with a dent on the housing; the customer says it rolled off a fixture.', occurredAt: at(-1, 15), location: 'Counter', bookingId: booking.id, state: 'reported', resolution: null, chargeAmountMinor: null, reportedBy: manager.id });
-      const hold = await tx.insert(Hold, { assetId: damaged.id, reason: 'incident', summary: 'Damaged on rental: dent on the housing', incidentId: incident.id, checkId: null, startedAt: at(-1, 15), startedBy: manager.id, releasedAt: null, releasedBy: null, releaseEvidence: null });
-      await moveAssets(tx, { userId: manager.id }, [damaged.id], 'held', { why: hold.summary, details: { holdId: hold.id, reason: hold.reason, summary: hold.summary } });
+      const incident = await tx.insert(Incident, {
+        assetId: damaged.id,
+        kind: 'impact',
+        description: 'Came back with a dent on the housing; the customer says it rolled off a fixture.',
+        occurredAt: at(-1, 15),
+        location: 'Counter',
+        bookingId: booking.id,
+        state: 'reported',
+        resolution: null,
+        chargeAmountMinor: null,
+        reportedBy: manager.id,
+      });
+      const hold = await tx.insert(Hold, {
+        assetId: damaged.id,
+        reason: 'incident',
+        summary: 'Damaged on rental: dent on the housing',
+        incidentId: incident.id,
+        checkId: null,
+        startedAt: at(-1, 15),
+        startedBy: manager.id,
+        releasedAt: null,
+        releasedBy: null,
+        releaseEvidence: null,
+      });
+      await moveAssets(tx, { userId: manager.id }, [damaged.id], 'held', {
+        why: hold.summary,
+        details: { holdId: hold.id, reason: hold.reason, summary: hold.summary },
+      });
     }
 
     // The deposit: a card authorization at checkout, settled at return for past rentals. One lasts
@@ -133,10 +252,21 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
     for (const [i, h] of authorizations.entries()) {
       const last = i === authorizations.length - 1;
       await tx.insert(DepositAuthorization, {
-        rentalId: rental.id, kind: 'authorization', paymentIntentId: null, idempotencyKey: `demo:${rental.id}:authorization:${i + 1}`,
+        rentalId: rental.id,
+        kind: 'authorization',
+        paymentIntentId: null,
+        idempotencyKey: `demo:${rental.id}:authorization:${i + 1}`,
         state: !last ? 'replaced' : p.settle === 'captured' ? 'captured' : p.settle === 'released' ? 'released' : 'authorized',
-        amountMinor: quote.depositMinor, capturedMinor: last ? captured : 0, cardBrand: 'visa', cardLast4: '4242', captureBefore: h.captureBefore, initiatedBy: h.initiatedBy,
-        failureMessage: null, captureReason: last && captured ? `${lateDays} late days` : null, settledAt: last ? settledAt : authorizations[i + 1].createdAt, createdAt: h.createdAt,
+        amountMinor: quote.depositMinor,
+        capturedMinor: last ? captured : 0,
+        cardBrand: 'visa',
+        cardLast4: '4242',
+        captureBefore: h.captureBefore,
+        initiatedBy: h.initiatedBy,
+        failureMessage: null,
+        captureReason: last && captured ? `${lateDays} late days` : null,
+        settledAt: last ? settledAt : authorizations[i + 1].createdAt,
+        createdAt: h.createdAt,
       });
     }
     if (!returnedOn || p.settle === 'to_settle') continue;
@@ -144,24 +274,67 @@ export async function seedDemoRentals(tx: Scoped, timeZone: string) {
     const s = settle({ quote, lateDays, damage: [], depositCapturedMinor: captured, cardChargedMinor: 0 });
     const issuedOn = addDays(today, (p.back ?? p.to) + 1);
     const customer = customers[p.renter];
-    const snapshot = { company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail, address: customer.address, taxNumber: customer.taxNumber };
-    const base = { rentalId: rental.id, customerId: customer.id, issuedBy: clerk.id, currency: quote.currency, taxRateBasisPoints: quote.taxRateBasisPoints, customer: snapshot, issuer };
+    const snapshot = {
+      company: customer.company,
+      billingContact: customer.billingContact,
+      billingEmail: customer.billingEmail,
+      address: customer.address,
+      taxNumber: customer.taxNumber,
+    };
+    const base = {
+      rentalId: rental.id,
+      customerId: customer.id,
+      issuedBy: clerk.id,
+      currency: quote.currency,
+      taxRateBasisPoints: quote.taxRateBasisPoints,
+      customer: snapshot,
+      issuer,
+    };
     const invoice = await tx.insert(Invoice, {
-      ...base, kind: 'invoice', number: `${issuedOn.slice(0, 4)}-${padded(await nextNumber(tx, `invoice:${issuedOn.slice(0, 4)}`))}`, correctsInvoiceId: null, issuedOn, issuedAt: at((p.back ?? p.to) + 1, 10),
-      lines: s.lines, subtotalMinor: s.subtotalMinor, taxMinor: s.taxMinor, totalMinor: s.totalMinor, depositCapturedMinor: s.depositCapturedMinor, cardChargedMinor: 0, balanceMinor: s.balanceMinor, reason: null,
+      ...base,
+      kind: 'invoice',
+      number: `${issuedOn.slice(0, 4)}-${padded(await nextNumber(tx, `invoice:${issuedOn.slice(0, 4)}`))}`,
+      correctsInvoiceId: null,
+      issuedOn,
+      issuedAt: at((p.back ?? p.to) + 1, 10),
+      lines: s.lines,
+      subtotalMinor: s.subtotalMinor,
+      taxMinor: s.taxMinor,
+      totalMinor: s.totalMinor,
+      depositCapturedMinor: s.depositCapturedMinor,
+      cardChargedMinor: 0,
+      balanceMinor: s.balanceMinor,
+      reason: null,
     });
     const amount = p.credit ? Math.round(s.subtotalMinor * 0.1) : 0;
     const tax = taxMinor(amount, quote.taxRateBasisPoints);
     if (p.credit) {
       await tx.insert(Invoice, {
-        ...base, kind: 'credit_note', number: `CN-${issuedOn.slice(0, 4)}-${padded(await nextNumber(tx, `credit_note:${issuedOn.slice(0, 4)}`))}`, correctsInvoiceId: invoice.id, issuedOn: addDays(issuedOn, 3), issuedAt: at((p.back ?? p.to) + 4, 10),
+        ...base,
+        kind: 'credit_note',
+        number: `CN-${issuedOn.slice(0, 4)}-${padded(await nextNumber(tx, `credit_note:${issuedOn.slice(0, 4)}`))}`,
+        correctsInvoiceId: invoice.id,
+        issuedOn: addDays(issuedOn, 3),
+        issuedAt: at((p.back ?? p.to) + 4, 10),
         lines: [{ kind: 'credit', description: `Credit against invoice ${invoice.number}: ${p.credit}`, quantity: 1, unitMinor: amount, amountMinor: amount }],
-        subtotalMinor: amount, taxMinor: tax, totalMinor: amount + tax, depositCapturedMinor: 0, cardChargedMinor: 0, balanceMinor: -(amount + tax), reason: p.credit,
+        subtotalMinor: amount,
+        taxMinor: tax,
+        totalMinor: amount + tax,
+        depositCapturedMinor: 0,
+        cardChargedMinor: 0,
+        balanceMinor: -(amount + tax),
+        reason: p.credit,
       });
     }
     // Invoices older than ten weeks were paid by transfer (the balance after any credit note); the newer ones are still open.
     if ((p.back ?? p.to) + 1 < -70) {
-      await tx.insert(InvoicePayment, { invoiceId: invoice.id, amountMinor: s.balanceMinor - amount - tax, receivedOn: addDays(issuedOn, 12), reference: `Transfer ${customer.company.split(' ')[0].toUpperCase()}-${invoice.number}`, recordedBy: clerk.id });
+      await tx.insert(InvoicePayment, {
+        invoiceId: invoice.id,
+        amountMinor: s.balanceMinor - amount - tax,
+        receivedOn: addDays(issuedOn, 12),
+        reference: `Transfer ${customer.company.split(' ')[0].toUpperCase()}-${invoice.number}`,
+        recordedBy: clerk.id,
+      });
     }
   }
   return { rentals: n };

@@ -16,13 +16,18 @@ if ((await countBookings(client, org)) === 0) {
   await client.query('BEGIN');
   await seedBenchBookings(client, org, userId);
   // A 20-item kit of items that need no calibration. Every asset's bookings leave days 54–99 from today free.
-  const kit = (await client.query(`INSERT INTO kits (organization_id, name, created_at, updated_at) VALUES ($1, 'Bench kit of twenty', now(), now()) RETURNING id`, [org])).rows[0].id;
-  await client.query(`
+  const kit = (
+    await client.query(`INSERT INTO kits (organization_id, name, created_at, updated_at) VALUES ($1, 'Bench kit of twenty', now(), now()) RETURNING id`, [org])
+  ).rows[0].id;
+  await client.query(
+    `
     UPDATE assets SET kit_id = $2 WHERE id IN (
       SELECT a.id FROM assets a WHERE a.organization_id = $1 AND a.status = 'ready' AND NOT a.calibration_required AND a.type <> 'tip'
         AND NOT EXISTS (SELECT 1 FROM booking_items bi WHERE bi.asset_id = a.id AND bi.active
                          AND daterange(bi.starts_on, bi.ends_on, '[]') && daterange(current_date + 54, current_date + 99, '[]'))
-      ORDER BY a.asset_tag LIMIT 20)`, [org, kit]);
+      ORDER BY a.asset_tag LIMIT 20)`,
+    [org, kit],
+  );
   await client.query('COMMIT');
   console.log(`Seeded ${await countBookings(client, org)} benchmark bookings (ten per asset) and a 20-item kit.`);
 }

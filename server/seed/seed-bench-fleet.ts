@@ -34,10 +34,16 @@ export async function seedBenchFleet(url: string, count: number) {
     const existing = await db.getRepository(User).findOne({ where: { email: BENCH_EMAIL } });
     if (existing) return { organizationId: existing.organizationId, created: 0 };
     return await db.transaction(async (manager) => {
-      const org = await manager.save(Organization, manager.create(Organization, { name: 'Thornbury Bench Works', timeZone: 'Europe/Berlin', currency: 'EUR', settings: {} }));
+      const org = await manager.save(
+        Organization,
+        manager.create(Organization, { name: 'Thornbury Bench Works', timeZone: 'Europe/Berlin', currency: 'EUR', settings: {} }),
+      );
       const tx = new Scoped(manager, org.id);
       await tx.insert(User, { email: BENCH_EMAIL, name: 'Bench Runner', role: 'owner', passwordHash: await bcrypt.hash(DEMO_PASSWORD, 12) });
-      const kits = await seedKits(tx, Array.from({ length: 200 }, (_, k) => ({ name: `Bench kit ${k + 1}`, notes: null })));
+      const kits = await seedKits(
+        tx,
+        Array.from({ length: 200 }, (_, k) => ({ name: `Bench kit ${k + 1}`, notes: null })),
+      );
       const today = todayIn(org.timeZone);
       const rows = Array.from({ length: count }, (_, i) => {
         const type = assetTypes[i % assetTypes.length];

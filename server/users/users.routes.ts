@@ -12,11 +12,17 @@ export function usersRoutes(users: UsersService): Router {
   endpoint(router, at, { method: 'post', path: '/', summary: 'Add a user', access: 'users.manage', body: createUserPayload, status: 201 }, ({ actor, body }) =>
     users.create(actor, body),
   );
-  endpoint(router, at, { method: 'patch', path: '/:id', summary: "Change a user's name, role or disable them", access: 'users.manage', body: updateUserPayload }, ({ actor, params, body }) =>
-    users.update(actor, params.id, body),
+  endpoint(
+    router,
+    at,
+    { method: 'patch', path: '/:id', summary: "Change a user's name, role or disable them", access: 'users.manage', body: updateUserPayload },
+    ({ actor, params, body }) => users.update(actor, params.id, body),
   );
-  endpoint(router, at, { method: 'post', path: '/:id/password', summary: "Set a user's password", access: 'users.manage', body: resetPasswordPayload }, ({ actor, params, body }) =>
-    users.resetPassword(actor, params.id, body.password),
+  endpoint(
+    router,
+    at,
+    { method: 'post', path: '/:id/password', summary: "Set a user's password", access: 'users.manage', body: resetPasswordPayload },
+    ({ actor, params, body }) => users.resetPassword(actor, params.id, body.password),
   );
   return router;
 }

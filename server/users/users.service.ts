@@ -15,7 +15,8 @@ import { publicUser } from './people';
 import { User } from './user.entity';
 
 /** The firm's active owners, row-locked until the transaction ends (in id order, so two callers cannot deadlock). */
-const lockActiveOwners = (tx: Scoped) => tx.sql<{ id: string }>(`SELECT id FROM users WHERE organization_id = $1 AND role = 'owner' AND NOT disabled ORDER BY id FOR UPDATE`);
+const lockActiveOwners = (tx: Scoped) =>
+  tx.sql<{ id: string }>(`SELECT id FROM users WHERE organization_id = $1 AND role = 'owner' AND NOT disabled ORDER BY id FOR UPDATE`);
 
 export class UsersService {
   constructor(

@@ -26,7 +26,10 @@ const loadEstimator = () =>
       new core.ZxcvbnFactory({
         dictionary: { ...common.dictionary, ...en.dictionary },
         graphs: common.adjacencyGraphs,
-        translations: { ...en.translations, warnings: { ...en.translations.warnings, userInputs: 'It is made from a name or address that anyone who knows you or the firm would try.' } },
+        translations: {
+          ...en.translations,
+          warnings: { ...en.translations.warnings, userInputs: 'It is made from a name or address that anyone who knows you or the firm would try.' },
+        },
       }),
   ));
 

@@ -20,7 +20,9 @@ export function formatMoney(minor: number | null | undefined, currency: string, 
   if (minor === null || minor === undefined) return '—';
   try {
     const digits = currencyExponent(currency);
-    return new Intl.NumberFormat(locale, { style: 'currency', currency, minimumFractionDigits: digits, maximumFractionDigits: digits }).format(minor / 10 ** digits);
+    return new Intl.NumberFormat(locale, { style: 'currency', currency, minimumFractionDigits: digits, maximumFractionDigits: digits }).format(
+      minor / 10 ** digits,
+    );
   } catch {
     return `${minor} ${currency} (minor units)`;
   }

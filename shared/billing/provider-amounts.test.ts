@@ -56,9 +56,12 @@ describe("amounts in the payment provider's units", () => {
 
 describe("the provider's published currency lists", () => {
   // Copied by hand from docs.stripe.com/currencies, "Zero-decimal currencies" and "Three-decimal currencies".
-  it.each(['BIF', 'CLP', 'DJF', 'GNF', 'JPY', 'KMF', 'KRW', 'MGA', 'PYG', 'RWF', 'UGX', 'VND', 'VUV', 'XAF', 'XOF', 'XPF'])('%s is zero-decimal: the amount is whole units', (code) => {
-    expect(providerAmountRule(code)).toEqual({ digits: 0, step: 1 });
-  });
+  it.each(['BIF', 'CLP', 'DJF', 'GNF', 'JPY', 'KMF', 'KRW', 'MGA', 'PYG', 'RWF', 'UGX', 'VND', 'VUV', 'XAF', 'XOF', 'XPF'])(
+    '%s is zero-decimal: the amount is whole units',
+    (code) => {
+      expect(providerAmountRule(code)).toEqual({ digits: 0, step: 1 });
+    },
+  );
   it.each(['BHD', 'JOD', 'KWD', 'OMR', 'TND'])('%s is three-decimal with a last digit of 0', (code) => {
     expect(providerAmountRule(code)).toEqual({ digits: 3, step: 10 });
   });

@@ -47,7 +47,8 @@ export const roundUpToProviderStep = (minor: number, currency: string) => {
 /** ISO minor units → the provider's `amount`. Refuses an amount the provider would not take. */
 export function toProviderAmount(minor: number, currency: string): number {
   if (!Number.isSafeInteger(minor)) throw new RangeError(`${minor} is not a whole number of minor units.`);
-  if (minor % providerStepMinor(currency) !== 0) throw new RangeError(`The payment provider takes ${currency.toUpperCase()} only in multiples of ${providerStepMinor(currency)} minor units.`);
+  if (minor % providerStepMinor(currency) !== 0)
+    throw new RangeError(`The payment provider takes ${currency.toUpperCase()} only in multiples of ${providerStepMinor(currency)} minor units.`);
   const shift = providerAmountRule(currency).digits - currencyExponent(currency);
   return shift >= 0 ? minor * 10 ** shift : minor / 10 ** -shift;
 }

@@ -28,7 +28,7 @@ export function cheapestCover(days: number, rates: Rates): { periods: Periods; t
     choice[i] = kind;
   }
   const periods: Periods = { months: 0, weeks: 0, days: 0 };
-  for (let i = days; i > 0; ) {
+  for (let i = days; i > 0;) {
     const kind = choice[i];
     periods[kind] += 1;
     i = Math.max(0, i - (kind === 'days' ? 1 : kind === 'weeks' ? WEEK_DAYS : MONTH_DAYS));

@@ -8,7 +8,19 @@ const quote: Quote = {
   days: 13,
   startsOn: '2027-03-01',
   endsOn: '2027-03-13',
-  lines: [{ description: 'SMR', assetIds: ['a', 'b'], kitId: null, quantity: 2, periods: { months: 0, weeks: 2, days: 0 }, unitMinor: 15_000, amountMinor: 30_000, rates: { dayMinor: 1500, weekMinor: 7500, monthMinor: 24_000 }, lateFeePerDayMinor: 500 }],
+  lines: [
+    {
+      description: 'SMR',
+      assetIds: ['a', 'b'],
+      kitId: null,
+      quantity: 2,
+      periods: { months: 0, weeks: 2, days: 0 },
+      unitMinor: 15_000,
+      amountMinor: 30_000,
+      rates: { dayMinor: 1500, weekMinor: 7500, monthMinor: 24_000 },
+      lateFeePerDayMinor: 500,
+    },
+  ],
   subtotalMinor: 30_000,
   taxRateBasisPoints: 1900,
   taxMinor: 5700,
@@ -22,7 +34,13 @@ describe('settling a rental at return', () => {
     // Worked by hand: late 2 days × (15.00 + 5.00) × 2 SMRs = 80.00; damage 180.00;
     // net 300.00 + 80.00 + 180.00 = 560.00; tax 19 % = 106.40; total 666.40.
     // Extras 260.00 + 19 % = 309.40 captured from the card authorization; the balance is the rental's own 357.00.
-    const s = settle({ quote, lateDays: 2, damage: [{ description: 'SMR-004 dented', amountMinor: 18_000 }], depositCapturedMinor: 30_940, cardChargedMinor: 0 });
+    const s = settle({
+      quote,
+      lateDays: 2,
+      damage: [{ description: 'SMR-004 dented', amountMinor: 18_000 }],
+      depositCapturedMinor: 30_940,
+      cardChargedMinor: 0,
+    });
     expect(s.lines.map((l) => [l.kind, l.amountMinor])).toEqual([
       ['rental', 30_000],
       ['late', 8000],
@@ -34,7 +52,13 @@ describe('settling a rental at return', () => {
 
   it('on time and undamaged: the quote is the invoice', () => {
     const s = settle({ quote, lateDays: 0, damage: [], depositCapturedMinor: 0, cardChargedMinor: 0 });
-    expect(s).toMatchObject({ subtotalMinor: quote.subtotalMinor, taxMinor: quote.taxMinor, totalMinor: quote.totalMinor, extrasGrossMinor: 0, balanceMinor: quote.totalMinor });
+    expect(s).toMatchObject({
+      subtotalMinor: quote.subtotalMinor,
+      taxMinor: quote.taxMinor,
+      totalMinor: quote.totalMinor,
+      extrasGrossMinor: 0,
+      balanceMinor: quote.totalMinor,
+    });
   });
 });
 

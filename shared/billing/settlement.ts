@@ -31,7 +31,13 @@ export function settle(input: {
   if (lateDays > 0) {
     for (const l of quote.lines) {
       const unit = lateChargeMinor(lateDays, l.rates, l.lateFeePerDayMinor);
-      extras.push({ kind: 'late', description: `${l.description} — ${lateDays} late day${lateDays === 1 ? '' : 's'}`, quantity: l.quantity, unitMinor: unit, amountMinor: unit * l.quantity });
+      extras.push({
+        kind: 'late',
+        description: `${l.description} — ${lateDays} late day${lateDays === 1 ? '' : 's'}`,
+        quantity: l.quantity,
+        unitMinor: unit,
+        amountMinor: unit * l.quantity,
+      });
     }
   }
   for (const d of input.damage) extras.push({ kind: 'damage', description: d.description, quantity: 1, unitMinor: d.amountMinor, amountMinor: d.amountMinor });

@@ -146,7 +146,15 @@ export type InvoiceView = InvoiceSummary & {
   issuedAt: string;
 };
 
-export type RentalItem = { id: string; assetTag: string; type: string; serialNumber: string; model: string | null; manufacturer: string | null; replacementValueMinor: number | null };
+export type RentalItem = {
+  id: string;
+  assetTag: string;
+  type: string;
+  serialNumber: string;
+  model: string | null;
+  manufacturer: string | null;
+  replacementValueMinor: number | null;
+};
 
 export type RentalView = {
   id: string;

@@ -42,4 +42,5 @@ export function blockReason(asset: BookableAsset, endsOn: string, purpose: Booki
 export const bookingDays = (startsOn: string, endsOn: string) => differenceInCalendarDays(parseISO(endsOn), parseISO(startsOn)) + 1;
 
 /** Inclusive date ranges overlap when each starts on or before the other ends. */
-export const rangesOverlap = (a: { startsOn: string; endsOn: string }, b: { startsOn: string; endsOn: string }) => a.startsOn <= b.endsOn && b.startsOn <= a.endsOn;
+export const rangesOverlap = (a: { startsOn: string; endsOn: string }, b: { startsOn: string; endsOn: string }) =>
+  a.startsOn <= b.endsOn && b.startsOn <= a.endsOn;

@@ -108,10 +108,22 @@ describe('the calendar day of an instant in a time zone (independent of the proc
   });
 
   // Independent computation: Luxon's own zone arithmetic (DateTime.fromObject in a zone, startOf('day')).
-  const zones = ['UTC', 'America/Los_Angeles', 'Pacific/Auckland', 'Europe/Berlin', 'America/St_Johns', 'Pacific/Chatham', 'Pacific/Kiritimati', 'Pacific/Pago_Pago'];
+  const zones = [
+    'UTC',
+    'America/Los_Angeles',
+    'Pacific/Auckland',
+    'Europe/Berlin',
+    'America/St_Johns',
+    'Pacific/Chatham',
+    'Pacific/Kiritimati',
+    'Pacific/Pago_Pago',
+  ];
   it.each(zones)('agrees with Luxon one millisecond either side of every local midnight, 1 Mar – 15 Apr 2026 and 20 Sep – 10 Nov 2026, in %s', (zone) => {
     const wrong: string[] = [];
-    for (const [from, to] of [['2026-03-01', '2026-04-15'], ['2026-09-20', '2026-11-10']]) {
+    for (const [from, to] of [
+      ['2026-03-01', '2026-04-15'],
+      ['2026-09-20', '2026-11-10'],
+    ]) {
       for (let day = DateTime.fromISO(from, { zone }); day.toISODate()! <= to; day = day.plus({ days: 1 })) {
         const midnight = day.startOf('day');
         for (const ms of [-1, 0, 1]) {

@@ -20,10 +20,18 @@ describe('calibration interval review (OIML D 10 / ILAC-G24 staircase method)', 
   });
 
   it('stays within the limits, and says so when a limit stops a move', () => {
-    expect(suggestInterval(36, ['in_tolerance', 'in_tolerance'])).toMatchObject({ suggestedMonths: 36, change: 'keep', reason: expect.stringMatching(/maximum of 36 months/) });
+    expect(suggestInterval(36, ['in_tolerance', 'in_tolerance'])).toMatchObject({
+      suggestedMonths: 36,
+      change: 'keep',
+      reason: expect.stringMatching(/maximum of 36 months/),
+    });
     expect(suggestInterval(32, ['in_tolerance', 'in_tolerance'])).toMatchObject({ suggestedMonths: 36, change: 'lengthen' });
     expect(suggestInterval(4, ['out_of_tolerance'])).toMatchObject({ suggestedMonths: 3, change: 'shorten' });
-    expect(suggestInterval(3, ['out_of_tolerance'])).toMatchObject({ suggestedMonths: 3, change: 'keep', reason: expect.stringMatching(/minimum of 3 months/) });
+    expect(suggestInterval(3, ['out_of_tolerance'])).toMatchObject({
+      suggestedMonths: 3,
+      change: 'keep',
+      reason: expect.stringMatching(/minimum of 3 months/),
+    });
   });
 
   it('follows the configured factors', () => {
@@ -57,7 +65,11 @@ describe('a suggestion never moves against the evidence (OIML D 10 method 1)', (
   it('holds over every interval from 1 to 120 months, every policy range tried and every short history', () => {
     const results: AsFound[] = ['in_tolerance', 'out_of_tolerance', 'not_reported'];
     const histories: AsFound[][] = results.flatMap((a) => results.flatMap((b) => results.map((c) => [a, b, c])));
-    const policies: IntervalPolicy[] = [defaultIntervalPolicy, { ...defaultIntervalPolicy, minMonths: 6, maxMonths: 24, shortenFactor: 0.75, lengthenFactor: 1.1 }, { ...defaultIntervalPolicy, minMonths: 1, maxMonths: 60, shortenFactor: 1 }];
+    const policies: IntervalPolicy[] = [
+      defaultIntervalPolicy,
+      { ...defaultIntervalPolicy, minMonths: 6, maxMonths: 24, shortenFactor: 0.75, lengthenFactor: 1.1 },
+      { ...defaultIntervalPolicy, minMonths: 1, maxMonths: 60, shortenFactor: 1 },
+    ];
     const wrong: string[] = [];
     for (const policy of policies) {
       for (let months = 1; months <= 120; months += 1) {

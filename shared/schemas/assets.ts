@@ -10,7 +10,15 @@ const positiveMm = z.number({ message: 'must be a number' }).positive('must be m
 
 /** Type-specific facts, validated per type. Unknown keys are refused so typos do not pass silently. */
 export const specsByType = {
-  tip: z.object({ lengthMm: positiveMm, positions: z.array(z.enum(tipPositions)).min(1, 'needs at least one mounting position').refine((p) => new Set(p).size === p.length, 'lists a position twice') }).strict(),
+  tip: z
+    .object({
+      lengthMm: positiveMm,
+      positions: z
+        .array(z.enum(tipPositions))
+        .min(1, 'needs at least one mounting position')
+        .refine((p) => new Set(p).size === p.length, 'lists a position twice'),
+    })
+    .strict(),
   battery: z
     .object({
       nominalVoltageV: z.number({ message: 'must be a number' }).positive('must be more than 0').max(1000, 'is implausibly high'),
@@ -43,19 +51,30 @@ const optionalText = (max: number) => text(max).nullable().optional();
 export const calibrationPlanPayload = z
   .object({
     required: z.boolean(),
-    intervalMonths: z.number().int('must be a whole number of months').min(1, 'must be at least 1 month').max(120, 'must be at most 120 months').nullable().optional(),
+    intervalMonths: z
+      .number()
+      .int('must be a whole number of months')
+      .min(1, 'must be at least 1 month')
+      .max(120, 'must be at most 120 months')
+      .nullable()
+      .optional(),
     provider: optionalText(120),
     lastCalibratedOn: calendarDate.nullable().optional(),
   })
   .refine((p) => !p.required || !!p.intervalMonths, { message: 'is needed when calibration is required', path: ['intervalMonths'] });
 
 const assetFields = {
-  assetTag: text(40).min(1, 'is required').regex(/^[A-Za-z0-9][A-Za-z0-9._\-/]*$/, 'may use letters, digits and . _ - / only'),
+  assetTag: text(40)
+    .min(1, 'is required')
+    .regex(/^[A-Za-z0-9][A-Za-z0-9._\-/]*$/, 'may use letters, digits and . _ - / only'),
   serialNumber: text(80).min(1, 'is required'),
   manufacturer: optionalText(80),
   model: optionalText(80),
   firmwareVersion: optionalText(40),
-  rfidTag: text(64).regex(/^[A-Za-z0-9:\-]*$/, 'may use letters, digits, : and - only').nullable().optional(),
+  rfidTag: text(64)
+    .regex(/^[A-Za-z0-9:\-]*$/, 'may use letters, digits, : and - only')
+    .nullable()
+    .optional(),
   location: optionalText(120),
   replacementValueMinor: z.number().int('must be whole minor units').min(0, 'cannot be negative').max(1e12).nullable().optional(),
   notes: optionalText(4000),
@@ -66,14 +85,20 @@ const assetFields = {
 };
 
 /** Checks across fields: specs per type, RFID only on tips, firmware only where it exists. */
-function checkTypeRules(value: { type: AssetType; specs?: Record<string, unknown>; rfidTag?: string | null; firmwareVersion?: string | null }, ctx: z.RefinementCtx) {
+function checkTypeRules(
+  value: { type: AssetType; specs?: Record<string, unknown>; rfidTag?: string | null; firmwareVersion?: string | null },
+  ctx: z.RefinementCtx,
+) {
   const specs = specsByType[value.type].safeParse(value.specs ?? {});
   if (!specs.success) for (const issue of specs.error.issues) ctx.addIssue({ code: 'custom', message: issue.message, path: ['specs', ...issue.path] });
   if (value.rfidTag && value.type !== 'tip') ctx.addIssue({ code: 'custom', message: 'is only for probe tips', path: ['rfidTag'] });
-  if (value.firmwareVersion && !typesWithFirmware.includes(value.type)) ctx.addIssue({ code: 'custom', message: 'is only for trackers, controllers and probes', path: ['firmwareVersion'] });
+  if (value.firmwareVersion && !typesWithFirmware.includes(value.type))
+    ctx.addIssue({ code: 'custom', message: 'is only for trackers, controllers and probes', path: ['firmwareVersion'] });
 }
 
-export const createAssetPayload = z.object({ type: z.enum(assetTypes, { message: `must be one of ${assetTypes.join(', ')}` }), ...assetFields }).superRefine(checkTypeRules);
+export const createAssetPayload = z
+  .object({ type: z.enum(assetTypes, { message: `must be one of ${assetTypes.join(', ')}` }), ...assetFields })
+  .superRefine(checkTypeRules);
 export type CreateAssetPayload = z.infer<typeof createAssetPayload>;
 
 /** Every field optional; the type of an asset does not change once registered. */
@@ -84,9 +109,7 @@ export type UpdateAssetPayload = z.infer<typeof updateAssetPayload>;
 
 export const retireAssetPayload = z.object({ reason: text(500).min(3, 'say briefly why') });
 
-const listOf = <T extends z.ZodType>(item: T) =>
-  z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(item)).optional();
-
+const listOf = <T extends z.ZodType>(item: T) => z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(item)).optional();
 
 export const assetListQuery = z.object({
   q: text(100).optional(),
@@ -114,9 +137,7 @@ export const organizationSettingsPayload = z
   .object({
     decisionRule: z.enum(['simple', 'guarded'], { message: 'must be simple or guarded' }),
     taxRateBasisPoints: z.number().int('must be whole basis points').min(0).max(10_000),
-    providers: z
-      .array(z.object({ name: text(120).min(1, 'is required'), turnaroundDays: z.number().int('must be whole days').min(1).max(180) }))
-      .max(50),
+    providers: z.array(z.object({ name: text(120).min(1, 'is required'), turnaroundDays: z.number().int('must be whole days').min(1).max(180) })).max(50),
     intervalPolicy: z
       .object({
         lengthenAfter: z.number().int().min(1).max(10),

@@ -58,7 +58,12 @@ export const bookingListQuery = z.object({
 });
 
 export const availabilityQuery = z
-  .object({ type: z.enum(assetTypes, { message: `must be one of ${assetTypes.join(', ')}` }).optional(), startsOn: calendarDate, endsOn: calendarDate, limit: z.coerce.number().int().min(1).max(500).default(100) })
+  .object({
+    type: z.enum(assetTypes, { message: `must be one of ${assetTypes.join(', ')}` }).optional(),
+    startsOn: calendarDate,
+    endsOn: calendarDate,
+    limit: z.coerce.number().int().min(1).max(500).default(100),
+  })
   .refine((b) => b.startsOn <= b.endsOn, { message: 'must be on or after the start', path: ['endsOn'] });
 
 export const jobPayload = z
@@ -66,7 +71,10 @@ export const jobPayload = z
     reference: text(40).min(1, 'is required'),
     customerName: text(120).min(1, 'is required'),
     contactName: text(120).nullable().optional(),
-    contactEmail: emailAddress.nullable().optional().or(z.literal('').transform(() => null)),
+    contactEmail: emailAddress
+      .nullable()
+      .optional()
+      .or(z.literal('').transform(() => null)),
     siteAddress: text(400).nullable().optional(),
     startsOn: calendarDate,
     endsOn: calendarDate,

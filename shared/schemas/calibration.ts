@@ -26,5 +26,8 @@ export const labTripPayload = z
   .refine((t) => !t.expectedBackOn || t.expectedBackOn >= t.sentOn, { message: 'must be on or after the day it goes', path: ['expectedBackOn'] });
 
 export const impactAssessments = ['no_effect', 'customer_notified', 'remeasure_offered'] as const;
-export const impactAssessmentPayload = z.object({ assessment: z.enum(impactAssessments, { message: `must be one of ${impactAssessments.join(', ')}` }), note: text(2000).optional() });
+export const impactAssessmentPayload = z.object({
+  assessment: z.enum(impactAssessments, { message: `must be one of ${impactAssessments.join(', ')}` }),
+  note: text(2000).optional(),
+});
 export const noticePayload = z.object({ send: z.boolean().default(false) });

@@ -6,7 +6,11 @@ export type CheckKind = (typeof checkKinds)[number];
 
 export const tolerancePayload = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('fixed'), um: z.number().positive('must be more than 0').max(100_000) }),
-  z.object({ kind: z.literal('range'), aUm: z.number().min(0, 'cannot be negative').max(100_000), bUmPerM: z.number().min(0, 'cannot be negative').max(10_000) }),
+  z.object({
+    kind: z.literal('range'),
+    aUm: z.number().min(0, 'cannot be negative').max(100_000),
+    bUmPerM: z.number().min(0, 'cannot be negative').max(10_000),
+  }),
 ]);
 
 /** Starting tolerances, to be replaced with the instrument maker's figures (common practice placeholders). */

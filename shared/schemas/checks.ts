@@ -7,7 +7,10 @@ import { instant, text } from './common';
 export { checkKinds, defaultTolerances, tolerancePayload, type CheckKind } from './check-kinds';
 export * from '../checks/vocabulary';
 
-const coordinate = z.number({ message: 'must be a number (mm)' }).refine(Number.isFinite, 'must be a finite number').refine((v) => Math.abs(v) < 1e6, 'is beyond a kilometre from the tracker');
+const coordinate = z
+  .number({ message: 'must be a number (mm)' })
+  .refine(Number.isFinite, 'must be a finite number')
+  .refine((v) => Math.abs(v) < 1e6, 'is beyond a kilometre from the tracker');
 export const pointPayload = z.object({ x: coordinate, y: coordinate, z: coordinate });
 
 const common = {
@@ -24,26 +27,33 @@ const common = {
 };
 
 export const checkPayload = z
-  .discriminatedUnion('kind', [
-    z.object({
-      kind: z.literal('tip_validation'),
-      ...common,
-      probeId: z.uuid('is not an asset id').nullable().optional(),
-      position: z.enum(tipPositions, { message: `must be ${tipPositions.join(' or ')}` }),
-      reference: pointPayload,
-      readings: z.array(pointPayload).min(MIN_TIP_READINGS, `needs at least ${MIN_TIP_READINGS} readings`).max(20, 'takes at most 20 readings'),
-    }),
-    z.object({ kind: z.literal('two_face'), ...common, front: pointPayload, back: pointPayload }),
-    z.object({
-      kind: z.literal('length_check'),
-      ...common,
-      scaleBarId: z.uuid('is not an asset id'),
-      endA: pointPayload,
-      endB: pointPayload,
-      temperatureC: z.number({ message: 'must be a number (°C)' }).min(-30, 'is below −30 °C').max(60, 'is above 60 °C'),
-    }),
-  ], { message: `kind must be one of ${checkKinds.join(', ')}` })
-  .refine((c) => !(c.uncertaintyUm != null && c.uncertaintyComponentsUm?.length), { message: 'give either the expanded uncertainty or its components, not both', path: ['uncertaintyUm'] });
+  .discriminatedUnion(
+    'kind',
+    [
+      z.object({
+        kind: z.literal('tip_validation'),
+        ...common,
+        probeId: z.uuid('is not an asset id').nullable().optional(),
+        position: z.enum(tipPositions, { message: `must be ${tipPositions.join(' or ')}` }),
+        reference: pointPayload,
+        readings: z.array(pointPayload).min(MIN_TIP_READINGS, `needs at least ${MIN_TIP_READINGS} readings`).max(20, 'takes at most 20 readings'),
+      }),
+      z.object({ kind: z.literal('two_face'), ...common, front: pointPayload, back: pointPayload }),
+      z.object({
+        kind: z.literal('length_check'),
+        ...common,
+        scaleBarId: z.uuid('is not an asset id'),
+        endA: pointPayload,
+        endB: pointPayload,
+        temperatureC: z.number({ message: 'must be a number (°C)' }).min(-30, 'is below −30 °C').max(60, 'is above 60 °C'),
+      }),
+    ],
+    { message: `kind must be one of ${checkKinds.join(', ')}` },
+  )
+  .refine((c) => !(c.uncertaintyUm != null && c.uncertaintyComponentsUm?.length), {
+    message: 'give either the expanded uncertainty or its components, not both',
+    path: ['uncertaintyUm'],
+  });
 export type CheckPayload = z.infer<typeof checkPayload>;
 
 export const checkListQuery = z.object({

@@ -13,11 +13,7 @@ export const isStorableText = (value: string) => !UNSTORABLE.test(value);
 
 /** Free text: trimmed, at most `max` characters, only characters that can be stored. Add `.min()` where it is required. */
 export const text = (max: number) =>
-  z
-    .string({ message: 'must be text' })
-    .refine(isStorableText, UNSTORABLE_TEXT)
-    .trim()
-    .max(max, `must be at most ${max} characters`);
+  z.string({ message: 'must be text' }).refine(isStorableText, UNSTORABLE_TEXT).trim().max(max, `must be at most ${max} characters`);
 
 /** A calendar date `YYYY-MM-DD` that exists (no 30 February), within the product's years. */
 export const calendarDate = z

@@ -10,8 +10,13 @@ export const incidentPayload = z.object({
   kind: z.enum(incidentKinds, { message: `must be one of ${incidentKinds.join(', ')}` }),
   description: text(4000).min(3, 'say briefly what happened'),
   occurredAt: instant,
-  location: text(200).optional().transform((v) => v || null),
-  bookingId: z.uuid('is not a booking id').optional().or(z.literal('').transform(() => undefined)),
+  location: text(200)
+    .optional()
+    .transform((v) => v || null),
+  bookingId: z
+    .uuid('is not a booking id')
+    .optional()
+    .or(z.literal('').transform(() => undefined)),
 });
 
 export const incidentUpdatePayload = z

@@ -56,8 +56,7 @@ export const rentalListQuery = z.object({
 
 /** A payment method made by the provider's card form (locally: one of its published test cards). Never a card number. */
 export const depositPayload = z.object({
-  paymentMethod: text(255)
-    .regex(/^pm_[A-Za-z0-9_]+$/, 'pick a card (a payment method id from the card form)'),
+  paymentMethod: text(255).regex(/^pm_[A-Za-z0-9_]+$/, 'pick a card (a payment method id from the card form)'),
 });
 
 export const capturePayload = z.object({
@@ -85,5 +84,9 @@ export const invoiceListQuery = z.object({
   offset: z.coerce.number().int().min(0).default(0),
 });
 
-export const revenueQuery = z.object({ from: calendarMonth, to: calendarMonth }).refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });
-export const utilisationQuery = z.object({ from: calendarDate, to: calendarDate }).refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });
+export const revenueQuery = z
+  .object({ from: calendarMonth, to: calendarMonth })
+  .refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });
+export const utilisationQuery = z
+  .object({ from: calendarDate, to: calendarDate })
+  .refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });

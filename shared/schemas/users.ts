@@ -10,7 +10,10 @@ const email = emailAddress;
 const password = z
   .string()
   .min(MIN_PASSWORD_LENGTH, `must be at least ${MIN_PASSWORD_LENGTH} characters`)
-  .refine((p) => passwordBytes(p) <= MAX_PASSWORD_BYTES, `must be at most ${MAX_PASSWORD_BYTES} bytes: bcrypt ignores the rest (accented letters count 2, most symbols 3)`);
+  .refine(
+    (p) => passwordBytes(p) <= MAX_PASSWORD_BYTES,
+    `must be at most ${MAX_PASSWORD_BYTES} bytes: bcrypt ignores the rest (accented letters count 2, most symbols 3)`,
+  );
 
 export const loginPayload = z.object({ email, password: z.string().min(1, 'is required').max(200) });
 

@@ -47,10 +47,6 @@ export function CalibrationChip({ state, dueOn }: { state: CalibrationState; due
     );
   }
   return (
-    <StatusChip
-      tone={calibrationTones[state]}
-      label={calibrationWords[state]}
-      title={state === 'overdue' && !dueOn ? 'No calibration on record' : undefined}
-    />
+    <StatusChip tone={calibrationTones[state]} label={calibrationWords[state]} title={state === 'overdue' && !dueOn ? 'No calibration on record' : undefined} />
   );
 }

@@ -21,7 +21,12 @@ export function AssetTypeSelect({
       <label htmlFor={id} className="text-sm font-semibold text-ink-800">
         {label}
       </label>
-      <select id={id} value={value} onChange={(e) => onChange(e.target.value as AssetType | '')} className="min-h-10 rounded-md border border-paper-line bg-card px-2 text-base text-ink-900">
+      <select
+        id={id}
+        value={value}
+        onChange={(e) => onChange(e.target.value as AssetType | '')}
+        className="min-h-10 rounded-md border border-paper-line bg-card px-2 text-base text-ink-900"
+      >
         <option value="">{anyLabel}</option>
         {assetTypes.map((t) => (
           <option key={t} value={t}>

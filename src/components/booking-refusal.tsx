@@ -20,11 +20,20 @@ export function bookingRefusalFrom(error: unknown, range = fullRange): BookingRe
   if (!isApiError(error) || (error.code !== 'conflict' && error.code !== 'booking_blocked')) return null;
   const details = (error.details ?? {}) as BookingRefusalDetails;
   const offered = (assetId: string) => details.alternatives?.[assetId] ?? [];
-  const blocked = (details.blocked ?? []).map((b) => ({ assetId: b.assetId, why: `${b.assetTag} cannot go: ${blockReasonText[b.reason]}.`, alternatives: offered(b.assetId) }));
+  const blocked = (details.blocked ?? []).map((b) => ({
+    assetId: b.assetId,
+    why: `${b.assetTag} cannot go: ${blockReasonText[b.reason]}.`,
+    alternatives: offered(b.assetId),
+  }));
   // The server lists every booking that holds an item; one line per item (its first clash) keeps one set of swap buttons.
   const clashes = (details.conflicts ?? [])
     .filter((c, i, all) => all.findIndex((o) => o.assetId === c.assetId) === i && !blocked.some((b) => b.assetId === c.assetId))
-    .map((c) => ({ assetId: c.assetId, why: `${c.assetTag} is already booked ${range(c.startsOn, c.endsOn)}.`, bookingId: c.bookingId, alternatives: offered(c.assetId) }));
+    .map((c) => ({
+      assetId: c.assetId,
+      why: `${c.assetTag} is already booked ${range(c.startsOn, c.endsOn)}.`,
+      bookingId: c.bookingId,
+      alternatives: offered(c.assetId),
+    }));
   return { message: error.message, items: [...blocked, ...clashes] };
 }
 

@@ -35,25 +35,9 @@ export function buttonClasses(variant: ButtonVariant = 'secondary', size: Button
   ].join(' ');
 }
 
-export function Button({
-  variant = 'secondary',
-  size = 'md',
-  busy = false,
-  icon,
-  type = 'button',
-  disabled,
-  className = '',
-  children,
-  ...rest
-}: ButtonProps) {
+export function Button({ variant = 'secondary', size = 'md', busy = false, icon, type = 'button', disabled, className = '', children, ...rest }: ButtonProps) {
   return (
-    <button
-      type={type}
-      disabled={disabled || busy}
-      aria-busy={busy || undefined}
-      className={buttonClasses(variant, size, className)}
-      {...rest}
-    >
+    <button type={type} disabled={disabled || busy} aria-busy={busy || undefined} className={buttonClasses(variant, size, className)} {...rest}>
       {busy ? <SpinnerIcon size={size === 'sm' ? 14 : 16} /> : icon}
       {children}
     </button>

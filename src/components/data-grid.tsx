@@ -49,15 +49,9 @@ export function DataGrid<T>({
   const [filterText, setFilterText] = useState('');
   const filterId = useId();
 
-  const defaultColDef = useMemo<ColDef<T>>(
-    () => ({ sortable: true, filter: true, resizable: true, flex: 1, minWidth: 120 }),
-    [],
-  );
+  const defaultColDef = useMemo<ColDef<T>>(() => ({ sortable: true, filter: true, resizable: true, flex: 1, minWidth: 120 }), []);
 
-  const getRowId = useMemo(
-    () => (rowId ? (params: GetRowIdParams<T>) => rowId(params.data) : undefined),
-    [rowId],
-  );
+  const getRowId = useMemo(() => (rowId ? (params: GetRowIdParams<T>) => rowId(params.data) : undefined), [rowId]);
 
   const onGridReady = useCallback((event: GridReadyEvent<T>) => {
     apiRef.current = event.api;
@@ -66,12 +60,10 @@ export function DataGrid<T>({
   const exportCsv = useCallback(() => {
     const api = apiRef.current;
     if (!api || !exportFileName) return;
-    const columnKeys = api
-      .getAllDisplayedColumns()
-      .filter((column) => {
-        const type = column.getColDef().type;
-        return !(type === actionsColumnType || (Array.isArray(type) && type.includes(actionsColumnType)));
-      });
+    const columnKeys = api.getAllDisplayedColumns().filter((column) => {
+      const type = column.getColDef().type;
+      return !(type === actionsColumnType || (Array.isArray(type) && type.includes(actionsColumnType)));
+    });
     api.exportDataAsCsv({ fileName: exportFileName, columnKeys });
   }, [exportFileName]);
 

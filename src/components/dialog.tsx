@@ -50,12 +50,7 @@ export function Dialog({
             <h2 id={titleId} className="text-lg font-bold">
               {title}
             </h2>
-            <button
-              type="button"
-              onClick={onClose}
-              className="-m-1 rounded p-1 text-ink-700 hover:bg-paper-deep"
-              aria-label="Close"
-            >
+            <button type="button" onClick={onClose} className="-m-1 rounded p-1 text-ink-700 hover:bg-paper-deep" aria-label="Close">
               <CrossIcon size={18} />
             </button>
           </div>

@@ -18,9 +18,7 @@ export function ErrorFallback({
     <div role="alert" className="mx-auto max-w-lg px-4 py-12 text-center">
       <BrandMark size={40} className="mx-auto text-ink-700" />
       <h1 className="mt-4 text-2xl font-bold text-ink-900">{title}</h1>
-      <p className="mt-2 text-ink-700">
-        {message ?? 'Nothing you entered has been lost on the server. Reload the page, or go back to your home page.'}
-      </p>
+      <p className="mt-2 text-ink-700">{message ?? 'Nothing you entered has been lost on the server. Reload the page, or go back to your home page.'}</p>
       <div className="mt-6 flex flex-wrap justify-center gap-2">
         {children ?? (
           <>

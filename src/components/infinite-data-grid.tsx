@@ -1,13 +1,4 @@
-import type {
-  CellKeyDownEvent,
-  ColDef,
-  GetRowIdParams,
-  GridApi,
-  GridReadyEvent,
-  IDatasource,
-  IGetRowsParams,
-  RowClickedEvent,
-} from 'ag-grid-community';
+import type { CellKeyDownEvent, ColDef, GetRowIdParams, GridApi, GridReadyEvent, IDatasource, IGetRowsParams, RowClickedEvent } from 'ag-grid-community';
 import { AgGridReact } from 'ag-grid-react';
 import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { DropPanel } from './drop-panel';
@@ -92,10 +83,7 @@ export function InfiniteDataGrid<T>({
 
   // Start hidden columns hidden; later toggles go through the grid API.
   const [initialHidden] = useState(hidden);
-  const columnDefs = useMemo(
-    () => columns.map((col) => ({ ...col, initialHide: initialHidden.has(colIdOf(col)) })),
-    [columns, initialHidden],
-  );
+  const columnDefs = useMemo(() => columns.map((col) => ({ ...col, initialHide: initialHidden.has(colIdOf(col)) })), [columns, initialHidden]);
 
   const defaultColDef = useMemo<ColDef<T>>(
     () => ({
@@ -246,9 +234,7 @@ export function InfiniteDataGrid<T>({
           onCellKeyDown={onRowClicked ? handleKeyDown : undefined}
           suppressDragLeaveHidesColumns
         />
-        {total === 0 ? (
-          <p className="pointer-events-none absolute inset-x-0 top-16 text-center text-ink-700">{emptyMessage}</p>
-        ) : null}
+        {total === 0 ? <p className="pointer-events-none absolute inset-x-0 top-16 text-center text-ink-700">{emptyMessage}</p> : null}
       </div>
     </section>
   );

@@ -87,11 +87,7 @@ export function ItemPicker<T extends PickableItem>({
 
   return (
     <div className="flex flex-col gap-2">
-      <RemovableTags
-        label="Separate items"
-        items={chosen.map((c) => ({ id: c.id, tag: c.assetTag, detail: itemDetail(c) }))}
-        onRemove={onRemove}
-      />
+      <RemovableTags label="Separate items" items={chosen.map((c) => ({ id: c.id, tag: c.assetTag, detail: itemDetail(c) }))} onRemove={onRemove} />
       <div className="flex flex-wrap items-end gap-2">
         <SearchBox label="Add separate items" value={text} onChange={setText} placeholder="Tag, type or model, e.g. SMR" className="min-w-56 flex-[2]" />
         <AssetTypeSelect label="Item type" anyLabel="Any type" value={type} onChange={setType} className="min-w-40 flex-1" />
@@ -106,7 +102,11 @@ export function ItemPicker<T extends PickableItem>({
               kitName: item.kit?.name,
               note: chosenIds.has(item.id) ? 'Added' : kitId && item.kit?.id === kitId ? 'On the kit' : undefined,
             }))}
-            none={q ? `No item in service matches “${q}”${type ? ` among ${assetTypeTitles[type].toLowerCase()}s` : ''}.` : `No ${assetTypeTitles[type as AssetType].toLowerCase()} in service.`}
+            none={
+              q
+                ? `No item in service matches “${q}”${type ? ` among ${assetTypeTitles[type].toLowerCase()}s` : ''}.`
+                : `No ${assetTypeTitles[type as AssetType].toLowerCase()} in service.`
+            }
             onAdd={(id) => {
               const item = page.items.find((i) => i.id === id);
               if (item) onAdd(item);

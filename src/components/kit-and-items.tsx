@@ -24,7 +24,12 @@ export function useKitMembers(fleet: FleetPages<AssetView>, kitId: string) {
  * The items with `alternative` in place of the refused one; a kit is listed
  * item by item from then on (the caller clears `kitId`). `from` is the refused item's tag.
  */
-export function swapIn(members: AssetView[], values: KitAndItems, refusedId: string, alternative: AlternativeItem): { items: ChosenItem[]; from: string | undefined } {
+export function swapIn(
+  members: AssetView[],
+  values: KitAndItems,
+  refusedId: string,
+  alternative: AlternativeItem,
+): { items: ChosenItem[]; from: string | undefined } {
   const all: ChosenItem[] = [...members, ...values.items.filter((i) => !members.some((m) => m.id === i.id))];
   const swapped = all.map((i) => (i.id === refusedId ? alternative : i));
   // The alternative may be on the list already.
@@ -57,7 +62,12 @@ export function KitAndItemsFields({
         chosen={values.items.filter((i) => !members.some((m) => m.id === i.id))}
         kitId={values.kitId}
         onAdd={(item) => void setFieldValue('items', [...values.items, item])}
-        onRemove={(id) => void setFieldValue('items', values.items.filter((i) => i.id !== id))}
+        onRemove={(id) =>
+          void setFieldValue(
+            'items',
+            values.items.filter((i) => i.id !== id),
+          )
+        }
       />
       <FieldMessage name="items" />
     </>

@@ -11,23 +11,10 @@ const styles: Record<NoticeTone, { classes: string; icon: ReactNode }> = {
 };
 
 /** An inline message box. Errors are announced at once (role="alert"), the rest politely. */
-export function Notice({
-  tone,
-  title,
-  children,
-  className = '',
-}: {
-  tone: NoticeTone;
-  title?: ReactNode;
-  children?: ReactNode;
-  className?: string;
-}) {
+export function Notice({ tone, title, children, className = '' }: { tone: NoticeTone; title?: ReactNode; children?: ReactNode; className?: string }) {
   const s = styles[tone];
   return (
-    <div
-      role={tone === 'error' ? 'alert' : 'status'}
-      className={`flex items-start gap-2 rounded-md border px-3 py-2 ${s.classes} ${className}`}
-    >
+    <div role={tone === 'error' ? 'alert' : 'status'} className={`flex items-start gap-2 rounded-md border px-3 py-2 ${s.classes} ${className}`}>
       <span className="mt-0.5 shrink-0">{s.icon}</span>
       <div className="min-w-0 text-ink-900">
         {title ? <p className="font-semibold">{title}</p> : null}

@@ -1,15 +1,7 @@
 import type { ReactNode } from 'react';
 
 /** The page's one h1, its short purpose line and its main actions; also sets the tab title. */
-export function PageHeader({
-  title,
-  description,
-  actions,
-}: {
-  title: string;
-  description?: ReactNode;
-  actions?: ReactNode;
-}) {
+export function PageHeader({ title, description, actions }: { title: string; description?: ReactNode; actions?: ReactNode }) {
   return (
     <header className="mb-5 flex flex-col gap-3 border-b border-paper-line pb-4 sm:flex-row sm:items-end sm:justify-between">
       <title>{`${title} · Nestkeeper`}</title>

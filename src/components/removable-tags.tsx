@@ -1,7 +1,15 @@
 import { CrossIcon } from './icons';
 
 /** Chosen items as tags (mono) with a few words each, each with its own remove button. */
-export function RemovableTags({ label, items, onRemove }: { label: string; items: { id: string; tag: string; detail: string }[]; onRemove: (id: string) => void }) {
+export function RemovableTags({
+  label,
+  items,
+  onRemove,
+}: {
+  label: string;
+  items: { id: string; tag: string; detail: string }[];
+  onRemove: (id: string) => void;
+}) {
   if (!items.length) return null;
   return (
     <ul aria-label={label} className="flex flex-wrap gap-2">

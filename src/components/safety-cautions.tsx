@@ -6,8 +6,8 @@ const defer = "Follow local codes, the carrier's rules and the instrument maker'
 export function BatteryCaution({ className }: { className?: string }) {
   return (
     <Notice tone="caution" title="Lithium-ion battery" className={className}>
-      A battery that was dropped, is swollen or is otherwise damaged is a fire risk: do not charge it and do not ship it by
-      air. Over 100 Wh needs the carrier&rsquo;s approval; over 160 Wh may not travel in passenger baggage. {defer}
+      A battery that was dropped, is swollen or is otherwise damaged is a fire risk: do not charge it and do not ship it by air. Over 100 Wh needs the
+      carrier&rsquo;s approval; over 160 Wh may not travel in passenger baggage. {defer}
     </Notice>
   );
 }
@@ -15,8 +15,8 @@ export function BatteryCaution({ className }: { className?: string }) {
 export function LaserCaution({ laserClass, className }: { laserClass?: string | null; className?: string }) {
   return (
     <Notice tone="caution" title="Laser beam" className={className}>
-      Laser trackers emit a visible beam ({laserClass ? `this one: ${laserClass}` : 'commonly IEC 60825-1 Class 2'}). Do not
-      stare into the beam or point it at anyone&rsquo;s eyes. {defer}
+      Laser trackers emit a visible beam ({laserClass ? `this one: ${laserClass}` : 'commonly IEC 60825-1 Class 2'}). Do not stare into the beam or point it at
+      anyone&rsquo;s eyes. {defer}
     </Notice>
   );
 }

@@ -141,12 +141,9 @@ export async function request<T>(method: string, path: string, options: RequestO
 
 export const apiClient = {
   get: <T>(path: string, options?: Omit<RequestOptions, 'body'>) => request<T>('GET', path, options),
-  post: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) =>
-    request<T>('POST', path, { ...options, body }),
-  patch: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) =>
-    request<T>('PATCH', path, { ...options, body }),
-  put: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) =>
-    request<T>('PUT', path, { ...options, body }),
+  post: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) => request<T>('POST', path, { ...options, body }),
+  patch: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) => request<T>('PATCH', path, { ...options, body }),
+  put: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'body'>) => request<T>('PUT', path, { ...options, body }),
   delete: <T>(path: string, options?: Omit<RequestOptions, 'body'>) => request<T>('DELETE', path, options),
 };
 
@@ -176,12 +173,7 @@ export function uploadForm<T>(path: string, form: FormData, options: Omit<Upload
   return sendWithProgress<T>(path, form, undefined, options);
 }
 
-function sendWithProgress<T>(
-  path: string,
-  body: Blob | FormData,
-  contentType: string | undefined,
-  options: Omit<UploadOptions, 'contentType'>,
-): Promise<T> {
+function sendWithProgress<T>(path: string, body: Blob | FormData, contentType: string | undefined, options: Omit<UploadOptions, 'contentType'>): Promise<T> {
   return new Promise<T>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', buildUrl(path, options.query));

@@ -11,9 +11,7 @@ export const kitsQueryRoot = ['kits'] as const;
 export const holdsQueryRoot = ['holds'] as const;
 
 export function invalidateAssetStatus(queryClient: QueryClient): Promise<unknown> {
-  return Promise.all(
-    [fleetQueryRoot, kitsQueryRoot, holdsQueryRoot].map((queryKey) => queryClient.invalidateQueries({ queryKey })),
-  );
+  return Promise.all([fleetQueryRoot, kitsQueryRoot, holdsQueryRoot].map((queryKey) => queryClient.invalidateQueries({ queryKey })));
 }
 
 /** Incidents: taking kit back with an item missing or damaged opens one each. */

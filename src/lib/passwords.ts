@@ -14,9 +14,16 @@ export const newPasswordSchema = (required: string, context: (values: Record<str
   Yup.string()
     .required(required)
     .min(MIN_PASSWORD_LENGTH, `Use at least ${MIN_PASSWORD_LENGTH} characters.`)
-    .test('bcrypt-bytes', `Use at most ${MAX_PASSWORD_BYTES} bytes: letters with accents count two, most symbols three.`, (value) => !value || passwordBytes(value) <= MAX_PASSWORD_BYTES)
+    .test(
+      'bcrypt-bytes',
+      `Use at most ${MAX_PASSWORD_BYTES} bytes: letters with accents count two, most symbols three.`,
+      (value) => !value || passwordBytes(value) <= MAX_PASSWORD_BYTES,
+    )
     .test('guessable', async function (value) {
       if (!value || value.length < MIN_PASSWORD_LENGTH) return true;
-      const weakness = await passwordWeakness(value, context(this.parent as Record<string, unknown>).filter((c): c is string => !!c));
+      const weakness = await passwordWeakness(
+        value,
+        context(this.parent as Record<string, unknown>).filter((c): c is string => !!c),
+      );
       return weakness ? this.createError({ message: `This password ${weakness}` }) : true;
     });

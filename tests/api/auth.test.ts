@@ -51,10 +51,24 @@ describe('sign-in', () => {
 
   it('counts a padded or re-cased e-mail and a forged X-Forwarded-For against the same limit', async () => {
     // Sign-in reads " Visitor2@Demo.TEST " as visitor2@demo.test, so the limiter does too; no proxy is trusted by default.
-    const spellings = ['visitor2@demo.test', ' Visitor2@demo.test', 'VISITOR2@DEMO.TEST ', '\tvisitor2@Demo.Test', 'visitor2@demo.test  ', 'Visitor2@Demo.test'];
+    const spellings = [
+      'visitor2@demo.test',
+      ' Visitor2@demo.test',
+      'VISITOR2@DEMO.TEST ',
+      '\tvisitor2@Demo.Test',
+      'visitor2@demo.test  ',
+      'Visitor2@Demo.test',
+    ];
     const statuses: number[] = [];
     for (const [i, email] of spellings.entries()) {
-      statuses.push((await t.api.post('/api/auth/login').set('X-Forwarded-For', `203.0.113.${i + 1}`).send({ email, password: 'guessing-padded' })).status);
+      statuses.push(
+        (
+          await t.api
+            .post('/api/auth/login')
+            .set('X-Forwarded-For', `203.0.113.${i + 1}`)
+            .send({ email, password: 'guessing-padded' })
+        ).status,
+      );
     }
     expect(statuses).toEqual([401, 401, 401, 401, 401, 429]);
   });
@@ -87,7 +101,11 @@ describe('sign-in', () => {
   it('refuses a cookie-borne change without the CSRF header, allows it with the header', async () => {
     const agent = (await import('supertest')).default.agent(t.app);
     const login = await agent.post('/api/auth/login').send({ email: 'owner@demo.test', password: 'nestkeeper-demo' });
-    const csrf = ([] as string[]).concat(login.headers['set-cookie']).find((c) => c.startsWith('nk_csrf='))!.split(';')[0].split('=')[1];
+    const csrf = ([] as string[])
+      .concat(login.headers['set-cookie'])
+      .find((c) => c.startsWith('nk_csrf='))!
+      .split(';')[0]
+      .split('=')[1];
     const body = { email: 'csrf.check@demo.test', name: 'Csrf Check', role: 'technician', password: 'lichen-parcel-76-wren' };
     const refused = await agent.post('/api/users').send(body);
     expect(refused.status).toBe(403);
@@ -132,7 +150,11 @@ describe('sign-out', () => {
   it('ends a cookie session (with the CSRF header) and answers 204 to a caller without one', async () => {
     const agent = (await import('supertest')).default.agent(t.app);
     const login = await agent.post('/api/auth/login').send({ email: 'tech@demo.test', password: 'nestkeeper-demo' });
-    const csrf = ([] as string[]).concat(login.headers['set-cookie']).find((c) => c.startsWith('nk_csrf='))!.split(';')[0].split('=')[1];
+    const csrf = ([] as string[])
+      .concat(login.headers['set-cookie'])
+      .find((c) => c.startsWith('nk_csrf='))!
+      .split(';')[0]
+      .split('=')[1];
     expect((await agent.post('/api/auth/logout').set('X-CSRF-Token', csrf)).status).toBe(204);
     expect((await t.api.get('/api/auth/me').set(bearer(login.body.token))).status).toBe(401);
     expect((await t.api.post('/api/auth/logout')).status).toBe(204);

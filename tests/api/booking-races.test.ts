@@ -16,7 +16,15 @@ let serial = 0;
 /** A tracker calibrated well within its interval, so only the board decides. */
 async function tracker() {
   serial += 1;
-  const res = await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'tracker', assetTag: `TRK-R${serial}`, serialNumber: `TR${serial}`, calibration: { required: true, intervalMonths: 12, lastCalibratedOn: addDays(today, -10) } });
+  const res = await t.api
+    .post('/api/assets')
+    .set(bearer(manager))
+    .send({
+      type: 'tracker',
+      assetTag: `TRK-R${serial}`,
+      serialNumber: `TR${serial}`,
+      calibration: { required: true, intervalMonths: 12, lastCalibratedOn: addDays(today, -10) },
+    });
   return res.body as { id: string; assetTag: string };
 }
 
@@ -24,8 +32,16 @@ describe('lab trips share the booking path', () => {
   it.each([1, 2, 3, 4, 5])('a lab trip racing bookings for the same item: one wins, the others get 409 naming it, never 500 (round %i)', async () => {
     const a = await tracker();
     const sentOn = addDays(today, 20);
-    const trip = () => t.api.post('/api/lab-trips').set(bearer(manager)).send({ provider: 'Fenmoor Calibration Lab', assetIds: [a.id], sentOn });
-    const booking = () => t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [a.id], startsOn: addDays(sentOn, 5), endsOn: addDays(sentOn, 7) });
+    const trip = () =>
+      t.api
+        .post('/api/lab-trips')
+        .set(bearer(manager))
+        .send({ provider: 'Fenmoor Calibration Lab', assetIds: [a.id], sentOn });
+    const booking = () =>
+      t.api
+        .post('/api/bookings')
+        .set(bearer(manager))
+        .send({ assetIds: [a.id], startsOn: addDays(sentOn, 5), endsOn: addDays(sentOn, 7) });
     const replies = await Promise.all([trip(), booking(), trip(), booking(), trip(), booking()]);
     expect(replies.map((r) => r.status).sort()).toEqual([201, 409, 409, 409, 409, 409]);
     const winner = replies.find((r) => r.status === 201)!;
@@ -40,10 +56,24 @@ describe('lab trips share the booking path', () => {
 
   it('a lab trip over a booked window is refused like any booking, with the conflicting booking named', async () => {
     const a = await tracker();
-    const held = (await t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [a.id], startsOn: addDays(today, 30), endsOn: addDays(today, 32) })).body;
-    const res = await t.api.post('/api/lab-trips').set(bearer(manager)).send({ provider: 'Fenmoor Calibration Lab', assetIds: [a.id], sentOn: addDays(today, 25) });
+    const held = (
+      await t.api
+        .post('/api/bookings')
+        .set(bearer(manager))
+        .send({ assetIds: [a.id], startsOn: addDays(today, 30), endsOn: addDays(today, 32) })
+    ).body;
+    const res = await t.api
+      .post('/api/lab-trips')
+      .set(bearer(manager))
+      .send({ provider: 'Fenmoor Calibration Lab', assetIds: [a.id], sentOn: addDays(today, 25) });
     expect(res.status).toBe(409);
-    expect(res.body.error.details.conflicts).toEqual([{ assetId: a.id, assetTag: a.assetTag, bookingId: held.id, startsOn: addDays(today, 30), endsOn: addDays(today, 32) }]);
-    expect((await t.api.get('/api/lab-trips?state=planned').set(bearer(manager))).body.items.flatMap((x: { items: { assetId: string }[] }) => x.items.map((i) => i.assetId))).not.toContain(a.id);
+    expect(res.body.error.details.conflicts).toEqual([
+      { assetId: a.id, assetTag: a.assetTag, bookingId: held.id, startsOn: addDays(today, 30), endsOn: addDays(today, 32) },
+    ]);
+    expect(
+      (await t.api.get('/api/lab-trips?state=planned').set(bearer(manager))).body.items.flatMap((x: { items: { assetId: string }[] }) =>
+        x.items.map((i) => i.assetId),
+      ),
+    ).not.toContain(a.id);
   });
 });

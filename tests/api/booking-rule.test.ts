@@ -56,7 +56,10 @@ function generateFleet(random: () => number) {
   const fleet: Generated[] = [];
   for (let i = 0; i < ASSETS; i++) {
     const type = pick(['tip', 'tip', 'tip', 'tracker', 'smr', 'battery', 'nest'] as const);
-    const positions = type === 'tip' || random() < 0.1 ? pick([undefined, [], ['vertical'], ['horizontal'], ['vertical', 'horizontal'], ['vertical', 'horizontal']]) : undefined;
+    const positions =
+      type === 'tip' || random() < 0.1
+        ? pick([undefined, [], ['vertical'], ['horizontal'], ['vertical', 'horizontal'], ['vertical', 'horizontal']])
+        : undefined;
     const checks: Check[] = [];
     // Validations per position, some sharing a time (the later record wins), some for a position the tip does not use, and other kinds of check.
     for (const position of [...(positions ?? []), ...(random() < 0.2 ? ['angled'] : [])]) {
@@ -64,7 +67,13 @@ function generateFleet(random: () => number) {
       for (let k = int(0, 3); k > 0; k--) {
         const tie = checks.length > 0 && random() < 0.15;
         if (!tie) minute += int(1, 60 * 1440);
-        checks.push({ kind: 'tip_validation', position, decision: random() < 0.65 ? 'pass' : 'fail', performedAt: at(addDays(BASE, -400), minute), createdAt: at(addDays(BASE, -400), minute + checks.length) });
+        checks.push({
+          kind: 'tip_validation',
+          position,
+          decision: random() < 0.65 ? 'pass' : 'fail',
+          performedAt: at(addDays(BASE, -400), minute),
+          createdAt: at(addDays(BASE, -400), minute + checks.length),
+        });
       }
       if (random() < 0.2) checks.push({ kind: 'two_face', position, decision: 'fail', performedAt: at(BASE, 0), createdAt: at(BASE, 1) });
     }
@@ -116,7 +125,12 @@ function tipValidated(a: Generated) {
   });
 }
 
-const bookable = (a: Generated): BookableAsset => ({ type: a.type, status: a.status, calibration: { required: a.calibrationRequired, dueOn: a.dueOn }, tipValidated: tipValidated(a) });
+const bookable = (a: Generated): BookableAsset => ({
+  type: a.type,
+  status: a.status,
+  calibration: { required: a.calibrationRequired, dueOn: a.dueOn },
+  tipValidated: tipValidated(a),
+});
 const free = (a: Generated, w: { startsOn: string; endsOn: string }) => !a.bookings.some((b) => b.active && rangesOverlap(b, w));
 
 let database: Awaited<ReturnType<typeof createTestDatabase>>;
@@ -129,20 +143,44 @@ beforeAll(async () => {
   database = await createTestDatabase();
   const db = database.db;
   const [{ id: org }] = await db.query(`INSERT INTO organizations (name, settings) VALUES ('Generated fleet test firm', '{}') RETURNING id`);
-  const [{ id: userId }] = await db.query(`INSERT INTO users (organization_id, email, name, role, password_hash) VALUES ($1, 'gen@fleet.test', 'Generated Manager', 'manager', 'x') RETURNING id`, [org]);
+  const [{ id: userId }] = await db.query(
+    `INSERT INTO users (organization_id, email, name, role, password_hash) VALUES ($1, 'gen@fleet.test', 'Generated Manager', 'manager', 'x') RETURNING id`,
+    [org],
+  );
   actor = { userId, organizationId: org, role: 'manager' };
   tx = new Scoped(db.manager, org);
   const rows = (xs: unknown[]) => JSON.stringify(xs);
   await db.query(
     `INSERT INTO assets (id, organization_id, type, asset_tag, serial_number, status, specs, calibration_required, due_on)
      SELECT r.id, $1, r.type, r.tag, r.tag, r.status, r.specs, r.req, r.due FROM jsonb_to_recordset($2::jsonb) AS r(id uuid, type text, tag text, status text, specs jsonb, req boolean, due date)`,
-    [org, rows(fleet.map((a) => ({ id: a.id, type: a.type, tag: a.assetTag, status: a.status, specs: a.positions ? { lengthMm: 100, positions: a.positions } : {}, req: a.calibrationRequired, due: a.dueOn })))],
+    [
+      org,
+      rows(
+        fleet.map((a) => ({
+          id: a.id,
+          type: a.type,
+          tag: a.assetTag,
+          status: a.status,
+          specs: a.positions ? { lengthMm: 100, positions: a.positions } : {},
+          req: a.calibrationRequired,
+          due: a.dueOn,
+        })),
+      ),
+    ],
   );
   await db.query(
     `INSERT INTO field_checks (organization_id, asset_id, kind, position, inputs, result, tolerance_um, expanded_uncertainty_um, guard_band_um, decision_rule, decision, performed_at, performed_by, created_at)
      SELECT $1, r.asset, r.kind, r.position, '{}', '{}', 60, 0, 0, 'simple', r.decision, r.performed, $2, r.created
        FROM jsonb_to_recordset($3::jsonb) AS r(asset uuid, kind text, position text, decision text, performed timestamptz, created timestamptz)`,
-    [org, userId, rows(fleet.flatMap((a) => a.checks.map((c) => ({ asset: a.id, kind: c.kind, position: c.position, decision: c.decision, performed: c.performedAt, created: c.createdAt }))))],
+    [
+      org,
+      userId,
+      rows(
+        fleet.flatMap((a) =>
+          a.checks.map((c) => ({ asset: a.id, kind: c.kind, position: c.position, decision: c.decision, performed: c.performedAt, created: c.createdAt })),
+        ),
+      ),
+    ],
   );
   const held = fleet.flatMap((a) => a.bookings.map((b) => ({ id: randomUUID(), asset: a.id, starts: b.startsOn, ends: b.endsOn, active: b.active })));
   await db.query(
@@ -170,11 +208,22 @@ describe(`the booking rule over ${ASSETS} generated assets and ${WINDOWS} window
   it('loads each item’s facts and refuses exactly what blockReason refuses, for a job and for a lab trip', async () => {
     for (const [i, w] of windows.entries()) {
       for (const purpose of ['job', 'lab'] as const) {
-        const refused = new Map((await refusals(tx, fleet.map((a) => a.id), w.endsOn, purpose)).map((r) => [r.assetId, r.reason]));
-        const expected = new Map(fleet.flatMap((a): [string, BlockReason][] => {
-          const reason = blockReason(bookable(a), w.endsOn, purpose);
-          return reason ? [[a.id, reason]] : [];
-        }));
+        const refused = new Map(
+          (
+            await refusals(
+              tx,
+              fleet.map((a) => a.id),
+              w.endsOn,
+              purpose,
+            )
+          ).map((r) => [r.assetId, r.reason]),
+        );
+        const expected = new Map(
+          fleet.flatMap((a): [string, BlockReason][] => {
+            const reason = blockReason(bookable(a), w.endsOn, purpose);
+            return reason ? [[a.id, reason]] : [];
+          }),
+        );
         expect(refused, `seed ${SEED}, window ${i} (${w.startsOn} to ${w.endsOn}), ${purpose}`).toEqual(expected);
       }
     }
@@ -186,7 +235,9 @@ describe(`the booking rule over ${ASSETS} generated assets and ${WINDOWS} window
       const exclude = fleet.filter(() => random() < 0.05).map((a) => a.id);
       for (const type of [undefined, ...types]) {
         const listed = (await availableAssets(tx, { type, startsOn: w.startsOn, endsOn: w.endsOn, exclude, limit: ASSETS })).map((a) => a.assetTag);
-        const expected = fleet.filter((a) => (!type || a.type === type) && !exclude.includes(a.id) && blockReason(bookable(a), w.endsOn) === null && free(a, w)).map((a) => a.assetTag);
+        const expected = fleet
+          .filter((a) => (!type || a.type === type) && !exclude.includes(a.id) && blockReason(bookable(a), w.endsOn) === null && free(a, w))
+          .map((a) => a.assetTag);
         expect(listed, `seed ${SEED}, window ${i} (${w.startsOn} to ${w.endsOn}), type ${type ?? 'any'}`).toEqual(expected);
       }
     }
@@ -201,10 +252,19 @@ describe(`the booking rule over ${ASSETS} generated assets and ${WINDOWS} window
         const reason = blockReason(bookable(a), w.endsOn);
         return reason ? [{ assetId: a.id, assetTag: a.assetTag, reason }] : [];
       });
-      const clashes = items.flatMap((a) => a.bookings.filter((b) => b.active && rangesOverlap(b, w)).map((b) => ({ assetId: a.id, startsOn: b.startsOn, endsOn: b.endsOn })));
+      const clashes = items.flatMap((a) =>
+        a.bookings.filter((b) => b.active && rangesOverlap(b, w)).map((b) => ({ assetId: a.id, startsOn: b.startsOn, endsOn: b.endsOn })),
+      );
       const status = await database.db
         .transaction(async (m) => {
-          const attempt = await book(new Scoped(m, actor.organizationId), actor, { assetIds: items.map((a) => a.id), startsOn: w.startsOn, endsOn: w.endsOn }).then(() => 201, (err: AppError) => err);
+          const attempt = await book(new Scoped(m, actor.organizationId), actor, {
+            assetIds: items.map((a) => a.id),
+            startsOn: w.startsOn,
+            endsOn: w.endsOn,
+          }).then(
+            () => 201,
+            (err: AppError) => err,
+          );
           throw attempt; // nothing stays: the next window sees the generated board unchanged
         })
         .catch((answer: AppError | number) => answer);
@@ -215,7 +275,10 @@ describe(`the booking rule over ${ASSETS} generated assets and ${WINDOWS} window
         expect((status as AppError).details!.blocked, where).toEqual(refused);
       } else if (clashes.length) {
         expect((status as AppError).status, where).toBe(409);
-        expect(((status as AppError).details!.conflicts as typeof clashes).map(({ assetId, startsOn, endsOn }) => ({ assetId, startsOn, endsOn })), where).toEqual(clashes);
+        expect(
+          ((status as AppError).details!.conflicts as typeof clashes).map(({ assetId, startsOn, endsOn }) => ({ assetId, startsOn, endsOn })),
+          where,
+        ).toEqual(clashes);
       } else {
         expect(status, where).toBe(201);
       }

@@ -21,7 +21,9 @@ const today = todayIn('Europe/Berlin');
 
 beforeAll(async () => {
   t = await createTestApp();
-  [owner, manager, tech, otherOwner] = await Promise.all(['owner@demo.test', 'manager@demo.test', 'tech@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
+  [owner, manager, tech, otherOwner] = await Promise.all(
+    ['owner@demo.test', 'manager@demo.test', 'tech@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)),
+  );
   certificate = await renderPdf({ size: 'A4' }, (doc) => doc.text('Calibration certificate FCL-2026-0415 (test document)'));
 });
 afterAll(() => t.close());
@@ -29,14 +31,31 @@ afterAll(() => t.close());
 let serial = 0;
 async function tracker(last: string, interval = 12) {
   serial += 1;
-  return (await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'tracker', assetTag: `TRK-C${serial}`, serialNumber: `TC${serial}`, calibration: { required: true, intervalMonths: interval, lastCalibratedOn: last } })).body as { id: string; assetTag: string };
+  return (
+    await t.api
+      .post('/api/assets')
+      .set(bearer(manager))
+      .send({
+        type: 'tracker',
+        assetTag: `TRK-C${serial}`,
+        serialNumber: `TC${serial}`,
+        calibration: { required: true, intervalMonths: interval, lastCalibratedOn: last },
+      })
+  ).body as { id: string; assetTag: string };
 }
 const record = (token: string, assetId: string, fields: Record<string, string>, file: Buffer = certificate, name = 'certificate.pdf') => {
   const req = t.api.post(`/api/assets/${assetId}/calibrations`).set(bearer(token));
   for (const [k, v] of Object.entries(fields)) req.field(k, v);
   return req.attach('certificate', file, { filename: name, contentType: 'application/pdf' });
 };
-const fields = (performedOn: string, asFound = 'in_tolerance', extra: Record<string, string> = {}) => ({ performedOn, provider: 'Fenmoor Calibration Lab', certificateNumber: `FCL-${performedOn}`, asFound, asLeft: 'in_tolerance', ...extra });
+const fields = (performedOn: string, asFound = 'in_tolerance', extra: Record<string, string> = {}) => ({
+  performedOn,
+  provider: 'Fenmoor Calibration Lab',
+  certificateNumber: `FCL-${performedOn}`,
+  asFound,
+  asLeft: 'in_tolerance',
+  ...extra,
+});
 
 describe('recording calibrations', () => {
   it.each([
@@ -50,7 +69,11 @@ describe('recording calibrations', () => {
     expect(res.status).toBe(201);
     expect(res.body.dueOn).toBe(due);
     expect(DateTime.fromISO(performedOn).plus({ months }).toISODate()).toBe(due);
-    expect((await t.api.get(`/api/assets/${a.id}`).set(bearer(manager))).body.calibration).toMatchObject({ lastCalibratedOn: performedOn, intervalMonths: months, dueOn: due });
+    expect((await t.api.get(`/api/assets/${a.id}`).set(bearer(manager))).body.calibration).toMatchObject({
+      lastCalibratedOn: performedOn,
+      intervalMonths: months,
+      dueOn: due,
+    });
   });
 
   it('refuses a file that is not a PDF even when named .pdf (415), and a missing certificate (400)', async () => {
@@ -67,7 +90,10 @@ describe('recording calibrations', () => {
     const a = await tracker('2026-01-01');
     const twice = record(manager, a.id, fields('2026-11-01')).attach('certificate', certificate, { filename: 'again.pdf', contentType: 'application/pdf' });
     expect((await twice).body.error).toMatchObject({ code: 'invalid_input', details: { fields: { certificate: 'one PDF only' } } });
-    const elsewhere = t.api.post(`/api/assets/${a.id}/calibrations`).set(bearer(manager)).attach('file', certificate, { filename: 'certificate.pdf', contentType: 'application/pdf' });
+    const elsewhere = t.api
+      .post(`/api/assets/${a.id}/calibrations`)
+      .set(bearer(manager))
+      .attach('file', certificate, { filename: 'certificate.pdf', contentType: 'application/pdf' });
     expect((await elsewhere).status).toBe(400);
     const crowded = t.api.post(`/api/assets/${a.id}/calibrations`).set(bearer(manager));
     for (let i = 0; i < 21; i += 1) crowded.field(`note${i}`, 'x');
@@ -77,7 +103,13 @@ describe('recording calibrations', () => {
 
   it('refuses a PDF header followed by HTML as not a PDF (415), keeping nothing', async () => {
     const a = await tracker('2026-01-01');
-    const res = await record(manager, a.id, fields('2026-11-01'), Buffer.from('%PDF-1.7\n<html><body><script>alert(1)</script></body></html>'), 'certificate.pdf');
+    const res = await record(
+      manager,
+      a.id,
+      fields('2026-11-01'),
+      Buffer.from('%PDF-1.7\n<html><body><script>alert(1)</script></body></html>'),
+      'certificate.pdf',
+    );
     expect(res.status).toBe(415);
     expect(res.body.error).toMatchObject({ code: 'unsupported_type', message: expect.stringMatching(/^"certificate\.pdf" is not a PDF: /) });
     expect((await t.api.get(`/api/assets/${a.id}/calibrations`).set(bearer(manager))).body.items).toHaveLength(0);
@@ -116,7 +148,10 @@ describe('recording calibrations', () => {
     expect(clean.headers['content-disposition']).toMatch(/^inline; /);
     // An older upload with a script, written straight to the table as if it predated the check.
     const scripted = await certificateWith(activeChanges.openActionJavaScript);
-    await t.db.query(`UPDATE certificate_files SET data = $1 WHERE id = (SELECT certificate_file_id FROM calibration_events WHERE id = $2)`, [scripted, event.id]);
+    await t.db.query(`UPDATE certificate_files SET data = $1 WHERE id = (SELECT certificate_file_id FROM calibration_events WHERE id = $2)`, [
+      scripted,
+      event.id,
+    ]);
     const old = await t.api.get(event.certificateUrl).set(bearer(tech)).buffer(true);
     expect(old.status).toBe(200);
     expect(old.headers['content-type']).toBe('application/pdf');
@@ -151,7 +186,9 @@ describe('recording calibrations', () => {
 describe("a hold began on the firm's calendar day, not UTC's", () => {
   it('in Pacific/Auckland, a certificate dated the day before the drop does not release the hold; one dated the drop day does', async () => {
     expect((await t.api.patch('/api/settings').set(bearer(otherOwner)).send({ timeZone: 'Pacific/Auckland' })).status).toBe(200);
-    const asset = (await t.api.post('/api/assets').set(bearer(otherOwner)).send({ type: 'tracker', assetTag: 'TRK-NZ1', serialNumber: 'S-NZ1' })).body as { id: string };
+    const asset = (await t.api.post('/api/assets').set(bearer(otherOwner)).send({ type: 'tracker', assetTag: 'TRK-NZ1', serialNumber: 'S-NZ1' })).body as {
+      id: string;
+    };
     expect((await t.api.post(`/api/assets/${asset.id}/hold`).set(bearer(otherOwner)).send({ summary: 'Knocked off its stand' })).status).toBe(201);
     // Dropped at 00:30 Auckland time ten days ago: still the previous day in UTC (NZ is UTC+12/+13; tz database via Luxon).
     const dropDay = addDays(todayIn('Pacific/Auckland'), -10);
@@ -201,14 +238,28 @@ describe('out-of-tolerance impact review', () => {
   it('lists exactly the bookings between the last passing evidence and the finding, edge days included', async () => {
     const a = await tracker('2026-01-10');
     await record(manager, a.id, fields('2026-02-01')); // last passing evidence
-    const job = (await t.api.post('/api/jobs').set(bearer(manager)).send({ reference: 'J-IMP-1', customerName: 'Larkspur Aero Structures', contactEmail: 'quality@larkspur.test', startsOn: '2026-01-20', endsOn: '2026-10-01' })).body;
+    const job = (
+      await t.api.post('/api/jobs').set(bearer(manager)).send({
+        reference: 'J-IMP-1',
+        customerName: 'Larkspur Aero Structures',
+        contactEmail: 'quality@larkspur.test',
+        startsOn: '2026-01-20',
+        endsOn: '2026-10-01',
+      })
+    ).body;
     const insert = async (startsOn: string, endsOn: string) => {
       const [{ id, organization_id }] = await t.db.query(
         `INSERT INTO bookings (organization_id, starts_on, ends_on, state, purpose, job_id, created_by)
          SELECT organization_id, $1, $2, 'returned', 'job', $3, id FROM users WHERE email = 'manager@demo.test' RETURNING id, organization_id`,
         [startsOn, endsOn, job.id],
       );
-      await t.db.query(`INSERT INTO booking_items (organization_id, booking_id, asset_id, starts_on, ends_on, active) VALUES ($1, $2, $3, $4, $5, false)`, [organization_id, id, a.id, startsOn, endsOn]);
+      await t.db.query(`INSERT INTO booking_items (organization_id, booking_id, asset_id, starts_on, ends_on, active) VALUES ($1, $2, $3, $4, $5, false)`, [
+        organization_id,
+        id,
+        a.id,
+        startsOn,
+        endsOn,
+      ]);
       return id as string;
     };
     const before = await insert('2026-01-25', '2026-01-31'); // ends the day before the good calibration
@@ -242,28 +293,42 @@ describe('lab trips and the window finder', () => {
   it('finds gaps long enough for the turnaround, plans a trip on the board, sends it, and takes it back with the certificate', async () => {
     const a = await tracker(addDays(today, -350));
     const soon = addDays(today, 3);
-    await t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [a.id], startsOn: soon, endsOn: addDays(soon, 2) });
+    await t.api
+      .post('/api/bookings')
+      .set(bearer(manager))
+      .send({ assetIds: [a.id], startsOn: soon, endsOn: addDays(soon, 2) });
     const windows = (await t.api.get(`/api/assets/${a.id}/lab-windows`).set(bearer(owner))).body;
     expect(windows.turnaroundDays).toBe(14);
     expect(windows.threatenedIfSentNow).toHaveLength(1);
     expect(windows.gaps[0].startsOn).toBe(addDays(soon, 3));
-    const trip = await t.api.post('/api/lab-trips').set(bearer(manager)).send({ provider: 'Fenmoor Calibration Lab', assetIds: [a.id], sentOn: windows.gaps[0].startsOn });
+    const trip = await t.api
+      .post('/api/lab-trips')
+      .set(bearer(manager))
+      .send({ provider: 'Fenmoor Calibration Lab', assetIds: [a.id], sentOn: windows.gaps[0].startsOn });
     expect(trip.status).toBe(201);
     expect(trip.body).toMatchObject({ state: 'planned', expectedBackOn: addDays(windows.gaps[0].startsOn, 13) });
-    const clash = await t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [a.id], startsOn: addDays(soon, 5), endsOn: addDays(soon, 6) });
+    const clash = await t.api
+      .post('/api/bookings')
+      .set(bearer(manager))
+      .send({ assetIds: [a.id], startsOn: addDays(soon, 5), endsOn: addDays(soon, 6) });
     expect(clash.status).toBe(409);
     // Send it now (the earlier booking is still reserved but does not stop a send).
     await t.db.query(`UPDATE booking_items SET active = false WHERE asset_id = $1 AND booking_id <> $2`, [a.id, trip.body.bookingId]);
     expect((await t.api.post(`/api/lab-trips/${trip.body.id}/send`).set(bearer(manager))).body.state).toBe('at_lab');
     expect((await t.api.get(`/api/assets/${a.id}`).set(bearer(manager))).body.status).toBe('at_lab');
-    const blocked = await t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [a.id], startsOn: addDays(today, 60), endsOn: addDays(today, 61) });
+    const blocked = await t.api
+      .post('/api/bookings')
+      .set(bearer(manager))
+      .send({ assetIds: [a.id], startsOn: addDays(today, 60), endsOn: addDays(today, 61) });
     expect(blocked.body.error.details.blocked[0].reason).toBe('at_lab');
     const review = (await t.api.get('/api/calibration/review').set(bearer(owner))).body;
     expect(review.atLab.map((x: { assetId: string }) => x.assetId)).toContain(a.id);
     await record(manager, a.id, fields(today));
     expect((await t.api.get(`/api/assets/${a.id}`).set(bearer(manager))).body.status).toBe('ready');
     expect((await t.api.get(`/api/lab-trips?state=back`).set(bearer(manager))).body.items.map((x: { id: string }) => x.id)).toContain(trip.body.id);
-    const custody = (await t.api.get(`/api/assets/${a.id}/history`).set(bearer(manager))).body.items.filter((i: { source: string }) => i.source === 'custody').map((i: { action: string }) => i.action);
+    const custody = (await t.api.get(`/api/assets/${a.id}/history`).set(bearer(manager))).body.items
+      .filter((i: { source: string }) => i.source === 'custody')
+      .map((i: { action: string }) => i.action);
     expect(custody.slice(0, 2)).toEqual(['back_from_lab', 'sent_to_lab']);
   });
 });
@@ -311,11 +376,14 @@ describe("the owner's review and the daily scan", () => {
 });
 
 describe('due scan timing and settings', () => {
-  it("scans a firm on schedule only in the hour its own clock reads six, and every firm on a manual run", async () => {
+  it('scans a firm on schedule only in the hour its own clock reads six, and every firm on a manual run', async () => {
     const scan = dueScanRoutine();
     await t.db.query(`UPDATE assets SET notified_calibration_state = NULL`);
     // 03:10 UTC is 04:10 in Wrenhallow (Europe/Berlin): not the demo firm's hour, nothing is scanned.
-    expect(await scan.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule', organizationId: null })).toMatchObject({ itemsChanged: 0, digests: 0 });
+    expect(await scan.run({ db: t.db, now: new Date('2026-12-01T03:10:00Z'), trigger: 'schedule', organizationId: null })).toMatchObject({
+      itemsChanged: 0,
+      digests: 0,
+    });
     // 05:10 UTC is 06:10 there (and 05:10 in the London firm, which waits for its own six o'clock).
     const atSix = await scan.run({ db: t.db, now: new Date('2026-12-01T05:10:00Z'), trigger: 'schedule', organizationId: null });
     expect(atSix.itemsChanged).toBeGreaterThan(0);
@@ -325,13 +393,29 @@ describe('due scan timing and settings', () => {
   });
 
   it('lets the owner set providers with turnarounds and the interval policy', async () => {
-    const res = await t.api.patch('/api/settings').set(bearer(owner)).send({ providers: [{ name: 'Fenmoor Calibration Lab', turnaroundDays: 21 }], intervalPolicy: { lengthenAfter: 3, lengthenFactor: 1.5, shortenFactor: 0.5, minMonths: 3, maxMonths: 24 } });
+    const res = await t.api
+      .patch('/api/settings')
+      .set(bearer(owner))
+      .send({
+        providers: [{ name: 'Fenmoor Calibration Lab', turnaroundDays: 21 }],
+        intervalPolicy: { lengthenAfter: 3, lengthenFactor: 1.5, shortenFactor: 0.5, minMonths: 3, maxMonths: 24 },
+      });
     expect(res.status).toBe(200);
     expect(res.body.providers).toEqual([{ name: 'Fenmoor Calibration Lab', turnaroundDays: 21 }]);
-    const bad = await t.api.patch('/api/settings').set(bearer(owner)).send({ intervalPolicy: { lengthenAfter: 2, lengthenFactor: 0.5, shortenFactor: 2, minMonths: 12, maxMonths: 6 } });
-    expect(Object.keys(bad.body.error.details.fields).sort()).toEqual(['intervalPolicy.lengthenFactor', 'intervalPolicy.maxMonths', 'intervalPolicy.shortenFactor']);
+    const bad = await t.api
+      .patch('/api/settings')
+      .set(bearer(owner))
+      .send({ intervalPolicy: { lengthenAfter: 2, lengthenFactor: 0.5, shortenFactor: 2, minMonths: 12, maxMonths: 6 } });
+    expect(Object.keys(bad.body.error.details.fields).sort()).toEqual([
+      'intervalPolicy.lengthenFactor',
+      'intervalPolicy.maxMonths',
+      'intervalPolicy.shortenFactor',
+    ]);
     const a = await tracker(addDays(today, -300));
-    await t.api.patch(`/api/assets/${a.id}`).set(bearer(manager)).send({ calibration: { required: true, intervalMonths: 12, provider: 'Fenmoor Calibration Lab' } });
+    await t.api
+      .patch(`/api/assets/${a.id}`)
+      .set(bearer(manager))
+      .send({ calibration: { required: true, intervalMonths: 12, provider: 'Fenmoor Calibration Lab' } });
     expect((await t.api.get(`/api/assets/${a.id}/lab-windows`).set(bearer(owner))).body.turnaroundDays).toBe(21);
   });
 });

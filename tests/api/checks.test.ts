@@ -23,22 +23,39 @@ const readingsAt = (offsetUm: number) => {
 
 beforeAll(async () => {
   t = await createTestApp();
-  [manager, tech, billing, otherOwner] = await Promise.all(['manager@demo.test', 'tech@demo.test', 'billing@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
+  [manager, tech, billing, otherOwner] = await Promise.all(
+    ['manager@demo.test', 'tech@demo.test', 'billing@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)),
+  );
 });
 afterAll(() => t.close());
 
 const newTip = async (tag: string, positions = ['vertical']) =>
-  (await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'tip', assetTag: tag, serialNumber: `S-${tag}`, rfidTag: `E2:${tag}`, specs: { lengthMm: 100, positions } })).body;
+  (
+    await t.api
+      .post('/api/assets')
+      .set(bearer(manager))
+      .send({ type: 'tip', assetTag: tag, serialNumber: `S-${tag}`, rfidTag: `E2:${tag}`, specs: { lengthMm: 100, positions } })
+  ).body;
 const lookup = async (code: string) => (await t.api.get('/api/assets/lookup').query({ code }).set(bearer(manager))).body;
 const validate = (token: string, tipId: string, position: string, offsetUm: number, extra: object = {}) =>
-  t.api.post('/api/checks').set(bearer(token)).send({ kind: 'tip_validation', assetId: tipId, position, reference: R, readings: readingsAt(offsetUm), ...extra });
+  t.api
+    .post('/api/checks')
+    .set(bearer(token))
+    .send({ kind: 'tip_validation', assetId: tipId, position, reference: R, readings: readingsAt(offsetUm), ...extra });
 
 describe('tip validation', () => {
   it('computes deviations, mean offset, spread and decides on the largest deviation against the tolerance', async () => {
     const tip = await newTip('TIP-C01');
     const res = await validate(tech, tip.id, 'vertical', 20);
     expect(res.status).toBe(201);
-    expect(res.body.result).toMatchObject({ deviationsUm: [20, 20, 20, 20], maxDeviationUm: 20, toleranceUm: 60, guardBandUm: 0, decisionRule: 'simple', decision: 'pass' });
+    expect(res.body.result).toMatchObject({
+      deviationsUm: [20, 20, 20, 20],
+      maxDeviationUm: 20,
+      toleranceUm: 60,
+      guardBandUm: 0,
+      decisionRule: 'simple',
+      decision: 'pass',
+    });
     // Mean of (+d,0,0), (−d,0,0), (0,d,0), (0,0,d) is (0, d/4, d/4): |P̄ − R| = d·√2/4 = 7.1 µm for d = 20 µm.
     expect(res.body.result.meanOffsetUm).toBeCloseTo(7.1, 1);
     const status = (await t.api.get(`/api/assets/${tip.id}/tip-validation`).set(bearer(tech))).body;
@@ -74,7 +91,10 @@ describe('tip validation', () => {
     ['both U and its components', { uncertaintyUm: 4, uncertaintyComponentsUm: [1] }, ['uncertaintyUm']],
   ])('refuses %s with 400 naming the fields', async (_name, patch, fields) => {
     const tip = await lookup('TIP-C01');
-    const res = await t.api.post('/api/checks').set(bearer(tech)).send({ kind: 'tip_validation', assetId: tip.id, position: 'vertical', reference: R, readings: readingsAt(5), ...patch });
+    const res = await t.api
+      .post('/api/checks')
+      .set(bearer(tech))
+      .send({ kind: 'tip_validation', assetId: tip.id, position: 'vertical', reference: R, readings: readingsAt(5), ...patch });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.details.fields)).toEqual(fields);
   });
@@ -103,7 +123,9 @@ describe("the technician's checks to do", () => {
     // 200 µm off in the horizontal position: a fail (the demo tolerance is 60 µm).
     expect((await validate(tech, tip.id, 'horizontal', 200)).body.result.decision).toBe('fail');
     const after = (await t.api.get('/api/checks/to-do').set(bearer(tech))).body.items;
-    expect(after).toContainEqual(expect.objectContaining({ assetId: tip.id, assetTag: tip.assetTag, position: 'horizontal', lastDecision: 'fail', bookingId: booking.id }));
+    expect(after).toContainEqual(
+      expect.objectContaining({ assetId: tip.id, assetTag: tip.assetTag, position: 'horizontal', lastDecision: 'fail', bookingId: booking.id }),
+    );
     expect((await validate(tech, tip.id, 'horizontal', 10)).body.result.decision).toBe('pass');
     expect((await t.api.get('/api/checks/to-do').set(bearer(tech))).body.items.filter((c: { assetId: string }) => c.assetId === tip.id)).toEqual([]);
     // Another firm's technician-to-be sees none of it.
@@ -119,15 +141,27 @@ describe('two-face and length checks', () => {
     expect(missing.status).toBe(400);
     expect(missing.body.error.details.fields.distanceM).toMatch(/needed/);
     // Error 50 µm (3-4-5); default tolerance 20 µm + 8 µm/m × 5 m = 60 µm.
-    const res = await t.api.post('/api/checks').set(bearer(tech)).send({ ...body, distanceM: 5 });
+    const res = await t.api
+      .post('/api/checks')
+      .set(bearer(tech))
+      .send({ ...body, distanceM: 5 });
     expect(res.body.result).toMatchObject({ errorUm: 50, toleranceUm: 60, decision: 'pass' });
   });
 
   it('passes a result equal to its limit: 27.3 µm against 15 µm + 6 µm/m × 2.05 m (ILAC-G8:09/2019 simple acceptance)', async () => {
     const owner = await t.tokenFor('owner@demo.test');
-    await t.api.patch('/api/settings').set(bearer(owner)).send({ tolerances: { two_face: { kind: 'range', aUm: 15, bUmPerM: 6 } } });
+    await t.api
+      .patch('/api/settings')
+      .set(bearer(owner))
+      .send({ tolerances: { two_face: { kind: 'range', aUm: 15, bUmPerM: 6 } } });
     const tracker = (await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'tracker', assetTag: 'TRK-LIM1', serialNumber: 'S-LIM1' })).body;
-    const faces = (dzMm: number) => ({ kind: 'two_face', assetId: tracker.id, front: { x: 3000, y: 10, z: 0 }, back: { x: 3000, y: 10, z: dzMm }, distanceM: 2.05 });
+    const faces = (dzMm: number) => ({
+      kind: 'two_face',
+      assetId: tracker.id,
+      front: { x: 3000, y: 10, z: 0 },
+      back: { x: 3000, y: 10, z: dzMm },
+      distanceM: 2.05,
+    });
     try {
       const onTheLimit = await t.api.post('/api/checks').set(bearer(tech)).send(faces(0.0273));
       expect(onTheLimit.status).toBe(201);
@@ -136,28 +170,58 @@ describe('two-face and length checks', () => {
       const over = await t.api.post('/api/checks').set(bearer(tech)).send(faces(0.02735));
       expect(over.body.result).toMatchObject({ errorUm: 27.4, toleranceUm: 27.3, decision: 'fail' });
     } finally {
-      await t.api.patch('/api/settings').set(bearer(owner)).send({ tolerances: { two_face: { kind: 'range', aUm: 20, bUmPerM: 8 } } });
+      await t.api
+        .patch('/api/settings')
+        .set(bearer(owner))
+        .send({ tolerances: { two_face: { kind: 'range', aUm: 20, bUmPerM: 8 } } });
     }
   });
 
   it('computes the scale bar length at temperature from its certified length and expansion coefficient', async () => {
     const tracker = (await t.api.get('/api/assets?type=tracker&limit=1&offset=1').set(bearer(manager))).body.items[0];
     const bar = (
-      await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'scale_bar', assetTag: 'BAR-C1', serialNumber: 'SB-C1', specs: { certifiedLengthMm: 1000, expansionPpmPerK: 11.5 } })
+      await t.api
+        .post('/api/assets')
+        .set(bearer(manager))
+        .send({ type: 'scale_bar', assetTag: 'BAR-C1', serialNumber: 'SB-C1', specs: { certifiedLengthMm: 1000, expansionPpmPerK: 11.5 } })
     ).body;
     // Steel-like bar at 25 °C should read 1000.0575 mm; reading 1000.100 mm → error +42.5 µm.
-    const res = await t.api.post('/api/checks').set(bearer(tech)).send({ kind: 'length_check', assetId: tracker.id, scaleBarId: bar.id, endA: { x: 0, y: 0, z: 0 }, endB: { x: 1000.1, y: 0, z: 0 }, temperatureC: 25, distanceM: 4 });
+    const res = await t.api
+      .post('/api/checks')
+      .set(bearer(tech))
+      .send({
+        kind: 'length_check',
+        assetId: tracker.id,
+        scaleBarId: bar.id,
+        endA: { x: 0, y: 0, z: 0 },
+        endB: { x: 1000.1, y: 0, z: 0 },
+        temperatureC: 25,
+        distanceM: 4,
+      });
     expect(res.status).toBe(201);
     expect(res.body.result.expectedMm).toBeCloseTo(1000.0575, 6);
     expect(res.body.result.errorUm).toBeCloseTo(42.5, 1);
     expect(res.body.result).toMatchObject({ toleranceUm: 52, decision: 'pass' });
-    const notABar = await t.api.post('/api/checks').set(bearer(tech)).send({ kind: 'length_check', assetId: tracker.id, scaleBarId: tracker.id, endA: { x: 0, y: 0, z: 0 }, endB: { x: 1, y: 0, z: 0 }, temperatureC: 20, distanceM: 4 });
+    const notABar = await t.api
+      .post('/api/checks')
+      .set(bearer(tech))
+      .send({
+        kind: 'length_check',
+        assetId: tracker.id,
+        scaleBarId: tracker.id,
+        endA: { x: 0, y: 0, z: 0 },
+        endB: { x: 1, y: 0, z: 0 },
+        temperatureC: 20,
+        distanceM: 4,
+      });
     expect(notABar.body.error.details.fields.scaleBarId).toMatch(/not a scale bar/);
   });
 });
 
 async function jpeg() {
-  return sharp({ create: { width: 640, height: 480, channels: 3, background: '#88775f' } }).jpeg().toBuffer();
+  return sharp({ create: { width: 640, height: 480, channels: 3, background: '#88775f' } })
+    .jpeg()
+    .toBuffer();
 }
 
 describe('incidents, holds and release', () => {
@@ -189,13 +253,22 @@ describe('incidents, holds and release', () => {
     // tests/fixtures/synthetic-photo.heic: a 480 × 360 synthetic gradient with a blue disc in the middle,
     // encoded by Debian's heif-enc (libheif with x265), so no camera and no real photo is involved.
     const heic = fs.readFileSync(path.resolve('tests/fixtures/synthetic-photo.heic'));
-    const res = await t.api.post('/api/incidents').set(bearer(tech)).field('assetId', tip.id).field('kind', 'impact').field('description', 'Knocked on the stand').field('occurredAt', '2026-11-30T10:00:00Z').attach('photos', heic, { filename: 'IMG_0002.HEIC', contentType: 'image/heic' });
+    const res = await t.api
+      .post('/api/incidents')
+      .set(bearer(tech))
+      .field('assetId', tip.id)
+      .field('kind', 'impact')
+      .field('description', 'Knocked on the stand')
+      .field('occurredAt', '2026-11-30T10:00:00Z')
+      .attach('photos', heic, { filename: 'IMG_0002.HEIC', contentType: 'image/heic' });
     expect(res.status).toBe(201);
     expect(res.body.photos[0].thumbnailUrl).toBeTruthy();
     const thumb = await t.api.get(res.body.photos[0].thumbnailUrl).set(bearer(manager)).buffer(true).parse(binaryBody);
     expect(thumb.headers['content-type']).toBe('image/jpeg');
     // Read back by sharp's own JPEG decoder: 320 wide (4:3 kept), and the middle is the blue disc.
-    const { data, info } = await sharp(thumb.body as Buffer).raw().toBuffer({ resolveWithObject: true });
+    const { data, info } = await sharp(thumb.body as Buffer)
+      .raw()
+      .toBuffer({ resolveWithObject: true });
     expect([info.width, info.height]).toEqual([320, 240]);
     const centre = (120 * info.width + 160) * info.channels;
     expect(data[centre + 2]).toBeGreaterThan(180);
@@ -205,7 +278,14 @@ describe('incidents, holds and release', () => {
     const tip = await newTip('TIP-D03');
     // ISO base media 'ftyp' box with the 'heic' brand (ISO/IEC 23008-12).
     const heic = Buffer.concat([Buffer.from([0, 0, 0, 0x18]), Buffer.from('ftypheic'), Buffer.from([0, 0, 0, 0]), Buffer.from('mif1heic'), Buffer.alloc(64)]);
-    const res = await t.api.post('/api/incidents').set(bearer(tech)).field('assetId', tip.id).field('kind', 'impact').field('description', 'Knocked on the stand').field('occurredAt', '2026-11-30T10:00:00Z').attach('photos', heic, { filename: 'IMG_0001.HEIC', contentType: 'image/heic' });
+    const res = await t.api
+      .post('/api/incidents')
+      .set(bearer(tech))
+      .field('assetId', tip.id)
+      .field('kind', 'impact')
+      .field('description', 'Knocked on the stand')
+      .field('occurredAt', '2026-11-30T10:00:00Z')
+      .attach('photos', heic, { filename: 'IMG_0001.HEIC', contentType: 'image/heic' });
     expect(res.status).toBe(201);
     expect(res.body.photos[0]).toMatchObject({ contentType: 'image/heic', thumbnailUrl: null });
     expect((await t.api.get(res.body.photos[0].url).set(bearer(manager))).headers['content-type']).toBe('image/heic');
@@ -213,7 +293,14 @@ describe('incidents, holds and release', () => {
 
   it('refuses a photo that is too large (413) or not a JPEG, PNG or HEIC (415), and writes nothing', async () => {
     const tip = await newTip('TIP-D02');
-    const base = () => t.api.post('/api/incidents').set(bearer(tech)).field('assetId', tip.id).field('kind', 'impact').field('description', 'Knocked against the fixture').field('occurredAt', '2026-11-30T10:00:00Z');
+    const base = () =>
+      t.api
+        .post('/api/incidents')
+        .set(bearer(tech))
+        .field('assetId', tip.id)
+        .field('kind', 'impact')
+        .field('description', 'Knocked against the fixture')
+        .field('occurredAt', '2026-11-30T10:00:00Z');
     const big = await base().attach('photos', Buffer.alloc(11 * 1024 * 1024, 1), { filename: 'big.jpg', contentType: 'image/jpeg' });
     expect(big.status).toBe(413);
     const fake = await base().attach('photos', Buffer.from('%PDF-1.4 not a photo'), { filename: 'photo.jpg', contentType: 'image/jpeg' });
@@ -229,7 +316,10 @@ describe('incidents, holds and release', () => {
     const early = await t.api.post(`/api/assets/${tip.id}/release`).set(bearer(manager)).send({});
     expect(early.status).toBe(422);
     expect(early.body.error.code).toBe('release_needs_evidence');
-    expect(early.body.error.details.missing).toEqual(['no passing vertical tip validation since the hold began', 'no passing horizontal tip validation since the hold began']);
+    expect(early.body.error.details.missing).toEqual([
+      'no passing vertical tip validation since the hold began',
+      'no passing horizontal tip validation since the hold began',
+    ]);
     await validate(manager, tip.id, 'vertical', 10);
     const half = await t.api.post(`/api/assets/${tip.id}/release`).set(bearer(manager)).send({});
     expect(half.body.error.details.missing).toEqual(['no passing horizontal tip validation since the hold began']);
@@ -245,9 +335,20 @@ describe('incidents, holds and release', () => {
   });
 
   it('flags a dropped battery as damaged (not to fly) and moves the incident through review to resolved', async () => {
-    const battery = (await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'battery', assetTag: 'BAT-D1', serialNumber: 'BD1', specs: { nominalVoltageV: 14.4, ratedCapacityAh: 6.8 } })).body;
+    const battery = (
+      await t.api
+        .post('/api/assets')
+        .set(bearer(manager))
+        .send({ type: 'battery', assetTag: 'BAT-D1', serialNumber: 'BD1', specs: { nominalVoltageV: 14.4, ratedCapacityAh: 6.8 } })
+    ).body;
     const incident = (
-      await t.api.post('/api/incidents').set(bearer(tech)).field('assetId', battery.id).field('kind', 'dropped').field('description', 'Slipped out of the case').field('occurredAt', '2026-11-29T09:00:00Z')
+      await t.api
+        .post('/api/incidents')
+        .set(bearer(tech))
+        .field('assetId', battery.id)
+        .field('kind', 'dropped')
+        .field('description', 'Slipped out of the case')
+        .field('occurredAt', '2026-11-29T09:00:00Z')
     ).body;
     expect((await t.api.get(`/api/assets/${battery.id}`).set(bearer(manager))).body.specs.damaged).toBe(true);
     const [mail] = await t.db.query(`SELECT text_body FROM outbox_messages WHERE subject LIKE 'BAT-D1%'`);
@@ -256,7 +357,10 @@ describe('incidents, holds and release', () => {
     const noWords = await t.api.patch(`/api/incidents/${incident.id}`).set(bearer(manager)).send({ state: 'resolved' });
     expect(noWords.status).toBe(400);
     await t.api.patch(`/api/incidents/${incident.id}`).set(bearer(manager)).send({ state: 'reviewing' });
-    const done = await t.api.patch(`/api/incidents/${incident.id}`).set(bearer(manager)).send({ state: 'resolved', resolution: 'Battery scrapped through the recycler', chargeAmountMinor: 38000 });
+    const done = await t.api
+      .patch(`/api/incidents/${incident.id}`)
+      .set(bearer(manager))
+      .send({ state: 'resolved', resolution: 'Battery scrapped through the recycler', chargeAmountMinor: 38000 });
     expect(done.body).toMatchObject({ state: 'resolved', chargeAmountMinor: 38000 });
     expect((await t.api.patch(`/api/incidents/${incident.id}`).set(bearer(manager)).send({ state: 'reviewing' })).body.error.code).toBe('incident_resolved');
   });

@@ -22,14 +22,17 @@ const records = (text: string) => parseCsv(text, { columns: true }) as Record<st
 describe('every CSV download writes user text that looks like a formula as text', () => {
   let assetTag: string;
   beforeAll(async () => {
-    const created = await t.api.post('/api/assets').set(bearer(manager)).send({
-      type: 'tracker',
-      assetTag: 'TRK-CSVF',
-      serialNumber: 'TF-1',
-      notes: formula,
-      location: '-2+3',
-      calibration: { required: true, intervalMonths: 12, lastCalibratedOn: addDays(todayIn('Europe/Berlin'), -400), provider: formula },
-    });
+    const created = await t.api
+      .post('/api/assets')
+      .set(bearer(manager))
+      .send({
+        type: 'tracker',
+        assetTag: 'TRK-CSVF',
+        serialNumber: 'TF-1',
+        notes: formula,
+        location: '-2+3',
+        calibration: { required: true, intervalMonths: 12, lastCalibratedOn: addDays(todayIn('Europe/Berlin'), -400), provider: formula },
+      });
     expect(created.status).toBe(201);
     assetTag = created.body.assetTag;
   });
@@ -55,7 +58,10 @@ describe('every CSV download writes user text that looks like a formula as text'
     const customer = (await t.api.get(`/api/customers/${invoice.customerId}`).set(bearer(billing))).body;
     const renamed = await t.api.put(`/api/customers/${customer.id}`).set(bearer(billing)).send({ company: formula, billingEmail: customer.billingEmail });
     expect(renamed.status).toBe(200);
-    const credit = await t.api.post(`/api/invoices/${invoice.id}/credit-note`).set(bearer(billing)).send({ reason: 'Goodwill for a late delivery', amountMinor: 1000 });
+    const credit = await t.api
+      .post(`/api/invoices/${invoice.id}/credit-note`)
+      .set(bearer(billing))
+      .send({ reason: 'Goodwill for a late delivery', amountMinor: 1000 });
     expect(credit.status).toBe(201);
 
     const res = await t.api.get('/api/invoices/export.csv').set(bearer(billing));

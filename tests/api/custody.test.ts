@@ -53,7 +53,9 @@ const expectedMoves: [AssetStatus, AssetStatus, string][] = [
   ['at_lab', 'held', 'held'],
   ['at_lab', 'retired', 'retired'],
 ];
-const refusedMoves = assetStatuses.flatMap((from) => assetStatuses.filter((to) => !expectedMoves.some(([f, x]) => f === from && x === to)).map((to) => [from, to] as const));
+const refusedMoves = assetStatuses.flatMap((from) =>
+  assetStatuses.filter((to) => !expectedMoves.some(([f, x]) => f === from && x === to)).map((to) => [from, to] as const),
+);
 
 describe('the custody table', () => {
   it('allows exactly the moves the product makes', () => {
@@ -77,7 +79,11 @@ describe('the custody table', () => {
   it.each(refusedMoves)('refuses %s → %s with a 422 naming the item and its states, and changes nothing', async (from, to) => {
     const item = await itemIn(from);
     const refusal = inTx((tx) => moveAssets(tx, actor, [item.id], to, { why: 'Test move' }));
-    await expect(refusal).rejects.toMatchObject({ status: 422, code: 'asset_move_refused', message: expect.stringMatching(new RegExp(`^${item.assetTag} is .+ and cannot be .+\\.$`)) });
+    await expect(refusal).rejects.toMatchObject({
+      status: 422,
+      code: 'asset_move_refused',
+      message: expect.stringMatching(new RegExp(`^${item.assetTag} is .+ and cannot be .+\\.$`)),
+    });
     await expect(refusal).rejects.toMatchObject({ details: { refused: [{ assetId: item.id, from, to }] } });
     expect(await statusOf(item.id)).toBe(from);
     expect(await custodyOf(item.id)).toEqual([]);
@@ -118,25 +124,68 @@ describe('the custody table', () => {
 });
 
 describe('moves as people see them', () => {
-  const accessory = async (tag: string) => (await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'accessory', assetTag: tag, serialNumber: `S-${tag}`, location: 'Shop, bay 2' })).body as { id: string; assetTag: string };
-  const historyOf = async (id: string) => (await t.api.get(`/api/assets/${id}/history`).set(bearer(manager))).body.items as { source: string; action: string; summary: string; details: Record<string, unknown> }[];
+  const accessory = async (tag: string) =>
+    (
+      await t.api
+        .post('/api/assets')
+        .set(bearer(manager))
+        .send({ type: 'accessory', assetTag: tag, serialNumber: `S-${tag}`, location: 'Shop, bay 2' })
+    ).body as { id: string; assetTag: string };
+  const historyOf = async (id: string) =>
+    (await t.api.get(`/api/assets/${id}/history`).set(bearer(manager))).body.items as {
+      source: string;
+      action: string;
+      summary: string;
+      details: Record<string, unknown>;
+    }[];
   const recordOf = async (id: string) => (await t.api.get(`/api/assets/${id}/record`).set(bearer(manager))).body.items as { clause: string; value: string }[];
 
   it('shows checkout and a damaged return in the item history, the equipment record and its PDF', async () => {
     const a = await accessory('ACC-CUS1');
-    const booking = (await t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [a.id], startsOn: today, endsOn: addDays(today, 2) })).body;
+    const booking = (
+      await t.api
+        .post('/api/bookings')
+        .set(bearer(manager))
+        .send({ assetIds: [a.id], startsOn: today, endsOn: addDays(today, 2) })
+    ).body;
     const line = (condition: string) => [{ assetId: a.id, present: true, condition }];
-    expect((await t.api.post(`/api/bookings/${booking.id}/checkout`).set(bearer(manager)).send({ checklist: line('good'), counterpart: 'Tamsin Quillfeather' })).status).toBe(200);
+    expect(
+      (
+        await t.api
+          .post(`/api/bookings/${booking.id}/checkout`)
+          .set(bearer(manager))
+          .send({ checklist: line('good'), counterpart: 'Tamsin Quillfeather' })
+      ).status,
+    ).toBe(200);
 
     const out = await historyOf(a.id);
-    expect(out.find((i) => i.source === 'custody' && i.action === 'checked_out')?.details).toMatchObject({ holder: 'Tamsin Quillfeather', bookingId: booking.id, note: 'good' });
+    expect(out.find((i) => i.source === 'custody' && i.action === 'checked_out')?.details).toMatchObject({
+      holder: 'Tamsin Quillfeather',
+      bookingId: booking.id,
+      note: 'good',
+    });
     expect(out.find((i) => i.action === 'asset.checked_out')?.summary).toBe('Status ready → out: good');
     expect((await recordOf(a.id)).find((i) => i.clause === '6.4.13 d)')?.value).toContain('status: out');
-    expect((await t.api.post(`/api/assets/${a.id}/retire`).set(bearer(manager)).send({ reason: 'Worn out' })).body.error).toMatchObject({ code: 'asset_move_refused', message: `${a.assetTag} is out and cannot be retired.` });
+    expect((await t.api.post(`/api/assets/${a.id}/retire`).set(bearer(manager)).send({ reason: 'Worn out' })).body.error).toMatchObject({
+      code: 'asset_move_refused',
+      message: `${a.assetTag} is out and cannot be retired.`,
+    });
 
-    expect((await t.api.post(`/api/bookings/${booking.id}/return`).set(bearer(manager)).send({ checklist: line('damaged'), counterpart: 'Tamsin Quillfeather' })).status).toBe(200);
+    expect(
+      (
+        await t.api
+          .post(`/api/bookings/${booking.id}/return`)
+          .set(bearer(manager))
+          .send({ checklist: line('damaged'), counterpart: 'Tamsin Quillfeather' })
+      ).status,
+    ).toBe(200);
     const back = await historyOf(a.id);
-    expect(back.filter((i) => i.source === 'custody').map((i) => i.action).sort()).toEqual(['checked_out', 'held', 'registered', 'returned']);
+    expect(
+      back
+        .filter((i) => i.source === 'custody')
+        .map((i) => i.action)
+        .sort(),
+    ).toEqual(['checked_out', 'held', 'registered', 'returned']);
     expect(back.find((i) => i.action === 'asset.held')?.summary).toMatch(/^Status out → on hold: /);
     expect((await recordOf(a.id)).find((i) => i.clause === '6.4.13 d)')?.value).toContain('status: held');
     const pdf = await t.api.get(`/api/assets/${a.id}/record.pdf`).set(bearer(manager)).buffer(true).parse(binaryBody);
@@ -144,14 +193,35 @@ describe('moves as people see them', () => {
   });
 
   it('keeps an item held when it comes back from the lab without the evidence that ends its hold', async () => {
-    const trk = (await t.api.post('/api/assets').set(bearer(manager)).send({ type: 'tracker', assetTag: 'TRK-CUS1', serialNumber: 'TC-CUS1', calibration: { required: true, intervalMonths: 12, lastCalibratedOn: addDays(today, -300) } })).body;
+    const trk = (
+      await t.api
+        .post('/api/assets')
+        .set(bearer(manager))
+        .send({
+          type: 'tracker',
+          assetTag: 'TRK-CUS1',
+          serialNumber: 'TC-CUS1',
+          calibration: { required: true, intervalMonths: 12, lastCalibratedOn: addDays(today, -300) },
+        })
+    ).body;
     await t.api.post(`/api/assets/${trk.id}/hold`).set(bearer(manager)).send({ summary: 'Knocked off its stand' });
-    const trip = (await t.api.post('/api/lab-trips').set(bearer(manager)).send({ provider: 'Fenmoor Calibration Lab', assetIds: [trk.id], sentOn: today })).body;
+    const trip = (
+      await t.api
+        .post('/api/lab-trips')
+        .set(bearer(manager))
+        .send({ provider: 'Fenmoor Calibration Lab', assetIds: [trk.id], sentOn: today })
+    ).body;
     expect((await t.api.post(`/api/lab-trips/${trip.id}/send`).set(bearer(manager))).status).toBe(200);
     expect((await t.api.get(`/api/assets/${trk.id}`).set(bearer(manager))).body.status).toBe('at_lab');
 
     const certificate = await renderPdf({ size: 'A4' }, (doc) => doc.text('Calibration certificate FCL-CUS-1 (test document)'));
-    const fields = { performedOn: today, provider: 'Fenmoor Calibration Lab', certificateNumber: 'FCL-CUS-1', asFound: 'out_of_tolerance', asLeft: 'out_of_tolerance' };
+    const fields = {
+      performedOn: today,
+      provider: 'Fenmoor Calibration Lab',
+      certificateNumber: 'FCL-CUS-1',
+      asFound: 'out_of_tolerance',
+      asLeft: 'out_of_tolerance',
+    };
     const req = t.api.post(`/api/assets/${trk.id}/calibrations`).set(bearer(manager));
     for (const [k, v] of Object.entries(fields)) req.field(k, v);
     expect((await req.attach('certificate', certificate, { filename: 'certificate.pdf', contentType: 'application/pdf' })).status).toBe(201);
@@ -159,7 +229,10 @@ describe('moves as people see them', () => {
     expect((await t.api.get(`/api/assets/${trk.id}`).set(bearer(manager))).body.status).toBe('held');
     const custody = (await historyOf(trk.id)).filter((i) => i.source === 'custody').map((i) => i.action);
     expect(custody.sort()).toEqual(['back_from_lab', 'held', 'held', 'registered', 'sent_to_lab']);
-    const booked = await t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [trk.id], startsOn: addDays(today, 30), endsOn: addDays(today, 31) });
+    const booked = await t.api
+      .post('/api/bookings')
+      .set(bearer(manager))
+      .send({ assetIds: [trk.id], startsOn: addDays(today, 30), endsOn: addDays(today, 31) });
     expect(booked.body.error.details.blocked[0].reason).toBe('held');
   });
 });

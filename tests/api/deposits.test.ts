@@ -29,11 +29,27 @@ beforeAll(async () => {
   server = t.app.listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   fake.store.settings.webhookUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/webhooks/payments`;
-  stripe = createPaymentClient({ PAYMENT_API_KEY: t.config.PAYMENT_API_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 5000 });
-  [billing, manager, tech, owner, otherOwner] = await Promise.all(['billing@demo.test', 'manager@demo.test', 'tech@demo.test', 'owner@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
-  await t.api.patch('/api/settings').set(bearer(owner)).send({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 } });
+  stripe = createPaymentClient({
+    PAYMENT_API_KEY: t.config.PAYMENT_API_KEY,
+    PAYMENT_API_HOST: '127.0.0.1',
+    PAYMENT_API_PORT: fake.port,
+    PAYMENT_API_PROTOCOL: 'http',
+    PAYMENT_TIMEOUT_MS: 5000,
+  });
+  [billing, manager, tech, owner, otherOwner] = await Promise.all(
+    ['billing@demo.test', 'manager@demo.test', 'tech@demo.test', 'owner@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)),
+  );
+  await t.api
+    .patch('/api/settings')
+    .set(bearer(owner))
+    .send({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 } });
   // The demo seed's SMR rate card: day 15.00, week 75.00, month 240.00, late fee 5.00.
-  customerId = (await t.api.post('/api/customers').set(bearer(billing)).send({ company: 'Quillon Test Rigs', billingEmail: 'accounts@quillon.test', billingContact: 'Ines Varga' })).body.id;
+  customerId = (
+    await t.api
+      .post('/api/customers')
+      .set(bearer(billing))
+      .send({ company: 'Quillon Test Rigs', billingEmail: 'accounts@quillon.test', billingContact: 'Ines Varga' })
+  ).body.id;
 });
 afterAll(async () => {
   server?.close();
@@ -50,16 +66,26 @@ async function newRental(days = 13): Promise<RentalView> {
   const startsOn = start.toISOString().slice(0, 10);
   const endsOn = new Date(start.getTime() + (days - 1) * 86_400_000).toISOString().slice(0, 10);
   const free = (await t.api.get('/api/availability').query({ type: 'smr', startsOn, endsOn, limit: 2 }).set(bearer(billing))).body.items;
-  const res = await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId, assetIds: free.map((a: { id: string }) => a.id), startsOn, endsOn });
+  const res = await t.api
+    .post('/api/rentals')
+    .set(bearer(billing))
+    .send({ customerId, assetIds: free.map((a: { id: string }) => a.id), startsOn, endsOn });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return res.body;
 }
-const checklist = (r: RentalView, damaged?: string) => ({ counterpart: 'Ines Varga', checklist: r.items.map((i) => ({ assetId: i.id, present: true, condition: i.id === damaged ? 'damaged' : 'good' })) });
+const checklist = (r: RentalView, damaged?: string) => ({
+  counterpart: 'Ines Varga',
+  checklist: r.items.map((i) => ({ assetId: i.id, present: true, condition: i.id === damaged ? 'damaged' : 'good' })),
+});
 const takeDeposit = (r: RentalView, paymentMethod = 'pm_card_visa') => t.api.post(`/api/rentals/${r.id}/deposit`).set(bearer(billing)).send({ paymentMethod });
 const checkout = (r: RentalView) => t.api.post(`/api/bookings/${r.bookingId}/checkout`).set(bearer(manager)).send(checklist(r));
 const giveBack = (r: RentalView, damaged?: string) => t.api.post(`/api/bookings/${r.bookingId}/return`).set(bearer(manager)).send(checklist(r, damaged));
 const view = async (r: RentalView): Promise<RentalView> => (await t.api.get(`/api/rentals/${r.id}`).set(bearer(billing))).body;
-const mailTo = (address: string) => t.db.query(`SELECT m.subject, array_agg(a.file_name ORDER BY a.file_name) FILTER (WHERE a.id IS NOT NULL) AS files FROM outbox_messages m LEFT JOIN outbox_attachments a ON a.message_id = m.id WHERE $1 = ANY(m.recipients) GROUP BY m.id, m.subject ORDER BY m.created_at`, [address]);
+const mailTo = (address: string) =>
+  t.db.query(
+    `SELECT m.subject, array_agg(a.file_name ORDER BY a.file_name) FILTER (WHERE a.id IS NOT NULL) AS files FROM outbox_messages m LEFT JOIN outbox_attachments a ON a.message_id = m.id WHERE $1 = ANY(m.recipients) GROUP BY m.id, m.subject ORDER BY m.created_at`,
+    [address],
+  );
 
 describe('a rental from quote to invoice', () => {
   let rental: RentalView;
@@ -70,14 +96,31 @@ describe('a rental from quote to invoice', () => {
     // 13 days of two SMRs: two weeks each (common practice: cheapest cover), 300.00 + 19 % tax.
     expect(rental.quote).toMatchObject({ days: 13, subtotalMinor: 30_000, taxMinor: 5700, totalMinor: 35_700 });
     const booking = (await t.api.get(`/api/bookings/${rental.bookingId}`).set(bearer(manager))).body;
-    expect(booking).toMatchObject({ purpose: 'rental', rentalId: rental.id, rental: { id: rental.id, number: rental.number, customerCompany: 'Quillon Test Rigs' } });
+    expect(booking).toMatchObject({
+      purpose: 'rental',
+      rentalId: rental.id,
+      rental: { id: rental.id, number: rental.number, customerCompany: 'Quillon Test Rigs' },
+    });
     // A bare booking cannot claim a rental: the two are made together.
-    const claim = await t.api.post('/api/bookings').set(bearer(manager)).send({ assetIds: [rental.items[0].id], startsOn: '2027-09-01', endsOn: '2027-09-02', rentalId: rental.id });
+    const claim = await t.api
+      .post('/api/bookings')
+      .set(bearer(manager))
+      .send({ assetIds: [rental.items[0].id], startsOn: '2027-09-01', endsOn: '2027-09-02', rentalId: rental.id });
     expect(claim.status).toBe(422);
     expect(claim.body.error.code).toBe('rental_booking');
-    expect((await t.api.post('/api/rentals').set(bearer(tech)).send({ customerId, assetIds: [rental.items[0].id], startsOn: '2027-06-01', endsOn: '2027-06-02' })).status).toBe(403);
+    expect(
+      (
+        await t.api
+          .post('/api/rentals')
+          .set(bearer(tech))
+          .send({ customerId, assetIds: [rental.items[0].id], startsOn: '2027-06-01', endsOn: '2027-06-02' })
+      ).status,
+    ).toBe(403);
     // The same SMRs for overlapping days: the bookings rules answer, unchanged.
-    const clash = await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId, assetIds: rental.items.map((i) => i.id), startsOn: rental.endsOn, endsOn: rental.endsOn });
+    const clash = await t.api
+      .post('/api/rentals')
+      .set(bearer(billing))
+      .send({ customerId, assetIds: rental.items.map((i) => i.id), startsOn: rental.endsOn, endsOn: rental.endsOn });
     expect(clash.status).toBe(409);
     expect(clash.body.error.details.conflicts[0].bookingId).toBe(rental.bookingId);
   });
@@ -117,7 +160,10 @@ describe('a rental from quote to invoice', () => {
     expect(Date.parse(authorization.captureBefore) / 1000 - intent.created).toBe(7 * 24 * 3600);
     expect((await checkout(rental)).status).toBe(200);
     const mails = await mailTo('accounts@quillon.test');
-    expect(mails.at(-1)).toMatchObject({ subject: expect.stringContaining(rental.number), files: [`agreement-${rental.number}.pdf`, `certificates-${rental.number}.pdf`] });
+    expect(mails.at(-1)).toMatchObject({
+      subject: expect.stringContaining(rental.number),
+      files: [`agreement-${rental.number}.pdf`, `certificates-${rental.number}.pdf`],
+    });
   });
 
   it('comes back with a damaged SMR: the repair and tax are captured from the card authorization, the rest released', async () => {
@@ -131,11 +177,18 @@ describe('a rental from quote to invoice', () => {
     r = (await t.api.put(`/api/rentals/${rental.id}/charges/${r.charges[0].incidentId}`).set(bearer(billing)).send({ amountMinor: 18_000 })).body;
     // Worked by hand: repair 180.00 + 19 % = 214.20 to take from the 500.00 authorization.
     expect(r.settlement.extrasGrossMinor).toBe(21_420);
-    expect((await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(tech)).send({ amountMinor: 21_420, reason: 'SMR repair' })).status).toBe(403);
-    const captured = await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 21_420, reason: 'Dented SMR: re-coat and recertify' });
+    expect((await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(tech)).send({ amountMinor: 21_420, reason: 'SMR repair' })).status).toBe(
+      403,
+    );
+    const captured = await t.api
+      .post(`/api/rentals/${rental.id}/deposit/capture`)
+      .set(bearer(billing))
+      .send({ amountMinor: 21_420, reason: 'Dented SMR: re-coat and recertify' });
     expect(captured.status, JSON.stringify(captured.body)).toBe(200);
     expect(captured.body.deposit).toMatchObject({ state: 'captured', authorization: { capturedMinor: 21_420 } });
-    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE id = $1`, [captured.body.deposit.authorization.id]);
+    const [{ payment_intent_id }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE id = $1`, [
+      captured.body.deposit.authorization.id,
+    ]);
     // Provider reference (capture, amount_to_capture): the uncaptured rest is released.
     expect(await stripe.paymentIntents.retrieve(payment_intent_id)).toMatchObject({ status: 'succeeded', amount_received: 21_420, amount_capturable: 0 });
     const again = await t.api.post(`/api/rentals/${rental.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 100, reason: 'twice' });
@@ -145,13 +198,23 @@ describe('a rental from quote to invoice', () => {
   it('issues the invoice with a gapless number, a PDF and an e-mail; a credit note corrects it', async () => {
     const year = Number(todayIn('Europe/Berlin').slice(0, 4));
     // The next numbers after the demo's own invoices and credit notes of this year.
-    const [{ invoices, credits }] = await t.db.query(`SELECT count(*) FILTER (WHERE kind = 'invoice')::int AS invoices, count(*) FILTER (WHERE kind = 'credit_note')::int AS credits FROM invoices WHERE issued_on >= make_date($1, 1, 1)`, [year]);
+    const [{ invoices, credits }] = await t.db.query(
+      `SELECT count(*) FILTER (WHERE kind = 'invoice')::int AS invoices, count(*) FILTER (WHERE kind = 'credit_note')::int AS credits FROM invoices WHERE issued_on >= make_date($1, 1, 1)`,
+      [year],
+    );
     const invoiceNo = `${year}-${String(invoices + 1).padStart(4, '0')}`;
     const creditNo = `CN-${year}-${String(credits + 1).padStart(4, '0')}`;
     const issued = await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing));
     expect(issued.status, JSON.stringify(issued.body)).toBe(201);
     // 300.00 rental + 180.00 repair = 480.00; tax 91.20; total 571.20; 214.20 taken from the authorization → 357.00 due (worked by hand).
-    expect(issued.body).toMatchObject({ number: invoiceNo, subtotalMinor: 48_000, taxMinor: 9120, totalMinor: 57_120, depositCapturedMinor: 21_420, balanceMinor: 35_700 });
+    expect(issued.body).toMatchObject({
+      number: invoiceNo,
+      subtotalMinor: 48_000,
+      taxMinor: 9120,
+      totalMinor: 57_120,
+      depositCapturedMinor: 21_420,
+      balanceMinor: 35_700,
+    });
     expect((await t.api.post(`/api/rentals/${rental.id}/invoice`).set(bearer(billing))).status).toBe(409);
     const pdf = await t.api.get(`/api/rentals/${rental.id}/invoice.pdf`).set(bearer(billing)).buffer(true).parse(binaryBody);
     expect(pdf.headers['content-type']).toBe('application/pdf');
@@ -160,12 +223,18 @@ describe('a rental from quote to invoice', () => {
     expect(text).toContain('€357.00');
     // The firm's own details (demo settings) are printed, and kept on the invoice: a later change leaves it as issued.
     expect(text).toContain('Tax number WH-7781-0042');
-    await t.api.patch('/api/settings').set(bearer(owner)).send({ issuer: { address: 'Mill Yard 3, Wrenhallow', taxNumber: 'WH-0000-0001', paymentTerms: 'Within 30 days.' } });
+    await t.api
+      .patch('/api/settings')
+      .set(bearer(owner))
+      .send({ issuer: { address: 'Mill Yard 3, Wrenhallow', taxNumber: 'WH-0000-0001', paymentTerms: 'Within 30 days.' } });
     expect((await t.api.get(`/api/invoices/${issued.body.id}`).set(bearer(billing))).body.issuer).toMatchObject({ taxNumber: 'WH-7781-0042' });
     expect((await mailTo('accounts@quillon.test')).at(-1).files).toEqual([`invoice-${invoiceNo}.pdf`]);
     const tooMuch = await t.api.post(`/api/invoices/${issued.body.id}/credit-note`).set(bearer(billing)).send({ reason: 'Goodwill', amountMinor: 48_001 });
     expect(tooMuch.status).toBe(422);
-    const credit = await t.api.post(`/api/invoices/${issued.body.id}/credit-note`).set(bearer(billing)).send({ reason: 'Repair cost lower than estimated', amountMinor: 3000 });
+    const credit = await t.api
+      .post(`/api/invoices/${issued.body.id}/credit-note`)
+      .set(bearer(billing))
+      .send({ reason: 'Repair cost lower than estimated', amountMinor: 3000 });
     expect(credit.status).toBe(201);
     // 30.00 + 19 % = 35.70 credited.
     expect(credit.body).toMatchObject({ kind: 'credit_note', number: creditNo, correctsNumber: invoiceNo, totalMinor: 3570 });
@@ -174,13 +243,26 @@ describe('a rental from quote to invoice', () => {
     await expect(t.db.query(`UPDATE invoices SET total_minor = 0 WHERE id = $1`, [issued.body.id])).rejects.toThrow();
     // 357.00 due less the credit note's 35.70 = 321.30 outstanding; a transfer is recorded against it, never more than is owed.
     expect((await t.api.get(`/api/invoices/${issued.body.id}`).set(bearer(billing))).body).toMatchObject({ receivedMinor: 0, outstandingMinor: 32_130 });
-    const over = await t.api.post(`/api/invoices/${issued.body.id}/payments`).set(bearer(billing)).send({ amountMinor: 32_131, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' });
+    const over = await t.api
+      .post(`/api/invoices/${issued.body.id}/payments`)
+      .set(bearer(billing))
+      .send({ amountMinor: 32_131, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' });
     expect(over.status).toBe(422);
     expect(over.body.error.code).toBe('overpaid');
-    expect((await t.api.post(`/api/invoices/${issued.body.id}/payments`).set(bearer(tech)).send({ amountMinor: 100, receivedOn: '2027-02-03', reference: 'x y' })).status).toBe(403);
-    const paid = await t.api.post(`/api/invoices/${issued.body.id}/payments`).set(bearer(billing)).send({ amountMinor: 32_130, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' });
+    expect(
+      (await t.api.post(`/api/invoices/${issued.body.id}/payments`).set(bearer(tech)).send({ amountMinor: 100, receivedOn: '2027-02-03', reference: 'x y' }))
+        .status,
+    ).toBe(403);
+    const paid = await t.api
+      .post(`/api/invoices/${issued.body.id}/payments`)
+      .set(bearer(billing))
+      .send({ amountMinor: 32_130, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' });
     expect(paid.status).toBe(201);
-    expect(paid.body).toMatchObject({ receivedMinor: 32_130, outstandingMinor: 0, payments: [expect.objectContaining({ amountMinor: 32_130, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' })] });
+    expect(paid.body).toMatchObject({
+      receivedMinor: 32_130,
+      outstandingMinor: 0,
+      payments: [expect.objectContaining({ amountMinor: 32_130, receivedOn: '2027-02-03', reference: 'Transfer QTR-8812' })],
+    });
     await expect(t.db.query(`DELETE FROM invoice_payments`)).rejects.toThrow();
     const csv = await t.api.get('/api/invoices/export.csv').set(bearer(billing));
     expect(csv.text.split('\r\n')[0]).toContain('number,kind,issued_on');
@@ -196,13 +278,23 @@ describe('when the provider misbehaves', () => {
     expect((await giveBack(r)).status).toBe(200);
     return r;
   }
-  const intentOf = async (r: RentalView) => (await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND kind = 'authorization' AND state <> 'declined' ORDER BY created_at DESC LIMIT 1`, [r.id]))[0].payment_intent_id as string;
+  const intentOf = async (r: RentalView) =>
+    (
+      await t.db.query(
+        `SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND kind = 'authorization' AND state <> 'declined' ORDER BY created_at DESC LIMIT 1`,
+        [r.id],
+      )
+    )[0].payment_intent_id as string;
   const captureCharges = async (pi: string) => (await stripe.charges.list({ payment_intent: pi })).data.filter((c) => c.captured);
 
   it('a capture whose reply is lost is retried under the same key: captured exactly once', async () => {
     const r = await returnedWithAuthorization();
     // The fake applies the capture but withholds its reply past the SDK's 2 s timeout — once.
-    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 1, hangMs: 10_000 }) });
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 1, hangMs: 10_000 }),
+    });
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 5000, reason: 'Scratched case' });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     const pi = await stripe.paymentIntents.retrieve(await intentOf(r));
@@ -210,9 +302,13 @@ describe('when the provider misbehaves', () => {
     expect(await captureCharges(pi.id)).toHaveLength(1);
   });
 
-  it('when every attempt times out the clerk is told to retry; the provider\'s event tells the truth and nothing is captured twice', async () => {
+  it("when every attempt times out the clerk is told to retry; the provider's event tells the truth and nothing is captured twice", async () => {
     const r = await returnedWithAuthorization();
-    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 3, hangMs: 10_000 }) });
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: 'timeout', times: 3, hangMs: 10_000 }),
+    });
     const failed = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 7000, reason: 'Late by two days' });
     expect(failed.status).toBe(502);
     expect(failed.body.error.code).toBe('payment_unavailable');
@@ -228,7 +324,11 @@ describe('when the provider misbehaves', () => {
   it('a provider answering 500 captures nothing; the clerk is told to try again, and the retry captures once', async () => {
     const r = await returnedWithAuthorization();
     // Three faults: the first call and both of the SDK's retries fail, nothing applied (provider reference: api_error).
-    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: '500', times: 3 }) });
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ path: '/v1/payment_intents/:id/capture', mode: '500', times: 3 }),
+    });
     const failed = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 4000, reason: 'Cleaning' });
     expect(failed.status).toBe(502);
     expect(failed.body.error.code).toBe('payment_unavailable');
@@ -244,7 +344,11 @@ describe('when the provider misbehaves', () => {
     const r = await returnedWithAuthorization();
     const url = fake.store.settings.webhookUrl;
     fake.store.settings.webhookUrl = undefined; // the event is lost on the way
-    await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }) });
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }),
+    });
     fake.store.settings.webhookUrl = url;
     expect((await view(r)).deposit.state).toBe('authorized');
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/capture`).set(bearer(billing)).send({ amountMinor: 6000, reason: 'Late by three days' });
@@ -287,8 +391,20 @@ describe('when the provider misbehaves', () => {
 });
 
 describe('payment webhooks', () => {
-  const post = (payload: string, signature: string) => t.api.post('/api/webhooks/payments').set('Content-Type', 'application/json').set('Stripe-Signature', signature).send(payload);
-  const event = (id: string) => JSON.stringify({ id, object: 'event', type: 'customer.updated', api_version: '2026-10-28.endive', created: Math.floor(Date.now() / 1000), data: { object: { id: 'cus_x', object: 'customer' } }, livemode: false, pending_webhooks: 1, request: { id: null, idempotency_key: null } });
+  const post = (payload: string, signature: string) =>
+    t.api.post('/api/webhooks/payments').set('Content-Type', 'application/json').set('Stripe-Signature', signature).send(payload);
+  const event = (id: string) =>
+    JSON.stringify({
+      id,
+      object: 'event',
+      type: 'customer.updated',
+      api_version: '2026-10-28.endive',
+      created: Math.floor(Date.now() / 1000),
+      data: { object: { id: 'cus_x', object: 'customer' } },
+      livemode: false,
+      pending_webhooks: 1,
+      request: { id: null, idempotency_key: null },
+    });
 
   it('verifies the signature with the SDK; tampered or stale deliveries are refused', async () => {
     const body = event('evt_sig_1');
@@ -317,14 +433,36 @@ describe('payment webhooks', () => {
 
   describe('a signed claim about a card authorization is checked with the provider first', () => {
     const claim = (id: string, type: string, intent: string) =>
-      JSON.stringify({ id, object: 'event', type, api_version: '2026-10-28.endive', created: Math.floor(Date.now() / 1000), data: { object: { id: intent, object: 'payment_intent', status: type === 'payment_intent.canceled' ? 'canceled' : 'succeeded', amount_received: 50_000, cancellation_reason: 'automatic' } }, livemode: false, pending_webhooks: 1, request: { id: null, idempotency_key: null } });
+      JSON.stringify({
+        id,
+        object: 'event',
+        type,
+        api_version: '2026-10-28.endive',
+        created: Math.floor(Date.now() / 1000),
+        data: {
+          object: {
+            id: intent,
+            object: 'payment_intent',
+            status: type === 'payment_intent.canceled' ? 'canceled' : 'succeeded',
+            amount_received: 50_000,
+            cancellation_reason: 'automatic',
+          },
+        },
+        livemode: false,
+        pending_webhooks: 1,
+        request: { id: null, idempotency_key: null },
+      });
     const send = (body: string) => post(body, signPayload(body, WEBHOOK_SECRET, Math.floor(Date.now() / 1000)));
-    const outcomeOf = async (id: string) => (await t.db.query(`SELECT outcome FROM payment_events WHERE event_id = $1`, [id]))[0]?.outcome as string | undefined;
+    const outcomeOf = async (id: string) =>
+      (await t.db.query(`SELECT outcome FROM payment_events WHERE event_id = $1`, [id]))[0]?.outcome as string | undefined;
 
     it('a cancellation or capture the provider does not confirm changes nothing, and is recorded as such', async () => {
       const r = await newRental(3);
       expect((await takeDeposit(r)).status).toBe(200);
-      const [{ payment_intent_id: intent }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND state = 'authorized'`, [r.id]);
+      const [{ payment_intent_id: intent }] = await t.db.query(
+        `SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND state = 'authorized'`,
+        [r.id],
+      );
       expect((await send(claim('evt_forged_cancel', 'payment_intent.canceled', intent))).status).toBe(200);
       expect((await send(claim('evt_forged_capture', 'payment_intent.succeeded', intent))).status).toBe(200);
       expect(await outcomeOf('evt_forged_cancel')).toMatch(/^not confirmed: .* is requires_capture, not canceled; nothing changed$/);
@@ -337,14 +475,21 @@ describe('payment webhooks', () => {
     it('when the provider cannot be asked, the delivery is refused (502) and nothing is recorded, so its retry counts', async () => {
       const r = await newRental(3);
       expect((await takeDeposit(r)).status).toBe(200);
-      const [{ payment_intent_id: intent }] = await t.db.query(`SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND state = 'authorized'`, [r.id]);
+      const [{ payment_intent_id: intent }] = await t.db.query(
+        `SELECT payment_intent_id FROM deposit_authorizations WHERE rental_id = $1 AND state = 'authorized'`,
+        [r.id],
+      );
       // The provider really cancels it, but its own event is lost on the way; a delivery of ours stands in for it.
       const url = fake.store.settings.webhookUrl;
       fake.store.settings.webhookUrl = undefined;
       await stripe.paymentIntents.cancel(intent, {}, { idempotencyKey: `test:${intent}:cancel` });
       fake.store.settings.webhookUrl = url;
       const fault = { path: '/v1/payment_intents/:id', method: 'GET', mode: '500', times: 10 };
-      await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(fault) });
+      await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify(fault),
+      });
       const body = claim('evt_unasked_cancel', 'payment_intent.canceled', intent);
       const refused = await send(body);
       await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'DELETE' });
@@ -360,7 +505,11 @@ describe('payment webhooks', () => {
     await takeDeposit(r);
     await checkout(r);
     // Eight days later at the provider: past the 7-day window, the authorization is released and the event delivered.
-    await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }) });
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ advanceSeconds: 8 * 24 * 3600 }),
+    });
     await eventually(async () => (await view(r)).deposit.state).toBe('lapsed');
     const mails = await mailTo('billing@demo.test');
     expect(mails.at(-1).subject).toBe(`Deposit authorization lapsed: rental ${r.number}`);
@@ -368,7 +517,8 @@ describe('payment webhooks', () => {
 });
 
 describe('the daily renewal of card authorizations near lapse', () => {
-  const runRenewals = (now: Date) => t.routines.definitions.find((j) => j.name === 'deposit-renewals')!.run({ db: t.db, now, trigger: 'manual', organizationId: null });
+  const runRenewals = (now: Date) =>
+    t.routines.definitions.find((j) => j.name === 'deposit-renewals')!.run({ db: t.db, now, trigger: 'manual', organizationId: null });
 
   it('renews on the saved card (merchant-initiated: Visa 4 days 18 hours) and lets the old authorization go', async () => {
     const r = await newRental(20);
@@ -394,7 +544,11 @@ describe('the daily renewal of card authorizations near lapse', () => {
     await takeDeposit(r);
     await checkout(r);
     const authorization = (await view(r)).deposit.authorization!;
-    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ path: '/v1/payment_intents', method: 'POST', mode: 'decline', times: 10 }) });
+    await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ path: '/v1/payment_intents', method: 'POST', mode: 'decline', times: 10 }),
+    });
     const summary = await runRenewals(new Date(Date.parse(authorization.captureBefore!) - 24 * 3600_000));
     await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, { method: 'DELETE' });
     expect(summary.refused).toBeGreaterThanOrEqual(1);
@@ -407,12 +561,19 @@ describe('the daily renewal of card authorizations near lapse', () => {
 
 describe('invoice numbers under concurrency', () => {
   it('50 invoices issued at once get 50 consecutive numbers, no gap, no repeat', async () => {
-    await t.api.patch('/api/settings').set(bearer(owner)).send({ depositPolicy: { percent: 0, minMinor: 0, maxMinor: 0 } });
-    const [smr] = (await t.api.get('/api/availability').query({ type: 'smr', startsOn: '2025-01-01', endsOn: '2025-03-31', limit: 1 }).set(bearer(billing))).body.items;
+    await t.api
+      .patch('/api/settings')
+      .set(bearer(owner))
+      .send({ depositPolicy: { percent: 0, minMinor: 0, maxMinor: 0 } });
+    const [smr] = (await t.api.get('/api/availability').query({ type: 'smr', startsOn: '2025-01-01', endsOn: '2025-03-31', limit: 1 }).set(bearer(billing)))
+      .body.items;
     const rentals: RentalView[] = [];
     for (let i = 0; i < 50; i += 1) {
       const on = new Date(Date.UTC(2025, 0, 1 + i)).toISOString().slice(0, 10);
-      const res = await t.api.post('/api/rentals').set(bearer(billing)).send({ customerId, assetIds: [smr.id], startsOn: on, endsOn: on });
+      const res = await t.api
+        .post('/api/rentals')
+        .set(bearer(billing))
+        .send({ customerId, assetIds: [smr.id], startsOn: on, endsOn: on });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
       expect((await checkout(res.body)).status).toBe(200);
       expect((await giveBack(res.body)).status).toBe(200);

@@ -22,17 +22,20 @@ describe('CSV export and import (RFC 4180)', () => {
 
   it('round-trips commas, double quotes and line breaks inside fields, read back by an independent parser', async () => {
     const notes = 'Seat "B" only, never the\r\nmagnetic nest; wipe with lint-free cloth';
-    const created = await t.api.post('/api/assets').set(bearer(manager)).send({
-      type: 'tip',
-      assetTag: 'TIP-CSV1',
-      serialNumber: 'SN,1"2',
-      manufacturer: 'Thistlegate, "Works"',
-      rfidTag: 'E2:C5:01',
-      notes,
-      location: '=SUM(A1)',
-      calibration: { required: true, intervalMonths: 12, lastCalibratedOn: '2026-03-31' },
-      specs: { lengthMm: 80.5, positions: ['vertical', 'horizontal'] },
-    });
+    const created = await t.api
+      .post('/api/assets')
+      .set(bearer(manager))
+      .send({
+        type: 'tip',
+        assetTag: 'TIP-CSV1',
+        serialNumber: 'SN,1"2',
+        manufacturer: 'Thistlegate, "Works"',
+        rfidTag: 'E2:C5:01',
+        notes,
+        location: '=SUM(A1)',
+        calibration: { required: true, intervalMonths: 12, lastCalibratedOn: '2026-03-31' },
+        specs: { lengthMm: 80.5, positions: ['vertical', 'horizontal'] },
+      });
     expect(created.status).toBe(201);
     const res = await t.api.get('/api/assets/export.csv?q=TIP-CSV1').set(bearer(manager));
     expect(res.headers['content-type']).toMatch(/text\/csv/);
@@ -41,7 +44,14 @@ describe('CSV export and import (RFC 4180)', () => {
     expect(res.text).toContain('"SN,1""2"');
     const records = parseCsv(res.text, { columns: true }) as Record<string, string>[];
     expect(records).toHaveLength(1);
-    expect(records[0]).toMatchObject({ assetTag: 'TIP-CSV1', serialNumber: 'SN,1"2', manufacturer: 'Thistlegate, "Works"', notes, 'spec.positions': 'vertical;horizontal', dueOn: '2027-03-31' });
+    expect(records[0]).toMatchObject({
+      assetTag: 'TIP-CSV1',
+      serialNumber: 'SN,1"2',
+      manufacturer: 'Thistlegate, "Works"',
+      notes,
+      'spec.positions': 'vertical;horizontal',
+      dueOn: '2027-03-31',
+    });
     // A cell a spreadsheet would run as a formula is written as text.
     expect(records[0].location).toBe("'=SUM(A1)");
 
@@ -51,13 +61,37 @@ describe('CSV export and import (RFC 4180)', () => {
     expect(imported.body).toMatchObject({ valid: true, created: 1 });
     const copy = (await t.api.get('/api/assets?q=TIP-CSV1').set(bearer(otherOwner))).body.items[0];
     const original = created.body;
-    for (const key of ['type', 'assetTag', 'serialNumber', 'manufacturer', 'rfidTag', 'notes', 'location', 'specs', 'calibration']) expect(copy[key], key).toEqual(original[key]);
+    for (const key of ['type', 'assetTag', 'serialNumber', 'manufacturer', 'rfidTag', 'notes', 'location', 'specs', 'calibration'])
+      expect(copy[key], key).toEqual(original[key]);
   });
 
   it('previews a file without writing, then imports it in one go, creating kits by name', async () => {
     const csv = [
       importColumns.join(','),
-      ['smr', 'SMR-I01', 'S-I01', 'Carrow & Finch', 'Retro 1.5', '', '', 'Shelf A', '160000', '', 'yes', '24', 'Wrenhallow Gauge House', '2026-02-01', 'Kit Import', '', '', '', '', '', '', '38.1'].join(','),
+      [
+        'smr',
+        'SMR-I01',
+        'S-I01',
+        'Carrow & Finch',
+        'Retro 1.5',
+        '',
+        '',
+        'Shelf A',
+        '160000',
+        '',
+        'yes',
+        '24',
+        'Wrenhallow Gauge House',
+        '2026-02-01',
+        'Kit Import',
+        '',
+        '',
+        '',
+        '',
+        '',
+        '',
+        '38.1',
+      ].join(','),
       ['battery', 'BAT-I01', 'S-I02', '', '', '', '', '', '', '', 'no', '', '', '', 'Kit Import', '', '', '14.4', '6.8', '12', 'no'].join(','),
     ].join('\n');
     const before = (await t.api.get('/api/assets?limit=1').set(bearer(manager))).body.total;
@@ -87,7 +121,17 @@ describe('CSV export and import (RFC 4180)', () => {
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('import_invalid');
     const problems = res.body.error.details.errors.map((e: { row: number; column: string }) => `${e.row}:${e.column}`);
-    expect(problems).toEqual(expect.arrayContaining(['2:serialNumber', '2:spec.diameterMm', '3:calibrationRequired', '3:spec.lengthMm', '3:spec.positions', '4:assetTag', '5:assetTag']));
+    expect(problems).toEqual(
+      expect.arrayContaining([
+        '2:serialNumber',
+        '2:spec.diameterMm',
+        '3:calibrationRequired',
+        '3:spec.lengthMm',
+        '3:spec.positions',
+        '4:assetTag',
+        '5:assetTag',
+      ]),
+    );
     expect(problems).not.toContain('1:assetTag');
     expect((await t.api.get('/api/assets?limit=1').set(bearer(manager))).body.total).toBe(before);
   });

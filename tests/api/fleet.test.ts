@@ -9,7 +9,9 @@ let billing: string;
 let otherOwner: string;
 beforeAll(async () => {
   t = await createTestApp();
-  [manager, tech, billing, otherOwner] = await Promise.all(['manager@demo.test', 'tech@demo.test', 'billing@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)));
+  [manager, tech, billing, otherOwner] = await Promise.all(
+    ['manager@demo.test', 'tech@demo.test', 'billing@demo.test', 'owner@other.test'].map((e) => t.tokenFor(e)),
+  );
 });
 afterAll(() => t.close());
 
@@ -23,7 +25,11 @@ const tip = (tag: string, rfid: string) => ({
   calibration: { required: true, intervalMonths: 12, lastCalibratedOn: '2026-01-31' },
   specs: { lengthMm: 150, positions: ['vertical'] },
 });
-const post = (token: string, body: unknown) => t.api.post('/api/assets').set(bearer(token)).send(body as object);
+const post = (token: string, body: unknown) =>
+  t.api
+    .post('/api/assets')
+    .set(bearer(token))
+    .send(body as object);
 
 describe('registering assets', () => {
   it('creates a tip with its plan, computes the due date, and logs who did it', async () => {
@@ -40,12 +46,28 @@ describe('registering assets', () => {
 
   it.each([
     ['a tip without length or positions', { ...tip('TIP-X1', 'E2:X1'), specs: {} }, ['specs.lengthMm', 'specs.positions']],
-    ['a battery with a negative capacity', { type: 'battery', assetTag: 'BAT-X1', serialNumber: 'S1', specs: { nominalVoltageV: 14.4, ratedCapacityAh: -2 } }, ['specs.ratedCapacityAh']],
+    [
+      'a battery with a negative capacity',
+      { type: 'battery', assetTag: 'BAT-X1', serialNumber: 'S1', specs: { nominalVoltageV: 14.4, ratedCapacityAh: -2 } },
+      ['specs.ratedCapacityAh'],
+    ],
     ['an SMR with a text diameter', { type: 'smr', assetTag: 'SMR-X1', serialNumber: 'S2', specs: { diameterMm: '1.5 inch' } }, ['specs.diameterMm']],
-    ['a scale bar without its certified length', { type: 'scale_bar', assetTag: 'BAR-X1', serialNumber: 'S3', specs: { expansionPpmPerK: 0.5 } }, ['specs.certifiedLengthMm']],
-    ['an RFID tag on a battery', { type: 'battery', assetTag: 'BAT-X2', serialNumber: 'S4', rfidTag: 'E2:01', specs: { nominalVoltageV: 14.4, ratedCapacityAh: 6 } }, ['rfidTag']],
+    [
+      'a scale bar without its certified length',
+      { type: 'scale_bar', assetTag: 'BAR-X1', serialNumber: 'S3', specs: { expansionPpmPerK: 0.5 } },
+      ['specs.certifiedLengthMm'],
+    ],
+    [
+      'an RFID tag on a battery',
+      { type: 'battery', assetTag: 'BAT-X2', serialNumber: 'S4', rfidTag: 'E2:01', specs: { nominalVoltageV: 14.4, ratedCapacityAh: 6 } },
+      ['rfidTag'],
+    ],
     ['firmware on a nest', { type: 'nest', assetTag: 'NST-X1', serialNumber: 'S5', firmwareVersion: '1.0' }, ['firmwareVersion']],
-    ['a plan without an interval', { type: 'tracker', assetTag: 'TRK-X1', serialNumber: 'S6', calibration: { required: true } }, ['calibration.intervalMonths']],
+    [
+      'a plan without an interval',
+      { type: 'tracker', assetTag: 'TRK-X1', serialNumber: 'S6', calibration: { required: true } },
+      ['calibration.intervalMonths'],
+    ],
     ['an unknown type and no serial', { type: 'laser', assetTag: 'X-1' }, ['type', 'serialNumber']],
     ['an unknown spec field', { type: 'smr', assetTag: 'SMR-X2', serialNumber: 'S7', specs: { diameterMm: 38.1, colour: 'red' } }, ['specs']],
   ])('refuses %s with 400 naming the fields', async (_name, body, fields) => {
@@ -79,11 +101,17 @@ describe('registering assets', () => {
 describe('editing and retiring', () => {
   it('edits fields, recomputes the due date, re-checks specs and logs the change', async () => {
     const created = (await post(manager, tip('TIP-E01', 'E2:EE:01'))).body;
-    const res = await t.api.patch(`/api/assets/${created.id}`).set(bearer(manager)).send({ location: 'Van 2', calibration: { required: true, intervalMonths: 6, lastCalibratedOn: '2026-08-31' } });
+    const res = await t.api
+      .patch(`/api/assets/${created.id}`)
+      .set(bearer(manager))
+      .send({ location: 'Van 2', calibration: { required: true, intervalMonths: 6, lastCalibratedOn: '2026-08-31' } });
     expect(res.status).toBe(200);
     expect(res.body.location).toBe('Van 2');
     expect(res.body.calibration.dueOn).toBe('2027-02-28'); // month-end clamp
-    const bad = await t.api.patch(`/api/assets/${created.id}`).set(bearer(manager)).send({ specs: { lengthMm: 0, positions: ['diagonal'] } });
+    const bad = await t.api
+      .patch(`/api/assets/${created.id}`)
+      .set(bearer(manager))
+      .send({ specs: { lengthMm: 0, positions: ['diagonal'] } });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.details.fields).sort()).toEqual(['specs.lengthMm', 'specs.positions.0']);
     expect((await t.api.patch(`/api/assets/${created.id}`).set(bearer(manager)).send({ type: 'battery' })).status).toBe(400);
@@ -95,7 +123,12 @@ describe('editing and retiring', () => {
 
   it('retires an asset (never deletes it), takes it out of its kit, and freezes its record', async () => {
     const a = (await post(manager, tip('TIP-R01', 'E2:RR:01'))).body;
-    const kit = (await t.api.post('/api/kits').set(bearer(manager)).send({ name: 'Retire test kit', memberIds: [a.id] })).body;
+    const kit = (
+      await t.api
+        .post('/api/kits')
+        .set(bearer(manager))
+        .send({ name: 'Retire test kit', memberIds: [a.id] })
+    ).body;
     expect(kit.memberCount).toBe(1);
     expect((await t.api.post(`/api/assets/${a.id}/retire`).set(bearer(manager)).send({ reason: '' })).status).toBe(400);
     const retired = await t.api.post(`/api/assets/${a.id}/retire`).set(bearer(manager)).send({ reason: 'Stylus ball chipped beyond repair' });
@@ -131,7 +164,10 @@ describe('finding assets', () => {
     for (const state of ['overdue', 'due_soon', 'current', 'not_required']) {
       const res = (await t.api.get(`/api/assets?calibration=${state}&limit=500`).set(bearer(manager))).body;
       expect(res.total, state).toBeGreaterThan(0);
-      expect(res.items.every((a: { calibration: { state: string } }) => a.calibration.state === state), state).toBe(true);
+      expect(
+        res.items.every((a: { calibration: { state: string } }) => a.calibration.state === state),
+        state,
+      ).toBe(true);
     }
     const both = (await t.api.get('/api/assets?calibration=overdue,due_soon&limit=1').set(bearer(manager))).body.total;
     const overdue = (await t.api.get('/api/assets?calibration=overdue&limit=1').set(bearer(manager))).body.total;
@@ -141,7 +177,9 @@ describe('finding assets', () => {
     expect(search.total).toBeGreaterThan(0);
     expect(search.items.every((a: { manufacturer: string }) => a.manufacturer === 'Carrow & Finch')).toBe(true);
     expect((await t.api.get('/api/assets?q=100%25').set(bearer(manager))).body.total).toBe(0);
-    const byDue = (await t.api.get('/api/assets?sort=dueOn&calibration=current,due_soon&limit=500').set(bearer(manager))).body.items.map((a: { calibration: { dueOn: string } }) => a.calibration.dueOn);
+    const byDue = (await t.api.get('/api/assets?sort=dueOn&calibration=current,due_soon&limit=500').set(bearer(manager))).body.items.map(
+      (a: { calibration: { dueOn: string } }) => a.calibration.dueOn,
+    );
     expect(byDue).toEqual([...byDue].sort());
     const page2 = (await t.api.get('/api/assets?limit=10&offset=10').set(bearer(manager))).body;
     expect(page2.items[0].assetTag).toBe(all.items[10].assetTag);
@@ -163,7 +201,7 @@ describe('finding assets', () => {
 });
 
 describe('labels and records', () => {
-  it("prints a label whose QR code (decoded by MuPDF + jsQR) looks up the same asset, with tag, serial and due date", async () => {
+  it('prints a label whose QR code (decoded by MuPDF + jsQR) looks up the same asset, with tag, serial and due date', async () => {
     const a = (await post(manager, tip('TIP-Q01', 'E2:QQ:01'))).body;
     const res = await t.api.get(`/api/assets/${a.id}/label.pdf`).set(bearer(tech)).buffer(true);
     expect(res.status).toBe(200);
@@ -204,21 +242,33 @@ describe('kits', () => {
   it('creates a kit, refuses an asset that is already in another kit (409 naming it), and reports readiness', async () => {
     const a = (await post(manager, { ...tip('TIP-K01', 'E2:KK:01'), calibration: { required: false } })).body;
     const b = (await post(manager, { type: 'case', assetTag: 'CASE-K01', serialNumber: 'CK1' })).body;
-    const kit = await t.api.post('/api/kits').set(bearer(manager)).send({ name: 'Kit Test One', memberIds: [a.id, b.id] });
+    const kit = await t.api
+      .post('/api/kits')
+      .set(bearer(manager))
+      .send({ name: 'Kit Test One', memberIds: [a.id, b.id] });
     expect(kit.status).toBe(201);
     expect(kit.body).toMatchObject({ memberCount: 2, readiness: { ready: true, reasons: [] } });
     expect(kit.body.members.map((m: { assetTag: string }) => m.assetTag).sort()).toEqual(['CASE-K01', 'TIP-K01']);
 
-    const clash = await t.api.post('/api/kits').set(bearer(manager)).send({ name: 'Kit Test Two', memberIds: [a.id] });
+    const clash = await t.api
+      .post('/api/kits')
+      .set(bearer(manager))
+      .send({ name: 'Kit Test Two', memberIds: [a.id] });
     expect(clash.status).toBe(409);
     expect(clash.body.error.details.conflicts).toEqual([{ assetId: a.id, assetTag: 'TIP-K01', kitId: kit.body.id, kitName: 'Kit Test One' }]);
     expect((await t.api.post('/api/kits').set(bearer(manager)).send({ name: 'Kit Test One' })).status).toBe(409);
 
-    await t.api.patch(`/api/assets/${a.id}`).set(bearer(manager)).send({ calibration: { required: true, intervalMonths: 12, lastCalibratedOn: '2020-01-01' } });
+    await t.api
+      .patch(`/api/assets/${a.id}`)
+      .set(bearer(manager))
+      .send({ calibration: { required: true, intervalMonths: 12, lastCalibratedOn: '2020-01-01' } });
     const after = (await t.api.get(`/api/kits/${kit.body.id}`).set(bearer(manager))).body;
     expect(after.readiness).toEqual({ ready: false, reasons: [{ assetId: a.id, assetTag: 'TIP-K01', reason: 'calibration_overdue' }] });
 
-    const renamed = await t.api.patch(`/api/kits/${kit.body.id}`).set(bearer(manager)).send({ name: 'Kit Test Renamed', memberIds: [b.id] });
+    const renamed = await t.api
+      .patch(`/api/kits/${kit.body.id}`)
+      .set(bearer(manager))
+      .send({ name: 'Kit Test Renamed', memberIds: [b.id] });
     expect(renamed.body).toMatchObject({ name: 'Kit Test Renamed', memberCount: 1, readiness: { ready: true } });
     expect((await t.api.get(`/api/assets/${a.id}`).set(bearer(manager))).body.kit).toBeNull();
     expect((await t.api.post('/api/kits').set(bearer(tech)).send({ name: 'Tech kit' })).status).toBe(403);

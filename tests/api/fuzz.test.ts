@@ -4,7 +4,21 @@ import type { Server } from 'node:http';
 import { PDFDocument } from 'pdf-lib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { capabilitiesByRole, roles, type Capability, type Role } from '../../shared/auth/roles';
-import { breakages, concrete, fresh, isOptional, jsonWithRaw, leafPaths, queryBreakages, sample, withAt, without, type Breakage, type IdPool, type JsonSchema } from '../support/fuzz-values';
+import {
+  breakages,
+  concrete,
+  fresh,
+  isOptional,
+  jsonWithRaw,
+  leafPaths,
+  queryBreakages,
+  sample,
+  withAt,
+  without,
+  type Breakage,
+  type IdPool,
+  type JsonSchema,
+} from '../support/fuzz-values';
 import { createTestApp, type TestApp } from '../support/test-app';
 
 /**
@@ -21,8 +35,18 @@ type Finding = { what: string; status: number; snippet: string };
 const people: Record<Role, string> = { owner: 'owner@demo.test', manager: 'manager@demo.test', technician: 'tech@demo.test', billing: 'billing@demo.test' };
 /** Which list a path segment or id field draws its records from. */
 const listOfField: Record<string, string> = {
-  assetId: 'assets', memberId: 'assets', probeId: 'assets', scaleBarId: 'assets', kitId: 'kits', jobId: 'jobs', rentalId: 'rentals',
-  bookingId: 'bookings', customerId: 'customers', leadTechnicianId: 'users', incidentId: 'incidents', photoId: 'photos',
+  assetId: 'assets',
+  memberId: 'assets',
+  probeId: 'assets',
+  scaleBarId: 'assets',
+  kitId: 'kits',
+  jobId: 'jobs',
+  rentalId: 'rentals',
+  bookingId: 'bookings',
+  customerId: 'customers',
+  leadTechnicianId: 'users',
+  incidentId: 'incidents',
+  photoId: 'photos',
 };
 const lists = ['assets', 'kits', 'incidents', 'bookings', 'jobs', 'customers', 'rate-cards', 'rentals', 'invoices', 'lab-trips', 'impact-reviews', 'checks'];
 const UNKNOWN_ID = '5f0c6a8e-2b7d-4c1e-9a3f-8d2e6b1c0a94';
@@ -78,10 +102,23 @@ async function probe(what: string, s: Sent, missing = false) {
 }
 
 function rolesFor(access: string): { role: Role | 'anonymous'; full: boolean }[] {
-  if (access === 'public') return [{ role: 'owner', full: true }, { role: 'anonymous', full: false }];
-  if (access === 'signed-in') return [{ role: 'owner', full: true }, { role: 'technician', full: false }];
+  if (access === 'public')
+    return [
+      { role: 'owner', full: true },
+      { role: 'anonymous', full: false },
+    ];
+  if (access === 'signed-in')
+    return [
+      { role: 'owner', full: true },
+      { role: 'technician', full: false },
+    ];
   const other = roles.find((r) => r !== 'owner' && capabilitiesByRole[r].includes(access as Capability));
-  return other ? [{ role: 'owner', full: true }, { role: other, full: false }] : [{ role: 'owner', full: true }];
+  return other
+    ? [
+        { role: 'owner', full: true },
+        { role: other, full: false },
+      ]
+    : [{ role: 'owner', full: true }];
 }
 
 /** Path with its `{params}` filled: each param from its list, or the replacement for `which`. */
@@ -143,8 +180,13 @@ async function acceptedBody(op: Operation, schema: JsonSchema, send1: (body: unk
   for (let attempt = 1; attempt <= 4; attempt++) {
     const res = await send1(body, attempt === 1 ? 'valid body' : `valid body (try ${attempt})`);
     if (res.status < 300) return { body: fresh(body), passed: true };
-    let drop = fieldsIn(res.text).map((f) => f.split('.')).filter((p) => isOptional(schema, p));
-    if (!drop.length && res.status === 422) drop = Object.entries(concrete(schema).properties ?? {}).filter(([k, v]) => concrete(v).format === 'uuid' && isOptional(schema, [k])).map(([k]) => [k]);
+    let drop = fieldsIn(res.text)
+      .map((f) => f.split('.'))
+      .filter((p) => isOptional(schema, p));
+    if (!drop.length && res.status === 422)
+      drop = Object.entries(concrete(schema).properties ?? {})
+        .filter(([k, v]) => concrete(v).format === 'uuid' && isOptional(schema, [k]))
+        .map(([k]) => [k]);
     const next = drop.reduce((b, p) => without(b, p), body);
     if (JSON.stringify(next) === JSON.stringify(body)) return { body: fresh(body), passed: false };
     body = fresh(next);
@@ -174,13 +216,23 @@ async function fuzzWrite(op: Operation, token: string | undefined, full: boolean
     const junk = new Blob([Buffer.from([0, 0xff, 0xd8, 0x00, 0x01])], { type: 'application/pdf' });
     await probe(tag('junk file'), { method: op.method, url, token, body: form(fresh(accepted.body), junk) });
     await probe(tag('no file'), { method: op.method, url, token, body: form(fresh(accepted.body), null) });
-    await probe(tag('truncated multipart'), { method: op.method, url, token, body: '--x\r\nContent-Disposition: form-data; name="a"\r\n\r\nb', contentType: 'multipart/form-data; boundary=x' });
+    await probe(tag('truncated multipart'), {
+      method: op.method,
+      url,
+      token,
+      body: '--x\r\nContent-Disposition: form-data; name="a"\r\n\r\nb',
+      contentType: 'multipart/form-data; boundary=x',
+    });
     await probe(tag('multipart without boundary'), { method: op.method, url, token, body: 'abc', contentType: 'multipart/form-data' });
     for (const { path, schema: leaf } of leafPaths(schema, 1).filter((l) => !isFile(l.schema))) {
       for (const b of breakages(leaf, path.at(-1)!, idPool).slice(0, full ? undefined : 3)) {
         if ('raw' in b) continue;
         if (typeof b.value === 'string' && b.value.length > 100_000) continue; // the form's field size limit answers these
-        await probe(tag(`${path.join('.')} = ${b.label}`), { method: op.method, url, token, body: form(withAt(fresh(accepted.body), path, b.value)) }, expects404(accepted, path, b));
+        await probe(
+          tag(`${path.join('.')} = ${b.label}`),
+          { method: op.method, url, token, body: form(withAt(fresh(accepted.body), path, b.value)) },
+          expects404(accepted, path, b),
+        );
       }
     }
     return { passed: accepted.passed, again: () => ({ body: form(fresh(accepted.body)) }) };
@@ -199,13 +251,15 @@ async function fuzzWrite(op: Operation, token: string | undefined, full: boolean
       ['JSON instead', '{}', 'application/json'],
     ];
     for (const [label, body, type] of cases) {
-      for (const mode of full ? ['preview', 'commit'] : ['preview']) await probe(tag(`${label} (${mode})`), { method: op.method, url: `${url}?mode=${mode}`, token, body, contentType: type });
+      for (const mode of full ? ['preview', 'commit'] : ['preview'])
+        await probe(tag(`${label} (${mode})`), { method: op.method, url: `${url}?mode=${mode}`, token, body, contentType: type });
     }
     return { passed: false, again: () => ({}) };
   }
 
   const accepted = await acceptedBody(op, schema, (body, label) => probe(tag(label), { method: op.method, url, token, ...(op.body ? json(body) : {}) }));
-  for (const b of full ? BODY_LEVEL : BODY_LEVEL.slice(0, 3)) await probe(tag(b.label), { method: op.method, url, token, body: b.raw, contentType: b.type ?? 'application/json' });
+  for (const b of full ? BODY_LEVEL : BODY_LEVEL.slice(0, 3))
+    await probe(tag(b.label), { method: op.method, url, token, body: b.raw, contentType: b.type ?? 'application/json' });
   const again = () => (op.body ? json(fresh(accepted.body)) : {});
   if (!op.body) return { passed: accepted.passed, again };
   for (const { path, schema: leaf } of leafPaths(schema)) {
@@ -225,16 +279,37 @@ async function fuzzWrite(op: Operation, token: string | undefined, full: boolean
 async function fuzzPathIds(op: Operation, token: string | undefined, who: string, accepted: Accepted) {
   if (!op.path.includes('{')) return;
   const tag = (s: string) => `${op.method.toUpperCase()} ${op.path} as ${who}: ${s}`;
-  for (const [label, value] of [['unknown id', UNKNOWN_ID], ['not a uuid', 'abc'], ['NUL', 'a%00b'], ['invalid UTF-8', '%FF'], ['long', 'x'.repeat(3000)]] as const) {
-    await probe(tag(`every path id = ${label}`), { method: op.method, url: fillPath(op.path, own, { which: '*', value }), token, ...accepted.again() }, accepted.passed && label !== 'invalid UTF-8');
+  for (const [label, value] of [
+    ['unknown id', UNKNOWN_ID],
+    ['not a uuid', 'abc'],
+    ['NUL', 'a%00b'],
+    ['invalid UTF-8', '%FF'],
+    ['long', 'x'.repeat(3000)],
+  ] as const) {
+    await probe(
+      tag(`every path id = ${label}`),
+      { method: op.method, url: fillPath(op.path, own, { which: '*', value }), token, ...accepted.again() },
+      accepted.passed && label !== 'invalid UTF-8',
+    );
   }
   for (const name of [...op.path.matchAll(/\{(\w+)\}/g)].map((m) => m[1]).filter((n) => n === 'id' || n.endsWith('Id'))) {
-    await probe(tag(`{${name}} of another firm`), { method: op.method, url: fillPath(op.path, own, { which: name, value: foreignFor(op.path, name) }), token, ...accepted.again() }, accepted.passed);
+    await probe(
+      tag(`{${name}} of another firm`),
+      { method: op.method, url: fillPath(op.path, own, { which: name, value: foreignFor(op.path, name) }), token, ...accepted.again() },
+      accepted.passed,
+    );
   }
 }
 
 function foreignFor(path: string, name: string) {
-  const list = name === 'id' ? path.slice(0, path.indexOf(`{${name}}`)).split('/').filter(Boolean).at(-1)! : listOfField[name];
+  const list =
+    name === 'id'
+      ? path
+          .slice(0, path.indexOf(`{${name}}`))
+          .split('/')
+          .filter(Boolean)
+          .at(-1)!
+      : listOfField[name];
   return foreign.get(list) ?? UNKNOWN_ID;
 }
 
@@ -253,7 +328,11 @@ async function fuzzRead(op: Operation, token: string | undefined, full: boolean,
   }
   // Another firm's record, or nobody's, is simply not found (DEVELOPERS.md "Organization scoping").
   for (const name of [...op.path.matchAll(/\{(\w+)\}/g)].map((m) => m[1])) {
-    await probe(tag(`{${name}} of another firm`), { method: 'GET', url: fillPath(op.path, own, { which: name, value: foreignFor(op.path, name) }), token }, true);
+    await probe(
+      tag(`{${name}} of another firm`),
+      { method: 'GET', url: fillPath(op.path, own, { which: name, value: foreignFor(op.path, name) }), token },
+      true,
+    );
   }
   if (op.path.includes('{')) await probe(tag('unknown ids'), { method: 'GET', url: fillPath(op.path, own, { which: '*', value: UNKNOWN_ID }), token }, true);
 }
@@ -264,8 +343,17 @@ function operationsOf(doc: { paths: Record<string, Record<string, Record<string,
     for (const [method, op] of Object.entries(methods)) {
       const content = (op.requestBody as { content?: Record<string, { schema: JsonSchema }> } | undefined)?.content ?? {};
       const [bodyType, media] = Object.entries(content)[0] ?? [];
-      const query = ((op.parameters as { name: string; in: string; schema: JsonSchema }[] | undefined) ?? []).filter((p) => p.in === 'query').map((p) => ({ name: p.name, schema: p.schema }));
-      out.push({ method, path, access: String(op['x-nestkeeper-access']), body: media?.schema, bodyType: bodyType ?? (['post', 'put', 'patch', 'delete'].includes(method) ? 'application/json' : undefined), query });
+      const query = ((op.parameters as { name: string; in: string; schema: JsonSchema }[] | undefined) ?? [])
+        .filter((p) => p.in === 'query')
+        .map((p) => ({ name: p.name, schema: p.schema }));
+      out.push({
+        method,
+        path,
+        access: String(op['x-nestkeeper-access']),
+        body: media?.schema,
+        bodyType: bodyType ?? (['post', 'put', 'patch', 'delete'].includes(method) ? 'application/json' : undefined),
+        query,
+      });
     }
   }
   return out;
@@ -275,7 +363,7 @@ async function collectIds(token: string, into: Map<string, string>) {
   for (const list of lists) {
     const res = await send({ method: 'GET', url: `/api/${list}`, token });
     const parsed = res.status === 200 ? JSON.parse(res.text) : null;
-    const items = (Array.isArray(parsed) ? parsed : parsed?.items ?? []) as { id: string }[];
+    const items = (Array.isArray(parsed) ? parsed : (parsed?.items ?? [])) as { id: string }[];
     if (items[0]?.id) into.set(list, items[0].id);
   }
 }
@@ -289,7 +377,8 @@ beforeAll(async () => {
   tokens.otherOwner = await t.tokenFor('owner@other.test');
 
   // Records in the other firm, so its ids can be tried against this one.
-  const asOther = (url: string, body: unknown) => send({ method: 'POST', url, token: tokens.otherOwner, body: JSON.stringify(body), contentType: 'application/json' });
+  const asOther = (url: string, body: unknown) =>
+    send({ method: 'POST', url, token: tokens.otherOwner, body: JSON.stringify(body), contentType: 'application/json' });
   const otherAsset = JSON.parse((await asOther('/api/assets', { type: 'accessory', assetTag: 'OTHER-1', serialNumber: 'O-1' })).text);
   await asOther('/api/kits', { name: 'Other kit', memberIds: [otherAsset.id] });
   const otherCustomer = JSON.parse((await asOther('/api/customers', { company: 'Other Customer Ltd', billingEmail: 'ap@other-customer.test' })).text);
@@ -303,16 +392,26 @@ beforeAll(async () => {
   // An item free and calibrated for the coming months, so valid bookings, trips and rentals can pass.
   const reserved = JSON.parse((await send({ method: 'GET', url: '/api/bookings?state=reserved', token: tokens.owner })).text).items[0];
   if (reserved) own.set('bookings', reserved.id);
-  const free = await send({ method: 'GET', url: `/api/availability?startsOn=${new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10)}&endsOn=${new Date(Date.now() + 90 * 86_400_000).toISOString().slice(0, 10)}`, token: tokens.owner });
+  const free = await send({
+    method: 'GET',
+    url: `/api/availability?startsOn=${new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10)}&endsOn=${new Date(Date.now() + 90 * 86_400_000).toISOString().slice(0, 10)}`,
+    token: tokens.owner,
+  });
   own.set('assets', JSON.parse(free.text).items[0].id);
   const doc = await PDFDocument.create();
   doc.addPage().drawText('Calibration certificate (fuzz)');
   PDF = new Uint8Array(await doc.save());
   // A user the fuzz may re-role or disable without locking itself out.
-  const spare = await send({ method: 'POST', url: '/api/users', token: tokens.owner, body: JSON.stringify({ email: 'spare@demo.test', name: 'Spare Person', role: 'technician', password: 'a-long-enough-passphrase-7' }), contentType: 'application/json' });
+  const spare = await send({
+    method: 'POST',
+    url: '/api/users',
+    token: tokens.owner,
+    body: JSON.stringify({ email: 'spare@demo.test', name: 'Spare Person', role: 'technician', password: 'a-long-enough-passphrase-7' }),
+    contentType: 'application/json',
+  });
   own.set('users', JSON.parse(spare.text).id);
   const calibrations = await send({ method: 'GET', url: `/api/assets/${own.get('assets')}/calibrations`, token: tokens.owner });
-  const firstCalibration = (JSON.parse(calibrations.text) as { id: string }[] | { items: { id: string }[] });
+  const firstCalibration = JSON.parse(calibrations.text) as { id: string }[] | { items: { id: string }[] };
   const calibrationId = (Array.isArray(firstCalibration) ? firstCalibration : firstCalibration.items)[0]?.id;
   if (calibrationId) own.set('calibrations', calibrationId);
 

@@ -26,25 +26,63 @@ describe('calendar dates that do not exist', () => {
 
   it.each(impossible)('%s is a 400 naming the field on every route that takes a date', async (day) => {
     const cases = [
-      ['startsOn', await t.api.post('/api/bookings').set(bearer(owner)).send({ assetIds: [assetId], startsOn: day, endsOn: '2031-01-10' })],
-      ['startsOn', await t.api.post('/api/rentals').set(bearer(owner)).send({ customerId, assetIds: [assetId], startsOn: day, endsOn: '2031-01-10' })],
+      [
+        'startsOn',
+        await t.api
+          .post('/api/bookings')
+          .set(bearer(owner))
+          .send({ assetIds: [assetId], startsOn: day, endsOn: '2031-01-10' }),
+      ],
+      [
+        'startsOn',
+        await t.api
+          .post('/api/rentals')
+          .set(bearer(owner))
+          .send({ customerId, assetIds: [assetId], startsOn: day, endsOn: '2031-01-10' }),
+      ],
       ['startsOn', await t.api.get(`/api/quotes?assetIds=${assetId}&startsOn=${day}&endsOn=2031-01-10`).set(bearer(owner))],
       ['from', await t.api.get(`/api/billing/utilisation?from=${day}&to=2031-01-10`).set(bearer(owner))],
       ['startsOn', await t.api.get(`/api/availability?startsOn=${day}&endsOn=2031-01-10`).set(bearer(owner))],
       ['to', await t.api.get(`/api/bookings?to=${day}`).set(bearer(owner))],
-      ['sentOn', await t.api.post('/api/lab-trips').set(bearer(owner)).send({ provider: 'Gauge House', assetIds: [assetId], sentOn: day })],
-      ['calibration.lastCalibratedOn', await t.api.post('/api/assets').set(bearer(owner)).send({ type: 'accessory', assetTag: 'DATE-1', serialNumber: 'D1', calibration: { required: true, intervalMonths: 12, lastCalibratedOn: day } })],
-      ['startsOn', await t.api.post('/api/jobs').set(bearer(owner)).send({ reference: 'J-DATE', customerName: 'Someone', startsOn: day, endsOn: '2031-01-10' })],
+      [
+        'sentOn',
+        await t.api
+          .post('/api/lab-trips')
+          .set(bearer(owner))
+          .send({ provider: 'Gauge House', assetIds: [assetId], sentOn: day }),
+      ],
+      [
+        'calibration.lastCalibratedOn',
+        await t.api
+          .post('/api/assets')
+          .set(bearer(owner))
+          .send({ type: 'accessory', assetTag: 'DATE-1', serialNumber: 'D1', calibration: { required: true, intervalMonths: 12, lastCalibratedOn: day } }),
+      ],
+      [
+        'startsOn',
+        await t.api.post('/api/jobs').set(bearer(owner)).send({ reference: 'J-DATE', customerName: 'Someone', startsOn: day, endsOn: '2031-01-10' }),
+      ],
       [
         'performedOn',
-        await t.api.post(`/api/assets/${assetId}/calibrations`).set(bearer(owner)).field('performedOn', day).field('provider', 'Lab').field('certificateNumber', 'C-1').field('asFound', 'in_tolerance').field('asLeft', 'in_tolerance'),
+        await t.api
+          .post(`/api/assets/${assetId}/calibrations`)
+          .set(bearer(owner))
+          .field('performedOn', day)
+          .field('provider', 'Lab')
+          .field('certificateNumber', 'C-1')
+          .field('asFound', 'in_tolerance')
+          .field('asLeft', 'in_tolerance'),
       ],
     ] as const;
     for (const [i, [field, res]] of cases.entries()) expect(fieldsOf(res)[field], `case ${i}: ${field}`).toMatch(/is not a date|between 1900 and 2199/);
   });
 
   it('a CSV row with such a date is an error on that row and column', async () => {
-    const res = await t.api.post('/api/assets/import?mode=preview').set(bearer(owner)).set('Content-Type', 'text/csv').send('type,assetTag,serialNumber,calibrationRequired,calibrationIntervalMonths,lastCalibratedOn\r\naccessory,CSV-D1,S1,yes,12,2026-02-30\r\n');
+    const res = await t.api
+      .post('/api/assets/import?mode=preview')
+      .set(bearer(owner))
+      .set('Content-Type', 'text/csv')
+      .send('type,assetTag,serialNumber,calibrationRequired,calibrationIntervalMonths,lastCalibratedOn\r\naccessory,CSV-D1,S1,yes,12,2026-02-30\r\n');
     expect(res.status).toBe(200);
     expect(res.body.errors).toEqual([{ row: 1, column: 'lastCalibratedOn', message: 'is not a date: that month has 28 days' }]);
   });
@@ -73,7 +111,13 @@ describe('text PostgreSQL cannot store: NUL and lone UTF-16 surrogates', () => {
   });
 
   it('a NUL in a multipart field (incident description) is a 400 naming it', async () => {
-    const res = await t.api.post('/api/incidents').set(bearer(owner)).field('assetId', assetId).field('kind', 'impact').field('description', 'Dropped\u0000 hard').field('occurredAt', '2026-11-30T10:00:00Z');
+    const res = await t.api
+      .post('/api/incidents')
+      .set(bearer(owner))
+      .field('assetId', assetId)
+      .field('kind', 'impact')
+      .field('description', 'Dropped\u0000 hard')
+      .field('occurredAt', '2026-11-30T10:00:00Z');
     expect(fieldsOf(res)).toHaveProperty('description');
   });
 
@@ -88,8 +132,13 @@ describe('text PostgreSQL cannot store: NUL and lone UTF-16 surrogates', () => {
   });
 
   it('endpoint() refuses it even where a schema forgot (belt and braces): a user name', async () => {
-    const spare = await t.api.post('/api/users').set(bearer(owner)).send({ email: 'nul-check@demo.test', name: 'Spare', role: 'technician', password: 'a-long-enough-passphrase-7' });
-    expect(fieldsOf(await t.api.patch(`/api/users/${spare.body.id}`).set(bearer(owner)).send({ name: 'Sp\u0000re' }))).toEqual({ name: expect.stringMatching(/not text/) });
+    const spare = await t.api
+      .post('/api/users')
+      .set(bearer(owner))
+      .send({ email: 'nul-check@demo.test', name: 'Spare', role: 'technician', password: 'a-long-enough-passphrase-7' });
+    expect(fieldsOf(await t.api.patch(`/api/users/${spare.body.id}`).set(bearer(owner)).send({ name: 'Sp\u0000re' }))).toEqual({
+      name: expect.stringMatching(/not text/),
+    });
     expect((await t.api.get(`/api/users`).set(bearer(owner))).body.items.find((u: { id: string }) => u.id === spare.body.id).name).toBe('Spare');
   });
 });
@@ -105,7 +154,14 @@ describe('e-mail addresses (RFC 5321: at most 254 characters)', () => {
 
   it('255 characters is refused for a new user; 254 is an address like any other', async () => {
     expect(exactly254).toHaveLength(254);
-    expect(fieldsOf(await t.api.post('/api/users').set(bearer(owner)).send({ email: `x${exactly254}`, name: 'Long', role: 'technician', password: 'a-long-enough-passphrase-7' }))).toHaveProperty('email');
+    expect(
+      fieldsOf(
+        await t.api
+          .post('/api/users')
+          .set(bearer(owner))
+          .send({ email: `x${exactly254}`, name: 'Long', role: 'technician', password: 'a-long-enough-passphrase-7' }),
+      ),
+    ).toHaveProperty('email');
     expect((await t.api.post('/api/auth/login').send({ email: exactly254, password: 'whatever-it-is' })).status).toBe(401);
   });
 });
@@ -118,16 +174,35 @@ describe("ids in a request that name no record of the caller's firm", () => {
     const unknown = '7d1e2f3a-4b5c-4d6e-8f90-a1b2c3d4e5f6';
     for (const id of [unknown, theirs.body.id]) {
       const answers = {
-        'lab trip assetIds': await t.api.post('/api/lab-trips').set(bearer(owner)).send({ provider: 'Gauge House', assetIds: [id], sentOn: '2031-01-10' }),
+        'lab trip assetIds': await t.api
+          .post('/api/lab-trips')
+          .set(bearer(owner))
+          .send({ provider: 'Gauge House', assetIds: [id], sentOn: '2031-01-10' }),
         'quote assetIds': await t.api.get(`/api/quotes?assetIds=${id}&startsOn=2031-01-10&endsOn=2031-01-12`).set(bearer(owner)),
-        'incident assetId': await t.api.post('/api/incidents').set(bearer(owner)).field('assetId', id).field('kind', 'impact').field('description', 'Knocked over').field('occurredAt', '2026-11-30T10:00:00Z'),
-        'incident bookingId': await t.api.post('/api/incidents').set(bearer(owner)).field('assetId', assetId).field('bookingId', id).field('kind', 'impact').field('description', 'Knocked over').field('occurredAt', '2026-11-30T10:00:00Z'),
+        'incident assetId': await t.api
+          .post('/api/incidents')
+          .set(bearer(owner))
+          .field('assetId', id)
+          .field('kind', 'impact')
+          .field('description', 'Knocked over')
+          .field('occurredAt', '2026-11-30T10:00:00Z'),
+        'incident bookingId': await t.api
+          .post('/api/incidents')
+          .set(bearer(owner))
+          .field('assetId', assetId)
+          .field('bookingId', id)
+          .field('kind', 'impact')
+          .field('description', 'Knocked over')
+          .field('occurredAt', '2026-11-30T10:00:00Z'),
         'rental invoice PDF': await t.api.get(`/api/rentals/${id}/invoice.pdf`).set(bearer(owner)),
       };
       for (const [what, res] of Object.entries(answers)) expect([what, res.status, res.body.error?.code]).toEqual([what, 404, 'not_found']);
     }
     for (const lead of [unknown, theirUser]) {
-      const job = await t.api.post('/api/jobs').set(bearer(owner)).send({ reference: `J-LEAD-${lead.slice(0, 4)}`, customerName: 'Someone', startsOn: '2031-01-10', endsOn: '2031-01-11', leadTechnicianId: lead });
+      const job = await t.api
+        .post('/api/jobs')
+        .set(bearer(owner))
+        .send({ reference: `J-LEAD-${lead.slice(0, 4)}`, customerName: 'Someone', startsOn: '2031-01-10', endsOn: '2031-01-11', leadTechnicianId: lead });
       expect(job.status).toBe(404);
     }
   });

@@ -28,7 +28,9 @@ afterAll(async () => {
 
 async function queueOne(subject: string) {
   const org = await t.db.getRepository(Organization).findOneByOrFail({ name: 'Brackenmoor Dimensional Works' });
-  return t.db.transaction((m) => enqueueMail(new Scoped(m, org.id), ['manager@demo.test'], { subject, heading: subject, paragraphs: ['A check of the outbox.'] }));
+  return t.db.transaction((m) =>
+    enqueueMail(new Scoped(m, org.id), ['manager@demo.test'], { subject, heading: subject, paragraphs: ['A check of the outbox.'] }),
+  );
 }
 
 const sinkCount = async (messageId: string) =>

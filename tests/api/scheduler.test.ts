@@ -67,14 +67,21 @@ describe('routines admin API', () => {
 
   it('lets the owner run a routine now, logs the run, and refuses other roles', async () => {
     const owner = await app.tokenFor('owner@demo.test');
-    const [{ queued }] = await app.db.query(`SELECT count(*)::int AS queued FROM outbox_messages m JOIN users u ON u.organization_id = m.organization_id AND u.email = 'owner@demo.test' WHERE m.status = 'pending'`);
+    const [{ queued }] = await app.db.query(
+      `SELECT count(*)::int AS queued FROM outbox_messages m JOIN users u ON u.organization_id = m.organization_id AND u.email = 'owner@demo.test' WHERE m.status = 'pending'`,
+    );
     expect(queued).toBeGreaterThan(0);
     const run = await app.api.post('/api/admin/routines/deliver-outbox/run').set(bearer(owner));
     expect(run.status).toBe(200);
     // SMTP is not listening in this app: the run succeeds and the mail waits. "Run now" covers the owner's own firm only.
     expect(run.body.run).toMatchObject({ status: 'succeeded', trigger: 'manual', scope: 'your firm', summary: { sent: 0, deferred: queued, pending: queued } });
     const list = await app.api.get('/api/admin/routines').set(bearer(owner));
-    expect(list.body.items).toEqual(expect.arrayContaining([expect.objectContaining({ name: 'deliver-outbox', lastRun: expect.objectContaining({ id: run.body.run.id }) }), expect.objectContaining({ name: 'late-returns', lastRun: null })]));
+    expect(list.body.items).toEqual(
+      expect.arrayContaining([
+        expect.objectContaining({ name: 'deliver-outbox', lastRun: expect.objectContaining({ id: run.body.run.id }) }),
+        expect.objectContaining({ name: 'late-returns', lastRun: null }),
+      ]),
+    );
     expect((await app.api.post('/api/admin/routines/no-such-routine/run').set(bearer(owner))).status).toBe(404);
     const manager = await app.tokenFor('manager@demo.test');
     expect((await app.api.get('/api/admin/routines').set(bearer(manager))).status).toBe(403);

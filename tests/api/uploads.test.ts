@@ -15,7 +15,8 @@ beforeAll(async () => {
   server = t.app.listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   port = (server.address() as AddressInfo).port;
-  for (const [role, email] of Object.entries({ manager: 'manager@demo.test', technician: 'tech@demo.test', billing: 'billing@demo.test' })) tokens[role] = await t.tokenFor(email);
+  for (const [role, email] of Object.entries({ manager: 'manager@demo.test', technician: 'tech@demo.test', billing: 'billing@demo.test' }))
+    tokens[role] = await t.tokenFor(email);
   assetId = (await t.api.get('/api/assets?limit=1').set(bearer(tokens.manager))).body.items[0].id;
 });
 afterAll(async () => {
@@ -32,7 +33,11 @@ const FIRST_PART = 256 * 1024;
  * answer. A server that read the body before checking the caller would
  * still be waiting for the other 29.75 MB, and this would never resolve.
  */
-function partialUpload(path: string, headers: Record<string, string>, body: Buffer): Promise<{ status: number; json: { error?: { code: string } }; sent: number; connection?: string }> {
+function partialUpload(
+  path: string,
+  headers: Record<string, string>,
+  body: Buffer,
+): Promise<{ status: number; json: { error?: { code: string } }; sent: number; connection?: string }> {
   return new Promise((resolve, reject) => {
     const req = http.request({ host: '127.0.0.1', port, path, method: 'POST', headers: { ...headers, 'content-length': String(DECLARED) } });
     let sent = 0;
@@ -55,9 +60,27 @@ const multipartHead = (field: string, fileName: string, type: string) =>
 const multipart = { 'content-type': 'multipart/form-data; boundary=fuzzboundary' };
 
 const uploads = [
-  { name: 'a calibration certificate', path: () => `/api/assets/${assetId}/calibrations`, headers: multipart, head: () => multipartHead('certificate', 'cert.pdf', 'application/pdf'), lacking: 'technician' },
-  { name: 'incident photos', path: () => '/api/incidents', headers: multipart, head: () => multipartHead('photos', 'dent.jpg', 'image/jpeg'), lacking: 'billing' },
-  { name: 'a fleet CSV import', path: () => '/api/assets/import?mode=commit', headers: { 'content-type': 'text/csv' }, head: () => Buffer.from('type,assetTag,serialNumber\r\n'), lacking: 'technician' },
+  {
+    name: 'a calibration certificate',
+    path: () => `/api/assets/${assetId}/calibrations`,
+    headers: multipart,
+    head: () => multipartHead('certificate', 'cert.pdf', 'application/pdf'),
+    lacking: 'technician',
+  },
+  {
+    name: 'incident photos',
+    path: () => '/api/incidents',
+    headers: multipart,
+    head: () => multipartHead('photos', 'dent.jpg', 'image/jpeg'),
+    lacking: 'billing',
+  },
+  {
+    name: 'a fleet CSV import',
+    path: () => '/api/assets/import?mode=commit',
+    headers: { 'content-type': 'text/csv' },
+    head: () => Buffer.from('type,assetTag,serialNumber\r\n'),
+    lacking: 'technician',
+  },
 ];
 
 describe('uploads are refused before their body is read', () => {

@@ -18,7 +18,12 @@ describe('users admin', () => {
     const list = await t.api.get('/api/users').set(bearer(owner));
     expect(list.status).toBe(200);
     expect(list.body.total).toBe(4);
-    expect(list.body.items.map((u: { email: string }) => u.email).sort()).toEqual(['billing@demo.test', 'manager@demo.test', 'owner@demo.test', 'tech@demo.test']);
+    expect(list.body.items.map((u: { email: string }) => u.email).sort()).toEqual([
+      'billing@demo.test',
+      'manager@demo.test',
+      'owner@demo.test',
+      'tech@demo.test',
+    ]);
     expect(list.body.items[0]).not.toHaveProperty('passwordHash');
 
     const created = await t.api.post('/api/users').set(bearer(owner)).send(newUser('Wendel@Demo.test'));
@@ -55,13 +60,34 @@ describe('users admin', () => {
       expect(res.status).toBe(400);
       return res.body.error.details.fields[field];
     };
-    expect(await weak(await t.api.post('/api/users').set(bearer(owner)).send({ ...newUser('weak.one@demo.test'), password: 'password1234' }))).toMatch(/^is too easy to guess\. This is similar to a commonly used password/);
+    expect(
+      await weak(
+        await t.api
+          .post('/api/users')
+          .set(bearer(owner))
+          .send({ ...newUser('weak.one@demo.test'), password: 'password1234' }),
+      ),
+    ).toMatch(/^is too easy to guess\. This is similar to a commonly used password/);
     // The person's own name and the firm's name are what a guesser tries first.
-    expect(await weak(await t.api.post('/api/users').set(bearer(owner)).send({ ...newUser('weak.two@demo.test'), password: 'Wendel Ashgrove1' }))).toMatch(/name or address/);
+    expect(
+      await weak(
+        await t.api
+          .post('/api/users')
+          .set(bearer(owner))
+          .send({ ...newUser('weak.two@demo.test'), password: 'Wendel Ashgrove1' }),
+      ),
+    ).toMatch(/name or address/);
     const tech = (await t.api.get('/api/users').set(bearer(owner))).body.items.find((u: { email: string }) => u.email === 'tech@demo.test');
     expect(await weak(await t.api.post(`/api/users/${tech.id}/password`).set(bearer(owner)).send({ password: 'Brackenmoor2027' }))).toMatch(/name or address/);
     // 25 characters, 75 bytes in UTF-8 (RFC 3629: € takes three).
-    expect(await weak(await t.api.post(`/api/users/${tech.id}/password`).set(bearer(owner)).send({ password: '€'.repeat(25) }))).toMatch(/at most 72 bytes/);
+    expect(
+      await weak(
+        await t.api
+          .post(`/api/users/${tech.id}/password`)
+          .set(bearer(owner))
+          .send({ password: '€'.repeat(25) }),
+      ),
+    ).toMatch(/at most 72 bytes/);
     expect((await t.api.get('/api/users').set(bearer(owner))).body.items.map((u: { email: string }) => u.email)).not.toContain('weak.one@demo.test');
     expect(await t.tokenFor('tech@demo.test')).toBeTruthy();
   });
@@ -124,21 +150,27 @@ describe('bad input', () => {
     expect((await t.api.get('/api/health')).body).toEqual({ status: 'ok' });
     const doc = (await t.api.get('/api/openapi.json')).body;
     expect(doc.openapi).toBe('3.1.0');
-    expect(Object.keys(doc.paths)).toEqual(expect.arrayContaining(['/api/auth/login', '/api/users/{id}', '/api/mailbox', '/api/admin/routines/{name}/run', '/api/admin/jobs/{name}/run']));
+    expect(Object.keys(doc.paths)).toEqual(
+      expect.arrayContaining(['/api/auth/login', '/api/users/{id}', '/api/mailbox', '/api/admin/routines/{name}/run', '/api/admin/jobs/{name}/run']),
+    );
   });
 });
 
 describe('the last active owner', () => {
   it('stays when two owners demote or disable each other at the same moment (six trials)', async () => {
     const password = 'quartz-meadow-71-ferry';
-    const second = await t.api.post('/api/users').set(bearer(owner)).send({ email: 'second.owner@demo.test', name: 'Halden Rookwood', role: 'owner', password });
+    const second = await t.api
+      .post('/api/users')
+      .set(bearer(owner))
+      .send({ email: 'second.owner@demo.test', name: 'Halden Rookwood', role: 'owner', password });
     expect(second.status).toBe(201);
     const first = (await t.api.get('/api/auth/me').set(bearer(owner))).body.user;
     const owners = [
       { id: first.id as string, email: 'owner@demo.test', password: 'nestkeeper-demo', token: owner },
       { id: second.body.id as string, email: 'second.owner@demo.test', password, token: await t.tokenFor('second.owner@demo.test', password) },
     ];
-    const activeOwners = async () => (await t.db.query(`SELECT count(*)::int AS n FROM users WHERE organization_id = $1 AND role = 'owner' AND NOT disabled`, [first.organizationId]))[0].n;
+    const activeOwners = async () =>
+      (await t.db.query(`SELECT count(*)::int AS n FROM users WHERE organization_id = $1 AND role = 'owner' AND NOT disabled`, [first.organizationId]))[0].n;
     for (let trial = 0; trial < 6; trial += 1) {
       const change = trial % 2 ? { disabled: true } : { role: 'manager' };
       const [a, b] = owners;
@@ -147,7 +179,10 @@ describe('the last active owner', () => {
         t.api.patch(`/api/users/${b.id}`).set(bearer(a.token)).send(change),
         t.api.patch(`/api/users/${a.id}`).set(bearer(b.token)).send(change),
       ]);
-      expect(answers.filter((r) => r.status === 200), `trial ${trial}: ${answers.map((r) => r.status)}`).toHaveLength(1);
+      expect(
+        answers.filter((r) => r.status === 200),
+        `trial ${trial}: ${answers.map((r) => r.status)}`,
+      ).toHaveLength(1);
       expect(await activeOwners()).toBe(1);
       const [survivor, lost] = answers[0].status === 200 ? [a, b] : [b, a];
       expect((await t.api.patch(`/api/users/${lost.id}`).set(bearer(survivor.token)).send({ role: 'owner', disabled: false })).status).toBe(200);

@@ -50,5 +50,7 @@ for (let i = 0; i < RUNS; i += 1) {
 const rows = await page.locator(rowHeaders).count();
 switching.sort((a, b) => a - b);
 const median = percentile(switching, 50);
-console.log(`\nboard: ${rows} rows × 8 weeks drawn in ${median.toFixed(0)} ms (median of ${RUNS} switches from 4 to 8 weeks in Chromium; max ${switching[switching.length - 1].toFixed(0)} ms; target under 1000 ms${median < 1000 ? '' : ' — MISSED'})`);
+console.log(
+  `\nboard: ${rows} rows × 8 weeks drawn in ${median.toFixed(0)} ms (median of ${RUNS} switches from 4 to 8 weeks in Chromium; max ${switching[switching.length - 1].toFixed(0)} ms; target under 1000 ms${median < 1000 ? '' : ' — MISSED'})`,
+);
 await browser.close();

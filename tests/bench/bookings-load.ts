@@ -7,7 +7,11 @@ import { addDays, todayIn } from '../../shared/calibration/due-date';
  * two-week window under 20 concurrent clients, and creating 20-item kit bookings.
  */
 const base = process.env.BENCH_URL!;
-const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@bench.test', password: 'nestkeeper-demo' }) });
+const login = await fetch(`${base}/api/auth/login`, {
+  method: 'POST',
+  headers: { 'content-type': 'application/json' },
+  body: JSON.stringify({ email: 'bench@bench.test', password: 'nestkeeper-demo' }),
+});
 const { token } = (await login.json()) as { token: string };
 const headers = { authorization: `Bearer ${token}`, 'content-type': 'application/json' };
 const today = todayIn('Europe/Berlin');
@@ -30,7 +34,9 @@ for (let i = 0; i < 20; i += 1) {
   if (res.status !== 201) throw new Error(`booking ${i} answered ${res.status}: ${await res.text()}`);
 }
 create.sort((a, b) => a - b);
-console.log(`POST /api/bookings of a ${kit.memberCount}-item kit, 20 in a row: p50 ${percentile(create, 50).toFixed(1)} ms, p95 ${percentile(create, 95).toFixed(1)} ms, max ${create[create.length - 1].toFixed(1)} ms`);
+console.log(
+  `POST /api/bookings of a ${kit.memberCount}-item kit, 20 in a row: p50 ${percentile(create, 50).toFixed(1)} ms, p95 ${percentile(create, 95).toFixed(1)} ms, max ${create[create.length - 1].toFixed(1)} ms`,
+);
 
 const review: number[] = [];
 for (let i = 0; i < 20; i += 1) {
@@ -39,4 +45,6 @@ for (let i = 0; i < 20; i += 1) {
   review.push(performance.now() - t0);
 }
 review.sort((a, b) => a - b);
-console.log(`GET /api/calibration/review at 20,000 assets, 20 sequential requests: p50 ${percentile(review, 50).toFixed(1)} ms, p95 ${percentile(review, 95).toFixed(1)} ms`);
+console.log(
+  `GET /api/calibration/review at 20,000 assets, 20 sequential requests: p50 ${percentile(review, 50).toFixed(1)} ms, p95 ${percentile(review, 95).toFixed(1)} ms`,
+);

@@ -17,7 +17,11 @@ const scanMs = performance.now() - t0;
 console.log(`\nDaily due scan over ${assets} assets and ${bookings} bookings: ${(scanMs / 1000).toFixed(2)} s (${JSON.stringify(summary)})`);
 await db.destroy();
 
-const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@bench.test', password: 'nestkeeper-demo' }) });
+const login = await fetch(`${base}/api/auth/login`, {
+  method: 'POST',
+  headers: { 'content-type': 'application/json' },
+  body: JSON.stringify({ email: 'bench@bench.test', password: 'nestkeeper-demo' }),
+});
 const { token } = (await login.json()) as { token: string };
 const times: number[] = [];
 for (let i = 0; i < 20; i += 1) {
@@ -27,4 +31,6 @@ for (let i = 0; i < 20; i += 1) {
   times.push(performance.now() - start);
 }
 times.sort((a, b) => a - b);
-console.log(`GET /api/calibration/review at ${assets - 95} benchmark assets, 20 sequential requests: median ${times[10].toFixed(1)} ms, max ${times[19].toFixed(1)} ms`);
+console.log(
+  `GET /api/calibration/review at ${assets - 95} benchmark assets, 20 sequential requests: median ${times[10].toFixed(1)} ms, max ${times[19].toFixed(1)} ms`,
+);

@@ -7,7 +7,11 @@ import { launchChromium } from '../support/chromium';
  * clients, then the fleet page's first render and a search in Chromium.
  */
 const base = process.env.BENCH_URL!;
-const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@bench.test', password: 'nestkeeper-demo' }) });
+const login = await fetch(`${base}/api/auth/login`, {
+  method: 'POST',
+  headers: { 'content-type': 'application/json' },
+  body: JSON.stringify({ email: 'bench@bench.test', password: 'nestkeeper-demo' }),
+});
 const { token } = (await login.json()) as { token: string };
 
 const headers = { authorization: `Bearer ${token}` };
@@ -45,5 +49,7 @@ await page.waitForFunction(() => {
   return rows.length > 0 && rows.every((r) => r.textContent?.includes('BTRA-0001'));
 });
 const searchChange = Date.now() - start;
-console.log(`\nFleet page in Chromium: first rows after ${firstRender} ms (navigation from home); search "BTRA-0001" applied after ${searchChange} ms (includes the 250 ms typing debounce).`);
+console.log(
+  `\nFleet page in Chromium: first rows after ${firstRender} ms (navigation from home); search "BTRA-0001" applied after ${searchChange} ms (includes the 250 ms typing debounce).`,
+);
 await browser.close();

@@ -9,7 +9,14 @@ export const describeLoad = (r: LoadResult) =>
 
 const summarise = (times: number[], seconds: number, failed: number): LoadResult => {
   times.sort((a, b) => a - b);
-  return { requests: times.length, perSecond: times.length / seconds, p50: percentile(times, 50), p95: percentile(times, 95), p99: percentile(times, 99), failed };
+  return {
+    requests: times.length,
+    perSecond: times.length / seconds,
+    p50: percentile(times, 50),
+    p95: percentile(times, 95),
+    p99: percentile(times, 99),
+    failed,
+  };
 };
 
 /** 20 connections firing back to back for `seconds`: the saturation point of the machine (autocannon). */
@@ -32,7 +39,11 @@ export async function backToBack(url: string, headers: Record<string, string>, s
  * when people click — unlike a fixed rate, which releases every client at
  * the same tick.
  */
-export async function peoplePaced(url: string, headers: Record<string, string>, opts: { clients?: number; meanThinkMs?: number; seconds?: number } = {}): Promise<LoadResult> {
+export async function peoplePaced(
+  url: string,
+  headers: Record<string, string>,
+  opts: { clients?: number; meanThinkMs?: number; seconds?: number } = {},
+): Promise<LoadResult> {
   const { clients = 20, meanThinkMs = 200, seconds = 15 } = opts;
   const until = performance.now() + seconds * 1000;
   const times: number[] = [];

@@ -14,10 +14,18 @@ beforeAll(async () => {
 afterAll(() => rig?.close());
 
 async function apiAs(email: string) {
-  const login = await fetch(`${rig.baseUrl}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password: 'nestkeeper-demo' }) });
+  const login = await fetch(`${rig.baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password: 'nestkeeper-demo' }),
+  });
   const { token } = await login.json();
   return (path: string, body?: unknown) =>
-    fetch(`${rig.baseUrl}/api${path}`, { method: body ? 'POST' : 'GET', headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` }, body: body ? JSON.stringify(body) : undefined }).then(async (r) => ({ status: r.status, body: await r.json() }));
+    fetch(`${rig.baseUrl}/api${path}`, {
+      method: body ? 'POST' : 'GET',
+      headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
+      body: body ? JSON.stringify(body) : undefined,
+    }).then(async (r) => ({ status: r.status, body: await r.json() }));
 }
 
 describe('the billing desk in a real browser', () => {
@@ -54,7 +62,10 @@ describe('the billing desk in a real browser', () => {
     // At the counter (the shop manager): out, then back with one SMR dented.
     const managerApi = await apiAs('manager@demo.test');
     const rental = (await clerkApi(`/rentals/${rentalId}`)).body;
-    const walk = (damaged?: string) => ({ counterpart: 'Purchasing, Ostby Mould & Die', checklist: rental.items.map((i: { id: string }) => ({ assetId: i.id, present: true, condition: i.id === damaged ? 'damaged' : 'good' })) });
+    const walk = (damaged?: string) => ({
+      counterpart: 'Purchasing, Ostby Mould & Die',
+      checklist: rental.items.map((i: { id: string }) => ({ assetId: i.id, present: true, condition: i.id === damaged ? 'damaged' : 'good' })),
+    });
     expect((await managerApi(`/bookings/${rental.bookingId}/checkout`, walk())).status).toBe(200);
     const dented = rental.items[0];
     expect((await managerApi(`/bookings/${rental.bookingId}/return`, walk(dented.id))).status).toBe(200);
@@ -66,7 +77,15 @@ describe('the billing desk in a real browser', () => {
     // Repair 180.00 + 19 % = 214.20 from the 500.00 hold (worked by hand); the rest is released.
     await eventually(() => page.getByLabel('Amount to capture (EUR)').inputValue()).toMatch(/^214\.20?$/);
     await page.getByRole('button', { name: 'Capture and release the rest' }).click();
-    await eventually(async () => (await rig.db.query(`SELECT state, captured_minor FROM deposit_authorizations WHERE rental_id = $1 AND kind = 'authorization' AND state <> 'declined'`, [rentalId]))[0]).toEqual({ state: 'captured', captured_minor: 21_420 });
+    await eventually(
+      async () =>
+        (
+          await rig.db.query(
+            `SELECT state, captured_minor FROM deposit_authorizations WHERE rental_id = $1 AND kind = 'authorization' AND state <> 'declined'`,
+            [rentalId],
+          )
+        )[0],
+    ).toEqual({ state: 'captured', captured_minor: 21_420 });
 
     await page.getByRole('button', { name: 'Issue invoice' }).click();
     const download = page.getByRole('link', { name: 'Download invoice (PDF)' });

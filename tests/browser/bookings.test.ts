@@ -17,12 +17,21 @@ describe('booking board in a real browser', () => {
     const endsOn = addDays(today, 26);
     // Arrange: Kit Alder's tracker falls due in the middle of the job, and a spare tracker is free and calibrated.
     await rig.db.query(`UPDATE assets SET due_on = $1 WHERE asset_tag = 'TRK-001'`, [addDays(today, 24)]);
-    const login = await fetch(`${rig.baseUrl}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'manager@demo.test', password: 'nestkeeper-demo' }) });
+    const login = await fetch(`${rig.baseUrl}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email: 'manager@demo.test', password: 'nestkeeper-demo' }),
+    });
     const { token } = await login.json();
     const spare = await fetch(`${rig.baseUrl}/api/assets`, {
       method: 'POST',
       headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
-      body: JSON.stringify({ type: 'tracker', assetTag: 'TRK-090', serialNumber: 'TR-SPARE-90', calibration: { required: true, intervalMonths: 12, lastCalibratedOn: today } }),
+      body: JSON.stringify({
+        type: 'tracker',
+        assetTag: 'TRK-090',
+        serialNumber: 'TR-SPARE-90',
+        calibration: { required: true, intervalMonths: 12, lastCalibratedOn: today },
+      }),
     });
     expect(spare.status).toBe(201);
     const { context, page, nav } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
@@ -42,7 +51,10 @@ describe('booking board in a real browser', () => {
     // Taking the alternative books again straight away (BookForm's swap submits the form).
     await page.waitForURL(/\/bookings\/[0-9a-f-]{36}$/);
     const bookingId = page.url().split('/').pop()!;
-    const items: { asset_tag: string }[] = await rig.db.query(`SELECT a.asset_tag FROM booking_items bi JOIN assets a ON a.id = bi.asset_id WHERE bi.booking_id = $1`, [bookingId]);
+    const items: { asset_tag: string }[] = await rig.db.query(
+      `SELECT a.asset_tag FROM booking_items bi JOIN assets a ON a.id = bi.asset_id WHERE bi.booking_id = $1`,
+      [bookingId],
+    );
     const tags = items.map((i) => i.asset_tag);
     expect(tags).toContain(chosen);
     expect(tags).not.toContain('TRK-001');

@@ -50,7 +50,9 @@ describe("the owner's calibration review in a real browser", () => {
     await page.getByRole('button', { name: 'Draft notices' }).click();
     await eventually(() => page.locator('main').innerText()).toMatch(/quality@larkspur-aero\.test/);
     await page.getByRole('button', { name: 'Close review' }).click();
-    await eventually(async () => (await rig.db.query(`SELECT state FROM impact_reviews WHERE asset_id = $1 ORDER BY created_at DESC LIMIT 1`, [smr.id]))[0].state).toBe('closed');
+    await eventually(
+      async () => (await rig.db.query(`SELECT state FROM impact_reviews WHERE asset_id = $1 ORDER BY created_at DESC LIMIT 1`, [smr.id]))[0].state,
+    ).toBe('closed');
     await context.close();
   }, 120_000);
 });

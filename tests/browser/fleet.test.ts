@@ -14,7 +14,11 @@ describe('fleet register in a real browser', () => {
     const { context, page, nav } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
     await nav.getByRole('link', { name: 'Fleet' }).click();
     await page.getByRole('heading', { level: 1, name: 'Fleet' }).waitFor();
-    await page.getByRole('link', { name: 'Add asset' }).or(page.getByRole('button', { name: 'Add asset' })).first().click();
+    await page
+      .getByRole('link', { name: 'Add asset' })
+      .or(page.getByRole('button', { name: 'Add asset' }))
+      .first()
+      .click();
     await page.getByRole('heading', { level: 1, name: 'Register an asset' }).waitFor();
     await page.getByLabel('Type').selectOption('tip');
     await page.getByLabel('Asset tag').fill('TIP-777');

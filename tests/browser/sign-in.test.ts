@@ -17,12 +17,21 @@ async function signIn(page: Page, email: string, password = 'nestkeeper-demo') {
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
-const navLinks = async (page: Page) =>
-  (await page.getByRole('navigation', { name: 'Main navigation' }).getByRole('link').allInnerTexts()).map((t) => t.trim());
+const navLinks = async (page: Page) => (await page.getByRole('navigation', { name: 'Main navigation' }).getByRole('link').allInnerTexts()).map((t) => t.trim());
 
 const roles = [
-  { email: 'owner@demo.test', heading: "Owner's overview", sees: ['Home', 'Fleet', 'Kits', 'Users', 'Mailbox', 'Routines', 'Settings', 'My password'], hidden: [] },
-  { email: 'manager@demo.test', heading: 'Shop floor today', sees: ['Home', 'Fleet', 'Kits', 'Find by label', 'My password'], hidden: ['Users', 'Mailbox', 'Routines', 'Settings'] },
+  {
+    email: 'owner@demo.test',
+    heading: "Owner's overview",
+    sees: ['Home', 'Fleet', 'Kits', 'Users', 'Mailbox', 'Routines', 'Settings', 'My password'],
+    hidden: [],
+  },
+  {
+    email: 'manager@demo.test',
+    heading: 'Shop floor today',
+    sees: ['Home', 'Fleet', 'Kits', 'Find by label', 'My password'],
+    hidden: ['Users', 'Mailbox', 'Routines', 'Settings'],
+  },
   { email: 'tech@demo.test', heading: 'My kit', sees: ['Home', 'Fleet', 'Find by label', 'My password'], hidden: ['Users', 'Mailbox', 'Routines', 'Settings'] },
   { email: 'billing@demo.test', heading: 'Billing desk', sees: ['Home', 'Fleet', 'My password'], hidden: ['Users', 'Mailbox', 'Routines', 'Settings'] },
 ];

@@ -14,7 +14,15 @@ describe('CSV downloads (RFC 4180, with the OWASP CSV Injection guard)', () => {
   });
 
   it('writes CRLF records, quotes fields with commas, quotes or line breaks and doubles quotes (RFC 4180 §2 rules 1, 6, 7)', () => {
-    expect(toCsv(['a', 'b'], [['x,y', 'say "hi"'], ['two\r\nlines', 'plain']])).toBe('a,b\r\n"x,y","say ""hi"""\r\n"two\r\nlines",plain');
+    expect(
+      toCsv(
+        ['a', 'b'],
+        [
+          ['x,y', 'say "hi"'],
+          ['two\r\nlines', 'plain'],
+        ],
+      ),
+    ).toBe('a,b\r\n"x,y","say ""hi"""\r\n"two\r\nlines",plain');
   });
 
   it('keeps negative amounts numeric and guards every text cell, read back by an independent parser (csv-parse)', () => {

@@ -15,7 +15,9 @@ describe('inspecting an uploaded PDF (pdf-lib parser)', () => {
   });
 
   it('cannot look inside an encrypted PDF, so says so (pdfkit, owner password only)', async () => {
-    const locked = await renderPdf({ size: 'A4', ownerPassword: 'lab-owner-secret', permissions: { printing: 'highResolution' } }, (doc) => doc.text('Certificate OCL-7790'));
+    const locked = await renderPdf({ size: 'A4', ownerPassword: 'lab-owner-secret', permissions: { printing: 'highResolution' } }, (doc) =>
+      doc.text('Certificate OCL-7790'),
+    );
     expect(Buffer.from(locked).toString('latin1')).toContain('/Encrypt');
     expect(await inspectPdf(locked)).toEqual({ kind: 'encrypted' });
   });
@@ -49,7 +51,12 @@ describe('inspecting an uploaded PDF (pdf-lib parser)', () => {
   it('does not count a plain link or a page destination on opening as active', async () => {
     const pdf = await certificateWith((doc) => {
       doc.catalog.set(PDFName.of('OpenAction'), doc.context.obj([doc.getPage(0).ref, PDFName.of('Fit')]));
-      const link = doc.context.obj({ Type: 'Annot', Subtype: 'Link', Rect: [50, 700, 300, 720], A: { S: 'URI', URI: PDFString.of('https://lab.example/verify') } });
+      const link = doc.context.obj({
+        Type: 'Annot',
+        Subtype: 'Link',
+        Rect: [50, 700, 300, 720],
+        A: { S: 'URI', URI: PDFString.of('https://lab.example/verify') },
+      });
       doc.getPage(0).node.set(PDFName.of('Annots'), doc.context.obj([doc.context.register(link)]));
     });
     expect(await inspectPdf(pdf)).toMatchObject({ kind: 'pdf', activeContent: [] });
@@ -69,7 +76,9 @@ describe('inspecting an uploaded PDF (pdf-lib parser)', () => {
   });
 
   it('words the findings for a person', () => {
-    expect(describeActiveContent(['/JavaScript', '/EmbeddedFiles', '/OpenAction'])).toBe('JavaScript, embedded files and an action run when the document opens');
+    expect(describeActiveContent(['/JavaScript', '/EmbeddedFiles', '/OpenAction'])).toBe(
+      'JavaScript, embedded files and an action run when the document opens',
+    );
     expect(describeActiveContent(['/Launch'])).toBe('an action that starts a program');
   });
 });

@@ -39,8 +39,29 @@ const line = (description: string, quantity: number, dayMinor: number, weekMinor
 function rental(items: RentalItem[]): RentalView {
   const lines = [line('Laser tracker', 1, 25_000, 120_000, 5_000), line('SMR', 2, 2_000, 10_000, 500), line('Battery', 1, 1_000, 5_000, 200)];
   // Worked by hand: 1 950.00 + 2 × 160.00 + 80.00 = 2 350.00; 19 % tax = 446.50; total 2 796.50.
-  const quote = { days: 10, startsOn: '2025-03-03', endsOn: '2025-03-12', lines, subtotalMinor: 235_000, taxRateBasisPoints: 1900, taxMinor: 44_650, totalMinor: 279_650, depositMinor: 150_000, currency: 'EUR' };
-  const none = { lateDays: 0, lines: [], subtotalMinor: 0, taxMinor: 0, totalMinor: 0, extrasGrossMinor: 0, depositCapturedMinor: 0, cardChargedMinor: 0, balanceMinor: 0 };
+  const quote = {
+    days: 10,
+    startsOn: '2025-03-03',
+    endsOn: '2025-03-12',
+    lines,
+    subtotalMinor: 235_000,
+    taxRateBasisPoints: 1900,
+    taxMinor: 44_650,
+    totalMinor: 279_650,
+    depositMinor: 150_000,
+    currency: 'EUR',
+  };
+  const none = {
+    lateDays: 0,
+    lines: [],
+    subtotalMinor: 0,
+    taxMinor: 0,
+    totalMinor: 0,
+    extrasGrossMinor: 0,
+    depositCapturedMinor: 0,
+    cardChargedMinor: 0,
+    balanceMinor: 0,
+  };
   return {
     id: 'r1',
     number: 'R-2025-031',
@@ -110,7 +131,11 @@ function invoice(over: Partial<InvoiceView> = {}): InvoiceView {
     receivedMinor: 0,
     outstandingMinor: 54_600,
     payments: [],
-    issuer: { address: 'Forge Lane 12, Wrenhallow', taxNumber: 'WH-7781-0042', paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.' },
+    issuer: {
+      address: 'Forge Lane 12, Wrenhallow',
+      taxNumber: 'WH-7781-0042',
+      paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.',
+    },
     issuedOn: '2025-03-14',
     issuedAt: '2025-03-14T10:00:00Z',
     rentalId: 'r1',
@@ -135,7 +160,13 @@ function invoice(over: Partial<InvoiceView> = {}): InvoiceView {
     balanceMinor: 54_600,
     creditedMinor: 0,
     reason: null,
-    customer: { company: customer.company, billingContact: customer.billingContact, billingEmail: customer.billingEmail, address: '7 Fennick Lane\nOrrowby', taxNumber: 'XX 123 456 789' },
+    customer: {
+      company: customer.company,
+      billingContact: customer.billingContact,
+      billingEmail: customer.billingEmail,
+      address: '7 Fennick Lane\nOrrowby',
+      taxNumber: 'XX 123 456 789',
+    },
     ...over,
   };
 }
@@ -230,14 +261,19 @@ describe('certificate pack PDF', () => {
   // Certificates stored before uploads were checked may carry active content; pdf-lib's copyPages
   // would bring a page's annotations and /AA along. The pack keeps what the pages draw and nothing else.
   it('carries no scripts, launch actions or attached files from a stored certificate, yet shows its pages', async () => {
-    const stored = await Promise.all(Object.values(activeChanges).map((change, i) => certificateWith(change, [`Lab certificate OCL-88${i} page one`, `Lab certificate OCL-88${i} page two`])));
+    const stored = await Promise.all(
+      Object.values(activeChanges).map((change, i) => certificateWith(change, [`Lab certificate OCL-88${i} page one`, `Lab certificate OCL-88${i} page two`])),
+    );
     const pdf = await pack(stored.map((bytes, i) => entry(`TRK-10${i}`, `OCL-88${i}`, bytes)));
     expect(await inspectPdf(pdf)).toMatchObject({ kind: 'pdf', activeContent: [] });
     // Read by an independent parser too (MuPDF): no active-content name in any object of the pack.
     expect(activeNamesSeenByMuPdf(pdf)).toEqual([]);
     expect(pdfPageCount(pdf)).toBe(1 + 2 * stored.length);
     const text = pdfText(pdf);
-    expectAll(text, stored.flatMap((_, i) => [`OCL-88${i} page one`, `OCL-88${i} page two`]));
+    expectAll(
+      text,
+      stored.flatMap((_, i) => [`OCL-88${i} page one`, `OCL-88${i} page two`]),
+    );
     expect(text.match(/pages attached; scripts and files removed/g)).toHaveLength(stored.length);
   });
 

@@ -19,7 +19,13 @@ describe('deposit amounts in the provider’s units, against the payment fake', 
 
   beforeAll(async () => {
     fake = await startPaymentFake({ port: 0 });
-    stripe = createPaymentClient({ PAYMENT_API_KEY: 'sk_test_nestkeeper', PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
+    stripe = createPaymentClient({
+      PAYMENT_API_KEY: 'sk_test_nestkeeper',
+      PAYMENT_API_HOST: '127.0.0.1',
+      PAYMENT_API_PORT: fake.port,
+      PAYMENT_API_PROTOCOL: 'http',
+      PAYMENT_TIMEOUT_MS: 15_000,
+    });
     gateway = new PaymentGateway(stripe);
   });
   afterAll(async () => {
@@ -31,7 +37,17 @@ describe('deposit amounts in the provider’s units, against the payment fake', 
     const customer = await gateway.ensureCustomer({ id: `c-${n}`, company: 'Tarnwick Survey Co', billingEmail: `desk${n}@tarnwick.test` });
     const pm = await stripe.paymentMethods.create({ type: 'card', card: { token: 'tok_visa' } });
     const card = await gateway.saveCard(pm.id, customer, `card:${n}`);
-    return gateway.confirmIntent({ amountMinor, currency, customer, paymentMethod: card, capture: 'manual', offSession: false, description: 'Deposit', metadata: {}, key: `hold:${n}` });
+    return gateway.confirmIntent({
+      amountMinor,
+      currency,
+      customer,
+      paymentMethod: card,
+      capture: 'manual',
+      offSession: false,
+      description: 'Deposit',
+      metadata: {},
+      key: `hold:${n}`,
+    });
   };
 
   it.each([
@@ -61,7 +77,8 @@ describe('deposit amounts in the provider’s units, against the payment fake', 
 
   // The fake holds the provider's rules of its own: what a careless client would send is refused.
   it('the fake refuses a three-decimal amount not ending in 0, and fractional króna (docs.stripe.com/currencies)', async () => {
-    const create = (amount: number, currency: string) => stripe.paymentIntents.create({ amount, currency, payment_method: 'pm_card_visa', capture_method: 'manual', confirm: true });
+    const create = (amount: number, currency: string) =>
+      stripe.paymentIntents.create({ amount, currency, payment_method: 'pm_card_visa', capture_method: 'manual', confirm: true });
     await expect(create(5_124, 'kwd')).rejects.toMatchObject({ type: 'StripeInvalidRequestError', param: 'amount' });
     await expect(create(550, 'isk')).rejects.toMatchObject({ type: 'StripeInvalidRequestError', code: 'invalid_charge_amount_no_decimal_compatible' });
     expect((await create(5_120, 'kwd')).status).toBe('requires_capture');

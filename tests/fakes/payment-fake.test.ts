@@ -13,7 +13,13 @@ describe('payment-provider fake, driven by the official SDK', () => {
   beforeAll(async () => {
     fake = await startPaymentFake({ port: 0 });
     // The app's own client factory, pointed at the fake by host, port and protocol.
-    stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
+    stripe = createPaymentClient({
+      PAYMENT_API_KEY: SECRET_KEY,
+      PAYMENT_API_HOST: '127.0.0.1',
+      PAYMENT_API_PORT: fake.port,
+      PAYMENT_API_PROTOCOL: 'http',
+      PAYMENT_TIMEOUT_MS: 15_000,
+    });
   });
   afterAll(async () => {
     await fake.close();

@@ -12,8 +12,7 @@ const HANG_MS = 5 * CLIENT_TIMEOUT_MS;
 describe('payment-provider fake: faults, timeouts and retried captures', () => {
   let fake: PaymentFake;
 
-  const sdk = (opts: Partial<Stripe.StripeConfig> = {}) =>
-    new Stripe(SECRET_KEY, { host: '127.0.0.1', port: fake.port, protocol: 'http', ...opts });
+  const sdk = (opts: Partial<Stripe.StripeConfig> = {}) => new Stripe(SECRET_KEY, { host: '127.0.0.1', port: fake.port, protocol: 'http', ...opts });
   const fault = async (body: Record<string, unknown>) => {
     const res = await fetch(`http://127.0.0.1:${fake.port}/__fake/faults`, {
       method: 'POST',
@@ -116,7 +115,11 @@ describe('payment-provider fake: faults, timeouts and retried captures', () => {
     expect(listed.data).toEqual([expect.objectContaining({ path: '/v1/customers', remaining: 3 })]);
     await fetch(base, { method: 'DELETE' });
     expect(((await (await fetch(base)).json()) as { data: unknown[] }).data).toEqual([]);
-    const bad = await fetch(base, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ path: '/v1/x', mode: 'explode' }) });
+    const bad = await fetch(base, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ path: '/v1/x', mode: 'explode' }),
+    });
     expect(bad.status).toBe(400);
   });
 });

@@ -40,7 +40,13 @@ describe('payment-provider fake: payment methods, manual-capture intents, refund
 
   beforeAll(async () => {
     fake = await startPaymentFake({ port: 0 });
-    stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
+    stripe = createPaymentClient({
+      PAYMENT_API_KEY: SECRET_KEY,
+      PAYMENT_API_HOST: '127.0.0.1',
+      PAYMENT_API_PORT: fake.port,
+      PAYMENT_API_PROTOCOL: 'http',
+      PAYMENT_TIMEOUT_MS: 15_000,
+    });
   });
   afterAll(async () => {
     await fake.close();
@@ -105,7 +111,15 @@ describe('payment-provider fake: payment methods, manual-capture intents, refund
     // latest_charge is expandable and retrievable: an uncaptured authorization.
     const expanded = await stripe.paymentIntents.retrieve(created.id, { expand: ['latest_charge'] });
     const charge = expanded.latest_charge as Stripe.Charge;
-    expect(charge).toMatchObject({ object: 'charge', id: confirmed.latest_charge, captured: false, amount: 25_000, amount_captured: 0, status: 'succeeded', paid: true });
+    expect(charge).toMatchObject({
+      object: 'charge',
+      id: confirmed.latest_charge,
+      captured: false,
+      amount: 25_000,
+      amount_captured: 0,
+      status: 'succeeded',
+      paid: true,
+    });
     expect(charge.payment_method_details!.card).toMatchObject({ brand: 'visa', last4: '4242' });
     expect(await stripe.charges.retrieve(charge.id)).toMatchObject({ id: charge.id, payment_intent: created.id });
 
@@ -207,7 +221,15 @@ describe('payment-provider fake: payment methods, manual-capture intents, refund
     const customer = await stripe.customers.create({ name: 'Tarn Metrology' });
     const pm = await card('tok_visa');
     await stripe.paymentMethods.attach(pm.id, { customer: customer.id });
-    const offSession = { amount: 50_000, currency: 'gbp', customer: customer.id, payment_method: pm.id, capture_method: 'manual' as const, confirm: true, off_session: true };
+    const offSession = {
+      amount: 50_000,
+      currency: 'gbp',
+      customer: customer.id,
+      payment_method: pm.id,
+      capture_method: 'manual' as const,
+      confirm: true,
+      off_session: true,
+    };
 
     const inTime = await stripe.paymentIntents.create(offSession);
     const late = await stripe.paymentIntents.create(offSession);
@@ -303,8 +325,20 @@ describe('payment-provider fake: authorizations lapse on their own as the clock 
   it('cancels an uncaptured hold when POST /__fake/clock moves past capture_before, with a payment_intent.canceled event', async () => {
     const fake = await startPaymentFake({ port: 0 });
     try {
-      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
-      const pi = await stripe.paymentIntents.create({ amount: 6_000, currency: 'gbp', payment_method: 'pm_card_visa', capture_method: 'manual', confirm: true });
+      const stripe = createPaymentClient({
+        PAYMENT_API_KEY: SECRET_KEY,
+        PAYMENT_API_HOST: '127.0.0.1',
+        PAYMENT_API_PORT: fake.port,
+        PAYMENT_API_PROTOCOL: 'http',
+        PAYMENT_TIMEOUT_MS: 15_000,
+      });
+      const pi = await stripe.paymentIntents.create({
+        amount: 6_000,
+        currency: 'gbp',
+        payment_method: 'pm_card_visa',
+        capture_method: 'manual',
+        confirm: true,
+      });
       const before = await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`).then((r) => r.json() as Promise<{ now: number }>);
       const moved = await fetch(`http://127.0.0.1:${fake.port}/__fake/clock`, {
         method: 'POST',

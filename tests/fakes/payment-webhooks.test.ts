@@ -47,7 +47,13 @@ describe('payment-provider fake: signed webhooks and events', () => {
   beforeAll(async () => {
     receiver = await startReceiver();
     fake = await startPaymentFake({ port: 0, webhookUrl: receiver.url, webhookSecret: WEBHOOK_SECRET, webhookRetryDelaysMs: [50, 100, 200] });
-    stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
+    stripe = createPaymentClient({
+      PAYMENT_API_KEY: SECRET_KEY,
+      PAYMENT_API_HOST: '127.0.0.1',
+      PAYMENT_API_PORT: fake.port,
+      PAYMENT_API_PROTOCOL: 'http',
+      PAYMENT_TIMEOUT_MS: 15_000,
+    });
   });
   afterAll(async () => {
     await fake.close();
@@ -69,14 +75,29 @@ describe('payment-provider fake: signed webhooks and events', () => {
     await stripe.paymentIntents.capture(pi.id, { amount_to_capture: 6_000 });
     await stripe.refunds.create({ payment_intent: pi.id, amount: 2_500 });
 
-    const released = await stripe.paymentIntents.create({ amount: 5_000, currency: 'gbp', payment_method: 'pm_card_mastercard', capture_method: 'manual', confirm: true });
+    const released = await stripe.paymentIntents.create({
+      amount: 5_000,
+      currency: 'gbp',
+      payment_method: 'pm_card_mastercard',
+      capture_method: 'manual',
+      confirm: true,
+    });
     await stripe.paymentIntents.cancel(released.id);
 
-    const declined = await stripe.paymentIntents.create({ amount: 5_000, currency: 'gbp', payment_method: 'pm_card_chargeDeclinedInsufficientFunds', capture_method: 'manual' });
+    const declined = await stripe.paymentIntents.create({
+      amount: 5_000,
+      currency: 'gbp',
+      payment_method: 'pm_card_chargeDeclinedInsufficientFunds',
+      capture_method: 'manual',
+    });
     await stripe.paymentIntents.confirm(declined.id).catch(() => undefined);
 
     const expectations: Array<[string, string, (e: Stripe.Event) => void]> = [
-      ['payment_intent.amount_capturable_updated', pi.id, (e) => expect(e.data.object).toMatchObject({ status: 'requires_capture', amount_capturable: 18_000 })],
+      [
+        'payment_intent.amount_capturable_updated',
+        pi.id,
+        (e) => expect(e.data.object).toMatchObject({ status: 'requires_capture', amount_capturable: 18_000 }),
+      ],
       ['payment_intent.succeeded', pi.id, (e) => expect(e.data.object).toMatchObject({ status: 'succeeded', amount_received: 6_000, amount_capturable: 0 })],
       ['charge.refunded', pi.latest_charge as string, (e) => expect(e.data.object).toMatchObject({ amount_refunded: 2_500, amount_captured: 6_000 })],
       ['payment_intent.canceled', released.id, (e) => expect(e.data.object).toMatchObject({ status: 'canceled' })],
@@ -128,12 +149,8 @@ describe('payment-provider fake: signed webhooks and events', () => {
 
     // Within the SDK's default tolerance it verifies; just past it, it is stale.
     const at = (secondsAfterSigning: number) => (signedAt + secondsAfterSigning) * 1000;
-    expect(stripe.webhooks.constructEvent(d.body, header, WEBHOOK_SECRET, undefined, undefined, at(299)).type).toBe(
-      'payment_intent.amount_capturable_updated',
-    );
-    expect(() => stripe.webhooks.constructEvent(d.body, header, WEBHOOK_SECRET, undefined, undefined, at(301))).toThrow(
-      /Timestamp outside the tolerance zone/,
-    );
+    expect(stripe.webhooks.constructEvent(d.body, header, WEBHOOK_SECRET, undefined, undefined, at(299)).type).toBe('payment_intent.amount_capturable_updated');
+    expect(() => stripe.webhooks.constructEvent(d.body, header, WEBHOOK_SECRET, undefined, undefined, at(301))).toThrow(/Timestamp outside the tolerance zone/);
   });
 });
 
@@ -143,7 +160,13 @@ describe('payment-provider fake: webhook retries', () => {
     const receiver = await startReceiver(2);
     const fake = await startPaymentFake({ port: 0, webhookUrl: receiver.url, webhookSecret: WEBHOOK_SECRET, webhookRetryDelaysMs: [30, 60, 120] });
     try {
-      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
+      const stripe = createPaymentClient({
+        PAYMENT_API_KEY: SECRET_KEY,
+        PAYMENT_API_HOST: '127.0.0.1',
+        PAYMENT_API_PORT: fake.port,
+        PAYMENT_API_PROTOCOL: 'http',
+        PAYMENT_TIMEOUT_MS: 15_000,
+      });
       const pi = await stripe.paymentIntents.create({ amount: 1_000, currency: 'gbp' });
       const event = (await stripe.events.list({ type: 'payment_intent.created' })).data[0]!;
       expect((event.data.object as Stripe.PaymentIntent).id).toBe(pi.id);
@@ -156,7 +179,9 @@ describe('payment-provider fake: webhook retries', () => {
       }
       expect((await stripe.events.retrieve(event.id)).pending_webhooks).toBe(0);
 
-      const log = (await (await fetch(`http://127.0.0.1:${fake.port}/__fake/webhooks`)).json()) as { data: Array<{ event: string; attempt: number; status: number }> };
+      const log = (await (await fetch(`http://127.0.0.1:${fake.port}/__fake/webhooks`)).json()) as {
+        data: Array<{ event: string; attempt: number; status: number }>;
+      };
       expect(log.data.filter((a) => a.event === event.id).map((a) => [a.attempt, a.status])).toEqual([
         [1, 500],
         [2, 500],
@@ -171,7 +196,13 @@ describe('payment-provider fake: webhook retries', () => {
   it('sends nothing when no endpoint is configured, but still records events', async () => {
     const fake = await startPaymentFake({ port: 0 });
     try {
-      const stripe = createPaymentClient({ PAYMENT_API_KEY: SECRET_KEY, PAYMENT_API_HOST: '127.0.0.1', PAYMENT_API_PORT: fake.port, PAYMENT_API_PROTOCOL: 'http', PAYMENT_TIMEOUT_MS: 15_000 });
+      const stripe = createPaymentClient({
+        PAYMENT_API_KEY: SECRET_KEY,
+        PAYMENT_API_HOST: '127.0.0.1',
+        PAYMENT_API_PORT: fake.port,
+        PAYMENT_API_PROTOCOL: 'http',
+        PAYMENT_TIMEOUT_MS: 15_000,
+      });
       await stripe.paymentIntents.create({ amount: 1_000, currency: 'gbp', payment_method: 'pm_card_visa', capture_method: 'manual', confirm: true });
       const list = await stripe.events.list();
       expect(list.data.map((e) => e.type)).toContain('payment_intent.amount_capturable_updated');

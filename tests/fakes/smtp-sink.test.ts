@@ -3,8 +3,7 @@ import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { pgSinkStore, startSmtpSink, type SinkMessage, type SmtpSink } from '../../server/fakes/smtp-sink';
 
-const transportTo = (port: number) =>
-  nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
+const transportTo = (port: number) => nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
 
 describe('SMTP sink', () => {
   const received: SinkMessage[] = [];
@@ -115,9 +114,9 @@ describe('SMTP sink lifecycle', () => {
     await transportTo(port).sendMail({ from: 'a@nestkeeper.test', to: 'b@nestkeeper.test', subject: 'one', text: '1' });
     await first.close();
 
-    await expect(
-      transportTo(port).sendMail({ from: 'a@nestkeeper.test', to: 'b@nestkeeper.test', subject: 'lost', text: '2' }),
-    ).rejects.toMatchObject({ code: 'ESOCKET' });
+    await expect(transportTo(port).sendMail({ from: 'a@nestkeeper.test', to: 'b@nestkeeper.test', subject: 'lost', text: '2' })).rejects.toMatchObject({
+      code: 'ESOCKET',
+    });
 
     const second = await startSmtpSink({ port, store });
     expect(second.port).toBe(port);

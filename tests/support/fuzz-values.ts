@@ -122,16 +122,33 @@ export function breakages(s: JsonSchema, field: string, ids: IdPool): Breakage[]
   if (t === 'string') {
     out.push({ label: 'NUL', value: NUL_TEXT }, { label: 'lone high surrogate', value: LONE_HIGH }, { label: 'lone low surrogate', value: LONE_LOW });
     out.push({ label: 'oversize string', value: 'x'.repeat(300_000) }, { label: 'number for text', value: 12 }, { label: 'object for text', value: { a: 1 } });
-    if (isDateSchema(c)) for (const d of ['2026-02-30', '2026-13-01', '0000-01-01', '2026-02-29', '2026-00-10', '9999-12-31', '2026-2-3']) out.push({ label: `date ${d}`, value: d });
-    if (c.format === 'date-time') out.push({ label: 'datetime Feb 30', value: '2026-02-30T10:00:00Z' }, { label: 'datetime year 0', value: '0000-01-01T00:00:00Z' }, { label: 'datetime far', value: '+275760-09-13T00:00:00Z' });
+    if (isDateSchema(c))
+      for (const d of ['2026-02-30', '2026-13-01', '0000-01-01', '2026-02-29', '2026-00-10', '9999-12-31', '2026-2-3'])
+        out.push({ label: `date ${d}`, value: d });
+    if (c.format === 'date-time')
+      out.push(
+        { label: 'datetime Feb 30', value: '2026-02-30T10:00:00Z' },
+        { label: 'datetime year 0', value: '0000-01-01T00:00:00Z' },
+        { label: 'datetime far', value: '+275760-09-13T00:00:00Z' },
+      );
     if (isUuidSchema(c)) {
-      out.push({ label: 'unknown id', value: ids.unknown, names: 'missing record' }, { label: 'not a uuid', value: 'not-a-uuid' }, { label: 'nil uuid', value: '00000000-0000-0000-0000-000000000000', names: 'missing record' });
+      out.push(
+        { label: 'unknown id', value: ids.unknown, names: 'missing record' },
+        { label: 'not a uuid', value: 'not-a-uuid' },
+        { label: 'nil uuid', value: '00000000-0000-0000-0000-000000000000', names: 'missing record' },
+      );
       const foreign = ids.otherFirm(field);
       if (foreign) out.push({ label: "other firm's id", value: foreign, names: 'missing record' });
     }
     if (c.enum) out.push({ label: 'enum with NUL', value: `${String(c.enum[0])}\u0000` });
   } else if (t === 'number' || t === 'integer') {
-    out.push({ label: 'huge number', value: 1e308 }, { label: 'negative huge', value: -1e308 }, { label: 'past 2^53', value: 2 ** 53 + 2 }, { label: 'fraction', value: 0.5 }, { label: 'negative', value: -1 });
+    out.push(
+      { label: 'huge number', value: 1e308 },
+      { label: 'negative huge', value: -1e308 },
+      { label: 'past 2^53', value: 2 ** 53 + 2 },
+      { label: 'fraction', value: 0.5 },
+      { label: 'negative', value: -1 },
+    );
     out.push({ label: 'numeric string', value: '12' }, { label: 'overflowing literal', raw: '1e400' });
   } else if (t === 'boolean') {
     out.push({ label: 'string for boolean', value: 'true' }, { label: 'number for boolean', value: 1 });
@@ -145,7 +162,12 @@ export function breakages(s: JsonSchema, field: string, ids: IdPool): Breakage[]
       if (foreign) out.push({ label: "other firm's ids", value: [foreign], names: 'missing record' });
     }
   } else if (t === 'object') {
-    out.push({ label: 'array for object', value: [] }, { label: 'NUL key', value: { 'bad\u0000key': 1 } }, { label: 'surrogate key', value: { '\ud800': 'x' } }, { label: 'string for object', value: 'x' });
+    out.push(
+      { label: 'array for object', value: [] },
+      { label: 'NUL key', value: { 'bad\u0000key': 1 } },
+      { label: 'surrogate key', value: { '\ud800': 'x' } },
+      { label: 'string for object', value: 'x' },
+    );
   } else {
     out.push({ label: 'NUL', value: NUL_TEXT }, { label: 'object', value: { '\u0000': [1e308] } });
   }
@@ -161,7 +183,8 @@ export function leafPaths(s: JsonSchema, depth = 3, prefix: string[] = []): { pa
       out.push({ path: [...prefix, k], schema: v });
       const inner = concrete(v);
       if (typeOf(inner) === 'object') out.push(...leafPaths(inner, depth - 1, [...prefix, k]));
-      if (typeOf(inner) === 'array' && inner.items && typeOf(concrete(inner.items)) === 'object') out.push(...leafPaths(inner.items, depth - 1, [...prefix, k, '0']));
+      if (typeOf(inner) === 'array' && inner.items && typeOf(concrete(inner.items)) === 'object')
+        out.push(...leafPaths(inner.items, depth - 1, [...prefix, k, '0']));
     }
   }
   return out;

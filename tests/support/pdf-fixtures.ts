@@ -28,12 +28,21 @@ export const activeChanges: Record<string, Change> = {
   openActionJavaScript: (doc) => doc.catalog.set(PDFName.of('OpenAction'), doc.context.register(javaScript(doc))),
   // Document-level scripts: the /JavaScript name tree under /Names (§7.7.4).
   namesJavaScript: (doc) =>
-    doc.catalog.set(PDFName.of('Names'), doc.context.obj({ JavaScript: doc.context.obj({ Names: [PDFString.of('setup'), doc.context.register(javaScript(doc))] }) })),
+    doc.catalog.set(
+      PDFName.of('Names'),
+      doc.context.obj({ JavaScript: doc.context.obj({ Names: [PDFString.of('setup'), doc.context.register(javaScript(doc))] }) }),
+    ),
   // An attached file: pdf-lib writes /Names /EmbeddedFiles and an /EmbeddedFile stream (§7.11.4).
   embeddedFile: (doc) => doc.attach(Buffer.from('calc.exe would be here'), 'readme.txt', { mimeType: 'text/plain' }),
   // A link annotation on the page whose action launches a program (§12.6.4.5).
   launchLink: (doc) => {
-    const link = doc.context.obj({ Type: 'Annot', Subtype: 'Link', Rect: [50, 700, 300, 720], Border: [0, 0, 0], A: { S: 'Launch', F: PDFString.of('calc.exe') } });
+    const link = doc.context.obj({
+      Type: 'Annot',
+      Subtype: 'Link',
+      Rect: [50, 700, 300, 720],
+      Border: [0, 0, 0],
+      A: { S: 'Launch', F: PDFString.of('calc.exe') },
+    });
     doc.getPage(0).node.set(PDFName.of('Annots'), doc.context.obj([doc.context.register(link)]));
   },
   // A page's additional actions: JavaScript when the page opens (§12.6.3, Table 195).

@@ -27,4 +27,3 @@ export function pdfText(pdf: Buffer): string {
 }
 
 export const pdfPageCount = (pdf: Buffer) => mupdf.Document.openDocument(pdf, 'application/pdf').countPages();
-

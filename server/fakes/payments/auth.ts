@@ -2,8 +2,7 @@ import type { RequestHandler } from 'express';
 import { ProviderError } from './errors';
 import type { PaymentStore } from './store';
 
-const unauthorized = (message: string) =>
-  new ProviderError(401, { type: 'invalid_request_error', message });
+const unauthorized = (message: string) => new ProviderError(401, { type: 'invalid_request_error', message });
 
 /** Secret key from `Authorization: Bearer sk_test_…` (or Basic with the key as user name). */
 export function requireApiKey(store: PaymentStore): RequestHandler {

@@ -6,8 +6,19 @@ import { ageAuthorization } from './payment-intents';
 import { parseParams } from './params';
 import type { PaymentStore } from './store';
 
-const clockSchema = z.strictObject({ advanceSeconds: z.coerce.number().min(0).max(10 * 365 * 24 * 60 * 60) });
-const ageSchema = z.strictObject({ seconds: z.coerce.number().int().min(0).max(30 * 24 * 60 * 60) });
+const clockSchema = z.strictObject({
+  advanceSeconds: z.coerce
+    .number()
+    .min(0)
+    .max(10 * 365 * 24 * 60 * 60),
+});
+const ageSchema = z.strictObject({
+  seconds: z.coerce
+    .number()
+    .int()
+    .min(0)
+    .max(30 * 24 * 60 * 60),
+});
 
 /**
  * Test-only control endpoints of the payment-provider fake, outside /v1 (the

@@ -121,10 +121,7 @@ export const customers: PaymentResource = {
         metadata: applyMetadata(customer.metadata, p.metadata),
         invoice_settings: {
           ...customer.invoice_settings,
-          default_payment_method: textOrNull(
-            p.invoice_settings?.default_payment_method,
-            customer.invoice_settings.default_payment_method,
-          ),
+          default_payment_method: textOrNull(p.invoice_settings?.default_payment_method, customer.invoice_settings.default_payment_method),
         },
       };
       table.set(customer.id, updated);

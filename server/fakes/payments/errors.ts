@@ -54,21 +54,13 @@ export function fromZodError(error: ZodError, input: unknown): ProviderError {
   const issue = error.issues[0]!;
   if (issue.code === 'unrecognized_keys') {
     const param = paramPath([...issue.path, issue.keys[0]!]);
-    return new ProviderError(
-      400,
-      { type: 'invalid_request_error', code: 'parameter_unknown', param, message: `Unknown parameter: ${param}.` },
-      false,
-    );
+    return new ProviderError(400, { type: 'invalid_request_error', code: 'parameter_unknown', param, message: `Unknown parameter: ${param}.` }, false);
   }
   const param = paramPath(issue.path);
   let value: unknown = input;
   for (const key of issue.path) value = (value as Record<PropertyKey, unknown> | undefined)?.[key];
   if (value === undefined) {
-    return new ProviderError(
-      400,
-      { type: 'invalid_request_error', code: 'parameter_missing', param, message: `Required parameter missing: ${param}.` },
-      false,
-    );
+    return new ProviderError(400, { type: 'invalid_request_error', code: 'parameter_missing', param, message: `Required parameter missing: ${param}.` }, false);
   }
   return new ProviderError(
     400,

@@ -153,8 +153,7 @@ const listSchema = z.strictObject({
 });
 
 /** Matches `type` filters, which may end in `*` (https://docs.stripe.com/api/events/list). */
-const typeMatches = (pattern: string, type: string) =>
-  pattern.endsWith('*') ? type.startsWith(pattern.slice(0, -1)) : pattern === type;
+const typeMatches = (pattern: string, type: string) => (pattern.endsWith('*') ? type.startsWith(pattern.slice(0, -1)) : pattern === type);
 
 export const events: PaymentResource = {
   name: 'events',

@@ -17,9 +17,7 @@ export function idempotency(store: PaymentStore): RequestHandler {
     const header = req.get('idempotency-key');
     if (req.method !== 'POST' || !header) return next();
     if (header.length > 255) {
-      return next(
-        new ProviderError(400, { type: 'invalid_request_error', message: 'Idempotency-Key must be at most 255 characters.' }),
-      );
+      return next(new ProviderError(400, { type: 'invalid_request_error', message: 'Idempotency-Key must be at most 255 characters.' }));
     }
 
     const now = store.clock();

@@ -7,9 +7,7 @@ export const common = {
 };
 
 /** `metadata[k]=v` sets a key, `metadata[k]=` removes it, `metadata=` clears all. */
-export const metadataParam = z
-  .union([z.literal(''), z.record(z.string().min(1).max(40), z.string().max(500))])
-  .optional();
+export const metadataParam = z.union([z.literal(''), z.record(z.string().min(1).max(40), z.string().max(500))]).optional();
 
 export type Metadata = Record<string, string>;
 
@@ -26,8 +24,7 @@ export function applyMetadata(current: Metadata, update: z.infer<typeof metadata
 
 /** Empty string means "unset" for optional text fields in the form encoding. */
 export const nullableText = z.string().max(5000).optional();
-export const textOrNull = (v: string | undefined, current: string | null = null) =>
-  v === undefined ? current : v === '' ? null : v;
+export const textOrNull = (v: string | undefined, current: string | null = null) => (v === undefined ? current : v === '' ? null : v);
 
 /** Form values arrive as strings; `limit=10` → 10. */
 export const formInt = z
@@ -51,12 +48,16 @@ export const formAmount = formInt.pipe(z.number().int().min(1).max(99_999_999));
  */
 export function assertAcceptedAmount(amount: number, currency: string, param: string): void {
   // Parameter errors, so not kept for idempotent replay (like the schema's own).
-  const refuse = (message: string, code?: string) => new ProviderError(400, { type: 'invalid_request_error', message, param, ...(code ? { code } : {}) }, false);
+  const refuse = (message: string, code?: string) =>
+    new ProviderError(400, { type: 'invalid_request_error', message, param, ...(code ? { code } : {}) }, false);
   if (['bhd', 'jod', 'kwd', 'omr', 'tnd'].includes(currency) && amount % 10 !== 0) {
     throw refuse(`Invalid amount: ${currency.toUpperCase()} amounts must end in 0 (round to the nearest ten).`);
   }
   if (currency === 'isk' && amount % 100 !== 0) {
-    throw refuse('Invalid amount. Currency ISK has become effectively zero-decimal and charged amounts must be evenly divisible by 100.', 'invalid_charge_amount_no_decimal_compatible');
+    throw refuse(
+      'Invalid amount. Currency ISK has become effectively zero-decimal and charged amounts must be evenly divisible by 100.',
+      'invalid_charge_amount_no_decimal_compatible',
+    );
   }
 }
 
@@ -91,7 +92,10 @@ export function listPage<T extends { id: string; created: number }>(
   let end = sorted.length;
   if (params.starting_after) start = sorted.findIndex((o) => o.id === params.starting_after) + 1;
   if (params.ending_before) {
-    end = Math.max(0, sorted.findIndex((o) => o.id === params.ending_before));
+    end = Math.max(
+      0,
+      sorted.findIndex((o) => o.id === params.ending_before),
+    );
     start = Math.max(start, end - limit);
   }
   const data = sorted.slice(start, Math.min(end, start + limit));

@@ -25,13 +25,7 @@ import type { PaymentStore } from './store';
 
 /** Statuses, https://docs.stripe.com/payments/paymentintents/lifecycle. */
 export type PaymentIntentStatus =
-  | 'requires_payment_method'
-  | 'requires_confirmation'
-  | 'requires_action'
-  | 'processing'
-  | 'requires_capture'
-  | 'canceled'
-  | 'succeeded';
+  'requires_payment_method' | 'requires_confirmation' | 'requires_action' | 'processing' | 'requires_capture' | 'canceled' | 'succeeded';
 
 /** PaymentIntent object, https://docs.stripe.com/api/payment_intents/object. */
 export type PaymentIntent = {
@@ -128,7 +122,10 @@ export function ageAuthorization(store: PaymentStore, id: string, seconds: numbe
   const charge = intent.latest_charge ? chargeTable(store).get(intent.latest_charge) : undefined;
   if (intent.status !== 'requires_capture' || !charge) return intent;
   const card = charge.payment_method_details.card;
-  updateCharge(store, charge.id, { created: charge.created - seconds, payment_method_details: { ...charge.payment_method_details, card: { ...card, capture_before: (card.capture_before ?? store.nowSeconds()) - seconds } } });
+  updateCharge(store, charge.id, {
+    created: charge.created - seconds,
+    payment_method_details: { ...charge.payment_method_details, card: { ...card, capture_before: (card.capture_before ?? store.nowSeconds()) - seconds } },
+  });
   return save(store, { ...intent, created: intent.created - seconds });
 }
 
@@ -169,8 +166,8 @@ function render(store: PaymentStore, intent: PaymentIntent, expand: string[] | u
   const out: Record<string, unknown> = { ...intent };
   for (const path of expand) {
     if (path === 'latest_charge') out.latest_charge = intent.latest_charge ? findCharge(store, intent.latest_charge) : null;
-    else if (path === 'payment_method') out.payment_method = intent.payment_method ? paymentMethodTable(store).get(intent.payment_method) ?? null : null;
-    else if (path === 'customer') out.customer = intent.customer ? customerTable(store).get(intent.customer) ?? null : null;
+    else if (path === 'payment_method') out.payment_method = intent.payment_method ? (paymentMethodTable(store).get(intent.payment_method) ?? null) : null;
+    else if (path === 'customer') out.customer = intent.customer ? (customerTable(store).get(intent.customer) ?? null) : null;
     else throw invalidRequest(`This property cannot be expanded (${path}).`, { param: 'expand' });
   }
   return out;
@@ -303,8 +300,7 @@ const cancelSchema = z.strictObject({
 const retrieveSchema = z.strictObject({ ...common, client_secret: z.string().optional() });
 const listSchema = z.strictObject({ ...common, ...listParams, customer: z.string().optional() });
 
-const forcedDecline = (res: Response): string | undefined =>
-  typeof res.locals.forcedDecline === 'string' ? res.locals.forcedDecline : undefined;
+const forcedDecline = (res: Response): string | undefined => (typeof res.locals.forcedDecline === 'string' ? res.locals.forcedDecline : undefined);
 
 export const paymentIntents: PaymentResource = {
   name: 'payment_intents',
@@ -356,18 +352,14 @@ export const paymentIntents: PaymentResource = {
       });
       const cause = causeOf(req, res);
       emitEvent(store, 'payment_intent.created', intent, cause);
-      const result = p.confirm
-        ? confirmIntent(store, intent, { offSession: p.off_session, forcedDecline: forcedDecline(res) }, cause)
-        : intent;
+      const result = p.confirm ? confirmIntent(store, intent, { offSession: p.off_session, forcedDecline: forcedDecline(res) }, cause) : intent;
       res.json(render(store, result, p.expand));
     });
 
     // https://docs.stripe.com/api/payment_intents/list
     router.get('/v1/payment_intents', (req, res) => {
       const p = parseParams(listSchema, req.query);
-      const all = [...table.values()]
-        .filter((i) => p.customer === undefined || i.customer === p.customer)
-        .map((i) => expireIfDue(store, i));
+      const all = [...table.values()].filter((i) => p.customer === undefined || i.customer === p.customer).map((i) => expireIfDue(store, i));
       res.json(listPage('/v1/payment_intents', all, p));
     });
 
@@ -436,10 +428,11 @@ export const paymentIntents: PaymentResource = {
       const amount = p.amount_to_capture ?? intent.amount_capturable;
       assertAcceptedAmount(amount, intent.currency, 'amount_to_capture');
       if (amount > intent.amount_capturable) {
-        throw invalidRequest(
-          `The amount to capture (${amount}) must be less than or equal to the amount capturable (${intent.amount_capturable}).`,
-          { code: 'amount_too_large', param: 'amount_to_capture', payment_intent: intent },
-        );
+        throw invalidRequest(`The amount to capture (${amount}) must be less than or equal to the amount capturable (${intent.amount_capturable}).`, {
+          code: 'amount_too_large',
+          param: 'amount_to_capture',
+          payment_intent: intent,
+        });
       }
       const charge: Charge = updateCharge(store, intent.latest_charge!, { captured: true, amount_captured: amount });
       const captured = save(store, {

@@ -70,10 +70,10 @@ const outcomeTable = (store: PaymentStore) => store.table<CardOutcome>('payment_
 function createFromToken(store: PaymentStore, token: string, billing: BillingParams | undefined, metadata: Metadata): PaymentMethod {
   const card = TEST_TOKENS[token];
   if (!card) {
-    throw invalidRequest(
-      `No such token: '${token}'. This payment fake knows the test tokens ${Object.keys(TEST_TOKENS).join(', ')}.`,
-      { code: 'resource_missing', param: 'card[token]' },
-    );
+    throw invalidRequest(`No such token: '${token}'. This payment fake knows the test tokens ${Object.keys(TEST_TOKENS).join(', ')}.`, {
+      code: 'resource_missing',
+      param: 'card[token]',
+    });
   }
   const createdYear = new Date(store.clock()).getUTCFullYear();
   const pm: PaymentMethod = {
@@ -191,11 +191,9 @@ export const paymentMethods: PaymentResource = {
       const p = parseParams(attachSchema, req.body);
       findCustomer(store, p.customer);
       if (pm.customer && pm.customer !== p.customer) {
-        throw stateError(
-          'payment_method_unexpected_state',
-          'This PaymentMethod is already attached to another customer; detach it first.',
-          { param: 'customer' },
-        );
+        throw stateError('payment_method_unexpected_state', 'This PaymentMethod is already attached to another customer; detach it first.', {
+          param: 'customer',
+        });
       }
       const updated: PaymentMethod = { ...pm, customer: p.customer };
       table.set(pm.id, updated);

@@ -26,15 +26,14 @@ export type Refund = {
 
 export const refundTable = (store: PaymentStore) => store.table<Refund>('refunds');
 
-const createSchema = z
-  .strictObject({
-    ...common,
-    payment_intent: z.string().optional(),
-    charge: z.string().optional(),
-    amount: formAmount.optional(),
-    reason: z.enum(['duplicate', 'fraudulent', 'requested_by_customer']).optional(),
-    metadata: metadataParam,
-  });
+const createSchema = z.strictObject({
+  ...common,
+  payment_intent: z.string().optional(),
+  charge: z.string().optional(),
+  amount: formAmount.optional(),
+  reason: z.enum(['duplicate', 'fraudulent', 'requested_by_customer']).optional(),
+  metadata: metadataParam,
+});
 const retrieveSchema = z.strictObject(common);
 const listSchema = z.strictObject({ ...common, ...listParams, payment_intent: z.string().optional(), charge: z.string().optional() });
 
@@ -84,10 +83,10 @@ export const refunds: PaymentResource = {
       const amount = p.amount ?? refundable;
       assertAcceptedAmount(amount, charge.currency, 'amount');
       if (amount > refundable) {
-        throw invalidRequest(
-          `Refund amount (${amount}) is greater than the unrefunded amount on charge ${charge.id} (${refundable}).`,
-          { code: 'amount_too_large', param: 'amount' },
-        );
+        throw invalidRequest(`Refund amount (${amount}) is greater than the unrefunded amount on charge ${charge.id} (${refundable}).`, {
+          code: 'amount_too_large',
+          param: 'amount',
+        });
       }
       const refund: Refund = {
         id: store.newId('re'),

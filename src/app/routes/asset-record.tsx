@@ -35,8 +35,7 @@ export default function AssetRecordRoute() {
         title={`Equipment record · ${asset.assetTag}`}
         description={
           <>
-            What {organization.name} holds on this item, item by item as ISO/IEC 17025:2017 §6.4.13 asks. Put together{' '}
-            {dateTime(generatedAt)}.
+            What {organization.name} holds on this item, item by item as ISO/IEC 17025:2017 §6.4.13 asks. Put together {dateTime(generatedAt)}.
           </>
         }
         actions={

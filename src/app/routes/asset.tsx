@@ -35,7 +35,15 @@ export default function AssetRoute() {
   const queryClient = useQueryClient();
 
   if (asset.isPending) return <LoadingPanel label="Loading the asset…" />;
-  if (asset.isError) return <LoadFailure error={asset.error} thing="asset" notFound="No asset in your fleet has this address. It may have been mistyped." back={{ to: '/fleet', label: 'Back to all assets' }} />;
+  if (asset.isError)
+    return (
+      <LoadFailure
+        error={asset.error}
+        thing="asset"
+        notFound="No asset in your fleet has this address. It may have been mistyped."
+        back={{ to: '/fleet', label: 'Back to all assets' }}
+      />
+    );
 
   const a = asset.data;
   const canWrite = can(user.role, 'fleet.write') && a.status !== 'retired';
@@ -120,24 +128,22 @@ export default function AssetRoute() {
         <CalibrationHistory assetId={a.id} />
         <AssetChecks asset={a} />
         <Panel title="Incidents">
-          <IncidentList
-            params={{ assetId: a.id, limit: 20, offset: 0 }}
-            showAsset={false}
-            empty="No damage or loss has been reported for this item."
-          />
+          <IncidentList params={{ assetId: a.id, limit: 20, offset: 0 }} showAsset={false} empty="No damage or loss has been reported for this item." />
         </Panel>
         <div className="lg:col-span-2">
           <AssetHistory assetId={a.id} />
         </div>
       </div>
 
-      {canWrite ? <RetireDialog
+      {canWrite ? (
+        <RetireDialog
           asset={a}
           open={retiring}
           onClose={() => setRetiring(false)}
           // A retired member changes its kit's readiness.
           onRetired={() => void queryClient.invalidateQueries({ queryKey: kitsKeys.all })}
-        /> : null}
+        />
+      ) : null}
     </>
   );
 }

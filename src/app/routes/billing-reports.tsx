@@ -33,7 +33,10 @@ export default function BillingReportsRoute() {
 
   return (
     <>
-      <PageHeader title="Revenue and use" description="Invoiced rental revenue per kit per month, and how many of the days each kit could have been out it was booked." />
+      <PageHeader
+        title="Revenue and use"
+        description="Invoiced rental revenue per kit per month, and how many of the days each kit could have been out it was booked."
+      />
       <div className="mb-4 flex flex-wrap items-end gap-3">
         {(['from', 'to'] as const).map((key) => (
           <div key={key} className="flex flex-col gap-1">
@@ -62,7 +65,9 @@ export default function BillingReportsRoute() {
               revenue.data.items.length ? (
                 <RevenueChart rows={revenue.data.items} from={from} to={to} currency={organization.currency} />
               ) : (
-                <p className="text-ink-700">No invoices were issued from {monthLong(from)} to {monthLong(to)}.</p>
+                <p className="text-ink-700">
+                  No invoices were issued from {monthLong(from)} to {monthLong(to)}.
+                </p>
               )
             ) : null}
           </Panel>

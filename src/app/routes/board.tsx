@@ -71,10 +71,7 @@ export default function BoardRoute() {
     [setParams],
   );
 
-  const onPick = useCallback(
-    (target: BoardTarget, startsOn: string, endsOn: string) => navigate(bookFormHref(target, startsOn, endsOn)),
-    [navigate],
-  );
+  const onPick = useCallback((target: BoardTarget, startsOn: string, endsOn: string) => navigate(bookFormHref(target, startsOn, endsOn)), [navigate]);
 
   // With a type chosen, only bookings that carry an item of that type are listed.
   const shownBookings = useMemo(() => {
@@ -122,7 +119,12 @@ export default function BoardRoute() {
           <label htmlFor={weeksId} className="text-sm font-semibold text-ink-800">
             Weeks shown
           </label>
-          <select id={weeksId} value={weeks} onChange={(e) => setParam({ weeks: e.target.value === '4' ? null : e.target.value })} className="min-h-10 rounded-md border border-paper-line bg-card px-2">
+          <select
+            id={weeksId}
+            value={weeks}
+            onChange={(e) => setParam({ weeks: e.target.value === '4' ? null : e.target.value })}
+            className="min-h-10 rounded-md border border-paper-line bg-card px-2"
+          >
             {weekChoices.map((w) => (
               <option key={w} value={w}>
                 {w} weeks
@@ -131,7 +133,12 @@ export default function BoardRoute() {
           </select>
         </div>
         <AssetTypeSelect label="Show type" anyLabel="All types" value={type} onChange={(t) => setParam({ type: t || null })} />
-        <Button className="ml-auto" aria-pressed={listView} variant={listView ? 'primary' : 'secondary'} onClick={() => setParam({ view: listView ? null : 'list' })}>
+        <Button
+          className="ml-auto"
+          aria-pressed={listView}
+          variant={listView ? 'primary' : 'secondary'}
+          onClick={() => setParam({ view: listView ? null : 'list' })}
+        >
           List view
         </Button>
       </div>
@@ -141,8 +148,16 @@ export default function BoardRoute() {
         {windowBookings.data ? ` · ${shownBookings?.length ?? 0} ${shownBookings?.length === 1 ? 'booking' : 'bookings'}` : ''}
       </p>
 
-      {assets.isError ? <Notice tone="error" className="mb-3">{assets.error.message}</Notice> : null}
-      {windowBookings.isError ? <Notice tone="error" className="mb-3">{windowBookings.error.message}</Notice> : null}
+      {assets.isError ? (
+        <Notice tone="error" className="mb-3">
+          {assets.error.message}
+        </Notice>
+      ) : null}
+      {windowBookings.isError ? (
+        <Notice tone="error" className="mb-3">
+          {windowBookings.error.message}
+        </Notice>
+      ) : null}
       {assets.data && assets.data.total > assets.data.items.length ? (
         <Notice tone="info" className="mb-3">
           The board shows the first {assets.data.items.length} of {assets.data.total} items. Choose a type to see the rest.

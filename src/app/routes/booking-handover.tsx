@@ -62,8 +62,7 @@ export default function BookingHandoverRoute() {
         {back}
         <PageHeader title={title} />
         <Notice tone="info">
-          {mode === 'checkout' ? 'Only a reserved booking can be checked out.' : 'Only a booking that is out can be taken back.'} This one is{' '}
-          {b.state}.
+          {mode === 'checkout' ? 'Only a reserved booking can be checked out.' : 'Only a booking that is out can be taken back.'} This one is {b.state}.
         </Notice>
       </>
     );

@@ -39,7 +39,10 @@ export default function BookingNewRoute() {
         <ArrowLeftIcon size={14} />
         Booking board
       </Link>
-      <PageHeader title="Book kit" description="Reserve a kit or separate items for whole days. Nestkeeper checks every item against calibration, holds and other bookings as you choose." />
+      <PageHeader
+        title="Book kit"
+        description="Reserve a kit or separate items for whole days. Nestkeeper checks every item against calibration, holds and other bookings as you choose."
+      />
       {error ? <Notice tone="error">{error.message}</Notice> : null}
       {kits.isPending || (assetId && asset.isPending) || jobs.isPending ? (
         <LoadingPanel label="Loading kits and jobs…" />
@@ -52,7 +55,13 @@ export default function BookingNewRoute() {
             initial={initial}
             onBooked={(booking) => navigate(`/bookings/${booking.id}`)}
             renderNewJob={({ startsOn, endsOn, onCreated, onCancel }) => (
-              <JobForm me={{ id: user.id, name: user.name }} defaults={{ startsOn, endsOn }} onSaved={(job) => onCreated(job.id)} onCancel={onCancel} submitLabel="Add job" />
+              <JobForm
+                me={{ id: user.id, name: user.name }}
+                defaults={{ startsOn, endsOn }}
+                onSaved={(job) => onCreated(job.id)}
+                onCancel={onCancel}
+                submitLabel="Add job"
+              />
             )}
           />
         </div>

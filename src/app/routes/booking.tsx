@@ -20,7 +20,15 @@ export default function BookingRoute() {
   const job = useSiteJob(booking.data?.jobId);
 
   if (booking.isPending) return <LoadingPanel label="Loading the booking…" />;
-  if (booking.isError) return <LoadFailure error={booking.error} thing="booking" notFound="No booking of your firm has this address." back={{ to: '/board', label: 'Back to the booking board' }} />;
+  if (booking.isError)
+    return (
+      <LoadFailure
+        error={booking.error}
+        thing="booking"
+        notFound="No booking of your firm has this address."
+        back={{ to: '/board', label: 'Back to the booking board' }}
+      />
+    );
 
   const b = booking.data;
   const handOver = can(user.role, 'bookings.hand_over');

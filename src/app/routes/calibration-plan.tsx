@@ -89,7 +89,11 @@ export default function CalibrationPlanRoute() {
           ) : null}
           {a.status === 'at_lab' ? (
             <Notice tone="info" title="At the lab now">
-              {a.assetTag} is at the lab. <Link to={`/fleet/${a.id}/calibrate`} className="font-semibold underline">Record its calibration</Link> when the certificate arrives.
+              {a.assetTag} is at the lab.{' '}
+              <Link to={`/fleet/${a.id}/calibrate`} className="font-semibold underline">
+                Record its calibration
+              </Link>{' '}
+              when the certificate arrives.
             </Notice>
           ) : (
             <LabWindowFinder assetId={a.id} assetTag={a.assetTag} windows={w} canPlan={canPlan && a.status !== 'retired'} onPlanned={(t) => setPlanned(t.id)} />

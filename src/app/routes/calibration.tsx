@@ -115,7 +115,13 @@ export default function CalibrationReviewRoute() {
                       ({g.rows.filter((x) => x.state === 'overdue').length} overdue, {g.rows.filter((x) => x.state === 'due_soon').length} due soon)
                     </span>
                   </h3>
-                  <DueGrid rows={g.rows} label={`Due in ${g.title}`} exportFileName={`due-${g.title.toLowerCase().replace(/[^a-z0-9]+/g, '-')}.csv`} canPlan={canPlan} emptyMessage="Nothing due." />
+                  <DueGrid
+                    rows={g.rows}
+                    label={`Due in ${g.title}`}
+                    exportFileName={`due-${g.title.toLowerCase().replace(/[^a-z0-9]+/g, '-')}.csv`}
+                    canPlan={canPlan}
+                    emptyMessage="Nothing due."
+                  />
                 </section>
               ))}
             </div>
@@ -126,7 +132,13 @@ export default function CalibrationReviewRoute() {
               <DueGrid rows={r.overdue} label="Overdue items" exportFileName="overdue.csv" canPlan={canPlan} emptyMessage="Nothing is overdue." />
             </Panel>
             <Panel title="Due soon">
-              <DueGrid rows={r.dueSoon} label="Items due soon" exportFileName="due-soon.csv" canPlan={canPlan} emptyMessage={`Nothing falls due in the next ${r.dueSoonDays} days.`} />
+              <DueGrid
+                rows={r.dueSoon}
+                label="Items due soon"
+                exportFileName="due-soon.csv"
+                canPlan={canPlan}
+                emptyMessage={`Nothing falls due in the next ${r.dueSoonDays} days.`}
+              />
             </Panel>
           </>
         )}

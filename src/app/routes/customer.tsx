@@ -29,7 +29,14 @@ export default function CustomerRoute() {
 
   if (customer.isPending) return <LoadingPanel label="Loading the customer…" />;
   if (customer.isError) {
-    return <LoadFailure error={customer.error} thing="customer" notFound="No customer of your firm has this address." back={{ to: '/customers', label: 'Back to customers and rates' }} />;
+    return (
+      <LoadFailure
+        error={customer.error}
+        thing="customer"
+        notFound="No customer of your firm has this address."
+        back={{ to: '/customers', label: 'Back to customers and rates' }}
+      />
+    );
   }
 
   const c = customer.data;
@@ -72,11 +79,24 @@ export default function CustomerRoute() {
           />
         </Panel>
         <Panel title="Rentals">
-          {rentals.isError ? <Notice tone="error" className="mb-3">{rentals.error.message}</Notice> : null}
-          <RentalsGrid rows={rentals.data?.items} label={`Rentals of ${c.company}`} emptyMessage="No rentals for this customer yet." exportFileName="nestkeeper-customer-rentals.csv" />
+          {rentals.isError ? (
+            <Notice tone="error" className="mb-3">
+              {rentals.error.message}
+            </Notice>
+          ) : null}
+          <RentalsGrid
+            rows={rentals.data?.items}
+            label={`Rentals of ${c.company}`}
+            emptyMessage="No rentals for this customer yet."
+            exportFileName="nestkeeper-customer-rentals.csv"
+          />
         </Panel>
         <Panel title="Invoices and credit notes">
-          {invoices.isError ? <Notice tone="error" className="mb-3">{invoices.error.message}</Notice> : null}
+          {invoices.isError ? (
+            <Notice tone="error" className="mb-3">
+              {invoices.error.message}
+            </Notice>
+          ) : null}
           <InvoicesGrid rows={invoices.data?.items} />
         </Panel>
       </div>

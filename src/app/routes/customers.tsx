@@ -38,7 +38,11 @@ export default function CustomersRoute() {
           {saved}
         </Notice>
       ) : null}
-      {error ? <Notice tone="error" className="mb-3">{error.message}</Notice> : null}
+      {error ? (
+        <Notice tone="error" className="mb-3">
+          {error.message}
+        </Notice>
+      ) : null}
       <div className="flex flex-col gap-5">
         <Panel
           title="Customers"

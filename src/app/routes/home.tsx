@@ -175,10 +175,7 @@ export default function HomeRoute() {
           <ul className="grid gap-2 md:grid-cols-3">
             {home.links.map((link) => (
               <li key={link.to}>
-                <Link
-                  to={link.to}
-                  className="block rounded-lg border border-paper-line bg-card px-4 py-3 hover:border-brass-deep hover:bg-brass-wash"
-                >
+                <Link to={link.to} className="block rounded-lg border border-paper-line bg-card px-4 py-3 hover:border-brass-deep hover:bg-brass-wash">
                   <span className="block font-semibold text-ink-900">{link.label}</span>
                   <span className="block text-sm text-ink-700">{link.note}</span>
                 </Link>

@@ -50,7 +50,8 @@ export default function ImpactReviewRoute() {
       {back}
       <PageHeader title={`Impact review: ${tag}`} description={impactScope(review, tag)} />
       <p className="mb-4 text-sm text-ink-700">
-        Re-assess results given with equipment later found unfit (ISO 9001:2015 §7.1.5.2) and handle the work as nonconforming where needed (ISO/IEC 17025:2017 §7.10).
+        Re-assess results given with equipment later found unfit (ISO 9001:2015 §7.1.5.2) and handle the work as nonconforming where needed (ISO/IEC 17025:2017
+        §7.10).
       </p>
       {!can(user.role, 'impact.review') ? (
         <Notice tone="info" className="mb-4">

@@ -27,8 +27,18 @@ export default function IncidentNewRoute() {
       </>
     );
   } else if (asset.isPending) body = <LoadingPanel label="Loading the item…" />;
-  else if (asset.isError) body = <Notice tone="error" title="The item could not be loaded">{asset.error.message}</Notice>;
-  else if (asset.data.status === 'retired') body = <Notice tone="info" title="Retired">{asset.data.assetTag} has left the fleet.</Notice>;
+  else if (asset.isError)
+    body = (
+      <Notice tone="error" title="The item could not be loaded">
+        {asset.error.message}
+      </Notice>
+    );
+  else if (asset.data.status === 'retired')
+    body = (
+      <Notice tone="info" title="Retired">
+        {asset.data.assetTag} has left the fleet.
+      </Notice>
+    );
   else body = <ReportIncidentForm asset={asset.data} bookingId={params.get('bookingId')} />;
 
   return (

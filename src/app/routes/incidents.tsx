@@ -40,7 +40,9 @@ export default function IncidentsRoute() {
       {incidents.isError ? <Notice tone="error">{incidents.error.message}</Notice> : null}
       <IncidentsGrid rows={incidents.data?.items} loading={incidents.isFetching && !incidents.data} />
       {incidents.data && incidents.data.total > incidents.data.items.length ? (
-        <p className="mt-2 text-sm text-ink-700">Showing the latest {incidents.data.items.length} of {incidents.data.total}.</p>
+        <p className="mt-2 text-sm text-ink-700">
+          Showing the latest {incidents.data.items.length} of {incidents.data.total}.
+        </p>
       ) : null}
     </>
   );

@@ -55,19 +55,13 @@ export default function KitRoute() {
         />
         <div className="flex flex-col gap-4">
           <ReadinessSummary readiness={k.readiness} memberCount={k.members.length} />
-          <KitMembers
-            kit={k}
-            canWrite={canWrite}
-            onMembersChanged={() => void queryClient.invalidateQueries({ queryKey: fleetKeys.all })}
-          />
+          <KitMembers kit={k} canWrite={canWrite} onMembersChanged={() => void queryClient.invalidateQueries({ queryKey: fleetKeys.all })} />
           {hasCase ? <HeavyCaseCaution /> : null}
           <ShippingSheetPanel kitId={k.id} />
         </div>
       </div>
       <PackingList kit={k} organizationName={organization.name} />
-      {canWrite ? (
-        <KitFormDialog key={k.updatedAt} open={renaming} kit={k} onClose={() => setRenaming(false)} onSaved={() => setRenaming(false)} />
-      ) : null}
+      {canWrite ? <KitFormDialog key={k.updatedAt} open={renaming} kit={k} onClose={() => setRenaming(false)} onSaved={() => setRenaming(false)} /> : null}
     </>
   );
 }

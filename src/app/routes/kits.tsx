@@ -37,9 +37,7 @@ export default function KitsRoute() {
       ) : (
         <KitsTable kits={kits.data?.items} onOpen={(kit) => navigate(`/kits/${kit.id}`)} />
       )}
-      {canWrite ? (
-        <KitFormDialog open={creating} onClose={() => setCreating(false)} onSaved={(kit) => navigate(`/kits/${kit.id}`)} />
-      ) : null}
+      {canWrite ? <KitFormDialog open={creating} onClose={() => setCreating(false)} onSaved={(kit) => navigate(`/kits/${kit.id}`)} /> : null}
     </>
   );
 }

@@ -26,7 +26,10 @@ export default function RentalNewRoute() {
         <ArrowLeftIcon size={14} />
         Rentals
       </Link>
-      <PageHeader title="New rental" description="Rent a kit or separate items to a customer for whole days. The price follows as you choose; creating the rental reserves the kit." />
+      <PageHeader
+        title="New rental"
+        description="Rent a kit or separate items to a customer for whole days. The price follows as you choose; creating the rental reserves the kit."
+      />
       {kits.isError ? <Notice tone="error">{kits.error.message}</Notice> : null}
       {kits.isPending ? (
         <LoadingPanel label="Loading kits…" />
@@ -36,7 +39,11 @@ export default function RentalNewRoute() {
             kits={kits.data.items}
             fleet={assetsQueryOptions}
             initial={initial}
-            onCreated={(rental) => navigate(`/rentals/${rental.id}`, { state: { notice: `Rental ${rental.number} for ${rental.customer.company} is reserved. Take the deposit when the kit is handed over.` } })}
+            onCreated={(rental) =>
+              navigate(`/rentals/${rental.id}`, {
+                state: { notice: `Rental ${rental.number} for ${rental.customer.company} is reserved. Take the deposit when the kit is handed over.` },
+              })
+            }
           />
         </div>
       ) : null}

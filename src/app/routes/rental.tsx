@@ -26,7 +26,14 @@ export default function RentalRoute() {
 
   if (rental.isPending) return <LoadingPanel label="Loading the rental…" />;
   if (rental.isError) {
-    return <LoadFailure error={rental.error} thing="rental" notFound="No rental of your firm has this address." back={{ to: '/rentals', label: 'Back to rentals' }} />;
+    return (
+      <LoadFailure
+        error={rental.error}
+        thing="rental"
+        notFound="No rental of your firm has this address."
+        back={{ to: '/rentals', label: 'Back to rentals' }}
+      />
+    );
   }
 
   const r = rental.data;
@@ -59,9 +66,28 @@ export default function RentalRoute() {
               { term: 'State', value: <RentalStateChip state={r.state} /> },
               { term: 'Customer', value: `${r.customer.company}${r.customer.billingContact ? `, ${r.customer.billingContact}` : ''}` },
               { term: 'Invoices to', value: r.customer.billingEmail, mono: true },
-              { term: 'Dates', value: `${formatCalendarDate(r.startsOn)} – ${formatCalendarDate(r.endsOn)} (${r.quote.days} ${r.quote.days === 1 ? 'day' : 'days'}, both included)` },
-              { term: 'Kit', value: r.kit ? <Link to={`/kits/${r.kit.id}`} className="text-brass-deep underline">{r.kit.name}</Link> : 'Separate items' },
-              { term: 'Booking', value: <Link to={`/bookings/${r.bookingId}`} className="text-brass-deep underline">Packing list and hand-over</Link> },
+              {
+                term: 'Dates',
+                value: `${formatCalendarDate(r.startsOn)} – ${formatCalendarDate(r.endsOn)} (${r.quote.days} ${r.quote.days === 1 ? 'day' : 'days'}, both included)`,
+              },
+              {
+                term: 'Kit',
+                value: r.kit ? (
+                  <Link to={`/kits/${r.kit.id}`} className="text-brass-deep underline">
+                    {r.kit.name}
+                  </Link>
+                ) : (
+                  'Separate items'
+                ),
+              },
+              {
+                term: 'Booking',
+                value: (
+                  <Link to={`/bookings/${r.bookingId}`} className="text-brass-deep underline">
+                    Packing list and hand-over
+                  </Link>
+                ),
+              },
               { term: 'Checked out', value: r.checkedOutAt ? dateTime(r.checkedOutAt) : null },
               { term: 'Returned', value: r.returnedAt ? dateTime(r.returnedAt) : null },
               { term: 'Note', value: r.note },

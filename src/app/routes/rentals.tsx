@@ -11,7 +11,11 @@ import { can } from '../../lib/roles';
 
 const views: { value: RentalListView; label: string; empty: string }[] = [
   { value: 'open', label: 'Open rentals', empty: 'No open rentals: nothing is reserved or out with a renter.' },
-  { value: 'to_settle', label: 'Deposits to settle at return', empty: 'Nothing to settle: every returned rental has its deposit settled and its invoice issued.' },
+  {
+    value: 'to_settle',
+    label: 'Deposits to settle at return',
+    empty: 'Nothing to settle: every returned rental has its deposit settled and its invoice issued.',
+  },
   { value: 'all', label: 'All rentals', empty: 'No rentals yet.' },
 ];
 
@@ -54,7 +58,13 @@ export default function RentalsRoute() {
         ))}
       </div>
       {rentals.isError ? <Notice tone="error">{rentals.error.message}</Notice> : null}
-      <RentalsGrid key={view.value} rows={rentals.data?.items} label={view.label} emptyMessage={view.empty} exportFileName={`nestkeeper-rentals-${view.value}.csv`} />
+      <RentalsGrid
+        key={view.value}
+        rows={rentals.data?.items}
+        label={view.label}
+        emptyMessage={view.empty}
+        exportFileName={`nestkeeper-rentals-${view.value}.csv`}
+      />
       {rentals.data && rentals.data.total > rentals.data.items.length ? (
         <p className="mt-2 text-sm text-ink-700">
           Showing {rentals.data.items.length} of {rentals.data.total}.

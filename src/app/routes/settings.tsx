@@ -14,7 +14,10 @@ export default function SettingsRoute() {
   const settings = useSettings();
   return (
     <>
-      <PageHeader title="Settings" description="Firm-wide choices: how dates and due states are worked out, how field checks are judged, which labs calibrate your kit, how calibration intervals are reviewed, and the tax and deposit terms of rentals." />
+      <PageHeader
+        title="Settings"
+        description="Firm-wide choices: how dates and due states are worked out, how field checks are judged, which labs calibrate your kit, how calibration intervals are reviewed, and the tax and deposit terms of rentals."
+      />
       {settings.isPending ? <LoadingPanel /> : null}
       {settings.isError ? (
         <Notice tone="error" title="The settings could not be loaded">

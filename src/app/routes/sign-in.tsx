@@ -15,9 +15,7 @@ export default function SignInRoute() {
         <p className="mb-5 text-sm text-ink-700">Use the e-mail address your firm registered for you.</p>
         <SignInForm onSignedIn={() => navigate('/', { replace: true })} />
       </main>
-      <p className="mt-6 max-w-sm text-center text-sm text-ink-300">
-        Forgot your password? Ask your firm's owner to set a new one for you.
-      </p>
+      <p className="mt-6 max-w-sm text-center text-sm text-ink-300">Forgot your password? Ask your firm's owner to set a new one for you.</p>
     </div>
   );
 }

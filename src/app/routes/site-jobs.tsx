@@ -66,7 +66,10 @@ export default function SiteJobsRoute() {
               { term: 'E-mail', value: editing.contactEmail, mono: true },
               { term: 'Site address', value: editing.siteAddress },
               { term: 'On site', value: `${formatCalendarDate(editing.startsOn)} – ${formatCalendarDate(editing.endsOn)}` },
-              { term: 'Lead technician', value: editing.leadTechnicianId === user.id ? `You (${user.name})` : editing.leadTechnicianId ? 'Another technician' : null },
+              {
+                term: 'Lead technician',
+                value: editing.leadTechnicianId === user.id ? `You (${user.name})` : editing.leadTechnicianId ? 'Another technician' : null,
+              },
               { term: 'Notes', value: editing.notes },
             ]}
           />

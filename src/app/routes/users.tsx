@@ -6,10 +6,7 @@ export default function UsersRoute() {
   const { user, organization } = useSession();
   return (
     <>
-      <PageHeader
-        title="Users"
-        description="Everyone who can sign in to your firm's Nestkeeper, and what their role lets them do."
-      />
+      <PageHeader title="Users" description="Everyone who can sign in to your firm's Nestkeeper, and what their role lets them do." />
       <UsersAdmin currentUserId={user.id} firmName={organization.name} />
     </>
   );

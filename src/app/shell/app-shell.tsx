@@ -53,10 +53,7 @@ export function AppShell() {
             </button>
           </div>
         </div>
-        <div
-          aria-hidden="true"
-          className={`h-0.5 bg-brass transition-opacity ${loadingPage ? 'animate-pulse opacity-100' : 'opacity-0'}`}
-        />
+        <div aria-hidden="true" className={`h-0.5 bg-brass transition-opacity ${loadingPage ? 'animate-pulse opacity-100' : 'opacity-0'}`} />
         {loadingPage ? (
           <span role="status" className="sr-only">
             Loading page…
@@ -78,9 +75,7 @@ export function AppShell() {
                   end={item.end}
                   className={({ isActive }) =>
                     `flex min-h-11 items-center rounded-md border-l-4 px-3 text-base sm:min-h-9 ${
-                      isActive
-                        ? 'border-brass bg-ink-700 font-semibold text-paper'
-                        : 'border-transparent text-ink-100 hover:bg-ink-700'
+                      isActive ? 'border-brass bg-ink-700 font-semibold text-paper' : 'border-transparent text-ink-100 hover:bg-ink-700'
                     }`
                   }
                 >
@@ -99,9 +94,7 @@ export function AppShell() {
       </div>
 
       {/* Phones: the menu button sits at the bottom, under the thumb. */}
-      {menuOpen ? (
-        <div aria-hidden="true" className="fixed inset-0 z-30 bg-ink-950/50 sm:hidden" onClick={() => setMenuOpenAt(null)} />
-      ) : null}
+      {menuOpen ? <div aria-hidden="true" className="fixed inset-0 z-30 bg-ink-950/50 sm:hidden" onClick={() => setMenuOpenAt(null)} /> : null}
       <div className="on-ink fixed inset-x-0 bottom-0 z-40 flex h-14 items-center border-t border-ink-700 bg-ink-900 px-3 sm:hidden print:hidden">
         <button
           type="button"
@@ -117,4 +110,3 @@ export function AppShell() {
     </div>
   );
 }
-

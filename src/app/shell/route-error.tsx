@@ -12,12 +12,7 @@ export function RouteError() {
   }
   // A new version was deployed while this tab was open and an old page chunk is gone.
   if (error instanceof TypeError && /dynamically imported module|Importing a module script/i.test(error.message)) {
-    return (
-      <ErrorFallback
-        title="Nestkeeper was updated"
-        message="A newer version is available. Reload the page to continue."
-      />
-    );
+    return <ErrorFallback title="Nestkeeper was updated" message="A newer version is available. Reload the page to continue." />;
   }
   if (isApiError(error) && error.status === 0) {
     return <ErrorFallback title="The server cannot be reached" message={error.message} />;

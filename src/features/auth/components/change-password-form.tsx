@@ -9,14 +9,17 @@ import { MIN_PASSWORD_LENGTH, newPasswordSchema } from '../../../lib/passwords';
 import { useChangePassword } from '../api/change-password';
 import { useSession } from './session-context';
 
-const schemaFor = (context: string[]) => Yup.object({
-  currentPassword: Yup.string().required('Enter the password you use now.'),
-  newPassword: newPasswordSchema('Choose a new password.', () => context)
-    .notOneOf([Yup.ref('currentPassword')], 'The new password must differ from the current one.'),
-  repeatPassword: Yup.string()
-    .required('Type the new password again.')
-    .oneOf([Yup.ref('newPassword')], 'The two new passwords do not match.'),
-});
+const schemaFor = (context: string[]) =>
+  Yup.object({
+    currentPassword: Yup.string().required('Enter the password you use now.'),
+    newPassword: newPasswordSchema('Choose a new password.', () => context).notOneOf(
+      [Yup.ref('currentPassword')],
+      'The new password must differ from the current one.',
+    ),
+    repeatPassword: Yup.string()
+      .required('Type the new password again.')
+      .oneOf([Yup.ref('newPassword')], 'The two new passwords do not match.'),
+  });
 
 type Values = Yup.InferType<ReturnType<typeof schemaFor>>;
 
@@ -50,7 +53,11 @@ export function ChangePasswordForm() {
       {({ isSubmitting }) => (
         <Form noValidate className="flex max-w-md flex-col gap-4">
           {done ? <Notice tone="success" title="Your password has been changed." /> : null}
-          {problem ? <Notice tone="error" title="Password not changed">{problem}</Notice> : null}
+          {problem ? (
+            <Notice tone="error" title="Password not changed">
+              {problem}
+            </Notice>
+          ) : null}
           <Field name="currentPassword" label="Current password" type="password" autoComplete="current-password" />
           <Field
             name="newPassword"

@@ -41,7 +41,11 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
     >
       {({ isSubmitting }) => (
         <Form noValidate className="flex flex-col gap-4">
-          {problem ? <Notice tone="error" title="Not signed in">{problem}</Notice> : null}
+          {problem ? (
+            <Notice tone="error" title="Not signed in">
+              {problem}
+            </Notice>
+          ) : null}
           <Field name="email" label="E-mail" type="email" autoComplete="username" inputMode="email" mono required />
           <Field name="password" label="Password" type="password" autoComplete="current-password" required />
           <Button type="submit" variant="primary" busy={isSubmitting} className="w-full">

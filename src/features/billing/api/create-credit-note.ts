@@ -5,7 +5,10 @@ import { invalidateRentalsAndBilling } from '../../../lib/rental-status';
 
 /** Credits an invoice: `amountMinor` net of tax, or the whole invoice when left out. */
 export function createCreditNote({ invoiceId, reason, amountMinor }: { invoiceId: string; reason: string; amountMinor?: number }): Promise<InvoiceView> {
-  return apiClient.post<InvoiceView>(`/invoices/${encodeURIComponent(invoiceId)}/credit-note`, { reason, ...(amountMinor !== undefined ? { amountMinor } : {}) });
+  return apiClient.post<InvoiceView>(`/invoices/${encodeURIComponent(invoiceId)}/credit-note`, {
+    reason,
+    ...(amountMinor !== undefined ? { amountMinor } : {}),
+  });
 }
 
 export function useCreateCreditNote() {

@@ -21,14 +21,23 @@ export function CreditNoteDialog({ invoice, open, onClose }: { invoice: InvoiceS
     reason: Yup.string().trim().required('Say why the invoice is credited; the customer sees it.').max(500, 'Keep the reason to 500 characters.'),
     amount: Yup.string()
       .test('amount', `Enter an amount in ${currency}, e.g. ${amountText(5000, digits)}, or leave it empty.`, (v) => !v?.trim() || !!parseAmount(v, digits))
-      .test('within', `A credit note cannot exceed the invoice's ${formatMoney(invoice.subtotalMinor, currency)} net.`, (v) => (parseAmount(v ?? '', digits) ?? 0) <= invoice.subtotalMinor),
+      .test(
+        'within',
+        `A credit note cannot exceed the invoice's ${formatMoney(invoice.subtotalMinor, currency)} net.`,
+        (v) => (parseAmount(v ?? '', digits) ?? 0) <= invoice.subtotalMinor,
+      ),
   });
   const close = () => {
     setProblem(undefined);
     onClose();
   };
   return (
-    <Dialog open={open} onClose={close} title="Credit note" description={`Against invoice ${invoice.number} (${formatMoney(invoice.subtotalMinor, currency)} net of tax).`}>
+    <Dialog
+      open={open}
+      onClose={close}
+      title="Credit note"
+      description={`Against invoice ${invoice.number} (${formatMoney(invoice.subtotalMinor, currency)} net of tax).`}
+    >
       <Formik
         initialValues={{ reason: '', amount: '' }}
         validationSchema={schema}
@@ -51,7 +60,13 @@ export function CreditNoteDialog({ invoice, open, onClose }: { invoice: InvoiceS
               </Notice>
             ) : null}
             <Field name="reason" label="Reason" autoComplete="off" />
-            <Field name="amount" label={`Amount, net of tax (${currency})`} inputMode="decimal" autoComplete="off" hint="Leave empty to credit the whole invoice." />
+            <Field
+              name="amount"
+              label={`Amount, net of tax (${currency})`}
+              inputMode="decimal"
+              autoComplete="off"
+              hint="Leave empty to credit the whole invoice."
+            />
             <div className="flex flex-wrap justify-end gap-2">
               <Button onClick={close}>Cancel</Button>
               <Button type="submit" variant="primary" busy={isSubmitting}>

@@ -34,14 +34,23 @@ export function DepositPanel({ rental, canManage, charges }: { rental: RentalVie
               { term: 'State', value: <DepositStateChip state={state} /> },
               { term: 'Deposit asked', value: money(rental.depositMinor) },
               { term: 'Card', value: card(hold) },
-              ...(authorized ? [{ term: 'Amount held', value: money(hold.amountMinor) }, { term: 'Lapses at', value: <HoldLapse at={hold.captureBefore} dateTime={dateTime} /> }] : []),
+              ...(authorized
+                ? [
+                    { term: 'Amount held', value: money(hold.amountMinor) },
+                    { term: 'Lapses at', value: <HoldLapse at={hold.captureBefore} dateTime={dateTime} /> },
+                  ]
+                : []),
               ...(state === 'declined' && hold?.failureMessage ? [{ term: 'Declined', value: hold.failureMessage }] : []),
-              ...(hold && hold.capturedMinor > 0 ? [{ term: 'Captured', value: `${money(hold.capturedMinor)}${hold.captureReason ? ` — ${hold.captureReason}` : ''}` }] : []),
+              ...(hold && hold.capturedMinor > 0
+                ? [{ term: 'Captured', value: `${money(hold.capturedMinor)}${hold.captureReason ? ` — ${hold.captureReason}` : ''}` }]
+                : []),
             ]}
           />
           {canManage && canTake ? <TakeDeposit rentalId={rental.id} amount={money(rental.depositMinor)} /> : null}
           {authorized && !rental.returnedAt ? (
-            <p className="text-sm text-ink-700">The hold stays on the card until the kit is back. Nestkeeper renews it on the saved card before it would lapse.</p>
+            <p className="text-sm text-ink-700">
+              The hold stays on the card until the kit is back. Nestkeeper renews it on the saved card before it would lapse.
+            </p>
           ) : null}
           {authorized && rental.returnedAt && canManage ? <SettleDeposit rental={rental} hold={hold} charges={charges} /> : null}
         </div>
@@ -64,7 +73,10 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
           await take.mutateAsync({ rentalId, paymentMethod });
         } catch (error) {
           const declined = isApiError(error) && error.code === 'card_declined';
-          setProblem({ title: declined ? 'The card was declined' : 'No deposit was taken', text: declined ? `${error.message} Try another card.` : paymentProblem(error) });
+          setProblem({
+            title: declined ? 'The card was declined' : 'No deposit was taken',
+            text: declined ? `${error.message} Try another card.` : paymentProblem(error),
+          });
         }
       }}
     >
@@ -94,7 +106,8 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
 }
 
 /** A charge above the hold and a renewal are both merchant-initiated on the saved card; the kind tells them apart. */
-const howTaken = (h: DepositAuthorizationView) => (h.kind === 'charge' ? 'Charged to the saved card' : h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card');
+const howTaken = (h: DepositAuthorizationView) =>
+  h.kind === 'charge' ? 'Charged to the saved card' : h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card';
 
 function HoldHistory({ holds, currency, dateTime }: { holds: DepositAuthorizationView[]; currency: string; dateTime: (value: string) => string }) {
   return (

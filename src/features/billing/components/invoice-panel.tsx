@@ -39,7 +39,14 @@ export function InvoicePanel({ rental, canCharge, charges }: { rental: RentalVie
         <MoneyLines
           caption="What the rental comes to"
           currency={currency}
-          lines={settlement.lines.map((line, i) => ({ key: `${line.kind}-${i}`, description: line.description, detail: lineKindWords[line.kind], quantity: line.quantity, unitMinor: line.unitMinor, amountMinor: line.amountMinor }))}
+          lines={settlement.lines.map((line, i) => ({
+            key: `${line.kind}-${i}`,
+            description: line.description,
+            detail: lineKindWords[line.kind],
+            quantity: line.quantity,
+            unitMinor: line.unitMinor,
+            amountMinor: line.amountMinor,
+          }))}
           totals={[
             { label: 'Subtotal', minor: settlement.subtotalMinor },
             { label: 'Tax', minor: settlement.taxMinor },
@@ -74,7 +81,11 @@ export function InvoicePanel({ rental, canCharge, charges }: { rental: RentalVie
           </div>
         ) : canCharge ? (
           <div className="flex flex-col gap-2">
-            {issue.isError ? <Notice tone="error" title="The invoice was not issued">{issue.error.message}</Notice> : null}
+            {issue.isError ? (
+              <Notice tone="error" title="The invoice was not issued">
+                {issue.error.message}
+              </Notice>
+            ) : null}
             <div className="flex flex-wrap items-center gap-3">
               <Button variant="primary" busy={issue.isPending} disabled={!!blocker} onClick={() => issue.mutate(rental.id)}>
                 Issue invoice

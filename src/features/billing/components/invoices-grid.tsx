@@ -25,7 +25,12 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
         field: 'number',
         minWidth: 130,
         cellClass: 'font-mono font-semibold',
-        cellRenderer: (p: Cell) => (p.data ? <Link to={`/rentals/${p.data.rentalId}`} className="text-ink-900 underline-offset-2 hover:underline">{p.data.number}</Link> : null),
+        cellRenderer: (p: Cell) =>
+          p.data ? (
+            <Link to={`/rentals/${p.data.rentalId}`} className="text-ink-900 underline-offset-2 hover:underline">
+              {p.data.number}
+            </Link>
+          ) : null,
       },
       {
         colId: 'kind',
@@ -36,7 +41,12 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
           p.data ? (
             <span>
               {kindWords[p.data.kind]}
-              {p.data.correctsNumber ? <span className="text-ink-700"> to <span className="font-mono">{p.data.correctsNumber}</span></span> : null}
+              {p.data.correctsNumber ? (
+                <span className="text-ink-700">
+                  {' '}
+                  to <span className="font-mono">{p.data.correctsNumber}</span>
+                </span>
+              ) : null}
             </span>
           ) : null,
       },
@@ -57,7 +67,13 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
         maxWidth: 130,
         cellRenderer: (p: Cell) =>
           p.data ? (
-            <a href={invoiceDocumentUrl(p.data.id)} target="_blank" rel="noopener" aria-label={`${kindWords[p.data.kind]} ${p.data.number} (PDF)`} className="font-semibold text-brass-deep underline">
+            <a
+              href={invoiceDocumentUrl(p.data.id)}
+              target="_blank"
+              rel="noopener"
+              aria-label={`${kindWords[p.data.kind]} ${p.data.number} (PDF)`}
+              className="font-semibold text-brass-deep underline"
+            >
               PDF
             </a>
           ) : null,

@@ -20,8 +20,14 @@ export function PaymentDialog({ invoice, today, open, onClose }: { invoice: Invo
   const schema = Yup.object({
     amount: Yup.string()
       .test('amount', `Enter an amount in ${currency}, e.g. ${amountText(invoice.outstandingMinor, digits)}.`, (v) => !!parseAmount(v ?? '', digits))
-      .test('within', `At most the ${formatMoney(invoice.outstandingMinor, currency)} outstanding.`, (v) => (parseAmount(v ?? '', digits) ?? 0) <= invoice.outstandingMinor),
-    receivedOn: Yup.string().required('Say when it arrived.').matches(/^\d{4}-\d{2}-\d{2}$/, 'Pick a date.'),
+      .test(
+        'within',
+        `At most the ${formatMoney(invoice.outstandingMinor, currency)} outstanding.`,
+        (v) => (parseAmount(v ?? '', digits) ?? 0) <= invoice.outstandingMinor,
+      ),
+    receivedOn: Yup.string()
+      .required('Say when it arrived.')
+      .matches(/^\d{4}-\d{2}-\d{2}$/, 'Pick a date.'),
     reference: Yup.string().trim().min(2, 'Say where it came from, e.g. the bank reference.').max(200, 'Keep it under 200 characters.'),
   });
   const close = () => {
@@ -29,14 +35,24 @@ export function PaymentDialog({ invoice, today, open, onClose }: { invoice: Invo
     onClose();
   };
   return (
-    <Dialog open={open} onClose={close} title="Record a payment" description={`Against invoice ${invoice.number}: ${formatMoney(invoice.outstandingMinor, currency)} outstanding.`}>
+    <Dialog
+      open={open}
+      onClose={close}
+      title="Record a payment"
+      description={`Against invoice ${invoice.number}: ${formatMoney(invoice.outstandingMinor, currency)} outstanding.`}
+    >
       <Formik
         initialValues={{ amount: amountText(invoice.outstandingMinor, digits), receivedOn: today, reference: '' }}
         validationSchema={schema}
         onSubmit={async (values, helpers) => {
           setProblem(undefined);
           try {
-            await record.mutateAsync({ invoiceId: invoice.id, amountMinor: parseAmount(values.amount, digits)!, receivedOn: values.receivedOn, reference: values.reference.trim() });
+            await record.mutateAsync({
+              invoiceId: invoice.id,
+              amountMinor: parseAmount(values.amount, digits)!,
+              receivedOn: values.receivedOn,
+              reference: values.reference.trim(),
+            });
             close();
           } catch (error) {
             setProblem(applyServerErrors(error, helpers, { fields: ['amount', 'receivedOn', 'reference'], aliases: { amountMinor: 'amount' } }));

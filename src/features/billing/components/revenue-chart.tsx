@@ -99,7 +99,20 @@ export function RevenueChart({ rows, from, to, currency }: { rows: RevenueRow[];
               {series.map((s, si) => {
                 const v = s.byMonth.get(m) ?? 0;
                 if (!v) return null;
-                const rect = <rect key={s.key} x={x} width={band * 0.64} y={y(base + v)} height={y(base) - y(base + v)} fill={fillOf(si)} stroke="#1c2536" strokeWidth={0.8}><title>{`${s.name}, ${monthLong(m)}: ${money(v)}`}</title></rect>;
+                const rect = (
+                  <rect
+                    key={s.key}
+                    x={x}
+                    width={band * 0.64}
+                    y={y(base + v)}
+                    height={y(base) - y(base + v)}
+                    fill={fillOf(si)}
+                    stroke="#1c2536"
+                    strokeWidth={0.8}
+                  >
+                    <title>{`${s.name}, ${monthLong(m)}: ${money(v)}`}</title>
+                  </rect>
+                );
                 base += v;
                 return rect;
               })}
@@ -127,7 +140,17 @@ export function RevenueChart({ rows, from, to, currency }: { rows: RevenueRow[];
   );
 }
 
-function RevenueTable({ series, months, money, monthTotal }: { series: Series[]; months: string[]; money: (minor: number) => string; monthTotal: (m: string) => number }) {
+function RevenueTable({
+  series,
+  months,
+  money,
+  monthTotal,
+}: {
+  series: Series[];
+  months: string[];
+  money: (minor: number) => string;
+  monthTotal: (m: string) => number;
+}) {
   const cell = 'px-2 py-1 text-right tabular-nums whitespace-nowrap';
   return (
     <div className="overflow-x-auto">
@@ -135,21 +158,31 @@ function RevenueTable({ series, months, money, monthTotal }: { series: Series[];
         <caption className="mb-1 text-left font-semibold text-ink-900">Revenue per kit per month</caption>
         <thead className="bg-paper-deep">
           <tr>
-            <th scope="col" className="px-2 py-1">Kit</th>
+            <th scope="col" className="px-2 py-1">
+              Kit
+            </th>
             {months.map((m) => (
               <th key={m} scope="col" className={cell}>
-                <abbr title={monthLong(m)} className="no-underline">{monthShort(m)}</abbr>
+                <abbr title={monthLong(m)} className="no-underline">
+                  {monthShort(m)}
+                </abbr>
               </th>
             ))}
-            <th scope="col" className={cell}>Total</th>
+            <th scope="col" className={cell}>
+              Total
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-paper-line">
           {series.map((s) => (
             <tr key={s.key}>
-              <th scope="row" className="px-2 py-1 font-semibold whitespace-nowrap">{s.name}</th>
+              <th scope="row" className="px-2 py-1 font-semibold whitespace-nowrap">
+                {s.name}
+              </th>
               {months.map((m) => (
-                <td key={m} className={cell}>{s.byMonth.get(m) ? money(s.byMonth.get(m)!) : '—'}</td>
+                <td key={m} className={cell}>
+                  {s.byMonth.get(m) ? money(s.byMonth.get(m)!) : '—'}
+                </td>
               ))}
               <td className={`${cell} font-semibold`}>{money(s.total)}</td>
             </tr>
@@ -157,9 +190,13 @@ function RevenueTable({ series, months, money, monthTotal }: { series: Series[];
         </tbody>
         <tfoot className="border-t-2 border-paper-line font-semibold">
           <tr>
-            <th scope="row" className="px-2 py-1">All kits</th>
+            <th scope="row" className="px-2 py-1">
+              All kits
+            </th>
             {months.map((m) => (
-              <td key={m} className={cell}>{money(monthTotal(m))}</td>
+              <td key={m} className={cell}>
+                {money(monthTotal(m))}
+              </td>
             ))}
             <td className={cell}>{money(series.reduce((sum, s) => sum + s.total, 0))}</td>
           </tr>

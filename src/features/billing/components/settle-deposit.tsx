@@ -16,7 +16,10 @@ import { paymentProblem } from './payment-problem';
 /** What the hold is there to cover, in words, as the reason the clerk starts from. */
 function suggestedReason(rental: RentalView): string {
   const late = rental.settlement.lateDays;
-  const parts = [late > 0 ? `Late return, ${late} ${late === 1 ? 'day' : 'days'}` : '', ...rental.charges.filter((c) => c.amountMinor).map((c) => `${c.assetTag} ${c.kind}`)];
+  const parts = [
+    late > 0 ? `Late return, ${late} ${late === 1 ? 'day' : 'days'}` : '',
+    ...rental.charges.filter((c) => c.amountMinor).map((c) => `${c.assetTag} ${c.kind}`),
+  ];
   return parts.filter(Boolean).join('; ');
 }
 
@@ -83,7 +86,13 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
                 </Notice>
               ) : null}
               <div className="grid gap-3 sm:grid-cols-2">
-                <Field name="amount" label={`Amount to capture (${currency})`} inputMode="decimal" autoComplete="off" hint={captureHint(amount, hold.amountMinor, money)} />
+                <Field
+                  name="amount"
+                  label={`Amount to capture (${currency})`}
+                  inputMode="decimal"
+                  autoComplete="off"
+                  hint={captureHint(amount, hold.amountMinor, money)}
+                />
                 <Field name="reason" label="Reason" autoComplete="off" />
               </div>
               <div className="flex flex-wrap gap-2">

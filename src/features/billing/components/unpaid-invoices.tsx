@@ -15,7 +15,9 @@ export function UnpaidInvoices() {
       title="Invoices not yet paid"
       count={invoices.data ? rows.length : undefined}
       empty="Every invoice is paid."
-      status={invoices.isPending ? <LoadingPanel label="Looking at invoices…" /> : invoices.isError ? <Notice tone="error">{invoices.error.message}</Notice> : null}
+      status={
+        invoices.isPending ? <LoadingPanel label="Looking at invoices…" /> : invoices.isError ? <Notice tone="error">{invoices.error.message}</Notice> : null
+      }
     >
       {rows.slice(0, 8).map((i) => (
         <li key={i.id}>

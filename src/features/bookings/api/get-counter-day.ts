@@ -8,8 +8,7 @@ export function getCounterDay(signal?: AbortSignal): Promise<CounterDayView> {
   return apiClient.get<CounterDayView>('/bookings/today', { signal });
 }
 
-export const counterDayQueryOptions = () =>
-  queryOptions({ queryKey: bookingsKeys.today(), queryFn: ({ signal }) => getCounterDay(signal) });
+export const counterDayQueryOptions = () => queryOptions({ queryKey: bookingsKeys.today(), queryFn: ({ signal }) => getCounterDay(signal) });
 
 export function useCounterDay() {
   return useQuery(counterDayQueryOptions());

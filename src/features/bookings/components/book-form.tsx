@@ -151,16 +151,16 @@ function BookFormBody({
 
   const jobOptions = [
     { value: '', label: 'No job (the firm’s own use)' },
-    ...[...jobs].sort((a, b) => (a.startsOn < b.startsOn ? 1 : -1)).map((j) => ({ value: j.id, label: `${j.reference} · ${j.customerName} (${dayRange(j.startsOn, j.endsOn)})` })),
+    ...[...jobs]
+      .sort((a, b) => (a.startsOn < b.startsOn ? 1 : -1))
+      .map((j) => ({ value: j.id, label: `${j.reference} · ${j.customerName} (${dayRange(j.startsOn, j.endsOn)})` })),
   ];
 
   function swap(troubledId: string, alternative: AlternativeItem) {
     const { items: swapped, from = 'the item' } = swapIn(members, values, troubledId, alternative);
     const kitName = kits.find((k) => k.id === values.kitId)?.name;
     void setValues({ ...values, kitId: '', items: swapped }, true);
-    onSwapped(
-      `${alternative.assetTag} replaces ${from}.${kitName ? ` The booking now lists ${kitName}’s items one by one, with the swap.` : ''}`,
-    );
+    onSwapped(`${alternative.assetTag} replaces ${from}.${kitName ? ` The booking now lists ${kitName}’s items one by one, with the swap.` : ''}`);
     // Try again with the swap.
     setTimeout(() => void submitForm(), 0);
   }

@@ -55,9 +55,7 @@ function layoutBars(bookings: BookingView[], from: string, days: number, today: 
     else laneEnds[lane] = last;
     const active = booking.state === 'reserved' || booking.state === 'out';
     const dueTags = active
-      ? rowAssets
-          .filter((a) => booking.assetIds.includes(a.id) && fallsDue(a, booking))
-          .map((a) => ({ tag: a.assetTag, dueOn: a.calibration.dueOn ?? '' }))
+      ? rowAssets.filter((a) => booking.assetIds.includes(a.id) && fallsDue(a, booking)).map((a) => ({ tag: a.assetTag, dueOn: a.calibration.dueOn ?? '' }))
       : [];
     const endsAfter = (late ? today : booking.endsOn) > addDays(from, days - 1);
     bars.push({ booking, lane, first, last, dueTags, late, endsAfter });
@@ -67,9 +65,7 @@ function layoutBars(bookings: BookingView[], from: string, days: number, today: 
 
 function barName(bar: BarModel): string {
   const { booking } = bar;
-  const due = bar.dueTags.length
-    ? `, falls due during this booking (${bar.dueTags.map((d) => `${d.tag} due ${shortDay(d.dueOn)}`).join(', ')})`
-    : '';
+  const due = bar.dueTags.length ? `, falls due during this booking (${bar.dueTags.map((d) => `${d.tag} due ${shortDay(d.dueOn)}`).join(', ')})` : '';
   const late = bar.late ? `, late: was due back ${shortDay(booking.endsOn)}` : '';
   return `${bookingTitle(booking)}, ${dayRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${late}${due}`;
 }
@@ -200,10 +196,20 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
       onFocus={(e) => setFocused(e.target instanceof HTMLElement && e.target.hasAttribute('data-bar') ? e.target.getAttribute('aria-label') : null)}
       onBlur={() => setFocused(null)}
     >
-      <div role="table" aria-label={`Booking board, ${dayRange(from, last)}`} aria-rowcount={rows.length + 1} style={{ width: HEAD_PX + spanPx }} className="relative">
+      <div
+        role="table"
+        aria-label={`Booking board, ${dayRange(from, last)}`}
+        aria-rowcount={rows.length + 1}
+        style={{ width: HEAD_PX + spanPx }}
+        className="relative"
+      >
         <div role="rowgroup" className="sticky top-0 z-20">
           <div role="row" aria-rowindex={1} className="flex border-b border-ink-300 bg-paper-deep">
-            <div role="columnheader" className="sticky left-0 z-10 flex shrink-0 items-end border-r border-ink-300 bg-paper-deep px-3 pb-1 text-sm font-semibold text-ink-800" style={{ width: HEAD_PX }}>
+            <div
+              role="columnheader"
+              className="sticky left-0 z-10 flex shrink-0 items-end border-r border-ink-300 bg-paper-deep px-3 pb-1 text-sm font-semibold text-ink-800"
+              style={{ width: HEAD_PX }}
+            >
               Kit or item
             </div>
             <div role="columnheader" aria-label={`Days ${dayRange(from, last)}`} className="shrink-0" style={{ width: spanPx }}>
@@ -311,7 +317,22 @@ interface BoardRowProps {
   bookHref: BookingBoardProps['bookHref'];
 }
 
-const BoardRow = memo(function BoardRow({ row, rowIndex, bookings, from, days, dayPx, today, canBook, collapsed, onToggle, pick, setPick, finishPick, bookHref }: BoardRowProps) {
+const BoardRow = memo(function BoardRow({
+  row,
+  rowIndex,
+  bookings,
+  from,
+  days,
+  dayPx,
+  today,
+  canBook,
+  collapsed,
+  onToggle,
+  pick,
+  setPick,
+  finishPick,
+  bookHref,
+}: BoardRowProps) {
   const rowAssets = useMemo(() => (row.kind === 'kit' ? row.members : [row.asset]), [row]);
   const { bars, lanes } = useMemo(() => layoutBars(bookings, from, days, today, rowAssets), [bookings, from, days, today, rowAssets]);
   const height = lanes * LANE_PX + ROW_PAD_PX * 2;
@@ -328,7 +349,14 @@ const BoardRow = memo(function BoardRow({ row, rowIndex, bookings, from, days, d
 
   const held = rowAssets.filter((a) => a.status === 'held');
   const atLab = rowAssets.filter((a) => a.status === 'at_lab');
-  const rowPattern = row.kind === 'asset' ? (row.asset.status === 'held' ? 'nk-board-held' : row.asset.status === 'at_lab' ? 'nk-board-away' : 'nk-board-days') : 'nk-board-days';
+  const rowPattern =
+    row.kind === 'asset'
+      ? row.asset.status === 'held'
+        ? 'nk-board-held'
+        : row.asset.status === 'at_lab'
+          ? 'nk-board-away'
+          : 'nk-board-days'
+      : 'nk-board-days';
 
   const dayAt = (e: ReactPointerEvent<HTMLDivElement>) => {
     const rect = e.currentTarget.getBoundingClientRect();

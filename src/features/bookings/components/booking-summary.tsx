@@ -48,10 +48,23 @@ export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booki
               purposeWords[booking.purpose]
             ),
           },
-          { term: 'Kit', value: booking.kit ? <Link to={`/kits/${booking.kit.id}`} className="text-brass-deep underline">{booking.kit.name}</Link> : 'Separate items' },
+          {
+            term: 'Kit',
+            value: booking.kit ? (
+              <Link to={`/kits/${booking.kit.id}`} className="text-brass-deep underline">
+                {booking.kit.name}
+              </Link>
+            ) : (
+              'Separate items'
+            ),
+          },
           { term: 'Note', value: booking.note },
-          ...(booking.checkedOutAt ? [{ term: 'Checked out', value: `${formatDateTime(booking.checkedOutAt, timeZone)}, taken by ${booking.takenBy ?? '—'}` }] : []),
-          ...(booking.returnedAt ? [{ term: 'Returned', value: `${formatDateTime(booking.returnedAt, timeZone)}, brought back by ${booking.broughtBackBy ?? '—'}` }] : []),
+          ...(booking.checkedOutAt
+            ? [{ term: 'Checked out', value: `${formatDateTime(booking.checkedOutAt, timeZone)}, taken by ${booking.takenBy ?? '—'}` }]
+            : []),
+          ...(booking.returnedAt
+            ? [{ term: 'Returned', value: `${formatDateTime(booking.returnedAt, timeZone)}, brought back by ${booking.broughtBackBy ?? '—'}` }]
+            : []),
         ]}
       />
     </Panel>
@@ -72,11 +85,25 @@ export function PackingList({ booking }: { booking: BookingView }) {
       <table className="w-full text-left text-sm">
         <thead className="border-b border-paper-line text-ink-700">
           <tr>
-            <th scope="col" className="py-1 pr-2 font-semibold">Item</th>
-            <th scope="col" className="py-1 pr-2 font-semibold">Type</th>
-            <th scope="col" className="py-1 pr-2 font-semibold">Status now</th>
-            {booking.checkoutChecklist ? <th scope="col" className="py-1 pr-2 font-semibold">At checkout</th> : null}
-            {booking.returnChecklist ? <th scope="col" className="py-1 pr-2 font-semibold">At return</th> : null}
+            <th scope="col" className="py-1 pr-2 font-semibold">
+              Item
+            </th>
+            <th scope="col" className="py-1 pr-2 font-semibold">
+              Type
+            </th>
+            <th scope="col" className="py-1 pr-2 font-semibold">
+              Status now
+            </th>
+            {booking.checkoutChecklist ? (
+              <th scope="col" className="py-1 pr-2 font-semibold">
+                At checkout
+              </th>
+            ) : null}
+            {booking.returnChecklist ? (
+              <th scope="col" className="py-1 pr-2 font-semibold">
+                At return
+              </th>
+            ) : null}
           </tr>
         </thead>
         <tbody className="divide-y divide-paper-line">
@@ -130,7 +157,14 @@ export function MoveDatesButton({ booking }: { booking: BookingView }) {
 
   return (
     <>
-      <Button onClick={() => { setFormError(undefined); setOpen(true); }}>Move dates</Button>
+      <Button
+        onClick={() => {
+          setFormError(undefined);
+          setOpen(true);
+        }}
+      >
+        Move dates
+      </Button>
       <Dialog open={open} onClose={() => setOpen(false)} title="Move dates" description="Every item must be free and in calibration for the new days.">
         <Formik initialValues={{ startsOn: booking.startsOn, endsOn: booking.endsOn }} validationSchema={moveSchema} onSubmit={submit}>
           {({ isSubmitting, values }) => (
@@ -162,11 +196,26 @@ export function CancelBookingButton({ booking }: { booking: BookingView }) {
   const cancel = useCancelBooking();
   return (
     <>
-      <Button variant="danger" onClick={() => { cancel.reset(); setOpen(true); }}>
+      <Button
+        variant="danger"
+        onClick={() => {
+          cancel.reset();
+          setOpen(true);
+        }}
+      >
         Cancel booking
       </Button>
-      <Dialog open={open} onClose={() => setOpen(false)} title="Cancel this booking?" description="The items become free for these days again. The booking stays on record as cancelled.">
-        {cancel.isError ? <Notice tone="error" className="mb-3">{cancel.error.message}</Notice> : null}
+      <Dialog
+        open={open}
+        onClose={() => setOpen(false)}
+        title="Cancel this booking?"
+        description="The items become free for these days again. The booking stays on record as cancelled."
+      >
+        {cancel.isError ? (
+          <Notice tone="error" className="mb-3">
+            {cancel.error.message}
+          </Notice>
+        ) : null}
         <div className="flex gap-2">
           <Button variant="danger" busy={cancel.isPending} onClick={() => cancel.mutate(booking.id, { onSuccess: () => setOpen(false) })}>
             Yes, cancel it

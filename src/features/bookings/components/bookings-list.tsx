@@ -7,7 +7,15 @@ import type { BookingView } from '../../../../shared/bookings/views';
 import { BookingStateChip, bookingContents, bookingStateWords, bookingTitle, dayRange } from './booking-words';
 
 /** The board's bookings as a table (sort, filter, CSV). */
-export function BookingsList({ bookings, onOpen, loading }: { bookings: BookingView[] | undefined; onOpen: (booking: BookingView) => void; loading?: boolean }) {
+export function BookingsList({
+  bookings,
+  onOpen,
+  loading,
+}: {
+  bookings: BookingView[] | undefined;
+  onOpen: (booking: BookingView) => void;
+  loading?: boolean;
+}) {
   const columns = useMemo<ColDef<BookingView>[]>(
     () => [
       {

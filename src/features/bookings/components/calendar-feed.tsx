@@ -25,8 +25,8 @@ export function CalendarFeed() {
       <summary className="cursor-pointer font-semibold text-ink-900">Add to your calendar</summary>
       <div className="mt-2 flex flex-col gap-2 text-sm text-ink-700">
         <p>
-          Your calendar program can follow your bookings and the fleet&rsquo;s due dates from a private address. Anyone who has the
-          address can read the feed, so keep it to yourself. Making a new address stops the old one.
+          Your calendar program can follow your bookings and the fleet&rsquo;s due dates from a private address. Anyone who has the address can read the feed,
+          so keep it to yourself. Making a new address stops the old one.
         </p>
         {token.isError ? <Notice tone="error">{token.error.message}</Notice> : null}
         {url ? (
@@ -35,7 +35,13 @@ export function CalendarFeed() {
               <label htmlFor={inputId} className="font-semibold text-ink-800">
                 Calendar address
               </label>
-              <input id={inputId} readOnly value={url} onFocus={(e) => e.currentTarget.select()} className="min-h-9 rounded-md border border-paper-line bg-paper px-2 font-mono text-xs" />
+              <input
+                id={inputId}
+                readOnly
+                value={url}
+                onFocus={(e) => e.currentTarget.select()}
+                className="min-h-9 rounded-md border border-paper-line bg-paper px-2 font-mono text-xs"
+              />
             </div>
             <Button size="sm" onClick={copy}>
               {copied ? 'Copied' : 'Copy address'}
@@ -43,7 +49,14 @@ export function CalendarFeed() {
           </div>
         ) : null}
         <div>
-          <Button size="sm" busy={token.isPending} onClick={() => { setCopied(false); token.mutate(); }}>
+          <Button
+            size="sm"
+            busy={token.isPending}
+            onClick={() => {
+              setCopied(false);
+              token.mutate();
+            }}
+          >
             {url ? 'Make a new address' : 'Show my calendar address'}
           </Button>
         </div>

@@ -31,7 +31,12 @@ function BookingLine({ booking, extra }: { booking: BookingView; extra?: ReactNo
 export function TodayAtCounter() {
   const day = useCounterDay();
   if (day.isPending) return <LoadingPanel label="Looking at today's bookings…" className="md:col-span-2 xl:col-span-3" />;
-  if (day.isError) return <Notice tone="error" className="md:col-span-2 xl:col-span-3">{day.error.message}</Notice>;
+  if (day.isError)
+    return (
+      <Notice tone="error" className="md:col-span-2 xl:col-span-3">
+        {day.error.message}
+      </Notice>
+    );
   const { today, checkouts, returns, late, blocked } = day.data;
   return (
     <section aria-labelledby="counter-heading" className="flex flex-col gap-2 md:col-span-2 xl:col-span-3">
@@ -39,45 +44,37 @@ export function TodayAtCounter() {
         Today at the counter
       </h2>
       <div className="grid items-start gap-3 md:grid-cols-2">
-      <CountedSection level={3} id="counter-out" title="Going out today" count={checkouts.length} empty="Nothing is due to be checked out.">
-        {checkouts.map((b) => (
-          <BookingLine key={b.id} booking={b} extra={<span className="font-semibold text-brass-deep">Check out</span>} />
-        ))}
-      </CountedSection>
-      <CountedSection level={3} id="counter-back" title="Coming back today" count={returns.length} empty="Nothing is due back today.">
-        {returns.map((b) => (
-          <BookingLine key={b.id} booking={b} extra={<BookingStateChip state={b.state} />} />
-        ))}
-      </CountedSection>
-      <CountedSection level={3} id="counter-late" title="Late returns" count={late.length} empty="Nothing is overdue back.">
-        {late.map((b) => {
-          const daysLate = differenceInCalendarDays(parseISO(today), parseISO(b.endsOn));
-          return (
+        <CountedSection level={3} id="counter-out" title="Going out today" count={checkouts.length} empty="Nothing is due to be checked out.">
+          {checkouts.map((b) => (
+            <BookingLine key={b.id} booking={b} extra={<span className="font-semibold text-brass-deep">Check out</span>} />
+          ))}
+        </CountedSection>
+        <CountedSection level={3} id="counter-back" title="Coming back today" count={returns.length} empty="Nothing is due back today.">
+          {returns.map((b) => (
+            <BookingLine key={b.id} booking={b} extra={<BookingStateChip state={b.state} />} />
+          ))}
+        </CountedSection>
+        <CountedSection level={3} id="counter-late" title="Late returns" count={late.length} empty="Nothing is overdue back.">
+          {late.map((b) => {
+            const daysLate = differenceInCalendarDays(parseISO(today), parseISO(b.endsOn));
+            return (
+              <BookingLine
+                key={b.id}
+                booking={b}
+                extra={<span className="nk-hatch rounded border border-bad/50 px-1.5 font-semibold text-bad">{lateWords(daysLate)}</span>}
+              />
+            );
+          })}
+        </CountedSection>
+        <CountedSection level={3} id="counter-blocked" title="Blocked bookings" count={blocked.length} empty="Every reserved item can still go.">
+          {blocked.map((b) => (
             <BookingLine
               key={b.id}
               booking={b}
-              extra={
-                <span className="nk-hatch rounded border border-bad/50 px-1.5 font-semibold text-bad">
-                  {lateWords(daysLate)}
-                </span>
-              }
+              extra={<span className="text-ink-800">{b.blocked.map((x) => `${x.assetTag}: ${blockReasonText[x.reason]}`).join('; ')}</span>}
             />
-          );
-        })}
-      </CountedSection>
-      <CountedSection level={3} id="counter-blocked" title="Blocked bookings" count={blocked.length} empty="Every reserved item can still go.">
-        {blocked.map((b) => (
-          <BookingLine
-            key={b.id}
-            booking={b}
-            extra={
-              <span className="text-ink-800">
-                {b.blocked.map((x) => `${x.assetTag}: ${blockReasonText[x.reason]}`).join('; ')}
-              </span>
-            }
-          />
-        ))}
-      </CountedSection>
+          ))}
+        </CountedSection>
       </div>
     </section>
   );

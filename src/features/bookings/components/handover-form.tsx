@@ -45,15 +45,24 @@ const words = {
 
 function schemaFor(mode: HandoverMode) {
   return Yup.object({
-    counterpart: Yup.string().trim().required(mode === 'checkout' ? 'Say who takes the kit.' : 'Say who brings the kit back.').min(2, 'Write at least two letters of the name.'),
+    counterpart: Yup.string()
+      .trim()
+      .required(mode === 'checkout' ? 'Say who takes the kit.' : 'Say who brings the kit back.')
+      .min(2, 'Write at least two letters of the name.'),
     lines:
       mode === 'checkout'
         ? Yup.array().test('all-present', '', function (lines) {
             const list = (lines ?? []) as Line[];
             const missing = list.filter((l) => !l.present).map((l) => l.assetTag);
-            if (missing.length) return this.createError({ message: `Tick every item present to hand over. Not ticked: ${missing.join(', ')}. If something is missing, change the booking first.` });
+            if (missing.length)
+              return this.createError({
+                message: `Tick every item present to hand over. Not ticked: ${missing.join(', ')}. If something is missing, change the booking first.`,
+              });
             const damaged = list.filter((l) => l.condition === 'damaged').map((l) => l.assetTag);
-            if (damaged.length) return this.createError({ message: `Damaged items must not go out: ${damaged.join(', ')}. Report the damage from the item's page and book a replacement.` });
+            if (damaged.length)
+              return this.createError({
+                message: `Damaged items must not go out: ${damaged.join(', ')}. Report the damage from the item's page and book a replacement.`,
+              });
             return true;
           })
         : Yup.array(),
@@ -148,12 +157,7 @@ export function HandoverForm({
                 {w.submit}
               </Button>
               {mode === 'checkout' ? (
-                <a
-                  href={`/api/bookings/${booking.id}/handover-sheet.pdf`}
-                  target="_blank"
-                  rel="noreferrer"
-                  className={buttonClasses()}
-                >
+                <a href={`/api/bookings/${booking.id}/handover-sheet.pdf`} target="_blank" rel="noreferrer" className={buttonClasses()}>
                   <PrintIcon size={16} />
                   Hand-over sheet (PDF)
                 </a>
@@ -176,7 +180,8 @@ function NotReady({ booking }: { booking: BookingView }) {
       {stillOut.length ? <p>Still out on an earlier booking: {stillOut.join(', ')}. Take them back in first.</p> : null}
       {blocked.map((i) => (
         <p key={i.id}>
-          {i.assetTag} is {i.status === 'held' ? 'on hold' : i.status === 'at_lab' ? 'at the calibration lab' : 'retired'}: it cannot go. Change the booking to swap it.
+          {i.assetTag} is {i.status === 'held' ? 'on hold' : i.status === 'at_lab' ? 'at the calibration lab' : 'retired'}: it cannot go. Change the booking to
+          swap it.
         </p>
       ))}
     </Notice>
@@ -187,7 +192,16 @@ function TickAll() {
   const { values, setFieldValue } = useFormikContext<HandoverValues>();
   const all = values.lines.every((l) => l.present);
   return (
-    <Button size="sm" variant="quiet" onClick={() => void setFieldValue('lines', values.lines.map((l) => ({ ...l, present: !all })))}>
+    <Button
+      size="sm"
+      variant="quiet"
+      onClick={() =>
+        void setFieldValue(
+          'lines',
+          values.lines.map((l) => ({ ...l, present: !all })),
+        )
+      }
+    >
       {all ? 'Untick all' : 'Tick all present'}
     </Button>
   );
@@ -215,7 +229,13 @@ function ChecklistRow({ index, assetTag, type }: { index: number; assetTag: stri
           </option>
         ))}
       </select>
-      <input {...note} aria-label={`Note: ${assetTag}`} placeholder="Note (optional)" autoComplete="off" className="min-h-10 rounded-md border border-paper-line bg-card px-2" />
+      <input
+        {...note}
+        aria-label={`Note: ${assetTag}`}
+        placeholder="Note (optional)"
+        autoComplete="off"
+        className="min-h-10 rounded-md border border-paper-line bg-card px-2"
+      />
     </li>
   );
 }

@@ -7,8 +7,7 @@ export function getCalibrationReview(signal?: AbortSignal): Promise<CalibrationR
   return apiClient.get<CalibrationReviewView>('/calibration/review', { signal });
 }
 
-export const calibrationReviewQueryOptions = () =>
-  queryOptions({ queryKey: calibrationKeys.review(), queryFn: ({ signal }) => getCalibrationReview(signal) });
+export const calibrationReviewQueryOptions = () => queryOptions({ queryKey: calibrationKeys.review(), queryFn: ({ signal }) => getCalibrationReview(signal) });
 
 export function useCalibrationReview() {
   return useQuery(calibrationReviewQueryOptions());

@@ -41,10 +41,6 @@ export function useRecordCalibration(onProgress?: (fraction: number) => void) {
   return useMutation({
     mutationFn: (input: RecordCalibrationInput) => recordCalibration(input, onProgress),
     onSuccess: () =>
-      Promise.all([
-        queryClient.invalidateQueries({ queryKey: calibrationKeys.all }),
-        invalidateAssetStatus(queryClient),
-        invalidateBookingBoard(queryClient),
-      ]),
+      Promise.all([queryClient.invalidateQueries({ queryKey: calibrationKeys.all }), invalidateAssetStatus(queryClient), invalidateBookingBoard(queryClient)]),
   });
 }

@@ -14,10 +14,6 @@ export function useSendLabTrip() {
   return useMutation({
     mutationFn: sendLabTrip,
     onSuccess: () =>
-      Promise.all([
-        queryClient.invalidateQueries({ queryKey: calibrationKeys.all }),
-        invalidateAssetStatus(queryClient),
-        invalidateBookingBoard(queryClient),
-      ]),
+      Promise.all([queryClient.invalidateQueries({ queryKey: calibrationKeys.all }), invalidateAssetStatus(queryClient), invalidateBookingBoard(queryClient)]),
   });
 }

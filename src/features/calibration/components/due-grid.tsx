@@ -36,7 +36,19 @@ function Threats({ row }: { row: DueRow }) {
  * Overdue or due-soon items with the bookings each threatens (bookings that run
  * past its due date), and the next step per row.
  */
-export function DueGrid({ rows, label, exportFileName, canPlan, emptyMessage }: { rows: DueRow[]; label: string; exportFileName: string; canPlan: boolean; emptyMessage: string }) {
+export function DueGrid({
+  rows,
+  label,
+  exportFileName,
+  canPlan,
+  emptyMessage,
+}: {
+  rows: DueRow[];
+  label: string;
+  exportFileName: string;
+  canPlan: boolean;
+  emptyMessage: string;
+}) {
   const columns = useMemo<ColDef<DueRow>[]>(
     () => [
       {
@@ -62,7 +74,13 @@ export function DueGrid({ rows, label, exportFileName, canPlan, emptyMessage }: 
         minWidth: 120,
       },
       { colId: 'kit', headerName: 'Kit', valueGetter: (p) => p.data?.kitName ?? '', valueFormatter: (p) => (p.value as string) || '—', minWidth: 90 },
-      { colId: 'provider', headerName: 'Provider', valueGetter: (p) => p.data?.provider ?? '', valueFormatter: (p) => (p.value as string) || '—', minWidth: 120 },
+      {
+        colId: 'provider',
+        headerName: 'Provider',
+        valueGetter: (p) => p.data?.provider ?? '',
+        valueFormatter: (p) => (p.value as string) || '—',
+        minWidth: 120,
+      },
       {
         colId: 'state',
         headerName: 'Calibration',
@@ -113,5 +131,15 @@ export function DueGrid({ rows, label, exportFileName, canPlan, emptyMessage }: 
     ],
     [canPlan],
   );
-  return <DataGrid<DueRow> label={label} rows={rows} columns={columns} rowId={(r) => r.id} exportFileName={exportFileName} emptyMessage={emptyMessage} quickFilter={rows.length > 6} />;
+  return (
+    <DataGrid<DueRow>
+      label={label}
+      rows={rows}
+      columns={columns}
+      rowId={(r) => r.id}
+      exportFileName={exportFileName}
+      emptyMessage={emptyMessage}
+      quickFilter={rows.length > 6}
+    />
+  );
 }

@@ -30,7 +30,8 @@ export function DueTimeline({ weeks, today, dueSoonDays }: { weeks: { weekStart:
   const busiest = weeks.reduce((a, b) => (b.count > a.count ? b : a), weeks[0]);
   const windowEnd = addDays(today, dueSoonDays);
   const windowIndex = weeks.findIndex((w) => w.weekStart > windowEnd);
-  const windowX = windowIndex < 0 ? null : x(windowIndex - 1) + ((utc(windowEnd).getTime() - utc(weeks[windowIndex - 1].weekStart).getTime()) / (7 * 864e5)) * slot;
+  const windowX =
+    windowIndex < 0 ? null : x(windowIndex - 1) + ((utc(windowEnd).getTime() - utc(weeks[windowIndex - 1].weekStart).getTime()) / (7 * 864e5)) * slot;
   // A month's label sits under the week holding its 1st day; the first week is labelled too when no label follows closely.
   const monthStarts = weeks
     .map((w, i) => ({ i, d: utc(w.weekStart) }))
@@ -95,8 +96,12 @@ export function DueTimeline({ weeks, today, dueSoonDays }: { weeks: { weekStart:
           <caption className="sr-only">Items falling due per week</caption>
           <thead>
             <tr className="border-b border-paper-line">
-              <th scope="col" className="py-1 pr-4">Week starting</th>
-              <th scope="col" className="py-1 text-right">Items due</th>
+              <th scope="col" className="py-1 pr-4">
+                Week starting
+              </th>
+              <th scope="col" className="py-1 text-right">
+                Items due
+              </th>
             </tr>
           </thead>
           <tbody>

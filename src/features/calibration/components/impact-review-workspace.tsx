@@ -118,11 +118,15 @@ export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: Impa
 
   return (
     <div className="flex flex-col gap-4">
-      <Panel
-        title="Bookings to assess"
-        actions={<StatusChip tone={done === total ? 'ok' : 'warn'} label={`${done} of ${total} assessed`} />}
-      >
-        <div className="mb-3 h-2 w-full max-w-md overflow-hidden rounded-full border border-ink-300 bg-card" role="progressbar" aria-label="Assessed" aria-valuemin={0} aria-valuemax={total} aria-valuenow={done}>
+      <Panel title="Bookings to assess" actions={<StatusChip tone={done === total ? 'ok' : 'warn'} label={`${done} of ${total} assessed`} />}>
+        <div
+          className="mb-3 h-2 w-full max-w-md overflow-hidden rounded-full border border-ink-300 bg-card"
+          role="progressbar"
+          aria-label="Assessed"
+          aria-valuemin={0}
+          aria-valuemax={total}
+          aria-valuenow={done}
+        >
           <div className="h-full bg-ok" style={{ width: `${total ? (done / total) * 100 : 100}%` }} />
         </div>
         {total === 0 ? <p className="text-ink-700">No job or rental used it in that time: nothing to assess.</p> : null}
@@ -135,9 +139,15 @@ export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: Impa
 
       {canAssess ? (
         <Panel title="Customer notices">
-          <p className="mb-3 text-sm text-ink-700">One notice per customer with a contact e-mail. Draft them to read first; sending queues them in the outbox.</p>
+          <p className="mb-3 text-sm text-ink-700">
+            One notice per customer with a contact e-mail. Draft them to read first; sending queues them in the outbox.
+          </p>
           <div className="mb-3 flex flex-wrap gap-2">
-            <Button busy={notices.isPending && notices.variables?.send === false} disabled={notices.isPending} onClick={() => notices.mutate({ reviewId: review.id, send: false })}>
+            <Button
+              busy={notices.isPending && notices.variables?.send === false}
+              disabled={notices.isPending}
+              onClick={() => notices.mutate({ reviewId: review.id, send: false })}
+            >
               Draft notices
             </Button>
             <Button
@@ -159,7 +169,10 @@ export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: Impa
               <div className="flex flex-col gap-2">
                 {result.sent ? (
                   <Notice tone="success" title={`${result.drafts.length} ${result.drafts.length === 1 ? 'notice' : 'notices'} queued`}>
-                    They leave with the next outbox run. <Link to="/mailbox" className="font-semibold underline">See the mailbox</Link>
+                    They leave with the next outbox run.{' '}
+                    <Link to="/mailbox" className="font-semibold underline">
+                      See the mailbox
+                    </Link>
                   </Notice>
                 ) : (
                   <p className="font-semibold">
@@ -178,8 +191,14 @@ export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: Impa
           <Button variant="primary" disabled={done < total} busy={close.isPending} onClick={() => close.mutate(review.id)}>
             Close review
           </Button>
-          <span className="text-sm text-ink-700">{done < total ? `Assess the ${total - done} remaining ${total - done === 1 ? 'booking' : 'bookings'} first.` : 'Every booking is assessed.'}</span>
-          {close.isError ? <Notice tone="error" className="w-full">{close.error.message}</Notice> : null}
+          <span className="text-sm text-ink-700">
+            {done < total ? `Assess the ${total - done} remaining ${total - done === 1 ? 'booking' : 'bookings'} first.` : 'Every booking is assessed.'}
+          </span>
+          {close.isError ? (
+            <Notice tone="error" className="w-full">
+              {close.error.message}
+            </Notice>
+          ) : null}
         </div>
       ) : null}
       {!open ? (

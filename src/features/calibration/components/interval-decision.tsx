@@ -7,7 +7,15 @@ import { suggestionHeadline } from './calibration-words';
 const decisionWords = { accepted: 'Accepted', declined: 'Declined' } as const;
 
 /** The interval review's suggestion after a calibration, and the owner's answer (OIML D 10 / ILAC-G24 staircase method). */
-export function IntervalSuggestion({ event, canDecide, onDecided }: { event: CalibrationEventView; canDecide: boolean; onDecided?: (event: CalibrationEventView) => void }) {
+export function IntervalSuggestion({
+  event,
+  canDecide,
+  onDecided,
+}: {
+  event: CalibrationEventView;
+  canDecide: boolean;
+  onDecided?: (event: CalibrationEventView) => void;
+}) {
   const decide = useDecideInterval();
   const moves = event.suggestedChange === 'lengthen' || event.suggestedChange === 'shorten';
   const outside = event.suggestedChange === 'outside_policy';

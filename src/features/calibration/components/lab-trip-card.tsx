@@ -51,13 +51,13 @@ export function LabTripCard({ trip, today, canSend, headingLevel = 3 }: { trip: 
             Send to the lab
           </Button>
           <span className="text-sm text-ink-700">
-            {trip.sentOn > today ? `Planned to leave ${formatCalendarDate(trip.sentOn)}: send it on the day it leaves.` : 'Marks the items as at the lab and the booking as out.'}
+            {trip.sentOn > today
+              ? `Planned to leave ${formatCalendarDate(trip.sentOn)}: send it on the day it leaves.`
+              : 'Marks the items as at the lab and the booking as out.'}
           </span>
         </div>
       ) : null}
-      {trip.state === 'at_lab' ? (
-        <p className="text-sm text-ink-700">Each item comes back when its certificate is recorded.</p>
-      ) : null}
+      {trip.state === 'at_lab' ? <p className="text-sm text-ink-700">Each item comes back when its certificate is recorded.</p> : null}
       {send.isError ? <Notice tone="error">{send.error.message}</Notice> : null}
     </article>
   );

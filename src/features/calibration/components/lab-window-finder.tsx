@@ -12,7 +12,9 @@ const purposeWords: Record<string, string> = { job: 'Site job', rental: 'Rental'
 
 /** "Free 12 Jan – 2 Feb (22 days) — back by 25 Jan", or open-ended when no booking follows. */
 export function gapText(gap: LabWindowsView['gaps'][number]): string {
-  const free = gap.endsOn ? `Free ${dateRange(gap.startsOn, gap.endsOn)} (${days(gap.freeDays ?? 0)})` : `Free from ${formatCalendarDate(gap.startsOn)} on, nothing booked after`;
+  const free = gap.endsOn
+    ? `Free ${dateRange(gap.startsOn, gap.endsOn)} (${days(gap.freeDays ?? 0)})`
+    : `Free from ${formatCalendarDate(gap.startsOn)} on, nothing booked after`;
   return `${free} — back by ${formatCalendarDate(gap.returnBy)}`;
 }
 
@@ -27,7 +29,19 @@ function conflictText(error: unknown): string {
  * the free gaps long enough for the lab's turnaround, earliest first. "Plan
  * this trip" reserves the gap on the board from its first day.
  */
-export function LabWindowFinder({ assetId, assetTag, windows, onPlanned, canPlan }: { assetId: string; assetTag: string; windows: LabWindowsView; onPlanned: (trip: LabTripView) => void; canPlan: boolean }) {
+export function LabWindowFinder({
+  assetId,
+  assetTag,
+  windows,
+  onPlanned,
+  canPlan,
+}: {
+  assetId: string;
+  assetTag: string;
+  windows: LabWindowsView;
+  onPlanned: (trip: LabTripView) => void;
+  canPlan: boolean;
+}) {
   const plan = usePlanLabTrip();
   const [provider, setProvider] = useState(windows.provider ?? '');
   const providerId = useId();

@@ -150,8 +150,19 @@ export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetV
           setProblem(
             applyServerErrors(error, helpers, {
               fields: ['performedOn', 'provider', 'certificateNumber', 'asFound', 'asLeft', 'intervalMonths', 'note', 'certificate'],
-              byCode: { unsupported_type: 'certificate', too_large: 'certificate', certificate_active_content: 'certificate', certificate_encrypted: 'certificate' },
-              labels: { performedOn: 'Performed on', provider: 'Provider', certificateNumber: 'Certificate number', intervalMonths: 'Interval', certificate: 'Certificate' },
+              byCode: {
+                unsupported_type: 'certificate',
+                too_large: 'certificate',
+                certificate_active_content: 'certificate',
+                certificate_encrypted: 'certificate',
+              },
+              labels: {
+                performedOn: 'Performed on',
+                provider: 'Provider',
+                certificateNumber: 'Certificate number',
+                intervalMonths: 'Interval',
+                certificate: 'Certificate',
+              },
             }),
           );
         } finally {

@@ -64,7 +64,9 @@ export function AssetChecks({ asset, className = '' }: { asset: AssetView; class
             ))}
           </ul>
           {checks.data.total > checks.data.items.length ? (
-            <p className="mt-2 text-sm text-ink-700">Showing the latest {checks.data.items.length} of {formatCount(checks.data.total)}.</p>
+            <p className="mt-2 text-sm text-ink-700">
+              Showing the latest {checks.data.items.length} of {formatCount(checks.data.total)}.
+            </p>
           ) : null}
         </>
       ) : null}

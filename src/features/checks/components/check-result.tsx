@@ -66,9 +66,8 @@ export function CheckResult({ check, assetTag, heldNotice = true }: { check: Che
       </div>
       {r.decision === 'fail' && heldNotice ? (
         <Notice tone="error" title={`${assetTag ?? 'This item'} is now on hold`}>
-          It cannot be booked or sent out until it passes this check again or is recalibrated, and a shop manager or the
-          owner releases it. The manager and the owner have been told by e-mail. Jobs it measured since its last good
-          check may need a second look.
+          It cannot be booked or sent out until it passes this check again or is recalibrated, and a shop manager or the owner releases it. The manager and the
+          owner have been told by e-mail. Jobs it measured since its last good check may need a second look.
         </Notice>
       ) : null}
       <FactList items={facts} />

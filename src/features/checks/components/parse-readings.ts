@@ -4,7 +4,10 @@ import type { Point } from '../../../lib/checks';
 export function parseDecimal(text: string | number | null | undefined): number | null {
   if (typeof text === 'number') return Number.isFinite(text) ? text : null;
   if (text === null || text === undefined) return null;
-  const t = text.trim().replace(/\u2212/g, '-').replace(',', '.');
+  const t = text
+    .trim()
+    .replace(/\u2212/g, '-')
+    .replace(',', '.');
   if (!t || !/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return null;
   const n = Number(t);
   return Number.isFinite(n) ? n : null;
@@ -35,7 +38,9 @@ export function parseReadings(text: string): PastedReadings {
   text.split(/\r?\n/).forEach((raw, index) => {
     const line = raw.trim();
     if (!line) return;
-    let cells = splitLine(line).map((c) => c.trim()).filter((c) => c !== '');
+    let cells = splitLine(line)
+      .map((c) => c.trim())
+      .filter((c) => c !== '');
     if (cells.length > 3 && parseDecimal(cells[0]) === null) cells = cells.slice(1);
     const numbers = cells.map(parseDecimal);
     if (numbers.every((n) => n === null)) {
@@ -58,7 +63,10 @@ export function parseNumberList(text: string): number[] | null {
   const t = text.trim();
   if (!t) return [];
   const parts = t.includes(';') ? t.split(';') : t.split(/[,\s]+/);
-  const values = parts.map((p) => p.trim()).filter(Boolean).map(parseDecimal);
+  const values = parts
+    .map((p) => p.trim())
+    .filter(Boolean)
+    .map(parseDecimal);
   return values.some((v) => v === null) ? null : (values as number[]);
 }
 

@@ -51,9 +51,7 @@ function View({
         <text x={C + 4} y={PAD + 10} fontSize={10} fill="#3a4660">
           +{axes[1]}
         </text>
-        {toleranceUm ? (
-          <circle cx={C} cy={C} r={toleranceUm * k} fill="none" stroke="#7a5f22" strokeWidth={1.4} strokeDasharray="5 3" />
-        ) : null}
+        {toleranceUm ? <circle cx={C} cy={C} r={toleranceUm * k} fill="none" stroke="#7a5f22" strokeWidth={1.4} strokeDasharray="5 3" /> : null}
         {/* The reference point R: a ring with a cross. */}
         <circle cx={C} cy={C} r={4} fill="none" stroke="#1c2536" strokeWidth={1.4} />
         {devs.map((d) => {
@@ -91,15 +89,7 @@ function View({
  * The circle is the limit on the 3-D distance; a reading beyond it in 3-D is
  * drawn as ✕ whatever its projection, so the shape tells it, not the colour.
  */
-export function ReadingsSketch({
-  reference,
-  readings,
-  toleranceUm,
-}: {
-  reference: Point;
-  readings: (Point | null)[];
-  toleranceUm: number | null;
-}) {
+export function ReadingsSketch({ reference, readings, toleranceUm }: { reference: Point; readings: (Point | null)[]; toleranceUm: number | null }) {
   const devs = readings
     .map((p, i) => (p ? { n: i + 1, dx: (p.x - reference.x) * 1000, dy: (p.y - reference.y) * 1000, dz: (p.z - reference.z) * 1000 } : null))
     .filter((d): d is { n: number; dx: number; dy: number; dz: number } => d !== null);
@@ -110,8 +100,20 @@ export function ReadingsSketch({
   return (
     <div className="rounded-md border border-paper-line bg-paper/40 p-3">
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
-        <View title="Top view (X–Y)" axes={['X', 'Y']} extentUm={extentUm} toleranceUm={toleranceUm} devs={devs.map((d) => ({ n: d.n, a: d.dx, b: d.dy, outside: outside(d) }))} />
-        <View title="Side view (X–Z)" axes={['X', 'Z']} extentUm={extentUm} toleranceUm={toleranceUm} devs={devs.map((d) => ({ n: d.n, a: d.dx, b: d.dz, outside: outside(d) }))} />
+        <View
+          title="Top view (X–Y)"
+          axes={['X', 'Y']}
+          extentUm={extentUm}
+          toleranceUm={toleranceUm}
+          devs={devs.map((d) => ({ n: d.n, a: d.dx, b: d.dy, outside: outside(d) }))}
+        />
+        <View
+          title="Side view (X–Z)"
+          axes={['X', 'Z']}
+          extentUm={extentUm}
+          toleranceUm={toleranceUm}
+          devs={devs.map((d) => ({ n: d.n, a: d.dx, b: d.dz, outside: outside(d) }))}
+        />
       </div>
       <p className="mt-2 text-sm text-ink-700">
         Centred on the reference point (ring). {toleranceUm ? `Dashed circle: tolerance ${formatNumber(toleranceUm)} µm. ` : ''}

@@ -78,7 +78,7 @@ export function RecordCheckForm({
   initialKind?: string | null;
 }) {
   const kinds = checkKindsFor(asset.type);
-  const positions = useMemo(() => ((asset.specs.positions as TipPosition[] | undefined) ?? []), [asset.specs.positions]);
+  const positions = useMemo(() => (asset.specs.positions as TipPosition[] | undefined) ?? [], [asset.specs.positions]);
   const rules = useMemo(() => rulesFor(asset, settings), [asset, settings]);
   const bars = useMemo(() => scaleBars.map(scaleBarFacts).filter((b): b is ScaleBarFacts => b !== null), [scaleBars]);
   const create = useCreateCheck();
@@ -89,8 +89,7 @@ export function RecordCheckForm({
   if (!kinds.length) {
     return (
       <Notice tone="info" title={`No field checks for a ${assetTypeTitles[asset.type].toLowerCase()}`}>
-        Field checks are recorded for probe tips (tip validation) and laser trackers (two-face and length checks). For this
-        item, record a calibration instead.
+        Field checks are recorded for probe tips (tip validation) and laser trackers (two-face and length checks). For this item, record a calibration instead.
       </Notice>
     );
   }
@@ -155,7 +154,13 @@ export function RecordCheckForm({
             applyServerErrors(error, helpers, {
               fields: checkFormFields,
               aliases: { uncertaintyUm: 'uncertaintyU', uncertaintyComponentsUm: 'uncertaintyComponents' },
-              labels: { distanceM: 'The distance', position: 'The position', probeId: 'The probe', scaleBarId: 'The scale bar', temperatureC: 'The temperature' },
+              labels: {
+                distanceM: 'The distance',
+                position: 'The position',
+                probeId: 'The probe',
+                scaleBarId: 'The scale bar',
+                temperatureC: 'The temperature',
+              },
             }),
           );
         }
@@ -221,17 +226,7 @@ function KindChoice({ kinds }: { kinds: CheckKind[] }) {
   );
 }
 
-function CheckInputs({
-  asset,
-  positions,
-  probes,
-  bars,
-}: {
-  asset: AssetView;
-  positions: TipPosition[];
-  probes: AssetView[];
-  bars: ScaleBarFacts[];
-}) {
+function CheckInputs({ asset, positions, probes, bars }: { asset: AssetView; positions: TipPosition[]; probes: AssetView[]; bars: ScaleBarFacts[] }) {
   const { values } = useFormikContext<CheckFormValues>();
   const tipStatus = useTipValidation(asset.id, { enabled: asset.type === 'tip' });
   if (values.kind === 'tip_validation') {
@@ -258,12 +253,7 @@ function CheckInputs({
             options={[{ value: '', label: 'Not recorded' }, ...probes.map((p) => ({ value: p.id, label: [p.assetTag, p.model].filter(Boolean).join(' · ') }))]}
           />
         </div>
-        <PointFields
-          name="reference"
-          prefix="Reference"
-          legend="Reference point R"
-          hint="The SMR's reading in the nest, in mm, from the tracker."
-        />
+        <PointFields name="reference" prefix="Reference" legend="Reference point R" hint="The SMR's reading in the nest, in mm, from the tracker." />
         <ReadingsTable />
         <PasteReadings />
       </>
@@ -302,7 +292,9 @@ function CheckInputs({
         hint={
           bar
             ? `Certified length ${formatNumber(bar.certifiedLengthMm, 4)} mm at the ISO 1 reference temperature of ${REFERENCE_TEMPERATURE_C} °C; α = ${formatNumber(bar.expansionPpmPerK, 2)} µm/(m·K).${
-                t !== null ? ` Expected at ${formatNumber(t, 1)} °C: ${formatNumber(expectedLengthMm(bar.certifiedLengthMm, bar.expansionPpmPerK, t), 4)} mm.` : ''
+                t !== null
+                  ? ` Expected at ${formatNumber(t, 1)} °C: ${formatNumber(expectedLengthMm(bar.certifiedLengthMm, bar.expansionPpmPerK, t), 4)} mm.`
+                  : ''
               }`
             : `Lengths are certified at the ISO 1 reference temperature of ${REFERENCE_TEMPERATURE_C} °C; the expected length is corrected to this temperature.`
         }
@@ -318,18 +310,22 @@ function ReadingsTable() {
   return (
     <fieldset className="min-w-0">
       <legend className="mb-1 font-semibold text-ink-900">Readings with the probe tip</legend>
-      <p className="mb-2 text-sm text-ink-500">
-        The tip seated in the reference sphere, read in different orientations (at least {MIN_TIP_READINGS}, mm).
-      </p>
+      <p className="mb-2 text-sm text-ink-500">The tip seated in the reference sphere, read in different orientations (at least {MIN_TIP_READINGS}, mm).</p>
       <table className="w-full table-fixed border-separate border-spacing-x-0.5 border-spacing-y-1 sm:border-spacing-x-1">
         <thead>
           <tr className="text-left text-sm text-ink-700">
             <th scope="col" className="w-5 font-semibold sm:w-8">
               #
             </th>
-            <th scope="col" className="font-semibold">X (mm)</th>
-            <th scope="col" className="font-semibold">Y (mm)</th>
-            <th scope="col" className="font-semibold">Z (mm)</th>
+            <th scope="col" className="font-semibold">
+              X (mm)
+            </th>
+            <th scope="col" className="font-semibold">
+              Y (mm)
+            </th>
+            <th scope="col" className="font-semibold">
+              Z (mm)
+            </th>
             <th scope="col" className="w-8 sm:w-10">
               <span className="sr-only">Remove</span>
             </th>
@@ -351,7 +347,12 @@ function ReadingsTable() {
                   type="button"
                   aria-label={`Remove reading ${i + 1}`}
                   disabled={rows.length <= MIN_TIP_READINGS}
-                  onClick={() => void setFieldValue('readings', rows.filter((__, j) => j !== i))}
+                  onClick={() =>
+                    void setFieldValue(
+                      'readings',
+                      rows.filter((__, j) => j !== i),
+                    )
+                  }
                   className="flex min-h-10 w-full items-center justify-center rounded-md text-lg text-ink-700 hover:bg-paper-deep disabled:opacity-35"
                 >
                   ×
@@ -407,8 +408,7 @@ function PasteReadings() {
         className="w-full rounded-md border border-paper-line bg-card px-3 py-1.5 font-mono text-[0.95rem]"
       />
       <p id={`${id}-hint`} className="text-sm text-ink-500">
-        Rows copied from a spreadsheet fill the table: one reading per line, X Y Z separated by tabs, semicolons, commas or
-        spaces; a decimal comma is fine.
+        Rows copied from a spreadsheet fill the table: one reading per line, X Y Z separated by tabs, semicolons, commas or spaces; a decimal comma is fine.
       </p>
       {filled !== null ? <p className="text-sm text-ok">Filled the table with {filled} readings.</p> : null}
       {parsed.problems.length ? (

@@ -43,7 +43,10 @@ export function ValidationHistoryChart({ checks, timeZone }: { checks: TipCheck[
   const positions = [...new Set(points.map((c) => c.position))].sort((a, b) => (a === 'horizontal' ? -1 : b === 'horizontal' ? 1 : 0));
   const tolerancePath = points.map((c, i) => `${i === 0 ? 'M' : 'L'}${x(times[i])} ${y(c.result.toleranceUm)}`).join(' ');
   const summary = `Largest deviation per tip validation: ${points
-    .map((c) => `${formatDate(c.performedAt, timeZone)} ${c.position} ${formatNumber(c.result.maxDeviationUm)} µm of ${formatNumber(c.result.toleranceUm)} µm (${c.result.decision})`)
+    .map(
+      (c) =>
+        `${formatDate(c.performedAt, timeZone)} ${c.position} ${formatNumber(c.result.maxDeviationUm)} µm of ${formatNumber(c.result.toleranceUm)} µm (${c.result.decision})`,
+    )
     .join('; ')}.`;
 
   return (
@@ -94,7 +97,11 @@ export function ValidationHistoryChart({ checks, timeZone }: { checks: TipCheck[
         {positions.map((p) => (
           <span key={p} className="inline-flex items-center gap-1">
             <svg width="12" height="12" aria-hidden="true">
-              {p === 'vertical' ? <circle cx="6" cy="6" r="4.5" fill="#1c2536" /> : <rect x="1.5" y="1.5" width="9" height="9" fill="#fffdf8" stroke="#1c2536" strokeWidth="2" />}
+              {p === 'vertical' ? (
+                <circle cx="6" cy="6" r="4.5" fill="#1c2536" />
+              ) : (
+                <rect x="1.5" y="1.5" width="9" height="9" fill="#fffdf8" stroke="#1c2536" strokeWidth="2" />
+              )}
             </svg>
             {positionWords[p]}
           </span>

@@ -88,8 +88,7 @@ const number = (what: string) =>
   Yup.number()
     .transform((value, original) => (original === '' || original === null ? undefined : value))
     .typeError(`${what} must be a number.`);
-const positive = (what: string, max: number) =>
-  number(what).moreThan(0, `${what} must be more than 0.`).max(max, `${what} looks too large (at most ${max}).`);
+const positive = (what: string, max: number) => number(what).moreThan(0, `${what} must be more than 0.`).max(max, `${what} looks too large (at most ${max}).`);
 const text = (what: string, max: number) => Yup.string().trim().max(max, `${what} must be at most ${max} characters.`);
 
 function specsSchema(type: AssetType | '') {
@@ -129,7 +128,9 @@ function specsSchema(type: AssetType | '') {
 
 export function assetFormSchema(values: AssetFormValues) {
   return Yup.object({
-    type: Yup.string().oneOf(assetTypes as readonly string[], 'Choose what kind of item this is.').required('Choose what kind of item this is.'),
+    type: Yup.string()
+      .oneOf(assetTypes as readonly string[], 'Choose what kind of item this is.')
+      .required('Choose what kind of item this is.'),
     assetTag: Yup.string()
       .trim()
       .required('Enter the asset tag — your firm’s own label, such as TRK-004.')
@@ -151,7 +152,10 @@ export function assetFormSchema(values: AssetFormValues) {
             .min(1, 'The interval must be at least 1 month.')
             .max(120, 'The interval must be at most 120 months.')
             .required('Enter how many months a calibration holds.')
-        : number('The interval').integer('Give the interval in whole months.').min(1, 'The interval must be at least 1 month.').max(120, 'The interval must be at most 120 months.'),
+        : number('The interval')
+            .integer('Give the interval in whole months.')
+            .min(1, 'The interval must be at least 1 month.')
+            .max(120, 'The interval must be at most 120 months.'),
       provider: text('The provider', 120),
       lastCalibratedOn: Yup.string()
         .matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'Enter a date.', excludeEmptyString: true })

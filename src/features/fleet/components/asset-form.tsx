@@ -26,10 +26,7 @@ import {
   type AssetFormValues,
 } from './asset-form-schema';
 
-const typeOptions = [
-  { value: '', label: 'Choose a type…' },
-  ...assetTypes.map((t) => ({ value: t, label: assetTypeTitles[t] })),
-];
+const typeOptions = [{ value: '', label: 'Choose a type…' }, ...assetTypes.map((t) => ({ value: t, label: assetTypeTitles[t] }))];
 
 const numberProps = { type: 'number', inputMode: 'decimal', step: 'any' } as const;
 
@@ -67,12 +64,8 @@ function SpecFields({ type }: { type: AssetType }) {
       ) : null}
       {fields.includes('nominalVoltageV') ? <Field name="specs.nominalVoltageV" label="Nominal voltage (V)" {...numberProps} /> : null}
       {fields.includes('ratedCapacityAh') ? <Field name="specs.ratedCapacityAh" label="Rated capacity (Ah)" {...numberProps} /> : null}
-      {fields.includes('chargeCycles') ? (
-        <Field name="specs.chargeCycles" label="Charge cycles" type="number" inputMode="numeric" step={1} min={0} />
-      ) : null}
-      {fields.includes('damaged') ? (
-        <CheckboxField name="specs.damaged" label="Damaged, swollen or dropped" className="self-end" />
-      ) : null}
+      {fields.includes('chargeCycles') ? <Field name="specs.chargeCycles" label="Charge cycles" type="number" inputMode="numeric" step={1} min={0} /> : null}
+      {fields.includes('damaged') ? <CheckboxField name="specs.damaged" label="Damaged, swollen or dropped" className="self-end" /> : null}
       {type === 'battery' ? (
         <div className="sm:col-span-2 flex flex-col gap-2">
           <p role="status" className="rounded-md bg-paper-deep px-3 py-2 text-ink-900">
@@ -88,9 +81,7 @@ function SpecFields({ type }: { type: AssetType }) {
         </div>
       ) : null}
       {fields.includes('diameterMm') ? <Field name="specs.diameterMm" label="Diameter (mm)" {...numberProps} /> : null}
-      {fields.includes('certifiedLengthMm') ? (
-        <Field name="specs.certifiedLengthMm" label="Certified length (mm)" {...numberProps} />
-      ) : null}
+      {fields.includes('certifiedLengthMm') ? <Field name="specs.certifiedLengthMm" label="Certified length (mm)" {...numberProps} /> : null}
       {fields.includes('expansionPpmPerK') ? (
         <Field
           name="specs.expansionPpmPerK"
@@ -148,10 +139,7 @@ export function AssetForm({ mode, asset, timeZone, currency, dueSoonDays, onSave
   const update = useUpdateAsset();
   const [problem, setProblem] = useState<string>();
   const digits = currencyDigits(currency);
-  const initialValues = useMemo(
-    () => (asset ? assetToFormValues(asset, digits) : emptyAssetFormValues()),
-    [asset, digits],
-  );
+  const initialValues = useMemo(() => (asset ? assetToFormValues(asset, digits) : emptyAssetFormValues()), [asset, digits]);
 
   return (
     <Formik<AssetFormValues>
@@ -200,20 +188,10 @@ export function AssetForm({ mode, asset, timeZone, currency, dueSoonDays, onSave
               <Field name="serialNumber" label="Serial number" mono autoComplete="off" />
               <Field name="manufacturer" label="Manufacturer" autoComplete="off" />
               <Field name="model" label="Model" autoComplete="off" />
-              {type && typesWithFirmware.includes(type) ? (
-                <Field name="firmwareVersion" label="Firmware version" mono autoComplete="off" />
-              ) : null}
-              {type === 'tip' ? (
-                <Field name="rfidTag" label="RFID tag" mono autoComplete="off" hint="The code the tip's RFID chip reports." />
-              ) : null}
+              {type && typesWithFirmware.includes(type) ? <Field name="firmwareVersion" label="Firmware version" mono autoComplete="off" /> : null}
+              {type === 'tip' ? <Field name="rfidTag" label="RFID tag" mono autoComplete="off" hint="The code the tip's RFID chip reports." /> : null}
               <Field name="location" label="Location" autoComplete="off" hint="Shelf, room or site where it is kept." />
-              <Field
-                name="replacementValue"
-                label={`Replacement value (${currency})`}
-                {...numberProps}
-                min={0}
-                step={digits ? 1 / 10 ** digits : 1}
-              />
+              <Field name="replacementValue" label={`Replacement value (${currency})`} {...numberProps} min={0} step={digits ? 1 / 10 ** digits : 1} />
             </Section>
 
             {type ? (
@@ -242,9 +220,7 @@ export function AssetForm({ mode, asset, timeZone, currency, dueSoonDays, onSave
               <Field name="notes" label="Notes" className="sm:col-span-2" autoComplete="off" />
             </Section>
 
-            {submitCount > 0 && !isValid ? (
-              <Notice tone="error">Some fields need attention; each says what is wrong.</Notice>
-            ) : null}
+            {submitCount > 0 && !isValid ? <Notice tone="error">Some fields need attention; each says what is wrong.</Notice> : null}
             <div className="flex flex-wrap gap-2">
               <Button type="submit" variant="primary" busy={isSubmitting}>
                 Save asset

@@ -11,7 +11,11 @@ export function AssetHistory({ assetId }: { assetId: string }) {
   return (
     <Panel title="History">
       {history.isPending ? <LoadingPanel label="Loading the history…" /> : null}
-      {history.isError ? <Notice tone="error" title="The history could not be loaded">{history.error.message}</Notice> : null}
+      {history.isError ? (
+        <Notice tone="error" title="The history could not be loaded">
+          {history.error.message}
+        </Notice>
+      ) : null}
       {history.data && history.data.items.length === 0 ? <p className="text-ink-700">Nothing recorded yet.</p> : null}
       {history.data && history.data.items.length ? (
         <ol className="flex flex-col divide-y divide-paper-line">

@@ -38,9 +38,7 @@ export function RecalibrationsDue({ footer }: { footer?: ReactNode } = {}) {
                   <span className="font-mono font-semibold text-ink-900">{asset.assetTag}</span>
                   <span className="min-w-0 truncate text-sm text-ink-700">{assetTypeTitles[asset.type]}</span>
                   <span className="ml-auto flex shrink-0 items-center gap-2">
-                    <span className="text-sm text-ink-700">
-                      {asset.calibration.dueOn ? formatCalendarDate(asset.calibration.dueOn) : 'never calibrated'}
-                    </span>
+                    <span className="text-sm text-ink-700">{asset.calibration.dueOn ? formatCalendarDate(asset.calibration.dueOn) : 'never calibrated'}</span>
                     <CalibrationChip state={asset.calibration.state} dueOn={asset.calibration.dueOn} />
                   </span>
                 </Link>

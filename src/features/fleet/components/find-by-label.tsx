@@ -13,7 +13,15 @@ import { canScanQr, QrScanner } from './qr-scanner';
  * match `onFound` gets the asset. Built for one hand on a phone: large text,
  * the controls low on the screen.
  */
-export function FindByLabel({ initialCode = '', initialProblem, onFound }: { initialCode?: string; initialProblem?: string; onFound: (asset: AssetView) => void }) {
+export function FindByLabel({
+  initialCode = '',
+  initialProblem,
+  onFound,
+}: {
+  initialCode?: string;
+  initialProblem?: string;
+  onFound: (asset: AssetView) => void;
+}) {
   const queryClient = useQueryClient();
   const inputId = useId();
   const [code, setCode] = useState(initialCode);

@@ -29,9 +29,15 @@ function ProblemsTable({ problems }: { problems: ImportProblem[] }) {
         <caption className="sr-only">Problems found in the file</caption>
         <thead className="sticky top-0 bg-bad-wash">
           <tr>
-            <th scope="col" className="px-2 py-1">Row</th>
-            <th scope="col" className="px-2 py-1">Column</th>
-            <th scope="col" className="px-2 py-1">What is wrong</th>
+            <th scope="col" className="px-2 py-1">
+              Row
+            </th>
+            <th scope="col" className="px-2 py-1">
+              Column
+            </th>
+            <th scope="col" className="px-2 py-1">
+              What is wrong
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -141,8 +147,8 @@ export function ImportDialog({ open, onClose, onImported }: { open: boolean; onC
           <a href={importTemplateUrl()} className="font-semibold text-brass-deep underline" download>
             Download the template
           </a>{' '}
-          to see the columns and two example rows. The file is checked first; nothing is written until you import it,
-          and if any row is wrong, no row is written.
+          to see the columns and two example rows. The file is checked first; nothing is written until you import it, and if any row is wrong, no row is
+          written.
         </>
       }
     >

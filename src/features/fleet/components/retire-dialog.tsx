@@ -10,21 +10,15 @@ import { useRetireAsset } from '../api/retire-asset';
 import type { AssetView } from '../../../../shared/assets/views';
 
 const schema = Yup.object({
-  reason: Yup.string().trim().required('Say briefly why the item leaves the fleet.').min(3, 'Say briefly why — a few words at least.').max(500, 'Keep the reason under 500 characters.'),
+  reason: Yup.string()
+    .trim()
+    .required('Say briefly why the item leaves the fleet.')
+    .min(3, 'Say briefly why — a few words at least.')
+    .max(500, 'Keep the reason under 500 characters.'),
 });
 
 /** Retiring keeps the record and its history; the item can no longer be edited or booked. */
-export function RetireDialog({
-  asset,
-  open,
-  onClose,
-  onRetired,
-}: {
-  asset: AssetView;
-  open: boolean;
-  onClose: () => void;
-  onRetired?: () => void;
-}) {
+export function RetireDialog({ asset, open, onClose, onRetired }: { asset: AssetView; open: boolean; onClose: () => void; onRetired?: () => void }) {
   const retire = useRetireAsset();
   const [problem, setProblem] = useState<string>();
   return (
@@ -53,7 +47,11 @@ export function RetireDialog({
       >
         {({ isSubmitting }) => (
           <Form noValidate className="flex flex-col gap-4">
-            {problem ? <Notice tone="error" title="Not retired">{problem}</Notice> : null}
+            {problem ? (
+              <Notice tone="error" title="Not retired">
+                {problem}
+              </Notice>
+            ) : null}
             <Field name="reason" label="Reason" hint="E.g. sold, written off after damage, lost on site." autoComplete="off" />
             <div className="flex flex-wrap justify-end gap-2">
               <Button onClick={onClose}>Cancel</Button>

@@ -36,16 +36,33 @@ export function HoldPanel({ assetId, assetTag, canRelease, className = '' }: { a
               { term: 'What happened', value: current.summary },
               { term: 'Held since', value: dateTime(current.startedAt) },
               ...(current.incidentId
-                ? [{ term: 'Report', value: <Link className="font-semibold text-brass-deep underline" to={`/incidents/${current.incidentId}`}>Open the damage report</Link> }]
+                ? [
+                    {
+                      term: 'Report',
+                      value: (
+                        <Link className="font-semibold text-brass-deep underline" to={`/incidents/${current.incidentId}`}>
+                          Open the damage report
+                        </Link>
+                      ),
+                    },
+                  ]
                 : []),
               ...(current.checkId
-                ? [{ term: 'Check', value: <Link className="font-semibold text-brass-deep underline" to={`/checks/${current.checkId}`}>Open the failed check</Link> }]
+                ? [
+                    {
+                      term: 'Check',
+                      value: (
+                        <Link className="font-semibold text-brass-deep underline" to={`/checks/${current.checkId}`}>
+                          Open the failed check
+                        </Link>
+                      ),
+                    },
+                  ]
                 : []),
             ]}
           />
           <p className="text-sm text-ink-700">
-            {assetTag} cannot be booked or sent out. It can be released once it passes a field check or is recalibrated after{' '}
-            {dateTime(current.startedAt)}.
+            {assetTag} cannot be booked or sent out. It can be released once it passes a field check or is recalibrated after {dateTime(current.startedAt)}.
           </p>
           {canRelease ? (
             <div className="flex flex-col gap-2">

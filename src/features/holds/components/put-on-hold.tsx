@@ -47,7 +47,11 @@ export function PutOnHoldButton({ assetId, assetTag, className = '' }: { assetId
         >
           {({ isSubmitting }) => (
             <Form noValidate className="flex flex-col gap-4">
-              {problem ? <Notice tone="error" title="Not held">{problem}</Notice> : null}
+              {problem ? (
+                <Notice tone="error" title="Not held">
+                  {problem}
+                </Notice>
+              ) : null}
               <Field name="summary" label="Reason" hint="E.g. readings drifting, case arrived open, awaiting inspection." autoComplete="off" />
               <div className="flex flex-wrap justify-end gap-2">
                 <Button onClick={close}>Cancel</Button>

@@ -49,9 +49,20 @@ export function IncidentPhotos({ incident }: { incident: IncidentView }) {
       <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3">
         {incident.photos.map((p, i) => (
           <li key={p.id}>
-            <a href={p.url} target="_blank" rel="noopener" className="flex flex-col gap-1 rounded-md border border-paper-line p-1 hover:border-brass-deep" download={p.thumbnailUrl ? undefined : p.fileName}>
+            <a
+              href={p.url}
+              target="_blank"
+              rel="noopener"
+              className="flex flex-col gap-1 rounded-md border border-paper-line p-1 hover:border-brass-deep"
+              download={p.thumbnailUrl ? undefined : p.fileName}
+            >
               {p.thumbnailUrl ? (
-                <img src={p.thumbnailUrl} alt={`Photo ${i + 1} of the damage (${p.fileName}), opens full size`} loading="lazy" className="aspect-square w-full rounded object-cover" />
+                <img
+                  src={p.thumbnailUrl}
+                  alt={`Photo ${i + 1} of the damage (${p.fileName}), opens full size`}
+                  loading="lazy"
+                  className="aspect-square w-full rounded object-cover"
+                />
               ) : (
                 <span className="flex aspect-square w-full flex-col items-center justify-center gap-1 rounded bg-paper-deep text-ink-700">
                   <DownloadIcon size={28} />

@@ -34,7 +34,11 @@ export function IncidentList({
               <span className="font-semibold">{incidentKindWords[i.kind]}</span>
               <span className="text-sm text-ink-700">{dateTime(i.occurredAt)}</span>
               <span className="ml-auto flex items-center gap-2">
-                {i.photos.length ? <span className="text-sm text-ink-700">{i.photos.length} photo{i.photos.length === 1 ? '' : 's'}</span> : null}
+                {i.photos.length ? (
+                  <span className="text-sm text-ink-700">
+                    {i.photos.length} photo{i.photos.length === 1 ? '' : 's'}
+                  </span>
+                ) : null}
                 <IncidentStateChip state={i.state} />
               </span>
             </Link>
@@ -46,7 +50,11 @@ export function IncidentList({
           {moreLink.label(total)}
         </Link>
       ) : null}
-      {!moreLink && total > items.length ? <p className="mt-2 text-sm text-ink-700">Showing {items.length} of {formatCount(total)}.</p> : null}
+      {!moreLink && total > items.length ? (
+        <p className="mt-2 text-sm text-ink-700">
+          Showing {items.length} of {formatCount(total)}.
+        </p>
+      ) : null}
     </>
   );
 }

@@ -15,15 +15,7 @@ function FileGlyph() {
 }
 
 /** "Photos": the camera or the gallery, up to six, each previewed (HEIC as a file) and removable. */
-export function PhotoPicker({
-  files,
-  onChange,
-  problems,
-}: {
-  files: File[];
-  onChange: (files: File[]) => void;
-  problems: string[];
-}) {
+export function PhotoPicker({ files, onChange, problems }: { files: File[]; onChange: (files: File[]) => void; problems: string[] }) {
   const id = useId();
   const input = useRef<HTMLInputElement>(null);
   const previews = useMemo(() => files.map((f) => (isHeic(f) ? null : URL.createObjectURL(f))), [files]);

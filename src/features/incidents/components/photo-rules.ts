@@ -9,10 +9,10 @@ const acceptedTypes: readonly string[] = photoTypes;
 
 export const isHeic = (file: { type: string; name: string }) => /heic|heif/i.test(file.type) || /\.(heic|heif)$/i.test(file.name);
 
-
 /** A plain sentence for a photo the server would refuse, or null when it is fine. */
 export function photoProblem(file: File): string | null {
   if (!acceptedTypes.includes(file.type) && !isHeic(file)) return `“${file.name}” is not a JPEG, PNG or HEIC photo.`;
-  if (file.size > MAX_PHOTO_BYTES) return `“${file.name}” is ${formatFileSize(file.size)}; each photo may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB. Take it again at a lower resolution.`;
+  if (file.size > MAX_PHOTO_BYTES)
+    return `“${file.name}” is ${formatFileSize(file.size)}; each photo may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB. Take it again at a lower resolution.`;
   return null;
 }

@@ -38,7 +38,11 @@ const toIso = (local: string) => new Date(local).toISOString();
 
 const schema = Yup.object({
   kind: Yup.string().required('Choose what happened to it.'),
-  description: Yup.string().trim().required('Say in a few words what happened.').min(3, 'Say in a few words what happened.').max(4000, 'Keep it under 4,000 characters.'),
+  description: Yup.string()
+    .trim()
+    .required('Say in a few words what happened.')
+    .min(3, 'Say in a few words what happened.')
+    .max(4000, 'Keep it under 4,000 characters.'),
   occurredAt: Yup.string()
     .required('Say when it happened.')
     .test('date', 'Enter a date and time.', (v) => !!v && !Number.isNaN(new Date(v).getTime()))
@@ -131,10 +135,13 @@ export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; boo
           Report sent
         </h2>
         <p>
-          <strong className="font-mono">{asset.assetTag}</strong> is now on hold: it cannot be booked or sent out until it has
-          been checked or recalibrated and released.
+          <strong className="font-mono">{asset.assetTag}</strong> is now on hold: it cannot be booked or sent out until it has been checked or recalibrated and
+          released.
         </p>
-        <p>The shop manager and the owner have been told by e-mail{sent.photos.length ? `, with your ${sent.photos.length} photo${sent.photos.length === 1 ? '' : 's'}` : ''}.</p>
+        <p>
+          The shop manager and the owner have been told by e-mail
+          {sent.photos.length ? `, with your ${sent.photos.length} photo${sent.photos.length === 1 ? '' : 's'}` : ''}.
+        </p>
         {asset.type === 'battery' && sent.kind !== 'missing' && sent.kind !== 'other' ? <BatteryCaution /> : null}
         <p className="text-base text-ink-700">Until then, keep the item apart and do not use it.</p>
         <div className="flex flex-col gap-2 sm:flex-row">
@@ -213,8 +220,8 @@ export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; boo
             Send report
           </Button>
           <p className="text-base text-ink-700">
-            Sending holds the item at once and e-mails the shop manager and the owner. If anyone is hurt, or a battery is hot,
-            swelling or smoking, get clear and follow your site&rsquo;s emergency rules first.
+            Sending holds the item at once and e-mails the shop manager and the owner. If anyone is hurt, or a battery is hot, swelling or smoking, get clear
+            and follow your site&rsquo;s emergency rules first.
           </p>
         </Form>
       )}

@@ -41,7 +41,11 @@ function ResolveDialog({ incident, currency, open, onClose }: { incident: Incide
   const formId = useId();
   const schema = Yup.object({
     resolution: Yup.string().trim().required('Say how it was resolved.').max(4000, 'Keep it under 4,000 characters.'),
-    charge: Yup.string().test('amount', `Enter an amount in ${currency}, e.g. ${(120).toFixed(digits)}, or leave it empty.`, (v) => !v?.trim() || parseAmount(v, digits) !== null),
+    charge: Yup.string().test(
+      'amount',
+      `Enter an amount in ${currency}, e.g. ${(120).toFixed(digits)}, or leave it empty.`,
+      (v) => !v?.trim() || parseAmount(v, digits) !== null,
+    ),
   });
   return (
     <Dialog
@@ -60,7 +64,12 @@ function ResolveDialog({ incident, currency, open, onClose }: { incident: Incide
           setProblem(undefined);
           const charge = values.charge.trim() ? parseAmount(values.charge, digits) : null;
           try {
-            await update.mutateAsync({ id: incident.id, state: 'resolved', resolution: values.resolution.trim(), ...(charge !== null ? { chargeAmountMinor: charge } : {}) });
+            await update.mutateAsync({
+              id: incident.id,
+              state: 'resolved',
+              resolution: values.resolution.trim(),
+              ...(charge !== null ? { chargeAmountMinor: charge } : {}),
+            });
             onClose();
           } catch (error) {
             setProblem(
@@ -75,7 +84,11 @@ function ResolveDialog({ incident, currency, open, onClose }: { incident: Incide
       >
         {({ isSubmitting }) => (
           <Form noValidate id={formId} className="flex flex-col gap-4">
-            {problem ? <Notice tone="error" title="Not resolved">{problem}</Notice> : null}
+            {problem ? (
+              <Notice tone="error" title="Not resolved">
+                {problem}
+              </Notice>
+            ) : null}
             <Field name="resolution" label="Resolution" autoComplete="off" />
             <Field
               name="charge"

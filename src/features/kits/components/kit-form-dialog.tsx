@@ -16,17 +16,7 @@ const schema = Yup.object({
 });
 
 /** New kit (no `kit`) or rename an existing one. */
-export function KitFormDialog({
-  open,
-  kit,
-  onClose,
-  onSaved,
-}: {
-  open: boolean;
-  kit?: KitView;
-  onClose: () => void;
-  onSaved: (kit: KitView) => void;
-}) {
+export function KitFormDialog({ open, kit, onClose, onSaved }: { open: boolean; kit?: KitView; onClose: () => void; onSaved: (kit: KitView) => void }) {
   const create = useCreateKit();
   const update = useUpdateKit();
   const [problem, setProblem] = useState<string>();
@@ -54,15 +44,17 @@ export function KitFormDialog({
             setProblem(undefined);
             onSaved(saved);
           } catch (error) {
-            setProblem(
-              applyServerErrors(error, helpers, { fields: ['name', 'notes'], labels: { name: 'The name', notes: 'The notes' } }),
-            );
+            setProblem(applyServerErrors(error, helpers, { fields: ['name', 'notes'], labels: { name: 'The name', notes: 'The notes' } }));
           }
         }}
       >
         {({ isSubmitting }) => (
           <Form noValidate className="flex flex-col gap-4">
-            {problem ? <Notice tone="error" title="Not saved">{problem}</Notice> : null}
+            {problem ? (
+              <Notice tone="error" title="Not saved">
+                {problem}
+              </Notice>
+            ) : null}
             <Field name="name" label="Kit name" autoComplete="off" />
             <Field name="notes" label="Notes" autoComplete="off" hint="Optional, e.g. what the kit is usually used for." />
             <div className="flex flex-wrap justify-end gap-2">

@@ -79,7 +79,9 @@ function AddMembers({ onAdd, busy }: { onAdd: (asset: AssetView) => void; busy: 
         )
       ) : null}
       {candidates.data && candidates.data.total > candidates.data.items.length ? (
-        <p className="text-sm text-ink-700">Showing {candidates.data.items.length} of {candidates.data.total}; search to narrow down.</p>
+        <p className="text-sm text-ink-700">
+          Showing {candidates.data.items.length} of {candidates.data.total}; search to narrow down.
+        </p>
       ) : null}
     </section>
   );
@@ -140,7 +142,13 @@ export function KitMembers({
                 asset={asset}
                 busy={update.isPending}
                 onRemove={
-                  canWrite ? () => setMembers(ids.filter((id) => id !== asset.id), `${asset.assetTag} is no longer in ${kit.name}.`) : undefined
+                  canWrite
+                    ? () =>
+                        setMembers(
+                          ids.filter((id) => id !== asset.id),
+                          `${asset.assetTag} is no longer in ${kit.name}.`,
+                        )
+                    : undefined
                 }
               />
             ))}
@@ -149,9 +157,7 @@ export function KitMembers({
           <p className="text-ink-700">No members yet.{canWrite ? ' Add the items that travel together below.' : ''}</p>
         )}
       </section>
-      {canWrite ? (
-        <AddMembers busy={update.isPending} onAdd={(asset) => setMembers([...ids, asset.id], `${asset.assetTag} added to ${kit.name}.`)} />
-      ) : null}
+      {canWrite ? <AddMembers busy={update.isPending} onAdd={(asset) => setMembers([...ids, asset.id], `${asset.assetTag} added to ${kit.name}.`)} /> : null}
     </div>
   );
 }

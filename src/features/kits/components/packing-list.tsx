@@ -10,8 +10,7 @@ export function PackingList({ kit, organizationName }: { kit: KitWithMembersView
     <section aria-label="Packing list (printed)" className="hidden text-black print:block">
       <h2 className="text-2xl font-bold">Packing list · {kit.name}</h2>
       <p className="mb-4 text-sm">
-        {organizationName} · {kit.members.length} {kit.members.length === 1 ? 'item' : 'items'} · printed{' '}
-        {date(new Date())}
+        {organizationName} · {kit.members.length} {kit.members.length === 1 ? 'item' : 'items'} · printed {date(new Date())}
       </p>
       <table className="w-full border-collapse text-left text-sm">
         <thead>
@@ -37,12 +36,10 @@ export function PackingList({ kit, organizationName }: { kit: KitWithMembersView
           ))}
         </tbody>
       </table>
-      <p className="mt-6 text-sm">
-        Packed by ____________________ &nbsp; Checked by ____________________ &nbsp; Date __________
-      </p>
+      <p className="mt-6 text-sm">Packed by ____________________ &nbsp; Checked by ____________________ &nbsp; Date __________</p>
       <p className="mt-3 text-xs">
-        Tracker cases are heavy: lift with two people or use a trolley. Do not pack a dropped, swollen or damaged
-        lithium-ion battery. Follow local codes, the carrier's rules and the instrument maker's instructions.
+        Tracker cases are heavy: lift with two people or use a trolley. Do not pack a dropped, swollen or damaged lithium-ion battery. Follow local codes, the
+        carrier's rules and the instrument maker's instructions.
       </p>
     </section>
   );

@@ -36,7 +36,11 @@ export function ShippingSheetPanel({ kitId }: { kitId: string }) {
         </a>
       </div>
       {sheet.isPending ? <LoadingPanel label="Adding up the batteries…" /> : null}
-      {sheet.isError ? <Notice tone="error" title="The shipping sheet could not be loaded">{sheet.error.message}</Notice> : null}
+      {sheet.isError ? (
+        <Notice tone="error" title="The shipping sheet could not be loaded">
+          {sheet.error.message}
+        </Notice>
+      ) : null}
       {sheet.data ? (
         sheet.data.lines.length === 0 ? (
           <p className="text-ink-700">This kit has no batteries.</p>
@@ -47,11 +51,21 @@ export function ShippingSheetPanel({ kitId }: { kitId: string }) {
                 <caption className="sr-only">Batteries in the kit with their energy and shipping class</caption>
                 <thead className="bg-paper-deep text-sm">
                   <tr>
-                    <th scope="col" className="px-2 py-1.5">Battery</th>
-                    <th scope="col" className="px-2 py-1.5 text-right">Voltage</th>
-                    <th scope="col" className="px-2 py-1.5 text-right">Capacity</th>
-                    <th scope="col" className="px-2 py-1.5 text-right">Energy</th>
-                    <th scope="col" className="px-2 py-1.5">Class</th>
+                    <th scope="col" className="px-2 py-1.5">
+                      Battery
+                    </th>
+                    <th scope="col" className="px-2 py-1.5 text-right">
+                      Voltage
+                    </th>
+                    <th scope="col" className="px-2 py-1.5 text-right">
+                      Capacity
+                    </th>
+                    <th scope="col" className="px-2 py-1.5 text-right">
+                      Energy
+                    </th>
+                    <th scope="col" className="px-2 py-1.5">
+                      Class
+                    </th>
                   </tr>
                 </thead>
                 <tbody>

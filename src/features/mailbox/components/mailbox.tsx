@@ -46,13 +46,7 @@ export function Mailbox() {
           <span>
             {formatCount(first)}–{formatCount(last)} of {formatCount(total)}
           </span>
-          <Button
-            size="sm"
-            variant="quiet"
-            icon={<RefreshIcon size={14} />}
-            busy={messages.isFetching}
-            onClick={() => messages.refetch()}
-          >
+          <Button size="sm" variant="quiet" icon={<RefreshIcon size={14} />} busy={messages.isFetching} onClick={() => messages.refetch()}>
             Refresh
           </Button>
         </div>

@@ -73,9 +73,7 @@ export function MessageReader({ message, onBack }: { message: MailMessageView; o
           className="h-[28rem] w-full rounded-md border border-paper-line bg-white"
         />
       ) : hasText ? (
-        <pre className="overflow-x-auto rounded-md border border-paper-line bg-card p-3 text-sm whitespace-pre-wrap break-words">
-          {message.text}
-        </pre>
+        <pre className="overflow-x-auto rounded-md border border-paper-line bg-card p-3 text-sm whitespace-pre-wrap break-words">{message.text}</pre>
       ) : (
         <p className="text-ink-500">This message has no body.</p>
       )}

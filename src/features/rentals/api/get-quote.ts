@@ -6,7 +6,13 @@ import { rentalsKeys, type RentalScope } from './keys';
 /** The price of a rental before it is made: lines with their periods, tax, total and the deposit to hold. */
 export function getQuote(scope: RentalScope, signal?: AbortSignal): Promise<Quote> {
   return apiClient.get<Quote>('/quotes', {
-    query: { kitId: scope.kitId, assetIds: scope.assetIds?.length ? scope.assetIds.join(',') : undefined, startsOn: scope.startsOn, endsOn: scope.endsOn, customerId: scope.customerId },
+    query: {
+      kitId: scope.kitId,
+      assetIds: scope.assetIds?.length ? scope.assetIds.join(',') : undefined,
+      startsOn: scope.startsOn,
+      endsOn: scope.endsOn,
+      customerId: scope.customerId,
+    },
     signal,
   });
 }

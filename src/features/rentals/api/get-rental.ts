@@ -14,5 +14,4 @@ export function useRental(id: string) {
 }
 
 /** The rental's documents (same-origin links; the session cookie goes with them). */
-export const rentalDocumentUrl = (id: string, document: 'agreement' | 'certificate-pack') =>
-  apiUrl(`/rentals/${encodeURIComponent(id)}/${document}.pdf`);
+export const rentalDocumentUrl = (id: string, document: 'agreement' | 'certificate-pack') => apiUrl(`/rentals/${encodeURIComponent(id)}/${document}.pdf`);

@@ -12,7 +12,14 @@ import { SaveOrCancel } from './save-or-cancel';
 type CustomerValues = Record<keyof CustomerInput, string>;
 
 const fields = ['company', 'billingContact', 'billingEmail', 'address', 'taxNumber', 'notes'] as const satisfies readonly (keyof CustomerValues)[];
-const labels = { company: 'Company', billingContact: 'Billing contact', billingEmail: 'Billing e-mail', address: 'Address', taxNumber: 'Tax number', notes: 'Notes' };
+const labels = {
+  company: 'Company',
+  billingContact: 'Billing contact',
+  billingEmail: 'Billing e-mail',
+  address: 'Address',
+  taxNumber: 'Tax number',
+  notes: 'Notes',
+};
 
 const schema = Yup.object({
   company: Yup.string().trim().required('Give the company name.').max(160, 'Keep the name to 160 characters.'),

@@ -17,7 +17,11 @@ export function CustomersTable({ customers }: { customers: CustomerView[] | unde
         cellClass: 'font-semibold',
         sort: 'asc',
         cellRenderer: (p: ICellRendererParams<CustomerView>) =>
-          p.data ? <Link to={`/customers/${p.data.id}`} className="text-ink-900 underline-offset-2 hover:underline">{p.data.company}</Link> : null,
+          p.data ? (
+            <Link to={`/customers/${p.data.id}`} className="text-ink-900 underline-offset-2 hover:underline">
+              {p.data.company}
+            </Link>
+          ) : null,
       },
       { headerName: 'Billing e-mail', field: 'billingEmail', minWidth: 200, flex: 2, cellClass: 'font-mono text-sm' },
       { headerName: 'Contact', field: 'billingContact', minWidth: 140 },

@@ -105,7 +105,11 @@ export function RateCardForm({
               ]}
             />
             {values.subject === 'type' ? (
-              <SelectField name="assetType" label="Asset type" options={[{ value: '', label: 'Choose a type' }, ...assetTypes.map((t) => ({ value: t, label: assetTypeTitles[t] }))]} />
+              <SelectField
+                name="assetType"
+                label="Asset type"
+                options={[{ value: '', label: 'Choose a type' }, ...assetTypes.map((t) => ({ value: t, label: assetTypeTitles[t] }))]}
+              />
             ) : (
               <SelectField name="kitId" label="Kit" options={[{ value: '', label: 'Choose a kit' }, ...kits.map((k) => ({ value: k.id, label: k.name }))]} />
             )}

@@ -22,7 +22,10 @@ export function RateCardsTable({
   // The subject's words live in the rows, so the table redraws when the kit names arrive.
   const rows = useMemo(() => {
     const kitNames = new Map(kits.map((k) => [k.id, k.name]));
-    return cards?.map((c) => ({ ...c, subject: c.kitId ? `Kit: ${kitNames.get(c.kitId) ?? 'a kit no longer listed'}` : c.assetType ? assetTypeTitles[c.assetType] : '' }));
+    return cards?.map((c) => ({
+      ...c,
+      subject: c.kitId ? `Kit: ${kitNames.get(c.kitId) ?? 'a kit no longer listed'}` : c.assetType ? assetTypeTitles[c.assetType] : '',
+    }));
   }, [cards, kits]);
   const columns = useMemo<ColDef<RateCardRow>[]>(() => {
     const money = (key: 'dayMinor' | 'weekMinor' | 'monthMinor' | 'lateFeePerDayMinor', headerName: string): ColDef<RateCardRow> => ({

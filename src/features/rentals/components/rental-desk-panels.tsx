@@ -12,7 +12,21 @@ import { RentalStateChip } from './rental-words';
 const holdNearLapse = (r: RentalSummary) => r.depositState === 'authorized' && lapsesSoon(r.authorizationCaptureBefore);
 
 /** One home panel: a short list of rentals, each a link to its page. */
-function RentalsPanel({ id, title, view, pick, empty, chip }: { id: string; title: string; view: RentalListView; pick: (r: RentalSummary) => boolean; empty: string; chip: (r: RentalSummary) => React.ReactNode }) {
+function RentalsPanel({
+  id,
+  title,
+  view,
+  pick,
+  empty,
+  chip,
+}: {
+  id: string;
+  title: string;
+  view: RentalListView;
+  pick: (r: RentalSummary) => boolean;
+  empty: string;
+  chip: (r: RentalSummary) => React.ReactNode;
+}) {
   const rentals = useRentals(view);
   const rows = rentals.data?.items.filter(pick) ?? [];
   return (
@@ -21,7 +35,9 @@ function RentalsPanel({ id, title, view, pick, empty, chip }: { id: string; titl
       title={title}
       count={rentals.data ? rows.length : undefined}
       empty={empty}
-      status={rentals.isPending ? <LoadingPanel label="Looking for rentals…" /> : rentals.isError ? <Notice tone="error">{rentals.error.message}</Notice> : null}
+      status={
+        rentals.isPending ? <LoadingPanel label="Looking for rentals…" /> : rentals.isError ? <Notice tone="error">{rentals.error.message}</Notice> : null
+      }
     >
       {rows.slice(0, 8).map((r) => (
         <li key={r.id}>
@@ -41,8 +57,22 @@ export function RentalDeskPanels() {
   const { dateTime } = useDateFormat();
   return (
     <>
-      <RentalsPanel id="lapsing-heading" title="Holds lapsing within two days" view="open" pick={holdNearLapse} empty="No card hold lapses within two days." chip={(r) => <HoldLapse at={r.authorizationCaptureBefore} dateTime={dateTime} />} />
-      <RentalsPanel id="settle-heading" title="Deposits to settle at return" view="to_settle" pick={(r) => r.depositState === 'authorized'} empty="No returned rental is waiting on its deposit." chip={(r) => <DepositStateChip state={r.depositState} />} />
+      <RentalsPanel
+        id="lapsing-heading"
+        title="Holds lapsing within two days"
+        view="open"
+        pick={holdNearLapse}
+        empty="No card hold lapses within two days."
+        chip={(r) => <HoldLapse at={r.authorizationCaptureBefore} dateTime={dateTime} />}
+      />
+      <RentalsPanel
+        id="settle-heading"
+        title="Deposits to settle at return"
+        view="to_settle"
+        pick={(r) => r.depositState === 'authorized'}
+        empty="No returned rental is waiting on its deposit."
+        chip={(r) => <DepositStateChip state={r.depositState} />}
+      />
       <RentalsPanel
         id="invoice-heading"
         title="Back and ready to invoice"

@@ -10,7 +10,17 @@ import { RentalStateChip, rentalStateWord } from './rental-words';
 type Cell = ICellRendererParams<RentalSummary>;
 
 /** Rentals as a table: sort, filter, export; the number (or a click on the row) opens one. */
-export function RentalsGrid({ rows, label, emptyMessage, exportFileName }: { rows: RentalSummary[] | undefined; label: string; emptyMessage: string; exportFileName: string }) {
+export function RentalsGrid({
+  rows,
+  label,
+  emptyMessage,
+  exportFileName,
+}: {
+  rows: RentalSummary[] | undefined;
+  label: string;
+  emptyMessage: string;
+  exportFileName: string;
+}) {
   const navigate = useNavigate();
   const { dateTime } = useDateFormat();
   const columns = useMemo<ColDef<RentalSummary>[]>(
@@ -21,7 +31,12 @@ export function RentalsGrid({ rows, label, emptyMessage, exportFileName }: { row
         minWidth: 120,
         maxWidth: 150,
         cellClass: 'font-mono font-semibold',
-        cellRenderer: (p: Cell) => (p.data ? <Link to={`/rentals/${p.data.id}`} className="text-ink-900 underline-offset-2 hover:underline">{p.data.number}</Link> : null),
+        cellRenderer: (p: Cell) =>
+          p.data ? (
+            <Link to={`/rentals/${p.data.id}`} className="text-ink-900 underline-offset-2 hover:underline">
+              {p.data.number}
+            </Link>
+          ) : null,
       },
       { headerName: 'Customer', field: 'customerCompany', minWidth: 170, flex: 2 },
       {
@@ -39,7 +54,13 @@ export function RentalsGrid({ rows, label, emptyMessage, exportFileName }: { row
         valueGetter: (p) => (p.data ? rentalStateWord(p.data.state) : ''),
         cellRenderer: (p: Cell) => (p.data ? <RentalStateChip state={p.data.state} /> : null),
       },
-      { headerName: 'Total', field: 'totalMinor', type: 'numericColumn', minWidth: 110, valueFormatter: (p) => (p.data ? formatMoney(p.data.totalMinor, p.data.currency) : '') },
+      {
+        headerName: 'Total',
+        field: 'totalMinor',
+        type: 'numericColumn',
+        minWidth: 110,
+        valueFormatter: (p) => (p.data ? formatMoney(p.data.totalMinor, p.data.currency) : ''),
+      },
       {
         colId: 'deposit',
         headerName: 'Deposit',

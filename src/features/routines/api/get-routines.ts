@@ -12,8 +12,7 @@ export const routinesQueryOptions = () =>
     queryKey: routinesKeys.list(),
     queryFn: ({ signal }) => getRoutines(signal),
     // While any routine is running, look again every few seconds.
-    refetchInterval: (query) =>
-      query.state.data?.items.some((routine) => routine.lastRun?.status === 'running') ? 3_000 : false,
+    refetchInterval: (query) => (query.state.data?.items.some((routine) => routine.lastRun?.status === 'running') ? 3_000 : false),
   });
 
 export function useRoutines() {

@@ -49,10 +49,18 @@ export function RoutinesTable() {
         <caption className="sr-only">Routines and their last run</caption>
         <thead className="bg-paper-deep text-sm">
           <tr>
-            <th scope="col" className="px-3 py-2 font-semibold">Routine</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Schedule</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Last run</th>
-            <th scope="col" className="px-3 py-2 font-semibold"><span className="sr-only">Actions</span></th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Routine
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Schedule
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Last run
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              <span className="sr-only">Actions</span>
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-paper-line">
@@ -82,7 +90,11 @@ export function RoutinesTable() {
                             </>
                           ) : null}
                         </span>
-                        <span className="text-ink-700">{last.scope === 'every firm' ? 'Scheduled run over every firm' : `Run now for your firm${last.summary ? `: ${summaryWords(last.summary)}` : ''}`}</span>
+                        <span className="text-ink-700">
+                          {last.scope === 'every firm'
+                            ? 'Scheduled run over every firm'
+                            : `Run now for your firm${last.summary ? `: ${summaryWords(last.summary)}` : ''}`}
+                        </span>
                         {last.error ? <span className="text-bad">{last.error}</span> : null}
                       </>
                     ) : null}
@@ -94,9 +106,7 @@ export function RoutinesTable() {
                       Run now
                     </Button>
                   </div>
-                  {outcome && (outcome.run || outcome.error) ? (
-                    <RunOutcomeNote outcome={outcome} />
-                  ) : null}
+                  {outcome && (outcome.run || outcome.error) ? <RunOutcomeNote outcome={outcome} /> : null}
                 </td>
               </tr>
             );
@@ -117,8 +127,7 @@ function RunOutcomeNote({ outcome }: { outcome: RunOutcome }) {
   }
   const run = outcome.run!;
   const tone = run.status === 'failed' ? 'error' : run.status === 'running' ? 'info' : 'success';
-  const title =
-    run.status === 'failed' ? 'This run failed' : run.status === 'running' ? 'Started; still running' : 'Run finished';
+  const title = run.status === 'failed' ? 'This run failed' : run.status === 'running' ? 'Started; still running' : 'Run finished';
   return (
     <Notice tone={tone} title={title} className="mt-2 max-w-xs">
       {run.status === 'failed' ? run.error : run.summary ? summaryWords(run.summary) : 'No summary was given.'}

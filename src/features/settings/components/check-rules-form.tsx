@@ -73,7 +73,12 @@ function ToleranceFields({ kind }: { kind: CheckKind }) {
       ) : (
         <div className="grid gap-2 sm:grid-cols-2">
           <Field name={`tolerances.${kind}.aUm`} label={`${checkKindWords[kind]}: A (µm)`} inputMode="decimal" />
-          <Field name={`tolerances.${kind}.bUmPerM`} label={`${checkKindWords[kind]}: B (µm/m)`} inputMode="decimal" hint="L is the distance from the tracker in metres." />
+          <Field
+            name={`tolerances.${kind}.bUmPerM`}
+            label={`${checkKindWords[kind]}: B (µm/m)`}
+            inputMode="decimal"
+            hint="L is the distance from the tracker in metres."
+          />
         </div>
       )}
     </fieldset>
@@ -96,17 +101,19 @@ export function CheckRulesForm({ settings }: { settings: OrganizationSettingsVie
       validationSchema={schema}
       enableReinitialize
       onSubmit={(values, helpers) =>
-        save(
-          { decisionRule: values.decisionRule, tolerances: Object.fromEntries(kinds.map((k) => [k, fromValues(values.tolerances[k])])) },
-          helpers,
-          { fields: ['decisionRule', ...kinds.flatMap((k) => ['um', 'aUm', 'bUmPerM'].map((f) => `tolerances.${k}.${f}`))] },
-        )
+        save({ decisionRule: values.decisionRule, tolerances: Object.fromEntries(kinds.map((k) => [k, fromValues(values.tolerances[k])])) }, helpers, {
+          fields: ['decisionRule', ...kinds.flatMap((k) => ['um', 'aUm', 'bUmPerM'].map((f) => `tolerances.${k}.${f}`))],
+        })
       }
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Field checks" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
           {saved ? <Notice tone="success">Saved. New field checks are judged this way.</Notice> : null}
-          {problem ? <Notice tone="error" title="Not saved">{problem}</Notice> : null}
+          {problem ? (
+            <Notice tone="error" title="Not saved">
+              {problem}
+            </Notice>
+          ) : null}
           <fieldset>
             <legend className="mb-1 font-semibold">Decision rule</legend>
             <Radio name="decisionRule" value="simple" label="Simple acceptance" hint="A check passes when its result is within the tolerance." />
@@ -118,8 +125,8 @@ export function CheckRulesForm({ settings }: { settings: OrganizationSettingsVie
             />
           </fieldset>
           <p className="text-sm text-ink-700">
-            Tolerances for each kind of check. Use the instrument maker&rsquo;s figures; an item can carry its own values. Lengths in
-            µm; B in µm per metre of distance from the tracker.
+            Tolerances for each kind of check. Use the instrument maker&rsquo;s figures; an item can carry its own values. Lengths in µm; B in µm per metre of
+            distance from the tracker.
           </p>
           {kinds.map((k) => (
             <ToleranceFields key={k} kind={k} />

@@ -26,14 +26,10 @@ const schema = Yup.object({
   lengthenFactor: Yup.string().test('factor', 'Enter a factor from 1 to 3, such as 1.25.', (v) => isNum(v) && num(v!) >= 1 && num(v!) <= 3),
   shortenFactor: Yup.string().test('factor', 'Enter a factor above 0 and at most 1, such as 0.5.', (v) => isNum(v) && num(v!) > 0 && num(v!) <= 1),
   minMonths: wholeNumber(1, 120, monthsMessage),
-  maxMonths: wholeNumber(1, 120, monthsMessage).test(
-    'not-below-min',
-    'The longest interval must be at least the shortest.',
-    function (max) {
-      const min = this.parent.minMonths as unknown;
-      return typeof min !== 'number' || typeof max !== 'number' || max >= min;
-    },
-  ),
+  maxMonths: wholeNumber(1, 120, monthsMessage).test('not-below-min', 'The longest interval must be at least the shortest.', function (max) {
+    const min = this.parent.minMonths as unknown;
+    return typeof min !== 'number' || typeof max !== 'number' || max >= min;
+  }),
 });
 
 const toValues = (p: IntervalPolicy): Values => ({
@@ -60,9 +56,9 @@ function Explanation({ values, saved }: { values: Values; saved: IntervalPolicy 
   const s = typed.shortenFactor > 0 && typed.shortenFactor <= 1 ? typed.shortenFactor : saved.shortenFactor;
   return (
     <p className="text-sm text-ink-700" aria-live="polite">
-      After {n} in-tolerance result{n === 1 ? '' : 's'} in a row the suggested interval grows by ×{formatNumber(f, 3)}; after an
-      out-of-tolerance result it shrinks by ×{formatNumber(s, 3)}, within the range below; a suggestion never moves against the
-      result, so an interval outside the range is left to a person. The owner accepts or declines each suggestion.
+      After {n} in-tolerance result{n === 1 ? '' : 's'} in a row the suggested interval grows by ×{formatNumber(f, 3)}; after an out-of-tolerance result it
+      shrinks by ×{formatNumber(s, 3)}, within the range below; a suggestion never moves against the result, so an interval outside the range is left to a
+      person. The owner accepts or declines each suggestion.
     </p>
   );
 }
@@ -90,7 +86,11 @@ export function IntervalPolicyForm({ settings }: { settings: OrganizationSetting
       {({ isSubmitting, dirty, values }) => (
         <Form noValidate aria-label="Interval review" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
           {saved ? <Notice tone="success">Saved. Calibrations recorded from now on are reviewed with these rules.</Notice> : null}
-          {problem ? <Notice tone="error" title="Not saved">{problem}</Notice> : null}
+          {problem ? (
+            <Notice tone="error" title="Not saved">
+              {problem}
+            </Notice>
+          ) : null}
           <Explanation values={values} saved={policy} />
           <Field
             name="lengthenAfter"

@@ -33,10 +33,19 @@ export function InvoiceIssuerForm({ settings }: { settings: OrganizationSettings
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Invoice details" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
           {saved ? <Notice tone="success">Saved. Invoices issued from now on carry these details; issued ones keep theirs.</Notice> : null}
-          {problem ? <Notice tone="error" title="Not saved">{problem}</Notice> : null}
+          {problem ? (
+            <Notice tone="error" title="Not saved">
+              {problem}
+            </Notice>
+          ) : null}
           <Field name="address" label="Address on invoices" autoComplete="street-address" />
           <Field name="taxNumber" label="Your tax number" autoComplete="off" hint="As your tax office gave it; printed on every invoice." />
-          <Field name="paymentTerms" label="Payment terms" autoComplete="off" hint="How and by when to pay the balance, e.g. the days allowed and your bank details." />
+          <Field
+            name="paymentTerms"
+            label="Payment terms"
+            autoComplete="off"
+            hint="How and by when to pay the balance, e.g. the days allowed and your bank details."
+          />
           <div>
             <Button type="submit" variant="primary" busy={isSubmitting} disabled={!dirty}>
               Save invoice details

@@ -85,7 +85,12 @@ function ProviderRows() {
               variant="quiet"
               className="sm:mt-6"
               aria-label={`Remove provider ${i + 1}`}
-              onClick={() => void setFieldValue('providers', rows.filter((__, j) => j !== i))}
+              onClick={() =>
+                void setFieldValue(
+                  'providers',
+                  rows.filter((__, j) => j !== i),
+                )
+              }
             >
               Remove
             </Button>
@@ -138,10 +143,13 @@ export function ProvidersForm({ settings }: { settings: OrganizationSettingsView
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Calibration providers" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
           {saved ? <Notice tone="success">Saved. Lab trips are now planned with these turnarounds.</Notice> : null}
-          {problem ? <Notice tone="error" title="Not saved">{problem}</Notice> : null}
+          {problem ? (
+            <Notice tone="error" title="Not saved">
+              {problem}
+            </Notice>
+          ) : null}
           <p className="text-sm text-ink-700">
-            The window finder keeps an item free for its provider&rsquo;s turnaround; a provider not listed here gets{' '}
-            {DEFAULT_TURNAROUND_DAYS} days.
+            The window finder keeps an item free for its provider&rsquo;s turnaround; a provider not listed here gets {DEFAULT_TURNAROUND_DAYS} days.
           </p>
           <ProviderRows />
           <div>

@@ -21,7 +21,11 @@ export function RentalTermsForm({ settings }: { settings: OrganizationSettingsVi
   const digits = currencyDigits(currency);
   const policy = settings.depositPolicy;
   if (!policy || settings.taxRateBasisPoints === undefined) return <Notice tone="info">This server does not offer rental terms yet.</Notice>;
-  const money = Yup.string().test('amount', `Enter an amount in ${currency}, e.g. ${amountText(50_000, digits)}.`, (v) => parseAmount(v ?? '', digits) !== null);
+  const money = Yup.string().test(
+    'amount',
+    `Enter an amount in ${currency}, e.g. ${amountText(50_000, digits)}.`,
+    (v) => parseAmount(v ?? '', digits) !== null,
+  );
   const schema = Yup.object({
     taxPercent: Yup.string().test('percent', 'Enter a rate from 0 to 100 %, e.g. 19 or 7.5.', (v) => (percent(v) ?? -1) >= 0 && (percent(v) ?? 101) <= 100),
     depositPercent: Yup.string().test('percent', 'Enter a share from 0 to 100 %, e.g. 10.', (v) => (percent(v) ?? -1) >= 0 && (percent(v) ?? 101) <= 100),
@@ -45,17 +49,35 @@ export function RentalTermsForm({ settings }: { settings: OrganizationSettingsVi
         save(
           {
             taxRateBasisPoints: Math.round(percent(values.taxPercent)! * 100),
-            depositPolicy: { percent: percent(values.depositPercent)!, minMinor: parseAmount(values.depositMin, digits)!, maxMinor: parseAmount(values.depositMax, digits)! },
+            depositPolicy: {
+              percent: percent(values.depositPercent)!,
+              minMinor: parseAmount(values.depositMin, digits)!,
+              maxMinor: parseAmount(values.depositMax, digits)!,
+            },
           },
           helpers,
-          { fields, aliases: { taxRateBasisPoints: 'taxPercent', 'depositPolicy.percent': 'depositPercent', 'depositPolicy.minMinor': 'depositMin', 'depositPolicy.maxMinor': 'depositMax' } },
+          {
+            fields,
+            aliases: {
+              taxRateBasisPoints: 'taxPercent',
+              'depositPolicy.percent': 'depositPercent',
+              'depositPolicy.minMinor': 'depositMin',
+              'depositPolicy.maxMinor': 'depositMax',
+            },
+          },
         )
       }
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Rental terms" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
-          {saved ? <Notice tone="success">Saved. Quotes and new rentals use these terms; rentals already made keep the prices they were made at.</Notice> : null}
-          {problem ? <Notice tone="error" title="Not saved">{problem}</Notice> : null}
+          {saved ? (
+            <Notice tone="success">Saved. Quotes and new rentals use these terms; rentals already made keep the prices they were made at.</Notice>
+          ) : null}
+          {problem ? (
+            <Notice tone="error" title="Not saved">
+              {problem}
+            </Notice>
+          ) : null}
           <Field name="taxPercent" label="Tax on rentals (%)" inputMode="decimal" autoComplete="off" className="sm:max-w-xs" />
           <div className="grid gap-4 sm:grid-cols-3">
             <Field name="depositPercent" label="Deposit (% of replacement value)" inputMode="decimal" autoComplete="off" />
@@ -63,8 +85,8 @@ export function RentalTermsForm({ settings }: { settings: OrganizationSettingsVi
             <Field name="depositMax" label={`Deposit at most (${currency})`} inputMode="decimal" autoComplete="off" />
           </div>
           <p className="text-sm text-ink-700">
-            The deposit is held on the renter&rsquo;s card at checkout: the share of the rented items&rsquo; replacement value, but never
-            less than the minimum or more than the maximum (now {formatMoney(policy.minMinor, currency)} to {formatMoney(policy.maxMinor, currency)}).
+            The deposit is held on the renter&rsquo;s card at checkout: the share of the rented items&rsquo; replacement value, but never less than the minimum
+            or more than the maximum (now {formatMoney(policy.minMinor, currency)} to {formatMoney(policy.maxMinor, currency)}).
           </p>
           <div>
             <Button type="submit" variant="primary" busy={isSubmitting} disabled={!dirty}>

@@ -52,7 +52,11 @@ export function SettingsForm({ settings }: { settings: OrganizationSettingsView 
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Settings" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
           {saved ? <Notice tone="success">Settings saved. Due states everywhere now use them.</Notice> : null}
-          {problem ? <Notice tone="error" title="Not saved">{problem}</Notice> : null}
+          {problem ? (
+            <Notice tone="error" title="Not saved">
+              {problem}
+            </Notice>
+          ) : null}
           <Field
             name="dueSoonDays"
             label="Due-soon window (days)"
@@ -63,13 +67,7 @@ export function SettingsForm({ settings }: { settings: OrganizationSettingsView 
             step={1}
             hint="An item whose calibration runs out within this many days shows as “Due soon”."
           />
-          <Field
-            name="timeZone"
-            label="Time zone"
-            list={listId}
-            autoComplete="off"
-            hint="Dates, due dates and “today” are worked out in this zone."
-          />
+          <Field name="timeZone" label="Time zone" list={listId} autoComplete="off" hint="Dates, due dates and “today” are worked out in this zone." />
           <datalist id={listId}>
             {zones.map((z) => (
               <option key={z} value={z} />

@@ -7,8 +7,7 @@ export function getSiteJob(id: string, signal?: AbortSignal): Promise<SiteJobVie
   return apiClient.get<SiteJobView>(`/jobs/${encodeURIComponent(id)}`, { signal });
 }
 
-export const siteJobQueryOptions = (id: string) =>
-  queryOptions({ queryKey: siteJobsKeys.one(id), queryFn: ({ signal }) => getSiteJob(id, signal) });
+export const siteJobQueryOptions = (id: string) => queryOptions({ queryKey: siteJobsKeys.one(id), queryFn: ({ signal }) => getSiteJob(id, signal) });
 
 export function useSiteJob(id: string | null | undefined) {
   return useQuery({ ...siteJobQueryOptions(id ?? ''), enabled: !!id });

@@ -16,10 +16,7 @@ export function useUpdateSiteJob() {
     onSuccess: (job) => {
       queryClient.setQueryData(siteJobsKeys.one(job.id), job);
       // Bookings show the job's reference and customer: those lists refresh too.
-      return Promise.all([
-        queryClient.invalidateQueries({ queryKey: siteJobsKeys.all }),
-        invalidateBookingBoard(queryClient),
-      ]);
+      return Promise.all([queryClient.invalidateQueries({ queryKey: siteJobsKeys.all }), invalidateBookingBoard(queryClient)]);
     },
   });
 }

@@ -100,9 +100,7 @@ export function JobForm({
   const leadOptions = [
     { value: '', label: 'Nobody yet' },
     { value: me.id, label: `Me (${me.name})` },
-    ...(job?.leadTechnicianId && job.leadTechnicianId !== me.id
-      ? [{ value: job.leadTechnicianId, label: 'The technician already chosen' }]
-      : []),
+    ...(job?.leadTechnicianId && job.leadTechnicianId !== me.id ? [{ value: job.leadTechnicianId, label: 'The technician already chosen' }] : []),
   ];
 
   async function submit(values: JobValues, helpers: FormikHelpers<JobValues>) {

@@ -10,15 +10,13 @@ import { roles, type Role } from '../../../lib/roles';
 import { useCreateUser } from '../api/create-user';
 import { roleOptions } from './role-options';
 
-const schemaFor = (firmName: string) => Yup.object({
-  name: Yup.string().trim().required('Enter the person’s name.').max(120, 'Keep the name under 120 characters.'),
-  email: Yup.string()
-    .trim()
-    .required('Enter the e-mail address they will sign in with.')
-    .email('That does not look like an e-mail address.'),
-  role: Yup.string<Role>().oneOf(roles, 'Pick one of the listed roles.').required('Pick a role.'),
-  password: newPasswordSchema('Set a temporary password.', (v) => [v.email as string, v.name as string, firmName]),
-});
+const schemaFor = (firmName: string) =>
+  Yup.object({
+    name: Yup.string().trim().required('Enter the person’s name.').max(120, 'Keep the name under 120 characters.'),
+    email: Yup.string().trim().required('Enter the e-mail address they will sign in with.').email('That does not look like an e-mail address.'),
+    role: Yup.string<Role>().oneOf(roles, 'Pick one of the listed roles.').required('Pick a role.'),
+    password: newPasswordSchema('Set a temporary password.', (v) => [v.email as string, v.name as string, firmName]),
+  });
 
 type Values = Yup.InferType<ReturnType<typeof schemaFor>>;
 
@@ -55,8 +53,16 @@ export function AddUserForm({ firmName }: { firmName: string }) {
     >
       {({ isSubmitting }) => (
         <Form noValidate aria-label="Add a user" className="flex flex-col gap-4">
-          {added ? <Notice tone="success" title="User added">{added}</Notice> : null}
-          {problem ? <Notice tone="error" title="User not added">{problem}</Notice> : null}
+          {added ? (
+            <Notice tone="success" title="User added">
+              {added}
+            </Notice>
+          ) : null}
+          {problem ? (
+            <Notice tone="error" title="User not added">
+              {problem}
+            </Notice>
+          ) : null}
           <div className="grid gap-4 sm:grid-cols-2">
             <Field name="name" label="Name" autoComplete="off" />
             <Field name="email" label="E-mail" type="email" autoComplete="off" mono />

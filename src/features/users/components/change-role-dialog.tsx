@@ -15,15 +15,7 @@ const schema = Yup.object({
   role: Yup.string<Role>().oneOf(roles, 'Pick one of the listed roles.').required('Pick a role.'),
 });
 
-export function ChangeRoleDialog({
-  user,
-  onClose,
-  onDone,
-}: {
-  user: UserView | null;
-  onClose: () => void;
-  onDone: (message: string) => void;
-}) {
+export function ChangeRoleDialog({ user, onClose, onDone }: { user: UserView | null; onClose: () => void; onDone: (message: string) => void }) {
   const update = useUpdateUser();
   const [problem, setProblem] = useState<string>();
 
@@ -53,7 +45,11 @@ export function ChangeRoleDialog({
         >
           {({ isSubmitting, values }) => (
             <Form noValidate className="flex flex-col gap-4">
-              {problem ? <Notice tone="error" title="Role not changed">{problem}</Notice> : null}
+              {problem ? (
+                <Notice tone="error" title="Role not changed">
+                  {problem}
+                </Notice>
+              ) : null}
               <SelectField name="role" label="Role" options={roleOptions} />
               <div className="flex flex-wrap justify-end gap-2">
                 <Button onClick={onClose}>Cancel</Button>

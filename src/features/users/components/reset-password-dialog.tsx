@@ -10,12 +10,13 @@ import { MIN_PASSWORD_LENGTH, newPasswordSchema } from '../../../lib/passwords';
 import { useResetUserPassword } from '../api/reset-user-password';
 import type { UserView } from '../../../../shared/users/views';
 
-const schemaFor = (person: UserView, firmName: string) => Yup.object({
-  password: newPasswordSchema('Set a temporary password.', () => [person.email, person.name, firmName]),
-  repeatPassword: Yup.string()
-    .required('Type the temporary password again.')
-    .oneOf([Yup.ref('password')], 'The two passwords do not match.'),
-});
+const schemaFor = (person: UserView, firmName: string) =>
+  Yup.object({
+    password: newPasswordSchema('Set a temporary password.', () => [person.email, person.name, firmName]),
+    repeatPassword: Yup.string()
+      .required('Type the temporary password again.')
+      .oneOf([Yup.ref('password')], 'The two passwords do not match.'),
+  });
 
 type Values = Yup.InferType<ReturnType<typeof schemaFor>>;
 
@@ -59,7 +60,11 @@ export function ResetPasswordDialog({
         >
           {({ isSubmitting }) => (
             <Form noValidate className="flex flex-col gap-4">
-              {problem ? <Notice tone="error" title="Password not reset">{problem}</Notice> : null}
+              {problem ? (
+                <Notice tone="error" title="Password not reset">
+                  {problem}
+                </Notice>
+              ) : null}
               <Field
                 name="password"
                 label="New temporary password"

@@ -42,9 +42,7 @@ export function UsersAdmin({ currentUserId, firmName }: { currentUserId: string;
             onSuccess: () =>
               setOutcome({
                 tone: 'success',
-                text: disabled
-                  ? `${user.name} is disabled and can no longer sign in.`
-                  : `${user.name} is enabled and can sign in again.`,
+                text: disabled ? `${user.name} is disabled and can no longer sign in.` : `${user.name} is enabled and can sign in again.`,
               }),
             onError: (error) =>
               setOutcome({

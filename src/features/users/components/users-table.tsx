@@ -62,9 +62,7 @@ export function UsersTable({
         maxWidth: 140,
         valueGetter: (p) => (p.data ? statusWord(p.data) : ''),
         cellRenderer: (p: CustomCellRendererProps<UserView>) =>
-          p.data ? (
-            <StatusChip tone={p.data.disabled ? 'paused' : 'ok'} label={statusWord(p.data)} />
-          ) : null,
+          p.data ? <StatusChip tone={p.data.disabled ? 'paused' : 'ok'} label={statusWord(p.data)} /> : null,
       },
       {
         headerName: 'Added',
@@ -114,13 +112,6 @@ export function UsersTable({
   );
 
   return (
-    <DataGrid<UserView>
-      label="Users"
-      rows={users}
-      columns={columns}
-      rowId={(u) => u.id}
-      exportFileName="nestkeeper-users.csv"
-      emptyMessage="No users yet."
-    />
+    <DataGrid<UserView> label="Users" rows={users} columns={columns} rowId={(u) => u.id} exportFileName="nestkeeper-users.csv" emptyMessage="No users yet." />
   );
 }

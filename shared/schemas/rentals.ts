@@ -60,7 +60,7 @@ export const depositPayload = z.object({
 });
 
 export const capturePayload = z.object({
-  amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing; release the hold instead').max(1e9),
+  amountMinor: z.number().int('must be whole minor units').min(1, 'must be more than nothing; release the authorization instead').max(1e9),
   reason: text(500).min(3, 'say what the money is for'),
 });
 

@@ -10,7 +10,7 @@ const holdStates: Record<AuthorizationState, [string, StatusTone]> = {
   declined: ['Declined', 'bad'],
   replaced: ['Renewed', 'none'],
 };
-const noDeposit: [string, StatusTone] = ['No hold yet', 'none'];
+const noDeposit: [string, StatusTone] = ['No card authorization yet', 'none'];
 const depositEntry = (state: DepositState | AuthorizationState) => (state === 'none' ? noDeposit : holdStates[state]);
 export const depositStateWord = (state: DepositState | AuthorizationState) => depositEntry(state)[0];
 
@@ -25,7 +25,7 @@ const SOON_MS = 48 * 3600 * 1000;
 export const lapsesSoon = (at: string | null) => !!at && new Date(at).getTime() - Date.now() <= SOON_MS;
 
 /** When a card hold lapses; within 48 hours it says so in words with a clock, past it says "lapsed". */
-export function HoldLapse({ at, dateTime }: { at: string | null; dateTime: (value: string) => string }) {
+export function AuthorizationLapse({ at, dateTime }: { at: string | null; dateTime: (value: string) => string }) {
   if (!at) return <span>—</span>;
   const left = new Date(at).getTime() - Date.now();
   if (left > SOON_MS) return <time dateTime={at}>{dateTime(at)}</time>;

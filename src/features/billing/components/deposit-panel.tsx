@@ -2,7 +2,7 @@ import { Form, Formik } from 'formik';
 import { useState, type ReactNode } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
-import { DepositStateChip, HoldLapse } from '../../../components/deposit-state';
+import { DepositStateChip, AuthorizationLapse } from '../../../components/deposit-state';
 import { SelectField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
@@ -36,8 +36,8 @@ export function DepositPanel({ rental, canManage, charges }: { rental: RentalVie
               { term: 'Card', value: card(hold) },
               ...(authorized
                 ? [
-                    { term: 'Amount held', value: money(hold.amountMinor) },
-                    { term: 'Lapses at', value: <HoldLapse at={hold.captureBefore} dateTime={dateTime} /> },
+                    { term: 'Amount authorized', value: money(hold.amountMinor) },
+                    { term: 'Lapses at', value: <AuthorizationLapse at={hold.captureBefore} dateTime={dateTime} /> },
                   ]
                 : []),
               ...(state === 'declined' && hold?.failureMessage ? [{ term: 'Declined', value: hold.failureMessage }] : []),
@@ -49,12 +49,12 @@ export function DepositPanel({ rental, canManage, charges }: { rental: RentalVie
           {canManage && canTake ? <TakeDeposit rentalId={rental.id} amount={money(rental.depositMinor)} /> : null}
           {authorized && !rental.returnedAt ? (
             <p className="text-sm text-ink-700">
-              The hold stays on the card until the kit is back. Nestkeeper renews it on the saved card before it would lapse.
+              The authorization stays on the card until the kit is back. Nestkeeper renews it on the saved card before it would lapse.
             </p>
           ) : null}
           {authorized && rental.returnedAt && canManage ? <SettleDeposit rental={rental} hold={hold} charges={charges} /> : null}
         </div>
-        {holds.length ? <HoldHistory holds={holds} currency={rental.currency} dateTime={dateTime} /> : null}
+        {holds.length ? <AuthorizationHistory holds={holds} currency={rental.currency} dateTime={dateTime} /> : null}
       </div>
     </Panel>
   );
@@ -97,7 +97,7 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
             <Button type="submit" variant="primary" busy={isSubmitting}>
               Take deposit
             </Button>
-            <span className="ml-3 text-sm text-ink-700">Holds {amount} on the card; nothing is charged yet.</span>
+            <span className="ml-3 text-sm text-ink-700">Authorizes {amount} on the card; nothing is charged yet.</span>
           </div>
         </Form>
       )}
@@ -109,11 +109,11 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
 const howTaken = (h: DepositAuthorizationView) =>
   h.kind === 'charge' ? 'Charged to the saved card' : h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card';
 
-function HoldHistory({ holds, currency, dateTime }: { holds: DepositAuthorizationView[]; currency: string; dateTime: (value: string) => string }) {
+function AuthorizationHistory({ holds, currency, dateTime }: { holds: DepositAuthorizationView[]; currency: string; dateTime: (value: string) => string }) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm">
-        <caption className="mb-1 text-left font-semibold text-ink-900">Hold history</caption>
+        <caption className="mb-1 text-left font-semibold text-ink-900">Authorization history</caption>
         <TableHead columns={['Taken', 'How', 'Card', 'Held#', 'State', 'Captured#', 'Note']} />
         <tbody className="divide-y divide-paper-line">
           {holds.map((h) => (

@@ -17,7 +17,7 @@ const lineKindWords: Record<InvoiceLine['kind'], string> = { rental: 'Rental', l
 /** Why the invoice cannot be issued yet, or null when it can. */
 function notReady(rental: RentalView): string | null {
   if (!rental.returnedAt) return 'The invoice can be issued once the kit is back.';
-  if (rental.deposit.state === 'authorized') return 'Settle the deposit first: capture from the hold or release it.';
+  if (rental.deposit.state === 'authorized') return 'Settle the deposit first: capture from the authorization or release it.';
   return null;
 }
 

@@ -36,7 +36,7 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
     amount: Yup.string()
       .required('Give the amount to capture.')
       .test('amount', `Enter an amount in ${currency}, e.g. ${amountText(suggested || 5000, digits)}.`, (v) => !v || parseAmount(v, digits) !== null)
-      .test('some', 'To capture nothing, release the whole hold instead.', (v) => !v || parseAmount(v, digits) !== 0),
+      .test('some', 'To capture nothing, release the whole authorization instead.', (v) => !v || parseAmount(v, digits) !== 0),
     reason: Yup.string().trim().required('Say what the amount is for; the renter sees it.').max(500, 'Keep the reason to 500 characters.'),
   });
 
@@ -59,7 +59,7 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
         items={[
           { term: 'Late days', value: settlement.lateDays ? `${settlement.lateDays} (day rate plus late fee each)` : 'None: back on time' },
           { term: 'Extras with tax', value: money(settlement.extrasGrossMinor) },
-          { term: 'Held on the card', value: money(hold.amountMinor) },
+          { term: 'Authorized on the card', value: money(hold.amountMinor) },
         ]}
       />
       <Formik
@@ -100,7 +100,7 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
                   Capture and release the rest
                 </Button>
                 <Button variant="secondary" busy={release.isPending} disabled={isSubmitting} onClick={() => void releaseAll()}>
-                  Release the whole hold
+                  Release the whole authorization
                 </Button>
               </div>
             </Form>
@@ -113,6 +113,6 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
 
 function captureHint(amount: number | null, heldMinor: number, money: (minor: number) => string): string | undefined {
   if (amount === null || amount === 0) return undefined;
-  if (amount > heldMinor) return `The hold covers ${money(heldMinor)}; the other ${money(amount - heldMinor)} is charged to the saved card.`;
+  if (amount > heldMinor) return `The authorization covers ${money(heldMinor)}; the other ${money(amount - heldMinor)} is charged to the saved card.`;
   return `${money(amount)} is captured; the other ${money(heldMinor - amount)} is released to the renter's card.`;
 }

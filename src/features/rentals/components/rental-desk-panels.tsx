@@ -3,13 +3,13 @@ import { CountedSection } from '../../../components/counted-section';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import type { RentalSummary } from '../../../../shared/billing/views';
-import { DepositStateChip, HoldLapse, lapsesSoon } from '../../../components/deposit-state';
+import { DepositStateChip, AuthorizationLapse, lapsesSoon } from '../../../components/deposit-state';
 import { formatMoney, useDateFormat } from '../../../lib/format';
 import { useRentals } from '../api/get-rentals';
 import type { RentalListView } from '../api/keys';
 import { RentalStateChip } from './rental-words';
 
-const holdNearLapse = (r: RentalSummary) => r.depositState === 'authorized' && lapsesSoon(r.authorizationCaptureBefore);
+const authorizationNearLapse = (r: RentalSummary) => r.depositState === 'authorized' && lapsesSoon(r.authorizationCaptureBefore);
 
 /** One home panel: a short list of rentals, each a link to its page. */
 function RentalsPanel({
@@ -59,11 +59,11 @@ export function RentalDeskPanels() {
     <>
       <RentalsPanel
         id="lapsing-heading"
-        title="Holds lapsing within two days"
+        title="Card authorizations lapsing within two days"
         view="open"
-        pick={holdNearLapse}
-        empty="No card hold lapses within two days."
-        chip={(r) => <HoldLapse at={r.authorizationCaptureBefore} dateTime={dateTime} />}
+        pick={authorizationNearLapse}
+        empty="No card authorization lapses within two days."
+        chip={(r) => <AuthorizationLapse at={r.authorizationCaptureBefore} dateTime={dateTime} />}
       />
       <RentalsPanel
         id="settle-heading"

@@ -4,7 +4,7 @@ import { Link, useNavigate } from 'react-router-dom';
 import { DataGrid } from '../../../components/data-grid';
 import { formatCalendarDate, formatMoney, isoTimestamp, useDateFormat } from '../../../lib/format';
 import type { RentalSummary } from '../../../../shared/billing/views';
-import { DepositStateChip, depositStateWord, HoldLapse } from '../../../components/deposit-state';
+import { DepositStateChip, depositStateWord, AuthorizationLapse } from '../../../components/deposit-state';
 import { RentalStateChip, rentalStateWord } from './rental-words';
 
 type Cell = ICellRendererParams<RentalSummary>;
@@ -76,10 +76,10 @@ export function RentalsGrid({
       },
       {
         colId: 'lapses',
-        headerName: 'Hold lapses at',
+        headerName: 'Authorization lapses at',
         minWidth: 230,
         valueGetter: (p) => (p.data?.depositState === 'authorized' && p.data.authorizationCaptureBefore ? isoTimestamp(p.data.authorizationCaptureBefore) : ''),
-        cellRenderer: (p: Cell) => (p.value ? <HoldLapse at={p.value as string} dateTime={dateTime} /> : '—'),
+        cellRenderer: (p: Cell) => (p.value ? <AuthorizationLapse at={p.value as string} dateTime={dateTime} /> : '—'),
       },
     ],
     [dateTime],

@@ -1,5 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
+import type { Quote, RateCardView } from '../../shared/billing/views';
+import type { Page } from '../../shared/lists/page';
 import type { quoteQuery, rateCardPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
@@ -16,11 +18,11 @@ type RateCardInput = z.infer<typeof rateCardPayload>;
 export class RateCardsService {
   constructor(private readonly db: DataSource) {}
 
-  list(actor: Actor) {
+  list(actor: Actor): Promise<Page<RateCardView>> {
     return inOrganization(this.db, actor.organizationId, async (tx) => listReply(await tx.find(RateCard, { order: { assetType: 'ASC' } })));
   }
 
-  save(actor: Actor, input: RateCardInput, id?: string) {
+  save(actor: Actor, input: RateCardInput, id?: string): Promise<RateCardView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       if (input.kitId) await getKit(tx, input.kitId);
       const subject = input.kitId ? { kitId: input.kitId } : { assetType: input.assetType! };
@@ -44,7 +46,7 @@ export class RateCardsService {
   }
 
   /** Prices a rental at today's rate cards (for a customer, when one is named). */
-  quote(actor: Actor, q: z.infer<typeof quoteQuery>) {
+  quote(actor: Actor, q: z.infer<typeof quoteQuery>): Promise<Quote> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       if (q.customerId) await getCustomer(tx, q.customerId);
       return priceRental(tx, q);

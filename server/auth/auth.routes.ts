@@ -59,12 +59,11 @@ export function authRoutes(auth: AuthService, links: AccountLinksService, opts: 
   // Per address and e-mail, so one person's typos do not lock out the whole office; counted in PostgreSQL, so the limit holds across instances.
   // The address is the socket's unless TRUST_PROXY names the proxy in front; the e-mail is read as sign-in reads it.
   // The code step counts failures on the same store per address and person, so guessing codes meets the same limit.
-  const signInStore = limits.store('login:');
   const signInLimit = (key: (req: Request) => string) =>
     limit({
       windowMs: 10 * 60 * 1000,
       limit: limits.attemptsPer10Min,
-      store: signInStore,
+      store: limits.store('login:'),
       key,
       skipSuccessful: true,
       message: 'Too many sign-in attempts; wait a few minutes and try again.',

@@ -193,7 +193,7 @@ export class AccountLinksService {
     const link = await this.db.getRepository(AccountLink).findOneBy({ tokenHash: linkTokenHash(token), purpose });
     const what = purpose === 'invitation' ? 'invitation' : 'reset link';
     const again = purpose === 'invitation' ? 'Ask the person who invited you to send a new one.' : 'Ask for a new one from the sign-in page.';
-    if (!link) throw new AppError(404, 'link_unknown', `Nestkeeper does not know this ${what}. Check that the whole link was copied, or: ${again}`);
+    if (!link) throw new AppError(404, 'link_unknown', `Nestkeeper does not know this ${what}. Check that the whole link was copied. ${again}`);
     if (link.usedAt) throw linkGone('link_used', `This ${what} was used already; it works only once. ${purpose === 'invitation' ? 'Sign in instead.' : again}`);
     if (link.withdrawnAt) throw linkGone('link_withdrawn', `This ${what} was withdrawn. ${again}`);
     if (link.expiresAt.getTime() <= Date.now()) throw linkGone('link_expired', `This ${what} has expired. ${again}`);

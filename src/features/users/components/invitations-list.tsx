@@ -34,7 +34,7 @@ export function InvitationsList() {
                 <p className="flex flex-wrap items-center gap-2">
                   <span className="font-mono break-all">{i.email}</span>
                   <span className="text-sm text-ink-700">{roleTitles[i.role]}</span>
-                  <StatusChip tone={i.state === 'expired' ? 'warn' : 'busy'} label={i.state === 'expired' ? 'Expired' : 'Waiting'} />
+                  <StatusChip tone={i.state === 'expired' ? 'warn' : 'info'} label={i.state === 'expired' ? 'Expired' : 'Waiting'} />
                 </p>
                 <p className="text-sm text-ink-700">
                   Sent {fmt.dateTime(i.sentAt)}

@@ -17,7 +17,7 @@ export const invitationMail = (m: { firm: string; inviter: string; roleTitle: st
       subject: `${m.inviter} invited you to ${m.firm} on Nestkeeper`,
       heading: `Join ${m.firm} on Nestkeeper`,
       paragraphs: [
-        `${m.inviter} has invited you to sign in to ${m.firm}'s Nestkeeper as ${m.roleTitle}.`,
+        `${m.inviter} has invited you to Nestkeeper, where ${m.firm} keeps its fleet, bookings and rentals, as ${m.roleTitle.toLowerCase()}.`,
         `Open this link to choose your name and password: ${m.url}`,
         `The link works once and until ${utc(m.expiresAt)} (72 hours after it was sent).`,
       ],
@@ -32,7 +32,7 @@ export const resetMail = (m: { firm: string; email: string; url: string; expires
       subject: `Set a new password for ${m.firm} on Nestkeeper`,
       heading: 'Set a new password',
       paragraphs: [
-        `Someone asked to set a new password for ${m.email} at ${m.firm}'s Nestkeeper.`,
+        `Someone asked to set a new Nestkeeper password for ${m.email} at ${m.firm}.`,
         `Open this link to choose one: ${m.url}`,
         `The link works once and until ${utc(m.expiresAt)} (one hour after it was asked for). Setting a new password signs you out everywhere.`,
       ],
@@ -46,7 +46,7 @@ export const passwordChangedMail = (m: { firm: string; email: string }) =>
     {
       subject: `Your ${m.firm} Nestkeeper password was changed`,
       heading: 'Your password was changed',
-      paragraphs: [`The password of ${m.email} at ${m.firm}'s Nestkeeper was just set anew from a reset link, and every session was signed out.`],
+      paragraphs: [`The Nestkeeper password of ${m.email} at ${m.firm} was just set anew from a reset link, and every session was signed out.`],
     },
     `Was this not you? Ask your firm's owner to disable the account at once, then set a new password from the sign-in page.`,
   );

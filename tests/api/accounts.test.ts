@@ -291,6 +291,17 @@ describe('two-step sign-in', () => {
     const ilse = await t.tokenFor('ilse.farrow@demo.test', 'gannet-quarry-lantern-81');
     expect((await t.api.get('/api/auth/me').set(bearer(ilse))).body.secondStep.owed).toBe(false);
     expect((await t.api.get('/api/bookings').set(bearer(ilse))).status).toBe(200);
+    // Someone invited into such a role is signed in on accepting, and asked for the second step first too.
+    await t.api
+      .post('/api/invitations')
+      .set(bearer(await t.tokenFor('owner@other.test')))
+      .send({ email: 'new.clerk@other.test', role: 'billing' });
+    await t.db.query(`UPDATE organizations SET settings = settings || '{"secondStepRequired": true}' WHERE name <> 'Brackenmoor Dimensional Works'`);
+    const { token } = await mailedLink('new.clerk@other.test', 'join');
+    const joined = await t.api.post('/api/invitations/accept').send({ token, name: 'Nell Clerkwood', password: 'copperplate-lagoon-vesper-35' });
+    expect(joined.status).toBe(201);
+    expect((await t.api.get('/api/customers').set(bearer(joined.body.token))).body.error.code).toBe('second_step_required');
+    await t.db.query(`UPDATE organizations SET settings = settings - 'secondStepRequired'`);
     await t.api.patch('/api/settings').set(bearer(owner)).send({ secondStepRequired: false });
   });
 });

@@ -4,8 +4,12 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import type { Transporter } from 'nodemailer';
 import type { DataSource } from 'typeorm';
+import { AccountLinksService } from './auth/account-links.service';
+import { accountRoutes } from './auth/account.routes';
 import { AuthService } from './auth/auth.service';
 import { authRoutes } from './auth/auth.routes';
+import { Sealing } from './auth/sealing';
+import { SecondStep } from './auth/second-step';
 import { PgRateLimitStore } from './auth/pg-rate-limit-store';
 import { csrfGuard } from './auth/csrf';
 import { createPassport } from './auth/passport';
@@ -65,11 +69,14 @@ export type AppDeps = { config: Config; db: DataSource; mail: Transporter };
 export function buildApp({ config, db, mail }: AppDeps): { app: Express; routines: RoutinesService } {
   const users = new UsersService(db, config.BCRYPT_COST);
   const key = signingKey(config.JWT_SECRET);
-  const auth = new AuthService(db, users, key);
+  const secondStep = new SecondStep(db, new Sealing(config.JWT_SECRET));
+  const auth = new AuthService(db, users, key, secondStep);
   const gateway = new PaymentGateway(createPaymentClient(config));
   const deposits = new DepositsService(db, gateway);
   const routines = new RoutinesService(db, [outboxRoutine(mail, config.MAIL_FROM), lateReturnsRoutine(), dueScanRoutine(), depositRenewalsRoutine(deposits)]);
   const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
+  const accountLinks = new AccountLinksService(db, users, auth, publicUrl);
+  const secureCookies = (config.PUBLIC_URL ?? '').startsWith('https:');
   const assets = new AssetsService(db, publicUrl);
   const kits = new KitsService(db, publicUrl);
   const fleetDocuments = new FleetDocumentsService(db, publicUrl);
@@ -99,12 +106,17 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
   app.use('/api', healthRoutes(db));
   app.use(
     '/api/auth',
-    authRoutes(auth, {
-      secureCookies: (config.PUBLIC_URL ?? '').startsWith('https:'),
-      attemptsPer10Min: config.LOGIN_ATTEMPTS_PER_10_MIN,
-      attemptStore: new PgRateLimitStore(db),
+    authRoutes(auth, accountLinks, {
+      secureCookies,
+      limits: {
+        attemptsPer10Min: config.LOGIN_ATTEMPTS_PER_10_MIN,
+        resetsPerHourPerEmail: config.RESET_REQUESTS_PER_HOUR_PER_EMAIL,
+        resetsPerHourPerAddress: config.RESET_REQUESTS_PER_HOUR_PER_ADDRESS,
+        store: (prefix) => new PgRateLimitStore(db, prefix),
+      },
     }),
   );
+  app.use('/api', accountRoutes(auth, secondStep, accountLinks, { secureCookies }));
   app.use('/api/users', usersRoutes(users));
   app.use('/api/mailbox', notificationsRoutes(db));
   app.use(ROUTINES_PATH, routinesRoutes(routines));

@@ -41,6 +41,9 @@ const environment = z.object({
   CLIENT_DIR: z.string().default('dist/client'),
   BCRYPT_COST: z.coerce.number().int().min(12).max(15).default(12),
   LOGIN_ATTEMPTS_PER_10_MIN: z.coerce.number().int().min(1).default(10),
+  /** "Forgot password" requests per hour for one e-mail, and from one address. */
+  RESET_REQUESTS_PER_HOUR_PER_EMAIL: z.coerce.number().int().min(1).default(3),
+  RESET_REQUESTS_PER_HOUR_PER_ADDRESS: z.coerce.number().int().min(1).default(20),
 });
 
 export type Config = z.infer<typeof environment>;

@@ -10,9 +10,11 @@ import type { DataSource } from 'typeorm';
 export class PgRateLimitStore implements Store {
   private windowMs = 60_000;
   readonly localKeys = false;
-  readonly prefix = 'login:';
-
-  constructor(private readonly db: DataSource) {}
+  /** One prefix per limit (`login:`, `reset-email:` …), so limits sharing the table never share counters. */
+  constructor(
+    private readonly db: DataSource,
+    readonly prefix = 'login:',
+  ) {}
 
   init(options: Options) {
     this.windowMs = options.windowMs;

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { Capability } from '../../shared/auth/roles';
 import { isStorableText, UNSTORABLE_TEXT } from '../../shared/schemas/common';
 import { AppError, notFound } from './errors';
-import { identifyCaller, requireCapability, requireSignIn, type Actor } from './guards';
+import { identifyCaller, requireAccountSignIn, requireCapability, requireSignIn, type Actor } from './guards';
 import { isUuid } from './ids';
 import { parse } from './parse';
 import { readUpload, type Upload } from './upload';
@@ -14,8 +14,9 @@ export type EndpointSpec<B extends z.ZodType, Q extends z.ZodType> = {
   method: Method;
   path: string;
   summary: string;
-  /** `public` needs no sign-in; `if-signed-in` is public but knows a signed-in caller; `signed-in` any role; else a capability. */
-  access: 'public' | 'if-signed-in' | 'signed-in' | Capability;
+  /** `public` needs no sign-in; `if-signed-in` is public but knows a signed-in caller; `signed-in` any role; `account` any role, even
+   * one who still owes the second step the firm requires (their own account and its setup); else a capability. */
+  access: 'public' | 'if-signed-in' | 'signed-in' | 'account' | Capability;
   /** JSON body; with `upload` of files, the multipart form's text fields. */
   body?: B;
   query?: Q;
@@ -58,7 +59,9 @@ export function endpoint<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
         ? [identifyCaller]
         : spec.access === 'signed-in'
           ? [requireSignIn]
-          : [requireSignIn, requireCapability(spec.access)];
+          : spec.access === 'account'
+            ? [requireAccountSignIn]
+            : [requireSignIn, requireCapability(spec.access)];
   // Guards and ids first: nothing of an upload is read for a caller who may not make it.
   const upload = spec.upload ? [readUpload(spec.upload)] : [];
   router[spec.method](spec.path, ...guards, checkIdParams, ...upload, async (req: Request, res: Response, next: NextFunction) => {

@@ -5,4 +5,5 @@ import { SinkMessage } from './sink-message.entity';
 
 export const notificationEntities = [OutboxMessage, OutboxAttachment, SinkMessage];
 export { enqueueMail, type MailAttachment } from './outbox';
+export type { MailContent } from './mail-template';
 export { staffAddresses } from './staff';

@@ -22,6 +22,7 @@ export type OrgContext = {
   taxRateBasisPoints: number;
   depositPolicy: DepositPolicy;
   issuer: InvoiceIssuer;
+  secondStepRequired: boolean;
 };
 
 /** Turnaround when a provider is not in the settings (common practice: about two weeks). */
@@ -46,5 +47,6 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
     // Common practice starting point: a tenth of the replacement value, within sensible bounds.
     depositPolicy: org.settings.depositPolicy ?? { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 },
     issuer: org.settings.issuer ?? { address: '', taxNumber: '', paymentTerms: '' },
+    secondStepRequired: org.settings.secondStepRequired ?? false,
   };
 }

@@ -19,6 +19,8 @@ export type OrganizationSettings = {
   depositPolicy: DepositPolicy;
   /** The firm as it must appear on its invoices: address, tax number, how to pay. */
   issuer: InvoiceIssuer;
+  /** Owners and billing clerks must sign in with a second step; auth's per-request check reads this key too. */
+  secondStepRequired: boolean;
 };
 
 @Entity({ name: 'organizations' })

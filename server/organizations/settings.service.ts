@@ -19,6 +19,7 @@ const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>): OrganizationSett
   providers: ctx.providers,
   intervalPolicy: ctx.intervalPolicy,
   issuer: ctx.issuer,
+  secondStepRequired: ctx.secondStepRequired,
 });
 
 export const getSettings = (db: DataSource, actor: Actor) => inOrganization(db, actor.organizationId, async (tx) => view(await loadOrgContext(tx)));
@@ -35,6 +36,7 @@ export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<type
     if (patch.providers) org.settings = { ...org.settings, providers: patch.providers };
     if (patch.intervalPolicy) org.settings = { ...org.settings, intervalPolicy: patch.intervalPolicy };
     if (patch.issuer) org.settings = { ...org.settings, issuer: patch.issuer };
+    if (patch.secondStepRequired !== undefined) org.settings = { ...org.settings, secondStepRequired: patch.secondStepRequired };
     if (patch.tolerances) org.settings = { ...org.settings, tolerances: { ...org.settings.tolerances, ...patch.tolerances } };
     await tx.manager.save(Organization, org);
     await recordAudit(tx, actor, 'settings.updated', { type: 'organization', id: org.id }, { before, after: patch });

@@ -31,7 +31,7 @@ export async function seedDemoIfEmpty(db: DataSource, bcryptCost = 12): Promise<
         subject: `Welcome to Nestkeeper, ${firm.name}`,
         heading: `${firm.name} is set up`,
         paragraphs: [
-          `Your firm's Nestkeeper is ready. Everyone you add signs in with their own e-mail address and a password you give them; they can change it under "My password".`,
+          `Your firm's Nestkeeper is ready. Invite colleagues under Users: each gets a mail to choose their own name and password. Anyone can change their password and turn on a second sign-in step under "My account".`,
           `This mailbox shows every e-mail Nestkeeper sends for ${firm.name}, so you can see what your team and customers receive.`,
         ],
       });

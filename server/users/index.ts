@@ -3,4 +3,17 @@ import { User } from './user.entity';
 
 export const userEntities = [User];
 export { activeStaff, findPerson, publicUser, type PublicUser } from './people';
-export { accountByEmail, calendarOwner, endSessions, ownAccount, replacePasswordHash, setCalendarToken, type Account } from './accounts';
+export {
+  accountByEmail,
+  addPerson,
+  calendarOwner,
+  emailInUse,
+  endSessions,
+  ownAccount,
+  replacePasswordHash,
+  saveSecondStep,
+  secondStepOf,
+  setCalendarToken,
+  type Account,
+  type SecondStepRecord,
+} from './accounts';

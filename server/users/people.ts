@@ -14,6 +14,7 @@ export const publicUser = (u: User): UserView => ({
   role: u.role,
   organizationId: u.organizationId,
   disabled: u.disabled,
+  secondStepOn: u.totpEnabledAt !== null,
   createdAt: u.createdAt.toISOString(),
 });
 

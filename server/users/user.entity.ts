@@ -33,6 +33,22 @@ export class User extends OrgOwned {
   @Column({ name: 'calendar_token', type: 'text', nullable: true, select: false })
   calendarToken: string | null;
 
+  /** The TOTP secret (RFC 6238), sealed with a key derived from the installation's secret (auth/sealing.ts); set while pending too. */
+  @Column({ name: 'totp_secret', type: 'text', nullable: true, select: false })
+  totpSecret: string | null;
+
+  /** When the second step was confirmed; null while it is off or only pending. */
+  @Column({ name: 'totp_enabled_at', type: 'timestamptz', nullable: true })
+  totpEnabledAt: Date | null;
+
+  /** The last time step whose code was accepted: a code is good once (RFC 6238 §5.2). */
+  @Column({ name: 'totp_last_step', type: 'bigint', nullable: true, select: false })
+  totpLastStep: string | null;
+
+  /** Keyed hashes of the unused recovery codes. */
+  @Column({ name: 'recovery_code_hashes', type: 'jsonb', default: () => "'[]'", select: false })
+  recoveryCodeHashes: string[];
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 

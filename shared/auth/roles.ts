@@ -59,3 +59,6 @@ export const roleTitles: Record<Role, string> = {
   technician: 'Field technician',
   billing: 'Billing clerk',
 };
+
+/** The roles that move money: a firm can require them to sign in with a second step. */
+export const secondStepRoles: readonly Role[] = ['owner', 'billing'];

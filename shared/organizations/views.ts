@@ -33,4 +33,6 @@ export type OrganizationSettingsView = {
   intervalPolicy: IntervalPolicy;
   /** The firm as its invoices name it. */
   issuer: InvoiceIssuer;
+  /** Owners and billing clerks must sign in with a second step (TOTP). */
+  secondStepRequired: boolean;
 };

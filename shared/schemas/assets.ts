@@ -157,6 +157,8 @@ export const organizationSettingsPayload = z
       paymentTerms: text(600),
     }),
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
+    /** Owners and billing clerks must sign in with a second step (TOTP). */
+    secondStepRequired: z.boolean(),
     timeZone: text(64).refine((tz) => {
       try {
         new Intl.DateTimeFormat('en', { timeZone: tz });

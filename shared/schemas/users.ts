@@ -35,3 +35,24 @@ export const updateUserPayload = z
   .strict();
 
 export const resetPasswordPayload = z.object({ password });
+
+/** The secret part of a mailed link (base64url of 32 random bytes). */
+const linkToken = z
+  .string()
+  .trim()
+  .regex(/^[A-Za-z0-9_-]{20,100}$/, 'is not a link Nestkeeper sent');
+
+export const inviteUserPayload = z.object({ email, role: z.enum(roles, { message: `must be one of ${roles.join(', ')}` }) });
+export const linkTokenPayload = z.object({ token: linkToken });
+export const acceptInvitationPayload = z.object({ token: linkToken, name: z.string().trim().min(1, 'is required').max(120), password });
+export const requestPasswordResetPayload = z.object({ email });
+export const completePasswordResetPayload = z.object({ token: linkToken, password });
+
+/** Six digits from the authenticator app, or a recovery code (spaces and dashes ignored). */
+export const secondStepCode = z
+  .string()
+  .transform((c) => c.replace(/[\s-]/g, '').toUpperCase())
+  .pipe(z.string().regex(/^(\d{6}|[A-Z2-7]{10})$/, 'must be the 6 digits your app shows, or one of your recovery codes'));
+export const secondStepSignInPayload = z.object({ ticket: z.string().min(1, 'is required').max(2000), code: secondStepCode });
+export const confirmSecondStepPayload = z.object({ code: z.string().regex(/^\d{6}$/, 'must be the 6 digits your app shows') });
+export const turnOffSecondStepPayload = z.object({ password: z.string().min(1, 'is required').max(200) });

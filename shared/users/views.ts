@@ -9,5 +9,7 @@ export type UserView = {
   role: Role;
   organizationId: string;
   disabled: boolean;
+  /** Signs in with a second step (TOTP). */
+  secondStepOn: boolean;
   createdAt: string;
 };

@@ -6,7 +6,8 @@ import { queryClient, setSessionEndedHandler } from '../lib/query-client';
 
 // Any 401 outside the auth calls themselves means the session ended (expired,
 // signed out elsewhere, user disabled): re-ask "who am I?", and the session
-// gate (features/auth RequireSession) sends the person to /sign-in.
+// gate (features/auth RequireSession) sends the person to /sign-in, or to the
+// second-step setup when the firm has just required one of them.
 setSessionEndedHandler((key) => {
   if (key && key[0] === authKeys.all[0]) return;
   void queryClient.invalidateQueries({ queryKey: authKeys.me() });

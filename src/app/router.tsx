@@ -18,12 +18,15 @@ function gated(capability: Capability, children: RouteObject[]): RouteObject {
 }
 
 export const routes: RouteObject[] = [
-  {
-    path: '/sign-in',
-    lazy: screen(() => import('./routes/sign-in')),
-    errorElement: <RouteError />,
-    hydrateFallbackElement: <Splash />,
-  },
+  // Reached before signing in: the sign-in page and the pages mailed links open.
+  ...(
+    [
+      ['/sign-in', () => import('./routes/sign-in')],
+      ['/forgot-password', () => import('./routes/forgot-password')],
+      ['/reset-password', () => import('./routes/reset-password')],
+      ['/join', () => import('./routes/join')],
+    ] as const
+  ).map(([path, load]) => ({ path, lazy: screen(load), errorElement: <RouteError />, hydrateFallbackElement: <Splash /> })),
   {
     path: '/',
     element: (
@@ -91,7 +94,9 @@ export const routes: RouteObject[] = [
             // The screen's first address, from when routines were "scheduled jobs".
             { path: 'admin/jobs', loader: () => redirect('/admin/routines') },
           ]),
-          { path: 'account/password', lazy: screen(() => import('./routes/account-password')) },
+          { path: 'account', lazy: screen(() => import('./routes/account')) },
+          // The page's first address, from when it held only the password change.
+          { path: 'account/password', loader: () => redirect('/account') },
           { path: '*', lazy: screen(() => import('./routes/not-found')) },
         ],
       },

@@ -3,14 +3,15 @@ import { isApiError } from './api-client';
 
 type SessionEndedHandler = (key: readonly unknown[] | undefined) => void;
 
-/** Called when any read or write comes back 401 (the session has ended), with that query's or mutation's key. */
+/** Called when any read or write comes back 401 (the session has ended) or 403 `second_step_required` (the firm now
+ * requires a second step this person lacks), with that query's or mutation's key. */
 let onSessionEnded: SessionEndedHandler | undefined;
 export function setSessionEndedHandler(handler: SessionEndedHandler | undefined): void {
   onSessionEnded = handler;
 }
 
 function noticeSessionEnd(error: unknown, key: readonly unknown[] | undefined): void {
-  if (isApiError(error) && error.status === 401) onSessionEnded?.(key);
+  if (isApiError(error) && (error.status === 401 || error.code === 'second_step_required')) onSessionEnded?.(key);
 }
 
 export function createQueryClient(): QueryClient {

@@ -114,9 +114,11 @@ describe('sign-in', () => {
   });
 
   it('refuses a token without an expiry, even one signed with the installation key', async () => {
-    const me = (await t.api.get('/api/auth/me').set(bearer(await t.tokenFor('tech@demo.test')))).body.user;
+    const signedIn = await t.tokenFor('tech@demo.test');
+    const me = (await t.api.get('/api/auth/me').set(bearer(signedIn))).body.user;
     const [{ token_version }] = await t.db.query(`SELECT token_version FROM users WHERE id = $1`, [me.id]);
-    const claims = { sub: me.id, org: me.organizationId, ver: token_version };
+    // The claims of a real sign-in, its session id (`jti`) included.
+    const claims = { sub: me.id, org: me.organizationId, ver: token_version, jti: (jwt.decode(signedIn) as { jti: string }).jti };
     const key = signingKey(t.config.JWT_SECRET);
     const forever = jwt.sign(claims, key, { algorithm: 'HS256' });
     expect((await t.api.get('/api/auth/me').set(bearer(forever))).status).toBe(401);

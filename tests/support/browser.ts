@@ -1,47 +1,56 @@
 import fs from 'node:fs';
-import type { Server } from 'node:http';
+import { createServer } from 'node:http';
 import path from 'node:path';
 import nodemailer from 'nodemailer';
+import pg from 'pg';
 import type { BrowserContextOptions } from 'playwright-core';
 import { buildApp } from '../../server/app';
 import { readConfig } from '../../server/config';
 import { startPaymentFake } from '../../server/fakes/payment-fake';
+import { pgSinkStore, startSmtpSink } from '../../server/fakes/smtp-sink';
 import { launchChromium } from './chromium';
 import { WAIT_MS } from './eventually';
 import { createTestDatabase } from './test-db';
 import { webhookSecret } from './test-app';
 
 /** The real server with the built client on a free loopback port, a seeded
- * database, the payment-provider fake delivering signed webhooks to it, and
+ * database, the payment-provider fake delivering signed webhooks to it, the SMTP
+ * sink whose mail the owner's Mailbox shows (`deliverMail` sends the outbox now), and
  * Debian's Chromium driven by playwright-core. Open pages through `newContext`:
  * its locators and navigations wait with the suite's patience. */
 export async function startBrowserRig() {
   const database = await createTestDatabase({ seed: true });
   const secret = webhookSecret();
   const payments = await startPaymentFake({ port: 0, webhookSecret: secret });
+  const sinkPool = new pg.Pool({ connectionString: database.url, max: 2 });
+  const sink = await startSmtpSink({ port: 0, store: pgSinkStore(sinkPool) });
+  // Listening first, so the links the app mails carry its real address.
+  const server = createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const { port } = server.address() as { port: number };
   const config = readConfig({
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
     JWT_SECRET: 'browser-test-secret-long-enough-for-hs256',
     START_LOCAL_FAKES: 'false',
     RUN_SCHEDULER: 'false',
-    SMTP_PORT: '9',
+    SMTP_PORT: String(sink.port),
+    PUBLIC_URL: `http://127.0.0.1:${port}`,
     CLIENT_DIR: path.resolve('dist/client'),
     PAYMENT_API_PORT: String(payments.port),
     PAYMENT_WEBHOOK_SECRET: secret,
   });
   if (!fs.existsSync(path.join(config.CLIENT_DIR, 'index.html'))) throw new Error('The client is not built: run the suite with `npm test`.');
-  const mail = nodemailer.createTransport({ host: '127.0.0.1', port: 9 });
-  const { app } = buildApp({ config, db: database.db, mail });
-  const server: Server = await new Promise((resolve) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
-  });
-  const { port } = server.address() as { port: number };
+  const mail = nodemailer.createTransport({ host: '127.0.0.1', port: sink.port, secure: false, ignoreTLS: true });
+  const { app, routines } = buildApp({ config, db: database.db, mail });
+  server.on('request', app);
   payments.store.settings.webhookUrl = `http://127.0.0.1:${port}/api/webhooks/payments`;
   const browser = await launchChromium();
   return {
     baseUrl: `http://127.0.0.1:${port}`,
     db: database.db,
+    /** What the deliver-outbox routine does on its schedule: queued mail goes to the sink (and the owner's Mailbox). */
+    deliverMail: () => routines.run('deliver-outbox', 'manual'),
     async newContext(options: BrowserContextOptions = {}) {
       const context = await browser.newContext(options);
       context.setDefaultTimeout(WAIT_MS);
@@ -53,6 +62,8 @@ export async function startBrowserRig() {
       server.closeAllConnections();
       await new Promise((r) => server.close(r));
       await payments.close();
+      await sink.close();
+      await sinkPool.end();
       await database.drop();
     },
   };

@@ -9,6 +9,7 @@ import { ProvidersForm } from '../../features/settings/components/providers-form
 import { InvoiceIssuerForm } from '../../features/settings/components/invoice-issuer-form';
 import { RentalTermsForm } from '../../features/settings/components/rental-terms-form';
 import { SettingsForm } from '../../features/settings/components/settings-form';
+import { SignInPolicyForm } from '../../features/settings/components/sign-in-policy-form';
 
 export default function SettingsRoute() {
   const settings = useSettings();
@@ -16,7 +17,7 @@ export default function SettingsRoute() {
     <>
       <PageHeader
         title="Settings"
-        description="Firm-wide choices: how dates and due states are worked out, how field checks are judged, which labs calibrate your kit, how calibration intervals are reviewed, and the tax and deposit terms of rentals."
+        description="Firm-wide choices: how dates and due states are worked out, how field checks are judged, which labs calibrate your kit, how calibration intervals are reviewed, the tax and deposit terms of rentals, and how people sign in."
       />
       {settings.isPending ? <LoadingPanel /> : null}
       {settings.isError ? (
@@ -41,6 +42,9 @@ export default function SettingsRoute() {
           </SettingsSection>
           <SettingsSection title="Invoice details">
             <InvoiceIssuerForm settings={settings.data} />
+          </SettingsSection>
+          <SettingsSection title="Signing in">
+            <SignInPolicyForm settings={settings.data} />
           </SettingsSection>
         </div>
       ) : null}

@@ -28,5 +28,5 @@ export const navItems: readonly NavItem[] = [
   { to: '/mailbox', label: 'Mailbox', capability: 'mailbox.read' },
   { to: '/admin/routines', label: 'Routines', capability: 'routines.run' },
   { to: '/settings', label: 'Settings', capability: 'settings.manage' },
-  { to: '/account/password', label: 'My password' },
+  { to: '/account', label: 'My account' },
 ];

@@ -1,4 +1,5 @@
 export const authKeys = {
   all: ['auth'] as const,
   me: () => [...authKeys.all, 'me'] as const,
+  sessions: () => [...authKeys.all, 'sessions'] as const,
 };

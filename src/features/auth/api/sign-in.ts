@@ -13,15 +13,32 @@ export function signIn(input: SignInInput): Promise<SignInView> {
   return apiClient.post<SignInView>('/auth/login', input);
 }
 
-/** Signs in, forgets anything cached for a previous person, and loads the new session. */
-export function useSignIn() {
+export function signInWithCode(input: { ticket: string; code: string }): Promise<SignInView> {
+  return apiClient.post<SignInView>('/auth/login/code', input);
+}
+
+/** Forgets anything cached for a previous person and loads the new session (after sign-in or an accepted invitation). */
+export function useStartSession() {
   const queryClient = useQueryClient();
+  return async () => {
+    queryClient.clear();
+    await queryClient.fetchQuery(meQueryOptions());
+  };
+}
+
+/** The password step; answers a ticket instead when the person signs in with a second step. */
+export function useSignIn() {
+  const start = useStartSession();
   return useMutation({
     mutationKey: [...authKeys.all, 'sign-in'],
     mutationFn: signIn,
-    onSuccess: async () => {
-      queryClient.clear();
-      await queryClient.fetchQuery(meQueryOptions());
+    onSuccess: async (answer) => {
+      if ('token' in answer) await start();
     },
   });
+}
+
+export function useSignInWithCode() {
+  const start = useStartSession();
+  return useMutation({ mutationKey: [...authKeys.all, 'sign-in-code'], mutationFn: signInWithCode, onSuccess: start });
 }

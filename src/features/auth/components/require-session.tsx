@@ -4,9 +4,11 @@ import { isApiError } from '../../../lib/api-client';
 import { TimeZoneContext } from '../../../lib/format';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { useMe } from '../api/get-me';
+import { SecondStepOwed } from './second-step-owed';
 import { SessionContext } from './session-context';
 
-/** Renders its children only for a signed-in person; everyone else goes to /sign-in. */
+/** Renders its children only for a signed-in person; everyone else goes to /sign-in. Someone who owes the
+ * second step their firm requires sets it up first (the server answers them nothing else meanwhile). */
 export function RequireSession({ children }: { children: ReactNode }) {
   const me = useMe();
   const location = useLocation();
@@ -22,7 +24,7 @@ export function RequireSession({ children }: { children: ReactNode }) {
   }
   return (
     <SessionContext value={me.data}>
-      <TimeZoneContext value={me.data.organization.timeZone}>{children}</TimeZoneContext>
+      <TimeZoneContext value={me.data.organization.timeZone}>{me.data.secondStep.owed ? <SecondStepOwed /> : children}</TimeZoneContext>
     </SessionContext>
   );
 }

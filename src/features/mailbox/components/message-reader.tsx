@@ -4,6 +4,21 @@ import { ArrowLeftIcon } from '../../../components/icons';
 import { formatFileSize, useDateFormat } from '../../../lib/format';
 import type { MailMessageView } from '../../../../shared/notifications/views';
 
+const webAddress = /(https?:\/\/[^\s<>"]+)/;
+
+/** The plain text with its web addresses as links (a mail's link is what its reader follows), everything else as text. */
+function withLinks(text: string) {
+  return text.split(webAddress).map((part, i) =>
+    i % 2 ? (
+      <a key={i} href={part} rel="noreferrer noopener" className="font-semibold text-ink-900 underline break-all">
+        {part}
+      </a>
+    ) : (
+      part
+    ),
+  );
+}
+
 /**
  * Shows one message. The plain-text body is the default; an HTML body is only
  * ever rendered inside an iframe with an empty sandbox (no scripts, no forms,
@@ -73,7 +88,9 @@ export function MessageReader({ message, onBack }: { message: MailMessageView; o
           className="h-[28rem] w-full rounded-md border border-paper-line bg-white"
         />
       ) : hasText ? (
-        <pre className="overflow-x-auto rounded-md border border-paper-line bg-card p-3 text-sm whitespace-pre-wrap break-words">{message.text}</pre>
+        <pre className="overflow-x-auto rounded-md border border-paper-line bg-card p-3 text-sm whitespace-pre-wrap break-words">
+          {withLinks(message.text ?? '')}
+        </pre>
       ) : (
         <p className="text-ink-500">This message has no body.</p>
       )}

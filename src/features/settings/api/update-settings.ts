@@ -18,6 +18,8 @@ export interface UpdateSettingsInput {
   taxRateBasisPoints?: number;
   depositPolicy?: DepositPolicy;
   issuer?: InvoiceIssuer;
+  /** Owners and billing clerks must sign in with a second step. */
+  secondStepRequired?: boolean;
 }
 
 export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettingsView> {

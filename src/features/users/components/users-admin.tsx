@@ -2,26 +2,30 @@ import { useMemo, useState } from 'react';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
 import { useDateFormat } from '../../../lib/format';
+import { useClearSecondStep } from '../api/clear-second-step';
 import { useUpdateUser } from '../api/update-user';
 import { useUsers } from '../api/get-users';
 import type { UserView } from '../../../../shared/users/views';
-import { AddUserForm } from './add-user-form';
 import { ChangeRoleDialog } from './change-role-dialog';
+import { InvitationsList } from './invitations-list';
+import { InviteForm } from './invite-form';
 import { ResetPasswordDialog } from './reset-password-dialog';
 import { UsersTable, type UserRowActions } from './users-table';
 
 type Outcome = { tone: 'success' | 'error'; text: string } | null;
 
-/** The owner's list of people in the firm, with role, enable/disable and password reset. */
+/** The owner's list of people in the firm, with role, enable/disable, password reset and clearing a lost second step; invitations. */
 export function UsersAdmin({ currentUserId, firmName }: { currentUserId: string; firmName: string }) {
   const users = useUsers();
   const update = useUpdateUser();
+  const clearSecondStep = useClearSecondStep();
   const { timeZone } = useDateFormat();
   const [roleFor, setRoleFor] = useState<UserView | null>(null);
   const [passwordFor, setPasswordFor] = useState<UserView | null>(null);
   const [outcome, setOutcome] = useState<Outcome>(null);
 
-  const busyUserId = update.isPending ? update.variables?.id : undefined;
+  const busyUserId = update.isPending ? update.variables?.id : clearSecondStep.isPending ? clearSecondStep.variables : undefined;
+  const failed = (error: Error) => setOutcome({ tone: 'error', text: isApiError(error) ? error.message : 'The change was not saved. Try again.' });
 
   const actions = useMemo<UserRowActions>(
     () => ({
@@ -44,13 +48,17 @@ export function UsersAdmin({ currentUserId, firmName }: { currentUserId: string;
                 tone: 'success',
                 text: disabled ? `${user.name} is disabled and can no longer sign in.` : `${user.name} is enabled and can sign in again.`,
               }),
-            onError: (error) =>
-              setOutcome({
-                tone: 'error',
-                text: isApiError(error) ? error.message : 'The change was not saved. Try again.',
-              }),
+            onError: failed,
           },
         );
+      },
+      onClearSecondStep: (user) => {
+        setOutcome(null);
+        clearSecondStep.mutate(user.id, {
+          onSuccess: () =>
+            setOutcome({ tone: 'success', text: `${user.name}'s second step is cleared. They sign in with their password and can set it up again.` }),
+          onError: failed,
+        });
       },
       busyUserId,
     }),
@@ -81,11 +89,18 @@ export function UsersAdmin({ currentUserId, firmName }: { currentUserId: string;
         )}
       </section>
 
-      <section aria-labelledby="add-user-heading" className="max-w-3xl rounded-lg border border-paper-line bg-card p-4">
-        <h2 id="add-user-heading" className="mb-3 text-lg font-bold">
-          Add a user
+      <section aria-labelledby="invite-heading" className="max-w-3xl rounded-lg border border-paper-line bg-card p-4">
+        <h2 id="invite-heading" className="mb-3 text-lg font-bold">
+          Invite someone
         </h2>
-        <AddUserForm firmName={firmName} />
+        <InviteForm />
+      </section>
+
+      <section aria-labelledby="invitations-heading" className="flex max-w-3xl flex-col gap-3">
+        <h2 id="invitations-heading" className="text-lg font-bold">
+          Invitations waiting for an answer
+        </h2>
+        <InvitationsList />
       </section>
 
       <ChangeRoleDialog user={roleFor} onClose={() => setRoleFor(null)} onDone={done} />

@@ -12,6 +12,7 @@ export interface UserRowActions {
   onChangeRole: (user: UserView) => void;
   onToggleDisabled: (user: UserView) => void;
   onResetPassword: (user: UserView) => void;
+  onClearSecondStep: (user: UserView) => void;
   /** The row whose disable/enable is in flight. */
   busyUserId?: string;
 }
@@ -65,6 +66,15 @@ export function UsersTable({
           p.data ? <StatusChip tone={p.data.disabled ? 'paused' : 'ok'} label={statusWord(p.data)} /> : null,
       },
       {
+        headerName: 'Second step',
+        colId: 'secondStep',
+        minWidth: 110,
+        maxWidth: 140,
+        valueGetter: (p) => (p.data ? (p.data.secondStepOn ? 'On' : 'Off') : ''),
+        cellRenderer: (p: CustomCellRendererProps<UserView>) =>
+          p.data ? <StatusChip tone={p.data.secondStepOn ? 'ok' : 'none'} label={p.data.secondStepOn ? 'On' : 'Off'} /> : null,
+      },
+      {
         headerName: 'Added',
         colId: 'createdAt',
         field: 'createdAt',
@@ -79,13 +89,13 @@ export function UsersTable({
         headerName: 'Actions',
         colId: 'actions',
         type: actionsColumnType,
-        minWidth: 340,
+        minWidth: 480,
         flex: 2,
         cellRenderer: (p: CustomCellRendererProps<UserView>) => {
           const user = p.data;
           if (!user) return null;
           if (user.id === currentUserId) {
-            return <span className="text-sm text-ink-500">Change your own password under “My password”.</span>;
+            return <span className="text-sm text-ink-500">Your own password and second step are under “My account”.</span>;
           }
           return (
             <div className="flex h-full flex-nowrap items-center gap-1.5">
@@ -103,6 +113,11 @@ export function UsersTable({
               <Button size="sm" onClick={() => actions.onResetPassword(user)}>
                 Reset password
               </Button>
+              {user.secondStepOn ? (
+                <Button size="sm" onClick={() => actions.onClearSecondStep(user)}>
+                  Clear second step
+                </Button>
+              ) : null}
             </div>
           );
         },

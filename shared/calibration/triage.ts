@@ -80,3 +80,13 @@ export function triage(input: TriageInput): TriageFacts {
     ? { ...base, ...numbers, suggestion: 'no_effect_likely', reason: `Within the allowance: ${compared}.` }
     : { ...base, ...numbers, suggestion: 'remeasure_advised', reason: `More than the allowance: ${compared}.` };
 }
+
+/** What accepting a suggestion records as the booking's assessment ("cannot judge": the customer is told and asked). */
+export const assessmentForSuggestion = {
+  no_effect_likely: 'no_effect',
+  remeasure_advised: 'remeasure_offered',
+  cannot_judge: 'customer_notified',
+} as const satisfies Record<TriageSuggestion, string>;
+
+/** "a quarter" for 4:1, "1/5" otherwise: the share of the tolerance the error may use. */
+export const allowanceWords = (ratio: number) => (ratio === 4 ? 'a quarter' : ratio === 2 ? 'half' : `1/${ratio}`);

@@ -108,7 +108,7 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   for (const tip of assets.filter((a) => a.type === 'tip' && a.kitId)) {
     for (const position of (tip.specs.positions as string[]) ?? []) {
       const drifting = tip.assetTag === 'TIP-002' && position === 'vertical';
-      const series = drifting ? [18, 26, 35, 44, 52] : [14, 17, 12];
+      const series = drifting ? [20, 28, 36, 43, 50] : [14, 17, 12]; // TIP-002's trend meets 60 µm about a week from today
       series.forEach((um, i) => validation(tip, position, um, (series.length - i) * 30));
     }
   }

@@ -45,13 +45,13 @@ const proposals: Record<NoticeGroup, { subject: string; finding: string; proposa
 export function noticeFor(review: ImpactReviewView, tag: string, group: NoticeGroup, rows: Row[]) {
   const p = proposals[group];
   const jobs = rows.map((r) => `${r.jobReference} (${r.startsOn} to ${r.endsOn})`).join(', ');
-  const how = review.trigger === 'calibration' ? 'when the calibration laboratory checked it' : 'in one of our own field checks';
-  const error = review.asFound.errorUm === null ? '' : `, with an error of ${um(review.asFound.errorUm)} as found`;
+  const how = review.trigger === 'calibration' ? 'the calibration laboratory found' : 'one of our own field checks found';
+  const error = review.asFound.errorUm === null ? '' : `, with an error of ${um(review.asFound.errorUm)}`;
   return {
     subject: `About measurements taken with our ${tag} (${rows.map((r) => r.jobReference).join(', ')}): ${p.subject}`,
     heading: `A note about your measurements, ${rows[0].customerName}`,
     paragraphs: [
-      `On ${review.foundOn} we found ${how} that ${tag}, an instrument used on your work ${jobs}, was out of tolerance${error}.`,
+      `On ${review.foundOn} ${how} our ${tag} out of tolerance${error}. We used it on your work ${jobs}.`,
       group === 'pending' ? p.finding : [p.finding, ...rows.map((r) => `• ${comparison(r)}`)].join('\n'),
       p.proposal,
     ],

@@ -221,6 +221,23 @@ describe('tip drift forecast', () => {
     expect(soon.items.map((f: { assetTag: string }) => f.assetTag)).toContain('TIP-DRIFT1');
     expect((await t.api.get(`/api/assets/${tip.id}`).set(bearer(manager))).body.status).toBe('ready');
 
+    // The technician leading the next job with this tip sees it in "Checks to do", as a forecast rather than a refusal.
+    const tech = await t.tokenFor('tech@demo.test');
+    const me = (await t.api.get('/api/auth/me').set(bearer(tech))).body.user;
+    const job = await t.api
+      .post('/api/jobs')
+      .set(bearer(manager))
+      .send({ reference: 'J-DRIFT', customerName: 'Ostby Press Tools', startsOn: day(1).slice(0, 10), endsOn: day(3).slice(0, 10), leadTechnicianId: me.id });
+    const booked = await t.api
+      .post('/api/bookings')
+      .set(bearer(manager))
+      .send({ assetIds: [tip.id], jobId: job.body.id, startsOn: day(1).slice(0, 10), endsOn: day(3).slice(0, 10) });
+    expect(booked.status).toBe(201);
+    const todo = (await t.api.get('/api/checks/to-do').set(bearer(tech))).body.items;
+    expect(todo.filter((c: { assetId: string }) => c.assetId === tip.id)).toEqual([
+      expect.objectContaining({ reason: 'forecast', lastDecision: 'pass', forecastOn: mine.items[0].forecast.reachesOn }),
+    ]);
+
     const short = await newTip('TIP-DRIFT2');
     for (const n of [-20, -10, -1]) await validate(short.id, 40, day(n));
     const few = (await t.api.get(`/api/assets/${short.id}/tip-forecast`).set(bearer(manager))).body;

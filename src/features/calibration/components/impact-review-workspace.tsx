@@ -207,7 +207,8 @@ export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: Impa
       {canAssess ? (
         <Panel title="Customer notices">
           <p className="mb-3 text-sm text-ink-700">
-            One notice per customer with a contact e-mail. Draft them to read first; sending queues them in the outbox.
+            One notice per customer and assessment, for customers with a contact e-mail: it says what was found and what we propose. Draft them to read first;
+            sending queues them in the outbox.
           </p>
           <div className="mb-3 flex flex-wrap gap-2">
             <Button

@@ -45,7 +45,8 @@ export function ValidationHistoryChart({ checks, timeZone, forecasts = [] }: { c
   const ticks = [0, top / 3, (2 * top) / 3].map((v) => Math.round(v));
   // Horizontal (open squares) first, so a vertical dot at the same moment stays visible on top.
   const positions = [...new Set(points.map((c) => c.position))].sort((a, b) => (a === 'horizontal' ? -1 : b === 'horizontal' ? 1 : 0));
-  const tolerancePath = points.map((c, i) => `${i === 0 ? 'M' : 'L'}${x(times[i])} ${y(c.result.toleranceUm)}`).join(' ');
+  // The last tolerance runs on to the chart's end, where a forecast may reach it.
+  const tolerancePath = `${points.map((c, i) => `${i === 0 ? 'M' : 'L'}${x(times[i])} ${y(c.result.toleranceUm)}`).join(' ')} L${W - R} ${y(points[points.length - 1].result.toleranceUm)}`;
   const summary = `Largest deviation per tip validation: ${points
     .map(
       (c) =>
@@ -70,7 +71,7 @@ export function ValidationHistoryChart({ checks, timeZone, forecasts = [] }: { c
         <line x1={L} x2={L} y1={T} y2={H - B} stroke="#a7afbd" />
         <line x1={L} x2={W - R} y1={H - B} y2={H - B} stroke="#a7afbd" />
         <path d={tolerancePath} fill="none" stroke="#7a5f22" strokeWidth={1.6} strokeDasharray="6 4" />
-        <text x={W - R} y={y(points[points.length - 1].result.toleranceUm) - 5} textAnchor="end" fontSize={11} fill="#7a5f22">
+        <text x={L + 4} y={y(points[points.length - 1].result.toleranceUm) - 5} fontSize={11} fill="#7a5f22">
           tolerance
         </text>
         {positions.map((p) => {
@@ -103,11 +104,13 @@ export function ValidationHistoryChart({ checks, timeZone, forecasts = [] }: { c
                 <>
                   <rect
                     x={x(noonOf(f.forecast.earliestOn))}
-                    y={y(f.forecast.limitUm) - 3}
+                    y={y(f.forecast.limitUm) - 5}
                     width={Math.max(2, (f.forecast.latestOn ? x(Math.min(t1, noonOf(f.forecast.latestOn))) : W - R) - x(noonOf(f.forecast.earliestOn)))}
-                    height={6}
+                    height={10}
                     fill="#c9a24a"
-                    opacity={0.45}
+                    fillOpacity={0.5}
+                    stroke="#7a5f22"
+                    strokeWidth={1}
                   />
                   <path d={`M${x(end)} ${y(f.forecast.limitUm) - 6} l6 6 l-6 6 l-6 -6 z`} fill="#fffdf8" stroke="#7a5f22" strokeWidth={1.8} />
                 </>

@@ -81,4 +81,33 @@ describe("the owner's impact triage in a real browser", () => {
     ]);
     await context.close();
   }, 120_000);
+
+  it('records a job with an A + B·L tolerance at its distance from the job form, and one with none', async () => {
+    const { context, page } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
+    const addJob = async (reference: string, tolerance?: () => Promise<void>) => {
+      await page.goto(`${rig.baseUrl}/jobs`);
+      await page.getByRole('button', { name: 'New job' }).click();
+      await page.getByLabel('Reference').fill(reference);
+      await page.getByLabel('Customer name').fill('Ostby Press Tools');
+      await page.getByLabel('First day on site').fill('2027-03-01');
+      await page.getByLabel('Last day on site').fill('2027-03-02');
+      await tolerance?.();
+      await page.getByRole('button', { name: 'Add job' }).click();
+    };
+    const stored = (reference: string) =>
+      eventually(async () => (await rig.db.query(`SELECT tightest_tolerance AS t FROM jobs WHERE reference = $1`, [reference]))[0]);
+    await addJob('J-BT-NONE');
+    await stored('J-BT-NONE').toEqual({ t: null });
+    await addJob('J-BT-RANGE', async () => {
+      await page.getByLabel('Tolerance', { exact: true }).selectOption('range');
+      await page.getByLabel('A (µm)').fill('20');
+      await page.getByLabel('B (µm/m)').fill('6');
+      await page.getByLabel('Which feature').fill('casing flange profile');
+      await page.getByRole('button', { name: 'Add job' }).click();
+      await page.getByText('Say how far from the tracker the job measured (m).').waitFor();
+      await page.getByLabel('Distance from the tracker (m)').fill('4.5');
+    });
+    await stored('J-BT-RANGE').toEqual({ t: { tolerance: { kind: 'range', aUm: 20, bUmPerM: 6 }, distanceM: 4.5, note: 'casing flange profile' } });
+    await context.close();
+  }, 120_000);
 });

@@ -55,6 +55,8 @@ const labels: Record<string, string> = {
   endsOn: 'End',
 };
 
+const isNumber = (v: string | undefined) => !!v?.trim() && Number.isFinite(Number(v));
+
 const schema = Yup.object({
   reference: Yup.string().trim().required('Give the job a reference, e.g. J-2611.').max(40, 'Keep the reference to 40 characters.'),
   customerName: Yup.string().trim().required('Say who the customer is.').max(120, 'Keep the name to 120 characters.'),
@@ -69,21 +71,22 @@ const schema = Yup.object({
       return !value || !startsOn || value >= startsOn;
     }),
   notes: Yup.string().trim().max(4000, 'Keep the notes to 4000 characters.'),
-  toleranceUm: Yup.number()
-    .typeError('Give the tolerance in micrometres, e.g. 25.')
-    .when('toleranceKind', { is: 'fixed', then: (s) => s.required('Give the ± tolerance in micrometres.').positive('The tolerance must be more than 0 µm.') }),
-  toleranceAUm: Yup.number()
-    .typeError('Give A in micrometres.')
-    .when('toleranceKind', { is: 'range', then: (s) => s.required('Give A in micrometres.').min(0, 'A cannot be negative.') }),
-  toleranceBUmPerM: Yup.number()
-    .typeError('Give B in micrometres per metre.')
-    .when('toleranceKind', { is: 'range', then: (s) => s.required('Give B in micrometres per metre.').min(0, 'B cannot be negative.') }),
-  toleranceDistanceM: Yup.number()
-    .typeError('Give the distance in metres.')
-    .when('toleranceKind', {
-      is: 'range',
-      then: (s) => s.required('Say how far from the tracker the job measured (m).').min(0, 'The distance cannot be negative.'),
-    }),
+  toleranceUm: Yup.string().when('toleranceKind', {
+    is: 'fixed',
+    then: (s) => s.test('um', 'Give the ± tolerance in micrometres, more than 0, e.g. 25.', (v) => isNumber(v) && Number(v) > 0),
+  }),
+  toleranceAUm: Yup.string().when('toleranceKind', {
+    is: 'range',
+    then: (s) => s.test('a', 'Give A in micrometres, 0 or more.', (v) => isNumber(v) && Number(v) >= 0),
+  }),
+  toleranceBUmPerM: Yup.string().when('toleranceKind', {
+    is: 'range',
+    then: (s) => s.test('b', 'Give B in micrometres per metre, 0 or more.', (v) => isNumber(v) && Number(v) >= 0),
+  }),
+  toleranceDistanceM: Yup.string().when('toleranceKind', {
+    is: 'range',
+    then: (s) => s.test('l', 'Say how far from the tracker the job measured (m).', (v) => isNumber(v) && Number(v) >= 0),
+  }),
   toleranceNote: Yup.string().trim().max(200, 'Keep the note to 200 characters.'),
 });
 

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { JobTolerance } from '../../shared/calibration/triage';
 import { OrgOwned } from '../db/org-owned';
 
 /** A customer site job of the firm's own (DESIGN.md §3). */
@@ -34,6 +35,10 @@ export class Job extends OrgOwned {
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;
+
+  /** The tightest feature tolerance the job measured, if recorded: what an impact review weighs an instrument's error against. */
+  @Column({ name: 'tightest_tolerance', type: 'jsonb', nullable: true })
+  tightestTolerance: JobTolerance | null;
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;

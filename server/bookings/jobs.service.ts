@@ -42,7 +42,7 @@ export class JobsRegisterService {
       if (await tx.count(Job, { reference: input.reference }))
         throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
       const job = await tx.insert(Job, { ...this.fields(input) });
-      await recordAudit(tx, actor, 'job.created', { type: 'job', id: job.id }, { reference: job.reference });
+      await recordAudit(tx, actor, 'job.created', { type: 'job', id: job.id }, { reference: job.reference, tightestTolerance: job.tightestTolerance });
       return job;
     });
   }
@@ -54,7 +54,7 @@ export class JobsRegisterService {
       if (input.reference !== job.reference && (await tx.count(Job, { reference: input.reference })))
         throw conflict(`Job ${input.reference} already exists.`, { fields: { reference: 'is already used by another job' } });
       Object.assign(job, this.fields(input));
-      await recordAudit(tx, actor, 'job.updated', { type: 'job', id }, { reference: job.reference });
+      await recordAudit(tx, actor, 'job.updated', { type: 'job', id }, { reference: job.reference, tightestTolerance: job.tightestTolerance });
       return tx.save(Job, job);
     });
   }
@@ -70,6 +70,9 @@ export class JobsRegisterService {
       endsOn: input.endsOn,
       leadTechnicianId: input.leadTechnicianId ?? null,
       notes: input.notes ?? null,
+      tightestTolerance: input.tightestTolerance
+        ? { tolerance: input.tightestTolerance.tolerance, distanceM: input.tightestTolerance.distanceM ?? null, note: input.tightestTolerance.note ?? null }
+        : null,
     };
   }
 }

@@ -48,6 +48,10 @@ export class CalibrationEvent extends AssetBound {
   @Column({ name: 'as_found', type: 'text' })
   asFound: AsFound;
 
+  /** The largest as-found error the certificate states (µm), when it states one: impact triage weighs it against each job's tolerance. */
+  @Column({ name: 'as_found_error_um', type: 'double precision', nullable: true })
+  asFoundErrorUm: number | null;
+
   @Column({ name: 'as_left', type: 'text' })
   asLeft: AsFound;
 

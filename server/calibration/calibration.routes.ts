@@ -169,6 +169,17 @@ export function calibrationRoutes({ calibration, impact, lab, review }: Services
   endpoint(
     router,
     at,
+    {
+      method: 'post',
+      path: '/impact-reviews/:id/accept-suggestions',
+      summary: 'Accept the suggested triage for every booking not yet assessed (the numbers and rule are kept with each)',
+      access: 'impact.review',
+    },
+    ({ actor, params }) => impact.acceptSuggestions(actor, params.id),
+  );
+  endpoint(
+    router,
+    at,
     { method: 'post', path: '/impact-reviews/:id/notices', summary: 'Draft (or send) one notice per customer', access: 'impact.review', body: noticePayload },
     ({ actor, params, body }) => impact.notices(actor, params.id, body.send),
   );

@@ -27,6 +27,7 @@ const eventView = (e: CalibrationEvent): CalibrationEventView => ({
   certificateNumber: e.certificateNumber,
   certificateUrl: `/api/calibrations/${e.id}/certificate.pdf`,
   asFound: e.asFound,
+  asFoundErrorUm: e.asFoundErrorUm,
   asLeft: e.asLeft,
   intervalMonths: e.intervalMonths,
   dueOn: e.dueOn,
@@ -91,6 +92,7 @@ export class CalibrationService {
         certificateNumber: fields.certificateNumber,
         certificateFileId: stored.id,
         asFound: fields.asFound,
+        asFoundErrorUm: fields.asFoundErrorUm ?? null,
         asLeft: fields.asLeft,
         intervalMonths,
         dueOn: dueDate(fields.performedOn, intervalMonths),
@@ -142,7 +144,7 @@ export class CalibrationService {
         actor,
         'calibration.recorded',
         { type: 'asset', id: assetId },
-        { eventId: event.id, asFound: fields.asFound, asLeft: fields.asLeft, dueOn: event.dueOn },
+        { eventId: event.id, asFound: fields.asFound, asFoundErrorUm: event.asFoundErrorUm, asLeft: fields.asLeft, dueOn: event.dueOn },
       );
       if (fields.asFound === 'out_of_tolerance')
         await openImpactReview(tx, actor, asset, { trigger: 'calibration', triggerId: event.id, foundOn: fields.performedOn });

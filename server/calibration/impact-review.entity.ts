@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { OrgOwned } from '../db/org-owned';
+import type { TriageFacts } from '../../shared/calibration/triage';
 import type { ImpactAssessment } from '../../shared/calibration/views';
 import { AssetBound } from '../fleet';
 
@@ -65,6 +66,10 @@ export class ImpactReviewItem extends OrgOwned {
 
   @Column({ name: 'assessed_at', type: 'timestamptz', nullable: true })
   assessedAt: Date | null;
+
+  /** The triage shown when the booking was assessed: numbers, ratio and rule, for the auditor. */
+  @Column({ type: 'jsonb', nullable: true })
+  triage: TriageFacts | null;
 
   @Column({ name: 'notice_queued_at', type: 'timestamptz', nullable: true })
   noticeQueuedAt: Date | null;

@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
-import type { AssetImpactView, ImpactAssessment, ImpactNoticesView, ImpactReviewView } from '../../shared/calibration/views';
+import { assessmentForSuggestion, triage, type AsFoundErrorSource, type JobTolerance, type TriageFacts } from '../../shared/calibration/triage';
+import type { AssetImpactView, ImpactAssessment, ImpactNoticesView, ImpactReviewView, NoticeGroup } from '../../shared/calibration/views';
 import type { Page } from '../../shared/lists/page';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
@@ -9,6 +10,8 @@ import { ruleBroken } from '../http/errors';
 import { enqueueMail, staffAddresses } from '../notifications';
 import { ImpactReview, ImpactReviewItem } from './impact-review.entity';
 import { listReply } from '../http/list-reply';
+import { loadOrgContext } from '../organizations';
+import { noticeFor } from './impact-notices';
 
 /** Day of the item's last passing evidence before `foundOn`: an in-tolerance calibration or a passing field check (on the firm's calendar). */
 async function lastPassingEvidence(tx: Scoped, assetId: string, foundOn: string, excludeCheckId?: string) {
@@ -93,7 +96,23 @@ type ReviewRow = {
   assessment: ImpactAssessment | null;
   note: string | null;
   noticeQueuedAt: Date | null;
+  tightestTolerance: JobTolerance | null;
+  triage: TriageFacts | null;
 };
+
+/** The as-found error a review weighs: the certificate's recorded value, or the failing check's judged result (µm). */
+async function asFoundError(tx: Scoped, review: ImpactReview): Promise<{ errorUm: number | null; source: AsFoundErrorSource }> {
+  const [row] =
+    review.trigger === 'calibration'
+      ? await tx.sql<{ errorUm: number | null }>(`SELECT as_found_error_um AS "errorUm" FROM calibration_events WHERE organization_id = $1 AND id = $2`, [
+          review.triggerId,
+        ])
+      : await tx.sql<{ errorUm: number | null }>(
+          `SELECT coalesce((result->>'maxDeviationUm')::float8, abs((result->>'errorUm')::float8)) AS "errorUm" FROM field_checks WHERE organization_id = $1 AND id = $2`,
+          [review.triggerId],
+        );
+  return { errorUm: row?.errorUm ?? null, source: review.trigger === 'calibration' ? 'certificate' : 'check' };
+}
 
 export class ImpactService {
   constructor(private readonly db: DataSource) {}
@@ -102,11 +121,20 @@ export class ImpactService {
     const bookings = await tx.sql<ReviewRow>(
       `SELECT i.booking_id AS "bookingId", b.job_id AS "jobId", j.reference AS "jobReference", j.customer_name AS "customerName", j.contact_email AS "contactEmail",
               b.rental_id AS "rentalId", to_char(b.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(b.ends_on, 'YYYY-MM-DD') AS "endsOn",
-              i.assessment, i.note, i.notice_queued_at AS "noticeQueuedAt"
+              i.assessment, i.note, i.notice_queued_at AS "noticeQueuedAt", j.tightest_tolerance AS "tightestTolerance", i.triage
          FROM impact_review_items i JOIN bookings b ON b.id = i.booking_id LEFT JOIN jobs j ON j.id = b.job_id
         WHERE i.organization_id = $1 AND i.review_id = $2 ORDER BY b.starts_on`,
       [review.id],
     );
+    const asFound = await asFoundError(tx, review);
+    const { triageRatio } = await loadOrgContext(tx);
+    const rows = bookings.map(({ tightestTolerance, ...b }) => ({
+      ...b,
+      customerId: null,
+      noticeQueuedAt: b.noticeQueuedAt?.toISOString() ?? null,
+      toleranceNote: tightestTolerance?.note ?? null,
+      suggestion: triage({ asFoundErrorUm: asFound.errorUm, errorSource: asFound.source, job: tightestTolerance, ratio: triageRatio }),
+    }));
     return {
       id: review.id,
       assetId: review.assetId,
@@ -116,8 +144,11 @@ export class ImpactService {
       since: review.since,
       foundOn: review.foundOn,
       state: review.state,
-      bookings: bookings.map((b) => ({ ...b, customerId: null, noticeQueuedAt: b.noticeQueuedAt?.toISOString() ?? null })),
-      assessedCount: bookings.filter((b) => b.assessment).length,
+      bookings: rows,
+      assessedCount: rows.filter((b) => b.assessment).length,
+      asFound,
+      triageRatio,
+      remeasureCount: rows.filter((b) => (b.assessment ?? assessmentForSuggestion[b.suggestion.suggestion]) === 'remeasure_offered').length,
     };
   }
 
@@ -143,11 +174,54 @@ export class ImpactService {
       const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
       if (review.state === 'closed') throw ruleBroken('review_closed', 'This review is closed.');
       const item = await tx.get(ImpactReviewItem, { reviewId, bookingId }, 'That booking in the review');
-      Object.assign(item, { assessment, note: note ?? null, assessedBy: actor.userId, assessedAt: new Date() });
-      await tx.save(ImpactReviewItem, item);
-      await recordAudit(tx, actor, 'impact_review.assessed', { type: 'asset', id: review.assetId }, { reviewId, bookingId, assessment, note });
+      const { bookings } = await this.view(tx, review);
+      await this.record(tx, actor, review, item, assessment, note ?? null, bookings.find((b) => b.bookingId === bookingId)!.suggestion);
       return this.view(tx, review);
     });
+  }
+
+  /** Accept the suggested triage for every booking not yet assessed. */
+  acceptSuggestions(actor: Actor, reviewId: string): Promise<ImpactReviewView> {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
+      if (review.state === 'closed') throw ruleBroken('review_closed', 'This review is closed.');
+      const { bookings } = await this.view(tx, review);
+      const items = await tx.find(ImpactReviewItem, { where: { reviewId } });
+      for (const b of bookings.filter((x) => !x.assessment)) {
+        const item = items.find((i) => i.bookingId === b.bookingId)!;
+        await this.record(tx, actor, review, item, assessmentForSuggestion[b.suggestion.suggestion], null, b.suggestion);
+      }
+      return this.view(tx, review);
+    });
+  }
+
+  /** One assessment, with the triage the person saw (numbers, ratio, rule) kept beside it and in the audit trail. */
+  private async record(
+    tx: Scoped,
+    actor: Actor,
+    review: ImpactReview,
+    item: ImpactReviewItem,
+    assessment: ImpactAssessment,
+    note: string | null,
+    shown: TriageFacts,
+  ) {
+    Object.assign(item, { assessment, note, triage: shown, assessedBy: actor.userId, assessedAt: new Date() });
+    await tx.save(ImpactReviewItem, item);
+    await recordAudit(
+      tx,
+      actor,
+      'impact_review.assessed',
+      { type: 'asset', id: review.assetId },
+      {
+        reviewId: review.id,
+        bookingId: item.bookingId,
+        assessment,
+        note,
+        suggested: shown.suggestion,
+        followsSuggestion: assessmentForSuggestion[shown.suggestion] === assessment,
+        triage: shown,
+      },
+    );
   }
 
   close(actor: Actor, reviewId: string): Promise<ImpactReviewView> {
@@ -166,32 +240,53 @@ export class ImpactService {
     });
   }
 
-  /** One notice per customer with an e-mail address; `send` queues them in the outbox. */
+  /** One notice per customer and group (the booking's assessment, or pending) with an e-mail address; `send` queues them in the outbox. */
   notices(actor: Actor, reviewId: string, send: boolean): Promise<ImpactNoticesView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
-      const { bookings } = await this.view(tx, review);
-      const byCustomer = new Map<string, ImpactReviewView['bookings']>();
-      for (const b of bookings) if (b.contactEmail) byCustomer.set(b.contactEmail, [...(byCustomer.get(b.contactEmail) ?? []), b]);
-      const drafts = [...byCustomer.entries()].map(([to, rows]) => ({
+      const view = await this.view(tx, review);
+      const tag = review.asset!.assetTag;
+      const groups = new Map<string, { to: string; group: NoticeGroup; rows: (ImpactReviewView['bookings'][number] & { jobReference: string })[] }>();
+      for (const b of view.bookings) {
+        if (!b.contactEmail) continue;
+        const group: NoticeGroup = b.assessment ?? 'pending';
+        const key = `${b.contactEmail}\u0000${group}`;
+        const entry = groups.get(key) ?? { to: b.contactEmail, group, rows: [] };
+        entry.rows.push({ ...b, jobReference: b.jobReference ?? `booking of ${b.startsOn}` });
+        groups.set(key, entry);
+      }
+      const drafts = [...groups.values()].map(({ to, group, rows }) => ({
         to,
+        group,
+        rows,
         customerName: rows[0].customerName,
-        subject: `About measurements taken with our ${review.asset!.assetTag} (${rows.map((r) => r.jobReference).join(', ')})`,
-        heading: `A note about your measurements, ${rows[0].customerName}`,
-        paragraphs: [
-          `On ${review.foundOn} we found that ${review.asset!.assetTag}, an instrument used on your job(s) ${rows.map((r) => `${r.jobReference} (${r.startsOn} to ${r.endsOn})`).join(', ')}, was out of tolerance.`,
-          `We are reviewing whether this affects the results we gave you and will tell you what we find. If a re-measurement is needed we will arrange it with you.`,
-        ],
+        ...noticeFor(view, tag, group, rows),
       }));
       if (send) {
         for (const d of drafts) await enqueueMail(tx, [d.to], d);
         await tx.sql(`UPDATE impact_review_items SET notice_queued_at = now() WHERE organization_id = $1 AND review_id = $2 AND booking_id = ANY($3)`, [
           reviewId,
-          bookings.filter((b) => b.contactEmail).map((b) => b.bookingId),
+          view.bookings.filter((b) => b.contactEmail).map((b) => b.bookingId),
         ]);
-        await recordAudit(tx, actor, 'impact_review.notices_sent', { type: 'asset', id: review.assetId }, { reviewId, recipients: drafts.map((d) => d.to) });
+        await recordAudit(
+          tx,
+          actor,
+          'impact_review.notices_sent',
+          { type: 'asset', id: review.assetId },
+          { reviewId, notices: drafts.map((d) => ({ to: d.to, group: d.group, bookings: d.rows.map((r) => r.bookingId) })) },
+        );
       }
-      return { drafts: drafts.map(({ to, customerName, subject, paragraphs }) => ({ to, customerName, subject, text: paragraphs.join('\n\n') })), sent: send };
+      return {
+        drafts: drafts.map((d) => ({
+          to: d.to,
+          customerName: d.customerName,
+          group: d.group,
+          jobReferences: d.rows.map((r) => r.jobReference),
+          subject: d.subject,
+          text: d.paragraphs.join('\n\n'),
+        })),
+        sent: send,
+      };
     });
   }
 }

@@ -31,6 +31,17 @@ export function checksRoutes(checks: ChecksService): Router {
     { method: 'get', path: '/checks/to-do', summary: 'Tip positions without a passing validation in the kit I carry now or next', access: 'fleet.read' },
     ({ actor }) => checks.toDo(actor),
   );
+  endpoint(
+    router,
+    at,
+    {
+      method: 'get',
+      path: '/checks/forecasts',
+      summary: 'Tip positions forecast to reach their limit within the due-soon window (advice: holds nothing)',
+      access: 'fleet.read',
+    },
+    ({ actor }) => checks.forecastsSoon(actor),
+  );
   endpoint(router, at, { method: 'get', path: '/checks/:id', summary: 'One field check with inputs and results', access: 'fleet.read' }, ({ actor, params }) =>
     checks.get(actor, params.id),
   );
@@ -39,6 +50,12 @@ export function checksRoutes(checks: ChecksService): Router {
     at,
     { method: 'get', path: '/assets/:id/tip-validation', summary: "A tip's validation state per mounting position", access: 'fleet.read' },
     ({ actor, params }) => checks.tipStatus(actor, params.id),
+  );
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/assets/:id/tip-forecast', summary: "A tip's drift forecast per mounting position (advice: holds nothing)", access: 'fleet.read' },
+    ({ actor, params }) => checks.tipForecast(actor, params.id),
   );
   return router;
 }

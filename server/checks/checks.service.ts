@@ -7,7 +7,7 @@ import { twoFaceErrorUm } from '../../shared/checks/two-face';
 import { expandedUncertainty } from '../../shared/checks/uncertainty';
 import { assetTypeTitles, type AssetType, type TipPosition } from '../../shared/schemas/assets';
 import { checkKindTitles, checkSubjectType, type CheckPayload } from '../../shared/schemas/checks';
-import type { CheckToDo, CheckView, TipValidationStatus } from '../../shared/checks/views';
+import type { CheckToDo, CheckView, TipForecastsView, TipValidationStatus } from '../../shared/checks/views';
 import type { Page } from '../../shared/lists/page';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
@@ -21,6 +21,8 @@ import { calendarDayIn } from '../../shared/calibration/due-date';
 import { enqueueMail, staffAddresses } from '../notifications';
 import { loadOrgContext } from '../organizations';
 import { FieldCheck } from './field-check.entity';
+import { tipForecasts } from './tip-forecasts';
+import { addDays } from '../../shared/calibration/due-date';
 
 const badField = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { [field]: message } });
 
@@ -165,14 +167,14 @@ export class ChecksService {
   /**
    * The technician's to-do: every mounting position of every tip in the kit
    * they carry now or take next (taken by them, or on jobs they lead) without a
-   * passing latest validation — what the booking rules would refuse.
+   * passing latest validation — what the booking rules would refuse — and
+   * every passing one forecast to reach its limit within the due-soon window (advice: it blocks nothing).
    */
   toDo(actor: Actor): Promise<Page<CheckToDo>> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
-      const { today } = await loadOrgContext(tx);
-      return listReply(
-        await tx.sql<CheckToDo>(
-          `SELECT a.id AS "assetId", a.asset_tag AS "assetTag", pos.position, last.decision AS "lastDecision", last.performed_at AS "lastCheckedAt",
+      const ctx = await loadOrgContext(tx);
+      const rows = await tx.sql<Omit<CheckToDo, 'reason' | 'forecastOn'>>(
+        `SELECT a.id AS "assetId", a.asset_tag AS "assetTag", pos.position, last.decision AS "lastDecision", last.performed_at AS "lastCheckedAt",
                   b.id AS "bookingId", to_char(b.starts_on, 'YYYY-MM-DD') AS "startsOn", b.state AS "bookingState"
              FROM bookings b LEFT JOIN jobs j ON j.id = b.job_id
              JOIN booking_items bi ON bi.booking_id = b.id
@@ -183,11 +185,37 @@ export class ChecksService {
                                  ORDER BY fc.performed_at DESC, fc.created_at DESC LIMIT 1) last ON true
             WHERE b.organization_id = $1 AND (b.taken_by_user_id = $2 OR j.lead_technician_id = $2)
               AND (b.state = 'out' OR (b.state = 'reserved' AND b.ends_on >= $3::date))
-              AND coalesce(last.decision, 'none') <> 'pass'
             ORDER BY b.starts_on, a.asset_tag, pos.position`,
-          [actor.userId, today],
-        ),
+        [actor.userId, ctx.today],
       );
+      const passed = rows.filter((r) => r.lastDecision === 'pass');
+      const soon = (await tipForecasts(tx, ctx, [...new Set(passed.map((r) => r.assetId))])).filter((f) => f.failsSoon);
+      return listReply(
+        rows.flatMap((r): CheckToDo[] => {
+          if (r.lastDecision !== 'pass') return [{ ...r, reason: 'not_validated', forecastOn: null }];
+          const f = soon.find((s) => s.assetId === r.assetId && s.position === r.position);
+          return f ? [{ ...r, reason: 'forecast', forecastOn: f.forecast.state === 'forecast' ? f.forecast.reachesOn : null }] : [];
+        }),
+      );
+    });
+  }
+
+  /** Drift forecasts of one tip, per mounting position. */
+  tipForecast(actor: Actor, assetId: string): Promise<TipForecastsView> {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      await getAsset(tx, assetId);
+      const items = await tipForecasts(tx, ctx, [assetId]);
+      return { items, total: items.length, dueSoonDays: ctx.dueSoonDays, until: addDays(ctx.today, ctx.dueSoonDays) };
+    });
+  }
+
+  /** Tips forecast to reach their limit within the due-soon window, or already past it (the owner's review and home). */
+  forecastsSoon(actor: Actor): Promise<TipForecastsView> {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const ctx = await loadOrgContext(tx);
+      const items = (await tipForecasts(tx, ctx)).filter((f) => f.failsSoon);
+      return { items, total: items.length, dueSoonDays: ctx.dueSoonDays, until: addDays(ctx.today, ctx.dueSoonDays) };
     });
   }
 

@@ -1,4 +1,5 @@
 import { DEFAULT_DUE_SOON_DAYS, todayIn } from '../../shared/calibration/due-date';
+import { DEFAULT_TRIAGE_RATIO } from '../../shared/calibration/triage';
 import { defaultIntervalPolicy, type IntervalPolicy } from '../../shared/calibration/interval-review';
 import type { DecisionRule } from '../../shared/checks/decision';
 import type { Tolerance } from '../../shared/checks/tolerance';
@@ -16,6 +17,7 @@ export type OrgContext = {
   dueSoonDays: number;
   today: string;
   decisionRule: DecisionRule;
+  triageRatio: number;
   tolerances: Record<CheckKind, Tolerance>;
   providers: CalibrationProvider[];
   intervalPolicy: IntervalPolicy;
@@ -40,6 +42,7 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
     dueSoonDays: org.settings.dueSoonDays ?? DEFAULT_DUE_SOON_DAYS,
     today: todayIn(org.time_zone, now),
     decisionRule: org.settings.decisionRule ?? 'simple',
+    triageRatio: org.settings.triageRatio ?? DEFAULT_TRIAGE_RATIO,
     tolerances: { ...defaultTolerances, ...org.settings.tolerances },
     providers: org.settings.providers ?? [],
     intervalPolicy: { ...defaultIntervalPolicy, ...org.settings.intervalPolicy },

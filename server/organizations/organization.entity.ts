@@ -9,6 +9,8 @@ import type { CheckKind } from '../../shared/schemas/checks';
 export type OrganizationSettings = {
   dueSoonDays: number;
   decisionRule: DecisionRule;
+  /** Impact triage: an as-found error within tolerance ÷ this ratio suggests "no effect likely". */
+  triageRatio: number;
   /** Default tolerance per check kind; an asset may override it. */
   tolerances: Partial<Record<CheckKind, Tolerance>>;
   /** Calibration providers and their usual turnaround in days. */

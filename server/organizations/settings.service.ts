@@ -13,6 +13,7 @@ const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>): OrganizationSett
   currency: ctx.currency,
   dueSoonDays: ctx.dueSoonDays,
   decisionRule: ctx.decisionRule,
+  triageRatio: ctx.triageRatio,
   tolerances: ctx.tolerances,
   taxRateBasisPoints: ctx.taxRateBasisPoints,
   depositPolicy: ctx.depositPolicy,
@@ -30,6 +31,7 @@ export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<type
     const before = { timeZone: org.timeZone, ...org.settings };
     if (patch.timeZone) org.timeZone = patch.timeZone;
     if (patch.dueSoonDays !== undefined) org.settings = { ...org.settings, dueSoonDays: patch.dueSoonDays };
+    if (patch.triageRatio !== undefined) org.settings = { ...org.settings, triageRatio: patch.triageRatio };
     if (patch.decisionRule) org.settings = { ...org.settings, decisionRule: patch.decisionRule };
     if (patch.taxRateBasisPoints !== undefined) org.settings = { ...org.settings, taxRateBasisPoints: patch.taxRateBasisPoints };
     if (patch.depositPolicy) org.settings = { ...org.settings, depositPolicy: patch.depositPolicy };

@@ -11,7 +11,7 @@ import { Hold } from '../holds/hold.entity';
 import { Incident } from '../incidents/incident.entity';
 import { User } from '../users/user.entity';
 
-/** Invented customers of the invented demo firm. */
+/** Invented customers of the invented demo firm, with the tightest tolerance of each job (one left unrecorded). */
 const customers = [
   {
     reference: 'J-2611',
@@ -19,6 +19,7 @@ const customers = [
     contactName: 'Quality office',
     contactEmail: 'quality@larkspur-aero.test',
     siteAddress: 'Hangar 3, Larkspur Field, Wrenhallow',
+    tightestTolerance: { tolerance: { kind: 'fixed' as const, um: 25 }, distanceM: null, note: 'wing-spar bore position ±25 µm' },
   },
   {
     reference: 'J-2614',
@@ -26,6 +27,7 @@ const customers = [
     contactName: 'Inspection lead',
     contactEmail: 'inspection@hollowmere.test',
     siteAddress: 'Bay 7, Hollowmere Road, Ostby',
+    tightestTolerance: { tolerance: { kind: 'range' as const, aUm: 20, bUmPerM: 6 }, distanceM: 4.5, note: 'casing flange profile ±(20 µm + 6 µm/m)' },
   },
   {
     reference: 'J-2620',
@@ -33,6 +35,7 @@ const customers = [
     contactName: 'Works manager',
     contactEmail: 'works@quarrington-rail.test',
     siteAddress: 'Shop 2, Quarrington Sidings',
+    tightestTolerance: { tolerance: { kind: 'fixed' as const, um: 100 }, distanceM: null, note: 'bogie frame pad height ±0.1 mm' },
   },
   {
     reference: 'J-2623',
@@ -40,6 +43,7 @@ const customers = [
     contactName: 'Hull survey',
     contactEmail: 'survey@fenwick-yard.test',
     siteAddress: 'Dry dock 1, Fenwick Quay',
+    tightestTolerance: null,
   },
   {
     reference: 'J-2630',
@@ -47,6 +51,7 @@ const customers = [
     contactName: 'Quality office',
     contactEmail: 'quality@larkspur-aero.test',
     siteAddress: 'Jig hall, Larkspur Field, Wrenhallow',
+    tightestTolerance: { tolerance: { kind: 'fixed' as const, um: 40 }, distanceM: null, note: 'jig pickup position ±40 µm' },
   },
 ];
 
@@ -103,7 +108,7 @@ export async function seedDemoActivity(tx: Scoped, timeZone: string) {
   for (const tip of assets.filter((a) => a.type === 'tip' && a.kitId)) {
     for (const position of (tip.specs.positions as string[]) ?? []) {
       const drifting = tip.assetTag === 'TIP-002' && position === 'vertical';
-      const series = drifting ? [18, 26, 35, 44, 52] : [14, 17, 12];
+      const series = drifting ? [20, 28, 36, 43, 50] : [14, 17, 12]; // TIP-002's trend meets 60 µm about a week from today
       series.forEach((um, i) => validation(tip, position, um, (series.length - i) * 30));
     }
   }

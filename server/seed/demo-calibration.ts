@@ -57,6 +57,7 @@ export async function seedDemoCalibration(tx: Scoped, firm: string, timeZone: st
     performedOn: string,
     asFound: 'in_tolerance' | 'out_of_tolerance',
     history: ('in_tolerance' | 'out_of_tolerance')[],
+    asFoundErrorUm: number | null = null,
   ) => {
     n += 1;
     const number = `${a.calibrationProvider === 'Fenmoor Calibration Lab' ? 'FCL' : 'WGH'}-${performedOn.slice(0, 4)}-${String(1000 + n)}`;
@@ -71,6 +72,7 @@ export async function seedDemoCalibration(tx: Scoped, firm: string, timeZone: st
       certificateNumber: number,
       certificateFileId: file.id,
       asFound,
+      asFoundErrorUm,
       asLeft: 'in_tolerance',
       intervalMonths: interval,
       dueOn: dueDate(performedOn, interval),
@@ -89,9 +91,9 @@ export async function seedDemoCalibration(tx: Scoped, firm: string, timeZone: st
     if (a.assetTag === 'TRK-001') continue;
     await record(a, a.lastCalibratedOn!, 'in_tolerance', ['in_tolerance']);
   }
-  // TRK-001 came back from its last calibration out of tolerance as found: every job since the one before is in question.
+  // TRK-001 came back from its last calibration out of tolerance as found (9.5 µm, invented): every job since the one before is in question.
   const trk = assets.find((a) => a.assetTag === 'TRK-001')!;
-  const oot = await record(trk, trk.lastCalibratedOn!, 'out_of_tolerance', ['in_tolerance']);
+  const oot = await record(trk, trk.lastCalibratedOn!, 'out_of_tolerance', ['in_tolerance'], 9.5);
   await openImpactReview(tx, actor, trk, { trigger: 'calibration', triggerId: oot.id, foundOn: oot.performedOn });
 
   // Two spares at the lab since five days ago.

@@ -3,6 +3,7 @@
  * Plain types, no zod: the browser imports them as types only.
  */
 import type { AssetStatus, AssetType } from '../assets/vocabulary';
+import type { JobTolerance } from '../calibration/triage';
 import type { BookingPurpose, BookingState } from '../schemas/bookings';
 import type { BlockReason } from './rules';
 
@@ -81,6 +82,8 @@ export type SiteJobView = {
   endsOn: string;
   leadTechnicianId: string | null;
   notes: string | null;
+  /** The tightest feature tolerance measured, if recorded (impact triage weighs an instrument's error against it). */
+  tightestTolerance: JobTolerance | null;
 };
 
 /** `POST /api/calendar/token`: the new secret address of the person's calendar feed. */

@@ -4,6 +4,7 @@
  */
 import type { AssetType } from '../assets/vocabulary';
 import type { AsFound, IntervalChange } from './interval-review';
+import type { AsFoundErrorSource, TriageFacts } from './triage';
 
 /** One certificate recorded against an item (`GET /api/assets/:id/calibrations`). */
 export type CalibrationEventView = {
@@ -15,6 +16,8 @@ export type CalibrationEventView = {
   /** Same-origin link to the certificate PDF. */
   certificateUrl: string;
   asFound: AsFound;
+  /** The largest as-found error the certificate states (µm), when recorded. */
+  asFoundErrorUm: number | null;
   asLeft: AsFound;
   intervalMonths: number;
   dueOn: string;
@@ -109,6 +112,12 @@ export type ImpactBookingView = {
   assessment: ImpactAssessment | null;
   note: string | null;
   noticeQueuedAt: string | null;
+  /** The job's tightest tolerance as recorded now (null: none, or a rental). */
+  toleranceNote: string | null;
+  /** Triage from today's records: a suggestion a person accepts or changes. */
+  suggestion: TriageFacts;
+  /** The triage shown when the booking was assessed, kept for the auditor (null until assessed). */
+  triage: TriageFacts | null;
 };
 
 export type ImpactReviewView = {
@@ -122,10 +131,23 @@ export type ImpactReviewView = {
   state: 'open' | 'closed';
   bookings: ImpactBookingView[];
   assessedCount: number;
+  /** The instrument's as-found error the triage uses: the certificate's recorded value or the failing check's result. */
+  asFound: { errorUm: number | null; source: AsFoundErrorSource };
+  /** The firm's triage ratio today. */
+  triageRatio: number;
+  /** Bookings assessed "re-measure offered", or not yet assessed with "re-measure advised" suggested. */
+  remeasureCount: number;
 };
 
 /** `GET /api/assets/:id/impact`: the item's latest review, or `state: 'none'` when it never had one. */
 export type AssetImpactView = ImpactReviewView | { state: 'none'; bookings: []; since: null; foundOn: null };
 
 /** `POST /api/impact-reviews/:id/notices`: one draft per customer with an e-mail address; `sent` when they were queued. */
-export type ImpactNoticesView = { drafts: { to: string; customerName: string | null; subject: string; text: string }[]; sent: boolean };
+/** Which notice a booking's customer gets: by its assessment, `pending` while not assessed. */
+export type NoticeGroup = ImpactAssessment | 'pending';
+
+/** `POST /api/impact-reviews/:id/notices`: one draft per customer and group with an e-mail address; `sent` when they were queued. */
+export type ImpactNoticesView = {
+  drafts: { to: string; customerName: string | null; group: NoticeGroup; jobReferences: string[]; subject: string; text: string }[];
+  sent: boolean;
+};

@@ -1,6 +1,7 @@
 /** What the field-checks API answers. Plain types, no zod: the browser imports them as types only. */
 import type { TipPosition } from '../assets/vocabulary';
 import type { Decision, DecisionRule } from './decision';
+import type { DriftForecast } from './drift-forecast';
 import type { Point } from './geometry';
 import type { Tolerance } from './tolerance';
 
@@ -62,8 +63,14 @@ export type TipValidationStatus = {
   positions: { position: TipPosition; state: TipValidationState; lastCheckId: string | null; lastPerformedAt: string | null }[];
 };
 
-/** `GET /api/checks/to-do`: a tip position in kit I carry now or next whose latest validation did not pass (or never happened). */
+/**
+ * `GET /api/checks/to-do`: a tip position in kit I carry now or next whose latest validation did not pass (or never
+ * happened), or that passed but is forecast to reach its limit within the due-soon window (`forecastOn`).
+ */
 export type CheckToDo = {
+  reason: 'not_validated' | 'forecast';
+  /** The forecast day it reaches its limit (null: not a forecast item, or already past). */
+  forecastOn: string | null;
   assetId: string;
   assetTag: string;
   position: TipPosition;
@@ -73,3 +80,9 @@ export type CheckToDo = {
   startsOn: string;
   bookingState: 'out' | 'reserved';
 };
+
+/** A tip position's drift forecast; `failsSoon` when it reaches its limit within the firm's due-soon window (or is past it). Advice only. */
+export type TipForecastView = { assetId: string; assetTag: string; position: TipPosition; forecast: DriftForecast; failsSoon: boolean };
+
+/** `GET /api/assets/:id/tip-forecast` and `GET /api/checks/forecasts`: forecasts, with the window they were judged against. */
+export type TipForecastsView = { items: TipForecastView[]; total: number; dueSoonDays: number; until: string };

@@ -22,6 +22,8 @@ export type OrganizationSettingsView = {
   dueSoonDays: number;
   /** ILAC-G8 decision rule for field checks. */
   decisionRule: DecisionRule;
+  /** Impact triage: an as-found error within a job's tolerance ÷ this ratio suggests "no effect likely" (default 4, common practice). */
+  triageRatio: number;
   /** The firm's tolerance per check kind. */
   tolerances: Record<CheckKind, Tolerance>;
   /** Tax on rentals in basis points (1 % = 100). */

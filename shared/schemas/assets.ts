@@ -156,6 +156,7 @@ export const organizationSettingsPayload = z
       taxNumber: text(40),
       paymentTerms: text(600),
     }),
+    triageRatio: z.number({ message: 'must be a number' }).min(1, 'must be at least 1 (1:1)').max(20, 'must be at most 20 (20:1)'),
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
     /** Owners and billing clerks must sign in with a second step (TOTP). */
     secondStepRequired: z.boolean(),

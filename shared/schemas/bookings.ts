@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { assetTypes } from '../assets/vocabulary';
+import { tolerancePayload } from './check-kinds';
 import { calendarDate, emailAddress, text } from './common';
 
 export const bookingStates = ['reserved', 'out', 'returned', 'cancelled'] as const;
@@ -66,6 +67,15 @@ export const availabilityQuery = z
   })
   .refine((b) => b.startsOn <= b.endsOn, { message: 'must be on or after the start', path: ['endsOn'] });
 
+/** A job's tightest feature tolerance: ± µm, or A + B·L with the distance the job measured at. */
+export const jobTolerancePayload = z
+  .object({
+    tolerance: tolerancePayload,
+    distanceM: z.number().min(0, 'cannot be negative').max(1000, 'is beyond a kilometre').nullable().optional(),
+    note: text(200).nullable().optional(),
+  })
+  .refine((t) => t.tolerance.kind === 'fixed' || t.distanceM != null, { message: 'is needed for an A + B·L tolerance', path: ['distanceM'] });
+
 export const jobPayload = z
   .object({
     reference: text(40).min(1, 'is required'),
@@ -80,5 +90,6 @@ export const jobPayload = z
     endsOn: calendarDate,
     leadTechnicianId: z.uuid('is not a user id').nullable().optional(),
     notes: text(4000).nullable().optional(),
+    tightestTolerance: jobTolerancePayload.nullable().optional(),
   })
   .refine((b) => b.startsOn <= b.endsOn, { message: 'must be on or after the start', path: ['endsOn'] });

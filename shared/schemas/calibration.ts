@@ -9,6 +9,11 @@ export const calibrationEventFields = z.object({
   provider: text(120).min(1, 'is required'),
   certificateNumber: text(80).min(1, 'is required'),
   asFound: z.enum(asFoundResults, { message: `must be one of ${asFoundResults.join(', ')}` }),
+  /** The largest as-found error the certificate states, in µm (multipart: a blank field is none). */
+  asFoundErrorUm: z.preprocess(
+    (v) => (v === '' || v === null ? undefined : v),
+    z.coerce.number({ message: 'must be a number of micrometres' }).min(0, 'cannot be negative').max(100_000).optional(),
+  ),
   asLeft: z.enum(asFoundResults, { message: `must be one of ${asFoundResults.join(', ')}` }),
   intervalMonths: z.coerce.number().int('must be a whole number of months').min(1).max(120).optional(),
   note: text(2000).optional(),

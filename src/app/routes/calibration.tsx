@@ -13,6 +13,7 @@ import { AtLabList } from '../../features/calibration/components/at-lab-list';
 import { DueGrid } from '../../features/calibration/components/due-grid';
 import { DueTimeline } from '../../features/calibration/components/due-timeline';
 import { ImpactReviewLinks } from '../../features/calibration/components/impact-review-links';
+import { TipsForecastToFail } from '../../features/checks/components/drift-forecast';
 import { formatCalendarDate } from '../../lib/format';
 import { can } from '../../lib/roles';
 
@@ -155,6 +156,7 @@ export default function CalibrationReviewRoute() {
             <ImpactReviewLinks reviews={r.impactReviews} />
           </Panel>
         </div>
+        <TipsForecastToFail />
       </div>
     </>
   );

@@ -8,6 +8,7 @@ import { MyKitPanels, TodayAtCounter } from '../../features/bookings/components/
 import { OpenImpactReviews } from '../../features/calibration/components/impact-review-links';
 import { RecalibrationsDue } from '../../features/fleet/components/due-list';
 import { ChecksToDo } from '../../features/checks/components/checks-to-do';
+import { TipsForecastToFail } from '../../features/checks/components/drift-forecast';
 import { HeldItems } from '../../features/fleet/components/held-list';
 import { KitUsePanel } from '../../features/billing/components/kit-use-panel';
 import { UnpaidInvoices } from '../../features/billing/components/unpaid-invoices';
@@ -69,7 +70,18 @@ const homes: Record<Role, RoleHome> = {
       { title: 'Today at the counter', body: null, live: () => <TodayAtCounter /> },
       { title: 'On hold', body: null, live: () => <HeldItems /> },
       { title: 'Open incidents', body: null, live: () => <OpenIncidents /> },
-      { title: 'Open impact reviews', body: null, live: () => <OpenImpactReviews /> },
+      {
+        title: 'Looking ahead',
+        body: null,
+        // One panel: open impact reviews with their re-measures, then tips whose trend reaches the limit soon (advice only).
+        live: () => (
+          <OpenImpactReviews title="Looking ahead: impact reviews and tip trends">
+            <div className="mt-3 [&>section]:border-0 [&>section]:p-0">
+              <TipsForecastToFail level={3} />
+            </div>
+          </OpenImpactReviews>
+        ),
+      },
       { title: 'Use and revenue per kit', body: null, live: () => <OwnerKitUse /> },
     ],
     links: [

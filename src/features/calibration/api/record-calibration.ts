@@ -12,6 +12,8 @@ export interface RecordCalibrationInput {
   provider: string;
   certificateNumber: string;
   asFound: AsFound;
+  /** The largest as-found error the certificate states (µm), if it states one. */
+  asFoundErrorUm?: number;
   asLeft: AsFound;
   intervalMonths?: number;
   note?: string;
@@ -24,6 +26,7 @@ export function recordCalibration(input: RecordCalibrationInput, onProgress?: (f
   form.set('provider', input.provider);
   form.set('certificateNumber', input.certificateNumber);
   form.set('asFound', input.asFound);
+  if (input.asFoundErrorUm !== undefined) form.set('asFoundErrorUm', String(input.asFoundErrorUm));
   form.set('asLeft', input.asLeft);
   if (input.intervalMonths !== undefined) form.set('intervalMonths', String(input.intervalMonths));
   if (input.note) form.set('note', input.note);

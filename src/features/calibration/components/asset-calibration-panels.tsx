@@ -33,6 +33,7 @@ export function CalibrationHistory({ assetId, className = '' }: { assetId: strin
               <div className="flex flex-wrap items-center gap-2">
                 <ResultChip stage="As found" result={e.asFound} />
                 <ResultChip stage="As left" result={e.asLeft} />
+                {e.asFoundErrorUm !== null ? <span className="font-mono text-sm">as-found error {e.asFoundErrorUm.toFixed(1)} µm</span> : null}
               </div>
               <p className="text-sm text-ink-700">
                 Interval {months(e.intervalMonths)} · due {formatCalendarDate(effectiveDueOn(e))}

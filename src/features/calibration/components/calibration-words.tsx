@@ -2,7 +2,8 @@ import { StatusChip, type StatusTone } from '../../../components/status-chip';
 import { dueDate } from '../../../lib/calibration';
 import { formatCalendarDate } from '../../../lib/format';
 import type { AsFound } from '../../../../shared/calibration/interval-review';
-import type { CalibrationEventView, ImpactAssessment, LabTripState } from '../../../../shared/calibration/views';
+import type { TriageSuggestion } from '../../../../shared/calibration/triage';
+import type { CalibrationEventView, ImpactAssessment, LabTripState, NoticeGroup } from '../../../../shared/calibration/views';
 
 /** As-found and as-left results in plain words, the order of the choices. */
 export const resultWords: Record<AsFound, string> = {
@@ -64,3 +65,23 @@ export function effectiveDueOn(event: CalibrationEventView): string {
     ? dueDate(event.performedOn, event.suggestedIntervalMonths)
     : event.dueOn;
 }
+
+export const suggestionWords: Record<TriageSuggestion, string> = {
+  no_effect_likely: 'No effect likely',
+  remeasure_advised: 'Re-measure advised',
+  cannot_judge: 'Cannot judge',
+};
+const suggestionTones: Record<TriageSuggestion, StatusTone> = { no_effect_likely: 'ok', remeasure_advised: 'bad', cannot_judge: 'none' };
+
+/** "Suggested: Re-measure advised" — advice, worded apart from the assessment a person records. */
+export function SuggestionChip({ suggestion, prefix = 'Suggested' }: { suggestion: TriageSuggestion; prefix?: string }) {
+  return <StatusChip tone={suggestionTones[suggestion]} label={`${prefix}: ${suggestionWords[suggestion]}`} />;
+}
+
+/** Which notice a customer gets, by the booking's assessment. */
+export const noticeGroupWords: Record<NoticeGroup, string> = {
+  no_effect: 'No effect likely: results stand',
+  remeasure_offered: 'Re-measure proposed',
+  customer_notified: 'Cannot judge: tolerance asked for',
+  pending: 'Not assessed yet: review under way',
+};

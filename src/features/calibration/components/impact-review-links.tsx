@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
@@ -7,7 +8,7 @@ import { useImpactReviews } from '../api/get-impact-reviews';
 import type { ImpactReviewSummary } from '../../../../shared/calibration/views';
 
 /** Open impact reviews as links, with how far each has got. */
-export function ImpactReviewLinks({ reviews }: { reviews: ImpactReviewSummary[] }) {
+export function ImpactReviewLinks({ reviews }: { reviews: (ImpactReviewSummary & { remeasure?: number })[] }) {
   if (!reviews.length) return <p className="text-sm text-ink-700">No impact review is open.</p>;
   return (
     <ul className="flex flex-col divide-y divide-paper-line">
@@ -16,7 +17,8 @@ export function ImpactReviewLinks({ reviews }: { reviews: ImpactReviewSummary[] 
           <Link to={`/calibration/impact/${r.assetId}`} className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-1 px-1 py-1.5 hover:bg-brass-wash">
             <span className="font-mono font-semibold text-ink-900">Impact review: {r.assetTag}</span>
             <span className="text-sm text-ink-700">found {formatCalendarDate(r.foundOn)}</span>
-            <span className="ml-auto">
+            <span className="ml-auto flex flex-wrap gap-1">
+              {r.remeasure ? <StatusChip tone="bad" label={`${r.remeasure} to re-measure`} /> : null}
               <StatusChip tone={r.assessed === r.bookings ? 'ok' : 'warn'} label={`${r.assessed} of ${r.bookings} assessed`} />
             </span>
           </Link>
@@ -26,15 +28,15 @@ export function ImpactReviewLinks({ reviews }: { reviews: ImpactReviewSummary[] 
   );
 }
 
-/** The owner's home panel: how many impact reviews are open, and links to each. */
-export function OpenImpactReviews() {
+/** The owner's home: how many impact reviews are open, links to each with how many bookings need a re-measure; `children` go below in the same panel. */
+export function OpenImpactReviews({ title = 'Open impact reviews', children }: { title?: string; children?: ReactNode }) {
   const open = useImpactReviews('open');
   const count = open.data?.items.length;
   return (
     <section aria-labelledby="open-impact-heading" className="rounded-lg border border-paper-line bg-card p-4">
       <div className="mb-2 flex items-baseline justify-between gap-2">
         <h2 id="open-impact-heading" className="text-base font-semibold text-ink-900">
-          Open impact reviews
+          {title}
         </h2>
         {count !== undefined ? <span className="text-sm text-ink-700">{count === 0 ? 'none' : formatCount(count)}</span> : null}
       </div>
@@ -50,6 +52,7 @@ export function OpenImpactReviews() {
               foundOn: r.foundOn,
               bookings: r.bookings.length,
               assessed: r.assessedCount,
+              remeasure: r.remeasureCount,
             }))}
           />
         ) : (
@@ -58,6 +61,7 @@ export function OpenImpactReviews() {
           </p>
         )
       ) : null}
+      {children}
     </section>
   );
 }

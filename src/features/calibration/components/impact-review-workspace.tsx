@@ -9,7 +9,9 @@ import { useAssessImpactBooking } from '../api/assess-impact-booking';
 import { useCloseImpactReview } from '../api/close-impact-review';
 import { useCreateImpactNotices } from '../api/create-impact-notices';
 import type { ImpactAssessment, ImpactBookingView, ImpactNoticesView, ImpactReviewView } from '../../../../shared/calibration/views';
-import { assessmentChoices, assessmentWords, dateRange } from './calibration-words';
+import { assessmentForSuggestion, allowanceWords, type TriageFacts } from '../../../../shared/calibration/triage';
+import { useAcceptImpactSuggestions } from '../api/accept-impact-suggestions';
+import { assessmentChoices, assessmentWords, dateRange, noticeGroupWords, SuggestionChip } from './calibration-words';
 
 /** "Every job that used TRK-001 between its last passing evidence on … and the finding on …" */
 export function impactScope(review: ImpactReviewView, tag: string): string {
@@ -18,6 +20,24 @@ export function impactScope(review: ImpactReviewView, tag: string): string {
   return review.since
     ? `Every job that used ${tag} between its last passing evidence on ${formatCalendarDate(review.since)} and the finding on ${found} (${how}) is listed below.`
     : `Every job that used ${tag} up to the finding on ${found} (${how}) is listed below: no earlier passing evidence is on record.`;
+}
+
+/** The suggestion and its numbers; once assessed, the triage kept with the assessment. */
+function Triage({ booking }: { booking: ImpactBookingView }) {
+  const shown: TriageFacts = booking.triage ?? booking.suggestion;
+  const followed = booking.assessment && booking.triage ? assessmentForSuggestion[booking.triage.suggestion] === booking.assessment : null;
+  return (
+    <div className="flex flex-col gap-1 text-sm">
+      <p className="flex flex-wrap items-center gap-2">
+        <SuggestionChip suggestion={shown.suggestion} prefix={booking.triage ? 'Suggested then' : 'Suggested'} />
+        {followed === false ? <span className="text-ink-700">changed by a person</span> : null}
+      </p>
+      <p className="text-ink-700">
+        {shown.toleranceNote ? <span className="font-semibold text-ink-900">{shown.toleranceNote}. </span> : null}
+        {shown.reason}
+      </p>
+    </div>
+  );
 }
 
 function BookingAssessment({ review, booking, canAssess }: { review: ImpactReviewView; booking: ImpactBookingView; canAssess: boolean }) {
@@ -42,6 +62,7 @@ function BookingAssessment({ review, booking, canAssess }: { review: ImpactRevie
         </p>
         <p>{booking.customerName ?? (booking.rentalId ? 'Rental customer' : 'In-house')}</p>
         <p className="text-sm text-ink-700">{dateRange(booking.startsOn, booking.endsOn)}</p>
+        <Triage booking={booking} />
         <p className="text-sm text-ink-700">
           {booking.contactEmail ? `Contact: ${booking.contactEmail}` : 'No contact e-mail on the job: tell the customer another way.'}
           {booking.noticeQueuedAt ? ` · Notice queued ${formatDateTime(booking.noticeQueuedAt)}` : ''}
@@ -93,9 +114,12 @@ function Drafts({ drafts }: { drafts: ImpactNoticesView['drafts'] }) {
   return (
     <ul className="flex flex-col gap-3">
       {drafts.map((d) => (
-        <li key={d.to} className="rounded-md border border-paper-line p-3">
+        <li key={`${d.to}-${d.group}`} className="rounded-md border border-paper-line p-3">
           <p className="text-sm">
             <span className="font-semibold">To:</span> {d.customerName ? `${d.customerName} <${d.to}>` : d.to}
+          </p>
+          <p className="text-sm">
+            <span className="font-semibold">Notice:</span> {noticeGroupWords[d.group]} ({d.jobReferences.join(', ')})
           </p>
           <p className="text-sm">
             <span className="font-semibold">Subject:</span> {d.subject}
@@ -107,10 +131,37 @@ function Drafts({ drafts }: { drafts: ImpactNoticesView['drafts'] }) {
   );
 }
 
+/** What the triage weighs and by which rule, so the owner (and later an auditor) reads why each suggestion was made. */
+function TriageRule({ review }: { review: ImpactReviewView }) {
+  const { errorUm, source } = review.asFound;
+  const from = source === 'certificate' ? "the certificate's as-found value" : "the failing check's result";
+  return (
+    <div className="mb-3 rounded-md border border-paper-line bg-paper p-3 text-sm">
+      <p>
+        <span className="font-semibold">As-found error: </span>
+        {errorUm === null ? `not recorded (${from} is missing), so no booking can be judged from the records.` : `${errorUm.toFixed(1)} µm, from ${from}.`}
+      </p>
+      <p>
+        <span className="font-semibold">Rule: </span>
+        an error within {allowanceWords(review.triageRatio)} of a job&apos;s tightest tolerance (a {review.triageRatio}:1 ratio, set in Settings) suggests no
+        effect; more suggests a re-measure; without a tolerance or an as-found value we cannot judge. Both figures are taken to 0.1 µm, half to even. The
+        suggestion advises: you decide each booking.
+      </p>
+      {review.remeasureCount > 0 ? (
+        <p className="mt-1 font-semibold">
+          {review.remeasureCount} {review.remeasureCount === 1 ? 'booking needs' : 'bookings need'} a re-measure.
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
 /** Work through an impact review: assess each booking, draft and send the customer notices, close. */
 export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: ImpactReviewView; tag: string; canAssess: boolean }) {
   const notices = useCreateImpactNotices(review.assetId);
   const close = useCloseImpactReview();
+  const accept = useAcceptImpactSuggestions();
+  const unassessed = review.bookings.filter((b) => !b.assessment).length;
   const total = review.bookings.length;
   const done = review.assessedCount;
   const open = review.state === 'open';
@@ -129,6 +180,22 @@ export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: Impa
         >
           <div className="h-full bg-ok" style={{ width: `${total ? (done / total) * 100 : 100}%` }} />
         </div>
+        <TriageRule review={review} />
+        {canAssess && open && unassessed > 0 ? (
+          <div className="mb-3 flex flex-wrap items-center gap-3">
+            <Button variant="primary" busy={accept.isPending} onClick={() => accept.mutate(review.id)}>
+              Accept the suggested triage
+            </Button>
+            <span className="text-sm text-ink-700">
+              For the {unassessed} {unassessed === 1 ? 'booking' : 'bookings'} not yet assessed. You can change any of them afterwards.
+            </span>
+            {accept.isError ? (
+              <Notice tone="error" className="w-full">
+                {accept.error.message}
+              </Notice>
+            ) : null}
+          </div>
+        ) : null}
         {total === 0 ? <p className="text-ink-700">No job or rental used it in that time: nothing to assess.</p> : null}
         <ul className="flex flex-col gap-2">
           {review.bookings.map((b) => (
@@ -140,7 +207,8 @@ export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: Impa
       {canAssess ? (
         <Panel title="Customer notices">
           <p className="mb-3 text-sm text-ink-700">
-            One notice per customer with a contact e-mail. Draft them to read first; sending queues them in the outbox.
+            One notice per customer and assessment, for customers with a contact e-mail: it says what was found and what we propose. Draft them to read first;
+            sending queues them in the outbox.
           </p>
           <div className="mb-3 flex flex-wrap gap-2">
             <Button

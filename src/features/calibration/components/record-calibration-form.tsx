@@ -22,6 +22,7 @@ interface Values {
   provider: string;
   certificateNumber: string;
   asFound: AsFound | '';
+  asFoundErrorUm: string;
   asLeft: AsFound | '';
   intervalMonths: string;
   note: string;
@@ -42,6 +43,11 @@ function schemaFor(today: string) {
     provider: Yup.string().trim().required('Name the lab that calibrated it.').max(120, 'Keep the lab’s name under 120 characters.'),
     certificateNumber: Yup.string().trim().required('Enter the number printed on the certificate.').max(80, 'Keep the number under 80 characters.'),
     asFound: Yup.string().required('Choose what the lab found before adjusting it.'),
+    asFoundErrorUm: Yup.string().test(
+      'micrometres',
+      'Enter the error in micrometres, e.g. 9.5, or leave it empty.',
+      (v) => !v?.trim() || (Number.isFinite(Number(v)) && Number(v) >= 0),
+    ),
     asLeft: Yup.string().required('Choose how the lab left it.'),
     intervalMonths: Yup.string().test('months', 'Enter whole months from 1 to 120, or leave it empty to keep the plan’s.', (v) => !v?.trim() || isInterval(v)),
     note: Yup.string().max(2000, 'Keep the note under 2,000 characters.'),
@@ -124,6 +130,7 @@ export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetV
         provider: asset.calibration.provider ?? '',
         certificateNumber: '',
         asFound: '',
+        asFoundErrorUm: '',
         asLeft: '',
         intervalMonths: String(planMonths),
         note: '',
@@ -140,6 +147,7 @@ export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetV
             provider: values.provider.trim(),
             certificateNumber: values.certificateNumber.trim(),
             asFound: values.asFound as AsFound,
+            asFoundErrorUm: values.asFoundErrorUm.trim() ? Number(values.asFoundErrorUm) : undefined,
             asLeft: values.asLeft as AsFound,
             intervalMonths: values.intervalMonths.trim() ? Number(values.intervalMonths) : undefined,
             note: values.note.trim() || undefined,
@@ -149,7 +157,7 @@ export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetV
         } catch (error) {
           setProblem(
             applyServerErrors(error, helpers, {
-              fields: ['performedOn', 'provider', 'certificateNumber', 'asFound', 'asLeft', 'intervalMonths', 'note', 'certificate'],
+              fields: ['performedOn', 'provider', 'certificateNumber', 'asFound', 'asFoundErrorUm', 'asLeft', 'intervalMonths', 'note', 'certificate'],
               byCode: {
                 unsupported_type: 'certificate',
                 too_large: 'certificate',
@@ -184,6 +192,12 @@ export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetV
             <Field name="intervalMonths" label="Interval (months)" inputMode="numeric" hint={`The plan says ${planMonths} months.`} />
             <SelectField name="asFound" label="As found" options={resultOptions} hint="Its state when it reached the lab, before any adjustment." />
             <SelectField name="asLeft" label="As left" options={resultOptions} hint="Its state when it left the lab." />
+            <Field
+              name="asFoundErrorUm"
+              label="Largest as-found error (µm)"
+              inputMode="decimal"
+              hint="If the certificate states one. An impact review weighs it against each job's tolerance."
+            />
           </div>
           <div className="flex flex-col gap-1">
             <NoteField />

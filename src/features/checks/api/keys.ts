@@ -14,4 +14,6 @@ export const checksKeys = {
   one: (id: string) => [...checksKeys.all, 'one', id] as const,
   tipValidation: (assetId: string) => [...checksKeys.all, 'tip-validation', assetId] as const,
   toDo: () => [...checksKeys.all, 'to-do'] as const,
+  tipForecast: (assetId: string) => [...checksKeys.all, 'tip-forecast', assetId] as const,
+  forecastsSoon: () => [...checksKeys.all, 'forecasts-soon'] as const,
 };

@@ -6,6 +6,8 @@ import type { AssetView } from '../../../../shared/assets/views';
 import { formatCount, useDateFormat } from '../../../lib/format';
 import { useChecks } from '../api/get-checks';
 import { useTipValidation } from '../api/get-tip-validation';
+import { useTipForecast } from '../api/get-tip-forecast';
+import { TipForecastNotes } from './drift-forecast';
 import type { CheckView } from '../../../../shared/checks/views';
 import { checkKindWords, positionWords, um } from './check-words';
 import { DecisionMark } from './decision-mark';
@@ -20,6 +22,7 @@ export function AssetChecks({ asset, className = '' }: { asset: AssetView; class
   const isTip = asset.type === 'tip';
   const checks = useChecks({ assetId: asset.id, limit: 100, offset: 0 });
   const tipStatus = useTipValidation(asset.id, { enabled: isTip });
+  const forecast = useTipForecast(asset.id, { enabled: isTip });
   const tipChecks = (checks.data?.items ?? []).filter((c): c is Extract<CheckView, { kind: 'tip_validation' }> => c.kind === 'tip_validation');
 
   return (
@@ -30,7 +33,9 @@ export function AssetChecks({ asset, className = '' }: { asset: AssetView; class
           {tipStatus.data ? <TipValidationStates status={tipStatus.data} dateTime={(v) => dateTime(v)} /> : null}
           {tipStatus.isError ? <Notice tone="error">{tipStatus.error.message}</Notice> : null}
           <h3 className="font-semibold">Largest deviation over time</h3>
-          {checks.data ? <ValidationHistoryChart checks={tipChecks} timeZone={timeZone} /> : null}
+          {checks.data ? <ValidationHistoryChart checks={tipChecks} timeZone={timeZone} forecasts={forecast.data?.items} /> : null}
+          {forecast.data ? <TipForecastNotes forecasts={forecast.data.items} /> : null}
+          {forecast.isError ? <Notice tone="error">{forecast.error.message}</Notice> : null}
         </div>
       ) : null}
       {checks.isPending ? <LoadingPanel label="Loading checks…" /> : null}

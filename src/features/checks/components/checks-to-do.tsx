@@ -3,9 +3,10 @@ import { CountedSection } from '../../../components/counted-section';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { StatusChip } from '../../../components/status-chip';
+import { formatCalendarDate } from '../../../lib/format';
 import { useChecksToDo } from '../api/get-checks-to-do';
 
-/** The technician's home panel: tip positions to validate before the kit may go (or go on) out. */
+/** The technician's home panel: tip positions to validate before the kit may go (or go on) out, and ones whose trend says validate again soon. */
 export function ChecksToDo() {
   const todo = useChecksToDo();
   const items = todo.data?.items ?? [];
@@ -26,7 +27,13 @@ export function ChecksToDo() {
             <span className="font-mono font-semibold text-ink-900">{c.assetTag}</span>
             <span className="text-sm text-ink-700">{c.position} position</span>
             <span className="ml-auto shrink-0">
-              {c.lastDecision === 'fail' ? <StatusChip tone="bad" label="Failed last time" /> : <StatusChip tone="warn" label="Never validated" />}
+              {c.reason === 'forecast' ? (
+                <StatusChip tone="info" label={c.forecastOn ? `Forecast to fail about ${formatCalendarDate(c.forecastOn)}` : 'Trend past its limit'} />
+              ) : c.lastDecision === 'fail' ? (
+                <StatusChip tone="bad" label="Failed last time" />
+              ) : (
+                <StatusChip tone="warn" label="Never validated" />
+              )}
             </span>
           </Link>
         </li>

@@ -9,6 +9,8 @@ export interface UpdateSettingsInput {
   dueSoonDays?: number;
   timeZone?: string;
   decisionRule?: DecisionRule;
+  /** Impact triage ratio n (n:1), 1 to 20. */
+  triageRatio?: number;
   tolerances?: Partial<Record<CheckKind, Tolerance>>;
   /** The whole list; it replaces the saved one. */
   providers?: CalibrationProvider[];

@@ -10,7 +10,7 @@ import { useSettingsSave } from '../api/use-settings-save';
 const kinds = Object.keys(checkKindWords) as CheckKind[];
 
 type ToleranceValues = { kind: 'fixed' | 'range'; um: string; aUm: string; bUmPerM: string };
-type Values = { decisionRule: DecisionRule; tolerances: Record<CheckKind, ToleranceValues> };
+type Values = { decisionRule: DecisionRule; triageRatio: string; tolerances: Record<CheckKind, ToleranceValues> };
 
 const num = (v: string) => Number(v.trim().replace(',', '.'));
 const isNum = (v: string | undefined) => !!v && v.trim() !== '' && Number.isFinite(num(v));
@@ -33,6 +33,7 @@ const toleranceSchema = Yup.object({
 
 const schema = Yup.object({
   decisionRule: Yup.string().oneOf(['simple', 'guarded']),
+  triageRatio: Yup.string().test('ratio', 'Enter a ratio from 1 to 20, e.g. 4 for 4:1.', (v) => isNum(v) && num(v!) >= 1 && num(v!) <= 20),
   tolerances: Yup.object(Object.fromEntries(kinds.map((k) => [k, toleranceSchema]))),
 });
 
@@ -96,14 +97,23 @@ export function CheckRulesForm({ settings }: { settings: OrganizationSettingsVie
     <Formik<Values>
       initialValues={{
         decisionRule: settings.decisionRule,
+        triageRatio: String(settings.triageRatio),
         tolerances: Object.fromEntries(kinds.map((k) => [k, toValues(tolerances[k])])) as Record<CheckKind, ToleranceValues>,
       }}
       validationSchema={schema}
       enableReinitialize
       onSubmit={(values, helpers) =>
-        save({ decisionRule: values.decisionRule, tolerances: Object.fromEntries(kinds.map((k) => [k, fromValues(values.tolerances[k])])) }, helpers, {
-          fields: ['decisionRule', ...kinds.flatMap((k) => ['um', 'aUm', 'bUmPerM'].map((f) => `tolerances.${k}.${f}`))],
-        })
+        save(
+          {
+            decisionRule: values.decisionRule,
+            triageRatio: num(values.triageRatio),
+            tolerances: Object.fromEntries(kinds.map((k) => [k, fromValues(values.tolerances[k])])),
+          },
+          helpers,
+          {
+            fields: ['decisionRule', 'triageRatio', ...kinds.flatMap((k) => ['um', 'aUm', 'bUmPerM'].map((f) => `tolerances.${k}.${f}`))],
+          },
+        )
       }
     >
       {({ isSubmitting, dirty }) => (
@@ -124,6 +134,13 @@ export function CheckRulesForm({ settings }: { settings: OrganizationSettingsVie
               hint="A check passes only when its result is within the tolerance less its expanded uncertainty U (the guard band), as ILAC-G8 describes; fewer wrong passes, more wrong fails."
             />
           </fieldset>
+          <Field
+            name="triageRatio"
+            label="Impact triage ratio (n:1)"
+            inputMode="decimal"
+            className="sm:max-w-56"
+            hint="In an impact review, an instrument error within a job's tightest tolerance ÷ this ratio suggests “no effect likely”; more suggests a re-measure. 4:1 is common practice. It advises; the owner decides each booking."
+          />
           <p className="text-sm text-ink-700">
             Tolerances for each kind of check. Use the instrument maker&rsquo;s figures; an item can carry its own values. Lengths in µm; B in µm per metre of
             distance from the tracker.

@@ -20,6 +20,13 @@ interface JobValues {
   endsOn: string;
   leadTechnicianId: string;
   notes: string;
+  /** The tightest feature tolerance: none, ± µm, or A + B·L at a distance. */
+  toleranceKind: '' | 'fixed' | 'range';
+  toleranceUm: string;
+  toleranceAUm: string;
+  toleranceBUmPerM: string;
+  toleranceDistanceM: string;
+  toleranceNote: string;
 }
 
 const fields = Object.keys({
@@ -32,6 +39,12 @@ const fields = Object.keys({
   endsOn: 0,
   leadTechnicianId: 0,
   notes: 0,
+  toleranceKind: 0,
+  toleranceUm: 0,
+  toleranceAUm: 0,
+  toleranceBUmPerM: 0,
+  toleranceDistanceM: 0,
+  toleranceNote: 0,
 } satisfies Record<keyof JobValues, 0>);
 
 const labels: Record<string, string> = {
@@ -41,6 +54,8 @@ const labels: Record<string, string> = {
   startsOn: 'Start',
   endsOn: 'End',
 };
+
+const isNumber = (v: string | undefined) => !!v?.trim() && Number.isFinite(Number(v));
 
 const schema = Yup.object({
   reference: Yup.string().trim().required('Give the job a reference, e.g. J-2611.').max(40, 'Keep the reference to 40 characters.'),
@@ -56,7 +71,54 @@ const schema = Yup.object({
       return !value || !startsOn || value >= startsOn;
     }),
   notes: Yup.string().trim().max(4000, 'Keep the notes to 4000 characters.'),
+  toleranceUm: Yup.string().when('toleranceKind', {
+    is: 'fixed',
+    then: (s) => s.test('um', 'Give the ± tolerance in micrometres, more than 0, e.g. 25.', (v) => isNumber(v) && Number(v) > 0),
+  }),
+  toleranceAUm: Yup.string().when('toleranceKind', {
+    is: 'range',
+    then: (s) => s.test('a', 'Give A in micrometres, 0 or more.', (v) => isNumber(v) && Number(v) >= 0),
+  }),
+  toleranceBUmPerM: Yup.string().when('toleranceKind', {
+    is: 'range',
+    then: (s) => s.test('b', 'Give B in micrometres per metre, 0 or more.', (v) => isNumber(v) && Number(v) >= 0),
+  }),
+  toleranceDistanceM: Yup.string().when('toleranceKind', {
+    is: 'range',
+    then: (s) => s.test('l', 'Say how far from the tracker the job measured (m).', (v) => isNumber(v) && Number(v) >= 0),
+  }),
+  toleranceNote: Yup.string().trim().max(200, 'Keep the note to 200 characters.'),
 });
+
+const toleranceKindOptions = [
+  { value: '', label: 'Not recorded' },
+  { value: 'fixed', label: '± value (µm)' },
+  { value: 'range', label: 'A + B·L at a distance' },
+];
+
+function toleranceValues(job: SiteJobView | undefined): Pick<JobValues, Extract<keyof JobValues, `tolerance${string}`>> {
+  const t = job?.tightestTolerance;
+  return {
+    toleranceKind: t?.tolerance.kind ?? '',
+    toleranceUm: t?.tolerance.kind === 'fixed' ? String(t.tolerance.um) : '',
+    toleranceAUm: t?.tolerance.kind === 'range' ? String(t.tolerance.aUm) : '',
+    toleranceBUmPerM: t?.tolerance.kind === 'range' ? String(t.tolerance.bUmPerM) : '',
+    toleranceDistanceM: t?.distanceM != null ? String(t.distanceM) : '',
+    toleranceNote: t?.note ?? '',
+  };
+}
+
+function tightestTolerance(values: JobValues): SiteJobInput['tightestTolerance'] {
+  const note = orNull(values.toleranceNote);
+  if (values.toleranceKind === 'fixed') return { tolerance: { kind: 'fixed', um: Number(values.toleranceUm) }, distanceM: null, note };
+  if (values.toleranceKind === 'range')
+    return {
+      tolerance: { kind: 'range', aUm: Number(values.toleranceAUm), bUmPerM: Number(values.toleranceBUmPerM) },
+      distanceM: Number(values.toleranceDistanceM),
+      note,
+    };
+  return null;
+}
 
 function toValues(job: SiteJobView | undefined, defaults: Partial<JobValues>): JobValues {
   return {
@@ -69,6 +131,7 @@ function toValues(job: SiteJobView | undefined, defaults: Partial<JobValues>): J
     endsOn: job?.endsOn ?? defaults.endsOn ?? '',
     leadTechnicianId: job?.leadTechnicianId ?? '',
     notes: job?.notes ?? '',
+    ...toleranceValues(job),
   };
 }
 
@@ -115,6 +178,7 @@ export function JobForm({
       endsOn: values.endsOn,
       leadTechnicianId: values.leadTechnicianId || null,
       notes: orNull(values.notes),
+      tightestTolerance: tightestTolerance(values),
     };
     try {
       const saved = job ? await update.mutateAsync({ id: job.id, ...input }) : await create.mutateAsync(input);
@@ -126,7 +190,7 @@ export function JobForm({
 
   return (
     <Formik initialValues={toValues(job, defaults)} validationSchema={schema} onSubmit={submit}>
-      {({ isSubmitting }) => (
+      {({ isSubmitting, values }) => (
         <Form noValidate className="flex flex-col gap-3" aria-label={job ? `Change job ${job.reference}` : 'New job'}>
           {formError ? <Notice tone="error">{formError}</Notice> : null}
           <div className="grid gap-3 sm:grid-cols-2">
@@ -140,6 +204,24 @@ export function JobForm({
             <SelectField name="leadTechnicianId" label="Lead technician" options={leadOptions} />
             <Field name="notes" label="Notes" className="sm:col-span-2" autoComplete="off" />
           </div>
+          <fieldset className="grid gap-3 rounded-md border border-paper-line p-3 sm:grid-cols-2">
+            <legend className="px-1 text-sm font-semibold text-ink-800">Tightest tolerance measured (optional)</legend>
+            <p className="text-sm text-ink-700 sm:col-span-2">
+              If an instrument is later found out of tolerance, the impact review weighs its error against this figure.
+            </p>
+            <SelectField name="toleranceKind" label="Tolerance" options={toleranceKindOptions} />
+            {values.toleranceKind === 'fixed' ? <Field name="toleranceUm" label="± tolerance (µm)" inputMode="decimal" autoComplete="off" /> : null}
+            {values.toleranceKind === 'range' ? (
+              <>
+                <Field name="toleranceAUm" label="A (µm)" inputMode="decimal" autoComplete="off" />
+                <Field name="toleranceBUmPerM" label="B (µm/m)" inputMode="decimal" autoComplete="off" />
+                <Field name="toleranceDistanceM" label="Distance from the tracker (m)" inputMode="decimal" autoComplete="off" />
+              </>
+            ) : null}
+            {values.toleranceKind ? (
+              <Field name="toleranceNote" label="Which feature" hint="e.g. bore position ±25 µm" className="sm:col-span-2" autoComplete="off" />
+            ) : null}
+          </fieldset>
           <div className="flex flex-wrap gap-2">
             <Button type="submit" variant="primary" busy={isSubmitting}>
               {submitLabel ?? (job ? 'Save job' : 'Add job')}

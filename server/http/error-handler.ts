@@ -14,7 +14,6 @@ export const unknownApiRoute: RequestHandler = (req, _res, next) =>
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const known = toAppError(err);
   if (!known) req.log.error({ err }, 'request failed');
-  else if (known.status === 503) req.log.warn({ err }, 'database unreachable');
   // Part of the reply is already on its way: all that is left is to cut it short.
   if (res.headersSent) return void res.destroy();
   // Refused before its body was read (an anonymous upload): close rather than read the rest.

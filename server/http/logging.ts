@@ -36,8 +36,14 @@ export type LogOptions = { level: string; format: 'json' | 'pretty' };
 export function createLogger(options: LogOptions, destination?: DestinationStream): Logger {
   const settings = { level: options.level, base: { pid: process.pid }, redact: { paths: REDACT_PATHS, censor: '[redacted]' } };
   if (destination) return pino(settings, destination);
-  if (options.format === 'pretty')
-    return pino({ ...settings, transport: { target: 'pino-pretty', options: { translateTime: 'SYS:HH:MM:ss', ignore: 'pid' } } });
+  if (options.format === 'pretty') {
+    // One line per request at the terminal: the message, its time and its ref; other fields as pino-pretty shows them.
+    const messageFormat = '{msg}{if ms} · {ms} ms{end}{if requestId} · ref {requestId}{end}';
+    return pino({
+      ...settings,
+      transport: { target: 'pino-pretty', options: { translateTime: 'SYS:HH:MM:ss', ignore: 'pid,hostname,req,res,ms,requestId', messageFormat } },
+    });
+  }
   return pino(settings);
 }
 
@@ -75,7 +81,8 @@ export function requestLogging(logger: Logger): RequestHandler {
     genReqId: requestId,
     quietReqLogger: true,
     customAttributeKeys: { reqId: 'requestId', responseTime: 'ms' },
-    customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
+    // The database being away is the operator's one warning from the watch, not an error per request.
+    customLogLevel: (_req, res, err) => (err || (res.statusCode >= 500 && res.statusCode !== 503) ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
     customSuccessMessage: (req, res) => `${req.method} ${(req as Request).originalUrl?.split('?')[0] ?? req.url} ${res.statusCode}`,
     customErrorMessage: (req, res) => `${req.method} ${(req as Request).originalUrl?.split('?')[0] ?? req.url} ${res.statusCode}`,
     serializers: {

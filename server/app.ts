@@ -12,6 +12,7 @@ import { createPassport } from './auth/passport';
 import { signingKey } from './auth/tokens';
 import type { Config } from './config';
 import { healthRoutes } from './health/health.routes';
+import { backupRoutine } from './backups';
 import { DatabaseWatch } from './db/reachability';
 import { databaseGate } from './http/database-errors';
 import { errorHandler, unknownApiRoute } from './http/error-handler';
@@ -83,7 +84,18 @@ export function buildApp({ config, db, mail, log = createLogger({ level: config.
   const auth = new AuthService(db, users, key);
   const gateway = new PaymentGateway(createPaymentClient(config));
   const deposits = new DepositsService(db, gateway);
-  const routines = new RoutinesService(db, [outboxRoutine(mail, config.MAIL_FROM), lateReturnsRoutine(), dueScanRoutine(), depositRenewalsRoutine(deposits)], {
+  const nightlyBackup = config.NIGHTLY_BACKUP
+    ? [
+        backupRoutine({
+          databaseUrl: config.DATABASE_URL,
+          dir: config.BACKUP_DIR,
+          pgBin: config.PG_BIN,
+          keep: { daily: config.BACKUP_KEEP_DAILY, weekly: config.BACKUP_KEEP_WEEKLY },
+        }),
+      ]
+    : [];
+  const routineList = [outboxRoutine(mail, config.MAIL_FROM), lateReturnsRoutine(), dueScanRoutine(), depositRenewalsRoutine(deposits), ...nightlyBackup];
+  const routines = new RoutinesService(db, routineList, {
     watch,
     log: log.child({ component: 'routines' }),
     onRunFinished: (routine, outcome) => routineRuns.inc({ routine, outcome }),

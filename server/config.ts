@@ -45,7 +45,7 @@ const environment = z.object({
   /** JSON lines for log tools; `pretty` (pino-pretty) is what `npm start` shows a person. */
   LOG_FORMAT: z.enum(['json', 'pretty']).default('json'),
   /** Bearer token for `GET /metrics` from another machine (made per installation by `npm start`); without it only this machine may read them. */
-  METRICS_TOKEN: z.string().min(24, 'must be at least 24 characters').optional(),
+  METRICS_TOKEN: z.preprocess((v) => (v === '' ? undefined : v), z.string().min(24, 'must be at least 24 characters').optional()),
   /** PostgreSQL's client programs (pg_dump, pg_restore) for backups. */
   PG_BIN: z.string().default('/usr/lib/postgresql/15/bin'),
   BACKUP_DIR: z.string().default('.data/backups'),

@@ -5,6 +5,7 @@ import nodemailer from 'nodemailer';
 import type { BrowserContextOptions } from 'playwright-core';
 import { buildApp } from '../../server/app';
 import { readConfig } from '../../server/config';
+import { openDataSource } from '../../server/data-source';
 import { startPaymentFake } from '../../server/fakes/payment-fake';
 import { launchChromium } from './chromium';
 import { WAIT_MS } from './eventually';
@@ -14,9 +15,10 @@ import { webhookSecret } from './test-app';
 /** The real server with the built client on a free loopback port, a seeded
  * database, the payment-provider fake delivering signed webhooks to it, and
  * Debian's Chromium driven by playwright-core. Open pages through `newContext`:
- * its locators and navigations wait with the suite's patience. */
-export async function startBrowserRig() {
+ * its locators and navigations wait with the suite's patience. `reachDatabaseVia` as in createTestApp. */
+export async function startBrowserRig(opts: { reachDatabaseVia?: (url: string) => string } = {}) {
   const database = await createTestDatabase({ seed: true });
+  const appDb = opts.reachDatabaseVia ? await openDataSource(opts.reachDatabaseVia(database.url), 4).initialize() : database.db;
   const secret = webhookSecret();
   const payments = await startPaymentFake({ port: 0, webhookSecret: secret });
   const config = readConfig({
@@ -29,10 +31,11 @@ export async function startBrowserRig() {
     CLIENT_DIR: path.resolve('dist/client'),
     PAYMENT_API_PORT: String(payments.port),
     PAYMENT_WEBHOOK_SECRET: secret,
+    LOG_LEVEL: 'silent',
   });
   if (!fs.existsSync(path.join(config.CLIENT_DIR, 'index.html'))) throw new Error('The client is not built: run the suite with `npm test`.');
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: 9 });
-  const { app } = buildApp({ config, db: database.db, mail });
+  const { app, watch } = buildApp({ config, db: appDb, mail });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -53,6 +56,8 @@ export async function startBrowserRig() {
       server.closeAllConnections();
       await new Promise((r) => server.close(r));
       await payments.close();
+      watch.stop();
+      if (appDb !== database.db && appDb.isInitialized) await appDb.destroy();
       await database.drop();
     },
   };

@@ -80,6 +80,8 @@ export function requestLogging(logger: Logger): RequestHandler {
     logger,
     genReqId: requestId,
     quietReqLogger: true,
+    // The client's hashed bundles are many and say nothing; /metrics still counts them.
+    autoLogging: { ignore: (req) => (req.url ?? '').startsWith('/assets/') },
     customAttributeKeys: { reqId: 'requestId', responseTime: 'ms' },
     // The database being away is the operator's one warning from the watch, not an error per request.
     customLogLevel: (_req, res, err) => (err || (res.statusCode >= 500 && res.statusCode !== 503) ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),

@@ -2,7 +2,7 @@
 // `npm run dev` (--dev): the same database, Vite with hot reload, server in watch mode.
 import { spawn } from 'node:child_process';
 import path from 'node:path';
-import { LOCAL_PG_PORT, installationSecret, localDataDir, projectRoot } from './lib/local-env.mjs';
+import { LOCAL_PG_PORT, installationSecret, localDataDir, localDatabaseName, projectRoot } from './lib/local-env.mjs';
 import { ensurePostgresInstalled, startCluster, stopCluster } from './lib/postgres.mjs';
 import { ensureClientBuild, ensureDatabase, ensureDependencies, log, runTs, waitForHealth } from './lib/steps.mjs';
 
@@ -13,16 +13,19 @@ let clusterDir = null;
 
 async function main() {
   ensureDependencies();
-  const env = { ...process.env, PORT: String(port), NODE_ENV: dev ? 'development' : 'production' };
+  // Log lines for a person at the terminal; set LOG_FORMAT=json for log tools.
+  const env = { LOG_FORMAT: 'pretty', ...process.env, PORT: String(port), NODE_ENV: dev ? 'development' : 'production' };
   if (!env.DATABASE_URL) {
     ensurePostgresInstalled(log);
     clusterDir = localDataDir();
     const serverUrl = startCluster({ dataDir: clusterDir, port: LOCAL_PG_PORT, log });
     log(`PostgreSQL is running on 127.0.0.1:${LOCAL_PG_PORT} (data in ${path.join(clusterDir, 'pgdata')}).`);
-    env.DATABASE_URL = await ensureDatabase(serverUrl, 'nestkeeper');
+    env.DATABASE_URL = await ensureDatabase(serverUrl, localDatabaseName(clusterDir));
     env.JWT_SECRET ??= installationSecret(clusterDir, 'jwt-secret');
     // The local payment fake signs its events with the same secret (server/index.ts hands it over).
     env.PAYMENT_WEBHOOK_SECRET ??= installationSecret(clusterDir, 'payment-webhook-secret', 'whsec_');
+    // A scraper on another machine reads /metrics with this bearer token (this machine may read them without).
+    env.METRICS_TOKEN ??= installationSecret(clusterDir, 'metrics-token');
   }
   if (!env.JWT_SECRET || !env.PAYMENT_WEBHOOK_SECRET) {
     throw new Error(

@@ -16,7 +16,13 @@ import { createPassport } from './auth/passport';
 import { signingKey } from './auth/tokens';
 import type { Config } from './config';
 import { healthRoutes } from './health/health.routes';
+import { backupRoutine } from './backups';
+import { DatabaseWatch } from './db/reachability';
+import { databaseGate } from './http/database-errors';
 import { errorHandler, unknownApiRoute } from './http/error-handler';
+import { createLogger, requestLogging, type Logger } from './http/logging';
+import { Metrics, metricsAccess } from './http/metrics';
+import { registerOperatorGauges } from './operator-metrics';
 import { OLD_JOBS_PATH, ROUTINES_PATH, routinesRoutes } from './routines/routines.routes';
 import { RoutinesService } from './routines/routines.service';
 import { notificationsRoutes } from './notifications/notifications.routes';
@@ -63,17 +69,42 @@ import { incidentsRoutes } from './incidents/incidents.routes';
 import { UsersService } from './users/users.service';
 import { usersRoutes } from './users/users.routes';
 
-export type AppDeps = { config: Config; db: DataSource; mail: Transporter };
+/** `log` defaults to one made from the config (tests hand in their own to read the lines). */
+export type AppDeps = { config: Config; db: DataSource; mail: Transporter; log?: Logger };
 
 /** Builds the Express app and its services; `index.ts` decides when to listen. */
-export function buildApp({ config, db, mail }: AppDeps): { app: Express; routines: RoutinesService } {
+export function buildApp({ config, db, mail, log = createLogger({ level: config.LOG_LEVEL, format: config.LOG_FORMAT }) }: AppDeps): {
+  app: Express;
+  routines: RoutinesService;
+  watch: DatabaseWatch;
+  log: Logger;
+} {
+  const watch = new DatabaseWatch(db, log);
+  const metrics = new Metrics();
+  registerOperatorGauges(metrics, db, watch);
+  const routineRuns = metrics.counter('nestkeeper_routine_runs_total', 'Routine runs on this instance, by routine and outcome', ['routine', 'outcome']);
   const users = new UsersService(db, config.BCRYPT_COST);
   const key = signingKey(config.JWT_SECRET);
   const secondStep = new SecondStep(db, new Sealing(config.JWT_SECRET));
   const auth = new AuthService(db, users, key, secondStep);
   const gateway = new PaymentGateway(createPaymentClient(config));
   const deposits = new DepositsService(db, gateway);
-  const routines = new RoutinesService(db, [outboxRoutine(mail, config.MAIL_FROM), lateReturnsRoutine(), dueScanRoutine(), depositRenewalsRoutine(deposits)]);
+  const nightlyBackup = config.NIGHTLY_BACKUP
+    ? [
+        backupRoutine({
+          databaseUrl: config.DATABASE_URL,
+          dir: config.BACKUP_DIR,
+          pgBin: config.PG_BIN,
+          keep: { daily: config.BACKUP_KEEP_DAILY, weekly: config.BACKUP_KEEP_WEEKLY },
+        }),
+      ]
+    : [];
+  const routineList = [outboxRoutine(mail, config.MAIL_FROM), lateReturnsRoutine(), dueScanRoutine(), depositRenewalsRoutine(deposits), ...nightlyBackup];
+  const routines = new RoutinesService(db, routineList, {
+    watch,
+    log: log.child({ component: 'routines' }),
+    onRunFinished: (routine, outcome) => routineRuns.inc({ routine, outcome }),
+  });
   const publicUrl = config.PUBLIC_URL ?? `http://127.0.0.1:${config.PORT}`;
   const accountLinks = new AccountLinksService(db, users, auth, publicUrl);
   const secureCookies = (config.PUBLIC_URL ?? '').startsWith('https:');
@@ -85,6 +116,8 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
   app.set('trust proxy', config.TRUST_PROXY);
   app.disable('x-powered-by');
   app.locals.passport = createPassport(db, key);
+  app.use(requestLogging(log), metrics.observeRequests);
+  app.get('/metrics', metricsAccess(config.METRICS_TOKEN), metrics.serve);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -103,7 +136,8 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
   app.use(paymentWebhookRoutes(db, gateway, config.PAYMENT_WEBHOOK_SECRET));
   app.use('/api', express.json({ limit: '1mb' }), csrfGuard);
 
-  app.use('/api', healthRoutes(db));
+  app.use('/api', healthRoutes(db, watch));
+  app.use('/api', databaseGate(watch));
   app.use(
     '/api/auth',
     authRoutes(auth, accountLinks, {
@@ -155,5 +189,5 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
   app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
   app.get(/^\/(?!api\/).*/, (_req, res, next) => res.sendFile(path.join(clientDir, 'index.html'), (err) => err && next()));
   app.use(errorHandler);
-  return { app, routines };
+  return { app, routines, watch, log };
 }

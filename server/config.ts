@@ -44,6 +44,21 @@ const environment = z.object({
   /** "Forgot password" requests per hour for one e-mail, and from one address. */
   RESET_REQUESTS_PER_HOUR_PER_EMAIL: z.coerce.number().int().min(1).default(3),
   RESET_REQUESTS_PER_HOUR_PER_ADDRESS: z.coerce.number().int().min(1).default(20),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /** JSON lines for log tools; `pretty` (pino-pretty) is what `npm start` shows a person. */
+  LOG_FORMAT: z.enum(['json', 'pretty']).default('json'),
+  /** Bearer token for `GET /metrics` from another machine (made per installation by `npm start`); without it only this machine may read them. */
+  METRICS_TOKEN: z.preprocess((v) => (v === '' ? undefined : v), z.string().min(24, 'must be at least 24 characters').optional()),
+  /** PostgreSQL's client programs (pg_dump, pg_restore) for backups. */
+  PG_BIN: z.string().default('/usr/lib/postgresql/15/bin'),
+  BACKUP_DIR: z.string().default('.data/backups'),
+  /** The nightly backup routine; `false` where backups are taken another way (WAL archiving, the host's tools). */
+  NIGHTLY_BACKUP: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((v) => v === 'true'),
+  BACKUP_KEEP_DAILY: z.coerce.number().int().min(1).max(366).default(14),
+  BACKUP_KEEP_WEEKLY: z.coerce.number().int().min(0).max(260).default(8),
 });
 
 export type Config = z.infer<typeof environment>;

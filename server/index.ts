@@ -6,6 +6,7 @@ import { buildApp } from './app';
 import { readConfig, type Config } from './config';
 import { openDataSource } from './data-source';
 import { startLocalFakes } from './fakes/local-fakes';
+import { createLogger, type Logger } from './http/logging';
 import { createMailTransport } from './notifications/mail-transport';
 import { createPaymentClient } from './billing/payment-client';
 import { PaymentGateway } from './billing/payment-gateway';
@@ -20,16 +21,17 @@ async function serve(config: Config) {
   const db = await openDataSource(config.DATABASE_URL).initialize();
   const fakes = config.START_LOCAL_FAKES ? await startLocalFakes(config, { paymentWebhookUrl: webhookUrl(config) }) : null;
   const mail = createMailTransport(config);
-  const { app, routines } = buildApp({ config, db, mail });
+  const { app, routines, watch } = buildApp({ config, db, mail, log });
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));
   });
   if (fakes) await restoreLocalAuthorizations(config, db, fakes.paymentPort);
   if (config.RUN_SCHEDULER) routines.start();
-  if (cluster.isPrimary || cluster.worker?.id === 1) console.log(`Nestkeeper is listening on http://${config.HOST}:${config.PORT}`);
+  if (cluster.isPrimary || cluster.worker?.id === 1) log.info(`Nestkeeper is listening on http://${config.HOST}:${config.PORT}`);
 
   onStop(async () => {
     await routines.stop();
+    watch.stop();
     const closed = new Promise((resolve) => server.close(resolve));
     server.closeIdleConnections();
     // Requests still running after ten seconds are cut off.
@@ -52,7 +54,7 @@ async function supervise(config: Config) {
   for (let i = 0; i < config.WEB_CONCURRENCY; i += 1) cluster.fork(workerEnv);
   cluster.on('exit', (worker, code) => {
     if (stopping) return;
-    console.error(`A server worker stopped (exit ${code}); starting another.`);
+    log.error(`A server worker stopped (exit ${code}); starting another.`);
     cluster.fork(workerEnv);
   });
   onStop(async () => {
@@ -74,7 +76,7 @@ async function supervise(config: Config) {
 /** The local payment fake starts empty: place the card authorizations the database still counts on again (server/seed/demo-deposit-authorizations.ts). */
 async function restoreLocalAuthorizations(config: Config, db: DataSource, paymentPort: number) {
   const restored = await restoreAuthorizationsOnLocalFake(db, new PaymentGateway(createPaymentClient(config)), `http://127.0.0.1:${paymentPort}`);
-  if (restored) console.log(`Placed ${restored} open deposit authorization(s) again on the local payment fake.`);
+  if (restored) log.info(`Placed ${restored} open deposit authorization(s) again on the local payment fake.`);
 }
 
 /** Where the local payment fake delivers its signed events. */
@@ -85,12 +87,12 @@ function onStop(stop: () => Promise<void>) {
   const handler = (signal: string) => {
     if (stopping) return;
     stopping = true;
-    if (cluster.isPrimary) console.log(`${signal}: finishing open requests, then stopping.`);
+    if (cluster.isPrimary) log.info(`${signal}: finishing open requests, then stopping.`);
     stop().then(
-      () => process.exit(0),
+      () => log.flush(() => process.exit(0)),
       (err) => {
-        console.error(err);
-        process.exit(1);
+        log.error({ err }, 'stopping failed');
+        log.flush(() => process.exit(1));
       },
     );
   };
@@ -102,11 +104,13 @@ const config = (() => {
   try {
     return readConfig();
   } catch (err) {
-    console.error(err instanceof Error ? err.message : err);
+    // No logger yet: the settings that would make one are what is wrong.
+    process.stderr.write(`${err instanceof Error ? err.message : String(err)}\n`);
     process.exit(1);
   }
 })();
+const log: Logger = createLogger({ level: config.LOG_LEVEL, format: config.LOG_FORMAT });
 (cluster.isPrimary && config.WEB_CONCURRENCY > 1 ? supervise(config) : serve(config)).catch((err) => {
-  console.error(err instanceof Error ? err.message : err);
-  process.exit(1);
+  log.fatal({ err }, err instanceof Error ? err.message : String(err));
+  log.flush(() => process.exit(1));
 });

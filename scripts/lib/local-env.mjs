@@ -33,3 +33,14 @@ export function installationSecret(dataDir, name, prefix = '') {
   if (!fs.existsSync(file)) fs.writeFileSync(file, prefix + randomBytes(48).toString('base64url'), { mode: 0o600 });
   return fs.readFileSync(file, 'utf8').trim();
 }
+
+/** The database the local installation uses: `nestkeeper`, or the one `npm run restore -- <file> --new` switched to. */
+export function localDatabaseName(dataDir) {
+  const file = path.join(dataDir, 'database-name');
+  return fs.existsSync(file) ? fs.readFileSync(file, 'utf8').trim() : 'nestkeeper';
+}
+
+/** Make the next `npm start` use another database of the local cluster. */
+export function switchLocalDatabase(dataDir, name) {
+  fs.writeFileSync(path.join(dataDir, 'database-name'), `${name}\n`);
+}

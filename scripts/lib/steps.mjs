@@ -52,8 +52,8 @@ export function ensureClientBuild() {
 }
 
 /** Run a TypeScript entry with tsx and wait for it. */
-export function runTs(file, env) {
-  const r = spawnSync(process.execPath, ['--import', 'tsx', file], { cwd: projectRoot, stdio: 'inherit', env });
+export function runTs(file, env, args = []) {
+  const r = spawnSync(process.execPath, ['--import', 'tsx', file, ...args], { cwd: projectRoot, stdio: 'inherit', env });
   if (r.status !== 0) throw new Error(`${file} failed (exit ${r.status})`);
 }
 

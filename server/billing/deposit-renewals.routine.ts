@@ -22,7 +22,7 @@ export const depositRenewalsRoutine = (deposits: DepositsService): Routine => ({
   name: 'deposit-renewals',
   description: 'Renews the card authorizations of deposits that would lapse within two days, and says when a card refuses.',
   schedule: '30 5 * * *',
-  run: async ({ db, now, organizationId }) => {
+  run: async ({ db, now, organizationId, log }) => {
     const due: DueAuthorization[] = await db.query(
       `SELECT d.id, d.organization_id, d.rental_id, o.time_zone
          FROM deposit_authorizations d JOIN rentals r ON r.id = d.rental_id JOIN bookings b ON b.id = r.booking_id
@@ -61,7 +61,7 @@ export const depositRenewalsRoutine = (deposits: DepositsService): Routine => ({
         })
         .catch((err: Error) => {
           unreachable += 1;
-          console.error(`[deposit-renewals] card authorization ${row.id}: ${err.message}`);
+          log?.warn({ err, authorizationId: row.id }, 'card authorization not renewed');
         });
     }
     return { due: due.length, renewed, refused, unreachable };

@@ -22,3 +22,9 @@ export function createDataSource(url: string, entities: DataSourceOptions['entit
     extra: { max: poolSize, connectionTimeoutMillis: 10_000 },
   });
 }
+
+/** node-postgres' pool behind a data source: connections open, idle, and requests waiting for one. */
+export function poolUse(db: DataSource): { open: number; idle: number; waiting: number; max: number } {
+  const pool = (db.driver as unknown as { master?: { totalCount: number; idleCount: number; waitingCount: number; options: { max: number } } }).master;
+  return { open: pool?.totalCount ?? 0, idle: pool?.idleCount ?? 0, waiting: pool?.waitingCount ?? 0, max: pool?.options.max ?? 0 };
+}

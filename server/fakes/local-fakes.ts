@@ -2,6 +2,7 @@ import pg from 'pg';
 import type { Config } from '../config';
 import { startPaymentFake } from './payment-fake';
 import { pgSinkStore, startSmtpSink } from './smtp-sink';
+import { fakesLog } from './log';
 
 export type FakesOptions = {
   /** Where both fakes listen; loopback unless a container network needs otherwise. */
@@ -25,10 +26,10 @@ export type RunningFakes = {
 export async function startFakes(opts: FakesOptions): Promise<RunningFakes> {
   const host = opts.host ?? '127.0.0.1';
   const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 2 });
-  pool.on('error', (err) => console.error('[fakes] idle database connection failed', err.message));
+  pool.on('error', (err) => fakesLog.warn({ err }, 'idle database connection of the fakes failed'));
   const closers: Array<() => Promise<void>> = [() => pool.end()];
   const closeAll = async () => {
-    for (const close of closers.reverse()) await close().catch((err) => console.error('[fakes] close failed', err));
+    for (const close of closers.reverse()) await close().catch((err) => fakesLog.error({ err }, 'closing a fake failed'));
     closers.length = 0;
   };
   try {

@@ -2,6 +2,7 @@
 // (the `fakes` service of docker/compose.yaml). Settings from the environment.
 import { z } from 'zod';
 import { startFakes } from './local-fakes';
+import { fakesLog } from './log';
 
 const port = z.coerce.number().int().min(0).max(65535);
 const environment = z.object({
@@ -31,13 +32,13 @@ async function main() {
     paymentWebhookUrl: env.PAYMENT_WEBHOOK_URL,
     paymentWebhookSecret: env.PAYMENT_WEBHOOK_SECRET,
   });
-  console.log(`Nestkeeper fakes: SMTP sink on ${env.FAKES_HOST}:${fakes.smtpPort}, payment provider on http://${env.FAKES_HOST}:${fakes.paymentPort}`);
+  fakesLog.info(`Nestkeeper fakes: SMTP sink on ${env.FAKES_HOST}:${fakes.smtpPort}, payment provider on http://${env.FAKES_HOST}:${fakes.paymentPort}`);
 
   let stopping = false;
   const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
-    console.log(`${signal}: stopping the fakes.`);
+    fakesLog.info(`${signal}: stopping the fakes.`);
     await fakes.close();
     process.exit(0);
   };
@@ -46,6 +47,6 @@ async function main() {
 }
 
 main().catch((err) => {
-  console.error(err instanceof Error ? err.message : err);
+  fakesLog.fatal({ err }, err instanceof Error ? err.message : String(err));
   process.exit(1);
 });

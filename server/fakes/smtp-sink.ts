@@ -2,6 +2,7 @@ import { simpleParser, type ParsedMail } from 'mailparser';
 import type { Pool } from 'pg';
 import { SMTPServer, type SMTPServerDataStream, type SMTPServerSession } from 'smtp-server';
 import { listen } from './listen';
+import { fakesLog } from './log';
 
 /** One message as the sink received it: the envelope (who it was really sent
  * from and to, Bcc included) plus the parsed content. */
@@ -101,13 +102,13 @@ export async function startSmtpSink(opts: SmtpSinkOptions): Promise<SmtpSink> {
           callback();
         })
         .catch((err: unknown) => {
-          console.error('[smtp-sink] could not keep a message', err);
+          fakesLog.error({ err }, 'smtp sink could not keep a message');
           // Temporary failure, so the sender keeps the message and retries.
           callback(smtpError(451, 'Nestkeeper mail sink could not store the message; try again later'));
         });
     },
   });
-  server.on('error', (err) => console.error('[smtp-sink] server error', err));
+  server.on('error', (err) => fakesLog.error({ err }, 'smtp sink server error'));
 
   const port = await listen(server.server, opts.port ?? 0, host);
   return {

@@ -1,3 +1,5 @@
+import type { RequestHandler } from 'express';
+import type { DatabaseWatch } from '../db/reachability';
 import { AppError } from './errors';
 
 /** Seconds a caller should wait before trying again while the database is away. */
@@ -60,4 +62,18 @@ function fromSqlState(code: string, detail: string): AppError | null {
   // 54 program limit exceeded: e.g. a value too long for an index row.
   if (cls === '54') return new AppError(400, 'invalid_input', 'A value in the request is too long to store.');
   return null;
+}
+
+/**
+ * While the database is known to be away, a request waits for the one probe under way instead of a pool connection of
+ * its own, and is answered 503 at once if the database is still away. A 503 for an unreachable database makes the watch look.
+ */
+export function databaseGate(watch: DatabaseWatch): RequestHandler {
+  return (_req, res, next) => {
+    res.once('finish', () => {
+      if (res.locals.errorCode === 'unavailable') watch.suspect();
+    });
+    if (watch.reachable) return next();
+    void watch.check().then((answered) => next(answered ? undefined : databaseUnavailable()));
+  };
 }

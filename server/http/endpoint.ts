@@ -51,7 +51,13 @@ export function endpoint<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
   spec: EndpointSpec<B, Q>,
   handler: (input: Input<B, Q>) => Promise<unknown> | unknown,
 ): void {
-  documentedEndpoints.push({ ...spec, path: mountedAt + (spec.path === '/' ? '' : spec.path) });
+  const routePattern = mountedAt + (spec.path === '/' ? '' : spec.path);
+  documentedEndpoints.push({ ...spec, path: routePattern });
+  // The log line and the metrics name the route by its pattern, not the raw URL.
+  const nameRoute: RequestHandler = (_req, res, next) => {
+    res.locals.routePattern = routePattern;
+    next();
+  };
   const guards: RequestHandler[] =
     spec.access === 'public'
       ? []
@@ -64,7 +70,7 @@ export function endpoint<B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType
             : [requireSignIn, requireCapability(spec.access)];
   // Guards and ids first: nothing of an upload is read for a caller who may not make it.
   const upload = spec.upload ? [readUpload(spec.upload)] : [];
-  router[spec.method](spec.path, ...guards, checkIdParams, ...upload, async (req: Request, res: Response, next: NextFunction) => {
+  router[spec.method](spec.path, nameRoute, ...guards, checkIdParams, ...upload, async (req: Request, res: Response, next: NextFunction) => {
     try {
       const body = (spec.body ? parse(spec.body, req.body) : req.body) as z.infer<B>;
       const query = (spec.query ? parse(spec.query, req.query) : req.query) as z.infer<Q>;

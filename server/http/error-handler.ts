@@ -9,21 +9,24 @@ export const unknownApiRoute: RequestHandler = (req, _res, next) =>
 /** The one place errors become the API's JSON shape. Body-parser errors and
  * values the database refuses are the caller's fault (4xx); an unreachable
  * database is 503 with Retry-After; anything else is logged and answered 500
- * without a stack trace. */
+ * without a stack trace. Every error reply carries `ref`, the request id on the
+ * log lines of that request, so a person's "error ref" finds them. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const known = toAppError(err);
-  if (!known) console.error(err);
+  if (!known) req.log.error({ err }, 'request failed');
   // Part of the reply is already on its way: all that is left is to cut it short.
   if (res.headersSent) return void res.destroy();
   // Refused before its body was read (an anonymous upload): close rather than read the rest.
   if (!req.complete) res.set('Connection', 'close');
   if (!known) {
-    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; nothing was changed.' } });
+    res.locals.errorCode = 'internal';
+    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; nothing was changed.', ref: req.id } });
     return;
   }
   if (known.status === 503) res.set('Retry-After', String(RETRY_AFTER_SECONDS));
+  res.locals.errorCode = known.code;
   res.status(known.status).json({
-    error: { code: known.code, message: known.message, ...(known.details ? { details: known.details } : {}) },
+    error: { code: known.code, message: known.message, ...(known.details ? { details: known.details } : {}), ref: req.id },
   });
 };
 

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import type { DataSource } from 'typeorm';
 import type { Scoped } from '../db/scoped';
 import { renderMail, type MailContent } from './mail-template';
 import { OutboxAttachment } from './outbox-attachment.entity';
@@ -26,4 +27,12 @@ export async function enqueueMail(tx: Scoped, recipients: string[], content: Mai
       attachments.map((a) => ({ ...a, messageId: message.id })),
     );
   return message;
+}
+
+/** Mail not yet sent, across every firm, and how long the oldest has waited (the operator's metrics). */
+export async function outboxBacklog(db: DataSource): Promise<{ waiting: number; oldestAgeSeconds: number }> {
+  const [row]: { waiting: string; oldest: number | null }[] = await db.query(
+    `SELECT count(*) AS waiting, extract(epoch FROM now() - min(created_at))::float8 AS oldest FROM outbox_messages WHERE status = 'pending'`,
+  );
+  return { waiting: Number(row.waiting), oldestAgeSeconds: row.oldest ?? 0 };
 }

@@ -3,7 +3,9 @@ import { randomUUID } from 'node:crypto';
 import cron, { type ScheduledTask } from 'node-cron';
 import type { DataSource } from 'typeorm';
 import type { RoutineRunView, RoutinesView } from '../../shared/routines/views';
+import type { DatabaseWatch } from '../db/reachability';
 import { notFound } from '../http/errors';
+import type { Logger } from '../http/logging';
 import { pgRunCoordinator } from './pg-run-coordinator';
 import type { Routine } from './routine';
 import { RoutineRun } from './routine-run.entity';
@@ -21,6 +23,13 @@ const publicRun = (r: RoutineRun, showSummary = r.organizationId !== null): Rout
   error: r.error,
 });
 
+/** What the scheduler needs around the routines: the database watch (routines pause while it is away), a logger, a run counter. */
+export type RoutineSurroundings = {
+  watch?: DatabaseWatch;
+  log?: Logger;
+  onRunFinished?: (routine: string, status: 'succeeded' | 'failed') => void;
+};
+
 export class RoutinesService {
   readonly instanceId = `${hostname()}:${process.pid}:${randomUUID().slice(0, 8)}`;
   private tasks: ScheduledTask[] = [];
@@ -28,6 +37,7 @@ export class RoutinesService {
   constructor(
     private readonly db: DataSource,
     readonly definitions: Routine[],
+    private readonly surroundings: RoutineSurroundings = {},
   ) {}
 
   private find(name: string) {
@@ -43,14 +53,18 @@ export class RoutinesService {
     const run = await repo.save(
       repo.create({ routineName: name, trigger, scheduledFor, instanceId: this.instanceId, startedAt: new Date(), status: 'running', organizationId }),
     );
+    const log = this.surroundings.log?.child({ routine: name, runId: run.id });
     try {
-      run.summary = await routine.run({ db: this.db, now: new Date(), trigger, organizationId });
+      run.summary = await routine.run({ db: this.db, now: new Date(), trigger, organizationId, log });
       run.status = 'succeeded';
     } catch (err) {
       run.status = 'failed';
       run.error = err instanceof Error ? err.message : String(err);
+      log?.error({ err }, 'routine failed');
+      this.surroundings.watch?.suspect();
     }
     run.finishedAt = new Date();
+    this.surroundings.onRunFinished?.(name, run.status);
     // The caller ran it, so it sees what the run did.
     return publicRun(await repo.save(run), true);
   }
@@ -73,9 +87,13 @@ export class RoutinesService {
     };
   }
 
-  /** Start every routine's cron; each fire runs on exactly one instance (pgRunCoordinator). */
+  /**
+   * Start every routine's cron; each fire runs on exactly one instance (pgRunCoordinator). While the database is away
+   * the fires are let pass quietly (the work is still there when it is back); the watch logs the pause and the resumption.
+   */
   start() {
-    const runCoordinator = pgRunCoordinator(this.db, this.instanceId);
+    const { watch, log } = this.surroundings;
+    const runCoordinator = pgRunCoordinator(this.db, this.instanceId, watch);
     this.tasks = this.definitions.map((routine) =>
       cron.schedule(routine.schedule, (ctx) => this.run(routine.name, 'schedule', ctx.date).then(() => undefined), {
         name: routine.name,
@@ -84,6 +102,7 @@ export class RoutinesService {
         distributed: true,
         runCoordinator,
         distributedLease: 60 * 60 * 1000,
+        logger: log ? cronLogger(log.child({ routine: routine.name })) : undefined,
       }),
     );
   }
@@ -93,3 +112,11 @@ export class RoutinesService {
     this.tasks = [];
   }
 }
+
+/** node-cron's logger interface over pino. */
+const cronLogger = (log: Logger) => ({
+  info: (message: string) => log.info(message),
+  warn: (message: string) => log.warn(message),
+  error: (message: string | Error, err?: Error) => log.error({ err: err ?? message }, typeof message === 'string' ? message : 'scheduler error'),
+  debug: (message: string | Error) => log.debug(String(message)),
+});

@@ -1,7 +1,9 @@
 import { QueryClientProvider } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { ErrorBoundary } from '../components/error-fallback';
+import { OutageBanner } from '../components/outage-banner';
 import { authKeys } from '../features/auth/api/keys';
+import { onDatabaseBack } from '../lib/database-outage';
 import { queryClient, setSessionEndedHandler } from '../lib/query-client';
 
 // Any 401 outside the auth calls themselves means the session ended (expired,
@@ -13,6 +15,9 @@ setSessionEndedHandler((key) => {
   void queryClient.invalidateQueries({ queryKey: authKeys.me() });
 });
 
+// The database is back: fetch again whatever is on screen (reads waiting on a retry included).
+onDatabaseBack(() => void queryClient.invalidateQueries());
+
 /**
  * App-wide providers. The signed-in session itself is provided by
  * RequireSession inside the router, because redirecting needs the router.
@@ -20,7 +25,10 @@ setSessionEndedHandler((key) => {
 export function AppProvider({ children }: { children: ReactNode }) {
   return (
     <ErrorBoundary>
-      <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>
+      <QueryClientProvider client={queryClient}>
+        <OutageBanner />
+        {children}
+      </QueryClientProvider>
     </ErrorBoundary>
   );
 }

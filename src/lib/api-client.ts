@@ -4,6 +4,8 @@
  * server's error body `{error:{code,message,details}}` turned into an ApiError.
  */
 
+import { noticeDatabaseAway } from './database-outage';
+
 export type FieldErrors = Record<string, string>;
 
 export class ApiError extends Error {
@@ -12,14 +14,23 @@ export class ApiError extends Error {
   readonly details: unknown;
   /** Per-field messages from `details.fields`, keyed by the payload's field name. */
   readonly fieldErrors: FieldErrors;
+  /** The request id on the server's log lines for this request (`error.ref`), shown with a server fault so support can find it. */
+  readonly ref: string | undefined;
 
-  constructor(init: { status: number; code: string; message: string; details?: unknown }) {
-    super(init.message);
+  constructor(init: { status: number; code: string; message: string; details?: unknown; ref?: string }) {
+    // A fault on the server's side names its ref; a refusal the person can fix (4xx) or the database outage (the banner) does not need one.
+    super(init.ref && init.status >= 500 && init.code !== 'unavailable' ? `${init.message} (error ref ${init.ref})` : init.message);
     this.name = 'ApiError';
     this.status = init.status;
     this.code = init.code;
     this.details = init.details;
     this.fieldErrors = readFieldErrors(init.details);
+    this.ref = init.ref;
+  }
+
+  /** The server is up but cannot reach its database; the outage banner speaks for it. */
+  get isDatabaseAway(): boolean {
+    return this.status === 503 && this.code === 'unavailable';
   }
 
   get isClientError(): boolean {
@@ -81,21 +92,25 @@ async function readErrorBody(response: Response): Promise<ApiError> {
   } catch {
     body = undefined;
   }
-  return apiErrorFromBody(response.status, body);
+  return apiErrorFromBody(response.status, body, response.headers.get('Retry-After'), response.headers.get('X-Request-Id'));
 }
 
-function apiErrorFromBody(status: number, body: unknown): ApiError {
+function apiErrorFromBody(status: number, body: unknown, retryAfter: string | null, requestId: string | null): ApiError {
   const response = { status };
-  const error = (body as { error?: { code?: unknown; message?: unknown; details?: unknown } } | undefined)?.error;
-  if (error && typeof error.code === 'string') {
-    return new ApiError({
-      status: response.status,
-      code: error.code,
-      message: typeof error.message === 'string' && error.message ? error.message : fallbackMessage(response.status),
-      details: error.details,
-    });
-  }
-  return new ApiError({ status: response.status, code: 'http_error', message: fallbackMessage(response.status) });
+  const error = (body as { error?: { code?: unknown; message?: unknown; details?: unknown; ref?: unknown } } | undefined)?.error;
+  const ref = typeof error?.ref === 'string' ? error.ref : (requestId ?? undefined);
+  const apiError =
+    error && typeof error.code === 'string'
+      ? new ApiError({
+          status: response.status,
+          code: error.code,
+          message: typeof error.message === 'string' && error.message ? error.message : fallbackMessage(response.status),
+          details: error.details,
+          ref,
+        })
+      : new ApiError({ status: response.status, code: 'http_error', message: fallbackMessage(response.status), ref });
+  if (apiError.isDatabaseAway) noticeDatabaseAway(Number(retryAfter));
+  return apiError;
 }
 
 function fallbackMessage(status: number): string {
@@ -195,7 +210,7 @@ function sendWithProgress<T>(path: string, body: Blob | FormData, contentType: s
       if (xhr.status >= 200 && xhr.status < 300) {
         options.onProgress?.(1);
         resolve(parsed as T);
-      } else reject(apiErrorFromBody(xhr.status, parsed));
+      } else reject(apiErrorFromBody(xhr.status, parsed, xhr.getResponseHeader('Retry-After'), xhr.getResponseHeader('X-Request-Id')));
     };
     xhr.onerror = () =>
       reject(

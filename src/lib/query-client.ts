@@ -23,8 +23,10 @@ export function createQueryClient(): QueryClient {
     defaultOptions: {
       queries: {
         staleTime: 30_000,
-        // A 4xx will not change by asking again; network and 5xx get two more tries.
-        retry: (failureCount, error) => !(isApiError(error) && error.isClientError) && failureCount < 2,
+        // A 4xx will not change by asking again; network and 5xx get two more tries. While the database is away a read
+        // keeps waiting (what was on screen stays, the banner says why) and is asked again when it is back.
+        retry: (failureCount, error) => (isApiError(error) && error.isDatabaseAway) || (!(isApiError(error) && error.isClientError) && failureCount < 2),
+        retryDelay: (failureCount, error) => (isApiError(error) && error.isDatabaseAway ? 5_000 : Math.min(1000 * 2 ** failureCount, 30_000)),
       },
       mutations: { retry: false },
     },

@@ -1,6 +1,8 @@
 import type { QueryRunner } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fromDatabaseError } from '../../server/http/database-errors';
+import { pgRunCoordinator } from '../../server/routines/pg-run-coordinator';
+import { waitUntil } from '../support/eventually';
 import { startTcpProxy } from '../support/tcp-proxy';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
@@ -90,15 +92,37 @@ describe('while the database is unreachable', () => {
       'GET /api/assets': await t.api.get('/api/assets').set(bearer(token)),
       'POST /api/kits': await t.api.post('/api/kits').set(bearer(token)).send({ name: 'Kit while down' }),
       'POST /api/auth/login': await t.api.post('/api/auth/login').send({ email: 'owner@demo.test', password: 'whatever-it-is' }),
-      'GET /api/health': await t.api.get('/api/health'),
+      'GET /api/ready': await t.api.get('/api/ready'),
+      // Once the watch knows, requests are answered from its one probe, not a pool connection each.
+      'GET /api/assets again': await t.api.get('/api/assets').set(bearer(token)),
     };
     for (const [route, res] of Object.entries(answers)) {
       expect(res.status, route).toBe(503);
       expect(res.headers['retry-after']).toBe('5');
       expect(res.body.error.code).toBe('unavailable');
+      expect(res.body.error.ref, route).toEqual(res.headers['x-request-id']);
     }
+    expect(t.watch.reachable).toBe(false);
+    // Liveness is the process: restarting it would not bring the database back.
+    expect((await t.api.get('/api/health')).body).toEqual({ status: 'ok' });
 
     await proxy.restore();
     expect((await t.api.get('/api/assets').set(bearer(token))).status).toBe(200);
+    expect((await t.api.get('/api/ready')).body).toEqual({ status: 'ready', database: 'reachable', migrations: 'current' });
+    expect(t.watch.reachable).toBe(true);
+  });
+
+  it('routines pause while the database is away (no claim is even tried) and resume by themselves', async () => {
+    const coordinator = pgRunCoordinator(t.db, 'outage-test', t.watch);
+    await proxy.cut();
+    expect((await t.api.get('/api/ready')).status).toBe(503);
+    expect(await coordinator.shouldRun('deliver-outbox:during-outage', 60_000)).toBe(false);
+    const claimed: unknown[] = await t.db.query(`SELECT 1 FROM job_leases WHERE key = 'deliver-outbox:during-outage'`);
+    expect(claimed).toHaveLength(0);
+
+    await proxy.restore();
+    // Nobody asks the API meanwhile: the watch looks again on its own.
+    await waitUntil('the watch to find the database again', () => t.watch.reachable);
+    expect(await coordinator.shouldRun('deliver-outbox:after-outage', 60_000)).toBe(true);
   });
 });

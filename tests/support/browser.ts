@@ -6,6 +6,7 @@ import pg from 'pg';
 import type { BrowserContextOptions } from 'playwright-core';
 import { buildApp } from '../../server/app';
 import { readConfig } from '../../server/config';
+import { openDataSource } from '../../server/data-source';
 import { startPaymentFake } from '../../server/fakes/payment-fake';
 import { pgSinkStore, startSmtpSink } from '../../server/fakes/smtp-sink';
 import { launchChromium } from './chromium';
@@ -17,9 +18,10 @@ import { webhookSecret } from './test-app';
  * database, the payment-provider fake delivering signed webhooks to it, the SMTP
  * sink whose mail the owner's Mailbox shows (`deliverMail` sends the outbox now), and
  * Debian's Chromium driven by playwright-core. Open pages through `newContext`:
- * its locators and navigations wait with the suite's patience. */
-export async function startBrowserRig() {
+ * its locators and navigations wait with the suite's patience. `reachDatabaseVia` as in createTestApp. */
+export async function startBrowserRig(opts: { reachDatabaseVia?: (url: string) => string } = {}) {
   const database = await createTestDatabase({ seed: true });
+  const appDb = opts.reachDatabaseVia ? await openDataSource(opts.reachDatabaseVia(database.url), 4).initialize() : database.db;
   const secret = webhookSecret();
   const payments = await startPaymentFake({ port: 0, webhookSecret: secret });
   const sinkPool = new pg.Pool({ connectionString: database.url, max: 2 });
@@ -39,10 +41,11 @@ export async function startBrowserRig() {
     CLIENT_DIR: path.resolve('dist/client'),
     PAYMENT_API_PORT: String(payments.port),
     PAYMENT_WEBHOOK_SECRET: secret,
+    LOG_LEVEL: 'silent',
   });
   if (!fs.existsSync(path.join(config.CLIENT_DIR, 'index.html'))) throw new Error('The client is not built: run the suite with `npm test`.');
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: sink.port, secure: false, ignoreTLS: true });
-  const { app, routines } = buildApp({ config, db: database.db, mail });
+  const { app, routines, watch } = buildApp({ config, db: appDb, mail });
   server.on('request', app);
   payments.store.settings.webhookUrl = `http://127.0.0.1:${port}/api/webhooks/payments`;
   const browser = await launchChromium();
@@ -62,6 +65,8 @@ export async function startBrowserRig() {
       server.closeAllConnections();
       await new Promise((r) => server.close(r));
       await payments.close();
+      watch.stop();
+      if (appDb !== database.db && appDb.isInitialized) await appDb.destroy();
       await sink.close();
       await sinkPool.end();
       await database.drop();

@@ -3,13 +3,17 @@ import nodemailer from 'nodemailer';
 import request from 'supertest';
 import { buildApp } from '../../server/app';
 import { readConfig, type Config } from '../../server/config';
+import type { Logger } from '../../server/http/logging';
 import { openDataSource } from '../../server/data-source';
 import { DEMO_PASSWORD } from '../../server/seed/demo-people';
 import { createTestDatabase } from './test-db';
 
 /** The real app on a fresh seeded database, with supertest and sign-in helpers.
- * `reachDatabaseVia` lets the app reach the database another way (a proxy a test can cut). */
-export async function createTestApp(overrides: Partial<Record<keyof Config, string>> = {}, opts: { reachDatabaseVia?: (url: string) => string } = {}) {
+ * `reachDatabaseVia` lets the app reach the database another way (a proxy a test can cut); `log` reads its log lines (silent otherwise). */
+export async function createTestApp(
+  overrides: Partial<Record<keyof Config, string>> = {},
+  opts: { reachDatabaseVia?: (url: string) => string; log?: Logger } = {},
+) {
   const database = await createTestDatabase({ seed: true });
   const appDb = opts.reachDatabaseVia ? await openDataSource(opts.reachDatabaseVia(database.url), 2).initialize() : database.db;
   const config = readConfig({
@@ -20,10 +24,11 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
     RUN_SCHEDULER: 'false',
     SMTP_PORT: '9', // nothing listens: tests that send mail start their own sink
     PAYMENT_WEBHOOK_SECRET: webhookSecret(),
+    LOG_LEVEL: 'silent',
     ...overrides,
   });
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: config.SMTP_PORT, secure: false, ignoreTLS: true });
-  const { app, routines } = buildApp({ config, db: appDb, mail });
+  const { app, routines, watch } = buildApp({ config, db: appDb, mail, log: opts.log });
   const api = request(app);
 
   async function tokenFor(email: string, password = DEMO_PASSWORD): Promise<string> {
@@ -33,10 +38,11 @@ export async function createTestApp(overrides: Partial<Record<keyof Config, stri
   }
 
   const close = async () => {
+    watch.stop();
     if (appDb !== database.db && appDb.isInitialized) await appDb.destroy();
     await database.drop();
   };
-  return { app, api, routines, db: database.db, config, tokenFor, close };
+  return { app, api, routines, watch, db: database.db, config, tokenFor, close };
 }
 
 /** A webhook signing secret of the test's own (nothing is built in). */

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { ZodError } from 'zod';
+import { fakesLog } from '../log';
 
 /** The provider's error body: `{error: {type, message, code?, param?}}`. The SDK
  * picks its error class from the HTTP status and `type`, and exposes `code`. */
@@ -91,6 +92,6 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     res.status(status).json({ error: { type: 'invalid_request_error', message: `Malformed request: ${err.message}` } });
     return;
   }
-  console.error('[payment-fake] unexpected error', err);
+  fakesLog.error({ err }, 'payment fake failed unexpectedly');
   res.status(500).json({ error: { type: 'api_error', message: 'The payment fake failed unexpectedly.' } });
 };

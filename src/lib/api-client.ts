@@ -46,6 +46,9 @@ function readFieldErrors(details: unknown): FieldErrors {
 
 export const csrfCookieName = 'nk_csrf';
 
+/** The double-submit token the server wants echoed on every write (the field outbox sends with it too). */
+export const csrfToken = (): string | undefined => readCookie(csrfCookieName);
+
 function readCookie(name: string): string | undefined {
   if (typeof document === 'undefined') return undefined;
   for (const part of document.cookie.split(';')) {
@@ -84,7 +87,7 @@ async function readErrorBody(response: Response): Promise<ApiError> {
   return apiErrorFromBody(response.status, body);
 }
 
-function apiErrorFromBody(status: number, body: unknown): ApiError {
+export function apiErrorFromBody(status: number, body: unknown): ApiError {
   const response = { status };
   const error = (body as { error?: { code?: unknown; message?: unknown; details?: unknown } } | undefined)?.error;
   if (error && typeof error.code === 'string') {

@@ -1,5 +1,11 @@
 import { useState } from 'react';
-import { NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
+import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
+import { Button, buttonClasses } from '../../components/button';
+import { Dialog } from '../../components/dialog';
+import { FieldSync } from '../../features/field/components/field-sync';
+import { OutboxBadge } from '../../features/field/components/outbox-badge';
+import { useAppUpdate } from '../../lib/app-updates';
+import { unsent, useOutbox } from '../../lib/field/use-field-state';
 import { Wordmark } from '../../components/brand-mark';
 import { CrossIcon, MenuIcon } from '../../components/icons';
 import { useSignOut } from '../../features/auth/api/sign-out';
@@ -15,7 +21,12 @@ export function AppShell() {
   const location = useLocation();
   const navigation = useNavigation();
   const navigate = useNavigate();
+  const session = useSession();
   const signOut = useSignOut({ onSignedOut: () => navigate('/sign-in', { replace: true }) });
+  const fieldWork = can(user.role, 'checks.record');
+  const unsentRecords = unsent(useOutbox());
+  const [askingSignOut, setAskingSignOut] = useState(false);
+  const update = useAppUpdate();
   // The phone menu is open only on the page where it was opened, so following a link closes it.
   const [menuOpenAt, setMenuOpenAt] = useState<string | null>(null);
   const menuOpen = menuOpenAt === location.pathname;
@@ -43,9 +54,11 @@ export function AppShell() {
               <span className="block truncate font-semibold">{user.name}</span>
               <span className="block truncate text-brass-soft">{roleTitles[user.role]}</span>
             </p>
+            {fieldWork ? <OutboxBadge /> : null}
             <button
               type="button"
-              onClick={() => signOut.mutate()}
+              // Records not yet on the server would be erased with the rest of this phone's copy: ask first.
+              onClick={() => (unsentRecords.length ? setAskingSignOut(true) : signOut.mutate())}
               disabled={signOut.isPending}
               className="min-h-9 shrink-0 rounded-md border border-ink-700 px-3 text-sm font-semibold text-paper hover:bg-ink-800"
             >
@@ -60,6 +73,40 @@ export function AppShell() {
           </span>
         ) : null}
       </header>
+
+      {update ? (
+        <div role="status" className="flex flex-wrap items-center gap-3 border-b border-brass bg-brass-wash px-3 py-2 text-sm sm:px-5 print:hidden">
+          <span>A new version of Nestkeeper is ready. Finish and save what you are writing first.</span>
+          <button type="button" onClick={update} className="min-h-9 rounded-md border border-brass-deep px-3 font-semibold text-ink-900 hover:bg-brass/30">
+            Reload for the new version
+          </button>
+        </div>
+      ) : null}
+      {fieldWork ? <FieldSync session={session} /> : null}
+      <Dialog
+        open={askingSignOut}
+        onClose={() => setAskingSignOut(false)}
+        title="Sign out with records not sent?"
+        description={`${unsentRecords.length} check${unsentRecords.length === 1 ? '' : 's'} or damage report${unsentRecords.length === 1 ? '' : 's'} on this phone ${unsentRecords.length === 1 ? 'has' : 'have'} not reached the server. Signing out erases ${unsentRecords.length === 1 ? 'it' : 'them'} from this phone for good.`}
+      >
+        <div className="flex flex-wrap gap-2">
+          <Button variant="primary" onClick={() => setAskingSignOut(false)}>
+            Stay signed in
+          </Button>
+          <Link to="/outbox" onClick={() => setAskingSignOut(false)} className={buttonClasses('secondary')}>
+            See what waits
+          </Link>
+          <Button
+            variant="danger"
+            onClick={() => {
+              setAskingSignOut(false);
+              signOut.mutate();
+            }}
+          >
+            Sign out and erase them
+          </Button>
+        </div>
+      </Dialog>
 
       <div className="flex flex-1">
         <nav

@@ -1,0 +1,151 @@
+import sharp from 'sharp';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startBrowserRig, type BrowserRig } from '../support/browser';
+import { phone, signedIn } from '../support/browser-session';
+import { eventually } from '../support/eventually';
+
+let rig: BrowserRig;
+beforeAll(async () => {
+  rig = await startBrowserRig();
+});
+afterAll(() => rig?.close());
+
+/** Four readings `offsetUm` from R = (1000, 200, 50) along different axes, as rows pasted from a spreadsheet. */
+const pasted = (offsetUm: number) => {
+  const d = offsetUm / 1000;
+  return [
+    [1000 + d, 200, 50],
+    [1000 - d, 200, 50],
+    [1000, 200 + d, 50],
+    [1000, 200, 50 + d],
+  ]
+    .map((p) => p.map((v) => v.toFixed(4)).join('\t'))
+    .join('\n');
+};
+
+type Row = { id: string; asset_tag: string };
+
+describe('field work without signal', () => {
+  it('a technician opens home and the kit offline, records a passing and a failing validation and a damage report with a photo, closes the page; back online each reaches the server exactly once', async () => {
+    const [booking] = await rig.db.query(
+      `SELECT b.id, b.kit_id, k.name FROM bookings b JOIN kits k ON k.id = b.kit_id JOIN users u ON u.id = b.taken_by_user_id
+        WHERE u.email = 'tech@demo.test' AND b.state = 'out' ORDER BY b.starts_on DESC LIMIT 1`,
+    );
+    const tips: Row[] = await rig.db.query(
+      `SELECT a.id, a.asset_tag FROM booking_items bi JOIN assets a ON a.id = bi.asset_id
+        WHERE bi.booking_id = $1 AND a.type = 'tip' AND a.status = 'out' AND a.specs->'positions' ? 'vertical' ORDER BY a.asset_tag LIMIT 2`,
+      [booking.id],
+    );
+    const [smr]: Row[] = await rig.db.query(
+      `SELECT a.id, a.asset_tag FROM booking_items bi JOIN assets a ON a.id = bi.asset_id WHERE bi.booking_id = $1 AND a.type = 'smr' AND a.status = 'out' LIMIT 1`,
+      [booking.id],
+    );
+    expect(tips).toHaveLength(2);
+    const [passing, failing] = tips;
+    const startedAt = new Date();
+
+    // One visit with signal: the service worker installs and the phone copies the kit.
+    const { context, page } = await signedIn(rig, 'tech@demo.test', 'My kit', phone);
+    expect(await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active))).toBe(true);
+    await page.getByText(/Kit on this phone as of/).waitFor();
+
+    await context.setOffline(true);
+    await page.goto(`${rig.baseUrl}/`);
+    await page.getByRole('heading', { level: 1, name: 'My kit' }).waitFor();
+    await page.getByText('No signal', { exact: true }).first().waitFor();
+    await page.getByRole('link', { name: booking.name }).first().click();
+    await page.getByRole('heading', { level: 1, name: booking.name }).waitFor();
+    await page.getByRole('link', { name: new RegExp(passing.asset_tag) }).click();
+    await page.getByRole('heading', { level: 1, name: passing.asset_tag }).waitFor();
+    await page.getByRole('link', { name: 'Record a check' }).click();
+
+    const validate = async (tip: Row, offsetUm: number) => {
+      await page.getByRole('heading', { level: 1, name: 'Record a check' }).waitFor();
+      await page.getByLabel('Position').selectOption('vertical');
+      await page.getByLabel('Reference X (mm)').fill('1000');
+      await page.getByLabel('Reference Y (mm)').fill('200');
+      await page.getByLabel('Reference Z (mm)').fill('50');
+      await page.getByLabel('Paste readings').fill(pasted(offsetUm));
+      await page.getByRole('button', { name: 'Save check' }).click();
+      await page.getByRole('heading', { name: 'Saved on this phone — waiting for signal' }).waitFor();
+      await eventually(() => page.locator('main').innerText()).toContain(tip.asset_tag);
+    };
+    await validate(passing, 5);
+    // The offline preview is the shared computation: 500 µm fails any tip tolerance of the demo firm.
+    await page.goto(`${rig.baseUrl}/checks/new?assetId=${failing.id}`);
+    await validate(failing, 500);
+    await page.getByText(`Do not use ${failing.asset_tag}`).waitFor();
+
+    await page.goto(`${rig.baseUrl}/incidents/new?assetId=${smr.id}`);
+    await page.getByRole('heading', { level: 1, name: 'Report damage' }).waitFor();
+    await page.getByLabel('Dropped').check();
+    await page.getByLabel('What happened').fill('Rolled off the nest onto the hull plate; the glass looks chipped.');
+    const photo = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#5e6b78' } })
+      .jpeg()
+      .toBuffer();
+    await page.getByLabel('Photos').setInputFiles({ name: 'hull.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await page.getByRole('button', { name: 'Send report' }).click();
+    await page.getByRole('heading', { name: 'Saved on this phone — waiting for signal' }).waitFor();
+    await page.getByRole('link', { name: /Records on this phone: 3 to send/ }).waitFor();
+
+    // Closing the browser's page keeps the records on the phone.
+    await page.close();
+    const again = await context.newPage();
+    await again.goto(`${rig.baseUrl}/outbox`);
+    await again.getByRole('heading', { level: 1, name: 'Records on this phone' }).waitFor();
+    await eventually(() => again.getByText('Waiting', { exact: true }).count()).toBe(3);
+    const newRecords = async () => {
+      const [checks] = await rig.db.query(`SELECT count(*)::int AS n FROM field_checks WHERE asset_id = ANY($1) AND created_at >= $2`, [
+        [passing.id, failing.id],
+        startedAt,
+      ]);
+      const [incidents] = await rig.db.query(`SELECT count(*)::int AS n FROM incidents WHERE asset_id = $1 AND created_at >= $2`, [smr.id, startedAt]);
+      return checks.n + incidents.n;
+    };
+    expect(await newRecords()).toBe(0);
+
+    await context.setOffline(false);
+    await eventually(() => again.getByText('Sent', { exact: true }).count()).toBe(3);
+    expect(await newRecords()).toBe(3);
+    const status = async (id: string) => (await rig.db.query(`SELECT status FROM assets WHERE id = $1`, [id]))[0].status;
+    expect(await status(failing.id)).toBe('held');
+    expect(await status(passing.id)).toBe('out');
+    const [hold] = await rig.db.query(`SELECT reason FROM holds WHERE asset_id = $1 AND released_at IS NULL`, [failing.id]);
+    expect(hold.reason).toBe('failed_check');
+    const [mail] = await rig.db.query(`SELECT count(*)::int AS n FROM outbox_messages WHERE subject = $1`, [
+      `${failing.asset_tag} is on hold: tip validation failed`,
+    ]);
+    expect(mail.n).toBe(1);
+    const [photoRow] = await rig.db.query(`SELECT count(*)::int AS n FROM incident_photos p JOIN incidents i ON i.id = p.incident_id WHERE i.asset_id = $1`, [
+      smr.id,
+    ]);
+    expect(photoRow.n).toBe(1);
+    await again.getByText('The server decided: failed — the item is on hold').waitFor();
+
+    // A retry of the same records (as a phone whose reply was lost would send them) creates nothing new.
+    const records = await again.evaluate(
+      () =>
+        new Promise<{ request: { kind: string; payload?: unknown; fields?: Record<string, string> } }[]>((resolve, reject) => {
+          const open = indexedDB.open('nestkeeper-field');
+          open.onerror = () => reject(open.error);
+          open.onsuccess = () => {
+            const all = open.result.transaction('outbox').objectStore('outbox').getAll();
+            all.onsuccess = () => resolve(all.result);
+          };
+        }),
+    );
+    expect(records).toHaveLength(3);
+    const csrf = (await context.cookies()).find((c) => c.name === 'nk_csrf')!.value;
+    for (const r of records) {
+      const reply =
+        r.request.kind === 'check'
+          ? await again.request.post(`${rig.baseUrl}/api/checks`, { data: r.request.payload, headers: { 'X-CSRF-Token': csrf } })
+          : await again.request.post(`${rig.baseUrl}/api/incidents`, { multipart: r.request.fields!, headers: { 'X-CSRF-Token': csrf } });
+      expect(reply.status()).toBe(200);
+    }
+    expect(await newRecords()).toBe(3);
+    const [holds] = await rig.db.query(`SELECT count(*)::int AS n FROM holds WHERE asset_id = $1 AND started_at >= $2`, [failing.id, startedAt]);
+    expect(holds.n).toBe(1);
+    await context.close();
+  }, 150_000);
+});

@@ -148,4 +148,53 @@ describe('field work without signal', () => {
     expect(holds.n).toBe(1);
     await context.close();
   }, 150_000);
+
+  it('a record the server refuses (the item was retired meanwhile) shows the reason and waits to be discarded; signing out with records waiting asks first', async () => {
+    const [battery]: Row[] = await rig.db.query(
+      `SELECT a.id, a.asset_tag FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id JOIN assets a ON a.id = bi.asset_id, users u
+        WHERE u.email = 'tech@demo.test' AND b.state = 'reserved' AND b.job_id IN (SELECT id FROM jobs WHERE lead_technician_id = u.id) AND a.type = 'battery' AND a.status = 'ready'
+        ORDER BY a.asset_tag LIMIT 1`,
+    );
+    const { context, page } = await signedIn(rig, 'tech@demo.test', 'My kit', phone);
+    await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active));
+    await page.getByText(/Kit on this phone as of/).waitFor();
+    await context.setOffline(true);
+    await page.goto(`${rig.baseUrl}/scan`);
+    await page.getByLabel('Asset tag or RFID tag').fill(battery.asset_tag.toLowerCase());
+    await page.getByRole('button', { name: 'Find' }).click();
+    await page.getByRole('heading', { level: 1, name: battery.asset_tag }).waitFor();
+    await page.getByRole('link', { name: 'Report damage' }).click();
+    await page.getByLabel('Not working right').check();
+    await page.getByLabel('What happened').fill('Stops charging at half; the case is warm.');
+    await page.getByRole('button', { name: 'Send report' }).click();
+    await page.getByRole('heading', { name: 'Saved on this phone — waiting for signal' }).waitFor();
+
+    // Meanwhile the shop retires the battery.
+    const manager = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
+    const csrf = (await manager.context.cookies()).find((c) => c.name === 'nk_csrf')!.value;
+    const retired = await manager.page.request.post(`${rig.baseUrl}/api/assets/${battery.id}/retire`, {
+      data: { reason: 'End of life: capacity below 70 %' },
+      headers: { 'X-CSRF-Token': csrf },
+    });
+    expect(retired.status()).toBe(200);
+    await manager.context.close();
+
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    const ask = page.getByRole('dialog', { name: 'Sign out with records not sent?' });
+    await ask.waitFor();
+    await ask.getByRole('button', { name: 'Stay signed in' }).click();
+
+    await context.setOffline(false);
+    await page.goto(`${rig.baseUrl}/outbox`);
+    await page.getByText('Refused', { exact: true }).waitFor();
+    await page.getByText(`${battery.asset_tag} is retired.`, { exact: false }).waitFor();
+    await page.getByRole('link', { name: 'Records on this phone: 1 refused' }).waitFor();
+    expect((await rig.db.query(`SELECT count(*)::int AS n FROM incidents WHERE asset_id = $1 AND description LIKE 'Stops charging%'`, [battery.id]))[0].n).toBe(
+      0,
+    );
+    await page.getByRole('button', { name: 'Discard' }).click();
+    await page.getByRole('button', { name: 'Discard for good' }).click();
+    await page.getByRole('heading', { name: 'Nothing on this phone' }).waitFor();
+    await context.close();
+  }, 120_000);
 });

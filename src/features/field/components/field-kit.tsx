@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import { AssetStatusChip, CalibrationChip } from '../../../components/asset-status';
 import { CountedSection } from '../../../components/counted-section';
 import { StatusChip } from '../../../components/status-chip';
+import { assetTypeTitles } from '../../../lib/assets';
 import type { StoredCopy } from '../../../lib/field/field-store';
 import { formatCalendarDate, formatDateTime } from '../../../lib/format';
 import type { AssetView } from '../../../../shared/assets/views';
@@ -31,11 +32,15 @@ function ItemLine({ item }: { item: AssetView }) {
     <li>
       <Link to={`/fleet/${item.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-1 px-1 py-1.5 hover:bg-brass-wash">
         <span className="font-mono font-semibold text-ink-900">{item.assetTag}</span>
+        <span className="text-sm text-ink-700">{assetTypeTitles[item.type]}</span>
         {item.rfidTag ? <span className="font-mono text-sm text-ink-700">RFID {item.rfidTag}</span> : null}
         <span className="ml-auto flex flex-wrap gap-1">
           <AssetStatusChip status={item.status} />
           <CalibrationChip state={item.calibration.state} dueOn={item.calibration.dueOn} />
         </span>
+        {item.calibration.dueOn ? (
+          <span className="w-full text-right text-sm text-ink-700">Calibration due {formatCalendarDate(item.calibration.dueOn)}</span>
+        ) : null}
       </Link>
     </li>
   );
@@ -55,9 +60,8 @@ export function FieldKitItems({ items }: { items: AssetView[] }) {
 /** The technician's home without signal: the kit carried now and next, and the tips to validate, from this phone's copy. */
 export function FieldKitPanels({ stored }: { stored: StoredCopy }) {
   const { copy } = stored;
-  const itemsOf = (b: BookingView) => copy.items.filter((i) => b.assetIds.includes(i.id));
   const line = (b: BookingView) => (
-    <li key={b.id} className="py-1">
+    <li key={b.id} className="flex flex-wrap items-baseline gap-x-3 gap-y-0.5 py-1.5">
       {b.kitId ? (
         <Link to={`/kits/${b.kitId}`} className="font-semibold text-brass-deep underline">
           {bookingName(b)}
@@ -65,18 +69,20 @@ export function FieldKitPanels({ stored }: { stored: StoredCopy }) {
       ) : (
         <span className="font-semibold">{bookingName(b)}</span>
       )}
-      <span className="ml-2 text-sm text-ink-700">{days(b)}</span>
-      <FieldKitItems items={itemsOf(b)} />
+      <span className="text-sm text-ink-700">
+        {days(b)} · {b.assetIds.length} items
+      </span>
+      <span className="w-full font-mono text-sm text-ink-700">{b.items.map((i) => i.assetTag).join(', ')}</span>
     </li>
   );
   const toValidate = tipsToValidate(copy);
   return (
     <>
       <CountedSection id="kit-now" title="Kit I carry now" count={copy.bookings.now.length} empty="No kit is checked out to you.">
-        <ul>{copy.bookings.now.map(line)}</ul>
+        <ul className="divide-y divide-paper-line">{copy.bookings.now.map(line)}</ul>
       </CountedSection>
       <CountedSection id="kit-next" title="Next" count={copy.bookings.next.length} empty="Nothing is booked for you next.">
-        <ul>{copy.bookings.next.map(line)}</ul>
+        <ul className="divide-y divide-paper-line">{copy.bookings.next.map(line)}</ul>
       </CountedSection>
       <CountedSection id="checks-to-do" title="Checks to do" count={toValidate.length} empty="Every tip position you carry has a passing validation.">
         <ul className="divide-y divide-paper-line">

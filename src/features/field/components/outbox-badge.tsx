@@ -7,7 +7,8 @@ export function OutboxBadge() {
   const records = unsent(useOutbox());
   if (!records.length) return null;
   const refused = records.filter((r) => r.state === 'refused').length;
-  const label = `${records.length} to send${refused ? `, ${refused} refused` : ''}`;
+  const waiting = records.length - refused;
+  const label = [waiting ? `${waiting} to send` : '', refused ? `${refused} refused` : ''].filter(Boolean).join(' · ');
   return (
     <Link
       to="/outbox"

@@ -197,4 +197,53 @@ describe('field work without signal', () => {
     await page.getByRole('heading', { name: 'Nothing on this phone' }).waitFor();
     await context.close();
   }, 120_000);
+
+  it('a check refused because the firm changed its tolerance meanwhile opens again as written, is corrected and arrives once', async () => {
+    const [tip]: Row[] = await rig.db.query(
+      `SELECT a.id, a.asset_tag FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id JOIN assets a ON a.id = bi.asset_id JOIN users u ON u.id = b.taken_by_user_id
+        WHERE u.email = 'tech@demo.test' AND b.state = 'out' AND a.type = 'tip' AND a.status = 'out' AND a.specs->'positions' ? 'vertical' ORDER BY a.asset_tag DESC LIMIT 1`,
+    );
+    const { context, page } = await signedIn(rig, 'tech@demo.test', 'My kit', phone);
+    await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active));
+    await page.getByText(/Kit on this phone as of/).waitFor();
+    await context.setOffline(true);
+    await page.goto(`${rig.baseUrl}/checks/new?assetId=${tip.id}`);
+    await page.getByLabel('Position').selectOption('vertical');
+    await page.getByLabel('Reference X (mm)').fill('1000');
+    await page.getByLabel('Reference Y (mm)').fill('200');
+    await page.getByLabel('Reference Z (mm)').fill('50');
+    await page.getByLabel('Paste readings').fill(pasted(8));
+    await page.getByRole('button', { name: 'Save check' }).click();
+    await page.getByRole('heading', { name: 'Saved on this phone — waiting for signal' }).waitFor();
+
+    // Meanwhile the owner makes the tip tolerance depend on the distance from the tracker.
+    const owner = await signedIn(rig, 'owner@demo.test', "Owner's overview");
+    const csrf = (await owner.context.cookies()).find((c) => c.name === 'nk_csrf')!.value;
+    const changed = await owner.page.request.patch(`${rig.baseUrl}/api/settings`, {
+      data: { tolerances: { tip_validation: { kind: 'range', aUm: 30, bUmPerM: 10 } } },
+      headers: { 'X-CSRF-Token': csrf },
+    });
+    expect(changed.status()).toBe(200);
+    await owner.context.close();
+
+    await context.setOffline(false);
+    await page.goto(`${rig.baseUrl}/outbox`);
+    await page.getByText('Refused', { exact: true }).waitFor();
+    await page.getByText(/the tolerance for this check depends on the distance from the tracker/).waitFor();
+    await page.getByRole('link', { name: 'Correct it' }).click();
+    await page.getByText('Correcting a refused check').waitFor();
+    expect(await page.getByLabel('Reading 4 Z (mm)').inputValue()).toBe('50.008');
+    await page.getByLabel('Distance from tracker (m)').fill('4');
+    await page.getByRole('button', { name: 'Save check' }).click();
+    await page.getByRole('heading', { name: 'Check saved' }).waitFor();
+    const [stored] = await rig.db.query(
+      `SELECT count(*)::int AS n, max(tolerance_um) AS tolerance FROM field_checks WHERE asset_id = $1 AND inputs->>'distanceM' = '4'`,
+      [tip.id],
+    );
+    // A + B·L = 30 µm + 10 µm/m × 4 m = 70 µm.
+    expect(stored).toEqual({ n: 1, tolerance: 70 });
+    await page.goto(`${rig.baseUrl}/outbox`);
+    await eventually(() => page.getByText('Refused', { exact: true }).count()).toBe(0);
+    await context.close();
+  }, 120_000);
 });

@@ -5,7 +5,8 @@ import { Dialog } from '../../components/dialog';
 import { FieldSync } from '../../features/field/components/field-sync';
 import { OutboxBadge } from '../../features/field/components/outbox-badge';
 import { useAppUpdate } from '../../lib/app-updates';
-import { unsent, useOutbox } from '../../lib/field/use-field-state';
+import { unsent, useOnline, useOutbox } from '../../lib/field/use-field-state';
+import { Notice } from '../../components/notice';
 import { Wordmark } from '../../components/brand-mark';
 import { CrossIcon, MenuIcon } from '../../components/icons';
 import { useSignOut } from '../../features/auth/api/sign-out';
@@ -14,6 +15,20 @@ import { can, roleTitles } from '../../lib/roles';
 import { navItems } from './nav-items';
 
 const navId = 'main-navigation';
+
+/** The technician's pages that work from the phone's field copy without signal; the rest wait for signal. */
+const worksWithoutSignal = /^\/($|kits\/[^/]+$|fleet\/(?!new$)[^/]+$|checks\/new$|incidents\/new$|scan(\/.*)?$|outbox$)/;
+
+function NeedsSignal() {
+  return (
+    <Notice tone="info" title="This page needs signal">
+      Without signal, Nestkeeper shows the kit you carry, records checks and damage reports on this phone, and finds items by their label.{' '}
+      <Link to="/" className="font-semibold underline">
+        Go to your kit
+      </Link>
+    </Notice>
+  );
+}
 
 /** Page frame: ink top bar, navigation by role (side rail; a bottom-sheet menu on phones), content. */
 export function AppShell() {
@@ -27,6 +42,7 @@ export function AppShell() {
   const unsentRecords = unsent(useOutbox());
   const [askingSignOut, setAskingSignOut] = useState(false);
   const update = useAppUpdate();
+  const online = useOnline();
   // The phone menu is open only on the page where it was opened, so following a link closes it.
   const [menuOpenAt, setMenuOpenAt] = useState<string | null>(null);
   const menuOpen = menuOpenAt === location.pathname;
@@ -134,9 +150,7 @@ export function AppShell() {
         </nav>
 
         <main id="main" tabIndex={-1} className="min-w-0 flex-1 px-3 pt-5 pb-24 outline-none sm:px-6 sm:pb-10 print:p-0">
-          <div className="mx-auto max-w-6xl">
-            <Outlet />
-          </div>
+          <div className="mx-auto max-w-6xl">{online || worksWithoutSignal.test(location.pathname) ? <Outlet /> : <NeedsSignal />}</div>
         </main>
       </div>
 

@@ -66,7 +66,8 @@ export function AppShell() {
           </NavLink>
           <span className="hidden truncate text-sm text-ink-300 md:inline">{organization.name}</span>
           <div className="ml-auto flex min-w-0 items-center gap-3">
-            <p className="min-w-0 truncate text-right text-sm leading-tight">
+            {/* On a phone the badge of records to send takes the name's place. */}
+            <p className={`min-w-0 truncate text-right text-sm leading-tight ${fieldWork && unsentRecords.length ? 'max-sm:hidden' : ''}`}>
               <span className="block truncate font-semibold">{user.name}</span>
               <span className="block truncate text-brass-soft">{roleTitles[user.role]}</span>
             </p>

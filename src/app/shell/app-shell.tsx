@@ -120,7 +120,7 @@ export function AppShell() {
               signOut.mutate();
             }}
           >
-            Sign out and erase them
+            Sign out and erase {unsentRecords.length === 1 ? 'it' : 'them'}
           </Button>
         </div>
       </Dialog>

@@ -114,11 +114,13 @@ export function OutboxList({ userId }: { userId: string }) {
   if (!records.length)
     return <EmptyState title="Nothing on this phone">Checks and damage reports written here wait in this list until they reach the server.</EmptyState>;
   const waiting = records.filter((r) => r.state === 'waiting').length;
+  const refused = records.filter((r) => r.state === 'refused').length;
+  const heading = [waiting ? `${waiting} waiting to be sent` : '', refused ? `${refused} refused: correct or discard` : ''].filter(Boolean).join(' · ');
   return (
     <section aria-labelledby="outbox-heading" className="rounded-lg border border-paper-line bg-card p-4">
       <div className="mb-1 flex flex-wrap items-center justify-between gap-2">
         <h2 id="outbox-heading" className="text-lg font-bold">
-          {waiting ? `${waiting} waiting to be sent` : 'Everything here has been dealt with'}
+          {heading || 'Everything here has reached the server'}
         </h2>
         {waiting && online ? (
           <Button

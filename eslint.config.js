@@ -23,7 +23,7 @@ export default [
         { type: 'client-app', pattern: 'src/app' },
         { type: 'client-feature', pattern: 'src/features/*', capture: ['name'] },
         { type: 'client-base', pattern: 'src/{components,lib,styles}' },
-        { type: 'client-entry', pattern: 'src/main.tsx', mode: 'file' },
+        { type: 'client-entry', pattern: 'src/{main.tsx,sw.ts}', mode: 'file' },
         { type: 'server-base', pattern: 'server/{db,http,documents}' },
         { type: 'server-base', pattern: 'server/config.ts', mode: 'file' },
         { type: 'server-root', pattern: 'server/{*.ts,seed/**}', mode: 'file' },

@@ -65,6 +65,8 @@ import { checksRoutes } from './checks/checks.routes';
 import { HoldsService } from './holds/holds.service';
 import { holdsRoutes } from './holds/holds.routes';
 import { IncidentsService } from './incidents/incidents.service';
+import { FieldService } from './field/field.service';
+import { fieldRoutes } from './field/field.routes';
 import { incidentsRoutes } from './incidents/incidents.routes';
 import { UsersService } from './users/users.service';
 import { usersRoutes } from './users/users.routes';
@@ -158,9 +160,12 @@ export function buildApp({ config, db, mail, log = createLogger({ level: config.
   app.use('/api/settings', settingsRoutes(db));
   app.use('/api/assets', fleetRoutes(db, assets, fleetDocuments));
   app.use('/api/kits', kitsRoutes(kits, fleetDocuments));
-  app.use('/api', checksRoutes(new ChecksService(db)));
+  const checks = new ChecksService(db);
+  app.use('/api', checksRoutes(checks));
   app.use('/api/assets', holdsRoutes(new HoldsService(db)));
   app.use('/api/incidents', incidentsRoutes(new IncidentsService(db)));
+  const desk = new DeskService(db);
+  app.use('/api/field', fieldRoutes(new FieldService({ desk, assets, checks })));
   const bookings = new BookingsService(db, {
     onReschedule: (tx, booking) => repriceRental(tx, booking, rentalMoney),
     onCancel: (tx, booking) => deposits.releaseForCancelledBooking(tx, booking),
@@ -172,7 +177,7 @@ export function buildApp({ config, db, mail, log = createLogger({ level: config.
     bookingsRoutes({
       bookings,
       handover: new HandoverService(db, rentals.handoverGates),
-      desk: new DeskService(db),
+      desk,
       jobs: new JobsRegisterService(db),
       calendar: new CalendarService(db, publicUrl),
     }),

@@ -12,12 +12,15 @@ export function checksRoutes(checks: ChecksService): Router {
     {
       method: 'post',
       path: '/checks',
-      summary: 'Record a field check (tip validation, two-face, length check); a failure holds the item',
+      summary: 'Record a field check (tip validation, two-face, length check); a failure holds the item. A resent id answers the stored check (200)',
       access: 'checks.record',
       body: checkPayload,
       status: 201,
     },
-    ({ actor, body }) => checks.record(actor, body),
+    async ({ actor, body, res }) => {
+      const { check, replayed } = await checks.record(actor, body);
+      res.status(replayed ? 200 : 201).json(check);
+    },
   );
   endpoint(
     router,

@@ -8,8 +8,10 @@ import { expandedUncertainty } from '../../shared/checks/uncertainty';
 import { assetTypeTitles, type AssetType, type TipPosition } from '../../shared/schemas/assets';
 import { checkKindTitles, checkSubjectType, type CheckPayload } from '../../shared/schemas/checks';
 import type { CheckToDo, CheckView, TipForecastsView, TipValidationStatus } from '../../shared/checks/views';
+import type { FieldCopyView } from '../../shared/field/views';
 import type { Page } from '../../shared/lists/page';
 import { recordAudit } from '../audit/audit.service';
+import { claimClientRecordId } from '../db/client-records';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { listReply } from '../http/list-reply';
@@ -23,6 +25,10 @@ import { loadOrgContext } from '../organizations';
 import { FieldCheck } from './field-check.entity';
 import { tipForecasts } from './tip-forecasts';
 import { addDays } from '../../shared/calibration/due-date';
+
+const utcMinute = (d: Date) => d.toISOString().slice(0, 16).replace('T', ' ');
+/** A record that waited on a phone for a while: worth saying when the work was done. */
+const arrivedLate = (doneAt: Date, arrivedAt: Date) => arrivedAt.getTime() - doneAt.getTime() > 10 * 60_000;
 
 const badField = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields are missing or wrong.', { fields: { [field]: message } });
 
@@ -89,6 +95,7 @@ export const checkView = (c: FieldCheck): CheckView =>
       decision: c.decision,
     },
     performedAt: c.performedAt.toISOString(),
+    recordedAt: c.createdAt.toISOString(),
     performedBy: c.performedBy,
     note: c.note,
   }) as CheckView;
@@ -96,8 +103,14 @@ export const checkView = (c: FieldCheck): CheckView =>
 export class ChecksService {
   constructor(private readonly db: DataSource) {}
 
-  record(actor: Actor, input: CheckPayload) {
+  /** `replayed`: the phone sent a check this firm already holds under its id; the stored check is the answer, nothing is recorded again. */
+  record(actor: Actor, input: CheckPayload): Promise<{ check: CheckView; replayed: boolean }> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
+      if (input.id) {
+        await claimClientRecordId(tx, 'field_checks', input.id);
+        const stored = await tx.findOne(FieldCheck, { id: input.id });
+        if (stored) return { check: checkView(stored), replayed: true };
+      }
       const ctx = await loadOrgContext(tx);
       const subject = await assetOfType(tx, input.assetId, checkSubjectType[input.kind], 'assetId');
       const { result, judged, related, inputs } = await compute(tx, input, subject);
@@ -113,6 +126,7 @@ export class ChecksService {
       const { decision } = decided;
 
       const check = await tx.insert(FieldCheck, {
+        ...(input.id ? { id: input.id } : {}),
         kind: input.kind,
         assetId: subject.id,
         relatedAssetId: related,
@@ -144,11 +158,16 @@ export class ChecksService {
           heading: `${subject.assetTag} failed a field check and is on hold`,
           paragraphs: [
             what + '.',
+            ...(arrivedLate(check.performedAt, check.createdAt)
+              ? [
+                  `The check was done at ${utcMinute(check.performedAt)} UTC and reached Nestkeeper at ${utcMinute(check.createdAt)} UTC (recorded without signal).`,
+                ]
+              : []),
             'It cannot be booked or checked out until it is recalibrated or passes the check again and someone releases it. Jobs it measured since its last good check may need a look.',
           ],
         });
       }
-      return checkView(check);
+      return { check: checkView(check), replayed: false };
     });
   }
 
@@ -216,6 +235,24 @@ export class ChecksService {
       const ctx = await loadOrgContext(tx);
       const items = (await tipForecasts(tx, ctx)).filter((f) => f.failsSoon);
       return { items, total: items.length, dueSoonDays: ctx.dueSoonDays, until: addDays(ctx.today, ctx.dueSoonDays) };
+    });
+  }
+
+  /** What a phone needs to judge checks without signal: each tip position's latest validation and the firm's tolerances and decision rule. */
+  fieldFacts(actor: Actor, tipIds: string[]): Promise<Pick<FieldCopyView, 'tipValidations' | 'checkRules'>> {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const { decisionRule, tolerances } = await loadOrgContext(tx);
+      const tipValidations = await tx.sql<FieldCopyView['tipValidations'][number]>(
+        `SELECT DISTINCT ON (asset_id, position) asset_id AS "assetId", position, id AS "checkId", decision, performed_at AS "performedAt",
+                (result->>'maxDeviationUm')::float8 AS "maxDeviationUm", tolerance_um AS "toleranceUm"
+           FROM field_checks WHERE organization_id = $1 AND asset_id = ANY($2::uuid[]) AND kind = 'tip_validation'
+          ORDER BY asset_id, position, performed_at DESC, created_at DESC`,
+        [tipIds],
+      );
+      return {
+        tipValidations: tipValidations.map((v) => ({ ...v, performedAt: new Date(v.performedAt).toISOString() })),
+        checkRules: { decisionRule, tolerances },
+      };
     });
   }
 

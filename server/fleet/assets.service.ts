@@ -1,4 +1,4 @@
-import type { DataSource } from 'typeorm';
+import { In, type DataSource } from 'typeorm';
 import type { AssetHistoryEntry, AssetView } from '../../shared/assets/views';
 import { dueOnForPlan } from '../../shared/calibration/due-date';
 import {
@@ -55,6 +55,16 @@ export class AssetsService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       return toAssetView(await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } }), ctx, this.publicUrl);
+    });
+  }
+
+  /** Several assets as the API shows them, by asset tag (unknown or another firm's ids are left out). */
+  views(actor: Actor, ids: string[]): Promise<AssetView[]> {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      if (!ids.length) return [];
+      const ctx = await loadOrgContext(tx);
+      const rows = await tx.find(Asset, { where: { id: In(ids) }, relations: { kit: true }, order: { assetTag: 'ASC' } });
+      return rows.map((a) => toAssetView(a, ctx, this.publicUrl));
     });
   }
 

@@ -16,13 +16,16 @@ export function incidentsRoutes(incidents: IncidentsService): Router {
     {
       method: 'post',
       path: '/',
-      summary: 'Report damage or loss (multipart, photos[]); the item is held at once',
+      summary: 'Report damage or loss (multipart, photos[]); the item is held at once. A resent id answers the stored report (200)',
       access: 'incidents.report',
       body: incidentPayload,
       upload: photoUpload,
       status: 201,
     },
-    ({ actor, body, files }) => incidents.report(actor, body, files),
+    async ({ actor, body, files, res }) => {
+      const { incident, replayed } = await incidents.report(actor, body, files);
+      res.status(replayed ? 200 : 201).json(incident);
+    },
   );
   endpoint(router, at, { method: 'get', path: '/', summary: 'Incidents, newest first', access: 'fleet.read', query: incidentListQuery }, ({ actor, query }) =>
     incidents.list(actor, query),

@@ -10,6 +10,7 @@ import {
 } from '../../shared/schemas/incidents';
 import type { IncidentView } from '../../shared/incidents/views';
 import { recordAudit } from '../audit/audit.service';
+import { claimClientRecordId } from '../db/client-records';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { findAsset, getAsset, markDamaged, type AssetRecord } from '../fleet';
@@ -50,7 +51,7 @@ const view = (i: Incident, photos: PhotoRow[], asset?: AssetRecord): IncidentVie
   })),
 });
 
-type IncidentFields = { kind: IncidentKind; description: string; occurredAt: string; location: string | null; bookingId: string | null };
+type IncidentFields = { id?: string; kind: IncidentKind; description: string; occurredAt: string; location: string | null; bookingId: string | null };
 
 /**
  * Record an incident inside the caller's transaction: hold the asset, flag a
@@ -65,6 +66,7 @@ export async function openIncident(
   photos: Awaited<ReturnType<typeof preparePhoto>>[] = [],
 ) {
   const incident = await tx.insert(Incident, {
+    ...(input.id ? { id: input.id } : {}),
     assetId: asset.id,
     kind: input.kind,
     description: input.description,
@@ -126,9 +128,15 @@ export async function setIncidentCharge(tx: Scoped, bookingId: string, incidentI
 export class IncidentsService {
   constructor(private readonly db: DataSource) {}
 
-  async report(actor: Actor, input: z.infer<typeof incidentPayload>, files: UploadedPhoto[]) {
+  /** `replayed`: the phone sent a report this firm already holds under its id; the stored report is the answer, nothing is recorded again. */
+  async report(actor: Actor, input: z.infer<typeof incidentPayload>, files: UploadedPhoto[]): Promise<{ incident: IncidentView; replayed: boolean }> {
     const photos = await Promise.all(files.map(preparePhoto));
     return inOrganization(this.db, actor.organizationId, async (tx) => {
+      if (input.id) {
+        await claimClientRecordId(tx, 'incidents', input.id);
+        const stored = await tx.findOne(Incident, { id: input.id }, { relations: { asset: true } });
+        if (stored) return { incident: view(stored, await this.photoRows(tx, [stored.id]), stored.asset), replayed: true };
+      }
       const asset = await getAsset(tx, input.assetId);
       // A read, not an import: bookings already calls incidents when an item comes back damaged.
       if (input.bookingId && !(await tx.sql(`SELECT 1 FROM bookings WHERE organization_id = $1 AND id = $2`, [input.bookingId])).length)
@@ -136,11 +144,14 @@ export class IncidentsService {
       if (asset.status === 'retired') throw ruleBroken('asset_retired', `${asset.assetTag} is retired.`);
       const { incident, photos: saved } = await openIncident(tx, actor, asset, { ...input, bookingId: input.bookingId ?? null }, photos);
       const refreshed = await getAsset(tx, asset.id);
-      return view(
-        incident,
-        saved.map((p) => ({ ...p, hasThumbnail: !!p.thumbnail })),
-        refreshed,
-      );
+      return {
+        incident: view(
+          incident,
+          saved.map((p) => ({ ...p, hasThumbnail: !!p.thumbnail })),
+          refreshed,
+        ),
+        replayed: false,
+      };
     });
   }
 

@@ -23,7 +23,10 @@ type CheckBase = {
   id: string;
   assetId: string;
   relatedAssetId: string | null;
+  /** When the check was done (on the phone, perhaps without signal). */
   performedAt: string;
+  /** When it reached the server. */
+  recordedAt: string;
   performedBy: string;
   note: string | null;
 };

@@ -14,6 +14,8 @@ const coordinate = z
 export const pointPayload = z.object({ x: coordinate, y: coordinate, z: coordinate });
 
 const common = {
+  /** Made on the phone when the check is recorded: the record's id and its idempotency key (a resend returns the stored check). */
+  id: z.uuid('is not a record id (UUID)').optional(),
   assetId: z.uuid('is not an asset id'),
   distanceM: z.number().min(0, 'cannot be negative').max(200, 'is beyond 200 m').nullable().optional(),
   /** Overrides the tolerance that settings and the asset give, for this check only. */

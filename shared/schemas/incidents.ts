@@ -6,6 +6,11 @@ export * from '../incidents/vocabulary';
 
 /** Multipart text fields arrive as strings. */
 export const incidentPayload = z.object({
+  /** Made on the phone when the report is written: the record's id and its idempotency key (a resend returns the stored report). */
+  id: z
+    .uuid('is not a record id (UUID)')
+    .optional()
+    .or(z.literal('').transform(() => undefined)),
   assetId: z.uuid('is not an asset id'),
   kind: z.enum(incidentKinds, { message: `must be one of ${incidentKinds.join(', ')}` }),
   description: text(4000).min(3, 'say briefly what happened'),

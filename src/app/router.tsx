@@ -70,7 +70,10 @@ export const routes: RouteObject[] = [
             { path: 'calibration/plan/:assetId', lazy: screen(() => import('./routes/calibration-plan')) },
             { path: 'calibration/trips', lazy: screen(() => import('./routes/lab-trips')) },
           ]),
-          gated('checks.record', [{ path: 'checks/new', lazy: screen(() => import('./routes/check-new')) }]),
+          gated('checks.record', [
+            { path: 'checks/new', lazy: screen(() => import('./routes/check-new')) },
+            { path: 'outbox', lazy: screen(() => import('./routes/outbox')) },
+          ]),
           gated('incidents.report', [{ path: 'incidents/new', lazy: screen(() => import('./routes/incident-new')) }]),
           gated('bookings.read', [
             { path: 'board', lazy: screen(() => import('./routes/board')) },

@@ -57,6 +57,9 @@ function readFieldErrors(details: unknown): FieldErrors {
 
 export const csrfCookieName = 'nk_csrf';
 
+/** The double-submit token the server wants echoed on every write (the field outbox sends with it too). */
+export const csrfToken = (): string | undefined => readCookie(csrfCookieName);
+
 function readCookie(name: string): string | undefined {
   if (typeof document === 'undefined') return undefined;
   for (const part of document.cookie.split(';')) {
@@ -95,7 +98,7 @@ async function readErrorBody(response: Response): Promise<ApiError> {
   return apiErrorFromBody(response.status, body, response.headers.get('Retry-After'), response.headers.get('X-Request-Id'));
 }
 
-function apiErrorFromBody(status: number, body: unknown, retryAfter: string | null, requestId: string | null): ApiError {
+export function apiErrorFromBody(status: number, body: unknown, retryAfter: string | null = null, requestId: string | null = null): ApiError {
   const response = { status };
   const error = (body as { error?: { code?: unknown; message?: unknown; details?: unknown; ref?: unknown } } | undefined)?.error;
   const ref = typeof error?.ref === 'string' ? error.ref : (requestId ?? undefined);

@@ -1,4 +1,4 @@
-import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
+import { MutationCache, onlineManager, QueryCache, QueryClient } from '@tanstack/react-query';
 import { isApiError } from './api-client';
 
 type SessionEndedHandler = (key: readonly unknown[] | undefined) => void;
@@ -32,5 +32,8 @@ export function createQueryClient(): QueryClient {
     },
   });
 }
+
+// TanStack Query assumes a network until the first `offline` event; a page opened without one knows at once.
+if (typeof navigator !== 'undefined' && navigator.onLine === false) onlineManager.setOnline(false);
 
 export const queryClient = createQueryClient();

@@ -13,6 +13,9 @@ import { AssetBookings } from '../../features/bookings/components/asset-bookings
 import { AssetImpactPanel, CalibrationHistory } from '../../features/calibration/components/asset-calibration-panels';
 import { AssetChecks } from '../../features/checks/components/asset-checks';
 import { checkKindsFor } from '../../features/checks/components/check-words';
+import { useFieldItem } from '../../features/field/api/get-field-copy';
+import { CopyAge } from '../../features/field/components/copy-age';
+import { FieldTipValidations } from '../../features/field/components/field-kit';
 import { useAsset } from '../../features/fleet/api/get-asset';
 import { assetLabelUrl } from '../../features/fleet/api/get-asset-label';
 import { AssetCalibration, AssetIdentity, AssetSpecs } from '../../features/fleet/components/asset-facts';
@@ -24,10 +27,67 @@ import { IncidentList } from '../../features/incidents/components/incident-list'
 import { kitsKeys } from '../../features/kits/api/keys';
 import { assetTypeTitles } from '../../lib/assets';
 import { todayIn } from '../../lib/bookings';
+import { useOnline } from '../../lib/field/use-field-state';
 import { can } from '../../lib/roles';
 
+/** An item's page: from the server with signal, from this phone's field copy without. */
 export default function AssetRoute() {
   const { id = '' } = useParams();
+  return useOnline() ? <ServerAsset id={id} /> : <FieldAsset id={id} />;
+}
+
+/** Without signal: the item as the phone's copy of the kit carried has it, with the field actions. */
+function FieldAsset({ id }: { id: string }) {
+  const { user } = useSession();
+  const field = useFieldItem(id);
+  if (field.isPending) return <LoadingPanel label="Loading the asset…" />;
+  const a = field.item;
+  const copy = field.data?.copy;
+  if (!a || !copy)
+    return (
+      <>
+        <PageHeader title="Not on this phone" />
+        <CopyAge />
+        <Notice tone="info" title="No signal" className="mt-3">
+          Without signal this phone shows only the kit you carry. Find signal to open other items.
+        </Notice>
+      </>
+    );
+  const live = a.status !== 'retired';
+  const big = 'min-h-12 shrink-0 text-lg sm:min-h-10 sm:text-base';
+  return (
+    <>
+      <PageHeader title={a.assetTag} description={[assetTypeTitles[a.type], a.manufacturer, a.model].filter(Boolean).join(' · ')} />
+      <div className="mb-3">
+        <CopyAge />
+      </div>
+      <div role="group" aria-label="Asset actions" className="mb-5 flex flex-wrap gap-2">
+        {live && can(user.role, 'checks.record') && checkKindsFor(a.type).length ? (
+          <Link to={`/checks/new?assetId=${encodeURIComponent(a.id)}`} className={buttonClasses('primary', 'md', big)}>
+            <PlusIcon size={18} />
+            Record a check
+          </Link>
+        ) : null}
+        {live && can(user.role, 'incidents.report') ? (
+          <Link to={`/incidents/new?assetId=${encodeURIComponent(a.id)}`} className={buttonClasses('danger', 'md', big)}>
+            <AlertIcon size={18} />
+            Report damage
+          </Link>
+        ) : null}
+      </div>
+      <div className="grid gap-4 lg:grid-cols-2">
+        <AssetIdentity asset={a} />
+        <div className="flex flex-col gap-4">
+          <AssetCalibration asset={a} />
+          <AssetSpecs asset={a} />
+        </div>
+        {a.type === 'tip' ? <FieldTipValidations copy={copy} tip={a} /> : null}
+      </div>
+    </>
+  );
+}
+
+function ServerAsset({ id }: { id: string }) {
   const { user, organization } = useSession();
   const navigate = useNavigate();
   const asset = useAsset(id);

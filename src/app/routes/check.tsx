@@ -25,7 +25,7 @@ export default function CheckRoute() {
         <ArrowLeftIcon size={14} />
         {tag ?? 'The item'}
       </Link>
-      <PageHeader title={`${checkKindWords[c.kind]}${tag ? ` · ${tag}` : ''}`} description={`Recorded ${dateTime(c.performedAt)}.`} />
+      <PageHeader title={`${checkKindWords[c.kind]}${tag ? ` · ${tag}` : ''}`} description={`Performed ${dateTime(c.performedAt)}.`} />
       <div className="max-w-3xl rounded-lg border border-paper-line bg-card p-4">
         <CheckResult check={c} assetTag={tag} heldNotice={false} />
       </div>

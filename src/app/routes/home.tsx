@@ -16,6 +16,8 @@ import { RentalDeskPanels } from '../../features/rentals/components/rental-desk-
 import { todayIn } from '../../lib/bookings';
 import { IncidentList } from '../../features/incidents/components/incident-list';
 import type { Role } from '../../lib/roles';
+import { FieldHomePanels, PhonePanel } from '../../features/field/components/phone-panel';
+import { useOnline } from '../../lib/field/use-field-state';
 
 interface Panel {
   title: string;
@@ -153,11 +155,14 @@ function RecentIncidents() {
 
 export default function HomeRoute() {
   const { user } = useSession();
+  const online = useOnline();
   const home = homes[user.role];
+  const technician = user.role === 'technician';
   return (
     <>
       <PageHeader title={home.title} description={home.description} />
-      {user.role === 'technician' ? (
+      {technician ? <PhonePanel /> : null}
+      {technician ? (
         <Link
           to="/scan"
           className="mb-4 flex min-h-16 items-center gap-3 rounded-lg border-2 border-brass-deep bg-brass-wash px-4 py-3 text-lg font-bold text-ink-900 hover:bg-brass/30"
@@ -167,7 +172,8 @@ export default function HomeRoute() {
         </Link>
       ) : null}
       <div className="grid items-start gap-3 md:grid-cols-2 xl:grid-cols-3">
-        {home.panels.map((panel) =>
+        {technician && !online ? <FieldHomePanels /> : null}
+        {(technician && !online ? [] : home.panels).map((panel) =>
           panel.live ? (
             <div key={panel.title} className="contents">
               {panel.live()}

@@ -16,10 +16,50 @@ import { KitMembers } from '../../features/kits/components/kit-members';
 import { PackingList } from '../../features/kits/components/packing-list';
 import { ReadinessSummary } from '../../features/kits/components/readiness';
 import { ShippingSheetPanel } from '../../features/kits/components/shipping-sheet-panel';
+import { Notice } from '../../components/notice';
+import { useStoredCopy } from '../../features/field/api/get-field-copy';
+import { CopyAge } from '../../features/field/components/copy-age';
+import { FieldKitItems } from '../../features/field/components/field-kit';
+import { useOnline } from '../../lib/field/use-field-state';
 import { can } from '../../lib/roles';
 
+/** A kit's page: from the server with signal, from this phone's field copy (the kit carried) without. */
 export default function KitRoute() {
   const { id = '' } = useParams();
+  return useOnline() ? <ServerKit id={id} /> : <FieldKit id={id} />;
+}
+
+function FieldKit({ id }: { id: string }) {
+  const stored = useStoredCopy();
+  if (stored.isPending) return <LoadingPanel label="Loading the kit…" />;
+  const copy = stored.data?.copy;
+  const booking = copy && [...copy.bookings.now, ...copy.bookings.next].find((b) => b.kitId === id);
+  return (
+    <>
+      <PageHeader
+        title={booking?.kit?.name ?? 'Not on this phone'}
+        description={booking ? 'The kit as this phone keeps it for work without signal.' : undefined}
+      />
+      <div className="mb-3">
+        <CopyAge />
+      </div>
+      {booking && copy ? (
+        <section aria-labelledby="kit-items-heading" className="rounded-lg border border-paper-line bg-card p-4">
+          <h2 id="kit-items-heading" className="mb-2 text-lg font-bold">
+            {booking.assetIds.length} items
+          </h2>
+          <FieldKitItems items={copy.items.filter((i) => booking.assetIds.includes(i.id))} />
+        </section>
+      ) : (
+        <Notice tone="info" title="No signal">
+          Without signal this phone shows only the kit you carry now and next. Find signal to open other kits.
+        </Notice>
+      )}
+    </>
+  );
+}
+
+function ServerKit({ id }: { id: string }) {
   const { user, organization } = useSession();
   const canWrite = can(user.role, 'fleet.write');
   const kit = useKit(id);

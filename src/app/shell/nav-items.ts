@@ -24,6 +24,7 @@ export const navItems: readonly NavItem[] = [
   { to: '/invoices', label: 'Invoices', capability: 'reports.read' },
   { to: '/scan', label: 'Find by label', capability: 'fleet.read' },
   { to: '/incidents', label: 'Incidents', capability: 'fleet.read' },
+  { to: '/outbox', label: 'On this phone', capability: 'checks.record' },
   { to: '/users', label: 'Users', capability: 'users.manage' },
   { to: '/mailbox', label: 'Mailbox', capability: 'mailbox.read' },
   { to: '/admin/routines', label: 'Routines', capability: 'routines.run' },

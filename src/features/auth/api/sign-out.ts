@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
+import { eraseFieldData } from '../../../lib/field/outbox';
 import { authKeys } from './keys';
 
 export function signOut(): Promise<void> {
@@ -8,15 +9,16 @@ export function signOut(): Promise<void> {
 
 /**
  * Ends the session on the server, then (even if the server was unreachable)
- * calls `onSignedOut` — usually a navigation to /sign-in — and drops every
- * cached answer on this device.
+ * erases the field copy and outbox on this phone, calls `onSignedOut` — usually
+ * a navigation to /sign-in — and drops every cached answer on this device.
  */
 export function useSignOut({ onSignedOut }: { onSignedOut?: () => void } = {}) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationKey: [...authKeys.all, 'sign-out'],
     mutationFn: signOut,
-    onSettled: () => {
+    onSettled: async () => {
+      await eraseFieldData();
       onSignedOut?.();
       queryClient.removeQueries();
     },

@@ -1,30 +1,50 @@
+import { useQuery } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import { isApiError } from '../../../lib/api-client';
+import { readCopy } from '../../../lib/field/field-store';
 import { TimeZoneContext } from '../../../lib/format';
 import { LoadingPanel } from '../../../components/loading-panel';
+import { Notice } from '../../../components/notice';
 import { useMe } from '../api/get-me';
+import { authKeys } from '../api/keys';
 import { SecondStepOwed } from './second-step-owed';
 import { SessionContext } from './session-context';
 
-/** Renders its children only for a signed-in person; everyone else goes to /sign-in. Someone who owes the
- * second step their firm requires sets it up first (the server answers them nothing else meanwhile). */
+/**
+ * Renders its children only for a signed-in person; everyone else goes to /sign-in. Someone who owes the second step
+ * their firm requires sets it up first (the server answers them nothing else meanwhile). Without signal, the session kept
+ * with the phone's field copy stands in until the server answers again (it ends at sign-out, which erases the copy).
+ */
 export function RequireSession({ children }: { children: ReactNode }) {
   const me = useMe();
   const location = useLocation();
+  const noSignal = (me.isPending && me.fetchStatus === 'paused') || (me.isError && isApiError(me.error) && me.error.status === 0);
+  const kept = useQuery({
+    queryKey: authKeys.keptOnPhone(),
+    queryFn: async () => (await readCopy())?.session ?? null,
+    enabled: noSignal,
+    networkMode: 'always',
+    staleTime: Infinity,
+  });
+  const session = me.data ?? (noSignal ? kept.data : null);
 
-  if (me.isPending) {
-    return <LoadingPanel label="Opening Nestkeeper…" className="justify-center py-24" />;
+  if (session) {
+    return (
+      <SessionContext value={session}>
+        <TimeZoneContext value={session.organization.timeZone}>{session.secondStep?.owed ? <SecondStepOwed /> : children}</TimeZoneContext>
+      </SessionContext>
+    );
   }
-  if (me.isError) {
-    if (isApiError(me.error) && me.error.status === 401) {
-      return <Navigate to="/sign-in" replace state={{ from: location.pathname }} />;
-    }
-    throw me.error;
+  if (noSignal && !kept.isPending) {
+    return (
+      <Notice tone="info" title="No signal" className="m-4">
+        This phone has no copy of your kit yet. Open Nestkeeper once with signal and sign in; after that your kit, checks and damage reports work without
+        signal.
+      </Notice>
+    );
   }
-  return (
-    <SessionContext value={me.data}>
-      <TimeZoneContext value={me.data.organization.timeZone}>{me.data.secondStep.owed ? <SecondStepOwed /> : children}</TimeZoneContext>
-    </SessionContext>
-  );
+  if (me.isPending || noSignal) return <LoadingPanel label="Opening Nestkeeper…" className="justify-center py-24" />;
+  if (isApiError(me.error) && me.error.status === 401) return <Navigate to="/sign-in" replace state={{ from: location.pathname }} />;
+  throw me.error;
 }

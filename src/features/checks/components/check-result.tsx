@@ -52,6 +52,8 @@ export function CheckResult({ check, assetTag, heldNotice = true }: { check: Che
     { term: 'Decision rule', value: decisionRuleWords[r.decisionRule] },
     { term: 'Performed', value: dateTime(check.performedAt) },
   );
+  // A check recorded on a phone without signal reached the server later; both times are kept.
+  if (Date.parse(check.recordedAt) - Date.parse(check.performedAt) > 10 * 60_000) facts.push({ term: 'Reached Nestkeeper', value: dateTime(check.recordedAt) });
   if (check.note) facts.push({ term: 'Note', value: check.note });
 
   return (

@@ -64,18 +64,26 @@ function rulesFor(asset: AssetView, settings: FirmCheckSettings): CheckRules {
   };
 }
 
+/** A check the server refused, opened again as it was written (same id: the server stored nothing under it). */
+export type CheckCorrection = { id: string; values: CheckFormValues; performedAt: string };
+
 export function RecordCheckForm({
   asset,
   settings,
   probes,
   scaleBars,
   initialKind,
+  userId,
+  correcting,
 }: {
   asset: AssetView;
   settings: FirmCheckSettings;
   probes: AssetView[];
   scaleBars: AssetView[];
   initialKind?: string | null;
+  /** Who records it: the outbox sends a person's records only while they are signed in. */
+  userId: string;
+  correcting?: CheckCorrection;
 }) {
   const kinds = checkKindsFor(asset.type);
   const positions = useMemo(() => (asset.specs.positions as TipPosition[] | undefined) ?? [], [asset.specs.positions]);
@@ -84,7 +92,16 @@ export function RecordCheckForm({
   const create = useCreateCheck();
   const [problem, setProblem] = useState<string>();
   const [saved, setSaved] = useState<CheckView | null>(null);
+  const [waiting, setWaiting] = useState<CheckFormValues | null>(null);
   const [round, setRound] = useState(0);
+  // The check's id is made when the form opens: a second press of Save, or the outbox sending again, cannot make two.
+  const [recordId, setRecordId] = useState(() => correcting?.id ?? crypto.randomUUID());
+  const nextRound = () => {
+    setSaved(null);
+    setWaiting(null);
+    setRecordId(crypto.randomUUID());
+    setRound((r) => r + 1);
+  };
 
   if (!kinds.length) {
     return (
@@ -105,13 +122,40 @@ export function RecordCheckForm({
           <Link to={`/fleet/${asset.id}`} className={buttonClasses('primary', 'md', 'min-h-11')}>
             Back to {asset.assetTag}
           </Link>
-          <Button
-            className="min-h-11"
-            onClick={() => {
-              setSaved(null);
-              setRound((r) => r + 1);
-            }}
-          >
+          <Button className="min-h-11" onClick={nextRound}>
+            Record another check
+          </Button>
+        </div>
+      </section>
+    );
+  }
+
+  if (waiting) {
+    const preview = previewCheck(
+      waiting,
+      rules,
+      bars.find((b) => b.id === waiting.scaleBarId),
+    );
+    return (
+      <section aria-labelledby="queued-heading" className="flex flex-col gap-4 rounded-lg border-2 border-ink-900 bg-card p-4">
+        <h2 id="queued-heading" className="text-lg font-bold">
+          Saved on this phone — waiting for signal
+        </h2>
+        <p>
+          The check is kept on this phone and sent by itself when there is signal. The preview below is worked out here the same way the server works it out;
+          the server&rsquo;s decision is final and shows under “Records on this phone” once it arrives.
+        </p>
+        {preview.decision === 'fail' ? (
+          <Notice tone="error" title={`Do not use ${asset.assetTag}`}>
+            The preview says it fails. It is put on hold, and the shop manager and the owner are e-mailed, as soon as the check reaches the server.
+          </Notice>
+        ) : null}
+        <CheckPreview preview={preview} rule={rules.decisionRule} />
+        <div className="flex flex-wrap gap-2">
+          <Link to={`/fleet/${asset.id}`} className={buttonClasses('primary', 'md', 'min-h-11')}>
+            Back to {asset.assetTag}
+          </Link>
+          <Button className="min-h-11" onClick={nextRound}>
             Record another check
           </Button>
         </div>
@@ -120,7 +164,7 @@ export function RecordCheckForm({
   }
 
   const firstKind = kinds.includes(initialKind as CheckKind) ? (initialKind as CheckKind) : kinds[0];
-  const initialValues: CheckFormValues = {
+  const initialValues: CheckFormValues = correcting?.values ?? {
     kind: firstKind,
     position: positions.length === 1 ? positions[0] : '',
     probeId: '',
@@ -147,7 +191,22 @@ export function RecordCheckForm({
       onSubmit={async (values, helpers) => {
         setProblem(undefined);
         try {
-          setSaved(await create.mutateAsync(checkPayloadFrom(values, asset.id)));
+          const title = [
+            checkKindWords[values.kind],
+            asset.assetTag,
+            values.kind === 'tip_validation' && values.position ? positionWords[values.position as TipPosition] : null,
+          ]
+            .filter(Boolean)
+            .join(' · ');
+          const outcome = await create.mutateAsync({
+            // The time the work was done, kept apart from the time it reaches the server.
+            payload: { ...checkPayloadFrom(values, asset.id), id: recordId, performedAt: correcting?.performedAt ?? new Date().toISOString() },
+            userId,
+            title,
+            draft: values,
+          });
+          if (outcome.state === 'sent') setSaved(outcome.check);
+          else setWaiting(values);
           window.scrollTo({ top: 0 });
         } catch (error) {
           setProblem(

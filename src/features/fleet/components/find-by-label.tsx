@@ -17,10 +17,13 @@ export function FindByLabel({
   initialCode = '',
   initialProblem,
   onFound,
+  lookup,
 }: {
   initialCode?: string;
   initialProblem?: string;
   onFound: (asset: AssetView) => void;
+  /** Where to look the code up; the server's lookup unless given (without signal: the phone's copy of the kit carried). */
+  lookup?: (code: string) => Promise<AssetView>;
 }) {
   const queryClient = useQueryClient();
   const inputId = useId();
@@ -39,11 +42,11 @@ export function FindByLabel({
     setProblem(undefined);
     setBusy(true);
     try {
-      const asset = await queryClient.fetchQuery(lookupAssetQueryOptions(wanted));
+      const asset = lookup ? await lookup(wanted) : await queryClient.fetchQuery(lookupAssetQueryOptions(wanted));
       onFound(asset);
     } catch (error) {
       setProblem(
-        isApiError(error) && error.status === 404
+        isApiError(error) && error.code === 'not_found'
           ? `Nothing in your fleet matches “${wanted}”. Check the tag and try again.`
           : isApiError(error)
             ? error.message

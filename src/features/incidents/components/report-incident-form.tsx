@@ -16,9 +16,8 @@ import type { IncidentView } from '../../../../shared/incidents/views';
 import { incidentKindChoices, incidentKindWords } from './incident-words';
 import { PhotoPicker } from './photo-picker';
 import { MAX_PHOTOS, photoProblem } from './photo-rules';
-import { UploadProgress } from '../../../components/upload-progress';
 
-interface Values {
+export interface IncidentFormValues {
   kind: IncidentKind | '';
   description: string;
   occurredAt: string;
@@ -115,13 +114,32 @@ function BigField({ name, label, hint, type = 'text', multiline = false }: { nam
   );
 }
 
-/** Report damage or loss from a phone: big targets, high contrast, photos with upload progress. */
-export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; bookingId?: string | null }) {
-  const [progress, setProgress] = useState<number | null>(null);
-  const report = useReportIncident((f) => setProgress(f));
-  const [photos, setPhotos] = useState<File[]>([]);
+/** A report the server refused, opened again as it was written, photos included (same id: the server stored nothing under it). */
+export type IncidentCorrection = { id: string; values: IncidentFormValues; photos: File[] };
+
+/**
+ * Report damage or loss from a phone: big targets, high contrast. The report is saved on the phone first and sent
+ * at once when there is signal, or by itself later.
+ */
+export function ReportIncidentForm({
+  asset,
+  bookingId,
+  userId,
+  correcting,
+}: {
+  asset: AssetView;
+  bookingId?: string | null;
+  /** Who reports it: the outbox sends a person's records only while they are signed in. */
+  userId: string;
+  correcting?: IncidentCorrection;
+}) {
+  const report = useReportIncident();
+  const [photos, setPhotos] = useState<File[]>(correcting?.photos ?? []);
   const [problem, setProblem] = useState<string>();
   const [sent, setSent] = useState<IncidentView | null>(null);
+  const [waiting, setWaiting] = useState(false);
+  // The report's id is made when the form opens: pressing Send twice, or the outbox sending again, cannot make two.
+  const [recordId] = useState(() => correcting?.id ?? crypto.randomUUID());
 
   const photoProblems = [
     ...photos.map(photoProblem).filter((p): p is string => p !== null),
@@ -156,9 +174,28 @@ export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; boo
     );
   }
 
+  if (waiting) {
+    return (
+      <section aria-labelledby="queued-heading" className="flex flex-col gap-4 rounded-lg border-2 border-ink-900 bg-card p-4 text-lg">
+        <h2 id="queued-heading" className="text-xl font-bold">
+          Saved on this phone — waiting for signal
+        </h2>
+        <p>
+          The report{photos.length ? ` and its ${photos.length} photo${photos.length === 1 ? '' : 's'}` : ''} stay on this phone and are sent by themselves when
+          there is signal. Then <strong className="font-mono">{asset.assetTag}</strong> goes on hold and the shop manager and the owner are e-mailed.
+        </p>
+        {asset.type === 'battery' ? <BatteryCaution /> : null}
+        <p className="text-base text-ink-700">Until then, keep the item apart and do not use it.</p>
+        <Link to={`/fleet/${asset.id}`} className={buttonClasses('primary', 'md', 'min-h-12 text-lg')}>
+          Back to {asset.assetTag}
+        </Link>
+      </section>
+    );
+  }
+
   return (
-    <Formik<Values>
-      initialValues={{ kind: '', description: '', occurredAt: localNow(), location: asset.location ?? '' }}
+    <Formik<IncidentFormValues>
+      initialValues={correcting?.values ?? { kind: '', description: '', occurredAt: localNow(), location: asset.location ?? '' }}
       validationSchema={schema}
       onSubmit={async (values, helpers) => {
         setProblem(undefined);
@@ -166,9 +203,12 @@ export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; boo
           setProblem('Fix the photos first (see under “Photos”).');
           return;
         }
-        setProgress(0);
         try {
-          const incident = await report.mutateAsync({
+          const outcome = await report.mutateAsync({
+            id: recordId,
+            userId,
+            title: `${incidentKindWords[values.kind as IncidentKind]} · ${asset.assetTag}`,
+            draft: values,
             assetId: asset.id,
             kind: values.kind as IncidentKind,
             description: values.description.trim(),
@@ -177,7 +217,8 @@ export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; boo
             bookingId: bookingId ?? undefined,
             photos,
           });
-          setSent(incident);
+          if (outcome.state === 'sent') setSent(outcome.incident);
+          else setWaiting(true);
           window.scrollTo({ top: 0 });
         } catch (error) {
           setProblem(
@@ -186,8 +227,6 @@ export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; boo
               labels: { description: 'What happened:', occurredAt: 'When:', location: 'Where:' },
             }),
           );
-        } finally {
-          setProgress(null);
         }
       }}
     >
@@ -215,7 +254,6 @@ export function ReportIncidentForm({ asset, bookingId }: { asset: AssetView; boo
           <BigField name="occurredAt" label="When" type="datetime-local" />
           <BigField name="location" label="Where" hint="Site, building or room." />
           <PhotoPicker files={photos} onChange={setPhotos} problems={photoProblems} />
-          {progress !== null ? <UploadProgress progress={progress} sending="Sending…" sent="Sent, waiting for the server…" large /> : null}
           <Button type="submit" variant="primary" busy={isSubmitting} className="min-h-14 w-full text-xl sm:w-auto sm:px-10">
             Send report
           </Button>

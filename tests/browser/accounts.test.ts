@@ -102,6 +102,8 @@ describe('accounts a firm runs by itself, in a real browser', () => {
     const page = await context.newPage();
     await page.goto(`${rig.baseUrl}/sign-in`);
     await page.getByRole('link', { name: 'Forgot your password?' }).click();
+    // The sign-in form has an "E-mail" field too: wait for the new page before typing.
+    await eventually(() => heading(page).innerText()).toBe('Forgot your password?');
     await page.getByLabel('E-mail').fill('manager@demo.test');
     await page.getByRole('button', { name: 'Send me a link' }).click();
     await eventually(() => page.locator('main').innerText()).toMatch(/Check your mail/);

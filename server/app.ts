@@ -55,6 +55,7 @@ import { checksRoutes } from './checks/checks.routes';
 import { HoldsService } from './holds/holds.service';
 import { holdsRoutes } from './holds/holds.routes';
 import { IncidentsService } from './incidents/incidents.service';
+import { RecordsService, recordsRoutes } from './records';
 import { incidentsRoutes } from './incidents/incidents.routes';
 import { UsersService } from './users/users.service';
 import { usersRoutes } from './users/users.routes';
@@ -135,6 +136,7 @@ export function buildApp({ config, db, mail }: AppDeps): { app: Express; routine
     '/api',
     calibrationRoutes({ calibration: new CalibrationService(db), impact: new ImpactService(db), lab: new LabService(db), review: new ReviewService(db) }),
   );
+  app.use('/api', recordsRoutes(new RecordsService(db, publicUrl)));
   app.use('/api', rentalsRoutes({ customers: new CustomersService(db), rateCards: new RateCardsService(db), rentals }));
   app.use('/api', billingRoutes({ deposits, invoices: new InvoicesService(db), reports: new BillingReportsService(db) }));
   app.use('/api', unknownApiRoute);

@@ -2,5 +2,5 @@
 import { User } from './user.entity';
 
 export const userEntities = [User];
-export { activeStaff, findPerson, publicUser, type PublicUser } from './people';
+export { activeStaff, findPerson, peopleNames, publicUser, type PublicUser } from './people';
 export { accountByEmail, calendarOwner, endSessions, ownAccount, replacePasswordHash, setCalendarToken, type Account } from './accounts';

@@ -4,4 +4,11 @@ import { ImpactReview, ImpactReviewItem } from './impact-review.entity';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
 
 export const calibrationEntities = [CertificateFile, CalibrationEvent, LabTrip, LabTripItem, ImpactReview, ImpactReviewItem];
-export { calibrationsForRecord, certificateBytes, impactReviewsForRecord, outOfToleranceAssetIds, type CalibrationEntry, type ImpactReviewEntry } from './record-entries';
+export {
+  calibrationsForRecord,
+  certificateBytes,
+  impactReviewsForRecord,
+  outOfToleranceAssetIds,
+  type CalibrationEntry,
+  type ImpactReviewEntry,
+} from './record-entries';

@@ -55,7 +55,9 @@ function certificateWhere(view: EquipmentRecordView, id: string, input: RecordPd
   const fileLine = `"${c.certificate.fileName}", ${c.certificate.sizeBytes} bytes, SHA-256 ${c.certificate.sha256}`;
   if (!input.placement.annex) return `In this pack as ${input.placement.packFile(id)} (${fileLine}).`;
   const a = annexed.find((x) => x.calibrationId === id);
-  return a ? `Annexed on pages ${a.firstPage}–${a.firstPage + a.pageCount - 1} (${fileLine}).` : `Not annexed: ${certificateStatusText.withheld} (${fileLine}).`;
+  return a
+    ? `Annexed on pages ${a.firstPage}–${a.firstPage + a.pageCount - 1} (${fileLine}).`
+    : `Not annexed: ${certificateStatusText.withheld} (${fileLine}).`;
 }
 
 function calibrationsSection(doc: Pdf, input: RecordPdfInput, annexed: Annexed[]) {
@@ -63,7 +65,11 @@ function calibrationsSection(doc: Pdf, input: RecordPdfInput, annexed: Annexed[]
   if (!view.calibrations.length) return none(doc, 'No calibration is on record for this item in the period, so there is no certificate to show.');
   for (const c of view.calibrations) {
     keepTogether(doc, 110);
-    doc.font('Helvetica-Bold').fontSize(10).fillColor(INK).text(`${calendarDate(c.performedOn)} · ${c.provider} · certificate `, { continued: true });
+    doc
+      .font('Helvetica-Bold')
+      .fontSize(10)
+      .fillColor(INK)
+      .text(`${calendarDate(c.performedOn)} · ${c.provider} · certificate `, { continued: true });
     doc.fillColor(BRASS).text(c.certificateNumber, { link: `${input.publicUrl.replace(/\/$/, '')}${c.certificateUrl}`, underline: true });
     doc.fillColor(INK).font('Helvetica').fontSize(9);
     facts(doc, [
@@ -88,7 +94,9 @@ function checksSection(doc: Pdf, input: RecordPdfInput) {
       .font('Helvetica-Bold')
       .fontSize(10)
       .fillColor(INK)
-      .text(`${checkKindTitles[c.kind]}${c.position ? ` (${c.position})` : ''} · ${firmDateTime(c.performedAt, timeZone)} · ${c.decision === 'pass' ? 'PASS' : 'FAIL'}`);
+      .text(
+        `${checkKindTitles[c.kind]}${c.position ? ` (${c.position})` : ''} · ${firmDateTime(c.performedAt, timeZone)} · ${c.decision === 'pass' ? 'PASS' : 'FAIL'}`,
+      );
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['With', c.relatedAssetTag],
@@ -110,11 +118,18 @@ function holdsSection(doc: Pdf, input: RecordPdfInput) {
   if (!view.holds.length) return none(doc, 'The item was not on hold in the period.');
   for (const h of view.holds) {
     keepTogether(doc, 80);
-    doc.font('Helvetica-Bold').fontSize(10).fillColor(INK).text(`${words(h.reason)} hold · ${h.summary}`);
+    doc
+      .font('Helvetica-Bold')
+      .fontSize(10)
+      .fillColor(INK)
+      .text(`${words(h.reason)} hold · ${h.summary}`);
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['Held', `${firmDateTime(h.startedAt, timeZone)} by ${h.startedBy ?? 'someone no longer on record'}`],
-      ['Released', h.releasedAt ? `${firmDateTime(h.releasedAt, timeZone)} by ${h.releasedBy ?? 'someone no longer on record'}` : 'Not released: still on hold'],
+      [
+        'Released',
+        h.releasedAt ? `${firmDateTime(h.releasedAt, timeZone)} by ${h.releasedBy ?? 'someone no longer on record'}` : 'Not released: still on hold',
+      ],
       ['Evidence', h.releasedAt ? h.releaseEvidence.join('\n') || 'No evidence is on record for this release.' : null],
       ['Release note', h.releaseNote],
     ]);
@@ -130,7 +145,11 @@ function incidentsSection(doc: Pdf, input: RecordPdfInput) {
   if (!view.incidents.length) return none(doc, 'No damage, loss or malfunction was reported for this item in the period.');
   for (const i of view.incidents) {
     keepTogether(doc, 90);
-    doc.font('Helvetica-Bold').fontSize(10).fillColor(INK).text(`${words(i.kind)} · ${firmDateTime(i.occurredAt, timeZone)} · ${words(i.state)}`);
+    doc
+      .font('Helvetica-Bold')
+      .fontSize(10)
+      .fillColor(INK)
+      .text(`${words(i.kind)} · ${firmDateTime(i.occurredAt, timeZone)} · ${words(i.state)}`);
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['Description', i.description],
@@ -267,7 +286,12 @@ const footerText = (view: EquipmentRecordView, page: number, total: number) =>
 function recordPages(input: RecordPdfInput, annexed: Annexed[], annexPages: number) {
   const { view } = input;
   return renderPdf(
-    { size: 'A4', margins: { top: MARGIN, left: MARGIN, right: MARGIN, bottom: MARGIN + FOOTER }, bufferPages: true, info: { Title: `Equipment record ${view.asset.assetTag}` } },
+    {
+      size: 'A4',
+      margins: { top: MARGIN, left: MARGIN, right: MARGIN, bottom: MARGIN + FOOTER },
+      bufferPages: true,
+      info: { Title: `Equipment record ${view.asset.assetTag}` },
+    },
     (doc) => {
       doc.font('Helvetica').fontSize(9).fillColor(MUTED).text(view.organization.name);
       doc.font('Helvetica-Bold').fontSize(16).fillColor(INK).text(`Equipment record — ${view.asset.assetTag}`);
@@ -300,7 +324,11 @@ function recordPages(input: RecordPdfInput, annexed: Annexed[], annexPages: numb
       const width = contentWidth(doc);
       const line = (text: string, page: string, i: number) => {
         const y = tocTop + i * 12;
-        doc.font('Helvetica').fontSize(9).fillColor(INK).text(text, left, y, { width: width - 20 * MM, lineBreak: false });
+        doc
+          .font('Helvetica')
+          .fontSize(9)
+          .fillColor(INK)
+          .text(text, left, y, { width: width - 20 * MM, lineBreak: false });
         doc.text(page, left + width - 20 * MM, y, { width: 20 * MM, align: 'right', lineBreak: false });
       };
       sections.forEach((s, i) => line(`${i + 1}. ${s.title}`, String(starts[i]), i));

@@ -33,7 +33,8 @@ export const certificatePath = (r: EquipmentRecordView, calibrationId: string) =
 export async function packItems(tx: Scoped, ctx: OrgContext, query: AuditPackQuery): Promise<string[]> {
   const period = { from: query.from, to: query.to };
   if (query.scope === 'kit') await getKit(tx, query.kitId!);
-  if (query.scope !== 'flagged') return assetIdsSelected(tx, query.scope === 'kit' ? { kitId: query.kitId } : query.scope === 'type' ? { type: query.type } : {});
+  if (query.scope !== 'flagged')
+    return assetIdsSelected(tx, query.scope === 'kit' ? { kitId: query.kitId } : query.scope === 'type' ? { type: query.type } : {});
   const ids = new Set([
     ...(await outOfToleranceAssetIds(tx, period)),
     ...(await failedCheckAssetIds(tx, period, ctx.timeZone)),
@@ -99,7 +100,18 @@ export async function writeAuditPack(out: Writable, ids: string[], query: AuditP
   });
   archive.pipe(out);
   const index: unknown[][] = [];
-  const summary: AuditSummary = { firm: ctx.name, period, scope: sources.scopeText, items: ids.length, findings: [], holds: [], overdue: [], gaps: [], calibrations: 0, certificates: 0 };
+  const summary: AuditSummary = {
+    firm: ctx.name,
+    period,
+    scope: sources.scopeText,
+    items: ids.length,
+    findings: [],
+    holds: [],
+    overdue: [],
+    gaps: [],
+    calibrations: 0,
+    certificates: 0,
+  };
   for (let start = 0; start < ids.length; start += BATCH) {
     const records = await sources.read((tx) => assembleRecords(tx, ctx, ids.slice(start, start + BATCH), period, publicUrl));
     for (const { view, certificates, thumbnails } of records) {
@@ -123,7 +135,12 @@ export async function writeAuditPack(out: Writable, ids: string[], query: AuditP
         const bytes = certificates.get(c.id);
         if (!c.certificate || !bytes) {
           index.push(row('', 'certificate', c.certificateNumber, '', '', 'No certificate file is on record for this calibration.'));
-          summary.gaps.push({ assetTag: a.assetTag, certificateNumber: c.certificateNumber, performedOn: c.performedOn, problem: 'no certificate file on record' });
+          summary.gaps.push({
+            assetTag: a.assetTag,
+            certificateNumber: c.certificateNumber,
+            performedOn: c.performedOn,
+            problem: 'no certificate file on record',
+          });
           continue;
         }
         const path = certificatePath(view, c.id);
@@ -131,7 +148,12 @@ export async function writeAuditPack(out: Writable, ids: string[], query: AuditP
         summary.certificates += 1;
         const note = c.certificate.readable ? 'As stored.' : 'As stored; the file does not open as a PDF.';
         if (!c.certificate.readable)
-          summary.gaps.push({ assetTag: a.assetTag, certificateNumber: c.certificateNumber, performedOn: c.performedOn, problem: 'certificate file cannot be read' });
+          summary.gaps.push({
+            assetTag: a.assetTag,
+            certificateNumber: c.certificateNumber,
+            performedOn: c.performedOn,
+            problem: 'certificate file cannot be read',
+          });
         index.push(row(path, 'certificate', c.certificateNumber, bytes.length, c.certificate.sha256, note));
       }
       const pdf = await equipmentRecordPdf({
@@ -146,7 +168,9 @@ export async function writeAuditPack(out: Writable, ids: string[], query: AuditP
       const recordPath = `records/${safeName(a.assetTag)}.pdf`;
       await add(archive, pdf, { name: recordPath, store: true });
       const required = a.calibration.required && !view.calibrations.length;
-      index.push(row(recordPath, 'equipment record', '', pdf.length, sha256(pdf), required ? 'Needs calibration, but no certificate is on record for the period.' : ''));
+      index.push(
+        row(recordPath, 'equipment record', '', pdf.length, sha256(pdf), required ? 'Needs calibration, but no certificate is on record for the period.' : ''),
+      );
       collectSummary(summary, view, ctx.today);
     }
   }
@@ -163,7 +187,12 @@ function collectSummary(summary: AuditSummary, view: EquipmentRecordView, today:
   const tag = view.asset.assetTag;
   for (const c of view.calibrations)
     if (c.asFound === 'out_of_tolerance' && c.performedOn >= from)
-      summary.findings.push({ assetTag: tag, foundOn: c.performedOn, how: `as found at calibration, certificate ${c.certificateNumber}`, review: reviewText(view, c.id) });
+      summary.findings.push({
+        assetTag: tag,
+        foundOn: c.performedOn,
+        how: `as found at calibration, certificate ${c.certificateNumber}`,
+        review: reviewText(view, c.id),
+      });
   for (const c of view.checks)
     if (c.decision === 'fail')
       summary.findings.push({ assetTag: tag, foundOn: c.performedAt.slice(0, 10), how: `failed ${c.kind.replace(/_/g, ' ')}`, review: reviewText(view, c.id) });

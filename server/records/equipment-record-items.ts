@@ -93,12 +93,13 @@ export function equipmentRecordItems(a: AssetView, s: Sections): EquipmentRecord
     {
       clause: '6.4.13 h)',
       requirement: 'Details of any damage, malfunction, modification to, or repair of, the equipment',
-      value: text(
-        a.status === 'retired' ? `Retired: ${a.retiredReason}` : specs.damaged ? 'Marked damaged' : null,
-        s.incidents.length ? count(s.incidents.length, 'incident') : null,
-        s.holds.length ? count(s.holds.length, 'hold') : null,
-        s.impactReviews.length ? count(s.impactReviews.length, 'impact review') : null,
-      ) ?? 'None recorded',
+      value:
+        text(
+          a.status === 'retired' ? `Retired: ${a.retiredReason}` : specs.damaged ? 'Marked damaged' : null,
+          s.incidents.length ? count(s.incidents.length, 'incident') : null,
+          s.holds.length ? count(s.holds.length, 'hold') : null,
+          s.impactReviews.length ? count(s.impactReviews.length, 'impact review') : null,
+        ) ?? 'None recorded',
     },
   ];
 }

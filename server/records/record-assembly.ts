@@ -2,14 +2,7 @@ import type { AssetView } from '../../shared/assets/views';
 import type { AsFound } from '../../shared/calibration/interval-review';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
 import { checkInputLines, checkResultLines } from '../../shared/records/check-lines';
-import type {
-  EquipmentRecordView,
-  RecordCalibration,
-  RecordHold,
-  RecordIntervalChange,
-  RecordPeriod,
-  ReferenceArtefact,
-} from '../../shared/records/views';
+import type { EquipmentRecordView, RecordCalibration, RecordHold, RecordIntervalChange, RecordPeriod, ReferenceArtefact } from '../../shared/records/views';
 import { assetAuditLines, type AuditLine } from '../audit/audit.service';
 import { calibrationsForRecord, certificateBytes, impactReviewsForRecord, type CalibrationEntry } from '../calibration';
 import { checksForRecord } from '../checks';
@@ -85,7 +78,9 @@ function evidenceWords(hold: HoldEntry, calibrations: CalibrationEntry[]): strin
   return (hold.releaseEvidence?.evidence ?? []).map((e) => {
     if (e.kind === 'calibration') {
       const c = calibrations.find((x) => x.id === e.id);
-      return c ? `Calibration of ${c.performedOn}, certificate ${c.certificateNumber} (as left ${c.asLeft.replace(/_/g, ' ')})` : `Calibration of ${e.performedAt.slice(0, 10)}`;
+      return c
+        ? `Calibration of ${c.performedOn}, certificate ${c.certificateNumber} (as left ${c.asLeft.replace(/_/g, ' ')})`
+        : `Calibration of ${e.performedAt.slice(0, 10)}`;
     }
     const title = checkKindTitles[e.kind as keyof typeof checkKindTitles] ?? e.kind;
     return `Passing ${title.toLowerCase()} of ${e.performedAt.slice(0, 10)}${e.position ? ` (${e.position})` : ''}`;
@@ -136,17 +131,23 @@ export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: str
     custodyForRecord(tx, assetIds, period, tz),
     assetAuditLines(tx, assetIds, intervalActions, period, tz),
   ]);
-  const names = await peopleNames(tx, [
-    ...calibrations.map((c) => c.recordedById),
-    ...checks.map((c) => c.performedById),
-    ...holds.flatMap((h) => [h.startedById, h.releasedById ?? '']),
-    ...incidents.map((i) => i.reportedById),
-    ...reviews.flatMap((r) => r.bookings.map((b) => b.assessedById ?? '')),
-    ...custody.map((c) => c.actorId ?? ''),
-    ...audit.map((a) => a.actorId ?? ''),
-  ].filter(Boolean));
+  const names = await peopleNames(
+    tx,
+    [
+      ...calibrations.map((c) => c.recordedById),
+      ...checks.map((c) => c.performedById),
+      ...holds.flatMap((h) => [h.startedById, h.releasedById ?? '']),
+      ...incidents.map((i) => i.reportedById),
+      ...reviews.flatMap((r) => r.bookings.map((b) => b.assessedById ?? '')),
+      ...custody.map((c) => c.actorId ?? ''),
+      ...audit.map((a) => a.actorId ?? ''),
+    ].filter(Boolean),
+  );
   const who = (id: string | null) => (id ? (names.get(id) ?? null) : null);
-  const thumbnails = await photoThumbnails(tx, incidents.flatMap((i) => i.photos.filter((p) => p.hasThumbnail).map((p) => p.id)));
+  const thumbnails = await photoThumbnails(
+    tx,
+    incidents.flatMap((i) => i.photos.filter((p) => p.hasThumbnail).map((p) => p.id)),
+  );
   const byCal = groupBy(calibrations);
   const byCheck = groupBy(checks);
   const byHold = groupBy(holds);

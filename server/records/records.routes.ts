@@ -11,7 +11,13 @@ export function recordsRoutes(records: RecordsService): Router {
   endpoint(
     router,
     at,
-    { method: 'get', path: '/assets/:id/record', summary: 'Equipment record (ISO/IEC 17025:2017 §6.4.13), optionally for a period', access: 'fleet.read', query: recordPeriodQuery },
+    {
+      method: 'get',
+      path: '/assets/:id/record',
+      summary: 'Equipment record (ISO/IEC 17025:2017 §6.4.13), optionally for a period',
+      access: 'fleet.read',
+      query: recordPeriodQuery,
+    },
     ({ actor, params, query }) => records.record(actor, params.id, query),
   );
   endpoint(
@@ -32,7 +38,13 @@ export function recordsRoutes(records: RecordsService): Router {
   endpoint(
     router,
     at,
-    { method: 'get', path: '/audit-pack.zip', summary: 'The audit pack for a period and a set of items (ZIP, streamed)', access: 'audit.pack', query: auditPackQuery },
+    {
+      method: 'get',
+      path: '/audit-pack.zip',
+      summary: 'The audit pack for a period and a set of items (ZIP, streamed)',
+      access: 'audit.pack',
+      query: auditPackQuery,
+    },
     async ({ actor, query, res }) => {
       const pack = await records.prepareAuditPack(actor, query);
       res

@@ -30,7 +30,8 @@ export function checkInputLines(kind: string, inputs: Loose): string[] {
       ...common,
     ];
   }
-  if (kind === 'two_face') return [...present([point(inputs.front) && `Front face ${point(inputs.front)}`, point(inputs.back) && `Back face ${point(inputs.back)}`]), ...common];
+  if (kind === 'two_face')
+    return [...present([point(inputs.front) && `Front face ${point(inputs.front)}`, point(inputs.back) && `Back face ${point(inputs.back)}`]), ...common];
   const bar = inputs.scaleBar as Loose | undefined;
   return [
     ...present([

@@ -17,13 +17,19 @@ describe('overdue days in a period', () => {
   const year = { from: '2025-01-01', to: '2025-12-31' };
 
   it('counts nothing while every day is covered', () => {
-    const coverage = [{ performedOn: '2024-06-01', dueOn: '2025-06-01' }, { performedOn: '2025-05-20', dueOn: '2026-05-20' }];
+    const coverage = [
+      { performedOn: '2024-06-01', dueOn: '2025-06-01' },
+      { performedOn: '2025-05-20', dueOn: '2026-05-20' },
+    ];
     expect(overdueDays(year, coverage)).toBe(0);
     expect(byEveryDay(year, coverage)).toBe(0);
   });
 
   it('counts the days between a lapsed due date and the next calibration (31 days in March, from memory of the calendar)', () => {
-    const coverage = [{ performedOn: '2024-02-28', dueOn: '2025-02-28' }, { performedOn: '2025-04-01', dueOn: '2026-04-01' }];
+    const coverage = [
+      { performedOn: '2024-02-28', dueOn: '2025-02-28' },
+      { performedOn: '2025-04-01', dueOn: '2026-04-01' },
+    ];
     expect(overdueDays(year, coverage)).toBe(31);
     expect(overdueDays(year, coverage)).toBe(byEveryDay(year, coverage));
   });
@@ -42,9 +48,15 @@ describe('overdue days in a period', () => {
       const start = addDays(parseISO('2023-01-01'), Math.floor(next() * 700));
       const coverage = Array.from({ length: Math.floor(next() * 4) }, () => {
         const performed = addDays(start, Math.floor(next() * 500) - 200);
-        return { performedOn: formatISO(performed, { representation: 'date' }), dueOn: formatISO(addDays(performed, Math.floor(next() * 400)), { representation: 'date' }) };
+        return {
+          performedOn: formatISO(performed, { representation: 'date' }),
+          dueOn: formatISO(addDays(performed, Math.floor(next() * 400)), { representation: 'date' }),
+        };
       });
-      const period = { from: formatISO(start, { representation: 'date' }), to: formatISO(addDays(start, Math.floor(next() * 400)), { representation: 'date' }) };
+      const period = {
+        from: formatISO(start, { representation: 'date' }),
+        to: formatISO(addDays(start, Math.floor(next() * 400)), { representation: 'date' }),
+      };
       expect(overdueDays(period, coverage)).toBe(byEveryDay(period, coverage));
     }
   });

@@ -21,7 +21,8 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const assetByTag = async (tag: string) => (await t.api.get(`/api/assets?q=${tag}`).set(bearer(manager))).body.items.find((a: { assetTag: string }) => a.assetTag === tag);
+const assetByTag = async (tag: string) =>
+  (await t.api.get(`/api/assets?q=${tag}`).set(bearer(manager))).body.items.find((a: { assetTag: string }) => a.assetTag === tag);
 const recordOf = async (id: string, query = '') => (await t.api.get(`/api/assets/${id}/record${query}`).set(bearer(manager))).body as EquipmentRecordView;
 const pdfOf = async (id: string) => (await t.api.get(`/api/assets/${id}/record.pdf`).set(bearer(manager)).buffer(true).parse(binaryBody)).body as Buffer;
 const pageTexts = (pdf: Buffer) => {
@@ -46,10 +47,13 @@ describe('the equipment record of the tracker found out of tolerance', () => {
 
   it('lists the certificate with both results, the length check and the impact review with its assessment, each with who and when', async () => {
     const record = await recordOf(trk.id);
-    const calibrations = (await t.api.get(`/api/assets/${trk.id}/calibrations`).set(bearer(manager))).body.items as { certificateNumber: string; asFound: string }[];
+    const calibrations = (await t.api.get(`/api/assets/${trk.id}/calibrations`).set(bearer(manager))).body.items as {
+      certificateNumber: string;
+      asFound: string;
+    }[];
     const oot = calibrations.find((c) => c.asFound === 'out_of_tolerance')!;
     const found = record.calibrations.find((c) => c.certificateNumber === oot.certificateNumber)!;
-    expect(found).toMatchObject({ asFound: 'out_of_tolerance', asLeft: 'in_tolerance', recordedBy: 'Moss Ashdown' });
+    expect(found).toMatchObject({ asFound: 'out_of_tolerance', asLeft: 'in_tolerance', recordedBy: 'Idris Penvale' });
     expect(found.certificateUrl).toMatch(/^\/api\/calibrations\/.+\/certificate\.pdf$/);
     expect(found.certificate).toMatchObject({ readable: true });
     expect(found.adjustment).toContain('found out of tolerance, left in tolerance');
@@ -63,7 +67,7 @@ describe('the equipment record of the tracker found out of tolerance', () => {
 
     const impact = record.impactReviews.find((r) => r.id === review.id)!;
     expect(impact).toMatchObject({ trigger: 'calibration', state: 'open', foundOn: found.performedOn });
-    expect(impact.bookings[0]).toMatchObject({ assessment: 'remeasure_offered', note: 'Bore positions re-measured on site', assessedBy: 'Rowan Thistlewood' });
+    expect(impact.bookings[0]).toMatchObject({ assessment: 'remeasure_offered', note: 'Bore positions re-measured on site', assessedBy: 'Maren Holloway' });
     expect(record.items.find((i) => i.clause === '6.4.13 c)')?.value).toContain(oot.certificateNumber);
     expect(record.custody.length).toBeGreaterThan(0);
   });
@@ -73,7 +77,16 @@ describe('the equipment record of the tracker found out of tolerance', () => {
     const pdf = await pdfOf(trk.id);
     const text = pdfText(pdf);
     const oot = record.calibrations.find((c) => c.asFound === 'out_of_tolerance')!;
-    for (const fact of [oot.certificateNumber, 'As found out of tolerance', 'As left in tolerance', 'Length check', 'BAR-001', 'Bar temperature 44 °C', 're-measurement offered: Bore positions re-measured on site', 'Contents'])
+    for (const fact of [
+      oot.certificateNumber,
+      'As found out of tolerance',
+      'As left in tolerance',
+      'Length check',
+      'BAR-001',
+      'Bar temperature 44 °C',
+      're-measurement offered: Bore positions re-measured on site',
+      'Contents',
+    ])
       expect(text).toContain(fact);
     const pages = pageTexts(pdf);
     expect(pages.length).toBeGreaterThan(1);
@@ -99,7 +112,13 @@ describe('nothing missing silently', () => {
       await t.api
         .post('/api/assets')
         .set(bearer(manager))
-        .send({ type: 'scale_bar', assetTag: 'BAR-R1', serialNumber: 'R1', specs: { certifiedLengthMm: 1200.004, expansionPpmPerK: 0.6 }, calibration: { required: true, intervalMonths: 12 } })
+        .send({
+          type: 'scale_bar',
+          assetTag: 'BAR-R1',
+          serialNumber: 'R1',
+          specs: { certifiedLengthMm: 1200.004, expansionPpmPerK: 0.6 },
+          calibration: { required: true, intervalMonths: 12 },
+        })
     ).body;
     const empty = await recordOf(created.id);
     expect(empty.calibrations).toEqual([]);

@@ -56,7 +56,7 @@ function certificateWhere(view: EquipmentRecordView, id: string, input: RecordPd
   if (!input.placement.annex) return `In this pack as ${input.placement.packFile(id)} (${fileLine}).`;
   const a = annexed.find((x) => x.calibrationId === id);
   return a
-    ? `Annexed on pages ${a.firstPage}–${a.firstPage + a.pageCount - 1} (${fileLine}).`
+    ? `Annexed on ${a.pageCount === 1 ? `page ${a.firstPage}` : `pages ${a.firstPage}–${a.firstPage + a.pageCount - 1}`} (${fileLine}).`
     : `Not annexed: ${certificateStatusText.withheld} (${fileLine}).`;
 }
 
@@ -280,7 +280,7 @@ const sections: { title: string; draw: (doc: Pdf, input: RecordPdfInput, annexed
 ];
 
 const footerText = (view: EquipmentRecordView, page: number, total: number) =>
-  `Equipment record ${view.asset.assetTag} · record of ${view.recordDate} · content SHA-256 ${view.contentHash} · page ${page} of ${total}`;
+  `${view.asset.assetTag} · record of ${view.recordDate} · content SHA-256 ${view.contentHash} · page ${page} of ${total}`;
 
 /** The record's pages (pdfkit): heading, contents, the sections, and the footer with the hash on every page. */
 function recordPages(input: RecordPdfInput, annexed: Annexed[], annexPages: number) {

@@ -1,11 +1,12 @@
 // `npm run bench:fleet` / `npm run bench:bookings`: load measurements on a throwaway
 // cluster with the benchmark firm (20,000 assets; for bookings also 200,000
-// bookings; for calibration 100,000 assets and 1,000,000 bookings). Each suite is one or more scripts in
+// bookings; for calibration 100,000 assets and 1,000,000 bookings; for the audit pack also a year of certificates). Each suite is one or more scripts in
 // tests/bench/ run in turn against a live server; timings are printed here, never asserted in `npm test`.
 const suites = {
   fleet: { seed: [], run: ['tests/bench/fleet-load.ts'] },
   bookings: { seed: ['server/seed/seed-bench-bookings.ts'], run: ['tests/bench/bookings-load.ts', 'tests/bench/board-drawing.ts'] },
   calibration: { assets: 100_000, seed: ['server/seed/seed-bench-bookings.ts'], run: ['tests/bench/calibration-load.ts'] },
+  'audit-pack': { seed: ['server/seed/seed-bench-records.ts'], run: ['tests/bench/audit-pack.ts'] },
 };
 const suite = suites[process.argv[2]];
 if (!suite) {
@@ -56,7 +57,7 @@ try {
     NODE_ENV: 'production',
   };
   runTs('server/prepare.ts', env);
-  env.BENCH_ASSETS = String(suite.assets ?? 20_000);
+  env.BENCH_ASSETS = process.env.BENCH_ASSETS ?? String(suite.assets ?? 20_000);
   runTs('server/seed/seed-bench-fleet.ts', env);
   for (const seed of suite.seed) runTs(seed, env);
   runTs('tests/bench/analyze.ts', env);
@@ -66,7 +67,7 @@ try {
   for (const script of suite.run) {
     const child = spawn(process.execPath, ['--import', 'tsx', script], {
       cwd: projectRoot,
-      env: { ...env, BENCH_URL: `http://127.0.0.1:${port}` },
+      env: { ...env, BENCH_URL: `http://127.0.0.1:${port}`, BENCH_SERVER_PID: String(server.pid) },
       stdio: 'inherit',
     });
     code = (await new Promise((r) => child.on('exit', r))) ?? 1;

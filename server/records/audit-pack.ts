@@ -78,7 +78,7 @@ async function add(archive: ZipArchive, data: Buffer | string, entry: ZipEntryDa
   const taken = once(archive, 'entry');
   archive.append(data, entry);
   await taken;
-  while (archive.readableLength > BACKLOG_BYTES) await once(archive, 'data');
+  while (archive.readableLength + archive.writableLength > BACKLOG_BYTES) await once(archive, 'data');
 }
 
 type Sources = { read: <T>(work: (tx: Scoped) => Promise<T>) => Promise<T>; ctx: OrgContext; publicUrl: string; scopeText: string };

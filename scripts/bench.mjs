@@ -1,6 +1,6 @@
 // `npm run bench:fleet` / `npm run bench:bookings` / `npm run bench:accounts`: load measurements on a throwaway
 // cluster with the benchmark firm (20,000 assets; for bookings also 200,000
-// bookings; for calibration 100,000 assets and 1,000,000 bookings). Each suite is one or more scripts in
+// bookings; for calibration 100,000 assets and 1,000,000 bookings; for the audit pack also a year of certificates). Each suite is one or more scripts in
 // tests/bench/ run in turn against a live server; timings are printed here, never asserted in `npm test`.
 const suites = {
   fleet: { seed: [], run: ['tests/bench/fleet-load.ts'] },
@@ -13,6 +13,7 @@ const suites = {
     run: ['tests/bench/password-reset-timing.ts'],
     env: { RESET_REQUESTS_PER_HOUR_PER_EMAIL: '100000', RESET_REQUESTS_PER_HOUR_PER_ADDRESS: '100000' },
   },
+  'audit-pack': { seed: ['server/seed/seed-bench-records.ts'], run: ['tests/bench/audit-pack.ts'] },
 };
 const suite = suites[process.argv[2]];
 if (!suite) {
@@ -64,7 +65,7 @@ try {
     ...suite.env,
   };
   runTs('server/prepare.ts', env);
-  env.BENCH_ASSETS = String(suite.assets ?? 20_000);
+  env.BENCH_ASSETS = process.env.BENCH_ASSETS ?? String(suite.assets ?? 20_000);
   runTs('server/seed/seed-bench-fleet.ts', env);
   for (const seed of suite.seed) runTs(seed, env);
   runTs('tests/bench/analyze.ts', env);
@@ -74,7 +75,7 @@ try {
   for (const script of suite.run) {
     const child = spawn(process.execPath, ['--import', 'tsx', script], {
       cwd: projectRoot,
-      env: { ...env, BENCH_URL: `http://127.0.0.1:${port}` },
+      env: { ...env, BENCH_URL: `http://127.0.0.1:${port}`, BENCH_SERVER_PID: String(server.pid) },
       stdio: 'inherit',
     });
     code = (await new Promise((r) => child.on('exit', r))) ?? 1;

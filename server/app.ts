@@ -67,6 +67,7 @@ import { holdsRoutes } from './holds/holds.routes';
 import { IncidentsService } from './incidents/incidents.service';
 import { FieldService } from './field/field.service';
 import { fieldRoutes } from './field/field.routes';
+import { RecordsService, recordsRoutes } from './records';
 import { incidentsRoutes } from './incidents/incidents.routes';
 import { UsersService } from './users/users.service';
 import { usersRoutes } from './users/users.routes';
@@ -186,6 +187,7 @@ export function buildApp({ config, db, mail, log = createLogger({ level: config.
     '/api',
     calibrationRoutes({ calibration: new CalibrationService(db), impact: new ImpactService(db), lab: new LabService(db), review: new ReviewService(db) }),
   );
+  app.use('/api', recordsRoutes(new RecordsService(db, publicUrl)));
   app.use('/api', rentalsRoutes({ customers: new CustomersService(db), rateCards: new RateCardsService(db), rentals }));
   app.use('/api', billingRoutes({ deposits, invoices: new InvoicesService(db), reports: new BillingReportsService(db) }));
   app.use('/api', unknownApiRoute);

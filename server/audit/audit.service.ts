@@ -31,3 +31,22 @@ export async function recordAudits(
     })),
   );
 }
+
+export type AuditLine = { subjectId: string; at: Date; action: string; actorId: string | null; details: Record<string, unknown> };
+
+/** The audit lines of these actions about these assets in the period (the firm's calendar days), oldest first. */
+export function assetAuditLines(
+  tx: Scoped,
+  assetIds: string[],
+  actions: string[],
+  period: { from: string | null; to: string | null },
+  timeZone: string,
+): Promise<AuditLine[]> {
+  return tx.sql<AuditLine>(
+    `SELECT subject_id AS "subjectId", at, action, actor_user_id AS "actorId", details FROM audit_events
+      WHERE organization_id = $1 AND subject_type = 'asset' AND subject_id = ANY($2::text[]) AND action = ANY($3::text[])
+        AND ($4::date IS NULL OR (at AT TIME ZONE $6)::date >= $4::date) AND ($5::date IS NULL OR (at AT TIME ZONE $6)::date <= $5::date)
+      ORDER BY subject_id, at, id`,
+    [assetIds, actions, period.from, period.to, timeZone],
+  );
+}

@@ -17,14 +17,14 @@ export type CertificateEntry = {
 
 type PackInput = { firm: { name: string }; rentalNumber: string; customerCompany: string; startsOn: string; endsOn: string; entries: CertificateEntry[] };
 
-type Pages = { pages: PDFPage[]; contentOnly: boolean };
+export type CertificatePages = { pages: PDFPage[]; contentOnly: boolean };
 
 /**
  * The certificate's pages copied into `pack`, or why there are none. An unreadable file must not sink the pack.
  * pdf-lib copies a page with everything it refers to (annotations and their actions, the page's /AA), so a file
  * stored before uploads were checked gives only what its pages draw, and only if that copy checks clean.
  */
-async function certificatePages(pack: PDFDocument, pdf: Buffer | null): Promise<Pages | 'missing' | 'unreadable' | 'withheld'> {
+export async function certificatePages(pack: PDFDocument, pdf: Buffer | null): Promise<CertificatePages | 'missing' | 'unreadable' | 'withheld'> {
   if (!pdf) return 'missing';
   const inspection = await inspectPdf(pdf);
   if (inspection.kind !== 'pdf') return 'unreadable';
@@ -40,13 +40,13 @@ async function certificatePages(pack: PDFDocument, pdf: Buffer | null): Promise<
 
 type Found = Awaited<ReturnType<typeof certificatePages>>;
 
-const statusText = {
+export const certificateStatusText = {
   missing: 'no certificate on file',
   unreadable: 'certificate could not be read',
   withheld: 'certificate left out: it carries scripts or files',
 } as const;
 const foundText = (found: Found) =>
-  typeof found === 'string' ? statusText[found] : found.contentOnly ? 'pages attached; scripts and files removed' : 'certificate attached';
+  typeof found === 'string' ? certificateStatusText[found] : found.contentOnly ? 'pages attached; scripts and files removed' : 'certificate attached';
 const dateOrDash = (d: string | null) => (d ? calendarDate(d) : '—');
 
 function coverPdf(input: PackInput, found: Found[]) {

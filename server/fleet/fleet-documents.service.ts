@@ -1,22 +1,20 @@
 import type { DataSource } from 'typeorm';
-import type { AssetView, EquipmentRecordView, ShippingSheetView } from '../../shared/assets/views';
+import type { AssetView, ShippingSheetView } from '../../shared/assets/views';
 import { shippingSheet } from '../../shared/batteries/shipping-class';
 import type { AssetListQuery } from '../../shared/schemas/assets';
 import { inOrganization, type Actor } from '../db/transaction';
 import { assetLabelPdf, kitLabelSheetPdf } from '../documents/asset-label';
-import { equipmentRecordPdf } from '../documents/equipment-record-pdf';
 import { shippingSheetPdf } from '../documents/shipping-sheet-pdf';
 import { loadOrgContext } from '../organizations';
 import { Asset } from './asset.entity';
 import { assetsToCsv } from './asset-csv';
 import { findAssets } from './asset-list';
 import { toAssetView } from './asset-view';
-import { equipmentRecordItems } from './equipment-record';
 import { Kit } from './kit.entity';
 
 const EXPORT_LIMIT = 100_000;
 
-/** Printable and downloadable views of the register: labels, records, sheets, CSV. */
+/** Printable and downloadable views of the register: labels, sheets, CSV (the equipment record is records/). */
 export class FleetDocumentsService {
   constructor(
     private readonly db: DataSource,
@@ -33,19 +31,6 @@ export class FleetDocumentsService {
 
   label(actor: Actor, id: string) {
     return this.withAsset(actor, id, (view, firm) => assetLabelPdf(view, firm));
-  }
-
-  record(actor: Actor, id: string): Promise<EquipmentRecordView> {
-    return this.withAsset(actor, id, (asset, firm) => ({
-      asset,
-      organization: { name: firm },
-      items: equipmentRecordItems(asset),
-      generatedAt: new Date().toISOString(),
-    }));
-  }
-
-  recordPdf(actor: Actor, id: string) {
-    return this.withAsset(actor, id, (asset, firm) => equipmentRecordPdf(asset, equipmentRecordItems(asset), firm, new Date()));
   }
 
   exportCsv(actor: Actor, filter: Omit<AssetListQuery, 'limit' | 'offset'>) {

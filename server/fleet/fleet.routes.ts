@@ -76,12 +76,6 @@ export function fleetRoutes(db: DataSource, assets: AssetsService, documents: Fl
   endpoint(router, at, { method: 'get', path: '/:id/history', summary: 'Audit trail and chain of custody', access: read }, ({ actor, params }) =>
     assets.history(actor, params.id),
   );
-  endpoint(router, at, { method: 'get', path: '/:id/record', summary: 'Equipment record (ISO/IEC 17025:2017 §6.4.13)', access: read }, ({ actor, params }) =>
-    documents.record(actor, params.id),
-  );
-  endpoint(router, at, { method: 'get', path: '/:id/record.pdf', summary: 'Equipment record as PDF', access: read }, async ({ actor, params, res }) =>
-    sendDocument(res, await documents.recordPdf(actor, params.id), 'application/pdf', 'equipment-record.pdf', true),
-  );
   endpoint(
     router,
     at,

@@ -21,4 +21,5 @@ export {
   type CalibrationPlan,
   type KitRecord,
 } from './asset-records';
+export { assetIdsSelected, assetViewsByIds, custodyForRecord, inTagOrder, type AssetSelection, type CustodyEntry } from './record-entries';
 export { fleetSnapshot, seedAssets, seedKits, type SeedAsset } from './fleet-seed';

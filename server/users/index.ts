@@ -2,7 +2,7 @@
 import { User } from './user.entity';
 
 export const userEntities = [User];
-export { activeStaff, findPerson, publicUser, type PublicUser } from './people';
+export { activeStaff, findPerson, peopleNames, publicUser, type PublicUser } from './people';
 export {
   accountByEmail,
   addPerson,

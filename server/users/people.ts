@@ -29,3 +29,11 @@ export async function activeStaff(tx: Scoped, roles: Role[]): Promise<PublicUser
   const users = await tx.find(User, { where: { role: In(roles), disabled: false } });
   return users.map(publicUser);
 }
+
+/** The names of these people, by id (ids that name nobody in this firm are left out). */
+export async function peopleNames(tx: Scoped, ids: string[]): Promise<Map<string, string>> {
+  const unique = [...new Set(ids)];
+  if (!unique.length) return new Map();
+  const users = await tx.find(User, { where: { id: In(unique) }, select: { id: true, name: true } });
+  return new Map(users.map((u) => [u.id, u.name]));
+}

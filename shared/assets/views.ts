@@ -53,14 +53,6 @@ export type AssetHistoryEntry = {
 /** One entry of the equipment record (ISO/IEC 17025:2017 §6.4.13 a)–h)). */
 export type EquipmentRecordItem = { clause: string; requirement: string; value: string | null; note?: string };
 
-/** `GET /api/assets/:id/record`. */
-export type EquipmentRecordView = {
-  asset: AssetView;
-  organization: { name: string };
-  items: EquipmentRecordItem[];
-  generatedAt: string;
-};
-
 /** A problem in an import file; `row` counts data rows from 1 (the header is not counted). */
 export type ImportProblem = { row: number; column: string; message: string };
 

@@ -24,6 +24,7 @@ export const capabilities = [
   'rentals.write',
   'deposits.manage',
   'reports.read',
+  'audit.pack',
 ] as const;
 export type Capability = (typeof capabilities)[number];
 

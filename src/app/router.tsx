@@ -64,6 +64,7 @@ export const routes: RouteObject[] = [
             { path: 'customers/:id', lazy: screen(() => import('./routes/customer')) },
             { path: 'billing/reports', lazy: screen(() => import('./routes/billing-reports')) },
           ]),
+          gated('audit.pack', [{ path: 'audit-pack', lazy: screen(() => import('./routes/audit-pack')) }]),
           gated('rentals.write', [{ path: 'rentals/new', lazy: screen(() => import('./routes/rental-new')) }]),
           gated('calibration.record', [
             { path: 'fleet/:id/calibrate', lazy: screen(() => import('./routes/calibration-record')) },

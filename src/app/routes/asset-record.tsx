@@ -5,8 +5,9 @@ import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
 import { PageHeader } from '../../components/page-header';
 import { assetRecordPdfUrl, useAssetRecord } from '../../features/fleet/api/get-asset-record';
+import { EquipmentRecordSections } from '../../features/fleet/components/equipment-record-sections';
 import { EquipmentRecordTable } from '../../features/fleet/components/equipment-record-table';
-import { useDateFormat } from '../../lib/format';
+import { formatCalendarDate, useDateFormat } from '../../lib/format';
 
 export default function AssetRecordRoute() {
   const { id = '' } = useParams();
@@ -24,7 +25,7 @@ export default function AssetRecordRoute() {
       </>
     );
   }
-  const { asset, organization, items, generatedAt } = record.data;
+  const { asset, organization, items, generatedAt, recordDate, contentHash } = record.data;
   return (
     <>
       <Link to={`/fleet/${asset.id}`} className="mb-2 inline-flex min-h-9 items-center gap-1 text-sm font-semibold text-brass-deep">
@@ -45,7 +46,14 @@ export default function AssetRecordRoute() {
           </a>
         }
       />
-      <EquipmentRecordTable items={items} />
+      <p className="mb-3 text-sm text-ink-700">
+        Record of {formatCalendarDate(recordDate)}. Content SHA-256 <span className="break-all font-mono">{contentHash}</span>: a reprint of the same content
+        shows the same hash. The PDF prints it on every page and annexes each readable certificate.
+      </p>
+      <div className="flex flex-col gap-4">
+        <EquipmentRecordTable items={items} />
+        <EquipmentRecordSections record={record.data} />
+      </div>
     </>
   );
 }

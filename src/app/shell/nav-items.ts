@@ -20,6 +20,7 @@ export const navItems: readonly NavItem[] = [
   { to: '/fleet', label: 'Fleet', capability: 'fleet.read' },
   { to: '/kits', label: 'Kits', capability: 'fleet.read' },
   { to: '/calibration', label: 'Calibration', capability: 'reports.read' },
+  { to: '/audit-pack', label: 'Audit pack', capability: 'audit.pack' },
   { to: '/rentals', label: 'Rentals', capability: 'reports.read' },
   { to: '/invoices', label: 'Invoices', capability: 'reports.read' },
   { to: '/scan', label: 'Find by label', capability: 'fleet.read' },

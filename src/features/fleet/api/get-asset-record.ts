@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, apiUrl } from '../../../lib/api-client';
 import { fleetKeys } from './keys';
-import type { EquipmentRecordView } from '../../../../shared/assets/views';
+import type { EquipmentRecordView } from '../../../../shared/records/views';
 
 export function getAssetRecord(id: string, signal?: AbortSignal): Promise<EquipmentRecordView> {
   return apiClient.get<EquipmentRecordView>(`/assets/${encodeURIComponent(id)}/record`, { signal });

@@ -1,0 +1,217 @@
+import { once } from 'node:events';
+import type { Writable } from 'node:stream';
+import { ZipArchive, type ZipEntryData } from 'archiver';
+import { overdueDays } from '../../shared/records/overdue-days';
+import type { AuditPackPreview, EquipmentRecordView, RecordPeriod } from '../../shared/records/views';
+import type { AuditPackQuery } from '../../shared/schemas/records';
+import { calibrationsForRecord, outOfToleranceAssetIds } from '../calibration';
+import { failedCheckAssetIds } from '../checks';
+import type { Scoped } from '../db/scoped';
+import { toCsv } from '../documents/csv';
+import { auditSummaryPdf, type AuditSummary } from '../documents/audit-summary-pdf';
+import { equipmentRecordPdf } from '../documents/equipment-record-pdf';
+import { assetIdsSelected, getKit, inTagOrder } from '../fleet';
+import { heldAssetIds } from '../holds';
+import type { OrgContext } from '../organizations';
+import { sha256 } from './content-hash';
+import { assembleRecords } from './record-assembly';
+
+/** Items per round of queries: enough to keep the database busy, few enough that memory stays flat. */
+const BATCH = 50;
+/** A record PDF without an annex is a few kilobytes; the estimate only drives the progress bar. */
+const RECORD_BYTES_ESTIMATE = 9_000;
+/** Stop feeding the archive while this much compressed output waits for a slow reader. */
+const BACKLOG_BYTES = 4 * 1024 * 1024;
+
+const safeName = (s: string) => s.replace(/[^\w.-]+/g, '_').slice(0, 80);
+export const certificatePath = (r: EquipmentRecordView, calibrationId: string) => {
+  const c = r.calibrations.find((x) => x.id === calibrationId)!;
+  return `certificates/${safeName(r.asset.assetTag)}/${safeName(c.certificateNumber)}-${c.id.slice(0, 8)}.pdf`;
+};
+
+/** The pack's items, in asset-tag order. */
+export async function packItems(tx: Scoped, ctx: OrgContext, query: AuditPackQuery): Promise<string[]> {
+  const period = { from: query.from, to: query.to };
+  if (query.scope === 'kit') await getKit(tx, query.kitId!);
+  if (query.scope !== 'flagged')
+    return assetIdsSelected(tx, query.scope === 'kit' ? { kitId: query.kitId } : query.scope === 'type' ? { type: query.type } : {});
+  const ids = new Set([
+    ...(await outOfToleranceAssetIds(tx, period)),
+    ...(await failedCheckAssetIds(tx, period, ctx.timeZone)),
+    ...(await heldAssetIds(tx, period, ctx.timeZone)),
+  ]);
+  return ids.size ? inTagOrder(tx, [...ids]) : [];
+}
+
+export async function packPreview(tx: Scoped, ids: string[], period: RecordPeriod): Promise<AuditPackPreview> {
+  const calibrations = ids.length ? await calibrationsForRecord(tx, ids, period) : [];
+  const stored = calibrations.filter((c) => c.certificateFileId);
+  return {
+    items: ids.length,
+    calibrations: calibrations.length,
+    certificates: stored.length,
+    estimatedBytes: stored.reduce((sum, c) => sum + (c.sizeBytes ?? 0), 0) + ids.length * RECORD_BYTES_ESTIMATE + 20_000,
+  };
+}
+
+const indexColumns = [
+  'item',
+  'type',
+  'serialNumber',
+  'calibrations',
+  'fieldChecks',
+  'holds',
+  'incidents',
+  'impactReviews',
+  'custodyEvents',
+  'file',
+  'fileKind',
+  'certificateNumber',
+  'bytes',
+  'sha256',
+  'recordContentHash',
+  'note',
+];
+
+/** Append one entry and wait until the archive took it and its reader keeps up, so memory stays flat. */
+async function add(archive: ZipArchive, data: Buffer | string, entry: ZipEntryData) {
+  const taken = once(archive, 'entry');
+  archive.append(data, entry);
+  await taken;
+  while (archive.readableLength + archive.writableLength > BACKLOG_BYTES) await once(archive, 'data');
+}
+
+type Sources = { read: <T>(work: (tx: Scoped) => Promise<T>) => Promise<T>; ctx: OrgContext; publicUrl: string; scopeText: string };
+
+/**
+ * Stream the audit pack as a ZIP into `out`: one record PDF per item, every certificate as stored, a summary PDF of
+ * the period and a CSV index of every file with its SHA-256. Items are read a batch at a time and each file is
+ * handed to the archive only when it has taken the last one.
+ */
+export async function writeAuditPack(out: Writable, ids: string[], query: AuditPackQuery, sources: Sources) {
+  const { ctx, publicUrl } = sources;
+  const period = { from: query.from, to: query.to };
+  const archive = new ZipArchive({ zlib: { level: 6 } });
+  const finished = new Promise<void>((resolve, reject) => {
+    out.on('close', resolve);
+    out.on('finish', resolve);
+    out.on('error', reject);
+    archive.on('error', reject);
+  });
+  archive.pipe(out);
+  const index: unknown[][] = [];
+  const summary: AuditSummary = {
+    firm: ctx.name,
+    period,
+    scope: sources.scopeText,
+    items: ids.length,
+    findings: [],
+    holds: [],
+    overdue: [],
+    gaps: [],
+    calibrations: 0,
+    certificates: 0,
+  };
+  for (let start = 0; start < ids.length; start += BATCH) {
+    const records = await sources.read((tx) => assembleRecords(tx, ctx, ids.slice(start, start + BATCH), period, publicUrl));
+    for (const { view, certificates, thumbnails } of records) {
+      const a = view.asset;
+      const counts = [view.calibrations.length, view.checks.length, view.holds.length, view.incidents.length, view.impactReviews.length, view.custody.length];
+      const row = (file: string, kind: string, certificateNumber: string, bytes: number | string, hash: string, note: string) => [
+        a.assetTag,
+        a.type,
+        a.serialNumber,
+        ...counts,
+        file,
+        kind,
+        certificateNumber,
+        bytes,
+        hash,
+        view.contentHash,
+        note,
+      ];
+      for (const c of view.calibrations) {
+        summary.calibrations += 1;
+        const bytes = certificates.get(c.id);
+        if (!c.certificate || !bytes) {
+          index.push(row('', 'certificate', c.certificateNumber, '', '', 'No certificate file is on record for this calibration.'));
+          summary.gaps.push({
+            assetTag: a.assetTag,
+            certificateNumber: c.certificateNumber,
+            performedOn: c.performedOn,
+            problem: 'no certificate file on record',
+          });
+          continue;
+        }
+        const path = certificatePath(view, c.id);
+        await add(archive, bytes, { name: path, store: true, date: new Date(c.recordedAt) });
+        summary.certificates += 1;
+        const note = c.certificate.readable ? 'As stored.' : 'As stored; the file does not open as a PDF.';
+        if (!c.certificate.readable)
+          summary.gaps.push({
+            assetTag: a.assetTag,
+            certificateNumber: c.certificateNumber,
+            performedOn: c.performedOn,
+            problem: 'certificate file cannot be read',
+          });
+        index.push(row(path, 'certificate', c.certificateNumber, bytes.length, c.certificate.sha256, note));
+      }
+      const pdf = await equipmentRecordPdf({
+        view,
+        certificates,
+        thumbnails,
+        timeZone: ctx.timeZone,
+        publicUrl,
+        printedAt: new Date(view.generatedAt),
+        placement: { annex: false, packFile: (id) => certificatePath(view, id) },
+      });
+      const recordPath = `records/${safeName(a.assetTag)}.pdf`;
+      await add(archive, pdf, { name: recordPath, store: true });
+      const required = a.calibration.required && !view.calibrations.length;
+      index.push(
+        row(recordPath, 'equipment record', '', pdf.length, sha256(pdf), required ? 'Needs calibration, but no certificate is on record for the period.' : ''),
+      );
+      collectSummary(summary, view, ctx.today);
+    }
+  }
+  const summaryPdf = await auditSummaryPdf(summary);
+  await add(archive, summaryPdf, { name: 'summary.pdf', store: true });
+  index.push(['', '', '', '', '', '', '', '', '', 'summary.pdf', 'period summary', '', summaryPdf.length, sha256(summaryPdf), '', '']);
+  await add(archive, toCsv(indexColumns, index), { name: 'index.csv' });
+  await archive.finalize();
+  await finished;
+}
+
+function collectSummary(summary: AuditSummary, view: EquipmentRecordView, today: string) {
+  const { from, to } = view.period as { from: string; to: string };
+  const tag = view.asset.assetTag;
+  for (const c of view.calibrations)
+    if (c.asFound === 'out_of_tolerance' && c.performedOn >= from)
+      summary.findings.push({
+        assetTag: tag,
+        foundOn: c.performedOn,
+        how: `as found at calibration, certificate ${c.certificateNumber}`,
+        review: reviewText(view, c.id),
+      });
+  for (const c of view.checks)
+    if (c.decision === 'fail')
+      summary.findings.push({ assetTag: tag, foundOn: c.performedAt.slice(0, 10), how: `failed ${c.kind.replace(/_/g, ' ')}`, review: reviewText(view, c.id) });
+  for (const h of view.holds)
+    summary.holds.push({ assetTag: tag, startedAt: h.startedAt, releasedAt: h.releasedAt, summary: h.summary, evidence: h.releaseEvidence.join('; ') });
+  if (view.asset.calibration.required) {
+    const coverage = view.calibrations.map((c) => ({ performedOn: c.performedOn, dueOn: c.dueOn }));
+    const plan = view.asset.calibration;
+    if (plan.lastCalibratedOn && plan.dueOn && !coverage.some((c) => c.performedOn === plan.lastCalibratedOn))
+      coverage.push({ performedOn: plan.lastCalibratedOn, dueOn: plan.dueOn });
+    const days = overdueDays({ from, to: to < today ? to : today }, coverage);
+    if (days > 0) summary.overdue.push({ assetTag: tag, days });
+  }
+}
+
+function reviewText(view: EquipmentRecordView, triggerId: string) {
+  const review = view.impactReviews.find((r) => r.triggerId === triggerId);
+  if (!review) return 'no impact review on record';
+  const assessed = review.bookings.filter((b) => b.assessment).length;
+  const notices = review.bookings.filter((b) => b.noticeQueuedAt).length;
+  return `review ${review.state}: ${assessed} of ${review.bookings.length} booking(s) assessed, ${notices} notice(s) sent`;
+}

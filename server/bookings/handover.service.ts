@@ -31,7 +31,7 @@ export class HandoverService {
 
   checkout(actor: Actor, id: string, input: Checklist) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const booking = await bookingIn(tx, id, 'reserved', 'Only a reserved booking can be checked out');
+      const booking = await bookingIn(tx, id, ['reserved', 'not_collected'], 'Only a reserved or not collected booking can be checked out');
       const assets = await this.walk(tx, booking, input.checklist);
       const taker = await this.counterpart(tx, input.counterpart);
       const absent = input.checklist.filter((l) => !l.present);
@@ -45,7 +45,13 @@ export class HandoverService {
           damaged: damaged.map((l) => l.assetId),
         });
       // Refuses (422) items that may no longer go; the rest of the transaction is undone with any later refusal.
-      const out = await checkOut(tx, actor, id, { takenBy: taker.name, takenByUserId: taker.userId, checklist: input.checklist as ChecklistLine[] });
+      const out = await checkOut(tx, actor, id, {
+        takenBy: taker.name,
+        takenByUserId: taker.userId,
+        checklist: input.checklist as ChecklistLine[],
+        earlyReason: input.earlyReason,
+        late: input.late,
+      });
       const stillOut = assets.filter((a) => a.status === 'out');
       if (stillOut.length)
         throw ruleBroken('still_out', `Still out on an earlier booking: ${stillOut.map((a) => a.assetTag).join(', ')}. Take them back in first.`);
@@ -66,7 +72,7 @@ export class HandoverService {
   return(actor: Actor, id: string, input: Checklist): Promise<ReturnView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const booking = await bookingIn(tx, id, 'out', 'Only a booking that is out can come back');
+      const booking = await bookingIn(tx, id, ['out'], 'Only a booking that is out can come back');
       const assets = await this.walk(tx, booking, input.checklist);
       const bringer = await this.counterpart(tx, input.counterpart);
       const now = new Date();

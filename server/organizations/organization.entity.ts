@@ -8,6 +8,7 @@ import type { CheckKind } from '../../shared/schemas/checks';
 
 export type OrganizationSettings = {
   dueSoonDays: number;
+  checkoutOpensDaysBefore: number;
   decisionRule: DecisionRule;
   /** Default tolerance per check kind; an asset may override it. */
   tolerances: Partial<Record<CheckKind, Tolerance>>;

@@ -157,7 +157,7 @@ export const organizationSettingsPayload = z
       paymentTerms: text(600),
     }),
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
-    checkoutOpensDaysBefore: z.number().int('must be whole days').min(0, 'must be 0 or more days').max(30, 'must be at most 30 days'),
+    checkoutOpensDaysBefore: z.number().int('must be whole days').min(0, 'must be 0 or more days').max(365, 'must be at most 365 days'),
     timeZone: text(64).refine((tz) => {
       try {
         new Intl.DateTimeFormat('en', { timeZone: tz });

@@ -20,7 +20,7 @@ import { addDays, todayIn, type BookingState } from '../../lib/bookings';
 import { can } from '../../lib/roles';
 
 const weekChoices = [2, 4, 8, 12] as const;
-const boardStates: BookingState[] = ['reserved', 'out', 'returned'];
+const boardStates: BookingState[] = ['reserved', 'out', 'returned', 'not_collected'];
 const liveStatuses: AssetStatus[] = ['ready', 'out', 'at_lab', 'held'];
 
 const mondayOf = (date: string) => format(startOfWeek(parseISO(date), { weekStartsOn: 1 }), 'yyyy-MM-dd');

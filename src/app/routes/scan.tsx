@@ -2,7 +2,7 @@ import { Navigate, useNavigate, useParams } from 'react-router-dom';
 import { LoadingPanel } from '../../components/loading-panel';
 import { PageHeader } from '../../components/page-header';
 import { useLookupAsset } from '../../features/fleet/api/lookup-asset';
-import { FindByLabel } from '../../features/fleet/components/find-by-label';
+import { FindByLabel, suggestionsIn } from '../../features/fleet/components/find-by-label';
 import { isApiError } from '../../lib/api-client';
 
 /** /scan, and /scan/:code (what a label's QR code can point at): look the code up and open the asset. */
@@ -17,14 +17,20 @@ export default function ScanRoute() {
   const problem =
     code && lookup.isError
       ? isApiError(lookup.error) && lookup.error.status === 404
-        ? `Nothing in your fleet matches “${code}”. Check the tag and try again.`
+        ? `Nothing in your fleet matches “${code}”.`
         : lookup.error.message
       : undefined;
 
   return (
     <>
       <PageHeader title="Find by label" description="Type the tag printed on the item, or read its QR label with the camera." />
-      <FindByLabel key={code ?? ''} initialCode={code ?? ''} initialProblem={problem} onFound={(asset) => navigate(`/fleet/${asset.id}`)} />
+      <FindByLabel
+        key={code ?? ''}
+        initialCode={code ?? ''}
+        initialProblem={problem}
+        initialSuggestions={code && lookup.isError ? suggestionsIn(lookup.error) : []}
+        onFound={(asset) => navigate(`/fleet/${asset.id}`)}
+      />
     </>
   );
 }

@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useId, useState, type FormEvent } from 'react';
+import { useEffect, useId, useState, type FormEvent } from 'react';
 import { Button } from '../../../components/button';
 import { ScanIcon, SearchIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
@@ -11,7 +11,7 @@ import type { AssetSuggestion, AssetView } from '../../../../shared/assets/views
 /** The near misses a look-up's 404 carries (`details.suggestions`). */
 export const suggestionsIn = (error: unknown): AssetSuggestion[] =>
   isApiError(error) && error.status === 404 ? ((error.details as { suggestions?: AssetSuggestion[] } | undefined)?.suggestions ?? []) : [];
-import { canScanQr, QrScanner } from './qr-scanner';
+import { hasCamera, QrScanner } from './qr-scanner';
 
 /**
  * Type an asset tag or RFID tag, or read the QR label with the camera; on a
@@ -37,7 +37,14 @@ export function FindByLabel({
   const [suggestions, setSuggestions] = useState<AssetSuggestion[]>(initialSuggestions);
   const [busy, setBusy] = useState(false);
   const [scanning, setScanning] = useState(false);
-  const [scanAvailable] = useState(canScanQr);
+  const [scanAvailable, setScanAvailable] = useState(false);
+  useEffect(() => {
+    let live = true;
+    void hasCamera().then((yes) => live && setScanAvailable(yes));
+    return () => {
+      live = false;
+    };
+  }, []);
 
   const find = async (value: string) => {
     const wanted = value.trim();

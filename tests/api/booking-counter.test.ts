@@ -206,3 +206,14 @@ describe('lab trips at the counter', () => {
     expect(job.body.error.code).toBe('booking_blocked');
   });
 });
+
+describe("the firm's people for Lead technician and Taken by", () => {
+  it('lists active people by role and name to anyone who books, without their e-mail', async () => {
+    const res = await t.api.get('/api/users/staff').query({ role: 'technician' }).set(bearer(manager));
+    expect(res.status).toBe(200);
+    const [{ name }] = await t.db.query(`SELECT name FROM users WHERE email = 'tech@demo.test'`);
+    expect(res.body.items.map((p: { name: string }) => p.name)).toContain(name);
+    expect(res.body.items.every((p: { role: string; email?: string }) => p.role === 'technician' && p.email === undefined)).toBe(true);
+    expect((await t.api.get('/api/users/staff').query({ role: 'wizard' }).set(bearer(manager))).status).toBe(400);
+  });
+});

@@ -129,4 +129,39 @@ describe("the shop manager's week, told truly", () => {
     expect(mine!.width).toBeGreaterThan(barBox.width * 4);
     await context.close();
   });
+
+  it("lists the firm's technicians, shows held items as such in the search, previews only what is marked at return, and reprints the hand-over sheet", async () => {
+    const today = todayIn('Europe/Berlin');
+    const api = await apiAs('manager@demo.test');
+    const [{ name: techName }] = await rig.db.query(`SELECT name FROM users WHERE email = 'tech@demo.test'`);
+    const [held] = await rig.db.query(`SELECT asset_tag FROM assets WHERE status = 'held' ORDER BY asset_tag LIMIT 1`);
+    const free = (await api(`/availability?type=smr&startsOn=${today}&endsOn=${addDays(today, 1)}&limit=2`)).body.items as { id: string; assetTag: string }[];
+    const smrs = free.map((x) => ({ id: x.id, asset_tag: x.assetTag }));
+    expect(smrs).toHaveLength(2);
+    const out = (await api('/bookings', { assetIds: smrs.map((s) => s.id), startsOn: today, endsOn: addDays(today, 1) })).body;
+    const walk = { counterpart: 'Odile Brackwater', checklist: smrs.map((s) => ({ assetId: s.id, present: true, condition: 'good' })) };
+    expect((await api(`/bookings/${out.id}/checkout`, walk)).status, JSON.stringify(out)).toBe(200);
+
+    const { context, page, nav } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
+    await nav.getByRole('link', { name: 'Jobs' }).click();
+    await page.getByRole('button', { name: 'New job' }).click();
+    expect(await page.getByLabel('Lead technician').locator('option').allInnerTexts()).toContain(techName);
+    await page.keyboard.press('Escape');
+
+    await page.goto(`${rig.baseUrl}/bookings/new`);
+    await page.getByLabel('Add separate items').fill(held.asset_tag);
+    await eventually(() => page.locator('main').innerText()).toMatch(new RegExp(`${held.asset_tag}[\\s\\S]*On hold`));
+    expect(await page.getByRole('button', { name: `Add ${held.asset_tag}` }).count()).toBe(0);
+
+    await page.goto(`${rig.baseUrl}/bookings/${out.id}`);
+    expect(await page.getByRole('link', { name: 'Hand-over sheet (PDF)' }).getAttribute('href')).toBe(`/api/bookings/${out.id}/handover-sheet.pdf`);
+    await page.getByRole('link', { name: 'Take back' }).click();
+    await page.getByRole('group', { name: 'Suggested people' }).getByRole('button', { name: techName }).waitFor();
+    // Nothing ticked yet: nothing is called missing.
+    expect(await page.locator('main').innerText()).not.toMatch(/missing|What taking back will do/);
+    await page.getByLabel(`Present: ${smrs[0].asset_tag}`).check();
+    await eventually(() => page.locator('main').innerText()).toMatch(new RegExp(`Not ticked present yet: ${smrs[1].asset_tag}\\.`));
+    expect(await page.locator('main').innerText()).not.toMatch(new RegExp(`Not ticked present yet: [^.]*${smrs[0].asset_tag}`));
+    await context.close();
+  });
 });

@@ -206,6 +206,12 @@ function BoardLegend() {
         <span aria-hidden="true" className={`${swatch} nk-bar-returned`} /> Returned (hatched)
       </li>
       <li className="flex items-center gap-1.5">
+        <span aria-hidden="true" className={`${swatch} nk-bar-remainder`} /> Planned days after an early return (faint)
+      </li>
+      <li className="flex items-center gap-1.5">
+        <span aria-hidden="true" className={`${swatch} nk-bar-not_collected`} /> Not collected (dotted)
+      </li>
+      <li className="flex items-center gap-1.5">
         <span aria-hidden="true" className={`${swatch} nk-bar-reserved nk-bar-due`} /> Falls due during the booking
       </li>
       <li className="flex items-center gap-1.5">

@@ -13,7 +13,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useCheckOutBooking } from '../api/check-out-booking';
 import { useReturnBooking } from '../api/return-booking';
 import type { BookingView, ItemCondition, ReturnView } from '../../../../shared/bookings/views';
-import { conditionWords } from './booking-words';
+import { conditionWords, shortDay } from './booking-words';
 
 export type HandoverMode = 'checkout' | 'return';
 
@@ -170,8 +170,8 @@ export function HandoverForm({
                   Not collected: check out late
                 </h2>
                 <p className="text-sm text-ink-700">
-                  This reservation&rsquo;s days ended on {booking.endsOn} without checkout. It goes out from today to a new last day, if every item is free and
-                  in calibration for those days.
+                  This reservation&rsquo;s days ended on {shortDay(booking.endsOn, true)} without checkout. It goes out from today to a new last day, if every
+                  item is free and in calibration for those days.
                 </p>
                 <Field name="lateNote" label="Why it goes late" autoComplete="off" />
                 <Field name="lateEndsOn" label="New last day" type="date" min={today} />

@@ -12,6 +12,7 @@ import { loadOrgContext } from '../organizations';
 import { findPerson } from '../users';
 import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
 import type { BookingView } from './booking-view';
+import { Job } from './job.entity';
 import { bookingIn, checkOut, loadBooking, takeBack } from './lifecycle';
 
 type Checklist = z.infer<typeof checklistPayload>;
@@ -76,6 +77,15 @@ export class HandoverService {
       const assets = await this.walk(tx, booking, input.checklist);
       const bringer = await this.counterpart(tx, input.counterpart);
       const now = new Date();
+      // Where the damage most likely happened: the job's site, else the renter, else the firm's own shop.
+      const site = booking.jobId ? (await tx.get(Job, { id: booking.jobId }, 'That job')).siteAddress : null;
+      const place =
+        site ??
+        (booking.job
+          ? `Job ${booking.job.reference}, ${booking.job.customerName}`
+          : booking.rental
+            ? `Rental ${booking.rental.number}, ${booking.rental.customerCompany}`
+            : ctx.name);
       const incidents: { assetId: string; incidentId: string }[] = [];
       for (const line of input.checklist) {
         const asset = assets.find((a) => a.id === line.assetId)!;
@@ -88,7 +98,7 @@ export class HandoverService {
                 ? `Came back damaged from booking ${booking.startsOn}–${booking.endsOn}.`
                 : `Not returned with booking ${booking.startsOn}–${booking.endsOn}.`),
             occurredAt: now.toISOString(),
-            location: ctx.name,
+            location: place,
             bookingId: id,
           });
           incidents.push({ assetId: asset.id, incidentId: incident.id });

@@ -217,3 +217,30 @@ describe("the firm's people for Lead technician and Taken by", () => {
     expect((await t.api.get('/api/users/staff').query({ role: 'wizard' }).set(bearer(manager))).status).toBe(400);
   });
 });
+
+describe('incidents opened at return', () => {
+  it("take the job's site as their place and link to the booking", async () => {
+    const a = await tracker();
+    const job = (
+      await t.api
+        .post('/api/jobs')
+        .set(bearer(manager))
+        .send({
+          reference: 'J-SITE-1',
+          customerName: 'Thornwick Castings',
+          siteAddress: 'Hall 3, Thornwick Castings, Mirebrook',
+          startsOn: today,
+          endsOn: today,
+        })
+    ).body;
+    const booking = (await book(manager, { assetIds: [a.id], jobId: job.id, startsOn: today, endsOn: today })).body;
+    expect((await checkout(booking.id, { checklist: checklist(a) })).status).toBe(200);
+    const back = await t.api
+      .post(`/api/bookings/${booking.id}/return`)
+      .set(bearer(manager))
+      .send({ counterpart: 'Odile Brackwater', checklist: [{ assetId: a.id, present: true, condition: 'damaged', note: 'Cracked window' }] });
+    expect(back.status).toBe(200);
+    const incident = (await t.api.get(`/api/incidents/${back.body.incidents[0].incidentId}`).set(bearer(manager))).body;
+    expect(incident).toMatchObject({ bookingId: booking.id, location: 'Hall 3, Thornwick Castings, Mirebrook', description: 'Cracked window' });
+  });
+});

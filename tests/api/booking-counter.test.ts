@@ -222,16 +222,13 @@ describe('incidents opened at return', () => {
   it("take the job's site as their place and link to the booking", async () => {
     const a = await tracker();
     const job = (
-      await t.api
-        .post('/api/jobs')
-        .set(bearer(manager))
-        .send({
-          reference: 'J-SITE-1',
-          customerName: 'Thornwick Castings',
-          siteAddress: 'Hall 3, Thornwick Castings, Mirebrook',
-          startsOn: today,
-          endsOn: today,
-        })
+      await t.api.post('/api/jobs').set(bearer(manager)).send({
+        reference: 'J-SITE-1',
+        customerName: 'Thornwick Castings',
+        siteAddress: 'Hall 3, Thornwick Castings, Mirebrook',
+        startsOn: today,
+        endsOn: today,
+      })
     ).body;
     const booking = (await book(manager, { assetIds: [a.id], jobId: job.id, startsOn: today, endsOn: today })).body;
     expect((await checkout(booking.id, { checklist: checklist(a) })).status).toBe(200);

@@ -44,6 +44,8 @@ const bookingView = (b: Booking, items: BookedItem[], rentals: Map<string, Renta
   kitId: b.kitId,
   kit: b.kit ? { id: b.kit.id, name: b.kit.name } : null,
   note: b.note,
+  history: b.history,
+  checkoutNote: b.checkoutNote,
   assetIds: items.map((i) => i.id),
   items: items.map((i) => ({ id: i.id, assetTag: i.assetTag, type: i.type, status: i.status })),
   checkedOutAt: b.checkedOutAt?.toISOString() ?? null,

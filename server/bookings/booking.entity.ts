@@ -46,6 +46,10 @@ export class Booking extends OrgOwned {
   @Column({ type: 'text', nullable: true })
   note: string | null;
 
+  /** Past use the owner recorded (never reserved or handed over in Nestkeeper); marked as such wherever it shows. */
+  @Column({ type: 'boolean', default: false })
+  history: boolean;
+
   @Column({ name: 'created_by', type: 'uuid' })
   createdBy: string;
 
@@ -61,6 +65,10 @@ export class Booking extends OrgOwned {
 
   @Column({ name: 'taken_by_user_id', type: 'uuid', nullable: true })
   takenByUserId: string | null;
+
+  /** Why the kit went before its checkout window opened, or late after it was not collected. */
+  @Column({ name: 'checkout_note', type: 'text', nullable: true })
+  checkoutNote: string | null;
 
   @Column({ name: 'checkout_checklist', type: 'jsonb', nullable: true })
   checkoutChecklist: ChecklistLine[] | null;

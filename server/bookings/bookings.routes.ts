@@ -1,6 +1,14 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { availabilityQuery, bookingDatesPayload, bookingListQuery, bookingPayload, checklistPayload, jobPayload } from '../../shared/schemas/bookings';
+import {
+  availabilityQuery,
+  bookingDatesPayload,
+  bookingItemsPayload,
+  bookingListQuery,
+  bookingPayload,
+  checklistPayload,
+  jobPayload,
+} from '../../shared/schemas/bookings';
 import { text } from '../../shared/schemas/common';
 import { endpoint, paging } from '../http/endpoint';
 import { ruleBroken } from '../http/errors';
@@ -58,6 +66,18 @@ export function bookingsRoutes({ bookings, handover, desk, jobs, calendar }: Ser
     at,
     { method: 'patch', path: '/bookings/:id', summary: 'Move a reserved booking (same rules)', access: 'bookings.write', body: bookingDatesPayload },
     ({ actor, params, body }) => bookings.reschedule(actor, params.id, body),
+  );
+  endpoint(
+    router,
+    at,
+    {
+      method: 'post',
+      path: '/bookings/:id/items',
+      summary: 'Add, remove or swap items of a reserved booking (same refusals and alternatives as booking)',
+      access: 'bookings.write',
+      body: bookingItemsPayload,
+    },
+    ({ actor, params, body }) => bookings.changeItems(actor, params.id, body),
   );
   endpoint(router, at, { method: 'post', path: '/bookings/:id/cancel', summary: 'Cancel a reserved booking', access: 'bookings.write' }, ({ actor, params }) =>
     bookings.cancel(actor, params.id),

@@ -8,9 +8,10 @@ import { listReply } from '../http/list-reply';
 import { availableAssets } from './booking-queries';
 import { bookingViews, type BookingView } from './booking-view';
 import { Booking } from './booking.entity';
-import { book, cancelBooking, loadBooking, moveBooking } from './lifecycle';
+import { book, cancelBooking, changeItems, loadBooking, moveBooking } from './lifecycle';
 
 export type BookingHooks = {
+  /** After new dates or new items. */
   onReschedule?: (tx: Scoped, booking: BookingView) => Promise<void>;
   onCancel?: (tx: Scoped, booking: BookingView) => Promise<void>;
 };
@@ -30,6 +31,15 @@ export class BookingsService {
   reschedule(actor: Actor, id: string, input: { startsOn: string; endsOn: string; note?: string }) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const booking = await moveBooking(tx, actor, id, input);
+      await this.hooks.onReschedule?.(tx, booking);
+      return booking;
+    });
+  }
+
+  /** Add, remove or swap items; a rental's price follows its items as it follows its dates. */
+  changeItems(actor: Actor, id: string, change: { add: string[]; remove: string[] }) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const booking = await changeItems(tx, actor, id, change);
       await this.hooks.onReschedule?.(tx, booking);
       return booking;
     });

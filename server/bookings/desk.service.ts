@@ -1,11 +1,12 @@
 import type { DataSource } from 'typeorm';
 import type { CounterDayView, MyKitView } from '../../shared/bookings/views';
-import { readInOrganization, type Actor } from '../db/transaction';
+import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { loadOrgContext } from '../organizations';
 import { itemFacts } from './booking-queries';
 import { refusedItems } from './booking-rule';
 import { bookingViews } from './booking-view';
 import { Booking } from './booking.entity';
+import { markNotCollected } from './lifecycle';
 import type { Scoped } from '../db/scoped';
 
 /** What the manager's and the technician's home pages show about bookings. */
@@ -24,14 +25,20 @@ export class DeskService {
     return bookingViews(tx, rows);
   }
 
-  /** Today's checkouts and returns, late returns, and reserved bookings an item no longer qualifies for. */
+  /**
+   * Today's checkouts and returns, late returns, reservations not collected, and reserved bookings an item
+   * no longer qualifies for. The day begins by marking reservations whose days passed as not collected
+   * (the daily routine does too), so the counter never offers last month's reservation as today's.
+   */
   today(actor: Actor): Promise<CounterDayView> {
-    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
       const { today } = await loadOrgContext(tx);
-      const [checkouts, returns, late, upcoming] = await Promise.all([
+      await markNotCollected(tx, today);
+      const [checkouts, returns, late, notCollected, upcoming] = await Promise.all([
         this.views(tx, "b.state = 'reserved' AND b.starts_on <= :p0", [today]),
         this.views(tx, "b.state = 'out' AND b.ends_on = :p0", [today]),
         this.views(tx, "b.state = 'out' AND b.ends_on < :p0", [today]),
+        this.views(tx, "b.state = 'not_collected'", []),
         this.views(tx, "b.state = 'reserved' AND b.ends_on >= :p0", [today]),
       ]);
       // Every upcoming item's facts in one query, judged per booking by the booking rule.
@@ -44,7 +51,7 @@ export class DeskService {
         );
         return problems.length ? [{ ...b, blocked: problems }] : [];
       });
-      return { today, checkouts, returns, late, blocked };
+      return { today, checkouts, returns, late, notCollected, blocked };
     });
   }
 

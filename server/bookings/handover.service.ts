@@ -12,6 +12,7 @@ import { loadOrgContext } from '../organizations';
 import { findPerson } from '../users';
 import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
 import type { BookingView } from './booking-view';
+import { Job } from './job.entity';
 import { bookingIn, checkOut, loadBooking, takeBack } from './lifecycle';
 
 type Checklist = z.infer<typeof checklistPayload>;
@@ -31,7 +32,7 @@ export class HandoverService {
 
   checkout(actor: Actor, id: string, input: Checklist) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
-      const booking = await bookingIn(tx, id, 'reserved', 'Only a reserved booking can be checked out');
+      const booking = await bookingIn(tx, id, ['reserved', 'not_collected'], 'Only a reserved or not collected booking can be checked out');
       const assets = await this.walk(tx, booking, input.checklist);
       const taker = await this.counterpart(tx, input.counterpart);
       const absent = input.checklist.filter((l) => !l.present);
@@ -45,7 +46,13 @@ export class HandoverService {
           damaged: damaged.map((l) => l.assetId),
         });
       // Refuses (422) items that may no longer go; the rest of the transaction is undone with any later refusal.
-      const out = await checkOut(tx, actor, id, { takenBy: taker.name, takenByUserId: taker.userId, checklist: input.checklist as ChecklistLine[] });
+      const out = await checkOut(tx, actor, id, {
+        takenBy: taker.name,
+        takenByUserId: taker.userId,
+        checklist: input.checklist as ChecklistLine[],
+        earlyReason: input.earlyReason,
+        late: input.late,
+      });
       const stillOut = assets.filter((a) => a.status === 'out');
       if (stillOut.length)
         throw ruleBroken('still_out', `Still out on an earlier booking: ${stillOut.map((a) => a.assetTag).join(', ')}. Take them back in first.`);
@@ -66,10 +73,19 @@ export class HandoverService {
   return(actor: Actor, id: string, input: Checklist): Promise<ReturnView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const booking = await bookingIn(tx, id, 'out', 'Only a booking that is out can come back');
+      const booking = await bookingIn(tx, id, ['out'], 'Only a booking that is out can come back');
       const assets = await this.walk(tx, booking, input.checklist);
       const bringer = await this.counterpart(tx, input.counterpart);
       const now = new Date();
+      // Where the damage most likely happened: the job's site, else the renter, else the firm's own shop.
+      const site = booking.jobId ? (await tx.get(Job, { id: booking.jobId }, 'That job')).siteAddress : null;
+      const place =
+        site ??
+        (booking.job
+          ? `Job ${booking.job.reference}, ${booking.job.customerName}`
+          : booking.rental
+            ? `Rental ${booking.rental.number}, ${booking.rental.customerCompany}`
+            : ctx.name);
       const incidents: { assetId: string; incidentId: string }[] = [];
       for (const line of input.checklist) {
         const asset = assets.find((a) => a.id === line.assetId)!;
@@ -82,7 +98,7 @@ export class HandoverService {
                 ? `Came back damaged from booking ${booking.startsOn}–${booking.endsOn}.`
                 : `Not returned with booking ${booking.startsOn}–${booking.endsOn}.`),
             occurredAt: now.toISOString(),
-            location: ctx.name,
+            location: place,
             bookingId: id,
           });
           incidents.push({ assetId: asset.id, incidentId: incident.id });

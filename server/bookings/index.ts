@@ -8,7 +8,18 @@ import { Job } from './job.entity';
 
 /** Customer site jobs, bookings and their items. */
 export const bookingEntities = [Job, Booking, BookingItem];
-export { book, cancelBooking, checkOut, closeBooking, loadBooking, moveBooking, takeBack, type BookingRequest } from './lifecycle';
+export {
+  book,
+  cancelBooking,
+  changeItems,
+  checkOut,
+  closeBooking,
+  loadBooking,
+  markNotCollected,
+  moveBooking,
+  takeBack,
+  type BookingRequest,
+} from './lifecycle';
 export { busyDays } from './booking-queries';
 export type { BookingView } from './booking-view';
 export type { ChecklistLine } from '../../shared/bookings/views';

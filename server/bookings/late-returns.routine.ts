@@ -2,6 +2,7 @@ import { Scoped } from '../db/scoped';
 import { enqueueMail, staffAddresses } from '../notifications';
 import type { Routine } from '../routines';
 import { todayIn } from '../../shared/calibration/due-date';
+import { markNotCollected } from './lifecycle';
 
 type LateRow = {
   organization_id: string;
@@ -14,12 +15,20 @@ type LateRow = {
   tags: string;
 };
 
-/** Once a day: one e-mail per firm listing bookings past their end date and not back. Set-based, one query. */
+/**
+ * Once a day: reservations whose days passed without checkout become not collected (they stop holding their items),
+ * then one e-mail per firm lists bookings past their end date and not back. Set-based, one query each.
+ */
 export const lateReturnsRoutine = (): Routine => ({
   name: 'late-returns',
-  description: 'E-mails each firm one list of bookings that are past their end date and not returned.',
+  description: 'Marks reservations whose days passed as not collected, and e-mails each firm one list of bookings past their end date and not returned.',
   schedule: '0 7 * * *',
   run: async ({ db, now, organizationId }) => {
+    const firms: { id: string; time_zone: string }[] = await db.query(`SELECT id, time_zone FROM organizations WHERE ($1::uuid IS NULL OR id = $1)`, [
+      organizationId,
+    ]);
+    let notCollected = 0;
+    for (const firm of firms) notCollected += await db.transaction((manager) => markNotCollected(new Scoped(manager, firm.id), todayIn(firm.time_zone, now)));
     const rows: LateRow[] = await db.query(
       `SELECT b.organization_id, o.time_zone, b.id, to_char(b.starts_on, 'YYYY-MM-DD') AS starts_on, to_char(b.ends_on, 'YYYY-MM-DD') AS ends_on,
               b.taken_by, j.reference, string_agg(a.asset_tag, ', ' ORDER BY a.asset_tag) AS tags
@@ -46,6 +55,6 @@ export const lateReturnsRoutine = (): Routine => ({
         });
       });
     }
-    return { firms: byOrg.size, lateBookings: rows.length };
+    return { firms: byOrg.size, lateBookings: rows.length, notCollected };
   },
 });

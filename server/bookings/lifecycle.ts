@@ -1,9 +1,11 @@
 import type { BookingPayload, BookingPurpose, BookingState } from '../../shared/schemas/bookings';
-import { recordAudit } from '../audit/audit.service';
+import { addDays } from '../../shared/calibration/due-date';
+import { recordAudit, recordAudits } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import type { Actor } from '../db/transaction';
 import { getAssets, getKit, kitMembers } from '../fleet';
-import { conflict, notFound, ruleBroken } from '../http/errors';
+import { conflict, forbidden, ruleBroken } from '../http/errors';
+import { loadOrgContext } from '../organizations';
 import { availableAssets, conflictingItems, itemFacts } from './booking-queries';
 import { blockedError, refusals, refusedItems } from './booking-rule';
 import { bookingViews, type BookingView } from './booking-view';
@@ -28,10 +30,10 @@ export async function loadBooking(tx: Scoped, id: string): Promise<BookingView> 
   return (await bookingViews(tx, [booking]))[0];
 }
 
-/** The booking, or 422 `booking_state`: `only` says which state a step needs ("Only a reserved booking can move"). */
-export async function bookingIn(tx: Scoped, id: string, state: BookingState, only: string): Promise<BookingView> {
+/** The booking, or 422 `booking_state`: `only` says which states a step needs ("Only a reserved booking can move"). */
+export async function bookingIn(tx: Scoped, id: string, states: BookingState[], only: string): Promise<BookingView> {
   const booking = await loadBooking(tx, id);
-  if (booking.state !== state) throw ruleBroken('booking_state', `${only}; this one is ${booking.state}.`);
+  if (!states.includes(booking.state)) throw ruleBroken('booking_state', `${only}; this one is ${booking.state}.`);
   return booking;
 }
 
@@ -48,6 +50,13 @@ export async function book(tx: Scoped, actor: Actor, request: BookingRequest): P
   const window: Window = { startsOn: request.startsOn, endsOn: request.endsOn, purpose, exceptBookingId: null };
   // Every id first: one that is not found is 404 before any booking rule answers.
   if (request.jobId) await tx.get(Job, { id: request.jobId }, 'That job');
+  const { today } = await loadOrgContext(tx);
+  if (request.history) return recordHistory(tx, actor, request, assetIds, purpose, today);
+  if (request.endsOn < today)
+    throw ruleBroken(
+      'dates_past',
+      `Every day of this booking (${request.startsOn} to ${request.endsOn}) is before today (${today}). Pick days from today on; the owner can record past use as history.`,
+    );
   await assertBookable(tx, assetIds, window);
   const booking = await tx.insert(Booking, {
     startsOn: request.startsOn,
@@ -76,9 +85,100 @@ export async function book(tx: Scoped, actor: Actor, request: BookingRequest): P
   return loadBooking(tx, booking.id);
 }
 
+/**
+ * Past use the owner records so impact reviews see it: already over, so it holds no days and passes no
+ * booking rule (those guard what goes out from now on). Every day must lie before today.
+ */
+async function recordHistory(tx: Scoped, actor: Actor, request: BookingRequest, assetIds: string[], purpose: BookingPurpose, today: string) {
+  if (actor.role !== 'owner') throw forbidden('Only the owner records past use as history.');
+  if (request.endsOn >= today) throw ruleBroken('history_not_past', `History ends before today (${today}); book days from today on as usual.`);
+  const booking = await tx.insert(Booking, {
+    startsOn: request.startsOn,
+    endsOn: request.endsOn,
+    state: 'returned',
+    purpose,
+    history: true,
+    jobId: request.jobId ?? null,
+    rentalId: null,
+    kitId: request.kitId ?? null,
+    note: request.note ?? null,
+    createdBy: actor.userId,
+  });
+  await tx.insertMany(
+    BookingItem,
+    assetIds.map((assetId) => ({ bookingId: booking.id, assetId, startsOn: request.startsOn, endsOn: request.endsOn, active: false })),
+  );
+  await recordAudit(
+    tx,
+    actor,
+    'booking.recorded_as_history',
+    { type: 'booking', id: booking.id },
+    { assetIds, startsOn: request.startsOn, endsOn: request.endsOn },
+  );
+  return loadBooking(tx, booking.id);
+}
+
+/**
+ * Reservations (not lab trips: those are sent, late or not) whose last day passed before `today` without checkout are not collected: they stop
+ * holding their items (so nothing of theirs blocks a later day) and wait on the counter's list
+ * for the manager to cancel them or check them out late.
+ */
+export async function markNotCollected(tx: Scoped, today: string): Promise<number> {
+  const ids = (
+    await tx.sql<{ id: string }>(
+      `WITH lapsed AS (UPDATE bookings SET state = 'not_collected', updated_at = now()
+                        WHERE organization_id = $1 AND state = 'reserved' AND purpose <> 'lab' AND ends_on < $2::date RETURNING id)
+       SELECT id FROM lapsed`,
+      [today],
+    )
+  ).map((r) => r.id);
+  if (!ids.length) return 0;
+  await tx.sql(
+    `WITH freed AS (UPDATE booking_items SET active = false WHERE organization_id = $1 AND booking_id = ANY($2) RETURNING id) SELECT count(*) FROM freed`,
+    [ids],
+  );
+  await recordAudits(
+    tx,
+    null,
+    ids.map((id) => ({ action: 'booking.not_collected', subject: { type: 'booking', id }, details: { today } })),
+  );
+  return ids.length;
+}
+
+/** Add, remove or swap items of a reserved booking: added items pass the same refusals (with alternatives) and overlap rule. */
+export async function changeItems(tx: Scoped, actor: Actor, id: string, change: { add: string[]; remove: string[] }): Promise<BookingView> {
+  const booking = await lockedIn(tx, id, ['reserved'], 'Only a reserved booking can change its items');
+  const current = await itemsOf(tx, id);
+  const add = (await resolveAssets(tx, change.add)).filter((a) => !current.includes(a));
+  const remove = change.remove.filter((a) => current.includes(a));
+  const strangers = change.remove.filter((a) => !current.includes(a));
+  if (strangers.length) throw ruleBroken('not_on_booking', 'An item to remove is not on this booking.', { assetIds: strangers });
+  if (current.length - remove.length + add.length === 0) throw ruleBroken('booking_empty', 'A booking keeps at least one item; cancel it instead.');
+  const window: Window = { startsOn: booking.startsOn, endsOn: booking.endsOn, purpose: booking.purpose, exceptBookingId: id };
+  if (add.length) await assertBookable(tx, add, window);
+  if (remove.length)
+    await tx.sql(
+      `WITH gone AS (DELETE FROM booking_items WHERE organization_id = $1 AND booking_id = $2 AND asset_id = ANY($3) RETURNING id) SELECT count(*) FROM gone`,
+      [id, remove],
+    );
+  await holdingDates(tx, add, window, () =>
+    tx.insertMany(
+      BookingItem,
+      add.map((assetId) => ({ bookingId: id, assetId, startsOn: booking.startsOn, endsOn: booking.endsOn, active: true })),
+    ),
+  );
+  // A kit booking with items swapped is no longer the kit as packed.
+  if (booking.kitId && (add.length || remove.length)) {
+    booking.kitId = null;
+    await tx.save(Booking, booking);
+  }
+  await recordAudit(tx, actor, 'booking.items_changed', { type: 'booking', id }, { added: add, removed: remove });
+  return loadBooking(tx, id);
+}
+
 /** Move a reserved booking to other dates under the same rules. */
 export async function moveBooking(tx: Scoped, actor: Actor, id: string, dates: { startsOn: string; endsOn: string; note?: string }): Promise<BookingView> {
-  const booking = await lockedIn(tx, id, 'reserved', 'Only a reserved booking can move');
+  const booking = await lockedIn(tx, id, ['reserved'], 'Only a reserved booking can move');
   const assetIds = await itemsOf(tx, id);
   const window: Window = { startsOn: dates.startsOn, endsOn: dates.endsOn, purpose: booking.purpose, exceptBookingId: id };
   await assertBookable(tx, assetIds, window);
@@ -90,9 +190,9 @@ export async function moveBooking(tx: Scoped, actor: Actor, id: string, dates: {
   return loadBooking(tx, id);
 }
 
-/** Cancel a reserved booking: its days are free again. */
+/** Cancel a reserved (or not collected) booking: its days are free again. */
 export async function cancelBooking(tx: Scoped, actor: Actor, id: string): Promise<BookingView> {
-  const booking = await lockedIn(tx, id, 'reserved', 'Only a reserved booking can be cancelled');
+  const booking = await lockedIn(tx, id, ['reserved', 'not_collected'], 'Only a reserved or not collected booking can be cancelled');
   booking.state = 'cancelled';
   await tx.save(Booking, booking);
   await tx.updateWhere(BookingItem, { bookingId: id }, { active: false });
@@ -100,21 +200,49 @@ export async function cancelBooking(tx: Scoped, actor: Actor, id: string): Promi
   return loadBooking(tx, id);
 }
 
+export type CheckoutRequest = {
+  takenBy: string;
+  takenByUserId?: string | null;
+  checklist?: ChecklistLine[];
+  /** Why it goes before the checkout window opens (`checkoutOpensDaysBefore`); required then, recorded. */
+  earlyReason?: string;
+  /** A reservation not collected goes late: why, and its new last day. */
+  late?: { note: string; endsOn: string };
+};
+
 /**
  * The booking goes out: to a person at the counter (with the packing list as
  * ticked) or to a calibration lab. Refuses (422) items that may no longer go.
+ * Checkout opens the firm's set number of days before the start; earlier needs a
+ * reason, and the booking then starts today so the board shows the days the kit is
+ * really away. A reservation not collected goes late with a note and a new last day,
+ * under the same refusals and overlap rule as a new booking.
  */
-export async function checkOut(
-  tx: Scoped,
-  actor: Actor,
-  id: string,
-  to: { takenBy: string; takenByUserId?: string | null; checklist?: ChecklistLine[] },
-): Promise<BookingView> {
-  const booking = await lockedIn(tx, id, 'reserved', 'Only a reserved booking can be checked out');
+export async function checkOut(tx: Scoped, actor: Actor, id: string, to: CheckoutRequest): Promise<BookingView> {
+  const booking = await lockedIn(tx, id, ['reserved', 'not_collected'], 'Only a reserved or not collected booking can be checked out');
+  const { today, checkoutOpensDaysBefore } = await loadOrgContext(tx);
   const assetIds = await itemsOf(tx, id);
+  let note: string | null = null;
+  if (booking.state === 'not_collected' || (booking.purpose !== 'lab' && booking.endsOn < today)) {
+    if (!to.late)
+      throw ruleBroken('checkout_late', `This reservation ended ${booking.endsOn} and was not collected: give a note and a new last day to check it out late.`);
+    if (to.late.endsOn < today) throw ruleBroken('dates_past', `The new last day must be today (${today}) or later.`);
+    await setDays(tx, booking, assetIds, today, to.late.endsOn);
+    note = to.late.note;
+  } else if (booking.purpose !== 'lab' && booking.startsOn > addDays(today, checkoutOpensDaysBefore)) {
+    if (!to.earlyReason)
+      throw ruleBroken(
+        'checkout_early',
+        `Checkout opens ${addDays(booking.startsOn, -checkoutOpensDaysBefore)}, ${checkoutOpensDaysBefore} day${checkoutOpensDaysBefore === 1 ? '' : 's'} before the start (${booking.startsOn}). Confirm with a reason to hand over earlier.`,
+        { opensOn: addDays(booking.startsOn, -checkoutOpensDaysBefore) },
+      );
+    await setDays(tx, booking, assetIds, today, booking.endsOn);
+    note = to.earlyReason;
+  }
   const refused = await refusals(tx, assetIds, booking.endsOn, booking.purpose);
   if (refused.length) throw blockedError('Cannot hand over', refused);
   Object.assign(booking, {
+    checkoutNote: note,
     state: 'out',
     checkedOutAt: new Date(),
     handedOverBy: actor.userId,
@@ -123,8 +251,23 @@ export async function checkOut(
     checkoutChecklist: to.checklist ?? null,
   });
   await tx.save(Booking, booking);
-  await recordAudit(tx, actor, 'booking.checked_out', { type: 'booking', id }, { takenBy: to.takenBy, items: assetIds.length });
+  await recordAudit(
+    tx,
+    actor,
+    'booking.checked_out',
+    { type: 'booking', id },
+    { takenBy: to.takenBy, items: assetIds.length, ...(to.earlyReason && note ? { early: note } : {}), ...(to.late && note ? { late: note } : {}) },
+  );
   return loadBooking(tx, id);
+}
+
+/** New days for a booking going out early or late: held again under the overlap rule (409 naming the other booking). */
+async function setDays(tx: Scoped, booking: Booking, assetIds: string[], startsOn: string, endsOn: string) {
+  const window: Window = { startsOn, endsOn, purpose: booking.purpose, exceptBookingId: booking.id };
+  await assertBookable(tx, assetIds, window);
+  Object.assign(booking, { startsOn, endsOn });
+  await tx.save(Booking, booking);
+  await holdingDates(tx, assetIds, window, () => tx.updateWhere(BookingItem, { bookingId: booking.id }, { startsOn, endsOn, active: true }));
 }
 
 /** Taken back at the counter against the packing list; what the return opened (incidents) goes on the record. */
@@ -134,14 +277,14 @@ export async function takeBack(
   id: string,
   from: { broughtBackBy: string; checklist: ChecklistLine[]; incidents: { assetId: string; incidentId: string }[] },
 ): Promise<BookingView> {
-  const booking = await lockedIn(tx, id, 'out', 'Only a booking that is out can come back');
+  const booking = await lockedIn(tx, id, ['out'], 'Only a booking that is out can come back');
   Object.assign(booking, { receivedBy: actor.userId, broughtBackBy: from.broughtBackBy, returnChecklist: from.checklist });
   return end(tx, actor, booking, 'booking.returned', { broughtBackBy: from.broughtBackBy, incidents: from.incidents });
 }
 
 /** A booking that is out ends without the counter (every item of a lab trip is back): its days are free again. */
 export async function closeBooking(tx: Scoped, actor: Actor, id: string, why: string): Promise<BookingView> {
-  return end(tx, actor, await lockedIn(tx, id, 'out', 'Only a booking that is out can be closed'), 'booking.closed', { why });
+  return end(tx, actor, await lockedIn(tx, id, ['out'], 'Only a booking that is out can be closed'), 'booking.closed', { why });
 }
 
 async function end(tx: Scoped, actor: Actor, booking: Booking, action: string, details: Record<string, unknown>) {
@@ -153,9 +296,9 @@ async function end(tx: Scoped, actor: Actor, booking: Booking, action: string, d
 }
 
 /** The booking row, locked until the transaction ends so two steps never cross, or 422 `booking_state`. */
-async function lockedIn(tx: Scoped, id: string, state: BookingState, only: string) {
+async function lockedIn(tx: Scoped, id: string, states: BookingState[], only: string) {
   const booking = await tx.get(Booking, { id }, 'That booking', { lock: { mode: 'pessimistic_write' } });
-  if (booking.state !== state) throw ruleBroken('booking_state', `${only}; this one is ${booking.state}.`);
+  if (!states.includes(booking.state)) throw ruleBroken('booking_state', `${only}; this one is ${booking.state}.`);
   return booking;
 }
 

@@ -10,7 +10,7 @@ import { book, busyDays, checkOut } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { getAsset, getAssets, moveAssets } from '../fleet';
-import { ruleBroken } from '../http/errors';
+import { conflict, ruleBroken } from '../http/errors';
 import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
 import { listReply } from '../http/list-reply';
@@ -19,6 +19,18 @@ import { listReply } from '../http/list-reply';
 const freeDays = (from: string, to: string) => (to < from ? 0 : bookingDays(from, to));
 
 const turnaround = (ctx: OrgContext, provider: string | null) => ctx.providers.find((p) => p.name === provider)?.turnaroundDays ?? DEFAULT_TURNAROUND_DAYS;
+
+/** Trips not yet back that carry any of these items (one per item), with the item's tag. */
+function openTrips(tx: Scoped, assetIds: string[]) {
+  return tx.sql<NonNullable<LabWindowsView['plannedTrip']> & { assetId: string; assetTag: string }>(
+    `SELECT DISTINCT ON (i.asset_id) t.id, t.provider, to_char(t.sent_on, 'YYYY-MM-DD') AS "sentOn", to_char(t.expected_back_on, 'YYYY-MM-DD') AS "expectedBackOn",
+            t.state, i.asset_id AS "assetId", a.asset_tag AS "assetTag"
+       FROM lab_trip_items i JOIN lab_trips t ON t.id = i.lab_trip_id JOIN assets a ON a.id = i.asset_id
+      WHERE i.organization_id = $1 AND i.asset_id = ANY($2) AND t.state IN ('planned', 'at_lab') AND i.received_on IS NULL
+      ORDER BY i.asset_id, t.sent_on`,
+    [assetIds],
+  );
+}
 
 /** Lab trips and the window finder: when an item can go to the lab without breaking a booking. */
 export class LabService {
@@ -34,18 +46,23 @@ export class LabService {
       const asset = await getAsset(tx, assetId);
       const days = turnaround(ctx, asset.calibrationProvider);
       const busy = await busyDays(tx, assetId, ctx.today);
-      const gaps: { startsOn: string; endsOn: string | null; freeDays: number | null; returnBy: string }[] = [];
+      const gaps: LabWindowsView['gaps'] = [];
       let cursor = ctx.today;
       for (const b of [...busy, null]) {
         const gapEnd = b ? addDays(b.startsOn, -1) : null;
         const free = gapEnd ? freeDays(cursor, gapEnd) : null;
-        if (free === null || free >= days) gaps.push({ startsOn: cursor, endsOn: gapEnd, freeDays: free, returnBy: addDays(cursor, days - 1) });
+        const beforeDue = !asset.dueOn || cursor <= asset.dueOn;
+        if (free === null || free >= days) gaps.push({ startsOn: cursor, endsOn: gapEnd, freeDays: free, returnBy: addDays(cursor, days - 1), beforeDue });
         if (b && b.endsOn >= cursor) cursor = addDays(b.endsOn, 1);
         if (gaps.length >= 5) break;
       }
+      // Windows that start on or before the due date first (earliest first within each): the trip is meant to beat the due date.
+      gaps.sort((a, b) => Number(b.beforeDue) - Number(a.beforeDue) || (a.startsOn < b.startsOn ? -1 : 1));
       const sendNowUntil = addDays(ctx.today, days - 1);
       const threatenedIfSentNow = busy.filter((b) => b.startsOn <= sendNowUntil);
-      return { assetId, provider: asset.calibrationProvider, turnaroundDays: days, dueOn: asset.dueOn, gaps, threatenedIfSentNow };
+      const noneBeforeDue = !!asset.dueOn && !gaps.some((g) => g.beforeDue);
+      const plannedTrip = (await openTrips(tx, [assetId]))[0] ?? null;
+      return { assetId, provider: asset.calibrationProvider, turnaroundDays: days, dueOn: asset.dueOn, gaps, noneBeforeDue, plannedTrip, threatenedIfSentNow };
     });
   }
 
@@ -54,6 +71,12 @@ export class LabService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const assets = await this.assets(tx, input.assetIds);
+      const already = await openTrips(tx, input.assetIds);
+      if (already.length)
+        throw conflict(
+          `Already on a lab trip: ${already.map((t) => `${t.assetTag} (${t.provider}, ${t.state === 'planned' ? `planned for ${t.sentOn}` : 'at the lab'})`).join('; ')}.`,
+          { trips: already },
+        );
       const expectedBackOn = input.expectedBackOn ?? addDays(input.sentOn, turnaround(ctx, input.provider) - 1);
       const booking = await book(tx, actor, {
         assetIds: assets.map((a) => a.id),

@@ -1,3 +1,5 @@
+import { searchKey } from '../../shared/assets/search-key';
+import type { AssetSuggestion } from '../../shared/assets/views';
 import { addDays } from '../../shared/calibration/due-date';
 import type { AssetListQuery } from '../../shared/schemas/assets';
 import type { Scoped } from '../db/scoped';
@@ -49,7 +51,12 @@ export async function findAssets(tx: Scoped, ctx: OrgContext, filter: Omit<Asset
   const where = ['a.organization_id = $1'];
   const param = (v: unknown) => `$${params.push(v) + 1}`;
   // search_text is kept lower-cased by a trigger and trigram-indexed (FleetSearchColumn migration).
-  if (filter.q) where.push(`a.search_text LIKE ${param(`%${escapeLike(filter.q.toLowerCase())}%`)}`);
+  // search_key holds tags, serials and RFID tags in their forgiving form ("tip 5" finds TIP-005; an RFID tag without separators, by its tail).
+  if (filter.q) {
+    const key = searchKey(filter.q);
+    const text = `a.search_text LIKE ${param(`%${escapeLike(filter.q.toLowerCase())}%`)}`;
+    where.push(key ? `(${text} OR a.search_key LIKE ${param(`%${key}%`)})` : text);
+  }
   if (filter.type?.length) where.push(`a.type = ANY(${param(filter.type)})`);
   if (filter.status?.length) where.push(`a.status = ANY(${param(filter.status)})`);
   if (filter.calibration?.length) {
@@ -87,4 +94,22 @@ export async function findAssets(tx: Scoped, ctx: OrgContext, filter: Omit<Asset
     page ? tx.sql<{ total: string }>(`SELECT count(*) AS total FROM assets a WHERE ${filters}`, params) : Promise.resolve([{ total: '-1' }]),
   ]);
   return { assets: rows.map(toAsset), total: page ? Number(total) : rows.length };
+}
+
+/**
+ * Near misses of a forgiving search key: the assets whose tag, serial or RFID tag looks most like it by trigram
+ * word similarity (pg_trgm), best first. Offered when a search or a label look-up finds nothing.
+ */
+export async function nearMisses(tx: Scoped, key: string): Promise<AssetSuggestion[]> {
+  if (key.length < 2) return [];
+  // A looser bar than pg_trgm's default 0.6 for `<%`: tags are short, so one wrong character costs several trigrams. Local to this transaction.
+  await tx.manager.query(`SELECT set_config('pg_trgm.word_similarity_threshold', '0.3', true)`);
+  return tx.sql<AssetSuggestion>(
+    `SELECT a.id, a.asset_tag AS "assetTag", a.type, a.model
+       FROM assets a
+      WHERE a.organization_id = $1 AND a.status <> 'retired' AND $2 <% a.search_key
+      ORDER BY word_similarity($2, a.search_key) DESC, a.asset_tag
+      LIMIT 5`,
+    [key],
+  );
 }

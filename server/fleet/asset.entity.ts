@@ -95,6 +95,11 @@ export class Asset extends OrgOwned {
   @Column({ name: 'search_text', type: 'text', default: '', select: false, insert: false, update: false })
   searchText?: string;
 
+  /** Tag, serial and RFID in their forgiving form (shared/assets/search-key.ts), kept by the same trigger. */
+  @Index('assets_search_key_trgm', { synchronize: false }) // GIN trigram, made by the FleetForgivingSearch migration
+  @Column({ name: 'search_key', type: 'text', default: '', select: false, insert: false, update: false })
+  searchKey?: string;
+
   @Column({ name: 'retired_at', type: 'timestamptz', nullable: true })
   retiredAt: Date | null;
 

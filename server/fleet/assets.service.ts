@@ -16,7 +16,8 @@ import { AppError, conflict, ruleBroken } from '../http/errors';
 import { isUuid } from '../http/ids';
 import { loadOrgContext } from '../organizations';
 import { Asset } from './asset.entity';
-import { findAssets } from './asset-list';
+import { findAssets, nearMisses } from './asset-list';
+import { searchKey } from '../../shared/assets/search-key';
 import { toAssetView } from './asset-view';
 import { moveAssets, noteCustody, statusWords } from './custody';
 import { listReply } from '../http/list-reply';
@@ -75,16 +76,50 @@ export class AssetsService {
       const trimmed = code.trim();
       const tail = trimmed.slice(-36);
       const id = isUuid(tail) ? tail : undefined;
-      const qb = tx.select(Asset, 'a').leftJoinAndSelect('a.kit', 'k');
+      const qb = () => tx.select(Asset, 'a').leftJoinAndSelect('a.kit', 'k');
+      const key = searchKey(trimmed);
       const asset = id
-        ? await qb.andWhere('a.id = :id', { id }).getOne()
-        : await qb
+        ? await qb().andWhere('a.id = :id', { id }).getOne()
+        : ((await qb()
             .andWhere('(upper(a.asset_tag) = upper(:code) OR upper(a.rfid_tag) = upper(:code))', { code: trimmed })
             .orderBy('a.asset_tag = :code', 'DESC')
-            .getOne();
-      if (!asset) throw new AppError(404, 'not_found', `Nothing in your fleet matches "${trimmed}".`);
+            .getOne()) ?? (key ? await this.forgivingMatch(tx, key) : null));
+      if (!asset) {
+        const suggestions = key ? await nearMisses(tx, key) : [];
+        throw new AppError(
+          404,
+          'not_found',
+          `Nothing in your fleet matches "${trimmed}".${suggestions.length ? ` Did you mean ${suggestions.map((s) => s.assetTag).join(', ')}?` : ''}`,
+          { suggestions },
+        );
+      }
       return toAssetView(asset, ctx, this.publicUrl);
     });
+  }
+
+  /**
+   * A tag or RFID tag typed loosely: the one asset whose tag or RFID tag has the same forgiving form, else the one
+   * RFID tag ending in it (four characters or more). Several candidates are no answer: the near misses list them.
+   */
+  private async forgivingMatch(tx: Scoped, key: string) {
+    const ids = await tx.sql<{ id: string }>(
+      `SELECT id FROM assets WHERE organization_id = $1 AND search_key LIKE $2 AND (nk_search_key(asset_tag) = $3 OR nk_search_key(rfid_tag) = $3) LIMIT 2`,
+      [`%${key}%`, key],
+    );
+    const tail =
+      ids.length || key.length < 4
+        ? []
+        : await tx.sql<{ id: string }>(
+            `SELECT id FROM assets WHERE organization_id = $1 AND rfid_tag IS NOT NULL AND search_key LIKE $2 AND nk_search_key(rfid_tag) LIKE $2 LIMIT 2`,
+            [`%${key}`],
+          );
+    const found = ids.length ? ids : tail;
+    return found.length === 1 ? tx.select(Asset, 'a').leftJoinAndSelect('a.kit', 'k').andWhere('a.id = :id', { id: found[0].id }).getOne() : null;
+  }
+
+  /** Suggestions for a search that found nothing: the nearest tags, serials and RFID tags by trigram similarity (pg_trgm). */
+  suggest(actor: Actor, q: string) {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => listReply(await nearMisses(tx, searchKey(q))));
   }
 
   create(actor: Actor, input: CreateAssetPayload) {

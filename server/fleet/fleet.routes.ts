@@ -25,6 +25,18 @@ export function fleetRoutes(db: DataSource, assets: AssetsService, documents: Fl
   endpoint(
     router,
     at,
+    {
+      method: 'get',
+      path: '/suggestions',
+      summary: 'Near misses for a search that found nothing (trigram similarity of tags, serials, RFID tags)',
+      access: read,
+      query: z.object({ q: text(500).min(1, 'give what was searched for') }),
+    },
+    ({ actor, query }) => assets.suggest(actor, query.q),
+  );
+  endpoint(
+    router,
+    at,
     { method: 'get', path: '/lookup', summary: 'Find an asset by asset tag, RFID tag or QR label payload', access: read, query: lookupQuery },
     ({ actor, query }) => assets.lookup(actor, query.code),
   );

@@ -15,6 +15,7 @@ export type OrgContext = {
   timeZone: string;
   currency: string;
   dueSoonDays: number;
+  checkoutOpensDaysBefore: number;
   today: string;
   decisionRule: DecisionRule;
   triageRatio: number;
@@ -30,6 +31,9 @@ export type OrgContext = {
 /** Turnaround when a provider is not in the settings (common practice: about two weeks). */
 export const DEFAULT_TURNAROUND_DAYS = 14;
 
+/** Checkout opens the day before a booking starts unless the firm sets otherwise (common practice: pack the evening before). */
+export const DEFAULT_CHECKOUT_OPENS_DAYS_BEFORE = 1;
+
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
   const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(
     `SELECT name, time_zone, currency, settings FROM organizations WHERE id = $1`,
@@ -40,6 +44,7 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
     timeZone: org.time_zone,
     currency: org.currency,
     dueSoonDays: org.settings.dueSoonDays ?? DEFAULT_DUE_SOON_DAYS,
+    checkoutOpensDaysBefore: org.settings.checkoutOpensDaysBefore ?? DEFAULT_CHECKOUT_OPENS_DAYS_BEFORE,
     today: todayIn(org.time_zone, now),
     decisionRule: org.settings.decisionRule ?? 'simple',
     triageRatio: org.settings.triageRatio ?? DEFAULT_TRIAGE_RATIO,

@@ -8,6 +8,7 @@ import type { CheckKind } from '../../shared/schemas/checks';
 
 export type OrganizationSettings = {
   dueSoonDays: number;
+  checkoutOpensDaysBefore: number;
   decisionRule: DecisionRule;
   /** Impact triage: an as-found error within tolerance ÷ this ratio suggests "no effect likely". */
   triageRatio: number;

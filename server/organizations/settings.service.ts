@@ -12,6 +12,7 @@ const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>): OrganizationSett
   timeZone: ctx.timeZone,
   currency: ctx.currency,
   dueSoonDays: ctx.dueSoonDays,
+  checkoutOpensDaysBefore: ctx.checkoutOpensDaysBefore,
   decisionRule: ctx.decisionRule,
   triageRatio: ctx.triageRatio,
   tolerances: ctx.tolerances,
@@ -32,6 +33,7 @@ export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<type
     if (patch.timeZone) org.timeZone = patch.timeZone;
     if (patch.dueSoonDays !== undefined) org.settings = { ...org.settings, dueSoonDays: patch.dueSoonDays };
     if (patch.triageRatio !== undefined) org.settings = { ...org.settings, triageRatio: patch.triageRatio };
+    if (patch.checkoutOpensDaysBefore !== undefined) org.settings = { ...org.settings, checkoutOpensDaysBefore: patch.checkoutOpensDaysBefore };
     if (patch.decisionRule) org.settings = { ...org.settings, decisionRule: patch.decisionRule };
     if (patch.taxRateBasisPoints !== undefined) org.settings = { ...org.settings, taxRateBasisPoints: patch.taxRateBasisPoints };
     if (patch.depositPolicy) org.settings = { ...org.settings, depositPolicy: patch.depositPolicy };

@@ -1,4 +1,6 @@
 import { Router } from 'express';
+import { z } from 'zod';
+import { roles } from '../../shared/auth/roles';
 import { createUserPayload, resetPasswordPayload, updateUserPayload } from '../../shared/schemas/users';
 import { endpoint, paging } from '../http/endpoint';
 import type { UsersService } from './users.service';
@@ -8,6 +10,25 @@ export function usersRoutes(users: UsersService): Router {
   const at = '/api/users';
   endpoint(router, at, { method: 'get', path: '/', summary: "List the firm's users", access: 'users.manage', query: paging }, ({ actor, query }) =>
     users.list(actor, query),
+  );
+  endpoint(
+    router,
+    at,
+    {
+      method: 'get',
+      path: '/staff',
+      summary: "The firm's active people by name and role (lead technician, taken by)",
+      access: 'bookings.read',
+      query: z.object({
+        role: z
+          .preprocess(
+            (v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v),
+            z.array(z.enum(roles, { message: `must be one of ${roles.join(', ')}` })),
+          )
+          .default([...roles]),
+      }),
+    },
+    ({ actor, query }) => users.staff(actor, query.role),
   );
   endpoint(router, at, { method: 'post', path: '/', summary: 'Add a user', access: 'users.manage', body: createUserPayload, status: 201 }, ({ actor, body }) =>
     users.create(actor, body),

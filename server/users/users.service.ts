@@ -4,14 +4,15 @@ import type { z } from 'zod';
 import { passwordWeakness } from '../../shared/auth/password-strength';
 import type { Page } from '../../shared/lists/page';
 import type { createUserPayload, updateUserPayload } from '../../shared/schemas/users';
-import type { UserView } from '../../shared/users/views';
+import type { Role } from '../../shared/auth/roles';
+import type { StaffMemberView, UserView } from '../../shared/users/views';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
 import { loadOrgContext } from '../organizations';
 import { replacePasswordHash } from './accounts';
-import { publicUser } from './people';
+import { activeStaff, publicUser } from './people';
 import { User } from './user.entity';
 
 /** The firm's active owners, row-locked until the transaction ends (in id order, so two callers cannot deadlock). */
@@ -33,6 +34,14 @@ export class UsersService {
     const firm = await inOrganization(this.db, organizationId, (tx) => loadOrgContext(tx));
     const weakness = await passwordWeakness(password, [person.email, person.name, firm.name]);
     if (weakness) throw new AppError(400, 'invalid_input', 'That password is too easy to guess.', { fields: { [field]: weakness } });
+  }
+
+  /** The firm's active people in these roles, by name: anyone who books or hands over picks from them. */
+  staff(actor: Actor, roles: Role[]): Promise<Page<StaffMemberView>> {
+    return readInOrganization(this.db, actor.organizationId, async (tx) => {
+      const people = (await activeStaff(tx, roles)).sort((a, b) => a.name.localeCompare(b.name));
+      return { items: people.map(({ id, name, role }) => ({ id, name, role })), total: people.length };
+    });
   }
 
   list(actor: Actor, paging: { limit: number; offset: number }): Promise<Page<UserView>> {

@@ -103,3 +103,6 @@ export type ShippingSheetView = {
   strictest: ShippingClass | null;
   count: number;
 };
+
+/** A near miss offered when a search or a label look-up finds nothing (`GET /api/assets/suggestions`, and `details.suggestions` of the look-up's 404). */
+export type AssetSuggestion = { id: string; assetTag: string; type: AssetType; model: string | null };

@@ -89,7 +89,7 @@ export type RentalChargeView = {
   amountMinor: number | null;
 };
 
-export type RentalState = 'reserved' | 'out' | 'returned' | 'invoiced' | 'cancelled';
+export type RentalState = 'reserved' | 'not_collected' | 'out' | 'returned' | 'invoiced' | 'cancelled';
 
 export type InvoiceLineKind = 'rental' | 'late' | 'damage' | 'credit';
 export type InvoiceLine = { kind: InvoiceLineKind; description: string; quantity: number; unitMinor: number; amountMinor: number };

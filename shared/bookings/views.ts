@@ -28,6 +28,10 @@ export type BookingView = {
   kitId: string | null;
   kit: { id: string; name: string } | null;
   note: string | null;
+  /** Past use the owner recorded; never reserved or handed over in Nestkeeper. */
+  history: boolean;
+  /** Why the kit went before its checkout window opened, or late after it was not collected. */
+  checkoutNote: string | null;
   assetIds: string[];
   /** In packing-list order. */
   items: BookingItemView[];
@@ -53,6 +57,8 @@ export type CounterDayView = {
   checkouts: BookingView[];
   returns: BookingView[];
   late: BookingView[];
+  /** Reservations whose days passed without checkout: cancel them, or check them out late with a note. */
+  notCollected: BookingView[];
   /** Reserved bookings an item no longer qualifies for. */
   blocked: (BookingView & { blocked: BlockedItem[] })[];
 };

@@ -78,8 +78,12 @@ export type LabWindowsView = {
   provider: string | null;
   turnaroundDays: number;
   dueOn: string | null;
-  /** `endsOn` and `freeDays` are null for the open gap after the last booking. */
-  gaps: { startsOn: string; endsOn: string | null; freeDays: number | null; returnBy: string }[];
+  /** `endsOn` and `freeDays` are null for the open gap after the last booking. Windows starting on or before the due date come first (`beforeDue`). */
+  gaps: { startsOn: string; endsOn: string | null; freeDays: number | null; returnBy: string; beforeDue: boolean }[];
+  /** True when the item has a due date and no window starts on or before it. */
+  noneBeforeDue: boolean;
+  /** A trip already planned (or at the lab) with this item: no second one is offered. */
+  plannedTrip: { id: string; provider: string; sentOn: string; expectedBackOn: string; state: LabTripState } | null;
   threatenedIfSentNow: { bookingId: string; startsOn: string; endsOn: string; purpose: string; jobReference: string | null }[];
 };
 

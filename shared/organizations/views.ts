@@ -20,6 +20,8 @@ export type OrganizationSettingsView = {
   currency: string;
   /** Days before the due date an item counts as "due soon". */
   dueSoonDays: number;
+  /** How many days before a booking starts its checkout opens; earlier needs a reason (default 1). */
+  checkoutOpensDaysBefore: number;
   /** ILAC-G8 decision rule for field checks. */
   decisionRule: DecisionRule;
   /** Impact triage: an as-found error within a job's tolerance ÷ this ratio suggests "no effect likely" (default 4, common practice). */

@@ -160,6 +160,7 @@ export const organizationSettingsPayload = z
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
     /** Owners and billing clerks must sign in with a second step (TOTP). */
     secondStepRequired: z.boolean(),
+    checkoutOpensDaysBefore: z.number().int('must be whole days').min(0, 'must be 0 or more days').max(365, 'must be at most 365 days'),
     timeZone: text(64).refine((tz) => {
       try {
         new Intl.DateTimeFormat('en', { timeZone: tz });

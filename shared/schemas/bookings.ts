@@ -3,7 +3,8 @@ import { assetTypes } from '../assets/vocabulary';
 import { tolerancePayload } from './check-kinds';
 import { calendarDate, emailAddress, text } from './common';
 
-export const bookingStates = ['reserved', 'out', 'returned', 'cancelled'] as const;
+/** `not_collected`: a reservation whose days passed without checkout; it no longer holds its items. */
+export const bookingStates = ['reserved', 'out', 'returned', 'cancelled', 'not_collected'] as const;
 export type BookingState = (typeof bookingStates)[number];
 /** `internal`: the firm's own use without a job record (training, demos). */
 export const bookingPurposes = ['job', 'rental', 'lab', 'internal'] as const;
@@ -27,10 +28,20 @@ export const bookingPayload = dates({
   jobId: z.uuid('is not a job id').optional(),
   rentalId: z.uuid('is not a rental id').optional(),
   note: text(2000).optional(),
+  /** The owner records past use (a firm starting with Nestkeeper): every day before today, kept as history. */
+  history: z.boolean().optional(),
 }).refine((b) => (b.assetIds?.length ?? 0) > 0 || !!b.kitId, { message: 'pick a kit or at least one asset', path: ['assetIds'] });
 export type BookingPayload = z.infer<typeof bookingPayload>;
 
 export const bookingDatesPayload = dates({ note: text(2000).optional() });
+
+/** Add, remove or swap items of a reserved booking (a swap is one of each). */
+export const bookingItemsPayload = z
+  .object({
+    add: z.array(z.uuid('is not an asset id')).max(200).default([]),
+    remove: z.array(z.uuid('is not an asset id')).max(200).default([]),
+  })
+  .refine((b) => b.add.length + b.remove.length > 0, { message: 'add or remove at least one item', path: ['add'] });
 
 export const checklistPayload = z.object({
   checklist: z
@@ -45,6 +56,10 @@ export const checklistPayload = z.object({
     .min(1, 'walk the packing list'),
   /** Who takes the kit (checkout) or brings it back (return): a person's name or a user id. */
   counterpart: text(120).min(2, 'say who takes or brings the kit'),
+  /** Checkout only: why the kit goes before the checkout window opens (recorded). */
+  earlyReason: text(1000).min(3, 'say why the kit goes early').optional(),
+  /** Checkout only, for a reservation not collected: why it goes late, and the new last day. */
+  late: z.object({ note: text(1000).min(3, 'say why the kit goes late'), endsOn: calendarDate }).optional(),
 });
 
 export const bookingListQuery = z.object({

@@ -13,3 +13,6 @@ export type UserView = {
   secondStepOn: boolean;
   createdAt: string;
 };
+
+/** `GET /api/users/staff`: the firm's active people by name and role, for "Lead technician" and "Taken by" lists. */
+export type StaffMemberView = { id: string; name: string; role: Role };

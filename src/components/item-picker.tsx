@@ -34,7 +34,11 @@ export interface PickableItem {
   type?: AssetType;
   model: string | null;
   kit?: { id: string; name: string } | null;
+  status?: AssetStatus;
 }
+
+/** Items the booking rule refuses whatever the dates: shown as such in the search, before any dates are picked. */
+const unavailableWords: Partial<Record<AssetStatus, string>> = { held: 'On hold', at_lab: 'At the calibration lab' };
 
 /** A separate item on a booking or rental form: read from the fleet, or an alternative the server offered in place of a refused one. */
 export type ChosenItem = AssetView | AlternativeItem;
@@ -100,7 +104,7 @@ export function ItemPicker<T extends PickableItem>({
               tag: item.assetTag,
               detail: itemDetail(item),
               kitName: item.kit?.name,
-              note: chosenIds.has(item.id) ? 'Added' : kitId && item.kit?.id === kitId ? 'On the kit' : undefined,
+              note: chosenIds.has(item.id) ? 'Added' : kitId && item.kit?.id === kitId ? 'On the kit' : item.status ? unavailableWords[item.status] : undefined,
             }))}
             none={
               q

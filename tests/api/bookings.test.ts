@@ -148,7 +148,8 @@ describe('checkout and return against the packing list', () => {
   it('refuses checkout of an item held since booking, then hands over and takes back with one item missing', async () => {
     const a = await tracker();
     const b = await tracker();
-    const booking = (await book(manager, { assetIds: [a.id, b.id], startsOn: '2026-11-20', endsOn: '2026-11-25' })).body;
+    const today = todayIn('Europe/Berlin');
+    const booking = (await book(manager, { assetIds: [a.id, b.id], startsOn: today, endsOn: addDays(today, 5) })).body;
     const list = (present = true) => [a, b].map((x) => ({ assetId: x.id, present, condition: 'good' }));
 
     await t.api.post(`/api/assets/${b.id}/hold`).set(bearer(manager)).send({ summary: 'Dropped in the van' });
@@ -172,6 +173,9 @@ describe('checkout and return against the packing list', () => {
     expect(out.body).toMatchObject({ state: 'out', takenBy: 'Tamsin Quillfeather', takenByUserId: me.id });
     expect((await t.api.get(`/api/assets/${a.id}`).set(bearer(manager))).body.status).toBe('out');
     expect((await t.api.get('/api/bookings/mine').set(bearer(tech))).body.now.map((x: { id: string }) => x.id)).toContain(booking.id);
+    // Days pass with the kit out: it is late back.
+    await t.db.query(`UPDATE bookings SET starts_on = starts_on - 13, ends_on = ends_on - 13 WHERE id = $1`, [booking.id]);
+    await t.db.query(`UPDATE booking_items SET starts_on = starts_on - 13, ends_on = ends_on - 13 WHERE booking_id = $1`, [booking.id]);
     const desk = (await t.api.get('/api/bookings/today').set(bearer(manager))).body;
     expect(desk.late.map((x: { id: string }) => x.id)).toContain(booking.id);
     // The hand-over sheet (PDF, read back by MuPDF): the packing list as ticked, the cautions, two signatures.
@@ -216,7 +220,7 @@ describe('checkout and return against the packing list', () => {
       'booking_state',
     );
     // Returned early or late, the dates are free again.
-    expect((await book(manager, { assetIds: [a.id], startsOn: '2026-11-21', endsOn: '2026-11-22' })).status).toBe(201);
+    expect((await book(manager, { assetIds: [a.id], startsOn: today, endsOn: addDays(today, 1) })).status).toBe(201);
   });
 });
 

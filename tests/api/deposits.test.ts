@@ -5,7 +5,7 @@ import { createPaymentClient } from '../../server/billing/payment-client';
 import { startPaymentFake, type PaymentFake } from '../../server/fakes/payment-fake';
 import { signPayload } from '../../server/fakes/payments/events';
 import type { RentalView } from '../../shared/billing/views';
-import { todayIn } from '../../shared/calibration/due-date';
+import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { pdfText } from '../support/pdf';
 import { bearer, binaryBody, createTestApp, webhookSecret, type TestApp } from '../support/test-app';
 import { eventually } from '../support/eventually';
@@ -42,7 +42,8 @@ beforeAll(async () => {
   await t.api
     .patch('/api/settings')
     .set(bearer(owner))
-    .send({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 } });
+    .send({ taxRateBasisPoints: 1900, depositPolicy: { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 }, checkoutOpensDaysBefore: 365 });
+  // Checkout opens a year ahead here: these rentals lie months out and are handed over as the money steps need.
   // The demo seed's SMR rate card: day 15.00, week 75.00, month 240.00, late fee 5.00.
   customerId = (
     await t.api
@@ -565,17 +566,23 @@ describe('invoice numbers under concurrency', () => {
       .patch('/api/settings')
       .set(bearer(owner))
       .send({ depositPolicy: { percent: 0, minMinor: 0, maxMinor: 0 } });
-    const [smr] = (await t.api.get('/api/availability').query({ type: 'smr', startsOn: '2025-01-01', endsOn: '2025-03-31', limit: 1 }).set(bearer(billing)))
-      .body.items;
+    // An SMR of its own, in the shop and free for the fifty days (the file's other rentals keep theirs out or reserved).
+    const made = await t.api
+      .post('/api/assets')
+      .set(bearer(manager))
+      .send({ type: 'smr', assetTag: 'SMR-INV-50', serialNumber: 'SMR-INV-50', specs: { diameterMm: 38.1 } });
+    expect(made.status, JSON.stringify(made.body)).toBe(201);
+    const smr = made.body as { id: string };
     const rentals: RentalView[] = [];
     for (let i = 0; i < 50; i += 1) {
-      const on = new Date(Date.UTC(2025, 0, 1 + i)).toISOString().slice(0, 10);
+      const on = addDays(todayIn('Europe/Berlin'), 1 + i);
       const res = await t.api
         .post('/api/rentals')
         .set(bearer(billing))
         .send({ customerId, assetIds: [smr.id], startsOn: on, endsOn: on });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
-      expect((await checkout(res.body)).status).toBe(200);
+      const out = await checkout(res.body);
+      expect(out.status, JSON.stringify(out.body)).toBe(200);
       expect((await giveBack(res.body)).status).toBe(200);
       rentals.push(res.body);
     }

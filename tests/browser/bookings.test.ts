@@ -64,7 +64,14 @@ describe('booking board in a real browser', () => {
     for (const tag of tags) await page.getByLabel(`Present: ${tag}`).check();
     await page.getByLabel('Taken by').fill('Tamsin Quillfeather');
     await page.getByRole('button', { name: 'Hand over' }).click();
-    await eventually(async () => (await rig.db.query(`SELECT state FROM bookings WHERE id = $1`, [bookingId]))[0].state).toBe('out');
+    // Three weeks ahead, checkout has not opened: handing over now needs a reason, which the booking keeps.
+    await page.getByRole('heading', { name: 'Hand over before checkout opens?' }).waitFor();
+    await page.getByLabel('Why it goes early').fill('Crew drives out early to set up');
+    await page.getByRole('button', { name: 'Hand over early' }).click();
+    await eventually(async () => (await rig.db.query(`SELECT state, checkout_note FROM bookings WHERE id = $1`, [bookingId]))[0]).toEqual({
+      state: 'out',
+      checkout_note: 'Crew drives out early to set up',
+    });
 
     await page.goto(`${rig.baseUrl}/bookings/${bookingId}`);
     await page.getByRole('link', { name: 'Take back' }).click();

@@ -20,7 +20,7 @@ import { addDays, todayIn, type BookingState } from '../../lib/bookings';
 import { can } from '../../lib/roles';
 
 const weekChoices = [2, 4, 8, 12] as const;
-const boardStates: BookingState[] = ['reserved', 'out', 'returned'];
+const boardStates: BookingState[] = ['reserved', 'out', 'returned', 'not_collected'];
 const liveStatuses: AssetStatus[] = ['ready', 'out', 'at_lab', 'held'];
 
 const mondayOf = (date: string) => format(startOfWeek(parseISO(date), { weekStartsOn: 1 }), 'yyyy-MM-dd');
@@ -204,6 +204,12 @@ function BoardLegend() {
       </li>
       <li className="flex items-center gap-1.5">
         <span aria-hidden="true" className={`${swatch} nk-bar-returned`} /> Returned (hatched)
+      </li>
+      <li className="flex items-center gap-1.5">
+        <span aria-hidden="true" className={`${swatch} nk-bar-remainder`} /> Planned days after an early return (faint)
+      </li>
+      <li className="flex items-center gap-1.5">
+        <span aria-hidden="true" className={`${swatch} nk-bar-not_collected`} /> Not collected (dotted)
       </li>
       <li className="flex items-center gap-1.5">
         <span aria-hidden="true" className={`${swatch} nk-bar-reserved nk-bar-due`} /> Falls due during the booking

@@ -8,16 +8,19 @@ import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { useBooking } from '../../features/bookings/api/get-booking';
 import type { ReturnView } from '../../../shared/bookings/views';
-import { bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
+import { bookingStateWords, bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
 import { HandoverForm, ReturnOutcome, type CounterpartSuggestion } from '../../features/bookings/components/handover-form';
 import { useSiteJob } from '../../features/site-jobs/api/get-site-job';
+import { useStaff } from '../../features/users/api/get-staff';
+import { todayIn } from '../../lib/bookings';
 
 /** Checkout (`/bookings/:id/checkout`) and return (`/bookings/:id/return`) against the packing list. */
 export default function BookingHandoverRoute() {
   const { id = '' } = useParams();
   const { pathname } = useLocation();
   const mode = pathname.endsWith('/return') ? 'return' : 'checkout';
-  const { user } = useSession();
+  const { user, organization } = useSession();
+  const staff = useStaff(['technician', 'manager', 'owner']);
   const navigate = useNavigate();
   const booking = useBooking(id);
   const job = useSiteJob(booking.data?.jobId);
@@ -55,14 +58,15 @@ export default function BookingHandoverRoute() {
     );
   }
 
-  const wanted = mode === 'checkout' ? 'reserved' : 'out';
-  if (b.state !== wanted) {
+  const wanted = mode === 'checkout' ? ['reserved', 'not_collected'] : ['out'];
+  if (!wanted.includes(b.state)) {
     return (
       <>
         {back}
         <PageHeader title={title} />
         <Notice tone="info">
-          {mode === 'checkout' ? 'Only a reserved booking can be checked out.' : 'Only a booking that is out can be taken back.'} This one is {b.state}.
+          {mode === 'checkout' ? 'Only a reserved or not collected booking can be checked out.' : 'Only a booking that is out can be taken back.'} This one is{' '}
+          {bookingStateWords[b.state].toLowerCase()}.
         </Notice>
       </>
     );
@@ -74,9 +78,17 @@ export default function BookingHandoverRoute() {
   }
   if (!suggestions.some((s) => s.userId === user.id)) suggestions.push({ label: `Me (${user.name})`, name: user.name, userId: user.id });
   const lead = job.data?.leadTechnicianId;
+  const leadName = staff.data?.items.find((p) => p.id === lead)?.name;
   if (lead && !suggestions.some((s) => s.userId === lead)) {
-    suggestions.push({ label: `Lead technician of ${job.data?.reference}`, name: `Lead technician of ${job.data?.reference}`, userId: lead });
+    suggestions.push({
+      label: `${leadName ?? 'Lead technician'} (leads ${job.data?.reference})`,
+      name: leadName ?? `Lead technician of ${job.data?.reference}`,
+      userId: lead,
+    });
   }
+  // Then the firm's technicians, by name.
+  for (const person of staff.data?.items.filter((p) => p.role === 'technician') ?? [])
+    if (!suggestions.some((s) => s.userId === person.id)) suggestions.push({ label: person.name, name: person.name, userId: person.id });
 
   return (
     <>
@@ -89,6 +101,7 @@ export default function BookingHandoverRoute() {
         booking={b}
         mode={mode}
         suggestions={suggestions}
+        today={todayIn(organization.timeZone)}
         onDone={(result) => {
           if (mode === 'return') setReturned(result as ReturnView);
           else navigate(`/bookings/${b.id}`, { state: { notice: `Handed over to ${result.takenBy ?? 'the taker'}.` } });

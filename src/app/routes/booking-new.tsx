@@ -10,6 +10,7 @@ import { assetsQueryOptions } from '../../features/fleet/api/get-assets';
 import { useKits } from '../../features/kits/api/get-kits';
 import { useSiteJobs } from '../../features/site-jobs/api/get-site-jobs';
 import { JobForm } from '../../features/site-jobs/components/job-form';
+import { useStaff } from '../../features/users/api/get-staff';
 
 const isDate = (s: string | null) => (s && /^\d{4}-\d{2}-\d{2}$/.test(s) ? s : undefined);
 
@@ -24,12 +25,16 @@ export default function BookingNewRoute() {
   const assetId = params.get('assetId') ?? '';
   const asset = useAsset(assetId);
 
+  const staff = useStaff(['technician']);
+  // A booking made from a job starts with the job's days unless the link names others.
+  const jobId = params.get('jobId') ?? undefined;
+  const job = jobs.data?.items.find((j) => j.id === jobId);
   const initial = {
     kitId: params.get('kitId') ?? undefined,
     items: asset.data ? [asset.data] : undefined,
-    startsOn: isDate(params.get('startsOn')),
-    endsOn: isDate(params.get('endsOn')),
-    jobId: params.get('jobId') ?? undefined,
+    startsOn: isDate(params.get('startsOn')) ?? job?.startsOn,
+    endsOn: isDate(params.get('endsOn')) ?? (isDate(params.get('startsOn')) ? undefined : job?.endsOn),
+    jobId,
   };
 
   const error = kits.error ?? (assetId ? asset.error : null) ?? jobs.error;
@@ -57,6 +62,7 @@ export default function BookingNewRoute() {
             renderNewJob={({ startsOn, endsOn, onCreated, onCancel }) => (
               <JobForm
                 me={{ id: user.id, name: user.name }}
+                technicians={staff.data?.items ?? []}
                 defaults={{ startsOn, endsOn }}
                 onSaved={(job) => onCreated(job.id)}
                 onCancel={onCancel}

@@ -2,7 +2,7 @@ import { Navigate, useNavigate, useParams } from 'react-router-dom';
 import { LoadingPanel } from '../../components/loading-panel';
 import { PageHeader } from '../../components/page-header';
 import { useLookupAsset } from '../../features/fleet/api/lookup-asset';
-import { FindByLabel } from '../../features/fleet/components/find-by-label';
+import { FindByLabel, suggestionsIn } from '../../features/fleet/components/find-by-label';
 import { ApiError, isApiError } from '../../lib/api-client';
 import { findInCopy, useStoredCopy } from '../../features/field/api/get-field-copy';
 import { CopyAge } from '../../features/field/components/copy-age';
@@ -54,14 +54,20 @@ function ServerScan() {
   const problem =
     code && lookup.isError
       ? isApiError(lookup.error) && lookup.error.status === 404
-        ? `Nothing in your fleet matches “${code}”. Check the tag and try again.`
+        ? `Nothing in your fleet matches “${code}”.`
         : lookup.error.message
       : undefined;
 
   return (
     <>
       <PageHeader title="Find by label" description="Type the tag printed on the item, or read its QR label with the camera." />
-      <FindByLabel key={code ?? ''} initialCode={code ?? ''} initialProblem={problem} onFound={(asset) => navigate(`/fleet/${asset.id}`)} />
+      <FindByLabel
+        key={code ?? ''}
+        initialCode={code ?? ''}
+        initialProblem={problem}
+        initialSuggestions={code && lookup.isError ? suggestionsIn(lookup.error) : []}
+        onFound={(asset) => navigate(`/fleet/${asset.id}`)}
+      />
     </>
   );
 }

@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { Button } from '../../components/button';
+import { Link } from 'react-router-dom';
+import { Button, buttonClasses } from '../../components/button';
 import { Dialog } from '../../components/dialog';
 import { PlusIcon } from '../../components/icons';
 import { Notice } from '../../components/notice';
@@ -9,6 +10,7 @@ import { useSession } from '../../features/auth/components/session-context';
 import { useSiteJobs } from '../../features/site-jobs/api/get-site-jobs';
 import type { SiteJobView } from '../../../shared/bookings/views';
 import { JobForm } from '../../features/site-jobs/components/job-form';
+import { useStaff } from '../../features/users/api/get-staff';
 import { SiteJobsTable } from '../../features/site-jobs/components/site-jobs-table';
 import { formatCalendarDate } from '../../lib/format';
 import { can } from '../../lib/roles';
@@ -17,6 +19,8 @@ import { can } from '../../lib/roles';
 export default function SiteJobsRoute() {
   const { user } = useSession();
   const jobs = useSiteJobs();
+  const staff = useStaff(['technician']);
+  const technicianName = (id: string | null) => staff.data?.items.find((p) => p.id === id)?.name;
   const canWrite = can(user.role, 'bookings.write');
   const [editing, setEditing] = useState<SiteJobView | 'new' | null>(null);
   const [saved, setSaved] = useState<string>();
@@ -47,10 +51,16 @@ export default function SiteJobsRoute() {
         title={editing === 'new' ? 'New job' : editing ? `Job ${editing.reference}` : ''}
         size="lg"
       >
+        {editing && editing !== 'new' && canWrite ? (
+          <Link to={`/bookings/new?jobId=${editing.id}`} className={`${buttonClasses('secondary')} mb-3 self-start`}>
+            Book kit for this job
+          </Link>
+        ) : null}
         {editing && canWrite ? (
           <JobForm
             job={editing === 'new' ? undefined : editing}
             me={{ id: user.id, name: user.name }}
+            technicians={staff.data?.items ?? []}
             onSaved={(job) => {
               setSaved(`${job.reference} for ${job.customerName} is saved.`);
               setEditing(null);
@@ -68,7 +78,12 @@ export default function SiteJobsRoute() {
               { term: 'On site', value: `${formatCalendarDate(editing.startsOn)} – ${formatCalendarDate(editing.endsOn)}` },
               {
                 term: 'Lead technician',
-                value: editing.leadTechnicianId === user.id ? `You (${user.name})` : editing.leadTechnicianId ? 'Another technician' : null,
+                value:
+                  editing.leadTechnicianId === user.id
+                    ? `You (${user.name})`
+                    : editing.leadTechnicianId
+                      ? (technicianName(editing.leadTechnicianId) ?? 'Another technician')
+                      : null,
               },
               { term: 'Notes', value: editing.notes },
             ]}

@@ -8,6 +8,10 @@ import type { BookingView, ChecklistLine } from '../../../../shared/bookings/vie
 export interface HandoverInput {
   checklist: ChecklistLine[];
   counterpart: string;
+  /** Checkout before the window opens: why (recorded). */
+  earlyReason?: string;
+  /** Checkout of a reservation not collected: why, and the new last day. */
+  late?: { note: string; endsOn: string };
 }
 
 /** POST /api/bookings/:id/checkout — the kit leaves against its packing list. */

@@ -1,11 +1,12 @@
 import { differenceInCalendarDays, format, parseISO } from 'date-fns';
-import { memo, useCallback, useEffect, useMemo, useState, type CSSProperties, type PointerEvent as ReactPointerEvent } from 'react';
+import { memo, useCallback, useContext, useEffect, useMemo, useState, type CSSProperties, type PointerEvent as ReactPointerEvent } from 'react';
 import { Link } from 'react-router-dom';
 import { AlertIcon, ClockIcon, PlusIcon } from '../../../components/icons';
 import { StatusChip } from '../../../components/status-chip';
 import type { AssetView } from '../../../../shared/assets/views';
 import { assetTypeTitles } from '../../../lib/assets';
-import { addDays } from '../../../lib/bookings';
+import { addDays, calendarDayIn } from '../../../lib/bookings';
+import { TimeZoneContext } from '../../../lib/format';
 import type { BookingView } from '../../../../shared/bookings/views';
 import './booking-board.css';
 import { bookingStateWords, bookingTitle, dayRange, shortDay } from './booking-words';
@@ -36,10 +37,27 @@ interface BarModel {
   late: boolean;
   /** The bar goes on past the window's last day. */
   endsAfter: boolean;
+  /** Returned before its last day: the day it came back, and the planned days after it (drawn faint, holding nothing). */
+  returnedEarlyOn: string | null;
+  remainder: { first: number; last: number } | null;
+}
+
+/** The calendar day a returned booking came back, when that is before its last planned day. */
+function earlyReturnDay(booking: BookingView, timeZone: string): string | null {
+  if (booking.state !== 'returned' || !booking.returnedAt) return null;
+  const day = calendarDayIn(new Date(booking.returnedAt), timeZone);
+  return day < booking.endsOn ? (day < booking.startsOn ? booking.startsOn : day) : null;
 }
 
 /** Places bars in lanes so bars that share days never cover each other. */
-function layoutBars(bookings: BookingView[], from: string, days: number, today: string, rowAssets: AssetView[]): { bars: BarModel[]; lanes: number } {
+function layoutBars(
+  bookings: BookingView[],
+  from: string,
+  days: number,
+  today: string,
+  rowAssets: AssetView[],
+  timeZone: string,
+): { bars: BarModel[]; lanes: number } {
   const base = parseISO(from);
   const sorted = [...bookings].sort((a, b) => (a.startsOn < b.startsOn ? -1 : a.startsOn > b.startsOn ? 1 : 0));
   const laneEnds: number[] = [];
@@ -47,9 +65,31 @@ function layoutBars(bookings: BookingView[], from: string, days: number, today: 
   for (const booking of sorted) {
     // Still out after its last day: the bar runs on to today, marked late.
     const late = booking.state === 'out' && booking.endsOn < today;
+    const returnedEarlyOn = earlyReturnDay(booking, timeZone);
     const first = Math.max(0, differenceInCalendarDays(parseISO(booking.startsOn), base));
-    const last = Math.min(days - 1, differenceInCalendarDays(parseISO(late ? today : booking.endsOn), base));
-    if (last < 0 || first > days - 1) continue;
+    const last = Math.min(days - 1, differenceInCalendarDays(parseISO(late ? today : (returnedEarlyOn ?? booking.endsOn)), base));
+    const remainder = returnedEarlyOn
+      ? {
+          first: Math.max(0, differenceInCalendarDays(parseISO(addDays(returnedEarlyOn, 1)), base)),
+          last: Math.min(days - 1, differenceInCalendarDays(parseISO(booking.endsOn), base)),
+        }
+      : null;
+    if (last < 0 || first > days - 1) {
+      // The days used lie outside the window; only the faint planned remainder might show. It holds nothing, so it takes no lane.
+      if (remainder && remainder.last >= 0 && remainder.first <= days - 1 && remainder.first <= remainder.last)
+        bars.push({
+          booking,
+          lane: 0,
+          first: -1,
+          last: -1,
+          dueTags: [],
+          late: false,
+          endsAfter: booking.endsOn > addDays(from, days - 1),
+          returnedEarlyOn,
+          remainder,
+        });
+      continue;
+    }
     let lane = laneEnds.findIndex((end) => end < first);
     if (lane < 0) lane = laneEnds.push(last) - 1;
     else laneEnds[lane] = last;
@@ -57,8 +97,18 @@ function layoutBars(bookings: BookingView[], from: string, days: number, today: 
     const dueTags = active
       ? rowAssets.filter((a) => booking.assetIds.includes(a.id) && fallsDue(a, booking)).map((a) => ({ tag: a.assetTag, dueOn: a.calibration.dueOn ?? '' }))
       : [];
-    const endsAfter = (late ? today : booking.endsOn) > addDays(from, days - 1);
-    bars.push({ booking, lane, first, last, dueTags, late, endsAfter });
+    const endsAfter = (late ? today : (returnedEarlyOn ?? booking.endsOn)) > addDays(from, days - 1);
+    bars.push({
+      booking,
+      lane,
+      first,
+      last,
+      dueTags,
+      late,
+      endsAfter,
+      returnedEarlyOn,
+      remainder: remainder && remainder.first <= remainder.last ? remainder : null,
+    });
   }
   return { bars, lanes: Math.max(1, laneEnds.length) };
 }
@@ -67,7 +117,8 @@ function barName(bar: BarModel): string {
   const { booking } = bar;
   const due = bar.dueTags.length ? `, falls due during this booking (${bar.dueTags.map((d) => `${d.tag} due ${shortDay(d.dueOn)}`).join(', ')})` : '';
   const late = bar.late ? `, late: was due back ${shortDay(booking.endsOn)}` : '';
-  return `${bookingTitle(booking)}, ${dayRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${late}${due}`;
+  const early = bar.returnedEarlyOn ? `, back early on ${shortDay(bar.returnedEarlyOn)}` : '';
+  return `${bookingTitle(booking)}, ${dayRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${early}${late}${due}`;
 }
 
 interface Pick {
@@ -334,7 +385,8 @@ const BoardRow = memo(function BoardRow({
   bookHref,
 }: BoardRowProps) {
   const rowAssets = useMemo(() => (row.kind === 'kit' ? row.members : [row.asset]), [row]);
-  const { bars, lanes } = useMemo(() => layoutBars(bookings, from, days, today, rowAssets), [bookings, from, days, today, rowAssets]);
+  const timeZone = useContext(TimeZoneContext) ?? 'UTC';
+  const { bars, lanes } = useMemo(() => layoutBars(bookings, from, days, today, rowAssets, timeZone), [bookings, from, days, today, rowAssets, timeZone]);
   const height = lanes * LANE_PX + ROW_PAD_PX * 2;
   const last = addDays(from, days - 1);
 
@@ -487,24 +539,42 @@ function Bar({ bar, from, days, dayPx }: { bar: BarModel; from: string; days: nu
   const startsBefore = booking.startsOn < from;
   const endsAfter = bar.endsAfter;
   const state = booking.state === 'cancelled' ? 'returned' : booking.state;
+  const remainder = bar.remainder ? (
+    <span
+      aria-hidden="true"
+      data-planned-remainder=""
+      title={`Planned until ${shortDay(booking.endsOn)}, back early on ${shortDay(bar.returnedEarlyOn ?? booking.endsOn)}`}
+      className="nk-bar-remainder pointer-events-none absolute z-[1] rounded-r-md"
+      style={{
+        left: bar.remainder.first * dayPx + 1,
+        width: (bar.remainder.last - bar.remainder.first + 1) * dayPx - 2,
+        top: ROW_PAD_PX + bar.lane * LANE_PX,
+        height: LANE_PX - 4,
+      }}
+    />
+  ) : null;
+  if (bar.first < 0) return remainder;
   return (
-    <Link
-      data-bar=""
-      to={`/bookings/${booking.id}`}
-      aria-label={name}
-      title={name}
-      className={`nk-bar nk-bar-${state} ${bar.dueTags.length ? 'nk-bar-due' : ''} absolute z-[2] flex items-center gap-1 overflow-hidden px-1.5 text-xs font-semibold whitespace-nowrap ${startsBefore ? 'rounded-l-none border-l-0' : 'rounded-l-md'} ${endsAfter ? 'rounded-r-none border-r-0' : 'rounded-r-md'}`}
-      style={{ left: bar.first * dayPx + 1, width: (bar.last - bar.first + 1) * dayPx - 2, top: ROW_PAD_PX + bar.lane * LANE_PX, height: LANE_PX - 4 }}
-    >
-      {startsBefore ? <span aria-hidden="true">◂</span> : null}
-      {bar.dueTags.length ? <AlertIcon size={12} className="shrink-0" /> : null}
-      <span className="truncate">{bookingTitle(booking)}</span>
-      {bar.late ? <span className="ml-1 shrink-0 rounded-sm bg-bad px-1 text-[10px] tracking-wide text-card uppercase">Late</span> : null}
-      {endsAfter ? (
-        <span aria-hidden="true" className="ml-auto">
-          ▸
-        </span>
-      ) : null}
-    </Link>
+    <>
+      {remainder}
+      <Link
+        data-bar=""
+        to={`/bookings/${booking.id}`}
+        aria-label={name}
+        title={name}
+        className={`nk-bar nk-bar-${state} ${bar.dueTags.length ? 'nk-bar-due' : ''} absolute z-[2] flex items-center gap-1 overflow-hidden px-1.5 text-xs font-semibold whitespace-nowrap ${startsBefore ? 'rounded-l-none border-l-0' : 'rounded-l-md'} ${endsAfter ? 'rounded-r-none border-r-0' : 'rounded-r-md'}`}
+        style={{ left: bar.first * dayPx + 1, width: (bar.last - bar.first + 1) * dayPx - 2, top: ROW_PAD_PX + bar.lane * LANE_PX, height: LANE_PX - 4 }}
+      >
+        {startsBefore ? <span aria-hidden="true">◂</span> : null}
+        {bar.dueTags.length ? <AlertIcon size={12} className="shrink-0" /> : null}
+        <span className="truncate">{bookingTitle(booking)}</span>
+        {bar.late ? <span className="ml-1 shrink-0 rounded-sm bg-bad px-1 text-[10px] tracking-wide text-card uppercase">Late</span> : null}
+        {endsAfter ? (
+          <span aria-hidden="true" className="ml-auto">
+            ▸
+          </span>
+        ) : null}
+      </Link>
+    </>
   );
 }

@@ -25,7 +25,15 @@ export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booki
     <Panel title="Booking">
       <FactList
         items={[
-          { term: 'State', value: <BookingStateChip state={booking.state} /> },
+          {
+            term: 'State',
+            value: (
+              <span className="inline-flex flex-wrap items-center gap-2">
+                <BookingStateChip state={booking.state} />
+                {booking.history ? <span className="rounded border border-dashed border-ink-500 px-1.5 text-sm">History</span> : null}
+              </span>
+            ),
+          },
           { term: 'Dates', value: `${dayRange(booking.startsOn, booking.endsOn)} (${dayCount(booking.startsOn, booking.endsOn)}, both included)` },
           {
             term: 'For',
@@ -62,6 +70,7 @@ export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booki
           ...(booking.checkedOutAt
             ? [{ term: 'Checked out', value: `${formatDateTime(booking.checkedOutAt, timeZone)}, taken by ${booking.takenBy ?? '—'}` }]
             : []),
+          ...(booking.checkoutNote ? [{ term: 'Checkout note', value: booking.checkoutNote }] : []),
           ...(booking.returnedAt
             ? [{ term: 'Returned', value: `${formatDateTime(booking.returnedAt, timeZone)}, brought back by ${booking.broughtBackBy ?? '—'}` }]
             : []),

@@ -9,6 +9,7 @@ export const bookingStateWords: Record<BookingState, string> = {
   out: 'Out',
   returned: 'Returned',
   cancelled: 'Cancelled',
+  not_collected: 'Not collected',
 };
 
 // Reserved reads as a dashed outline, the same as its bar on the board.
@@ -17,6 +18,7 @@ const stateTones: Record<BookingState, StatusTone> = {
   out: 'info',
   returned: 'ok',
   cancelled: 'none',
+  not_collected: 'warn',
 };
 
 export function BookingStateChip({ state }: { state: BookingState }) {
@@ -48,10 +50,11 @@ export function shortDay(date: string, withYear = false): string {
   return format(parseISO(date), withYear ? 'd MMM yyyy' : 'd MMM');
 }
 
-/** "2 Dec – 8 Dec"; the year is added when the range crosses one. */
+/** "2 Dec – 8 Dec"; the year is added when the range crosses one or lies outside this year. */
 export function dayRange(startsOn: string, endsOn: string): string {
-  const crossesYear = startsOn.slice(0, 4) !== endsOn.slice(0, 4);
-  return `${shortDay(startsOn, crossesYear)} – ${shortDay(endsOn, crossesYear)}`;
+  const thisYear = String(new Date().getFullYear());
+  const withYear = startsOn.slice(0, 4) !== endsOn.slice(0, 4) || startsOn.slice(0, 4) !== thisYear;
+  return `${shortDay(startsOn, withYear)} – ${shortDay(endsOn, withYear)}`;
 }
 
 export function dayCount(startsOn: string, endsOn: string): string {

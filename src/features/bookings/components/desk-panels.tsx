@@ -37,7 +37,7 @@ export function TodayAtCounter() {
         {day.error.message}
       </Notice>
     );
-  const { today, checkouts, returns, late, blocked } = day.data;
+  const { today, checkouts, returns, late, notCollected, blocked } = day.data;
   return (
     <section aria-labelledby="counter-heading" className="flex flex-col gap-2 md:col-span-2 xl:col-span-3">
       <h2 id="counter-heading" className="text-lg font-bold text-ink-900">
@@ -65,6 +65,17 @@ export function TodayAtCounter() {
               />
             );
           })}
+        </CountedSection>
+        <CountedSection
+          level={3}
+          id="counter-not-collected"
+          title="Not collected"
+          count={notCollected.length}
+          empty="Every reservation whose days have passed was collected or cancelled."
+        >
+          {notCollected.map((b) => (
+            <BookingLine key={b.id} booking={b} extra={<span className="font-semibold text-brass-deep">Cancel, or check out late</span>} />
+          ))}
         </CountedSection>
         <CountedSection level={3} id="counter-blocked" title="Blocked bookings" count={blocked.length} empty="Every reserved item can still go.">
           {blocked.map((b) => (

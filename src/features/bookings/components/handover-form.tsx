@@ -7,12 +7,13 @@ import { Field } from '../../../components/field';
 import { PrintIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
+import { isApiError } from '../../../lib/api-client';
 import { assetTypeTitles } from '../../../lib/assets';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCheckOutBooking } from '../api/check-out-booking';
 import { useReturnBooking } from '../api/return-booking';
 import type { BookingView, ItemCondition, ReturnView } from '../../../../shared/bookings/views';
-import { conditionWords } from './booking-words';
+import { conditionWords, shortDay } from './booking-words';
 
 export type HandoverMode = 'checkout' | 'return';
 
@@ -29,6 +30,11 @@ interface HandoverValues {
   counterpart: string;
   /** Set when a suggestion names one of the firm's people: sent instead of the typed name. */
   counterpartUserId: string;
+  /** Asked for once the server says checkout has not opened yet. */
+  earlyReason: string;
+  /** A reservation not collected goes late: why, and the new last day. */
+  lateNote: string;
+  lateEndsOn: string;
 }
 
 /** A person to offer as the one who takes or brings back the kit. */
@@ -43,8 +49,11 @@ const words = {
   return: { who: 'Brought back by', submit: 'Take back', list: 'Packing list to take back' },
 } as const;
 
-function schemaFor(mode: HandoverMode) {
+function schemaFor(mode: HandoverMode, late: boolean, early: boolean) {
   return Yup.object({
+    lateNote: late ? Yup.string().trim().required('Say why the kit goes late.').min(3, 'Say a little more.') : Yup.string(),
+    lateEndsOn: late ? Yup.string().required('Pick the new last day.') : Yup.string(),
+    earlyReason: early ? Yup.string().trim().required('Say why the kit goes before its checkout opens.').min(3, 'Say a little more.') : Yup.string(),
     counterpart: Yup.string()
       .trim()
       .required(mode === 'checkout' ? 'Say who takes the kit.' : 'Say who brings the kit back.')
@@ -74,22 +83,31 @@ export function HandoverForm({
   booking,
   mode,
   suggestions,
+  today,
   onDone,
 }: {
   booking: BookingView;
   mode: HandoverMode;
   suggestions: CounterpartSuggestion[];
+  /** The firm's calendar day: a reservation whose days passed goes out late. */
+  today: string;
   onDone: (result: BookingView | ReturnView) => void;
 }) {
   const checkout = useCheckOutBooking();
   const giveBack = useReturnBooking();
   const [formError, setFormError] = useState<string>();
+  /** The server's word that checkout has not opened yet: the form then asks for a reason. */
+  const [earlyAsk, setEarlyAsk] = useState<string>();
   const w = words[mode];
+  const late = mode === 'checkout' && (booking.state === 'not_collected' || booking.endsOn < today);
 
   const initialValues: HandoverValues = {
     lines: booking.items.map((item) => ({ assetId: item.id, assetTag: item.assetTag, present: false, condition: 'good', note: '' })),
     counterpart: '',
     counterpartUserId: '',
+    earlyReason: '',
+    lateNote: '',
+    lateEndsOn: '',
   };
 
   async function submit(values: HandoverValues, helpers: FormikHelpers<HandoverValues>) {
@@ -103,17 +121,23 @@ export function HandoverForm({
         condition: l.condition,
         ...(l.note.trim() ? { note: l.note.trim() } : {}),
       })),
+      ...(earlyAsk && values.earlyReason.trim() ? { earlyReason: values.earlyReason.trim() } : {}),
+      ...(late ? { late: { note: values.lateNote.trim(), endsOn: values.lateEndsOn } } : {}),
     };
     try {
       onDone(mode === 'checkout' ? await checkout.mutateAsync(input) : await giveBack.mutateAsync(input));
     } catch (error) {
+      if (isApiError(error) && error.code === 'checkout_early') {
+        setEarlyAsk(error.message);
+        return;
+      }
       setFormError(applyServerErrors(error, helpers, { fields: ['counterpart'], labels: { counterpart: w.who } }));
     }
   }
 
   const types = new Set(booking.items.map((i) => i.type));
   return (
-    <Formik initialValues={initialValues} validationSchema={schemaFor(mode)} onSubmit={submit}>
+    <Formik initialValues={initialValues} validationSchema={schemaFor(mode, late, !!earlyAsk)} onSubmit={submit}>
       {({ isSubmitting, values, errors, submitCount }) => (
         <>
           <Form noValidate className="flex flex-col gap-4 print:hidden" aria-label={mode === 'checkout' ? 'Check out' : 'Take back'}>
@@ -135,26 +159,43 @@ export function HandoverForm({
                   {errors.lines}
                 </Notice>
               ) : null}
-              {mode === 'return' && values.lines.some((l) => !l.present || l.condition === 'damaged') ? (
-                <Notice tone="caution" className="mt-3" title="An incident will be opened">
-                  {values.lines
-                    .filter((l) => !l.present || l.condition === 'damaged')
-                    .map((l) => `${l.assetTag} (${!l.present ? 'missing' : 'damaged'})`)
-                    .join(', ')}{' '}
-                  will each get an incident report and go on hold until someone releases it on evidence.
-                </Notice>
-              ) : null}
+              {mode === 'return' ? <ReturnPreview lines={values.lines} /> : null}
             </section>
 
             {mode === 'checkout' ? <NotReady booking={booking} /> : null}
+
+            {late ? (
+              <section aria-labelledby="late-heading" className="flex flex-col gap-3 rounded-lg border border-warn/50 bg-card p-4">
+                <h2 id="late-heading" className="text-lg font-bold">
+                  Not collected: check out late
+                </h2>
+                <p className="text-sm text-ink-700">
+                  This reservation&rsquo;s days ended on {shortDay(booking.endsOn, true)} without checkout. It goes out from today to a new last day, if every
+                  item is free and in calibration for those days.
+                </p>
+                <Field name="lateNote" label="Why it goes late" autoComplete="off" />
+                <Field name="lateEndsOn" label="New last day" type="date" min={today} />
+              </section>
+            ) : null}
 
             <CounterpartField label={w.who} suggestions={suggestions} />
 
             {mode === 'checkout' ? <Cautions types={types} /> : null}
 
+            {earlyAsk ? (
+              <section aria-labelledby="early-heading" className="flex flex-col gap-3 rounded-lg border border-warn/50 bg-card p-4">
+                <h2 id="early-heading" className="text-lg font-bold">
+                  Hand over before checkout opens?
+                </h2>
+                <p className="text-sm text-ink-800">{earlyAsk}</p>
+                <p className="text-sm text-ink-700">The booking will then start today, and the reason is kept on its record.</p>
+                <Field name="earlyReason" label="Why it goes early" autoComplete="off" />
+              </section>
+            ) : null}
+
             <div className="flex flex-wrap gap-2">
               <Button type="submit" variant="primary" busy={isSubmitting}>
-                {w.submit}
+                {earlyAsk ? 'Hand over early' : late ? 'Hand over late' : w.submit}
               </Button>
               {mode === 'checkout' ? (
                 <a href={`/api/bookings/${booking.id}/handover-sheet.pdf`} target="_blank" rel="noreferrer" className={buttonClasses()}>
@@ -167,6 +208,28 @@ export function HandoverForm({
         </>
       )}
     </Formik>
+  );
+}
+
+/**
+ * What taking back will do, for the items marked so far: damaged ones open an incident each. Items not yet
+ * ticked are named as such (not called missing) until someone has started ticking.
+ */
+function ReturnPreview({ lines }: { lines: Line[] }) {
+  const started = lines.some((l) => l.present || l.condition !== 'good' || l.note.trim());
+  if (!started) return null;
+  const damaged = lines.filter((l) => l.present && l.condition === 'damaged').map((l) => l.assetTag);
+  const unticked = lines.filter((l) => !l.present).map((l) => l.assetTag);
+  if (!damaged.length && !unticked.length) return null;
+  return (
+    <Notice tone="caution" className="mt-3" title="What taking back will do">
+      {damaged.length ? <p>Damaged: {damaged.join(', ')}. Each gets an incident report and goes on hold until someone releases it on evidence.</p> : null}
+      {unticked.length ? (
+        <p>
+          Not ticked present yet: {unticked.join(', ')}. If you take back now, each counts as missing and gets an incident report; tick the ones that came back.
+        </p>
+      ) : null}
+    </Notice>
   );
 }
 

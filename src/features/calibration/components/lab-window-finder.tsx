@@ -46,6 +46,9 @@ export function LabWindowFinder({
   const [provider, setProvider] = useState(windows.provider ?? '');
   const providerId = useId();
   const [planning, setPlanning] = useState<string | null>(null);
+  const [own, setOwn] = useState({ sentOn: '', expectedBackOn: '' });
+  const trip = windows.plannedTrip;
+  const offer = canPlan && !trip;
 
   return (
     <div className="flex flex-col gap-4">
@@ -78,7 +81,23 @@ export function LabWindowFinder({
         <p className="text-sm text-ink-700">
           Gaps between {assetTag}&rsquo;s bookings of at least {days(windows.turnaroundDays)}, the lab&rsquo;s turnaround.
         </p>
-        {canPlan ? (
+        {trip ? (
+          <Notice tone="info" title="Already planned">
+            {assetTag} is on a trip to {trip.provider}
+            {trip.state === 'planned' ? `, going ${formatCalendarDate(trip.sentOn)}` : ', at the lab now'}, expected back{' '}
+            {formatCalendarDate(trip.expectedBackOn)}.{' '}
+            <Link to="/calibration/trips" className="font-semibold text-brass-deep underline">
+              See lab trips
+            </Link>
+          </Notice>
+        ) : null}
+        {windows.noneBeforeDue && windows.dueOn ? (
+          <Notice tone="caution" title="No window before the due date">
+            No free window of {days(windows.turnaroundDays)} starts on or before {formatCalendarDate(windows.dueOn)}. Every window below begins after it; until
+            it is back the item cannot go out on a job. Pick your own dates below if a booking can move.
+          </Notice>
+        ) : null}
+        {offer ? (
           <div className="flex max-w-sm flex-col gap-1">
             <label htmlFor={providerId} className="text-sm font-semibold text-ink-800">
               Lab
@@ -106,7 +125,7 @@ export function LabWindowFinder({
               {windows.dueOn && gap.startsOn > windows.dueOn ? (
                 <p className="text-sm text-warn">Past its due date ({formatCalendarDate(windows.dueOn)}): it cannot go out on a job until it is back.</p>
               ) : null}
-              {canPlan ? (
+              {offer ? (
                 <Button
                   variant="primary"
                   className="self-start"
@@ -123,6 +142,45 @@ export function LabWindowFinder({
             </li>
           ))}
         </ul>
+        {offer ? (
+          <form
+            aria-label="Plan for dates of my own"
+            className="flex flex-wrap items-end gap-3 rounded-lg border border-paper-line bg-card p-4"
+            onSubmit={(e) => {
+              e.preventDefault();
+              setPlanning('own');
+              plan.mutate(
+                { provider: provider.trim(), assetIds: [assetId], sentOn: own.sentOn, ...(own.expectedBackOn ? { expectedBackOn: own.expectedBackOn } : {}) },
+                { onSuccess: onPlanned },
+              );
+            }}
+          >
+            <h3 className="w-full font-semibold">Or pick your own dates</h3>
+            <label className="flex flex-col gap-1 text-sm font-semibold text-ink-800">
+              Goes to the lab on
+              <input
+                type="date"
+                required
+                value={own.sentOn}
+                onChange={(e) => setOwn({ ...own, sentOn: e.target.value })}
+                className="min-h-10 rounded-md border border-paper-line bg-card px-2 text-base font-normal"
+              />
+            </label>
+            <label className="flex flex-col gap-1 text-sm font-semibold text-ink-800">
+              Expected back (optional)
+              <input
+                type="date"
+                min={own.sentOn || undefined}
+                value={own.expectedBackOn}
+                onChange={(e) => setOwn({ ...own, expectedBackOn: e.target.value })}
+                className="min-h-10 rounded-md border border-paper-line bg-card px-2 text-base font-normal"
+              />
+            </label>
+            <Button type="submit" disabled={!provider.trim() || !own.sentOn || plan.isPending} busy={plan.isPending && planning === 'own'}>
+              Plan for these dates
+            </Button>
+          </form>
+        ) : null}
       </section>
     </div>
   );

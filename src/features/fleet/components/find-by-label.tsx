@@ -1,12 +1,17 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useId, useState, type FormEvent } from 'react';
+import { useEffect, useId, useState, type FormEvent } from 'react';
 import { Button } from '../../../components/button';
 import { ScanIcon, SearchIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
+import { Link } from 'react-router-dom';
 import { isApiError } from '../../../lib/api-client';
 import { lookupAssetQueryOptions } from '../api/lookup-asset';
-import type { AssetView } from '../../../../shared/assets/views';
-import { canScanQr, QrScanner } from './qr-scanner';
+import type { AssetSuggestion, AssetView } from '../../../../shared/assets/views';
+
+/** The near misses a look-up's 404 carries (`details.suggestions`). */
+export const suggestionsIn = (error: unknown): AssetSuggestion[] =>
+  isApiError(error) && error.status === 404 ? ((error.details as { suggestions?: AssetSuggestion[] } | undefined)?.suggestions ?? []) : [];
+import { hasCamera, QrScanner } from './qr-scanner';
 
 /**
  * Type an asset tag or RFID tag, or read the QR label with the camera; on a
@@ -16,11 +21,14 @@ import { canScanQr, QrScanner } from './qr-scanner';
 export function FindByLabel({
   initialCode = '',
   initialProblem,
+  initialSuggestions = [],
   onFound,
   lookup,
 }: {
   initialCode?: string;
   initialProblem?: string;
+  /** Near misses the server offered for `initialCode`. */
+  initialSuggestions?: AssetSuggestion[];
   onFound: (asset: AssetView) => void;
   /** Where to look the code up; the server's lookup unless given (without signal: the phone's copy of the kit carried). */
   lookup?: (code: string) => Promise<AssetView>;
@@ -29,9 +37,17 @@ export function FindByLabel({
   const inputId = useId();
   const [code, setCode] = useState(initialCode);
   const [problem, setProblem] = useState<string | undefined>(initialProblem);
+  const [suggestions, setSuggestions] = useState<AssetSuggestion[]>(initialSuggestions);
   const [busy, setBusy] = useState(false);
   const [scanning, setScanning] = useState(false);
-  const [scanAvailable] = useState(canScanQr);
+  const [scanAvailable, setScanAvailable] = useState(false);
+  useEffect(() => {
+    let live = true;
+    void hasCamera().then((yes) => live && setScanAvailable(yes));
+    return () => {
+      live = false;
+    };
+  }, []);
 
   const find = async (value: string) => {
     const wanted = value.trim();
@@ -40,14 +56,16 @@ export function FindByLabel({
       return;
     }
     setProblem(undefined);
+    setSuggestions([]);
     setBusy(true);
     try {
       const asset = lookup ? await lookup(wanted) : await queryClient.fetchQuery(lookupAssetQueryOptions(wanted));
       onFound(asset);
     } catch (error) {
+      setSuggestions(suggestionsIn(error));
       setProblem(
         isApiError(error) && error.code === 'not_found'
-          ? `Nothing in your fleet matches “${wanted}”. Check the tag and try again.`
+          ? `Nothing in your fleet matches “${wanted}”.`
           : isApiError(error)
             ? error.message
             : 'The search did not finish. Try again.',
@@ -67,6 +85,16 @@ export function FindByLabel({
       {problem ? (
         <Notice tone="error" title="Not found">
           {problem}
+          {suggestions.length ? (
+            <span className="mt-2 flex flex-wrap items-center gap-2">
+              <span>Did you mean</span>
+              {suggestions.map((s) => (
+                <Link key={s.id} to={`/fleet/${s.id}`} className="font-mono font-semibold text-brass-deep underline">
+                  {s.assetTag}
+                </Link>
+              ))}
+            </span>
+          ) : null}
         </Notice>
       ) : null}
       {scanning ? (

@@ -2,21 +2,26 @@ import { useEffect, useRef, useState } from 'react';
 import { Button } from '../../../components/button';
 import { Notice } from '../../../components/notice';
 
-/** The parts of the Barcode Detection API used here (not yet in TypeScript's DOM types). */
-interface DetectedBarcode {
-  rawValue: string;
-}
-interface BarcodeDetectorLike {
-  detect(source: CanvasImageSource): Promise<DetectedBarcode[]>;
-}
-type BarcodeDetectorConstructor = new (options?: { formats?: string[] }) => BarcodeDetectorLike;
+/** Frames are scaled down to this width before decoding: plenty for a label held in the frame, and quick on a phone. */
+const FRAME_WIDTH = 480;
 
-/** True when this browser can read QR codes from the camera. */
-export function canScanQr(): boolean {
-  return typeof window !== 'undefined' && 'BarcodeDetector' in window && !!navigator.mediaDevices?.getUserMedia;
+/**
+ * True when this browser can open a camera: it has the media API and lists at least one video input. Read once on
+ * the page; where it is false the scan button is not drawn at all. No permission is asked for by this check.
+ */
+export async function hasCamera(): Promise<boolean> {
+  if (typeof navigator === 'undefined' || !navigator.mediaDevices?.getUserMedia || !navigator.mediaDevices.enumerateDevices) return false;
+  try {
+    return (await navigator.mediaDevices.enumerateDevices()).some((d) => d.kind === 'videoinput');
+  } catch {
+    return false;
+  }
 }
 
-/** The back camera, looking for a QR label; calls `onCode` once with what it read. */
+/**
+ * The back camera, looking for a QR label; calls `onCode` once with what it read. Frames are decoded with jsQR in a
+ * Web Worker (qr-decode.worker.ts), so it works where the browser has no barcode detector (iOS Safari among them).
+ */
 export function QrScanner({ onCode, onClose }: { onCode: (code: string) => void; onClose: () => void }) {
   const videoRef = useRef<HTMLVideoElement>(null);
   const [problem, setProblem] = useState<string>();
@@ -27,26 +32,34 @@ export function QrScanner({ onCode, onClose }: { onCode: (code: string) => void;
     let stream: MediaStream | undefined;
     let timer: number | undefined;
     let stopped = false;
-    const Detector = (window as unknown as { BarcodeDetector: BarcodeDetectorConstructor }).BarcodeDetector;
-    const detector = new Detector({ formats: ['qr_code'] });
+    const worker = new Worker(new URL('./qr-decode.worker.ts', import.meta.url), { type: 'module' });
+    const canvas = document.createElement('canvas');
+    const context = canvas.getContext('2d', { willReadFrequently: true });
 
-    const look = async () => {
-      const video = videoRef.current;
-      if (stopped || !video) return;
-      if (video.readyState >= 2) {
-        try {
-          const codes = await detector.detect(video);
-          const code = codes.find((c) => c.rawValue)?.rawValue;
-          if (code && !stopped) {
-            stopped = true;
-            onCodeRef.current(code);
-            return;
-          }
-        } catch {
-          // A frame that cannot be read; try the next one.
-        }
+    const next = () => {
+      if (!stopped) timer = window.setTimeout(look, 120);
+    };
+    worker.onmessage = (event: MessageEvent<string | null>) => {
+      if (stopped) return;
+      if (event.data) {
+        stopped = true;
+        onCodeRef.current(event.data);
+        return;
       }
-      timer = window.setTimeout(look, 200);
+      next();
+    };
+    worker.onerror = () => next();
+
+    const look = () => {
+      const video = videoRef.current;
+      if (stopped || !video || !context) return;
+      if (video.readyState < 2 || !video.videoWidth) return next();
+      const scale = Math.min(1, FRAME_WIDTH / video.videoWidth);
+      canvas.width = Math.round(video.videoWidth * scale);
+      canvas.height = Math.round(video.videoHeight * scale);
+      context.drawImage(video, 0, 0, canvas.width, canvas.height);
+      const { data, width, height } = context.getImageData(0, 0, canvas.width, canvas.height);
+      worker.postMessage({ data, width, height }, [data.buffer]);
     };
 
     navigator.mediaDevices
@@ -58,7 +71,7 @@ export function QrScanner({ onCode, onClose }: { onCode: (code: string) => void;
         if (!video) return;
         video.srcObject = s;
         void video.play().catch(() => undefined);
-        void look();
+        look();
       })
       .catch((error: unknown) => {
         const denied = error instanceof DOMException && (error.name === 'NotAllowedError' || error.name === 'SecurityError');
@@ -72,6 +85,7 @@ export function QrScanner({ onCode, onClose }: { onCode: (code: string) => void;
     return () => {
       stopped = true;
       if (timer) window.clearTimeout(timer);
+      worker.terminate();
       stream?.getTracks().forEach((t) => t.stop());
     };
   }, []);

@@ -3,6 +3,7 @@ import { StatusChip, type StatusTone } from '../../../components/status-chip';
 
 const rentalStates: Record<RentalState, [string, StatusTone]> = {
   reserved: ['Reserved', 'paused'],
+  not_collected: ['Not collected', 'warn'],
   out: ['Out with the renter', 'info'],
   returned: ['Returned, to settle', 'warn'],
   invoiced: ['Invoiced', 'ok'],

@@ -7,6 +7,8 @@ import type { CalibrationProvider, DepositPolicy, InvoiceIssuer, OrganizationSet
 
 export interface UpdateSettingsInput {
   dueSoonDays?: number;
+  /** Days before a booking starts that its checkout opens. */
+  checkoutOpensDaysBefore?: number;
   timeZone?: string;
   decisionRule?: DecisionRule;
   /** Impact triage ratio n (n:1), 1 to 20. */

@@ -24,10 +24,16 @@ const schema = Yup.object({
     .integer('Use whole days.')
     .min(1, 'Use at least 1 day.')
     .max(365, 'Use at most 365 days.'),
+  checkoutOpensDaysBefore: Yup.number()
+    .typeError('Enter a number of days.')
+    .required('Enter a number of days.')
+    .integer('Use whole days.')
+    .min(0, 'Use 0 or more days.')
+    .max(365, 'Use at most 365 days.'),
   timeZone: Yup.string().trim().required('Enter a time zone.').test('tz', 'Use a time zone name such as Europe/Berlin.', isTimeZone),
 });
 
-type Values = { dueSoonDays: number | ''; timeZone: string };
+type Values = { dueSoonDays: number | ''; checkoutOpensDaysBefore: number | ''; timeZone: string };
 
 export function SettingsForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
@@ -39,14 +45,18 @@ export function SettingsForm({ settings }: { settings: OrganizationSettingsView 
 
   return (
     <Formik<Values>
-      initialValues={{ dueSoonDays: settings.dueSoonDays, timeZone: settings.timeZone }}
+      initialValues={{ dueSoonDays: settings.dueSoonDays, checkoutOpensDaysBefore: settings.checkoutOpensDaysBefore, timeZone: settings.timeZone }}
       validationSchema={schema}
       enableReinitialize
       onSubmit={(values, helpers) =>
-        save({ dueSoonDays: Number(values.dueSoonDays), timeZone: values.timeZone.trim() }, helpers, {
-          fields: ['dueSoonDays', 'timeZone'],
-          labels: { dueSoonDays: 'The due-soon window', timeZone: 'The time zone' },
-        })
+        save(
+          { dueSoonDays: Number(values.dueSoonDays), checkoutOpensDaysBefore: Number(values.checkoutOpensDaysBefore), timeZone: values.timeZone.trim() },
+          helpers,
+          {
+            fields: ['dueSoonDays', 'checkoutOpensDaysBefore', 'timeZone'],
+            labels: { dueSoonDays: 'The due-soon window', checkoutOpensDaysBefore: 'Checkout opens', timeZone: 'The time zone' },
+          },
+        )
       }
     >
       {({ isSubmitting, dirty }) => (
@@ -66,6 +76,16 @@ export function SettingsForm({ settings }: { settings: OrganizationSettingsView 
             max={365}
             step={1}
             hint="An item whose calibration runs out within this many days shows as “Due soon”."
+          />
+          <Field
+            name="checkoutOpensDaysBefore"
+            label="Checkout opens (days before the start)"
+            type="number"
+            inputMode="numeric"
+            min={0}
+            max={365}
+            step={1}
+            hint="Kit can be handed over this many days before its booking starts. Earlier needs a reason, which the booking keeps."
           />
           <Field name="timeZone" label="Time zone" list={listId} autoComplete="off" hint="Dates, due dates and “today” are worked out in this zone." />
           <datalist id={listId}>

@@ -137,13 +137,11 @@ function toValues(job: SiteJobView | undefined, defaults: Partial<JobValues>): J
 
 const orNull = (s: string) => (s.trim() ? s.trim() : null);
 
-/**
- * Add or change a customer site job. The lead technician must be one of the
- * firm's people; without the user list (owner only) the choice is "me" or nobody.
- */
+/** Add or change a customer site job. The lead technician is one of the firm's technicians (`technicians`), or me. */
 export function JobForm({
   job,
   me,
+  technicians,
   defaults = {},
   onSaved,
   onCancel,
@@ -151,6 +149,7 @@ export function JobForm({
 }: {
   job?: SiteJobView;
   me: { id: string; name: string };
+  technicians: { id: string; name: string }[];
   defaults?: { startsOn?: string; endsOn?: string };
   onSaved: (job: SiteJobView) => void;
   onCancel?: () => void;
@@ -160,10 +159,13 @@ export function JobForm({
   const update = useUpdateSiteJob();
   const [formError, setFormError] = useState<string>();
 
+  const people = technicians.some((t) => t.id === me.id) ? technicians : [...technicians, me];
   const leadOptions = [
     { value: '', label: 'Nobody yet' },
-    { value: me.id, label: `Me (${me.name})` },
-    ...(job?.leadTechnicianId && job.leadTechnicianId !== me.id ? [{ value: job.leadTechnicianId, label: 'The technician already chosen' }] : []),
+    ...people.map((p) => ({ value: p.id, label: p.id === me.id ? `${p.name} (me)` : p.name })),
+    ...(job?.leadTechnicianId && !people.some((p) => p.id === job.leadTechnicianId)
+      ? [{ value: job.leadTechnicianId, label: 'The technician already chosen' }]
+      : []),
   ];
 
   async function submit(values: JobValues, helpers: FormikHelpers<JobValues>) {

@@ -1,0 +1,167 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { addDays, todayIn } from '../../shared/calibration/due-date';
+import { startBrowserRig, type BrowserRig } from '../support/browser';
+import { signedIn } from '../support/browser-session';
+import { eventually } from '../support/eventually';
+
+let rig: BrowserRig;
+beforeAll(async () => {
+  rig = await startBrowserRig();
+});
+afterAll(() => rig?.close());
+
+async function apiAs(email: string) {
+  const login = await fetch(`${rig.baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password: 'nestkeeper-demo' }),
+  });
+  const { token } = await login.json();
+  return (path: string, body?: unknown) =>
+    fetch(`${rig.baseUrl}/api${path}`, {
+      method: body ? 'POST' : 'GET',
+      headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
+      body: body ? JSON.stringify(body) : undefined,
+    }).then(async (r) => ({ status: r.status, body: await r.json() }));
+}
+
+describe("the shop manager's week, told truly", () => {
+  it('books from a job, swaps an item, checks out a reservation not collected, sees an early return drawn truly and a three-item lab trip not blocked', async () => {
+    const today = todayIn('Europe/Berlin');
+    const api = await apiAs('manager@demo.test');
+    const tracker = async (assetTag: string, lastCalibratedOn = today) => {
+      const res = await api('/assets', {
+        type: 'tracker',
+        assetTag,
+        serialNumber: `SN-${assetTag}`,
+        calibration: { required: true, intervalMonths: 12, lastCalibratedOn },
+      });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+      return res.body as { id: string; assetTag: string };
+    };
+    const [first, second, lapsedItem, earlyItem] = [await tracker('TRK-W01'), await tracker('TRK-W02'), await tracker('TRK-W03'), await tracker('TRK-W04')];
+    // Due in a week (calibrated a year ago less a week): these three go to the lab together.
+    const dueSoon = addDays(addDays(today, 7), -365);
+    const labItems = [await tracker('TRK-W05', dueSoon), await tracker('TRK-W06', dueSoon), await tracker('TRK-W07', dueSoon)];
+    const job = (await api('/jobs', { reference: 'J-WEEK-1', customerName: 'Thornwick Castings', startsOn: addDays(today, 3), endsOn: addDays(today, 6) }))
+      .body;
+
+    // A reservation whose days passed without checkout (made ten days ago for that day).
+    const lapsed = (await api('/bookings', { assetIds: [lapsedItem.id], startsOn: today, endsOn: today, note: 'Pick-up by Brisk Survey' })).body;
+    await rig.db.query(`UPDATE bookings SET starts_on = starts_on - 10, ends_on = ends_on - 10 WHERE id = $1`, [lapsed.id]);
+    await rig.db.query(`UPDATE booking_items SET starts_on = starts_on - 10, ends_on = ends_on - 10 WHERE booking_id = $1`, [lapsed.id]);
+    // Booked for a week, back the same day.
+    const early = (await api('/bookings', { assetIds: [earlyItem.id], startsOn: today, endsOn: addDays(today, 6) })).body;
+    const walk = { counterpart: 'Odile Brackwater', checklist: [{ assetId: earlyItem.id, present: true, condition: 'good' }] };
+    expect((await api(`/bookings/${early.id}/checkout`, walk)).status).toBe(200);
+    expect((await api(`/bookings/${early.id}/return`, walk)).status).toBe(200);
+    // A lab trip for the three due-soon trackers.
+    const trip = await api('/lab-trips', {
+      provider: 'Fenmoor Calibration Lab',
+      assetIds: labItems.map((i) => i.id),
+      sentOn: addDays(today, 2),
+      expectedBackOn: addDays(today, 20),
+    });
+    expect(trip.status, JSON.stringify(trip.body)).toBe(201);
+
+    const { context, page, nav } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
+
+    // Monday: a booking from the job starts with the job's days.
+    await nav.getByRole('link', { name: 'Jobs' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Jobs' }).waitFor();
+    await page.getByText('J-WEEK-1').first().click();
+    await page.getByRole('link', { name: 'Book kit for this job' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Book kit' }).waitFor();
+    await eventually(() => page.getByLabel('Starts on').inputValue()).toBe(job.startsOn);
+    expect(await page.getByLabel('Ends on').inputValue()).toBe(job.endsOn);
+    await page.getByLabel('Add separate items').fill('TRK-W01');
+    await page.getByRole('button', { name: 'Add TRK-W01' }).click();
+    await page.getByRole('button', { name: 'Book', exact: true }).click();
+    await page.waitForURL(/\/bookings\/[0-9a-f-]{36}$/);
+    const bookingId = page.url().split('/').pop()!;
+    const [made] = await rig.db.query(`SELECT job_id, to_char(starts_on, 'YYYY-MM-DD') AS starts_on FROM bookings WHERE id = $1`, [bookingId]);
+    expect(made).toEqual({ job_id: job.id, starts_on: job.startsOn });
+
+    // Tuesday: the tracker is swapped for another before it goes.
+    await page.getByRole('button', { name: 'Change items' }).click();
+    await page.getByRole('button', { name: 'Take off TRK-W01' }).click();
+    await page.getByLabel('Add separate items').fill('TRK-W02');
+    await page.getByRole('button', { name: 'Add TRK-W02' }).click();
+    await page.getByRole('button', { name: 'Save items' }).click();
+    const tagsOn = async () =>
+      (await rig.db.query(`SELECT a.asset_tag FROM booking_items bi JOIN assets a ON a.id = bi.asset_id WHERE bi.booking_id = $1`, [bookingId])).map(
+        (r: { asset_tag: string }) => r.asset_tag,
+      );
+    await eventually(tagsOn).toEqual([second.assetTag]);
+    expect(first.assetTag).toBe('TRK-W01');
+
+    // Wednesday: last week's pick-up never came. It is not collected, not "going out today"; it goes out late with a note.
+    await nav.getByRole('link', { name: 'Home' }).click();
+    const notCollected = page.getByRole('region', { name: 'Not collected' });
+    await notCollected.locator(`a[href="/bookings/${lapsed.id}"]`).waitFor();
+    expect(await page.getByRole('region', { name: 'Going out today' }).locator(`a[href="/bookings/${lapsed.id}"]`).count()).toBe(0);
+    // The three-item lab trip renews their calibration: it is not a blocked booking.
+    expect(await page.getByRole('region', { name: 'Blocked bookings' }).locator(`a[href="/bookings/${trip.body.bookingId}"]`).count()).toBe(0);
+    await notCollected.locator(`a[href="/bookings/${lapsed.id}"]`).click();
+    await page.getByRole('link', { name: 'Check out late' }).click();
+    await page.getByLabel(`Present: ${lapsedItem.assetTag}`).check();
+    await page.getByLabel('Taken by').fill('Brisk Survey driver');
+    await page.getByLabel('Why it goes late').fill('Customer postponed by a week');
+    await page.getByLabel('New last day').fill(addDays(today, 2));
+    await page.getByRole('button', { name: 'Hand over late' }).click();
+    await eventually(
+      async () =>
+        (await rig.db.query(`SELECT state, checkout_note, to_char(starts_on, 'YYYY-MM-DD') AS starts_on FROM bookings WHERE id = $1`, [lapsed.id]))[0],
+    ).toEqual({ state: 'out', checkout_note: 'Customer postponed by a week', starts_on: today });
+
+    // Thursday: the board draws the week-long booking that came back the same day over that day only, the rest faint.
+    await page.goto(`${rig.baseUrl}/board?from=${today}`);
+    const bar = page.locator(`a[href="/bookings/${early.id}"]`);
+    await bar.waitFor();
+    expect(await bar.getAttribute('aria-label')).toMatch(/back early on/);
+    const barBox = (await bar.boundingBox())!;
+    const remainder = page.locator('[data-planned-remainder]');
+    await eventually(() => remainder.count()).toBeGreaterThan(0);
+    // The solid bar covers one day; the planned remainder starts where it ends.
+    const boxes = await remainder.evaluateAll((els) => els.map((e) => e.getBoundingClientRect().toJSON() as { x: number; y: number; width: number }));
+    const mine = boxes.find((b) => Math.abs(b.y - barBox.y) < 2 && b.x > barBox.x);
+    expect(mine).toBeDefined();
+    expect(mine!.width).toBeGreaterThan(barBox.width * 4);
+    await context.close();
+  });
+
+  it("lists the firm's technicians, shows held items as such in the search, previews only what is marked at return, and reprints the hand-over sheet", async () => {
+    const today = todayIn('Europe/Berlin');
+    const api = await apiAs('manager@demo.test');
+    const [{ name: techName }] = await rig.db.query(`SELECT name FROM users WHERE email = 'tech@demo.test'`);
+    const [held] = await rig.db.query(`SELECT asset_tag FROM assets WHERE status = 'held' ORDER BY asset_tag LIMIT 1`);
+    const free = (await api(`/availability?type=smr&startsOn=${today}&endsOn=${addDays(today, 1)}&limit=2`)).body.items as { id: string; assetTag: string }[];
+    const smrs = free.map((x) => ({ id: x.id, asset_tag: x.assetTag }));
+    expect(smrs).toHaveLength(2);
+    const out = (await api('/bookings', { assetIds: smrs.map((s) => s.id), startsOn: today, endsOn: addDays(today, 1) })).body;
+    const walk = { counterpart: 'Odile Brackwater', checklist: smrs.map((s) => ({ assetId: s.id, present: true, condition: 'good' })) };
+    expect((await api(`/bookings/${out.id}/checkout`, walk)).status, JSON.stringify(out)).toBe(200);
+
+    const { context, page, nav } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
+    await nav.getByRole('link', { name: 'Jobs' }).click();
+    await page.getByRole('button', { name: 'New job' }).click();
+    expect(await page.getByLabel('Lead technician').locator('option').allInnerTexts()).toContain(techName);
+    await page.keyboard.press('Escape');
+
+    await page.goto(`${rig.baseUrl}/bookings/new`);
+    await page.getByLabel('Add separate items').fill(held.asset_tag);
+    await eventually(() => page.locator('main').innerText()).toMatch(new RegExp(`${held.asset_tag}[\\s\\S]*On hold`));
+    expect(await page.getByRole('button', { name: `Add ${held.asset_tag}` }).count()).toBe(0);
+
+    await page.goto(`${rig.baseUrl}/bookings/${out.id}`);
+    expect(await page.getByRole('link', { name: 'Hand-over sheet (PDF)' }).getAttribute('href')).toBe(`/api/bookings/${out.id}/handover-sheet.pdf`);
+    await page.getByRole('link', { name: 'Take back' }).click();
+    await page.getByRole('group', { name: 'Suggested people' }).getByRole('button', { name: techName }).waitFor();
+    // Nothing ticked yet: nothing is called missing.
+    expect(await page.locator('main').innerText()).not.toMatch(/missing|What taking back will do/);
+    await page.getByLabel(`Present: ${smrs[0].asset_tag}`).check();
+    await eventually(() => page.locator('main').innerText()).toMatch(new RegExp(`Not ticked present yet: ${smrs[1].asset_tag}\\.`));
+    expect(await page.locator('main').innerText()).not.toMatch(new RegExp(`Not ticked present yet: [^.]*${smrs[0].asset_tag}`));
+    await context.close();
+  });
+});

@@ -1,5 +1,5 @@
 import fs from 'node:fs';
-import type { Server } from 'node:http';
+import { createServer, type Server } from 'node:http';
 import path from 'node:path';
 import nodemailer from 'nodemailer';
 import type { BrowserContextOptions } from 'playwright-core';
@@ -19,8 +19,12 @@ export async function startBrowserRig() {
   const database = await createTestDatabase({ seed: true });
   const secret = webhookSecret();
   const payments = await startPaymentFake({ port: 0, webhookSecret: secret });
+  // The app's own address goes into links it mails and the provider's return address, so it is known before the app is built.
+  const port = await freePort();
   const config = readConfig({
     NODE_ENV: 'test',
+    PORT: String(port),
+    PUBLIC_URL: `http://127.0.0.1:${port}`,
     DATABASE_URL: database.url,
     JWT_SECRET: 'browser-test-secret-long-enough-for-hs256',
     START_LOCAL_FAKES: 'false',
@@ -34,14 +38,14 @@ export async function startBrowserRig() {
   const mail = nodemailer.createTransport({ host: '127.0.0.1', port: 9 });
   const { app } = buildApp({ config, db: database.db, mail });
   const server: Server = await new Promise((resolve) => {
-    const s = app.listen(0, '127.0.0.1', () => resolve(s));
+    const s = app.listen(port, '127.0.0.1', () => resolve(s));
   });
-  const { port } = server.address() as { port: number };
   payments.store.settings.webhookUrl = `http://127.0.0.1:${port}/api/webhooks/payments`;
   const browser = await launchChromium();
   return {
     baseUrl: `http://127.0.0.1:${port}`,
     db: database.db,
+    payments,
     async newContext(options: BrowserContextOptions = {}) {
       const context = await browser.newContext(options);
       context.setDefaultTimeout(WAIT_MS);
@@ -56,6 +60,17 @@ export async function startBrowserRig() {
       await database.drop();
     },
   };
+}
+
+/** A loopback port nothing listens on right now. */
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer().listen(0, '127.0.0.1', () => {
+      const { port } = probe.address() as { port: number };
+      probe.close(() => resolve(port));
+    });
+    probe.on('error', reject);
+  });
 }
 
 export type BrowserRig = Awaited<ReturnType<typeof startBrowserRig>>;

@@ -62,7 +62,7 @@ export function DepositRequest({ rentalId, request, sentTo }: { rentalId: string
         </Notice>
       ) : null}
       {request && label && tone ? (
-        <div className="flex flex-col gap-3 sm:flex-row sm:items-start">
+        <div className="flex flex-col gap-3">
           <div className="min-w-0 flex-1">
             <FactList
               items={[

@@ -43,7 +43,9 @@ function Items({ view, token }: { view: RenterRentalView; token: string }) {
                 <span className="font-mono">{item.serialNumber}</span>
               </div>
             </div>
-            <Calibration item={item} endsOn={view.endsOn} />
+            <div className="self-start sm:self-auto">
+              <Calibration item={item} endsOn={view.endsOn} />
+            </div>
           </li>
         ))}
       </ul>

@@ -89,7 +89,7 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
         <Form
           noValidate
           className="flex flex-col gap-3 rounded-md border border-dashed border-warn/60 bg-paper p-3"
-          aria-label="Test mode: take the deposit with a test card"
+          aria-label="Take the deposit in test mode"
         >
           <p className="font-semibold text-warn">Test mode</p>
           {problem ? (

@@ -86,11 +86,7 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
       }}
     >
       {({ isSubmitting }) => (
-        <Form
-          noValidate
-          className="flex flex-col gap-3 rounded-md border border-dashed border-warn/60 bg-paper p-3"
-          aria-label="Take the deposit in test mode"
-        >
+        <Form noValidate className="flex flex-col gap-3 rounded-md border border-dashed border-warn/60 bg-paper p-3" aria-label="Take the deposit in test mode">
           <p className="font-semibold text-warn">Test mode</p>
           {problem ? (
             <Notice tone="error" title={problem.title}>

@@ -185,6 +185,9 @@ describe('the renter places the deposit on the provider’s hosted page', () => 
     expect(r.deposit.request).toMatchObject({ state: 'authorized', url: null });
     const [{ payment_method_id }] = await t.db.query(`SELECT payment_method_id FROM rentals WHERE id = $1`, [rental.id]);
     expect(payment_method_id).toMatch(/^pm_/);
+    // Saved for off-session use (renewals, charges above the authorization): attached to the customer's record at the provider.
+    const [{ payment_customer_id }] = await t.db.query(`SELECT payment_customer_id FROM customers WHERE id = $1`, [customerId]);
+    expect(fake.store.table<{ customer: string | null }>('payment_methods').get(payment_method_id)?.customer).toBe(payment_customer_id);
     expect((await renterPage(token)).deposit).toMatchObject({ state: 'authorized', card: 'Visa ending 4242' });
     expect((await checkout(rental)).status).toBe(200);
   });

@@ -14,7 +14,7 @@ import { PgRateLimitStore } from './auth/pg-rate-limit-store';
 import { csrfGuard } from './auth/csrf';
 import { createPassport } from './auth/passport';
 import { signingKey } from './auth/tokens';
-import type { Config } from './config';
+import { paymentMode, type Config } from './config';
 import { healthRoutes } from './health/health.routes';
 import { backupRoutine } from './backups';
 import { DatabaseWatch } from './db/reachability';
@@ -50,10 +50,13 @@ import { CustomersService } from './rentals/customers.service';
 import { RateCardsService } from './rentals/rate-cards.service';
 import { RentalsService } from './rentals/rentals.service';
 import { rentalsRoutes } from './rentals/rentals.routes';
+import { renterRoutes } from './rentals/renter.routes';
+import { RenterService } from './rentals/renter.service';
 import { repriceRental } from './rentals/pricing';
 import { billingRoutes } from './billing/billing.routes';
 import { BillingReportsService } from './billing/billing-reports.service';
 import { depositRenewalsRoutine } from './billing/deposit-renewals.routine';
+import { DepositRequestsService } from './billing/deposit-requests.service';
 import { DepositsService } from './billing/deposits.service';
 import { InvoicesService } from './billing/invoices.service';
 import { createPaymentClient } from './billing/payment-client';
@@ -188,8 +191,18 @@ export function buildApp({ config, db, mail, log = createLogger({ level: config.
     calibrationRoutes({ calibration: new CalibrationService(db), impact: new ImpactService(db), lab: new LabService(db), review: new ReviewService(db) }),
   );
   app.use('/api', recordsRoutes(new RecordsService(db, publicUrl)));
+  app.use('/api/renter', renterRoutes(new RenterService(db, rentalMoney)));
   app.use('/api', rentalsRoutes({ customers: new CustomersService(db), rateCards: new RateCardsService(db), rentals }));
-  app.use('/api', billingRoutes({ deposits, invoices: new InvoicesService(db), reports: new BillingReportsService(db) }));
+  app.use(
+    '/api',
+    billingRoutes({
+      deposits,
+      requests: new DepositRequestsService(db, gateway, publicUrl),
+      invoices: new InvoicesService(db),
+      reports: new BillingReportsService(db),
+      payments: { mode: paymentMode(config), publishableKey: config.PAYMENT_PUBLISHABLE_KEY },
+    }),
+  );
   app.use('/api', unknownApiRoute);
 
   const clientDir = path.resolve(config.CLIENT_DIR);

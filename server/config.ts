@@ -20,7 +20,16 @@ const environment = z.object({
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(4625),
   MAIL_FROM: z.string().default('Nestkeeper <no-reply@nestkeeper.test>'),
-  PAYMENT_API_KEY: z.string().default('sk_test_nestkeeper_local'),
+  /** The provider's secret key: a test key (`sk_test_…`) keeps the clerk's test-card shortcut; a live key (`sk_live_…`) leaves the renter's hosted page as the only way. */
+  PAYMENT_API_KEY: z
+    .string()
+    .regex(/^[sr]k_(test|live)_\w+$/, 'must be a secret key of the payment provider (sk_test_… or sk_live_…)')
+    .default('sk_test_nestkeeper_local'),
+  /** The matching publishable key (`pk_test_…` / `pk_live_…`), safe to show in the browser. */
+  PAYMENT_PUBLISHABLE_KEY: z
+    .string()
+    .regex(/^pk_(test|live)_\w+$/, 'must be a publishable key of the payment provider (pk_test_… or pk_live_…)')
+    .default('pk_test_nestkeeper_local'),
   PAYMENT_API_HOST: z.string().default('127.0.0.1'),
   PAYMENT_API_PORT: z.coerce.number().int().min(0).max(65535).default(4610),
   PAYMENT_API_PROTOCOL: z.enum(['http', 'https']).default('http'),
@@ -63,8 +72,16 @@ const environment = z.object({
 
 export type Config = z.infer<typeof environment>;
 
+/** Test or live, from the secret key's own prefix (the provider's convention). */
+export const paymentMode = (config: Pick<Config, 'PAYMENT_API_KEY'>): 'test' | 'live' => (/^[sr]k_live_/.test(config.PAYMENT_API_KEY) ? 'live' : 'test');
+
 export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
-  const parsed = environment.safeParse(env);
+  const parsed = environment
+    .refine((c) => paymentMode(c) === (c.PAYMENT_PUBLISHABLE_KEY.startsWith('pk_live_') ? 'live' : 'test'), {
+      message: 'the secret and publishable keys must both be test keys or both live keys',
+      path: ['PAYMENT_PUBLISHABLE_KEY'],
+    })
+    .safeParse(env);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     throw new Error(`Nestkeeper cannot start; fix these settings:\n${lines.join('\n')}`);

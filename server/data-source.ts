@@ -1,6 +1,7 @@
 import { auditEntities } from './audit';
 import { authEntities } from './auth';
 import { DepositAuthorization } from './billing/deposit-authorization.entity';
+import { DepositRequest } from './billing/deposit-request.entity';
 import { Invoice, InvoicePayment } from './billing/invoice.entity';
 import { PaymentEvent } from './billing/payment-event.entity';
 import { bookingEntities } from './bookings';
@@ -16,6 +17,7 @@ import { organizationEntities } from './organizations';
 import { Customer } from './rentals/customer.entity';
 import { RateCard } from './rentals/rate-card.entity';
 import { Rental } from './rentals/rental.entity';
+import { AgreementAcceptance, RenterLink } from './rentals/renter-link.entity';
 import { routineEntities } from './routines';
 import { userEntities } from './users';
 
@@ -36,7 +38,10 @@ export const entities = [
   Customer,
   RateCard,
   Rental,
+  RenterLink,
+  AgreementAcceptance,
   DepositAuthorization,
+  DepositRequest,
   Invoice,
   InvoicePayment,
   DocumentCounter,

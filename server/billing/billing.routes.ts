@@ -12,13 +12,22 @@ import {
 import { endpoint } from '../http/endpoint';
 import { sendDocument } from '../http/send-file';
 import type { BillingReportsService } from './billing-reports.service';
+import type { PaymentModeView } from '../../shared/billing/views';
+import type { DepositRequestsService } from './deposit-requests.service';
 import type { DepositsService } from './deposits.service';
 import type { InvoicesService } from './invoices.service';
 
-type BillingServices = { deposits: DepositsService; invoices: InvoicesService; reports: BillingReportsService };
+type BillingServices = {
+  deposits: DepositsService;
+  requests: DepositRequestsService;
+  invoices: InvoicesService;
+  reports: BillingReportsService;
+  /** With a live key the clerk's test-card shortcut does not exist: the renter's hosted page is the only way. */
+  payments: PaymentModeView;
+};
 
 /** Mounted at /api: the rentals' money (deposits as card authorizations, the list by what is left to settle), invoices and credit notes, billing reports. */
-export function billingRoutes({ deposits, invoices, reports }: BillingServices): Router {
+export function billingRoutes({ deposits, requests, invoices, reports, payments }: BillingServices): Router {
   const router = Router();
   const at = '/api';
   endpoint(
@@ -27,11 +36,31 @@ export function billingRoutes({ deposits, invoices, reports }: BillingServices):
     { method: 'get', path: '/rentals', summary: 'Rentals: open, to settle at return, or all', access: 'reports.read', query: rentalListQuery },
     ({ actor, query }) => reports.rentals(actor, query),
   );
+  endpoint(router, at, { method: 'get', path: '/billing/payment-mode', summary: 'Test or live payment keys', access: 'signed-in' }, () => payments);
+  if (payments.mode === 'test')
+    endpoint(
+      router,
+      at,
+      {
+        method: 'post',
+        path: '/rentals/:id/deposit',
+        summary: 'Test mode only: authorize the deposit with one of the provider’s test cards',
+        access: 'deposits.manage',
+        body: depositPayload,
+      },
+      ({ actor, params, body }) => deposits.authorize(actor, params.id, body.paymentMethod),
+    );
   endpoint(
     router,
     at,
-    { method: 'post', path: '/rentals/:id/deposit', summary: 'Authorize the deposit on the customer’s card', access: 'deposits.manage', body: depositPayload },
-    ({ actor, params, body }) => deposits.authorize(actor, params.id, body.paymentMethod),
+    {
+      method: 'post',
+      path: '/rentals/:id/deposit/request',
+      summary: 'Send the renter a link to their page, where they accept the agreement and place the deposit on the provider’s hosted page',
+      access: 'deposits.manage',
+      status: 201,
+    },
+    ({ actor, params }) => requests.request(actor, params.id),
   );
   endpoint(
     router,

@@ -7,7 +7,8 @@ import { loadBooking, type BookingView } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
-import { getCustomer, loadRentalView, lockRental, rememberPaymentCustomer, rememberRentalCard, type RentalRecord } from '../rentals';
+import { loadRentalView, lockRental, rememberRentalCard, type RentalRecord } from '../rentals';
+import { providerCustomer } from './provider-customer';
 import { DepositAuthorization } from './deposit-authorization.entity';
 import { depositState } from './deposit-state';
 import { Invoice } from './invoice.entity';
@@ -41,7 +42,7 @@ export class DepositsService {
       if (rental.depositMinor <= 0) throw ruleBroken('no_deposit', 'This rental has no deposit to authorize (the firm’s deposit policy gave nothing).');
       const rows = await tx.find(DepositAuthorization, { where: { rentalId } });
       if (depositState(rows).state === 'authorized') throw conflict(`The card is already authorized for ${money(rental, rental.depositMinor)}.`);
-      const customer = await this.providerCustomer(tx, rental.customerId);
+      const customer = await providerCustomer(tx, this.gateway, rental.customerId);
       const key = `rental:${rental.id}:hold:${rows.length + 1}`;
       const card = await this.gateway.saveCard(paymentMethod, customer, `${key}:card`);
       const outcome = await this.gateway.confirmIntent({
@@ -145,7 +146,7 @@ export class DepositsService {
    * Returns the failure in words when the card will not take it.
    */
   async renew(tx: Scoped, rental: RentalRecord, authorization: DepositAuthorization, day: string): Promise<{ ok: true } | { ok: false; message: string }> {
-    const customer = await this.providerCustomer(tx, rental.customerId);
+    const customer = await providerCustomer(tx, this.gateway, rental.customerId);
     if (!rental.paymentMethodId) return { ok: false, message: 'no card is saved for this rental' };
     const key = `hold:${authorization.id}:renewal:${day}`;
     const outcome = await this.gateway.confirmIntent({
@@ -208,7 +209,7 @@ export class DepositsService {
     const outcome = await this.gateway.confirmIntent({
       amountMinor,
       currency: rental.currency,
-      customer: await this.providerCustomer(tx, rental.customerId),
+      customer: await providerCustomer(tx, this.gateway, rental.customerId),
       paymentMethod: rental.paymentMethodId,
       capture: 'automatic',
       offSession: true,
@@ -250,13 +251,5 @@ export class DepositsService {
       captureReason: r.reason ?? null,
       settledAt: r.kind === 'charge' || !o.ok ? new Date() : null,
     });
-  }
-
-  private async providerCustomer(tx: Scoped, customerId: string): Promise<string> {
-    const customer = await getCustomer(tx, customerId);
-    if (customer.paymentCustomerId) return customer.paymentCustomerId;
-    const paymentCustomerId = await this.gateway.ensureCustomer(customer);
-    await rememberPaymentCustomer(tx, customer.id, paymentCustomerId);
-    return paymentCustomerId;
   }
 }

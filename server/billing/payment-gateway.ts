@@ -158,6 +158,61 @@ export class PaymentGateway {
     );
   }
 
+  /**
+   * A hosted payment page for the renter (a Checkout Session): the card is
+   * authorized for `amountMinor` with manual capture and saved to the
+   * customer for later off-session use (renewals, charges above the
+   * authorization). It lives the provider's default 24 hours: a retry under
+   * the same key must send the same parameters, so no clock reading goes in.
+   */
+  async openCheckout(p: {
+    amountMinor: number;
+    currency: string;
+    customer: string;
+    name: string;
+    metadata: Record<string, string>;
+    successUrl: string;
+    cancelUrl: string;
+    key: string;
+  }): Promise<{ id: string; url: string; expiresAt: Date }> {
+    const session = await call(() =>
+      this.client.checkout.sessions.create(
+        {
+          mode: 'payment',
+          customer: p.customer,
+          line_items: [
+            {
+              quantity: 1,
+              price_data: { currency: p.currency.toLowerCase(), unit_amount: providerAmount(p.amountMinor, p.currency), product_data: { name: p.name } },
+            },
+          ],
+          payment_intent_data: { capture_method: 'manual', setup_future_usage: 'off_session', description: p.name, metadata: p.metadata },
+          metadata: p.metadata,
+          success_url: p.successUrl,
+          cancel_url: p.cancelUrl,
+        },
+        { idempotencyKey: p.key },
+      ),
+    );
+    if (!session.url) throw unavailable(new Error('the provider made a payment page without an address'));
+    return { id: session.id, url: session.url, expiresAt: new Date(session.expires_at * 1000) };
+  }
+
+  /** The session as the provider holds it now, with its PaymentIntent and that intent's charge. */
+  async retrieveCheckout(sessionId: string): Promise<Stripe.Checkout.Session> {
+    return call(() => this.client.checkout.sessions.retrieve(sessionId, { expand: ['payment_intent', 'payment_intent.latest_charge'] }));
+  }
+
+  /** Closes a hosted page that a newer request replaces, so the renter cannot authorize the deposit twice. */
+  async expireCheckout(sessionId: string, key: string): Promise<Stripe.Checkout.Session> {
+    return call(() => this.client.checkout.sessions.expire(sessionId, {}, { idempotencyKey: key }));
+  }
+
+  /** What Nestkeeper keeps of an intent authorized on the hosted page. */
+  describeIntent(pi: Stripe.PaymentIntent): IntentOutcome {
+    return outcome(pi);
+  }
+
   async retrieve(intentId: string): Promise<Stripe.PaymentIntent> {
     return call(() => this.client.paymentIntents.retrieve(intentId, { expand: ['latest_charge'] }));
   }

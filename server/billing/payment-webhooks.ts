@@ -8,6 +8,7 @@ import { AppError } from '../http/errors';
 import { enqueueMail, staffAddresses } from '../notifications';
 import { getRental } from '../rentals';
 import { DepositAuthorization } from './deposit-authorization.entity';
+import { applyRequestEvent, requestOf } from './deposit-request-events';
 import { PaymentEvent } from './payment-event.entity';
 import type { PaymentGateway } from './payment-gateway';
 
@@ -103,14 +104,18 @@ export function paymentWebhookRoutes(db: DataSource, gateway: PaymentGateway, se
       } catch (err) {
         throw new AppError(400, 'invalid_signature', `The webhook signature does not verify: ${(err as Error).message}`);
       }
-      const current = await providerView(db, gateway, event);
+      const request = await requestOf(db.manager, event);
+      // Fetched before the transaction, as below: the page's session with its intent, as the provider holds them now.
+      const session = request ? await gateway.retrieveCheckout(request.checkoutSessionId) : null;
+      const current = request ? null : await providerView(db, gateway, event);
       const result = await db.transaction(async (manager) => {
         const inserted = await manager.query(
           `INSERT INTO payment_events (event_id, type, outcome) VALUES ($1, $2, 'received') ON CONFLICT (event_id) DO NOTHING RETURNING event_id`,
           [event.id, event.type],
         );
         if (!inserted.length) return { duplicate: true };
-        const { organizationId, outcome } = await apply(manager, event, current);
+        const { organizationId, outcome } =
+          request && session ? await applyRequestEvent(manager, gateway, event, request, session) : await apply(manager, event, current);
         await manager.update(PaymentEvent, { eventId: event.id }, { organizationId, outcome });
         return { duplicate: false, outcome };
       });

@@ -1,6 +1,7 @@
 import { In } from 'typeorm';
 import type { RentalMoney } from '../rentals';
 import { DepositAuthorization } from './deposit-authorization.entity';
+import { currentDepositRequest, depositRequestView } from './deposit-request-view';
 import { authorizationView, depositState } from './deposit-state';
 import { invoiceSummaries } from './invoice-summaries';
 import { Invoice, InvoicePayment } from './invoice.entity';
@@ -20,12 +21,14 @@ export const rentalMoney: RentalMoney = {
     const invoices = await tx.find(Invoice, { where: { rentalId: rental.id }, order: { issuedAt: 'ASC' } });
     const payments = await tx.find(InvoicePayment, { where: { invoiceId: In(invoices.map((i) => i.id)) } });
     const deposit = depositState(authorizations);
+    const request = await currentDepositRequest(tx, rental.id);
     const sum = (kind: DepositAuthorization['kind']) => authorizations.filter((a) => a.kind === kind).reduce((s, a) => s + a.capturedMinor, 0);
     return {
       deposit: {
         state: deposit.state,
         authorization: deposit.authorization ? authorizationView(deposit.authorization) : null,
         authorizations: authorizations.map(authorizationView),
+        request: request ? depositRequestView(request) : null,
       },
       depositCapturedMinor: sum('authorization'),
       cardChargedMinor: sum('charge'),

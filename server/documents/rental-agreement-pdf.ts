@@ -17,7 +17,8 @@ import {
 } from './document-layout';
 import { MM, renderPdf } from './pdf';
 
-function terms(rental: RentalView, currency: string) {
+/** The rental's terms in words (the agreement's and the renter's page). */
+export function agreementTerms(rental: RentalView, currency: string) {
   const late = rental.quote.lines
     .map(
       (l) =>
@@ -36,7 +37,7 @@ function terms(rental: RentalView, currency: string) {
 export function rentalAgreementPdf(input: { firm: { name: string; timeZone: string }; rental: RentalView }): Promise<Buffer> {
   const { firm, rental } = input;
   const { quote, currency } = rental;
-  return renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: `Rental agreement ${rental.number}` } }, (doc) => {
+  return renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: `Rental agreement ${rental.number}`, CreationDate: new Date(rental.createdAt) } }, (doc) => {
     heading(doc, firm.name, `Rental agreement ${rental.number}`, [
       `Booked ${firmDateTime(rental.createdAt, firm.timeZone)}${rental.checkedOutAt ? ` · handed over ${firmDateTime(rental.checkedOutAt, firm.timeZone)}` : ''}`,
     ]);
@@ -80,7 +81,7 @@ export function rentalAgreementPdf(input: { firm: { name: string; timeZone: stri
     ]);
 
     section(doc, 'Terms');
-    bullets(doc, terms(rental, currency));
+    bullets(doc, agreementTerms(rental, currency));
     section(doc, 'Cautions');
     bullets(doc, rentalCautions);
 

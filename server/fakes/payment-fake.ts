@@ -2,6 +2,7 @@ import { createServer } from 'node:http';
 import express from 'express';
 import { requireApiKey } from './payments/auth';
 import { charges } from './payments/charges';
+import { checkoutSessions } from './payments/checkout-sessions';
 import { controlRouter } from './payments/control';
 import { customers } from './payments/customers';
 import { errorHandler, unknownRoute } from './payments/errors';
@@ -16,7 +17,7 @@ import { PaymentStore, randomToken } from './payments/store';
 import { listen } from './listen';
 
 /** The provider resources this fake serves; add one file per resource here. */
-const resources: PaymentResource[] = [customers, paymentMethods, paymentIntents, charges, refunds, events];
+const resources: PaymentResource[] = [customers, paymentMethods, paymentIntents, checkoutSessions, charges, refunds, events];
 
 /** How often the running fake does its time-driven work (lapsing authorizations). */
 const SWEEP_INTERVAL_MS = 60_000;

@@ -7,3 +7,4 @@
 export { getCustomer, getRental, lockRental, rememberPaymentCustomer, rememberRentalCard, type CustomerRecord, type RentalRecord } from './rental-records';
 export type { RentalMoney, RentalMoneyFacts } from './rental-money';
 export { loadRentalView } from './rental-view';
+export { issueRenterLink, RENTER_LINK_DAYS } from './renter-links';

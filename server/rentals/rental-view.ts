@@ -7,6 +7,7 @@ import { assetsByIds } from '../fleet';
 import { bookingIncidents } from '../incidents/incidents.service';
 import { loadOrgContext } from '../organizations';
 import type { RentalMoney } from './rental-money';
+import { latestAcceptance } from './agreement-acceptance';
 import { getCustomer, type RentalRecord } from './rental-records';
 
 const rentalState = (booking: Pick<BookingView, 'state'>, invoiced: boolean): RentalState =>
@@ -56,6 +57,11 @@ export async function loadRentalView(tx: Scoped, rental: RentalRecord, money: Re
     currency: rental.currency,
     depositMinor: rental.depositMinor,
     deposit,
+    agreement: await latestAcceptance(tx, rental.id),
+    handoverOverride:
+      rental.handoverOverrideReason && rental.handoverOverrideBy && rental.handoverOverrideAt
+        ? { reason: rental.handoverOverrideReason, byUserId: rental.handoverOverrideBy, at: rental.handoverOverrideAt.toISOString() }
+        : null,
     checkedOutAt: booking.checkedOutAt,
     returnedAt: booking.returnedAt,
     charges,

@@ -47,6 +47,16 @@ export class Rental extends OrgOwned {
   @Column({ type: 'text', nullable: true })
   note: string | null;
 
+  /** The owner let the kit go without the accepted agreement or the card authorization: why, who, when (audited too). */
+  @Column({ name: 'handover_override_reason', type: 'text', nullable: true })
+  handoverOverrideReason: string | null;
+
+  @Column({ name: 'handover_override_by', type: 'uuid', nullable: true })
+  handoverOverrideBy: string | null;
+
+  @Column({ name: 'handover_override_at', type: 'timestamptz', nullable: true })
+  handoverOverrideAt: Date | null;
+
   @Column({ name: 'created_by', type: 'uuid' })
   createdBy: string;
 

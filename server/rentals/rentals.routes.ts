@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { chargePayload, customerPayload, quoteQuery, rateCardPayload, rentalPayload } from '../../shared/schemas/rentals';
+import { chargePayload, customerPayload, handoverOverridePayload, quoteQuery, rateCardPayload, rentalPayload } from '../../shared/schemas/rentals';
 import { endpoint, paging } from '../http/endpoint';
 import { sendDocument } from '../http/send-file';
 import type { CustomersService } from './customers.service';
@@ -82,6 +82,18 @@ export function rentalsRoutes({ customers, rateCards, rentals }: RentalsServices
       body: chargePayload,
     },
     ({ actor, params, body }) => rentals.setCharge(actor, params.id, params.incidentId, body.amountMinor),
+  );
+  endpoint(
+    router,
+    at,
+    {
+      method: 'post',
+      path: '/rentals/:id/handover-override',
+      summary: 'Owner: let the kit go without the accepted agreement or the card authorization, with a reason',
+      access: 'settings.manage',
+      body: handoverOverridePayload,
+    },
+    ({ actor, params, body }) => rentals.overrideHandover(actor, params.id, body.reason),
   );
   endpoint(
     router,

@@ -13,6 +13,7 @@ import { setIncidentCharge } from '../incidents/incidents.service';
 import { enqueueMail } from '../notifications';
 import { priceRental } from './pricing';
 import type { RentalMoney } from './rental-money';
+import { latestAcceptance } from './agreement-acceptance';
 import { agreementFor, certificatePackFor } from './rental-papers';
 import { getCustomer, getRental } from './rental-records';
 import { loadRentalView } from './rental-view';
@@ -78,6 +79,17 @@ export class RentalsService {
     });
   }
 
+  /** The owner's explicit word that the kit may go out without the accepted agreement or the card authorization (audited). */
+  overrideHandover(actor: Actor, rentalId: string, reason: string) {
+    return inOrganization(this.db, actor.organizationId, async (tx) => {
+      const rental = await tx.get(Rental, { id: rentalId }, 'That rental');
+      Object.assign(rental, { handoverOverrideReason: reason, handoverOverrideBy: actor.userId, handoverOverrideAt: new Date() });
+      await tx.save(Rental, rental);
+      await recordAudit(tx, actor, 'rental.handover_override', { type: 'rental', id: rentalId }, { reason });
+      return loadRentalView(tx, rental, this.money);
+    });
+  }
+
   agreementPdf(actor: Actor, id: string) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const rental = await loadRentalView(tx, await getRental(tx, id), this.money);
@@ -92,19 +104,24 @@ export class RentalsService {
     });
   }
 
-  /** What the counter checks for a rental: the deposit authorized on the card before handing over; the papers go to the renter after. */
+  /** What the counter checks for a rental: the deposit authorized on the card and the agreement accepted before handing over (or the owner's override); the papers go to the renter after. */
   readonly handoverGates: HandoverGates = {
     beforeCheckout: async (tx: Scoped, booking: BookingView) => {
       if (!booking.rentalId) return;
       const rental = await getRental(tx, booking.rentalId);
-      if (rental.depositMinor <= 0) return;
+      if (rental.depositMinor <= 0 || rental.handoverOverrideReason) return;
       const state = await this.money.depositState(tx, rental.id);
       if (state !== 'authorized') {
         throw ruleBroken(
           'deposit_required',
-          `Rental ${rental.number} needs its deposit of ${formatMoney(rental.depositMinor, rental.currency, 'en-GB')} authorized on the customer's card before the kit is handed over${state === 'declined' ? ' (the last card was declined)' : ''}. The billing clerk takes it on the rental's page.`,
+          `Rental ${rental.number} needs its deposit of ${formatMoney(rental.depositMinor, rental.currency, 'en-GB')} authorized on the customer's card before the kit is handed over${state === 'declined' ? ' (the last card was declined)' : ''}. The billing clerk sends the renter the link on the rental's page.`,
         );
       }
+      if (!(await latestAcceptance(tx, rental.id)))
+        throw ruleBroken(
+          'agreement_required',
+          `Rental ${rental.number} needs the renter's acceptance of the rental agreement before the kit is handed over: they accept it on the page the billing clerk sends them, or the owner lets it go with a reason.`,
+        );
     },
     afterCheckout: async (tx: Scoped, booking: BookingView) => {
       if (!booking.rentalId) return;

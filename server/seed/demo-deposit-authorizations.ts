@@ -58,5 +58,18 @@ export async function restoreAuthorizationsOnLocalFake(db: DataSource, gateway: 
       restored += 1;
     });
   }
+  await closeForgottenPaymentPages(db, gateway);
   return restored;
+}
+
+/** Hosted payment pages the restarted fake no longer knows can never be paid: their requests read as expired, and the clerk sends a new link. */
+async function closeForgottenPaymentPages(db: DataSource, gateway: PaymentGateway) {
+  const open: { id: string; checkout_session_id: string }[] = await db.query(`SELECT id, checkout_session_id FROM deposit_requests WHERE state = 'open'`);
+  for (const request of open) {
+    const known = await gateway.retrieveCheckout(request.checkout_session_id).then(
+      () => true,
+      () => false,
+    );
+    if (!known) await db.query(`UPDATE deposit_requests SET state = 'expired' WHERE id = $1 AND state = 'open'`, [request.id]);
+  }
 }

@@ -170,13 +170,78 @@ export type RentalView = {
   quote: Quote;
   currency: string;
   depositMinor: number;
-  deposit: { state: DepositState; authorization: DepositAuthorizationView | null; authorizations: DepositAuthorizationView[] };
+  deposit: {
+    state: DepositState;
+    authorization: DepositAuthorizationView | null;
+    authorizations: DepositAuthorizationView[];
+    /** The latest link sent to the renter to place the authorization on the provider's hosted page. */
+    request: DepositRequestView | null;
+  };
+  /** The renter's acceptance of the agreement on their page. */
+  agreement: AgreementAcceptanceView | null;
+  /** The owner let the kit go without the accepted agreement or the card authorization. */
+  handoverOverride: HandoverOverrideView | null;
   checkedOutAt: string | null;
   returnedAt: string | null;
   charges: RentalChargeView[];
   settlement: Settlement;
   invoices: InvoiceSummary[];
   createdAt: string;
+};
+
+/** Waiting for the renter, authorized through the hosted page, the renter's last card declined (the page still open), or the page expired. */
+export type DepositRequestState = 'waiting' | 'authorized' | 'declined' | 'expired';
+
+export type DepositRequestView = {
+  id: string;
+  state: DepositRequestState;
+  /** The provider's hosted page; null once it can no longer be used. */
+  url: string | null;
+  expiresAt: string;
+  sentTo: string;
+  createdAt: string;
+  declineMessage: string | null;
+};
+
+/** `POST /api/rentals/:id/deposit/request`: the hosted page and the renter's own page (mailed; shown once, only its hash is kept). */
+export type DepositRequestReply = { url: string; expiresAt: string; renterUrl: string; renterLinkExpiresAt: string; rental: RentalView };
+
+export type AgreementAcceptanceView = { fullName: string; acceptedAt: string; ipAddress: string; agreementSha256: string };
+
+export type HandoverOverrideView = { reason: string; byUserId: string; at: string };
+
+/** Whether the provider keys are test keys (the clerk's test-card shortcut exists only then). */
+export type PaymentModeView = { mode: 'test' | 'live'; publishableKey: string };
+
+/** One rented item as the renter sees it: its calibration valid-through date against the rental's last day. */
+export type RenterItem = {
+  assetTag: string;
+  type: string;
+  manufacturer: string | null;
+  model: string | null;
+  serialNumber: string;
+  calibrationRequired: boolean;
+  validThrough: string | null;
+  /** Calibration not needed, or valid through the rental's last day. */
+  coversRental: boolean;
+};
+
+/** The renter's own page (no sign-in; reached by the link in the mail). */
+export type RenterRentalView = {
+  firm: { name: string };
+  number: string;
+  state: RentalState;
+  customer: { company: string; billingContact: string | null };
+  startsOn: string;
+  endsOn: string;
+  items: RenterItem[];
+  quote: Quote;
+  currency: string;
+  depositMinor: number;
+  terms: string[];
+  agreement: { sha256: string; accepted: { fullName: string; acceptedAt: string } | null };
+  deposit: { state: DepositState; request: DepositRequestView | null; card: string | null };
+  linkExpiresAt: string;
 };
 
 export type RentalSummary = {

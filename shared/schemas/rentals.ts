@@ -90,3 +90,18 @@ export const revenueQuery = z
 export const utilisationQuery = z
   .object({ from: calendarDate, to: calendarDate })
   .refine((q) => q.from <= q.to, { message: 'must be on or after the start', path: ['to'] });
+
+/** The renter accepts the agreement on their page: their full name typed, the tick, and the SHA-256 of the agreement PDF they were shown. */
+export const agreementAcceptancePayload = z.object({
+  fullName: text(200)
+    .trim()
+    .min(3, 'type your full name')
+    .regex(/\p{L}.*\s+.*\p{L}/u, 'type your first and last name'),
+  agreed: z.literal(true, { message: 'tick the box to accept the agreement' }),
+  agreementSha256: z.string().regex(/^[0-9a-f]{64}$/, 'is not the fingerprint of an agreement'),
+});
+
+/** The owner lets a rental's kit go without the accepted agreement or the card authorization, saying why. */
+export const handoverOverridePayload = z.object({
+  reason: text(500).trim().min(10, 'say why the kit may go out without them (at least a few words)'),
+});

@@ -27,6 +27,9 @@ export const routes: RouteObject[] = [
       ['/join', () => import('./routes/join')],
     ] as const
   ).map(([path, load]) => ({ path, lazy: screen(load), errorElement: <RouteError />, hydrateFallbackElement: <Splash /> })),
+  // The renter's pages: no sign-in, the secret link is the key.
+  { path: '/renter/returned', lazy: screen(() => import('./routes/renter-returned')), errorElement: <RouteError />, hydrateFallbackElement: <Splash /> },
+  { path: '/renter/:token', lazy: screen(() => import('./routes/renter')), errorElement: <RouteError />, hydrateFallbackElement: <Splash /> },
   {
     path: '/',
     element: (

@@ -9,6 +9,7 @@ import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { pdfText } from '../support/pdf';
 import { bearer, binaryBody, createTestApp, webhookSecret, type TestApp } from '../support/test-app';
 import { eventually } from '../support/eventually';
+import { renterAccepts, renterLinkFor } from '../support/renter';
 
 const WEBHOOK_SECRET = webhookSecret();
 let t: TestApp;
@@ -79,7 +80,12 @@ const checklist = (r: RentalView, damaged?: string) => ({
   checklist: r.items.map((i) => ({ assetId: i.id, present: true, condition: i.id === damaged ? 'damaged' : 'good' })),
 });
 const takeDeposit = (r: RentalView, paymentMethod = 'pm_card_visa') => t.api.post(`/api/rentals/${r.id}/deposit`).set(bearer(billing)).send({ paymentMethod });
-const checkout = (r: RentalView) => t.api.post(`/api/bookings/${r.bookingId}/checkout`).set(bearer(manager)).send(checklist(r));
+/** At the counter; the renter has accepted the agreement on their page first (tests/api/renter-deposits.test.ts covers that gate). */
+const checkout = async (r: RentalView) => {
+  const accepted = await renterAccepts(t.api, await renterLinkFor(t.db, r.id));
+  expect(accepted.status, JSON.stringify(accepted.body)).toBe(200);
+  return t.api.post(`/api/bookings/${r.bookingId}/checkout`).set(bearer(manager)).send(checklist(r));
+};
 const giveBack = (r: RentalView, damaged?: string) => t.api.post(`/api/bookings/${r.bookingId}/return`).set(bearer(manager)).send(checklist(r, damaged));
 const view = async (r: RentalView): Promise<RentalView> => (await t.api.get(`/api/rentals/${r.id}`).set(bearer(billing))).body;
 const mailTo = (address: string) =>

@@ -442,5 +442,5 @@ describe('fuzzing every operation in the OpenAPI document', () => {
     console.log(`fuzz: ${requests} requests, ${operations.length} routes, ${fiveHundreds} × 500`);
     if (process.env.FUZZ_REPORT) writeFileSync(process.env.FUZZ_REPORT, JSON.stringify({ findings, answered }, null, 1));
     expect(findings).toEqual([]);
-  }, 240_000);
+  }, 300_000);
 });

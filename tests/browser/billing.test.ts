@@ -6,6 +6,7 @@ import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { signedIn } from '../support/browser-session';
 import { pdfText } from '../support/pdf';
 import { eventually } from '../support/eventually';
+import { renterLinkFor } from '../support/renter';
 
 let rig: BrowserRig;
 beforeAll(async () => {
@@ -68,6 +69,15 @@ describe('the billing desk in a real browser', () => {
       earlyReason: 'Renter collects ahead of the start',
       checklist: rental.items.map((i: { id: string }) => ({ assetId: i.id, present: true, condition: i.id === damaged ? 'damaged' : 'good' })),
     });
+    // The renter accepted the agreement on their page (tests/browser/renter.test.ts walks that page).
+    const token = await renterLinkFor(rig.db, rentalId);
+    const renterPage = await (await fetch(`${rig.baseUrl}/api/renter/${token}`)).json();
+    const accepted = await fetch(`${rig.baseUrl}/api/renter/${token}/agreement`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ fullName: 'Mara Ostby', agreed: true, agreementSha256: renterPage.agreement.sha256 }),
+    });
+    expect(accepted.status).toBe(200);
     expect((await managerApi(`/bookings/${rental.bookingId}/checkout`, walk())).status).toBe(200);
     const dented = rental.items[0];
     expect((await managerApi(`/bookings/${rental.bookingId}/return`, walk(dented.id))).status).toBe(200);

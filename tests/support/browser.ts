@@ -32,12 +32,13 @@ export async function startBrowserRig(opts: { reachDatabaseVia?: (url: string) =
   const { port } = server.address() as { port: number };
   const config = readConfig({
     NODE_ENV: 'test',
+    PORT: String(port),
+    PUBLIC_URL: `http://127.0.0.1:${port}`,
     DATABASE_URL: database.url,
     JWT_SECRET: 'browser-test-secret-long-enough-for-hs256',
     START_LOCAL_FAKES: 'false',
     RUN_SCHEDULER: 'false',
     SMTP_PORT: String(sink.port),
-    PUBLIC_URL: `http://127.0.0.1:${port}`,
     CLIENT_DIR: path.resolve('dist/client'),
     PAYMENT_API_PORT: String(payments.port),
     PAYMENT_WEBHOOK_SECRET: secret,
@@ -54,6 +55,7 @@ export async function startBrowserRig(opts: { reachDatabaseVia?: (url: string) =
     db: database.db,
     /** What the deliver-outbox routine does on its schedule: queued mail goes to the sink (and the owner's Mailbox). */
     deliverMail: () => routines.run('deliver-outbox', 'manual'),
+    payments,
     async newContext(options: BrowserContextOptions = {}) {
       const context = await browser.newContext(options);
       context.setDefaultTimeout(WAIT_MS);

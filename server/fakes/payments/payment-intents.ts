@@ -53,7 +53,7 @@ export type PaymentIntent = {
   payment_method_options: { card: { request_extended_authorization?: never } };
   payment_method_types: ['card'];
   receipt_email: string | null;
-  setup_future_usage: null;
+  setup_future_usage: 'off_session' | 'on_session' | null;
   statement_descriptor: string | null;
   status: PaymentIntentStatus;
 };
@@ -161,7 +161,7 @@ export function expireAuthorizations(store: PaymentStore): void {
 }
 
 /** `expand[]` on intents: latest_charge, payment_method, customer (https://docs.stripe.com/api/expanding_objects). */
-function render(store: PaymentStore, intent: PaymentIntent, expand: string[] | undefined): unknown {
+export function renderIntent(store: PaymentStore, intent: PaymentIntent, expand: string[] | undefined): unknown {
   if (!expand?.length) return intent;
   const out: Record<string, unknown> = { ...intent };
   for (const path of expand) {
@@ -181,7 +181,7 @@ const unexpectedState = (intent: PaymentIntent, action: string, allowed: Payment
     { payment_intent: intent },
   );
 
-type ConfirmInput = { paymentMethod?: string; offSession?: boolean; forcedDecline?: string };
+export type ConfirmInput = { paymentMethod?: string; offSession?: boolean; forcedDecline?: string };
 
 /**
  * One confirmation attempt (https://docs.stripe.com/api/payment_intents/confirm):
@@ -189,7 +189,7 @@ type ConfirmInput = { paymentMethod?: string; offSession?: boolean; forcedDeclin
  * failed charge, the intent back at `requires_payment_method` with
  * `last_payment_error`, and a 402 card error naming the intent.
  */
-function confirmIntent(store: PaymentStore, intent: PaymentIntent, input: ConfirmInput, cause: EventCause): PaymentIntent {
+export function confirmIntent(store: PaymentStore, intent: PaymentIntent, input: ConfirmInput, cause: EventCause): PaymentIntent {
   const confirmable: PaymentIntentStatus[] = ['requires_payment_method', 'requires_confirmation', 'requires_action'];
   if (!confirmable.includes(intent.status)) throw unexpectedState(intent, 'confirm', confirmable);
   const pmId = input.paymentMethod ?? intent.payment_method;
@@ -256,6 +256,56 @@ function confirmIntent(store: PaymentStore, intent: PaymentIntent, input: Confir
   return confirmed;
 }
 
+/** The parameters a new intent takes, from POST /v1/payment_intents or a Checkout Session's `payment_intent_data`. */
+export type NewIntent = {
+  amount: number;
+  currency: string;
+  customer: string | null;
+  description: string | null;
+  metadata: Metadata;
+  captureMethod: 'automatic' | 'manual';
+  paymentMethod: string | null;
+  receiptEmail: string | null;
+  statementDescriptor: string | null;
+  setupFutureUsage: PaymentIntent['setup_future_usage'];
+};
+
+/** Stores a new, unconfirmed intent and emits `payment_intent.created`. */
+export function openIntent(store: PaymentStore, n: NewIntent, cause: EventCause): PaymentIntent {
+  const id = store.newId('pi');
+  const intent = save(store, {
+    id,
+    object: 'payment_intent',
+    amount: n.amount,
+    amount_capturable: 0,
+    amount_received: 0,
+    automatic_payment_methods: null,
+    canceled_at: null,
+    cancellation_reason: null,
+    capture_method: n.captureMethod,
+    client_secret: `${id}_secret_${store.newId('x').slice(2)}`,
+    confirmation_method: 'automatic',
+    created: store.nowSeconds(),
+    currency: n.currency,
+    customer: n.customer,
+    description: n.description,
+    last_payment_error: null,
+    latest_charge: null,
+    livemode: false,
+    metadata: n.metadata,
+    next_action: null,
+    payment_method: n.paymentMethod,
+    payment_method_options: { card: {} },
+    payment_method_types: ['card'],
+    receipt_email: n.receiptEmail,
+    setup_future_usage: n.setupFutureUsage,
+    statement_descriptor: n.statementDescriptor,
+    status: n.paymentMethod ? 'requires_confirmation' : 'requires_payment_method',
+  });
+  emitEvent(store, 'payment_intent.created', intent, cause);
+  return intent;
+}
+
 const createSchema = z.strictObject({
   ...common,
   amount: formAmount,
@@ -319,41 +369,25 @@ export const paymentIntents: PaymentResource = {
       }
       assertAcceptedAmount(p.amount, p.currency, 'amount');
       if (p.customer) findCustomer(store, p.customer);
-      const pm = p.payment_method ? resolvePaymentMethod(store, p.payment_method) : undefined;
-      const id = store.newId('pi');
-      const intent: PaymentIntent = save(store, {
-        id,
-        object: 'payment_intent',
-        amount: p.amount,
-        amount_capturable: 0,
-        amount_received: 0,
-        automatic_payment_methods: null,
-        canceled_at: null,
-        cancellation_reason: null,
-        capture_method: p.capture_method === 'manual' ? 'manual' : 'automatic',
-        client_secret: `${id}_secret_${store.newId('x').slice(2)}`,
-        confirmation_method: 'automatic',
-        created: store.nowSeconds(),
-        currency: p.currency,
-        customer: p.customer ?? null,
-        description: textOrNull(p.description),
-        last_payment_error: null,
-        latest_charge: null,
-        livemode: false,
-        metadata: applyMetadata({}, p.metadata),
-        next_action: null,
-        payment_method: pm?.id ?? null,
-        payment_method_options: { card: {} },
-        payment_method_types: ['card'],
-        receipt_email: textOrNull(p.receipt_email),
-        setup_future_usage: null,
-        statement_descriptor: p.statement_descriptor ?? null,
-        status: pm ? 'requires_confirmation' : 'requires_payment_method',
-      });
       const cause = causeOf(req, res);
-      emitEvent(store, 'payment_intent.created', intent, cause);
+      const intent = openIntent(
+        store,
+        {
+          amount: p.amount,
+          currency: p.currency,
+          customer: p.customer ?? null,
+          description: textOrNull(p.description),
+          metadata: applyMetadata({}, p.metadata),
+          captureMethod: p.capture_method === 'manual' ? 'manual' : 'automatic',
+          paymentMethod: p.payment_method ? resolvePaymentMethod(store, p.payment_method).id : null,
+          receiptEmail: textOrNull(p.receipt_email),
+          statementDescriptor: p.statement_descriptor ?? null,
+          setupFutureUsage: null,
+        },
+        cause,
+      );
       const result = p.confirm ? confirmIntent(store, intent, { offSession: p.off_session, forcedDecline: forcedDecline(res) }, cause) : intent;
-      res.json(render(store, result, p.expand));
+      res.json(renderIntent(store, result, p.expand));
     });
 
     // https://docs.stripe.com/api/payment_intents/list
@@ -366,7 +400,7 @@ export const paymentIntents: PaymentResource = {
     // https://docs.stripe.com/api/payment_intents/retrieve
     router.get('/v1/payment_intents/:id', (req, res) => {
       const p = parseParams(retrieveSchema, req.query);
-      res.json(render(store, load(req, res), p.expand));
+      res.json(renderIntent(store, load(req, res), p.expand));
     });
 
     // https://docs.stripe.com/api/payment_intents/update — only before confirmation succeeds.
@@ -391,7 +425,7 @@ export const paymentIntents: PaymentResource = {
         status: pm && intent.status === 'requires_payment_method' ? 'requires_confirmation' : intent.status,
         metadata: applyMetadata(intent.metadata, p.metadata),
       });
-      res.json(render(store, updated, p.expand));
+      res.json(renderIntent(store, updated, p.expand));
     });
 
     // https://docs.stripe.com/api/payment_intents/confirm
@@ -406,7 +440,7 @@ export const paymentIntents: PaymentResource = {
         { paymentMethod: p.payment_method, offSession: p.off_session, forcedDecline: forcedDecline(res) },
         causeOf(req, res),
       );
-      res.json(render(store, confirmed, p.expand));
+      res.json(renderIntent(store, confirmed, p.expand));
     });
 
     // https://docs.stripe.com/api/payment_intents/capture — only from
@@ -448,7 +482,7 @@ export const paymentIntents: PaymentResource = {
         amount_capturable: intent.amount_capturable,
         amount_received: 0,
       });
-      res.json(render(store, captured, p.expand));
+      res.json(renderIntent(store, captured, p.expand));
     });
 
     // https://docs.stripe.com/api/payment_intents/cancel — from
@@ -470,7 +504,7 @@ export const paymentIntents: PaymentResource = {
         cancellation_reason: p.cancellation_reason ?? null,
       });
       emitEvent(store, 'payment_intent.canceled', canceled, causeOf(req, res), { status: intent.status });
-      res.json(render(store, canceled, p.expand));
+      res.json(renderIntent(store, canceled, p.expand));
     });
 
     return router;

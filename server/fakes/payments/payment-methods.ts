@@ -63,11 +63,23 @@ export type PaymentMethod = {
   type: 'card';
 };
 
+/**
+ * The published test card numbers (https://docs.stripe.com/testing#cards and
+ * #declined-payments) as typed on the hosted payment page, each the same card
+ * as its token above.
+ */
+export const TEST_CARD_NUMBERS: Record<string, keyof typeof TEST_TOKENS> = {
+  '4242424242424242': 'tok_visa',
+  '5555555555554444': 'tok_mastercard',
+  '4000000000000002': 'tok_chargeDeclined',
+  '4000000000009995': 'tok_chargeDeclinedInsufficientFunds',
+};
+
 export const paymentMethodTable = (store: PaymentStore) => store.table<PaymentMethod>('payment_methods');
 /** Internal: which test card each payment method came from (never sent to clients). */
 const outcomeTable = (store: PaymentStore) => store.table<CardOutcome>('payment_method_outcomes');
 
-function createFromToken(store: PaymentStore, token: string, billing: BillingParams | undefined, metadata: Metadata): PaymentMethod {
+export function createFromToken(store: PaymentStore, token: string, billing: BillingParams | undefined, metadata: Metadata): PaymentMethod {
   const card = TEST_TOKENS[token];
   if (!card) {
     throw invalidRequest(`No such token: '${token}'. This payment fake knows the test tokens ${Object.keys(TEST_TOKENS).join(', ')}.`, {

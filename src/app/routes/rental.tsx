@@ -12,17 +12,23 @@ import { DepositPanel } from '../../features/billing/components/deposit-panel';
 import { InvoicePanel } from '../../features/billing/components/invoice-panel';
 import { QuoteLines } from '../../features/rentals/components/quote-lines';
 import { ChargesEditor } from '../../features/rentals/components/charges-editor';
+import { HandoverReadiness } from '../../features/rentals/components/handover-readiness';
 import { RenterCautions, RentalItems } from '../../features/rentals/components/rental-items';
 import { RentalStateChip } from '../../features/rentals/components/rental-words';
 import { formatCalendarDate, useDateFormat } from '../../lib/format';
 import { can } from '../../lib/roles';
+import type { RentalView } from '../../../shared/billing/views';
 
-/** One rental: what went out, its price, the deposit hold and the invoice. */
+/** The renter has a live link: their acceptance and the provider's event can arrive any moment. */
+const renterAtWork = (r: RentalView) =>
+  r.state === 'reserved' && (r.deposit.request?.state === 'waiting' || r.deposit.request?.state === 'declined' || (!!r.deposit.request && !r.agreement));
+
+/** One rental: what went out, its price, the agreement, the deposit's card authorization and the invoice. */
 export default function RentalRoute() {
   const { id = '' } = useParams();
   const { user } = useSession();
   const { dateTime } = useDateFormat();
-  const rental = useRental(id);
+  const rental = useRental(id, renterAtWork);
 
   if (rental.isPending) return <LoadingPanel label="Loading the rental…" />;
   if (rental.isError) {
@@ -101,6 +107,7 @@ export default function RentalRoute() {
           {r.state === 'reserved' || r.state === 'out' ? <RenterCautions items={r.items} /> : null}
           <RentalItems items={r.items} />
         </div>
+        {r.state === 'reserved' || r.agreement || r.handoverOverride ? <HandoverReadiness rental={r} canOverride={can(user.role, 'settings.manage')} /> : null}
         <DepositPanel rental={r} canManage={can(user.role, 'deposits.manage')} charges={charges} />
         <InvoicePanel rental={r} canCharge={canCharge} charges={charges} />
       </div>

@@ -9,7 +9,9 @@ import { FactList, Panel } from '../../../components/panel';
 import { TableHead } from '../../../components/table-head';
 import { isApiError } from '../../../lib/api-client';
 import { formatMoney, useDateFormat } from '../../../lib/format';
+import { usePaymentMode } from '../api/get-payment-mode';
 import { useTakeDeposit } from '../api/take-deposit';
+import { DepositRequest } from './deposit-request';
 import { testCards, type DepositAuthorizationView, type RentalView } from '../../../../shared/billing/views';
 import { paymentProblem } from './payment-problem';
 import { SettleDeposit } from './settle-deposit';
@@ -25,6 +27,8 @@ export function DepositPanel({ rental, canManage, charges }: { rental: RentalVie
   const stillOut = rental.state === 'reserved' || rental.state === 'out';
   const canTake = stillOut && (state === 'none' || state === 'declined' || state === 'lapsed');
   const authorized = state === 'authorized' && hold;
+  const testMode = usePaymentMode().data?.mode === 'test';
+  const request = rental.deposit.request;
   return (
     <Panel title="Deposit" className="lg:col-span-2">
       <div className="grid items-start gap-4 lg:grid-cols-2">
@@ -46,7 +50,8 @@ export function DepositPanel({ rental, canManage, charges }: { rental: RentalVie
                 : []),
             ]}
           />
-          {canManage && canTake ? <TakeDeposit rentalId={rental.id} amount={money(rental.depositMinor)} /> : null}
+          {canManage && canTake ? <DepositRequest rentalId={rental.id} request={request} sentTo={rental.customer.billingEmail} /> : null}
+          {canManage && canTake && testMode ? <TakeDeposit rentalId={rental.id} amount={money(rental.depositMinor)} /> : null}
           {authorized && !rental.returnedAt ? (
             <p className="text-sm text-ink-700">
               The authorization stays on the card until the kit is back. Nestkeeper renews it on the saved card before it would lapse.
@@ -81,7 +86,8 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
       }}
     >
       {({ isSubmitting }) => (
-        <Form noValidate className="flex flex-col gap-3 rounded-md border border-paper-line bg-paper p-3" aria-label="Take the deposit">
+        <Form noValidate className="flex flex-col gap-3 rounded-md border border-dashed border-warn/60 bg-paper p-3" aria-label="Take the deposit in test mode">
+          <p className="font-semibold text-warn">Test mode</p>
           {problem ? (
             <Notice tone="error" title={problem.title}>
               {problem.text}
@@ -91,11 +97,11 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
             name="paymentMethod"
             label="Test card"
             options={testCards.map((c) => ({ value: c.paymentMethod, label: c.label }))}
-            hint="Card numbers never reach Nestkeeper. This setup offers the payment provider's test cards; in production the provider's own hosted card form takes the renter's card."
+            hint="Only while the payment keys are test keys: the provider's published test cards, no renter needed. With live keys this shortcut is gone and the renter's link is the only way."
           />
           <div>
             <Button type="submit" variant="primary" busy={isSubmitting}>
-              Take deposit
+              Take deposit with a test card
             </Button>
             <span className="ml-3 text-sm text-ink-700">Authorizes {amount} on the card; nothing is charged yet.</span>
           </div>
@@ -107,7 +113,7 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
 
 /** A charge above the hold and a renewal are both merchant-initiated on the saved card; the kind tells them apart. */
 const howTaken = (h: DepositAuthorizationView) =>
-  h.kind === 'charge' ? 'Charged to the saved card' : h.initiatedBy === 'customer' ? 'At the counter' : 'Renewal on the saved card';
+  h.kind === 'charge' ? 'Charged to the saved card' : h.initiatedBy === 'customer' ? 'By the customer' : 'Renewal on the saved card';
 
 function AuthorizationHistory({ holds, currency, dateTime }: { holds: DepositAuthorizationView[]; currency: string; dateTime: (value: string) => string }) {
   return (

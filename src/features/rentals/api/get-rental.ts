@@ -9,8 +9,16 @@ export function getRental(id: string, signal?: AbortSignal): Promise<RentalView>
 
 export const rentalQueryOptions = (id: string) => queryOptions({ queryKey: rentalsKeys.rental(id), queryFn: ({ signal }) => getRental(id, signal) });
 
-export function useRental(id: string) {
-  return useQuery({ ...rentalQueryOptions(id), enabled: !!id });
+/** How often a rental is asked again while `pollWhile` says something outside the app will change it. */
+const POLL_MS = 3000;
+
+/** `pollWhile`: the renter is at the provider's page, say; the page follows the signed event without a reload. */
+export function useRental(id: string, pollWhile?: (rental: RentalView) => boolean) {
+  return useQuery({
+    ...rentalQueryOptions(id),
+    enabled: !!id,
+    refetchInterval: (query) => (pollWhile && query.state.data && pollWhile(query.state.data) ? POLL_MS : false),
+  });
 }
 
 /** The rental's documents (same-origin links; the session cookie goes with them). */

@@ -22,4 +22,5 @@ export const rentalsKeys = {
   rentalLists: () => [...rentalsKeys.all, 'list'] as const,
   rentalList: (view: RentalListView, customerId?: string) => [...rentalsKeys.rentalLists(), view, { customerId }] as const,
   rental: (id: string) => [...rentalsKeys.all, 'one', id] as const,
+  renter: (token: string) => [...rentalsKeys.all, 'renter', token] as const,
 };

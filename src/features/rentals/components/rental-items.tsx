@@ -29,7 +29,7 @@ export function RentalItems({ items }: { items: RentalItem[] }) {
 }
 
 /** DESIGN.md §6, where kit is handed to a renter: the cautions its items call for (none when nothing applies). */
-export function RenterCautions({ items }: { items: RentalItem[] }) {
+export function RenterCautions({ items }: { items: Pick<RentalItem, 'type'>[] }) {
   const types = new Set(items.map((i) => i.type));
   const cautions = [
     types.has('tracker') ? <LaserCaution key="laser" /> : null,

@@ -31,7 +31,8 @@ beforeAll(async () => {
   await t.api
     .patch('/api/settings')
     .set(bearer(owner))
-    .send({ depositPolicy: { percent: 10, minMinor: 40_000, maxMinor: 2_500_000 } });
+    // The rentals here start months ahead; the counter may hand them over any day before (the checkout window is tested elsewhere).
+    .send({ depositPolicy: { percent: 10, minMinor: 40_000, maxMinor: 2_500_000 }, checkoutOpensDaysBefore: 365 });
   customerId = (
     await t.api.post('/api/customers').set(bearer(billing)).send({ company: 'Tessaly Airframe Jigs', billingEmail: RENTER, billingContact: 'Oda Brennick' })
   ).body.id;

@@ -79,7 +79,7 @@ describe('signing in, in a real browser', () => {
     await page.getByRole('button', { name: 'Menu' }).click();
     await nav.getByRole('link', { name: 'My account' }).click();
     await page.getByRole('heading', { level: 1, name: 'My account' }).waitFor();
-    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('button', { name: 'Sign out', exact: true }).click();
     await page.waitForURL(/\/sign-in/);
     await context.close();
   });

@@ -2,6 +2,7 @@ import nodemailer from 'nodemailer';
 import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { pgSinkStore, startSmtpSink, type SinkMessage, type SmtpSink } from '../../server/fakes/smtp-sink';
+import { fakesLog } from '../../server/fakes/log';
 
 const transportTo = (port: number) => nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
 
@@ -93,7 +94,7 @@ describe('SMTP sink', () => {
   });
 
   it('answers 451 and keeps nothing when the store fails, so the sender retries', async () => {
-    const quiet = vi.spyOn(console, 'error').mockImplementation(() => undefined);
+    const quiet = vi.spyOn(fakesLog, 'error').mockImplementation(() => undefined);
     const failing = await startSmtpSink({ port: 0, store: async () => Promise.reject(new Error('database down')) });
     const error = await transportTo(failing.port)
       .sendMail({ from: 'no-reply@nestkeeper.test', to: 'c@fernbrook-metrology.test', subject: 's', text: 'x' })

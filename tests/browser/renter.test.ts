@@ -11,23 +11,8 @@ beforeAll(async () => {
 });
 afterAll(() => rig?.close());
 
-let clerkToken: string;
 async function clerkApi(path: string, body?: unknown) {
-  clerkToken ??= (
-    await (
-      await fetch(`${rig.baseUrl}/api/auth/login`, {
-        method: 'POST',
-        headers: { 'content-type': 'application/json' },
-        body: JSON.stringify({ email: 'billing@demo.test', password: 'nestkeeper-demo' }),
-      })
-    ).json()
-  ).token;
-  const res = await fetch(`${rig.baseUrl}/api${path}`, {
-    method: body ? 'POST' : 'GET',
-    headers: { 'content-type': 'application/json', authorization: `Bearer ${clerkToken}` },
-    body: body ? JSON.stringify(body) : undefined,
-  });
-  return res.json();
+  return (await (await rig.apiAs('billing@demo.test'))(path, body)).body;
 }
 
 let offset = 40;

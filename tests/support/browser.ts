@@ -56,6 +56,21 @@ export async function startBrowserRig(opts: { reachDatabaseVia?: (url: string) =
     /** What the deliver-outbox routine does on its schedule: queued mail goes to the sink (and the owner's Mailbox). */
     deliverMail: () => routines.run('deliver-outbox', 'manual'),
     payments,
+    /** The API as a demo person, beside the browser (arranging data a test does not walk through): GET, or POST with a body. */
+    async apiAs(email: string) {
+      const login = await fetch(`http://127.0.0.1:${port}/api/auth/login`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ email, password: 'nestkeeper-demo' }),
+      });
+      const { token } = (await login.json()) as { token: string };
+      return (path: string, body?: unknown) =>
+        fetch(`http://127.0.0.1:${port}/api${path}`, {
+          method: body ? 'POST' : 'GET',
+          headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
+          body: body ? JSON.stringify(body) : undefined,
+        }).then(async (r) => ({ status: r.status, body: await r.json() }));
+    },
     async newContext(options: BrowserContextOptions = {}) {
       const context = await browser.newContext(options);
       context.setDefaultTimeout(WAIT_MS);

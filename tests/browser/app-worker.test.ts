@@ -9,10 +9,12 @@ import { eventually, waitUntil } from '../support/eventually';
 
 // The client is served from a copy, so a test can publish a new version of the service worker as a release would.
 let clientCopy: string;
+let builtWorker: string;
 let rig: BrowserRig;
 beforeAll(async () => {
   clientCopy = fs.mkdtempSync(path.join(os.tmpdir(), 'nk-client-'));
   fs.cpSync('dist/client', clientCopy, { recursive: true });
+  builtWorker = fs.readFileSync(path.join(clientCopy, 'sw.js'), 'utf8');
   rig = await startBrowserRig({ clientDir: clientCopy });
 });
 afterAll(async () => {
@@ -41,6 +43,13 @@ async function technicianOnPhone() {
 
 const WHICH_VERSION = 'nestkeeper-test:which-version';
 
+/** A release: the built worker with one listener more, which says it is the version `name`. */
+const publishWorker = (name: string) =>
+  fs.writeFileSync(
+    path.join(clientCopy, 'sw.js'),
+    `${builtWorker}\nself.addEventListener('message', (e) => { if (e.data === ${JSON.stringify(WHICH_VERSION)}) e.source.postMessage(${JSON.stringify(name)}); });\n`,
+  );
+
 /** What the worker controlling the page answers to WHICH_VERSION: only the new version (below) answers at all. */
 const controllerAnswer = (page: Page) =>
   page.evaluate(
@@ -61,12 +70,7 @@ describe('the service worker on the phone', () => {
     await page.getByRole('heading', { level: 1, name: 'My kit' }).waitFor();
     expect(await page.evaluate(() => navigator.serviceWorker.controller?.state)).toBe('activated');
 
-    // A release: the same worker with one listener more, which says it is the new version.
-    const worker = path.join(clientCopy, 'sw.js');
-    fs.appendFileSync(
-      worker,
-      `\nself.addEventListener('message', (e) => { if (e.data === ${JSON.stringify(WHICH_VERSION)}) e.source.postMessage('next'); });\n`,
-    );
+    publishWorker('next');
 
     // Opening the form is a page load: the browser looks for a new worker while the technician types.
     await page.goto(`${rig.baseUrl}/checks/new?assetId=${tip.id}`);
@@ -88,6 +92,26 @@ describe('the service worker on the phone', () => {
     expect(await controllerAnswer(page)).toBe('next');
     expect(await page.evaluate(async () => Boolean((await navigator.serviceWorker.getRegistration())?.waiting))).toBe(false);
     expect(await reload.count()).toBe(0);
+    await context.close();
+  }, 120_000);
+
+  it('a new version published while the app stays open is announced when the person comes back to it, without a page load', async () => {
+    const { context, page } = await technicianOnPhone();
+    await page.goto(`${rig.baseUrl}/`);
+    await page.getByRole('heading', { level: 1, name: 'My kit' }).waitFor();
+    await page.evaluate(() => Object.assign(window, { openAllDay: true }));
+    // The look the page load started is over (update jobs of one registration queue), so only the one below can find the release.
+    await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+    publishWorker('later');
+
+    // What the browser tells the page when the phone shows the app again.
+    await page.evaluate(() => document.dispatchEvent(new Event('visibilitychange')));
+    const reload = page.getByRole('button', { name: 'Reload for the new version' });
+    await reload.waitFor();
+    expect(await page.evaluate(() => 'openAllDay' in window)).toBe(true);
+    await Promise.all([page.waitForEvent('load'), reload.click()]);
+    await page.getByRole('heading', { level: 1, name: 'My kit' }).waitFor();
+    expect(await controllerAnswer(page)).toBe('later');
     await context.close();
   }, 120_000);
 

@@ -129,6 +129,12 @@ describe('the service worker on the phone', () => {
     await page.getByLabel('Paste readings').fill(['1000.004\t200\t50', '999.996\t200\t50', '1000\t200.004\t50', '1000\t200\t50.004'].join('\n'));
     await page.getByRole('button', { name: 'Save check' }).click();
     await page.getByRole('heading', { name: 'Saved on this phone — waiting for signal' }).waitFor();
+    // The outbox asked the browser for a sync, which the browser fires when signal returns, the app open or not.
+    const tags = await page.evaluate(async () => {
+      const registration = (await navigator.serviceWorker.ready) as ServiceWorkerRegistration & { sync: { getTags(): Promise<string[]> } };
+      return registration.sync.getTags();
+    });
+    expect(tags).toEqual(['nestkeeper-outbox']);
 
     // The app is closed; a blank tab only carries the DevTools session that plays the browser's part.
     const blank = await context.newPage();

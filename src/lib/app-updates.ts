@@ -19,6 +19,11 @@ export function registerAppWorker(): void {
     listeners.forEach((l) => l());
   });
   void wb.register();
+  // A phone keeps the app open for days without a page load, when the browser would look for a new version itself:
+  // look each time the person comes back to it (without signal the look fails quietly).
+  document.addEventListener('visibilitychange', () => {
+    if (document.visibilityState === 'visible') wb.update().catch(() => undefined);
+  });
 }
 
 /** Null until a new version is installed and waiting; then the call that switches to it and reloads. */

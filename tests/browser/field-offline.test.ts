@@ -1,4 +1,8 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import sharp from 'sharp';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { phone, signedIn } from '../support/browser-session';
@@ -246,4 +250,96 @@ describe('field work without signal', () => {
     await eventually(() => page.getByText('Refused', { exact: true }).count()).toBe(0);
     await context.close();
   }, 120_000);
+
+  describe('the photos a phone keeps waiting (at most 30, or 150 MB)', () => {
+    /** An item of the kit the technician has out that is neither a tip nor an SMR (the tests above use those). */
+    async function itemCarried(): Promise<Row> {
+      const [item]: Row[] = await rig.db.query(
+        `SELECT a.id, a.asset_tag FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id JOIN assets a ON a.id = bi.asset_id JOIN users u ON u.id = b.taken_by_user_id
+          WHERE u.email = 'tech@demo.test' AND b.state = 'out' AND a.type NOT IN ('tip', 'smr') AND a.status = 'out' ORDER BY a.asset_tag DESC LIMIT 1`,
+      );
+      return item;
+    }
+
+    /** Fills a damage report for the item without signal and sends it; the photos are files on disk or small buffers. */
+    async function reportDamage(page: Page, item: Row, photos: string[] | { name: string; mimeType: string; buffer: Buffer }[]) {
+      await page.goto(`${rig.baseUrl}/incidents/new?assetId=${item.id}`);
+      await page.getByRole('heading', { level: 1, name: 'Report damage' }).waitFor();
+      await page.getByLabel('Dropped').check();
+      await page.getByLabel('What happened').fill('Knocked off the stand by a forklift; the housing is cracked.');
+      await page.getByLabel('Photos').setInputFiles(photos);
+      await page.getByRole('button', { name: 'Send report' }).click();
+    }
+
+    const saved = (page: Page) => page.getByRole('heading', { name: 'Saved on this phone — waiting for signal' }).waitFor();
+
+    /** The refused report keeps what was written; leaving its photos out, it is saved. */
+    async function leavePhotosOut(page: Page, count: number) {
+      expect(await page.getByLabel('What happened').inputValue()).toBe('Knocked off the stand by a forklift; the housing is cracked.');
+      for (let i = count; i >= 1; i--) await page.getByRole('button', { name: new RegExp(`^Remove photo ${i} `) }).click();
+      await page.getByRole('button', { name: 'Send report' }).click();
+      await saved(page);
+    }
+
+    it('the 31st photo is refused with what to do, the report keeps its words, and without photos it is saved', async () => {
+      const item = await itemCarried();
+      const { context, page } = await signedIn(rig, 'tech@demo.test', 'My kit', phone);
+      await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active));
+      await page.getByText(/Kit on this phone as of/).waitFor();
+      await context.setOffline(true);
+      const jpeg = await sharp({ create: { width: 32, height: 24, channels: 3, background: '#8a6d3b' } })
+        .jpeg()
+        .toBuffer();
+      // Six photos is the most one report takes: five reports fill the phone's 30.
+      const six = Array.from({ length: 6 }, (_, i) => ({ name: `crack-${i + 1}.jpg`, mimeType: 'image/jpeg', buffer: jpeg }));
+      for (let report = 1; report <= 5; report++) {
+        await reportDamage(page, item, six);
+        await saved(page);
+      }
+      await page.getByRole('link', { name: /Records on this phone: 5 to send/ }).waitFor();
+
+      await reportDamage(page, item, six.slice(0, 1));
+      await page
+        .getByText(
+          'This phone already keeps 30 photos (under 1 MB) waiting to be sent, and holds at most 30 photos or 150 MB. Send what waits first (find signal), or leave some photos out.',
+        )
+        .waitFor();
+      await page.getByRole('link', { name: /Records on this phone: 5 to send/ }).waitFor();
+      await leavePhotosOut(page, 1);
+      await page.getByRole('link', { name: /Records on this phone: 6 to send/ }).waitFor();
+      await context.close();
+    }, 150_000);
+
+    it('photos past 150 MB are refused even under 30 photos', async () => {
+      const item = await itemCarried();
+      // Each photo exactly at the 10 MB a photo may have: fifteen reach the phone's 150 MB, the sixteenth goes over.
+      const folder = fs.mkdtempSync(path.join(os.tmpdir(), 'nk-photos-'));
+      const large = Array.from({ length: 6 }, (_, i) => path.join(folder, `hull-${i + 1}.jpg`));
+      large.forEach((file, i) => fs.writeFileSync(file, Buffer.alloc(10 * 1024 * 1024, i + 1)));
+      try {
+        const { context, page } = await signedIn(rig, 'tech@demo.test', 'My kit', phone);
+        await page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active));
+        await page.getByText(/Kit on this phone as of/).waitFor();
+        await context.setOffline(true);
+        for (const photos of [large, large, large.slice(0, 3)]) {
+          await reportDamage(page, item, photos);
+          await saved(page);
+        }
+        const small = await sharp({ create: { width: 32, height: 24, channels: 3, background: '#44505c' } })
+          .jpeg()
+          .toBuffer();
+        await reportDamage(page, item, [{ name: 'label.jpg', mimeType: 'image/jpeg', buffer: small }]);
+        await page
+          .getByText(
+            'This phone already keeps 15 photos (150 MB) waiting to be sent, and holds at most 30 photos or 150 MB. Send what waits first (find signal), or leave some photos out.',
+          )
+          .waitFor();
+        await leavePhotosOut(page, 1);
+        await page.getByRole('link', { name: /Records on this phone: 4 to send/ }).waitFor();
+        await context.close();
+      } finally {
+        fs.rmSync(folder, { recursive: true, force: true });
+      }
+    }, 150_000);
+  });
 });

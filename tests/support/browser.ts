@@ -18,8 +18,9 @@ import { webhookSecret } from './test-app';
  * database, the payment-provider fake delivering signed webhooks to it, the SMTP
  * sink whose mail the owner's Mailbox shows (`deliverMail` sends the outbox now), and
  * Debian's Chromium driven by playwright-core. Open pages through `newContext`:
- * its locators and navigations wait with the suite's patience. `reachDatabaseVia` as in createTestApp. */
-export async function startBrowserRig(opts: { reachDatabaseVia?: (url: string) => string } = {}) {
+ * its locators and navigations wait with the suite's patience. `reachDatabaseVia` as in createTestApp; `clientDir` serves the
+ * client from another folder (a copy whose files a test changes, as a new release would). */
+export async function startBrowserRig(opts: { reachDatabaseVia?: (url: string) => string; clientDir?: string } = {}) {
   const database = await createTestDatabase({ seed: true });
   const appDb = opts.reachDatabaseVia ? await openDataSource(opts.reachDatabaseVia(database.url), 4).initialize() : database.db;
   const secret = webhookSecret();
@@ -39,7 +40,7 @@ export async function startBrowserRig(opts: { reachDatabaseVia?: (url: string) =
     START_LOCAL_FAKES: 'false',
     RUN_SCHEDULER: 'false',
     SMTP_PORT: String(sink.port),
-    CLIENT_DIR: path.resolve('dist/client'),
+    CLIENT_DIR: path.resolve(opts.clientDir ?? 'dist/client'),
     PAYMENT_API_PORT: String(payments.port),
     PAYMENT_WEBHOOK_SECRET: secret,
     LOG_LEVEL: 'silent',

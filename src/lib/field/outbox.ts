@@ -7,7 +7,15 @@
  * Used by the pages and by the service worker: no window-only API here.
  */
 import { ApiError, apiErrorFromBody } from '../api-client';
-import { deleteOutboxRecord, eraseFieldData as eraseStore, outboxRecord, outboxRecords, putOutboxRecord, type OutboxRecord } from './field-store';
+import {
+  deleteOutboxRecord,
+  eraseFieldData as eraseStore,
+  outboxRecord,
+  outboxRecords,
+  putOutboxRecord,
+  type OutboxRecord,
+  type QueuedPhoto,
+} from './field-store';
 
 export const OUTBOX_SYNC_TAG = 'nestkeeper-outbox';
 /** How many photos, and how many bytes of them, may wait on the phone at once (common practice for a phone's spare storage). */
@@ -102,19 +110,20 @@ async function forgetOldSent() {
 }
 
 const photosOf = (r: OutboxRecord) => (r.request.kind === 'incident' && r.state !== 'sent' ? r.request.photos : []);
+const bytesOf = (photos: QueuedPhoto[]) => photos.reduce((sum, p) => sum + p.size, 0);
+/** Whole megabytes; a few small photos read "under 1 MB", never "0 MB". */
+const megabytes = (bytes: number) => (bytes < 1024 * 1024 ? 'under 1 MB' : `${Math.round(bytes / 1024 / 1024)} MB`);
 
 /** Refuses (413) a record whose photos would take the phone past its limits, with what to do about it. */
 async function makeRoomFor(record: OutboxRecord) {
   const others = (await outboxRecords()).filter((r) => r.id !== record.id).flatMap(photosOf);
   const adding = photosOf(record);
   const count = others.length + adding.length;
-  const bytes = [...others, ...adding].reduce((sum, p) => sum + p.size, 0);
-  if (adding.length && (count > MAX_QUEUED_PHOTOS || bytes > MAX_QUEUED_PHOTO_BYTES)) {
-    const mb = (n: number) => Math.round(n / 1024 / 1024);
+  if (adding.length && (count > MAX_QUEUED_PHOTOS || bytesOf(others) + bytesOf(adding) > MAX_QUEUED_PHOTO_BYTES)) {
     throw new ApiError({
       status: 413,
       code: 'phone_outbox_full',
-      message: `This phone already keeps ${others.length} photos (${mb(bytes - adding.reduce((s, p) => s + p.size, 0))} MB) waiting to be sent, and holds at most ${MAX_QUEUED_PHOTOS} photos or ${mb(MAX_QUEUED_PHOTO_BYTES)} MB. Send what waits first (find signal), or leave some photos out.`,
+      message: `This phone already keeps ${others.length} photos (${megabytes(bytesOf(others))}) waiting to be sent, and holds at most ${MAX_QUEUED_PHOTOS} photos or ${megabytes(MAX_QUEUED_PHOTO_BYTES)}. Send what waits first (find signal), or leave some photos out.`,
     });
   }
 }

@@ -19,4 +19,10 @@ describe('database schema', () => {
     await expect(t.db.query(`UPDATE audit_events SET action = 'changed'`)).rejects.toThrow(/append-only/);
     await expect(t.db.query(`DELETE FROM audit_events`)).rejects.toThrow(/append-only/);
   });
+
+  it("refuses to change or delete a renter's acceptance of the agreement", async () => {
+    // Statement triggers: refused even before any row is touched.
+    await expect(t.db.query(`UPDATE agreement_acceptances SET full_name = 'someone else'`)).rejects.toThrow(/append-only/);
+    await expect(t.db.query(`DELETE FROM agreement_acceptances`)).rejects.toThrow(/append-only/);
+  });
 });

@@ -55,14 +55,25 @@ describe("the shop manager's week, told truly", () => {
     const walk = { counterpart: 'Odile Brackwater', checklist: [{ assetId: earlyItem.id, present: true, condition: 'good' }] };
     expect((await api(`/bookings/${early.id}/checkout`, walk)).status).toBe(200);
     expect((await api(`/bookings/${early.id}/return`, walk)).status).toBe(200);
-    // A lab trip for the three due-soon trackers.
-    const trip = await api('/lab-trips', {
-      provider: 'Fenmoor Calibration Lab',
-      assetIds: labItems.map((i) => i.id),
-      sentOn: addDays(today, 2),
-      expectedBackOn: addDays(today, 20),
-    });
-    expect(trip.status, JSON.stringify(trip.body)).toBe(201);
+    // The owner ticks the three due-soon trackers in the calibration review and plans one trip: one window free for all three.
+    const owner = await signedIn(rig, 'owner@demo.test', "Owner's overview");
+    await owner.page.goto(`${rig.baseUrl}/calibration`);
+    for (const item of labItems) await owner.page.getByLabel(`Choose ${item.assetTag} for one lab trip`).check();
+    await owner.page.getByRole('link', { name: 'Plan one trip' }).click();
+    await owner.page.getByRole('heading', { level: 1, name: 'Plan one lab trip: 3 items' }).waitFor();
+    await owner.page.getByLabel('Lab', { exact: true }).fill('Fenmoor Calibration Lab');
+    await owner.page.getByRole('button', { name: 'Plan this trip for all 3' }).first().click();
+    await owner.page.getByRole('heading', { name: 'Trip planned' }).waitFor();
+    await owner.context.close();
+    const trips: { booking_id: string; items: string[] }[] = await rig.db.query(
+      `SELECT t.booking_id, array_agg(a.asset_tag ORDER BY a.asset_tag) AS items
+         FROM lab_trips t JOIN lab_trip_items i ON i.lab_trip_id = t.id JOIN assets a ON a.id = i.asset_id
+        WHERE a.id = ANY($1) GROUP BY t.id`,
+      [labItems.map((i) => i.id)],
+    );
+    expect(trips).toEqual([{ booking_id: expect.any(String), items: ['TRK-W05', 'TRK-W06', 'TRK-W07'] }]);
+    const tripBooking = trips[0].booking_id;
+    expect((await rig.db.query(`SELECT count(*)::int AS n FROM booking_items WHERE booking_id = $1`, [tripBooking]))[0].n).toBe(3);
 
     const { context, page, nav } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
 
@@ -101,7 +112,7 @@ describe("the shop manager's week, told truly", () => {
     await notCollected.locator(`a[href="/bookings/${lapsed.id}"]`).waitFor();
     expect(await page.getByRole('region', { name: 'Going out today' }).locator(`a[href="/bookings/${lapsed.id}"]`).count()).toBe(0);
     // The three-item lab trip renews their calibration: it is not a blocked booking.
-    expect(await page.getByRole('region', { name: 'Blocked bookings' }).locator(`a[href="/bookings/${trip.body.bookingId}"]`).count()).toBe(0);
+    expect(await page.getByRole('region', { name: 'Blocked bookings' }).locator(`a[href="/bookings/${tripBooking}"]`).count()).toBe(0);
     await notCollected.locator(`a[href="/bookings/${lapsed.id}"]`).click();
     await page.getByRole('link', { name: 'Check out late' }).click();
     await page.getByLabel(`Present: ${lapsedItem.assetTag}`).check();

@@ -1,3 +1,4 @@
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { startBrowserRig, type BrowserRig } from '../support/browser';
@@ -149,7 +150,8 @@ describe("the shop manager's week, told truly", () => {
     const free = (await api(`/availability?type=smr&startsOn=${today}&endsOn=${addDays(today, 1)}&limit=2`)).body.items as { id: string; assetTag: string }[];
     const smrs = free.map((x) => ({ id: x.id, asset_tag: x.assetTag }));
     expect(smrs).toHaveLength(2);
-    const out = (await api('/bookings', { assetIds: smrs.map((s) => s.id), startsOn: today, endsOn: addDays(today, 1) })).body;
+    const siteJob = (await api('/jobs', { reference: 'J-WEEK-2', customerName: 'Marrowgate Aero', startsOn: today, endsOn: addDays(today, 1) })).body;
+    const out = (await api('/bookings', { assetIds: smrs.map((s) => s.id), jobId: siteJob.id, startsOn: today, endsOn: addDays(today, 1) })).body;
     const walk = { counterpart: 'Odile Brackwater', checklist: smrs.map((s) => ({ assetId: s.id, present: true, condition: 'good' })) };
     expect((await api(`/bookings/${out.id}/checkout`, walk)).status, JSON.stringify(out)).toBe(200);
 
@@ -173,6 +175,25 @@ describe("the shop manager's week, told truly", () => {
     await page.getByLabel(`Present: ${smrs[0].asset_tag}`).check();
     await eventually(() => page.locator('main').innerText()).toMatch(new RegExp(`Not ticked present yet: ${smrs[1].asset_tag}\\.`));
     expect(await page.locator('main').innerText()).not.toMatch(new RegExp(`Not ticked present yet: [^.]*${smrs[0].asset_tag}`));
+
+    // One SMR came back dented: its photos go with the incident, which names the booking and the job's customer.
+    await page.getByLabel(`Present: ${smrs[1].asset_tag}`).check();
+    await page.getByLabel(`Condition: ${smrs[1].asset_tag}`).selectOption('damaged');
+    const photo = await sharp({ create: { width: 320, height: 240, channels: 3, background: '#8a7a5c' } })
+      .jpeg()
+      .toBuffer();
+    await page.getByLabel(`Photos of ${smrs[1].asset_tag}`).setInputFiles({ name: 'dent.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await page.getByRole('group', { name: 'Suggested people' }).getByRole('button', { name: techName }).click();
+    await page.getByRole('button', { name: 'Take back' }).click();
+    await page.getByRole('link', { name: 'open its incident' }).click();
+    await page.getByText('Marrowgate Aero', { exact: true }).waitFor();
+    await eventually(() => page.locator('main').innerText()).toMatch(/dent\.jpg/);
+    const [incident] = await rig.db.query(
+      `SELECT i.booking_id, i.customer_name, count(p.id)::int AS photos FROM incidents i LEFT JOIN incident_photos p ON p.incident_id = i.id
+        WHERE i.asset_id = $1 GROUP BY i.id`,
+      [smrs[1].id],
+    );
+    expect(incident).toEqual({ booking_id: out.id, customer_name: 'Marrowgate Aero', photos: 1 });
     await context.close();
   });
 });

@@ -73,12 +73,14 @@ export function availableAssets(tx: Scoped, opts: { type?: string; startsOn: str
 
 export type BusyDays = { bookingId: string; startsOn: string; endsOn: string; purpose: string; jobReference: string | null };
 
-/** The item's active bookings that end on or after `from`, earliest first (the lab window finder's gaps lie between them). */
-export function busyDays(tx: Scoped, assetId: string, from: string) {
+/** The items' active bookings that end on or after `from`, earliest first, one row per booking (the lab window finder's gaps lie between them). */
+export function busyDays(tx: Scoped, assetIds: string[], from: string) {
   return tx.sql<BusyDays>(
-    `SELECT b.id AS "bookingId", to_char(bi.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(bi.ends_on, 'YYYY-MM-DD') AS "endsOn", b.purpose, j.reference AS "jobReference"
+    `SELECT b.id AS "bookingId", to_char(min(bi.starts_on), 'YYYY-MM-DD') AS "startsOn", to_char(max(bi.ends_on), 'YYYY-MM-DD') AS "endsOn", b.purpose,
+            j.reference AS "jobReference"
        FROM booking_items bi JOIN bookings b ON b.id = bi.booking_id LEFT JOIN jobs j ON j.id = b.job_id
-      WHERE bi.organization_id = $1 AND bi.asset_id = $2 AND bi.active AND bi.ends_on >= $3::date ORDER BY bi.starts_on`,
-    [assetId, from],
+      WHERE bi.organization_id = $1 AND bi.asset_id = ANY($2) AND bi.active AND bi.ends_on >= $3::date
+      GROUP BY b.id, j.reference ORDER BY min(bi.starts_on), b.id`,
+    [assetIds, from],
   );
 }

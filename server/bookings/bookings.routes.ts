@@ -8,7 +8,10 @@ import {
   bookingPayload,
   checklistPayload,
   jobPayload,
+  MAX_RETURN_PHOTOS,
+  returnPayload,
 } from '../../shared/schemas/bookings';
+import { MAX_PHOTO_BYTES } from '../../shared/schemas/incidents';
 import { text } from '../../shared/schemas/common';
 import { endpoint, paging } from '../http/endpoint';
 import { ruleBroken } from '../http/errors';
@@ -100,11 +103,12 @@ export function bookingsRoutes({ bookings, handover, desk, jobs, calendar }: Ser
     {
       method: 'post',
       path: '/bookings/:id/return',
-      summary: 'Take the kit back; missing or damaged items open incidents',
+      summary: 'Take the kit back; missing or damaged items open incidents (JSON, or multipart with photos[] and photoAssetIds naming each photo’s item)',
       access: 'bookings.hand_over',
-      body: checklistPayload,
+      body: returnPayload,
+      upload: { files: 'photos', maxFiles: MAX_RETURN_PHOTOS, maxBytes: MAX_PHOTO_BYTES },
     },
-    ({ actor, params, body }) => handover.return(actor, params.id, body),
+    ({ actor, params, body, files }) => handover.return(actor, params.id, body, files),
   );
   endpoint(
     router,

@@ -1,13 +1,14 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import type { checklistPayload } from '../../shared/schemas/bookings';
+import type { checklistPayload, returnPayload } from '../../shared/schemas/bookings';
+import { MAX_INCIDENT_PHOTOS } from '../../shared/schemas/incidents';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { handoverSheetPdf } from '../documents/handover-sheet-pdf';
 import { assetsByIds, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
 import { AppError, notFound, ruleBroken } from '../http/errors';
 import { isUuid } from '../http/ids';
-import { openIncident } from '../incidents/incidents.service';
+import { openIncident, preparePhoto, type UploadedPhoto } from '../incidents/incidents.service';
 import { loadOrgContext } from '../organizations';
 import { findPerson } from '../users';
 import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
@@ -16,6 +17,7 @@ import { Job } from './job.entity';
 import { bookingIn, checkOut, loadBooking, takeBack } from './lifecycle';
 
 type Checklist = z.infer<typeof checklistPayload>;
+type ReturnInput = z.infer<typeof returnPayload>;
 
 /** Rules other components add to the counter (rentals: a deposit hold before handing over, papers to the renter after). */
 export type HandoverGates = {
@@ -69,8 +71,29 @@ export class HandoverService {
     });
   }
 
-  /** A missing or damaged item opens an incident (and so a hold) linked to the booking; the rest go back to ready. */
-  return(actor: Actor, id: string, input: Checklist): Promise<ReturnView> {
+  /**
+   * A missing or damaged item opens an incident (and so a hold) linked to the booking and its customer, with the photos
+   * taken of it; the rest go back to ready.
+   */
+  async return(actor: Actor, id: string, input: ReturnInput, files: UploadedPhoto[] = []): Promise<ReturnView> {
+    const photoOf = input.photoAssetIds ?? [];
+    if (photoOf.length !== files.length)
+      throw new AppError(400, 'invalid_input', 'Name the item each photo shows.', {
+        fields: { photoAssetIds: `lists ${photoOf.length} item(s) for ${files.length} photo(s)` },
+      });
+    const reported = new Set(input.checklist.filter((l) => !l.present || l.condition === 'damaged').map((l) => l.assetId));
+    const stray = photoOf.filter((assetId) => !reported.has(assetId));
+    if (stray.length)
+      throw new AppError(400, 'invalid_input', 'Photos go with items marked damaged or missing.', {
+        fields: { photoAssetIds: 'names an item not marked damaged or missing' },
+      });
+    const tooMany = [...reported].find((assetId) => photoOf.filter((p) => p === assetId).length > MAX_INCIDENT_PHOTOS);
+    if (tooMany)
+      throw new AppError(413, 'too_large', `Attach at most ${MAX_INCIDENT_PHOTOS} photos to one item.`, {
+        fields: { photoAssetIds: 'too many photos of one item' },
+      });
+    // Read and thumbnail the photos before the transaction, as a damage report does.
+    const photos = await Promise.all(files.map(preparePhoto));
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const booking = await bookingIn(tx, id, ['out'], 'Only a booking that is out can come back');
@@ -86,21 +109,29 @@ export class HandoverService {
           : booking.rental
             ? `Rental ${booking.rental.number}, ${booking.rental.customerCompany}`
             : ctx.name);
+      const customerName = booking.job?.customerName ?? booking.rental?.customerCompany ?? null;
       const incidents: { assetId: string; incidentId: string }[] = [];
       for (const line of input.checklist) {
         const asset = assets.find((a) => a.id === line.assetId)!;
         if (!line.present || line.condition === 'damaged') {
-          const { incident } = await openIncident(tx, actor, asset, {
-            kind: line.present ? 'impact' : 'missing',
-            description:
-              line.note ||
-              (line.present
-                ? `Came back damaged from booking ${booking.startsOn}–${booking.endsOn}.`
-                : `Not returned with booking ${booking.startsOn}–${booking.endsOn}.`),
-            occurredAt: now.toISOString(),
-            location: place,
-            bookingId: id,
-          });
+          const { incident } = await openIncident(
+            tx,
+            actor,
+            asset,
+            {
+              kind: line.present ? 'impact' : 'missing',
+              description:
+                line.note ||
+                (line.present
+                  ? `Came back damaged from booking ${booking.startsOn}–${booking.endsOn}.`
+                  : `Not returned with booking ${booking.startsOn}–${booking.endsOn}.`),
+              occurredAt: now.toISOString(),
+              location: place,
+              bookingId: id,
+              customerName,
+            },
+            photos.filter((_, i) => photoOf[i] === asset.id),
+          );
           incidents.push({ assetId: asset.id, incidentId: incident.id });
         }
       }

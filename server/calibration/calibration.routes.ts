@@ -1,6 +1,13 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { calibrationEventFields, impactAssessmentPayload, intervalDecisionPayload, labTripPayload, noticePayload } from '../../shared/schemas/calibration';
+import {
+  calibrationEventFields,
+  impactAssessmentPayload,
+  intervalDecisionPayload,
+  labTripPayload,
+  labWindowsQuery,
+  noticePayload,
+} from '../../shared/schemas/calibration';
 import { dueItemsCsv, dueItemsPdf } from '../documents/calibration-review';
 import { endpoint } from '../http/endpoint';
 import { sendDocument } from '../http/send-file';
@@ -103,7 +110,19 @@ export function calibrationRoutes({ calibration, impact, lab, review }: Services
     router,
     at,
     { method: 'get', path: '/assets/:id/lab-windows', summary: 'When the item can go to the lab without breaking a booking', access: 'fleet.read' },
-    ({ actor, params }) => lab.windows(actor, params.id),
+    ({ actor, params }) => lab.windows(actor, [params.id]),
+  );
+  endpoint(
+    router,
+    at,
+    {
+      method: 'get',
+      path: '/lab-windows',
+      summary: 'When several items can go to the lab on one trip without breaking a booking (?assetIds=a,b,c)',
+      access: 'fleet.read',
+      query: labWindowsQuery,
+    },
+    ({ actor, query }) => lab.windows(actor, query.assetIds),
   );
   endpoint(
     router,

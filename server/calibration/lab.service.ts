@@ -9,7 +9,7 @@ import { recordAudit } from '../audit/audit.service';
 import { book, busyDays, checkOut } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
-import { getAsset, getAssets, moveAssets } from '../fleet';
+import { getAssets, moveAssets } from '../fleet';
 import { conflict, ruleBroken } from '../http/errors';
 import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
@@ -37,21 +37,29 @@ export class LabService {
   constructor(private readonly db: DataSource) {}
 
   /**
-   * Gaps between the item's active bookings long enough for its provider's
-   * turnaround, earliest first, and the bookings that sending it today would break.
+   * Gaps between the items' active bookings long enough for the longest turnaround of their labs, earliest first, and the
+   * bookings that sending them today would break. Several items are one trip: a window must be free for every one of them.
    */
-  windows(actor: Actor, assetId: string): Promise<LabWindowsView> {
+  windows(actor: Actor, assetIds: string[]): Promise<LabWindowsView> {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      const asset = await getAsset(tx, assetId);
-      const days = turnaround(ctx, asset.calibrationProvider);
-      const busy = await busyDays(tx, assetId, ctx.today);
+      const assets = await getAssets(tx, [...new Set(assetIds)]);
+      const providers = [...new Set(assets.map((a) => a.calibrationProvider).filter((p) => p !== null))];
+      const days = Math.max(...assets.map((a) => turnaround(ctx, a.calibrationProvider)));
+      const dues = assets.map((a) => a.dueOn).filter((d) => d !== null);
+      // The trip must beat the earliest due date among the items.
+      const dueOn = dues.length ? dues.reduce((a, b) => (a < b ? a : b)) : null;
+      const busy = await busyDays(
+        tx,
+        assets.map((a) => a.id),
+        ctx.today,
+      );
       const gaps: LabWindowsView['gaps'] = [];
       let cursor = ctx.today;
       for (const b of [...busy, null]) {
         const gapEnd = b ? addDays(b.startsOn, -1) : null;
         const free = gapEnd ? freeDays(cursor, gapEnd) : null;
-        const beforeDue = !asset.dueOn || cursor <= asset.dueOn;
+        const beforeDue = !dueOn || cursor <= dueOn;
         if (free === null || free >= days) gaps.push({ startsOn: cursor, endsOn: gapEnd, freeDays: free, returnBy: addDays(cursor, days - 1), beforeDue });
         if (b && b.endsOn >= cursor) cursor = addDays(b.endsOn, 1);
         if (gaps.length >= 5) break;
@@ -60,9 +68,24 @@ export class LabService {
       gaps.sort((a, b) => Number(b.beforeDue) - Number(a.beforeDue) || (a.startsOn < b.startsOn ? -1 : 1));
       const sendNowUntil = addDays(ctx.today, days - 1);
       const threatenedIfSentNow = busy.filter((b) => b.startsOn <= sendNowUntil);
-      const noneBeforeDue = !!asset.dueOn && !gaps.some((g) => g.beforeDue);
-      const plannedTrip = (await openTrips(tx, [assetId]))[0] ?? null;
-      return { assetId, provider: asset.calibrationProvider, turnaroundDays: days, dueOn: asset.dueOn, gaps, noneBeforeDue, plannedTrip, threatenedIfSentNow };
+      const noneBeforeDue = !!dueOn && !gaps.some((g) => g.beforeDue);
+      const plannedTrips = await openTrips(
+        tx,
+        assets.map((a) => a.id),
+      );
+      return {
+        assetId: assets[0].id,
+        assets: assets.map((a) => ({ id: a.id, assetTag: a.assetTag })),
+        // One lab named for all of them, else none: the person names it.
+        provider: providers.length === 1 ? providers[0] : null,
+        turnaroundDays: days,
+        dueOn,
+        gaps,
+        noneBeforeDue,
+        plannedTrip: plannedTrips[0] ?? null,
+        plannedTrips,
+        threatenedIfSentNow,
+      };
     });
   }
 

@@ -26,6 +26,10 @@ export class Incident extends AssetBound {
   @Column({ name: 'booking_id', type: 'uuid', nullable: true })
   bookingId: string | null;
 
+  /** The customer of the job or rental the item came back from (set at return). */
+  @Column({ name: 'customer_name', type: 'text', nullable: true })
+  customerName: string | null;
+
   @Column({ type: 'text', default: 'reported' })
   state: IncidentState;
 

@@ -18,7 +18,9 @@ import { AppError, notFound, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
 import { enqueueMail, staffAddresses } from '../notifications';
 import { Incident, IncidentPhoto } from './incident.entity';
-import { preparePhoto, type UploadedPhoto } from './photos';
+import { preparePhoto, type PreparedPhoto, type UploadedPhoto } from './photos';
+
+export { preparePhoto, type PreparedPhoto, type UploadedPhoto } from './photos';
 
 const nextStates: Record<IncidentState, IncidentState[]> = { reported: ['reviewing', 'resolved'], reviewing: ['resolved'], resolved: [] };
 /** Kinds after which a lithium battery must be treated as damaged. */
@@ -35,6 +37,7 @@ const view = (i: Incident, photos: PhotoRow[], asset?: AssetRecord): IncidentVie
   occurredAt: i.occurredAt.toISOString(),
   location: i.location,
   bookingId: i.bookingId,
+  customerName: i.customerName,
   state: i.state,
   resolution: i.resolution,
   chargeAmountMinor: i.chargeAmountMinor,
@@ -51,20 +54,22 @@ const view = (i: Incident, photos: PhotoRow[], asset?: AssetRecord): IncidentVie
   })),
 });
 
-type IncidentFields = { id?: string; kind: IncidentKind; description: string; occurredAt: string; location: string | null; bookingId: string | null };
+type IncidentFields = {
+  id?: string;
+  kind: IncidentKind;
+  description: string;
+  occurredAt: string;
+  location: string | null;
+  bookingId: string | null;
+  customerName?: string | null;
+};
 
 /**
  * Record an incident inside the caller's transaction: hold the asset, flag a
  * knocked lithium battery as damaged, and queue the e-mail to the manager and
  * owner. Also used by the return desk for missing or damaged items.
  */
-export async function openIncident(
-  tx: Scoped,
-  actor: Actor,
-  asset: AssetRecord,
-  input: IncidentFields,
-  photos: Awaited<ReturnType<typeof preparePhoto>>[] = [],
-) {
+export async function openIncident(tx: Scoped, actor: Actor, asset: AssetRecord, input: IncidentFields, photos: PreparedPhoto[] = []) {
   const incident = await tx.insert(Incident, {
     ...(input.id ? { id: input.id } : {}),
     assetId: asset.id,
@@ -73,6 +78,7 @@ export async function openIncident(
     occurredAt: new Date(input.occurredAt),
     location: input.location,
     bookingId: input.bookingId,
+    customerName: input.customerName ?? null,
     state: 'reported',
     resolution: null,
     chargeAmountMinor: null,

@@ -6,6 +6,8 @@ import { AppError } from '../http/errors';
 
 export type UploadedPhoto = { originalname: string; buffer: Buffer; size: number };
 
+export type PreparedPhoto = { contentType: string; fileName: string; sizeBytes: number; data: Buffer; thumbnail: Buffer | null };
+
 const THUMBNAIL = { width: 320, height: 320, quality: 72 };
 
 const thumbnailOf = (image: Sharp) =>
@@ -29,7 +31,7 @@ async function heicThumbnail(buffer: Buffer): Promise<Buffer | null> {
  * Trust the bytes, not the name or the browser's claim: JPEG, PNG and HEIC/HEIF
  * only, each with a small JPEG thumbnail for lists.
  */
-export async function preparePhoto(file: UploadedPhoto) {
+export async function preparePhoto(file: UploadedPhoto): Promise<PreparedPhoto> {
   const type = await fileTypeFromBuffer(file.buffer);
   const mime = type?.mime === 'image/heif' || type?.mime === 'image/heic' ? 'image/heic' : type?.mime;
   if (!mime || !(photoTypes as readonly string[]).includes(mime)) {

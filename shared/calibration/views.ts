@@ -72,11 +72,17 @@ export type CalibrationReviewView = {
   impactReviews: ImpactReviewSummary[];
 };
 
-/** `GET /api/assets/:id/lab-windows`: when the item can go to the lab without breaking a booking. */
+/** `GET /api/assets/:id/lab-windows` (one item) and `GET /api/lab-windows?assetIds=` (one trip for several): when the items can go to the lab
+ * without breaking a booking. */
 export type LabWindowsView = {
+  /** The first item (the only one for a single item's finder). */
   assetId: string;
+  assets: { id: string; assetTag: string }[];
+  /** The lab named on every item's plan; null when none is named or they differ. */
   provider: string | null;
+  /** The longest turnaround among the items' labs. */
   turnaroundDays: number;
+  /** The earliest due date among the items. */
   dueOn: string | null;
   /** `endsOn` and `freeDays` are null for the open gap after the last booking. Windows starting on or before the due date come first (`beforeDue`). */
   gaps: { startsOn: string; endsOn: string | null; freeDays: number | null; returnBy: string; beforeDue: boolean }[];
@@ -84,6 +90,8 @@ export type LabWindowsView = {
   noneBeforeDue: boolean;
   /** A trip already planned (or at the lab) with this item: no second one is offered. */
   plannedTrip: { id: string; provider: string; sentOn: string; expectedBackOn: string; state: LabTripState } | null;
+  /** Every item of these already on a trip not yet back, one line per item. */
+  plannedTrips: (NonNullable<LabWindowsView['plannedTrip']> & { assetId: string; assetTag: string })[];
   threatenedIfSentNow: { bookingId: string; startsOn: string; endsOn: string; purpose: string; jobReference: string | null }[];
 };
 

@@ -22,6 +22,8 @@ export type IncidentView = {
   occurredAt: string;
   location: string | null;
   bookingId: string | null;
+  /** The customer of the job or rental the item came back from, for incidents opened at return. */
+  customerName: string | null;
   state: IncidentState;
   resolution: string | null;
   chargeAmountMinor: number | null;

@@ -62,6 +62,26 @@ export const checklistPayload = z.object({
   late: z.object({ note: text(1000).min(3, 'say why the kit goes late'), endsOn: calendarDate }).optional(),
 });
 
+/** Photos of damage one return may carry in all (each incident keeps at most MAX_INCIDENT_PHOTOS). */
+export const MAX_RETURN_PHOTOS = 12;
+
+/** A multipart form's fields are text: the checklist arrives as JSON there, the photos' items as a comma-separated list. */
+const jsonIfText = (v: unknown) => {
+  if (typeof v !== 'string') return v;
+  try {
+    return JSON.parse(v) as unknown;
+  } catch {
+    return v;
+  }
+};
+const listIfText = (v: unknown) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v);
+
+/** A return (JSON, or multipart with `photos`): `photoAssetIds` names, in order, the item each photo shows (a damaged or missing one). */
+export const returnPayload = checklistPayload.omit({ earlyReason: true, late: true }).extend({
+  checklist: z.preprocess(jsonIfText, checklistPayload.shape.checklist),
+  photoAssetIds: z.preprocess(listIfText, z.array(z.uuid('is not an asset id')).max(MAX_RETURN_PHOTOS)).optional(),
+});
+
 export const bookingListQuery = z.object({
   from: calendarDate.optional(),
   to: calendarDate.optional(),

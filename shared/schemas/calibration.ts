@@ -21,6 +21,14 @@ export const calibrationEventFields = z.object({
 
 export const intervalDecisionPayload = z.object({ decision: z.enum(['accept', 'decline'], { message: 'must be accept or decline' }) });
 
+/** One trip for several items: `?assetIds=a,b,c`. */
+export const labWindowsQuery = z.object({
+  assetIds: z.preprocess(
+    (v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v),
+    z.array(z.uuid('is not an asset id')).min(1, 'pick at least one item').max(100),
+  ),
+});
+
 export const labTripPayload = z
   .object({
     provider: text(120).min(1, 'is required'),

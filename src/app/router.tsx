@@ -72,6 +72,7 @@ export const routes: RouteObject[] = [
           gated('calibration.record', [
             { path: 'fleet/:id/calibrate', lazy: screen(() => import('./routes/calibration-record')) },
             { path: 'calibration/plan/:assetId', lazy: screen(() => import('./routes/calibration-plan')) },
+            { path: 'calibration/plan', lazy: screen(() => import('./routes/calibration-trip')) },
             { path: 'calibration/trips', lazy: screen(() => import('./routes/lab-trips')) },
           ]),
           gated('checks.record', [

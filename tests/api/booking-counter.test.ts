@@ -1,4 +1,5 @@
 import { addDays, todayIn } from '../../shared/calibration/due-date';
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
 
@@ -240,4 +241,56 @@ describe('incidents opened at return', () => {
     const incident = (await t.api.get(`/api/incidents/${back.body.incidents[0].incidentId}`).set(bearer(manager))).body;
     expect(incident).toMatchObject({ bookingId: booking.id, location: 'Hall 3, Thornwick Castings, Mirebrook', description: 'Cracked window' });
   });
+
+  it('take the photos of damage taken at return, and name the booking and the customer', async () => {
+    const [dented, lost, fine] = [await tracker(), await tracker(), await tracker()];
+    const job = (
+      await t.api.post('/api/jobs').set(bearer(manager)).send({ reference: 'J-PHOTO-1', customerName: 'Ashgrove Turbines', startsOn: today, endsOn: today })
+    ).body;
+    const booking = (await book(manager, { assetIds: [dented.id, lost.id, fine.id], jobId: job.id, startsOn: today, endsOn: today })).body;
+    expect((await checkout(booking.id, { checklist: checklist(dented, lost, fine) })).status).toBe(200);
+    const lines = [
+      { assetId: dented.id, present: true, condition: 'damaged', note: 'Dent in the case lid' },
+      { assetId: lost.id, present: false, condition: 'good' },
+      { assetId: fine.id, present: true, condition: 'good' },
+    ];
+    const returning = (photoAssetIds: string[]) =>
+      t.api
+        .post(`/api/bookings/${booking.id}/return`)
+        .set(bearer(manager))
+        .field('counterpart', 'Odile Brackwater')
+        .field('checklist', JSON.stringify(lines))
+        .field('photoAssetIds', photoAssetIds.join(','));
+    // A photo of an item marked good, or photos without their items, lose nothing: 400 and the booking stays out.
+    const stray = await returning([fine.id]).attach('photos', await jpeg(), { filename: 'fine.jpg', contentType: 'image/jpeg' });
+    expect(stray.status, JSON.stringify(stray.body)).toBe(400);
+    expect(stray.body.error.details.fields.photoAssetIds).toBeDefined();
+    const unnamed = await returning([]).attach('photos', await jpeg(), { filename: 'lid.jpg', contentType: 'image/jpeg' });
+    expect(unnamed.status).toBe(400);
+    expect((await t.db.query(`SELECT state FROM bookings WHERE id = $1`, [booking.id]))[0].state).toBe('out');
+
+    const back = await returning([dented.id, dented.id])
+      .attach('photos', await jpeg(), { filename: 'lid.jpg', contentType: 'image/jpeg' })
+      .attach('photos', await jpeg('#5f6f88'), { filename: 'hinge.jpg', contentType: 'image/jpeg' });
+    expect(back.status, JSON.stringify(back.body)).toBe(200);
+    expect(back.body.incidents).toHaveLength(2);
+    const incidentOf = async (assetId: string) =>
+      (await t.api.get(`/api/incidents/${back.body.incidents.find((i: { assetId: string }) => i.assetId === assetId).incidentId}`).set(bearer(manager))).body;
+    const damage = await incidentOf(dented.id);
+    expect(damage).toMatchObject({ bookingId: booking.id, customerName: 'Ashgrove Turbines', kind: 'impact', description: 'Dent in the case lid' });
+    expect(damage.photos.map((p: { fileName: string }) => p.fileName)).toEqual(['lid.jpg', 'hinge.jpg']);
+    const photo = await t.api.get(damage.photos[1].url).set(bearer(manager));
+    expect(photo.status).toBe(200);
+    expect(photo.headers['content-type']).toBe('image/jpeg');
+    expect((await t.api.get(damage.photos[0].thumbnailUrl).set(bearer(manager))).status).toBe(200);
+    const missing = await incidentOf(lost.id);
+    expect(missing).toMatchObject({ bookingId: booking.id, customerName: 'Ashgrove Turbines', kind: 'missing', photos: [] });
+  });
 });
+
+/** A plain JPEG made by sharp (the photos' decoder is also sharp, but only the stored bytes and names are compared). */
+function jpeg(background = '#88775f') {
+  return sharp({ create: { width: 320, height: 240, channels: 3, background } })
+    .jpeg()
+    .toBuffer();
+}

@@ -81,4 +81,45 @@ describe('the lab window finder', () => {
     expect(again.body.error.message).toContain(a.assetTag);
     expect((await windowsOf(b.id)).plannedTrip).toBeNull();
   });
+
+  it('finds one window free for every item of a trip and plans one lab booking holding them all', async () => {
+    const a = await trackerDueIn(30);
+    const b = await trackerDueIn(12);
+    const c = await trackerDueIn(40);
+    // b is out on a job from today for ten days, c on another from day 12 to day 14: a alone could go today.
+    const job = (from: number, to: number, id: string) =>
+      t.api
+        .post('/api/bookings')
+        .set(bearer(manager))
+        .send({ assetIds: [id], startsOn: addDays(today, from), endsOn: addDays(today, to) });
+    expect((await job(0, 9, b.id)).status).toBe(201);
+    expect((await job(12, 14, c.id)).status).toBe(201);
+    expect((await windowsOf(a.id)).gaps[0].startsOn).toBe(today);
+    const ids = [a.id, b.id, c.id];
+    const res = await t.api.get(`/api/lab-windows?assetIds=${ids.join(',')}`).set(bearer(owner));
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    const w = res.body;
+    expect(w.assets.map((x: { assetTag: string }) => x.assetTag).sort()).toEqual([a.assetTag, b.assetTag, c.assetTag].sort());
+    // The earliest due date of the three is b's; sending all today breaks both jobs (14 days of turnaround).
+    expect(w.dueOn).toBe(b.calibration.dueOn);
+    expect(w.threatenedIfSentNow).toHaveLength(2);
+    // The two days between b's job and c's are shorter than a lab's turnaround: the first window opens after c's job.
+    expect(w.turnaroundDays).toBeGreaterThan(2);
+    expect(w.gaps[0]).toMatchObject({ startsOn: addDays(today, 15), endsOn: null, beforeDue: false });
+    expect(w.noneBeforeDue).toBe(true);
+    expect(w.plannedTrips).toEqual([]);
+
+    const trip = await t.api.post('/api/lab-trips').set(bearer(owner)).send({ provider: 'Fenmoor Calibration Lab', assetIds: ids, sentOn: w.gaps[0].startsOn });
+    expect(trip.status, JSON.stringify(trip.body)).toBe(201);
+    const held = await t.db.query(`SELECT asset_id FROM booking_items WHERE booking_id = $1`, [trip.body.bookingId]);
+    expect(held.map((r: { asset_id: string }) => r.asset_id).sort()).toEqual([...ids].sort());
+    const after = (await t.api.get(`/api/lab-windows?assetIds=${ids.join(',')}`).set(bearer(owner))).body;
+    expect(after.plannedTrips.map((p: { id: string }) => p.id)).toEqual([trip.body.id, trip.body.id, trip.body.id]);
+  });
+
+  it('refuses a window query without items, or with a malformed or unknown one', async () => {
+    expect((await t.api.get('/api/lab-windows?assetIds=').set(bearer(owner))).status).toBe(400);
+    expect((await t.api.get('/api/lab-windows?assetIds=not-an-id').set(bearer(owner))).status).toBe(400);
+    expect((await t.api.get(`/api/lab-windows?assetIds=${crypto.randomUUID()}`).set(bearer(owner))).status).toBe(404);
+  });
 });

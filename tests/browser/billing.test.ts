@@ -105,6 +105,44 @@ describe('the billing desk in a real browser', () => {
     await context.close();
   }, 120_000);
 
+  it('a refused rental takes the offered alternative into the form for review; only "Create rental" books it', async () => {
+    const today = todayIn('Europe/Berlin');
+    const startsOn = addDays(today, 80);
+    const endsOn = addDays(today, 86);
+    const clerkApi = await apiAs('billing@demo.test');
+    const [taken] = (await clerkApi(`/availability?type=smr&startsOn=${startsOn}&endsOn=${endsOn}&limit=1`)).body.items as { id: string; assetTag: string }[];
+    const managerApi = await apiAs('manager@demo.test');
+    expect((await managerApi('/bookings', { assetIds: [taken.id], startsOn, endsOn, note: 'Held for the shop' })).status).toBe(201);
+    const rentalCount = async () => Number((await rig.db.query(`SELECT count(*) AS n FROM rentals`))[0].n);
+    const before = await rentalCount();
+
+    const { context, page } = await signedIn(rig, 'billing@demo.test', 'Billing desk');
+    await page.goto(`${rig.baseUrl}/rentals/new`);
+    await page.getByLabel('Customer', { exact: true }).selectOption({ label: 'Ostby Mould & Die' });
+    await page.getByLabel('Starts on').fill(startsOn);
+    await page.getByLabel('Ends on').fill(endsOn);
+    await page.getByLabel('Add separate items').fill(taken.assetTag);
+    await page.getByRole('button', { name: `Add ${taken.assetTag}` }).click();
+    await page.getByRole('button', { name: 'Create rental' }).click();
+    const alternative = page.getByRole('button', { name: /^Use SMR-\d+ instead$/ }).first();
+    await alternative.waitFor();
+    const chosen = (await alternative.innerText()).match(/SMR-\d+/)![0];
+    await alternative.click();
+    // The swap is put in front of the clerk, priced again, and nothing is booked yet.
+    await page.getByText(`${chosen} replaces ${taken.assetTag}.`, { exact: false }).waitFor();
+    // 7 days of one SMR: one week at 75.00 (demo rate card) + 19 % tax = 89.25, worked by hand.
+    await eventually(() => page.locator('main').innerText()).toMatch(/€89\.25/);
+    expect(page.url()).toMatch(/\/rentals\/new$/);
+    expect(await rentalCount()).toBe(before);
+
+    await page.getByRole('button', { name: 'Create rental' }).click();
+    await page.waitForURL(/\/rentals\/[0-9a-f-]{36}$/);
+    const rental = (await clerkApi(`/rentals/${page.url().split('/').pop()}`)).body as { items: { assetTag: string }[] };
+    expect(rental.items.map((i) => i.assetTag)).toEqual([chosen]);
+    expect(await rentalCount()).toBe(before + 1);
+    await context.close();
+  }, 120_000);
+
   it('the owner sets the rental terms on the settings page, and quotes follow them', async () => {
     const { context, page, nav } = await signedIn(rig, 'owner@demo.test', "Owner's overview");
     await nav.getByRole('link', { name: 'Settings' }).click();

@@ -1,3 +1,4 @@
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { startBrowserRig, type BrowserRig } from '../support/browser';
@@ -55,14 +56,25 @@ describe("the shop manager's week, told truly", () => {
     const walk = { counterpart: 'Odile Brackwater', checklist: [{ assetId: earlyItem.id, present: true, condition: 'good' }] };
     expect((await api(`/bookings/${early.id}/checkout`, walk)).status).toBe(200);
     expect((await api(`/bookings/${early.id}/return`, walk)).status).toBe(200);
-    // A lab trip for the three due-soon trackers.
-    const trip = await api('/lab-trips', {
-      provider: 'Fenmoor Calibration Lab',
-      assetIds: labItems.map((i) => i.id),
-      sentOn: addDays(today, 2),
-      expectedBackOn: addDays(today, 20),
-    });
-    expect(trip.status, JSON.stringify(trip.body)).toBe(201);
+    // The owner ticks the three due-soon trackers in the calibration review and plans one trip: one window free for all three.
+    const owner = await signedIn(rig, 'owner@demo.test', "Owner's overview");
+    await owner.page.goto(`${rig.baseUrl}/calibration`);
+    for (const item of labItems) await owner.page.getByLabel(`Choose ${item.assetTag} for one lab trip`).check();
+    await owner.page.getByRole('link', { name: 'Plan one trip' }).click();
+    await owner.page.getByRole('heading', { level: 1, name: 'Plan one lab trip: 3 items' }).waitFor();
+    await owner.page.getByLabel('Lab', { exact: true }).fill('Fenmoor Calibration Lab');
+    await owner.page.getByRole('button', { name: 'Plan this trip for all 3' }).first().click();
+    await owner.page.getByRole('heading', { name: 'Trip planned' }).waitFor();
+    await owner.context.close();
+    const trips: { booking_id: string; items: string[] }[] = await rig.db.query(
+      `SELECT t.booking_id, array_agg(a.asset_tag ORDER BY a.asset_tag) AS items
+         FROM lab_trips t JOIN lab_trip_items i ON i.lab_trip_id = t.id JOIN assets a ON a.id = i.asset_id
+        WHERE a.id = ANY($1) GROUP BY t.id`,
+      [labItems.map((i) => i.id)],
+    );
+    expect(trips).toEqual([{ booking_id: expect.any(String), items: ['TRK-W05', 'TRK-W06', 'TRK-W07'] }]);
+    const tripBooking = trips[0].booking_id;
+    expect((await rig.db.query(`SELECT count(*)::int AS n FROM booking_items WHERE booking_id = $1`, [tripBooking]))[0].n).toBe(3);
 
     const { context, page, nav } = await signedIn(rig, 'manager@demo.test', 'Shop floor today');
 
@@ -101,7 +113,7 @@ describe("the shop manager's week, told truly", () => {
     await notCollected.locator(`a[href="/bookings/${lapsed.id}"]`).waitFor();
     expect(await page.getByRole('region', { name: 'Going out today' }).locator(`a[href="/bookings/${lapsed.id}"]`).count()).toBe(0);
     // The three-item lab trip renews their calibration: it is not a blocked booking.
-    expect(await page.getByRole('region', { name: 'Blocked bookings' }).locator(`a[href="/bookings/${trip.body.bookingId}"]`).count()).toBe(0);
+    expect(await page.getByRole('region', { name: 'Blocked bookings' }).locator(`a[href="/bookings/${tripBooking}"]`).count()).toBe(0);
     await notCollected.locator(`a[href="/bookings/${lapsed.id}"]`).click();
     await page.getByRole('link', { name: 'Check out late' }).click();
     await page.getByLabel(`Present: ${lapsedItem.assetTag}`).check();
@@ -138,7 +150,8 @@ describe("the shop manager's week, told truly", () => {
     const free = (await api(`/availability?type=smr&startsOn=${today}&endsOn=${addDays(today, 1)}&limit=2`)).body.items as { id: string; assetTag: string }[];
     const smrs = free.map((x) => ({ id: x.id, asset_tag: x.assetTag }));
     expect(smrs).toHaveLength(2);
-    const out = (await api('/bookings', { assetIds: smrs.map((s) => s.id), startsOn: today, endsOn: addDays(today, 1) })).body;
+    const siteJob = (await api('/jobs', { reference: 'J-WEEK-2', customerName: 'Marrowgate Aero', startsOn: today, endsOn: addDays(today, 1) })).body;
+    const out = (await api('/bookings', { assetIds: smrs.map((s) => s.id), jobId: siteJob.id, startsOn: today, endsOn: addDays(today, 1) })).body;
     const walk = { counterpart: 'Odile Brackwater', checklist: smrs.map((s) => ({ assetId: s.id, present: true, condition: 'good' })) };
     expect((await api(`/bookings/${out.id}/checkout`, walk)).status, JSON.stringify(out)).toBe(200);
 
@@ -162,6 +175,25 @@ describe("the shop manager's week, told truly", () => {
     await page.getByLabel(`Present: ${smrs[0].asset_tag}`).check();
     await eventually(() => page.locator('main').innerText()).toMatch(new RegExp(`Not ticked present yet: ${smrs[1].asset_tag}\\.`));
     expect(await page.locator('main').innerText()).not.toMatch(new RegExp(`Not ticked present yet: [^.]*${smrs[0].asset_tag}`));
+
+    // One SMR came back dented: its photos go with the incident, which names the booking and the job's customer.
+    await page.getByLabel(`Present: ${smrs[1].asset_tag}`).check();
+    await page.getByLabel(`Condition: ${smrs[1].asset_tag}`).selectOption('damaged');
+    const photo = await sharp({ create: { width: 320, height: 240, channels: 3, background: '#8a7a5c' } })
+      .jpeg()
+      .toBuffer();
+    await page.getByLabel(`Photos of ${smrs[1].asset_tag}`).setInputFiles({ name: 'dent.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await page.getByRole('group', { name: 'Suggested people' }).getByRole('button', { name: techName }).click();
+    await page.getByRole('button', { name: 'Take back' }).click();
+    await page.getByRole('link', { name: 'open its incident' }).click();
+    await page.getByText('Marrowgate Aero', { exact: true }).waitFor();
+    await eventually(() => page.locator('main').innerText()).toMatch(/dent\.jpg/);
+    const [incident] = await rig.db.query(
+      `SELECT i.booking_id, i.customer_name, count(p.id)::int AS photos FROM incidents i LEFT JOIN incident_photos p ON p.incident_id = i.id
+        WHERE i.asset_id = $1 GROUP BY i.id`,
+      [smrs[1].id],
+    );
+    expect(incident).toEqual({ booking_id: out.id, customer_name: 'Marrowgate Aero', photos: 1 });
     await context.close();
   });
 });

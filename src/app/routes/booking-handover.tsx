@@ -10,6 +10,8 @@ import { useBooking } from '../../features/bookings/api/get-booking';
 import type { ReturnView } from '../../../shared/bookings/views';
 import { bookingStateWords, bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
 import { HandoverForm, ReturnOutcome, type CounterpartSuggestion } from '../../features/bookings/components/handover-form';
+import { PhotoPicker } from '../../features/incidents/components/photo-picker';
+import { photoProblem } from '../../features/incidents/components/photo-rules';
 import { useSiteJob } from '../../features/site-jobs/api/get-site-job';
 import { useStaff } from '../../features/users/api/get-staff';
 import { todayIn } from '../../lib/bookings';
@@ -102,6 +104,14 @@ export default function BookingHandoverRoute() {
         mode={mode}
         suggestions={suggestions}
         today={todayIn(organization.timeZone)}
+        photoPicker={({ assetTag, files, onChange }) => (
+          <PhotoPicker
+            label={`Photos of ${assetTag}`}
+            files={files}
+            onChange={onChange}
+            problems={files.map(photoProblem).filter((p): p is string => p !== null)}
+          />
+        )}
         onDone={(result) => {
           if (mode === 'return') setReturned(result as ReturnView);
           else navigate(`/bookings/${b.id}`, { state: { notice: `Handed over to ${result.takenBy ?? 'the taker'}.` } });

@@ -96,7 +96,7 @@ export default function CalibrationPlanRoute() {
               when the certificate arrives.
             </Notice>
           ) : (
-            <LabWindowFinder assetId={a.id} assetTag={a.assetTag} windows={w} canPlan={canPlan && a.status !== 'retired'} onPlanned={(t) => setPlanned(t.id)} />
+            <LabWindowFinder windows={w} canPlan={canPlan && a.status !== 'retired'} onPlanned={(t) => setPlanned(t.id)} />
           )}
         </div>
       </div>

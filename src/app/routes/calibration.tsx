@@ -11,6 +11,7 @@ import { calibrationReviewCsvUrl, calibrationReviewPdfUrl, useCalibrationReview 
 import type { DueRow } from '../../../shared/calibration/views';
 import { AtLabList } from '../../features/calibration/components/at-lab-list';
 import { DueGrid } from '../../features/calibration/components/due-grid';
+import { DueSelectionProvider, PlanOneTripBar } from '../../features/calibration/components/due-selection';
 import { DueTimeline } from '../../features/calibration/components/due-timeline';
 import { ImpactReviewLinks } from '../../features/calibration/components/impact-review-links';
 import { TipsForecastToFail } from '../../features/checks/components/drift-forecast';
@@ -80,7 +81,7 @@ export default function CalibrationReviewRoute() {
   const r = review.data;
   const all = [...r.overdue, ...r.dueSoon];
 
-  return (
+  const page = (
     <>
       {header}
       <p className="mb-4 text-sm text-ink-700">
@@ -98,6 +99,7 @@ export default function CalibrationReviewRoute() {
       </div>
 
       <div className="flex flex-col gap-4">
+        {canPlan ? <PlanOneTripBar /> : null}
         {byKit ? (
           <Panel title="By kit">
             {all.length === 0 ? <p className="text-sm text-ink-700">Nothing is overdue or due soon.</p> : null}
@@ -160,4 +162,6 @@ export default function CalibrationReviewRoute() {
       </div>
     </>
   );
+  // Items ticked in any of the tables go on one lab trip.
+  return canPlan ? <DueSelectionProvider>{page}</DueSelectionProvider> : page;
 }

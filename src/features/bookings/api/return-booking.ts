@@ -1,13 +1,26 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiClient } from '../../../lib/api-client';
+import { apiClient, uploadForm } from '../../../lib/api-client';
 import { incidentsQueryRoot, invalidateAssetStatus } from '../../../lib/asset-status';
 import type { HandoverInput } from './check-out-booking';
 import { bookingsKeys } from './keys';
 import type { ReturnView } from '../../../../shared/bookings/views';
 
-/** POST /api/bookings/:id/return — missing or damaged items come back with an incident each (and go on hold). */
-export function returnBooking({ id, ...input }: HandoverInput & { id: string }): Promise<ReturnView> {
-  return apiClient.post<ReturnView>(`/bookings/${encodeURIComponent(id)}/return`, input);
+/** A photo of the damage taken at return, with the item it shows. */
+export type ReturnPhoto = { assetId: string; file: File };
+
+/**
+ * POST /api/bookings/:id/return — missing or damaged items come back with an incident each (and go on hold). With photos it is one
+ * multipart form: the checklist as JSON, and `photoAssetIds` naming each photo's item in order.
+ */
+export function returnBooking({ id, photos = [], ...input }: HandoverInput & { id: string; photos?: ReturnPhoto[] }): Promise<ReturnView> {
+  const path = `/bookings/${encodeURIComponent(id)}/return`;
+  if (!photos.length) return apiClient.post<ReturnView>(path, input);
+  const form = new FormData();
+  form.append('counterpart', input.counterpart);
+  form.append('checklist', JSON.stringify(input.checklist));
+  form.append('photoAssetIds', photos.map((p) => p.assetId).join(','));
+  for (const p of photos) form.append('photos', p.file, p.file.name);
+  return uploadForm<ReturnView>(path, form);
 }
 
 export function useReturnBooking() {

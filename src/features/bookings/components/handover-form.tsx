@@ -1,5 +1,5 @@
 import { Form, Formik, useField, useFormikContext, type FormikHelpers } from 'formik';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import * as Yup from 'yup';
 import { Button, buttonClasses } from '../../../components/button';
@@ -11,7 +11,7 @@ import { isApiError } from '../../../lib/api-client';
 import { assetTypeTitles } from '../../../lib/assets';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCheckOutBooking } from '../api/check-out-booking';
-import { useReturnBooking } from '../api/return-booking';
+import { useReturnBooking, type ReturnPhoto } from '../api/return-booking';
 import type { BookingView, ItemCondition, ReturnView } from '../../../../shared/bookings/views';
 import { conditionWords, shortDay } from './booking-words';
 
@@ -78,12 +78,19 @@ function schemaFor(mode: HandoverMode, late: boolean, early: boolean) {
   });
 }
 
-/** Checkout or return against the booking's packing list: each item present?, its condition, a note; who takes or brings it. */
+/** The photo picker for one damaged item at return (the incidents feature's, handed in by the screen). */
+export type ReturnPhotoPicker = (props: { assetTag: string; files: File[]; onChange: (files: File[]) => void }) => ReactNode;
+
+/**
+ * Checkout or return against the booking's packing list: each item present?, its condition, a note; who takes or brings it.
+ * At return, an item marked damaged takes photos (`photoPicker`) that go with its incident.
+ */
 export function HandoverForm({
   booking,
   mode,
   suggestions,
   today,
+  photoPicker,
   onDone,
 }: {
   booking: BookingView;
@@ -91,11 +98,14 @@ export function HandoverForm({
   suggestions: CounterpartSuggestion[];
   /** The firm's calendar day: a reservation whose days passed goes out late. */
   today: string;
+  photoPicker?: ReturnPhotoPicker;
   onDone: (result: BookingView | ReturnView) => void;
 }) {
   const checkout = useCheckOutBooking();
   const giveBack = useReturnBooking();
   const [formError, setFormError] = useState<string>();
+  /** Photos of damage per item, kept outside Formik (files are not form values). */
+  const [photos, setPhotos] = useState<Record<string, File[]>>({});
   /** The server's word that checkout has not opened yet: the form then asks for a reason. */
   const [earlyAsk, setEarlyAsk] = useState<string>();
   const w = words[mode];
@@ -124,8 +134,12 @@ export function HandoverForm({
       ...(earlyAsk && values.earlyReason.trim() ? { earlyReason: values.earlyReason.trim() } : {}),
       ...(late ? { late: { note: values.lateNote.trim(), endsOn: values.lateEndsOn } } : {}),
     };
+    // Only the photos of items still marked damaged when the form is sent.
+    const damagePhotos: ReturnPhoto[] = values.lines
+      .filter((l) => l.present && l.condition === 'damaged')
+      .flatMap((l) => (photos[l.assetId] ?? []).map((file) => ({ assetId: l.assetId, file })));
     try {
-      onDone(mode === 'checkout' ? await checkout.mutateAsync(input) : await giveBack.mutateAsync(input));
+      onDone(mode === 'checkout' ? await checkout.mutateAsync(input) : await giveBack.mutateAsync({ ...input, photos: damagePhotos }));
     } catch (error) {
       if (isApiError(error) && error.code === 'checkout_early') {
         setEarlyAsk(error.message);
@@ -161,6 +175,15 @@ export function HandoverForm({
               ) : null}
               {mode === 'return' ? <ReturnPreview lines={values.lines} /> : null}
             </section>
+
+            {mode === 'return' && photoPicker ? (
+              <DamagePhotos
+                lines={values.lines}
+                photos={photos}
+                onChange={(assetId, files) => setPhotos((now) => ({ ...now, [assetId]: files }))}
+                picker={photoPicker}
+              />
+            ) : null}
 
             {mode === 'checkout' ? <NotReady booking={booking} /> : null}
 
@@ -230,6 +253,35 @@ function ReturnPreview({ lines }: { lines: Line[] }) {
         </p>
       ) : null}
     </Notice>
+  );
+}
+
+/** A photo picker for each item marked damaged: the photos go with the incident its return opens. */
+function DamagePhotos({
+  lines,
+  photos,
+  onChange,
+  picker,
+}: {
+  lines: Line[];
+  photos: Record<string, File[]>;
+  onChange: (assetId: string, files: File[]) => void;
+  picker: ReturnPhotoPicker;
+}) {
+  const damaged = lines.filter((l) => l.present && l.condition === 'damaged');
+  if (!damaged.length) return null;
+  return (
+    <section aria-labelledby="damage-photos" className="flex flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
+      <div>
+        <h2 id="damage-photos" className="text-lg font-bold">
+          Photos of the damage
+        </h2>
+        <p className="text-sm text-ink-700">They go with each item&rsquo;s incident report, with the booking and its customer.</p>
+      </div>
+      {damaged.map((l) => (
+        <div key={l.assetId}>{picker({ assetTag: l.assetTag, files: photos[l.assetId] ?? [], onChange: (files) => onChange(l.assetId, files) })}</div>
+      ))}
+    </section>
   );
 }
 

@@ -8,6 +8,7 @@ import { assetTypeTitles, type AssetStatus, type AssetType } from '../../../lib/
 import { formatCalendarDate } from '../../../lib/format';
 import type { DueRow } from '../../../../shared/calibration/views';
 import { dateRange } from './calibration-words';
+import { ChooseForTrip } from './due-selection';
 
 const typeTitle = (type: string) => assetTypeTitles[type as AssetType] ?? type;
 
@@ -51,6 +52,23 @@ export function DueGrid({
 }) {
   const columns = useMemo<ColDef<DueRow>[]>(
     () => [
+      ...(canPlan
+        ? [
+            {
+              colId: 'choose',
+              headerName: '',
+              type: actionsColumnType,
+              flex: 0,
+              width: 52,
+              minWidth: 52,
+              // What is at the lab or retired goes on no new trip.
+              cellRenderer: (p: ICellRendererParams<DueRow>) =>
+                p.data && p.data.status !== 'at_lab' && p.data.status !== 'retired' ? (
+                  <ChooseForTrip item={{ id: p.data.id, assetTag: p.data.assetTag }} />
+                ) : null,
+            } satisfies ColDef<DueRow>,
+          ]
+        : []),
       {
         colId: 'tag',
         headerName: 'Tag',

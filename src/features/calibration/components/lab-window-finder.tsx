@@ -25,39 +25,33 @@ function conflictText(error: unknown): string {
 }
 
 /**
- * The window finder: which bookings sending the item today would break, and
- * the free gaps long enough for the lab's turnaround, earliest first. "Plan
- * this trip" reserves the gap on the board from its first day.
+ * The window finder: which bookings sending the items today would break, and
+ * the free gaps (free for every item) long enough for the lab's turnaround,
+ * earliest first. "Plan this trip" reserves the gap on the board from its
+ * first day, one lab booking for all the items.
  */
-export function LabWindowFinder({
-  assetId,
-  assetTag,
-  windows,
-  onPlanned,
-  canPlan,
-}: {
-  assetId: string;
-  assetTag: string;
-  windows: LabWindowsView;
-  onPlanned: (trip: LabTripView) => void;
-  canPlan: boolean;
-}) {
+export function LabWindowFinder({ windows, onPlanned, canPlan }: { windows: LabWindowsView; onPlanned: (trip: LabTripView) => void; canPlan: boolean }) {
   const plan = usePlanLabTrip();
   const [provider, setProvider] = useState(windows.provider ?? '');
   const providerId = useId();
   const [planning, setPlanning] = useState<string | null>(null);
   const [own, setOwn] = useState({ sentOn: '', expectedBackOn: '' });
-  const trip = windows.plannedTrip;
-  const offer = canPlan && !trip;
+  const assetIds = windows.assets.map((a) => a.id);
+  const tags = windows.assets.map((a) => a.assetTag).join(', ');
+  const several = windows.assets.length > 1;
+  const trips = windows.plannedTrips;
+  const offer = canPlan && trips.length === 0;
 
   return (
     <div className="flex flex-col gap-4">
       <section aria-labelledby="break-heading" className="rounded-lg border border-paper-line bg-card p-4">
         <h2 id="break-heading" className="mb-2 text-lg font-bold">
-          Sending it today would break:
+          Sending {several ? 'them' : 'it'} today would break:
         </h2>
         {windows.threatenedIfSentNow.length === 0 ? (
-          <p className="text-ink-700">No booking — it can go today and be back before anything needs it.</p>
+          <p className="text-ink-700">
+            No booking — {several ? 'they' : 'it'} can go today and be back before anything needs {several ? 'them' : 'it'}.
+          </p>
         ) : (
           <ul className="flex flex-col gap-1">
             {windows.threatenedIfSentNow.map((b) => (
@@ -79,13 +73,19 @@ export function LabWindowFinder({
           Free windows, earliest first
         </h2>
         <p className="text-sm text-ink-700">
-          Gaps between {assetTag}&rsquo;s bookings of at least {days(windows.turnaroundDays)}, the lab&rsquo;s turnaround.
+          {several ? `Days when none of ${tags} is booked` : `Gaps between ${tags}’s bookings`}, at least {days(windows.turnaroundDays)} long: the lab&rsquo;s
+          turnaround{several ? ' (the longest among their labs)' : ''}.
         </p>
-        {trip ? (
+        {trips.length ? (
           <Notice tone="info" title="Already planned">
-            {assetTag} is on a trip to {trip.provider}
-            {trip.state === 'planned' ? `, going ${formatCalendarDate(trip.sentOn)}` : ', at the lab now'}, expected back{' '}
-            {formatCalendarDate(trip.expectedBackOn)}.{' '}
+            {trips.map((trip) => (
+              <span key={trip.assetId} className="block">
+                {trip.assetTag} is on a trip to {trip.provider}
+                {trip.state === 'planned' ? `, going ${formatCalendarDate(trip.sentOn)}` : ', at the lab now'}, expected back{' '}
+                {formatCalendarDate(trip.expectedBackOn)}.
+              </span>
+            ))}
+            {several ? 'Take it off this trip (in the list of items) to plan one for the others. ' : null}
             <Link to="/calibration/trips" className="font-semibold text-brass-deep underline">
               See lab trips
             </Link>
@@ -94,7 +94,7 @@ export function LabWindowFinder({
         {windows.noneBeforeDue && windows.dueOn ? (
           <Notice tone="caution" title="No window before the due date">
             No free window of {days(windows.turnaroundDays)} starts on or before {formatCalendarDate(windows.dueOn)}. Every window below begins after it; until
-            it is back the item cannot go out on a job. Pick your own dates below if a booking can move.
+            it is back {several ? 'that item' : 'the item'} cannot go out on a job. Pick your own dates below if a booking can move.
           </Notice>
         ) : null}
         {offer ? (
@@ -133,10 +133,10 @@ export function LabWindowFinder({
                   busy={plan.isPending && planning === gap.startsOn}
                   onClick={() => {
                     setPlanning(gap.startsOn);
-                    plan.mutate({ provider: provider.trim(), assetIds: [assetId], sentOn: gap.startsOn }, { onSuccess: onPlanned });
+                    plan.mutate({ provider: provider.trim(), assetIds, sentOn: gap.startsOn }, { onSuccess: onPlanned });
                   }}
                 >
-                  Plan this trip
+                  {several ? `Plan this trip for all ${windows.assets.length}` : 'Plan this trip'}
                 </Button>
               ) : null}
             </li>
@@ -150,7 +150,7 @@ export function LabWindowFinder({
               e.preventDefault();
               setPlanning('own');
               plan.mutate(
-                { provider: provider.trim(), assetIds: [assetId], sentOn: own.sentOn, ...(own.expectedBackOn ? { expectedBackOn: own.expectedBackOn } : {}) },
+                { provider: provider.trim(), assetIds, sentOn: own.sentOn, ...(own.expectedBackOn ? { expectedBackOn: own.expectedBackOn } : {}) },
                 { onSuccess: onPlanned },
               );
             }}

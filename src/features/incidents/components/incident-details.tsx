@@ -32,6 +32,19 @@ export function IncidentFacts({ incident, currency }: { incident: IncidentView; 
           { term: 'Description', value: <span className="whitespace-pre-wrap">{incident.description}</span> },
           { term: 'When', value: dateTime(incident.occurredAt) },
           { term: 'Where', value: incident.location },
+          ...(incident.bookingId
+            ? [
+                {
+                  term: 'Booking',
+                  value: (
+                    <Link to={`/bookings/${incident.bookingId}`} className="font-semibold text-brass-deep underline">
+                      The booking it came back from
+                    </Link>
+                  ),
+                },
+              ]
+            : []),
+          ...(incident.customerName ? [{ term: 'Customer', value: incident.customerName }] : []),
           { term: 'Reported', value: dateTime(incident.createdAt) },
           ...(incident.resolution ? [{ term: 'Resolution', value: <span className="whitespace-pre-wrap">{incident.resolution}</span> }] : []),
           ...(incident.chargeAmountMinor !== null ? [{ term: 'Charge', value: formatMoney(incident.chargeAmountMinor, currency) }] : []),

@@ -15,7 +15,17 @@ function FileGlyph() {
 }
 
 /** "Photos": the camera or the gallery, up to six, each previewed (HEIC as a file) and removable. */
-export function PhotoPicker({ files, onChange, problems }: { files: File[]; onChange: (files: File[]) => void; problems: string[] }) {
+export function PhotoPicker({
+  files,
+  onChange,
+  problems,
+  label = 'Photos',
+}: {
+  files: File[];
+  onChange: (files: File[]) => void;
+  problems: string[];
+  label?: string;
+}) {
   const id = useId();
   const input = useRef<HTMLInputElement>(null);
   const previews = useMemo(() => files.map((f) => (isHeic(f) ? null : URL.createObjectURL(f))), [files]);
@@ -25,7 +35,7 @@ export function PhotoPicker({ files, onChange, problems }: { files: File[]; onCh
   return (
     <div className="flex flex-col gap-2">
       <label htmlFor={id} className="text-lg font-bold text-ink-900">
-        Photos
+        {label}
       </label>
       <p id={`${id}-hint`} className="text-base text-ink-700">
         Up to {MAX_PHOTOS} photos (JPEG, PNG or HEIC, at most 10 MB each): the damage close up, the whole item, its label.

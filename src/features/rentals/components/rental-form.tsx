@@ -120,7 +120,7 @@ function RentalFormBody({
   busy: boolean;
   onSwapped: () => void;
 }) {
-  const { values, setFieldValue, setValues, submitForm } = useFormikContext<RentalValues>();
+  const { values, setFieldValue, setValues } = useFormikContext<RentalValues>();
   const customers = useCustomers();
   const { members, error: membersError } = useKitMembers(fleet, values.kitId);
   const [newCustomerOpen, setNewCustomerOpen] = useState(false);
@@ -129,20 +129,20 @@ function RentalFormBody({
 
   const customerOptions = [{ value: '', label: 'Choose the customer' }, ...(customers.data?.items ?? []).map((c) => ({ value: c.id, label: c.company }))];
 
-  /** Puts the offered item in place of the refused one (a kit is then listed item by item) and tries again. */
+  /** Puts the offered item in place of the refused one (a kit is then listed item by item) for the person to review; only "Create rental" books. */
   function swap(refusedId: string, alternative: AlternativeItem) {
     const { items, from = 'the refused item' } = swapIn(members, values, refusedId, alternative);
     void setValues({ ...values, kitId: '', items }, true);
-    setSwapNote(`${alternative.assetTag} replaces ${from}.${values.kitId ? ' The rental now lists the kit’s items one by one, with the swap.' : ''}`);
+    setSwapNote(
+      `${alternative.assetTag} replaces ${from}.${values.kitId ? ' The rental now lists the kit’s items one by one, with the swap.' : ''} Check the items and the price, then create the rental.`,
+    );
     onSwapped();
-    setTimeout(() => void submitForm(), 0);
   }
 
   return (
     <>
       <Form noValidate className="flex flex-col gap-4" aria-label="New rental">
         {formError ? <Notice tone="error">{formError}</Notice> : null}
-        {swapNote && !refusal ? <Notice tone="info">{swapNote}</Notice> : null}
         {customers.isError ? <Notice tone="error">{customers.error.message}</Notice> : null}
 
         <FormSection legend="Who rents">
@@ -166,6 +166,7 @@ function RentalFormBody({
         <LiveQuote scope={scope} />
 
         {refusal ? <BookingRefusalPanel refusal={refusal} onSwap={swap} /> : null}
+        {swapNote && !refusal ? <Notice tone="info">{swapNote}</Notice> : null}
 
         <div className="flex flex-wrap gap-2">
           <Button type="submit" variant="primary" busy={busy}>

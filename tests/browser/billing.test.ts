@@ -109,9 +109,9 @@ describe('the billing desk in a real browser', () => {
     const today = todayIn('Europe/Berlin');
     const startsOn = addDays(today, 80);
     const endsOn = addDays(today, 86);
-    const clerkApi = await apiAs('billing@demo.test');
+    const clerkApi = await rig.apiAs('billing@demo.test');
     const [taken] = (await clerkApi(`/availability?type=smr&startsOn=${startsOn}&endsOn=${endsOn}&limit=1`)).body.items as { id: string; assetTag: string }[];
-    const managerApi = await apiAs('manager@demo.test');
+    const managerApi = await rig.apiAs('manager@demo.test');
     expect((await managerApi('/bookings', { assetIds: [taken.id], startsOn, endsOn, note: 'Held for the shop' })).status).toBe(201);
     const rentalCount = async () => Number((await rig.db.query(`SELECT count(*) AS n FROM rentals`))[0].n);
     const before = await rentalCount();

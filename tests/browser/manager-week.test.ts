@@ -11,25 +11,10 @@ beforeAll(async () => {
 });
 afterAll(() => rig?.close());
 
-async function apiAs(email: string) {
-  const login = await fetch(`${rig.baseUrl}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email, password: 'nestkeeper-demo' }),
-  });
-  const { token } = await login.json();
-  return (path: string, body?: unknown) =>
-    fetch(`${rig.baseUrl}/api${path}`, {
-      method: body ? 'POST' : 'GET',
-      headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
-      body: body ? JSON.stringify(body) : undefined,
-    }).then(async (r) => ({ status: r.status, body: await r.json() }));
-}
-
 describe("the shop manager's week, told truly", () => {
   it('books from a job, swaps an item, checks out a reservation not collected, sees an early return drawn truly and a three-item lab trip not blocked', async () => {
     const today = todayIn('Europe/Berlin');
-    const api = await apiAs('manager@demo.test');
+    const api = await rig.apiAs('manager@demo.test');
     const tracker = async (assetTag: string, lastCalibratedOn = today) => {
       const res = await api('/assets', {
         type: 'tracker',
@@ -144,7 +129,7 @@ describe("the shop manager's week, told truly", () => {
 
   it("lists the firm's technicians, shows held items as such in the search, previews only what is marked at return, and reprints the hand-over sheet", async () => {
     const today = todayIn('Europe/Berlin');
-    const api = await apiAs('manager@demo.test');
+    const api = await rig.apiAs('manager@demo.test');
     const [{ name: techName }] = await rig.db.query(`SELECT name FROM users WHERE email = 'tech@demo.test'`);
     const [held] = await rig.db.query(`SELECT asset_tag FROM assets WHERE status = 'held' ORDER BY asset_tag LIMIT 1`);
     const free = (await api(`/availability?type=smr&startsOn=${today}&endsOn=${addDays(today, 1)}&limit=2`)).body.items as { id: string; assetTag: string }[];

@@ -1,6 +1,8 @@
 import Papa from 'papaparse';
 import { neutraliseFormula } from '../../shared/csv/formula-guard';
 
+const options = { newline: '\r\n', quotes: (cell: unknown) => typeof cell === 'string' && cell.startsWith("'") };
+
 /**
  * A CSV download (RFC 4180 by papaparse, CRLF line ends). Each cell passes
  * through the shared formula guard, and a guarded cell is always enclosed in
@@ -10,8 +12,14 @@ import { neutraliseFormula } from '../../shared/csv/formula-guard';
  * also marks text such as "-12.50" that is only a negative number.)
  */
 export function toCsv(fields: readonly string[], rows: readonly (readonly unknown[])[]): string {
-  return Papa.unparse(
-    { fields: [...fields], data: rows.map((row) => row.map(neutraliseFormula)) },
-    { newline: '\r\n', quotes: (cell: unknown) => typeof cell === 'string' && cell.startsWith("'") },
-  );
+  return Papa.unparse({ fields: [...fields], data: rows.map((row) => row.map(neutraliseFormula)) }, options);
 }
+
+/** Rows without the header line, for a CSV written a part at a time after a `toCsv(fields, [])` header. */
+export const csvRows = (rows: readonly (readonly unknown[])[]): string =>
+  rows.length
+    ? Papa.unparse(
+        rows.map((row) => row.map(neutraliseFormula)),
+        options,
+      )
+    : '';

@@ -17,13 +17,26 @@ export const money = (minor: number, currency: string) => formatMoney(minor, cur
 /** 1 900 basis points → "19 %". */
 export const taxRateText = (basisPoints: number) => `${new Intl.NumberFormat(LOCALE, { maximumFractionDigits: 2 }).format(basisPoints / 100)} %`;
 
+/**
+ * One formatter per time zone, made once: each new Intl.DateTimeFormat holds ICU memory outside the JavaScript heap
+ * that the collector does not see, so making one per date printed grew an audit pack's server by hundreds of MB.
+ */
+const dateTimeFormats = new Map<string, Intl.DateTimeFormat>();
+const dateTimeFormat = (timeZone: string) => {
+  let format = dateTimeFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeStyle: 'short', timeZone });
+    dateTimeFormats.set(timeZone, format);
+  }
+  return format;
+};
+const calendarDateFormat = new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeZone: 'UTC' });
+
 /** A calendar date `YYYY-MM-DD` is already the firm's date: format it in UTC so it does not shift. */
-export const calendarDate = (isoDate: string) =>
-  new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`));
+export const calendarDate = (isoDate: string) => calendarDateFormat.format(new Date(`${isoDate}T00:00:00Z`));
 
 /** A moment (ISO timestamp) as the firm's wall-clock date and time. */
-export const firmDateTime = (iso: string, timeZone: string) =>
-  new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeStyle: 'short', timeZone }).format(new Date(iso));
+export const firmDateTime = (iso: string, timeZone: string) => dateTimeFormat(timeZone).format(new Date(iso));
 
 export const typeTitle = (type: string) => assetTypeTitles[type as AssetType] ?? type;
 

@@ -144,7 +144,8 @@ function incidentsSection(doc: Pdf, input: RecordPdfInput) {
   const { view, timeZone } = input;
   if (!view.incidents.length) return none(doc, 'No damage, loss or malfunction was reported for this item in the period.');
   for (const i of view.incidents) {
-    keepTogether(doc, 90);
+    // The first row of thumbnails stays on the page of the words that describe them.
+    keepTogether(doc, 90 + (i.photos.length ? THUMB_H + 4 : 0));
     doc
       .font('Helvetica-Bold')
       .fontSize(10)

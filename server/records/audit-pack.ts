@@ -1,4 +1,7 @@
 import { once } from 'node:events';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import type { Writable } from 'node:stream';
 import { ZipArchive, type ZipEntryData } from 'archiver';
 import { overdueDays } from '../../shared/records/overdue-days';
@@ -7,21 +10,21 @@ import type { AuditPackQuery } from '../../shared/schemas/records';
 import { calibrationsForRecord, outOfToleranceAssetIds } from '../calibration';
 import { failedCheckAssetIds } from '../checks';
 import type { Scoped } from '../db/scoped';
-import { toCsv } from '../documents/csv';
+import { csvRows, toCsv } from '../documents/csv';
 import { auditSummaryPdf, type AuditSummary } from '../documents/audit-summary-pdf';
 import { equipmentRecordPdf } from '../documents/equipment-record-pdf';
 import { assetIdsSelected, getKit, inTagOrder } from '../fleet';
 import { heldAssetIds } from '../holds';
 import type { OrgContext } from '../organizations';
 import { sha256 } from './content-hash';
-import { assembleRecords } from './record-assembly';
+import { assembleRecords, type AssembledRecord } from './record-assembly';
 
 /** Items per round of queries: enough to keep the database busy, few enough that memory stays flat. */
 const BATCH = 50;
 /** A record PDF without an annex is a few kilobytes; the estimate only drives the progress bar. */
 const RECORD_BYTES_ESTIMATE = 9_000;
-/** Stop feeding the archive while this much compressed output waits for a slow reader. */
-const BACKLOG_BYTES = 4 * 1024 * 1024;
+/** Build no further file while this much of the pack waits for a slow reader. */
+const BACKLOG_BYTES = 1024 * 1024;
 
 const safeName = (s: string) => s.replace(/[^\w.-]+/g, '_').slice(0, 80);
 export const certificatePath = (r: EquipmentRecordView, calibrationId: string) => {
@@ -73,33 +76,78 @@ const indexColumns = [
   'note',
 ];
 
-/** Append one entry and wait until the archive took it and its reader keeps up, so memory stays flat. */
-async function add(archive: ZipArchive, data: Buffer | string, entry: ZipEntryData) {
-  const taken = once(archive, 'entry');
-  archive.append(data, entry);
-  await taken;
-  while (archive.readableLength + archive.writableLength > BACKLOG_BYTES) await once(archive, 'data');
+/**
+ * The ZIP as it goes out. zip-stream takes each file at once whatever the reader's pace (the archive's own buffers
+ * stay small while the backlog piles up inside it), so `add` counts what went in against what came out of the
+ * archive (its pointer) and returns only when less than BACKLOG_BYTES waits: the next record is built when the
+ * reader has nearly caught up. A reader who hangs up ends the wait with an error.
+ */
+function zipStream(out: Writable) {
+  const archive = new ZipArchive({ zlib: { level: 6 } });
+  let handedIn = 0;
+  let hungUp = false;
+  const closed = new Promise<void>((resolve) => out.once('close', () => ((hungUp = true), resolve())));
+  const finished = new Promise<void>((resolve, reject) => {
+    out.once('finish', resolve);
+    out.once('close', resolve);
+    out.once('error', reject);
+    archive.once('error', reject);
+  });
+  finished.catch(() => undefined);
+  archive.pipe(out);
+  return {
+    archive,
+    finished,
+    async add(data: Buffer, entry: ZipEntryData) {
+      const taken = once(archive, 'entry');
+      archive.append(data, { ...entry, store: true });
+      handedIn += data.length;
+      await taken;
+      while (handedIn - archive.pointer() > BACKLOG_BYTES) {
+        if (hungUp || out.destroyed) throw new Error('The reader closed the download before the pack was complete.');
+        await Promise.race([once(archive, 'data'), closed]);
+      }
+    },
+  };
+}
+
+/** index.csv, written to a temporary file a batch of rows at a time and added to the ZIP last. */
+async function indexFile() {
+  const dir = await fs.promises.mkdtemp(path.join(os.tmpdir(), 'nestkeeper-pack-'));
+  const file = path.join(dir, 'index.csv');
+  const stream = fs.createWriteStream(file);
+  const write = async (text: string) => {
+    if (text && !stream.write(text)) await once(stream, 'drain');
+  };
+  // papaparse ends a header without rows with a line break; each batch brings its own.
+  await write(toCsv(indexColumns, []).trimEnd());
+  return {
+    file,
+    addRows: (rows: unknown[][]) => write(rows.length ? `\r\n${csvRows(rows)}` : ''),
+    async close() {
+      stream.end();
+      await once(stream, 'close');
+    },
+    remove: () => {
+      stream.destroy();
+      return fs.promises.rm(dir, { recursive: true, force: true });
+    },
+  };
 }
 
 type Sources = { read: <T>(work: (tx: Scoped) => Promise<T>) => Promise<T>; ctx: OrgContext; publicUrl: string; scopeText: string };
 
 /**
  * Stream the audit pack as a ZIP into `out`: one record PDF per item, every certificate as stored, a summary PDF of
- * the period and a CSV index of every file with its SHA-256. Items are read a batch at a time and each file is
- * handed to the archive only when it has taken the last one.
+ * the period and a CSV index of every file with its SHA-256. Items are read a batch at a time; each file is built
+ * only when the reader has taken nearly all of the one before, and an item's data is let go once its files are in.
+ * What stays is the index on disk and the summary's short lines (findings, holds, days past due, missing files).
  */
 export async function writeAuditPack(out: Writable, ids: string[], query: AuditPackQuery, sources: Sources) {
   const { ctx, publicUrl } = sources;
   const period = { from: query.from, to: query.to };
-  const archive = new ZipArchive({ zlib: { level: 6 } });
-  const finished = new Promise<void>((resolve, reject) => {
-    out.on('close', resolve);
-    out.on('finish', resolve);
-    out.on('error', reject);
-    archive.on('error', reject);
-  });
-  archive.pipe(out);
-  const index: unknown[][] = [];
+  const zip = zipStream(out);
+  const index = await indexFile();
   const summary: AuditSummary = {
     firm: ctx.name,
     period,
@@ -112,74 +160,83 @@ export async function writeAuditPack(out: Writable, ids: string[], query: AuditP
     calibrations: 0,
     certificates: 0,
   };
-  for (let start = 0; start < ids.length; start += BATCH) {
-    const records = await sources.read((tx) => assembleRecords(tx, ctx, ids.slice(start, start + BATCH), period, publicUrl));
-    for (const { view, certificates, thumbnails } of records) {
-      const a = view.asset;
-      const counts = [view.calibrations.length, view.checks.length, view.holds.length, view.incidents.length, view.impactReviews.length, view.custody.length];
-      const row = (file: string, kind: string, certificateNumber: string, bytes: number | string, hash: string, note: string) => [
-        a.assetTag,
-        a.type,
-        a.serialNumber,
-        ...counts,
-        file,
-        kind,
-        certificateNumber,
-        bytes,
-        hash,
-        view.contentHash,
-        note,
-      ];
-      for (const c of view.calibrations) {
-        summary.calibrations += 1;
-        const bytes = certificates.get(c.id);
-        if (!c.certificate || !bytes) {
-          index.push(row('', 'certificate', c.certificateNumber, '', '', 'No certificate file is on record for this calibration.'));
-          summary.gaps.push({
-            assetTag: a.assetTag,
-            certificateNumber: c.certificateNumber,
-            performedOn: c.performedOn,
-            problem: 'no certificate file on record',
-          });
-          continue;
-        }
-        const path = certificatePath(view, c.id);
-        await add(archive, bytes, { name: path, store: true, date: new Date(c.recordedAt) });
-        summary.certificates += 1;
-        const note = c.certificate.readable ? 'As stored.' : 'As stored; the file does not open as a PDF.';
-        if (!c.certificate.readable)
-          summary.gaps.push({
-            assetTag: a.assetTag,
-            certificateNumber: c.certificateNumber,
-            performedOn: c.performedOn,
-            problem: 'certificate file cannot be read',
-          });
-        index.push(row(path, 'certificate', c.certificateNumber, bytes.length, c.certificate.sha256, note));
-      }
-      const pdf = await equipmentRecordPdf({
-        view,
-        certificates,
-        thumbnails,
-        timeZone: ctx.timeZone,
-        publicUrl,
-        printedAt: new Date(view.generatedAt),
-        placement: { annex: false, packFile: (id) => certificatePath(view, id) },
-      });
-      const recordPath = `records/${safeName(a.assetTag)}.pdf`;
-      await add(archive, pdf, { name: recordPath, store: true });
-      const required = a.calibration.required && !view.calibrations.length;
-      index.push(
-        row(recordPath, 'equipment record', '', pdf.length, sha256(pdf), required ? 'Needs calibration, but no certificate is on record for the period.' : ''),
-      );
-      collectSummary(summary, view, ctx.today);
+  try {
+    for (let start = 0; start < ids.length; start += BATCH) {
+      const records = await sources.read((tx) => assembleRecords(tx, ctx, ids.slice(start, start + BATCH), period, publicUrl));
+      while (records.length) await addItem(zip.add, records.shift()!, summary, index.addRows, sources);
     }
+    const summaryPdf = await auditSummaryPdf(summary);
+    await zip.add(summaryPdf, { name: 'summary.pdf' });
+    await index.addRows([['', '', '', '', '', '', '', '', '', 'summary.pdf', 'period summary', '', summaryPdf.length, sha256(summaryPdf), '', '']]);
+    await index.close();
+    zip.archive.append(fs.createReadStream(index.file), { name: 'index.csv' });
+    await zip.archive.finalize();
+    await zip.finished;
+  } catch (err) {
+    zip.archive.abort();
+    throw err;
+  } finally {
+    await index.remove();
   }
-  const summaryPdf = await auditSummaryPdf(summary);
-  await add(archive, summaryPdf, { name: 'summary.pdf', store: true });
-  index.push(['', '', '', '', '', '', '', '', '', 'summary.pdf', 'period summary', '', summaryPdf.length, sha256(summaryPdf), '', '']);
-  await add(archive, toCsv(indexColumns, index), { name: 'index.csv' });
-  await archive.finalize();
-  await finished;
+}
+
+type AddFile = (data: Buffer, entry: ZipEntryData) => Promise<void>;
+
+/** One item: its certificates as stored, then its record PDF, with their index rows and its part of the summary. */
+async function addItem(
+  add: AddFile,
+  { view, certificates, thumbnails }: AssembledRecord,
+  summary: AuditSummary,
+  addRows: (rows: unknown[][]) => Promise<void>,
+  sources: Sources,
+) {
+  const a = view.asset;
+  const counts = [view.calibrations.length, view.checks.length, view.holds.length, view.incidents.length, view.impactReviews.length, view.custody.length];
+  const rows: unknown[][] = [];
+  const row = (file: string, kind: string, certificateNumber: string, bytes: number | string, hash: string, note: string) =>
+    rows.push([a.assetTag, a.type, a.serialNumber, ...counts, file, kind, certificateNumber, bytes, hash, view.contentHash, note]);
+  for (const c of view.calibrations) {
+    summary.calibrations += 1;
+    const bytes = certificates.get(c.id);
+    if (!c.certificate || !bytes) {
+      row('', 'certificate', c.certificateNumber, '', '', 'No certificate file is on record for this calibration.');
+      summary.gaps.push({ assetTag: a.assetTag, certificateNumber: c.certificateNumber, performedOn: c.performedOn, problem: 'no certificate file on record' });
+      continue;
+    }
+    const packFile = certificatePath(view, c.id);
+    await add(bytes, { name: packFile, date: new Date(c.recordedAt) });
+    summary.certificates += 1;
+    if (!c.certificate.readable)
+      summary.gaps.push({
+        assetTag: a.assetTag,
+        certificateNumber: c.certificateNumber,
+        performedOn: c.performedOn,
+        problem: 'certificate file cannot be read',
+      });
+    row(
+      packFile,
+      'certificate',
+      c.certificateNumber,
+      bytes.length,
+      c.certificate.sha256,
+      c.certificate.readable ? 'As stored.' : 'As stored; the file does not open as a PDF.',
+    );
+  }
+  const pdf = await equipmentRecordPdf({
+    view,
+    certificates,
+    thumbnails,
+    timeZone: sources.ctx.timeZone,
+    publicUrl: sources.publicUrl,
+    printedAt: new Date(view.generatedAt),
+    placement: { annex: false, packFile: (id) => certificatePath(view, id) },
+  });
+  const recordPath = `records/${safeName(a.assetTag)}.pdf`;
+  await add(pdf, { name: recordPath });
+  const required = a.calibration.required && !view.calibrations.length;
+  row(recordPath, 'equipment record', '', pdf.length, sha256(pdf), required ? 'Needs calibration, but no certificate is on record for the period.' : '');
+  await addRows(rows);
+  collectSummary(summary, view, sources.ctx.today);
 }
 
 function collectSummary(summary: AuditSummary, view: EquipmentRecordView, today: string) {

@@ -1,11 +1,12 @@
 import { createHash } from 'node:crypto';
 import { parse } from 'csv-parse/sync';
 import * as mupdf from 'mupdf';
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import yauzl from 'yauzl';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import type { EquipmentRecordView } from '../../shared/records/views';
-import { pdfText } from '../support/pdf';
+import { pdfImagesByPage, pdfText } from '../support/pdf';
 import { bearer, binaryBody, createTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -230,5 +231,43 @@ describe('the audit pack', () => {
     const bad = await t.api.get(`/api/audit-pack/preview?from=${from}&to=${today}&scope=kit`).set(bearer(owner));
     expect(bad.status).toBe(400);
     expect(bad.body.error.details.fields).toHaveProperty('kitId');
+  });
+});
+
+describe('incident photos in the record', () => {
+  it('prints each photo’s thumbnail on the incident’s page of the PDF', async () => {
+    const bar = (
+      await t.api
+        .post('/api/assets')
+        .set(bearer(manager))
+        .send({ type: 'scale_bar', assetTag: 'BAR-R2', serialNumber: 'R2', specs: { certifiedLengthMm: 800.002, expansionPpmPerK: 0.6 } })
+    ).body;
+    // Two 640 × 480 JPEGs made by sharp; the server keeps a 320-pixel-wide thumbnail of each (tests/api/checks.test.ts).
+    const photo = (background: string) =>
+      sharp({ create: { width: 640, height: 480, channels: 3, background } })
+        .jpeg()
+        .toBuffer();
+    const reported = await t.api
+      .post('/api/incidents')
+      .set(bearer(tech))
+      .field('assetId', bar.id)
+      .field('kind', 'dropped')
+      .field('description', 'Slid off the bench onto the floor mat.')
+      .field('occurredAt', `${today}T08:30:00Z`)
+      .attach('photos', await photo('#88775f'), { filename: 'left-end.jpg', contentType: 'image/jpeg' })
+      .attach('photos', await photo('#3f5f88'), { filename: 'right-end.jpg', contentType: 'image/jpeg' });
+    expect(reported.status).toBe(201);
+    const pdf = await pdfOf(bar.id);
+    const texts = pageTexts(pdf);
+    // The hold the report started quotes the description too: the incident's page is the one listing its photos.
+    const incidentPage = texts.findIndex((text) => /Photos 2: (left|right)-end\.jpg, (left|right)-end\.jpg/.test(text));
+    expect(incidentPage).toBeGreaterThanOrEqual(0);
+    expect(texts[incidentPage]).toContain('Description Slid off the bench onto the floor mat.');
+    const images = pdfImagesByPage(pdf);
+    expect(images[incidentPage]).toEqual([
+      { width: 320, height: 240 },
+      { width: 320, height: 240 },
+    ]);
+    expect(images.flat()).toHaveLength(2);
   });
 });

@@ -33,6 +33,16 @@ describe('the record an auditor reads, in a real browser', () => {
     expect(await main.innerText()).toContain('The item was not on hold in the period.');
     expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
 
+    // A period from today on keeps only the certificate that covers today; the PDF link asks for the same period.
+    const today = new Date().toISOString().slice(0, 10);
+    await page.getByLabel('First day').fill(today);
+    await page.getByRole('heading', { name: /^Calibrations and certificates \([01]\)$/ }).waitFor();
+    expect(await page.getByRole('link', { name: 'Download PDF' }).getAttribute('href')).toContain(`from=${today}`);
+    await page.getByRole('button', { name: 'All time' }).click();
+    await page.getByRole('heading', { name: 'Calibrations and certificates (2)' }).waitFor();
+    expect(await page.getByRole('link', { name: 'Download PDF' }).getAttribute('href')).not.toContain('from=');
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+
     await page.getByRole('button', { name: 'Menu' }).click();
     await nav.getByRole('link', { name: 'Audit pack' }).click();
     await page.getByRole('heading', { level: 1, name: 'Audit pack' }).waitFor();

@@ -27,3 +27,16 @@ export function pdfText(pdf: Buffer): string {
 }
 
 export const pdfPageCount = (pdf: Buffer) => mupdf.Document.openDocument(pdf, 'application/pdf').countPages();
+
+/** The images MuPDF finds drawn on each page (width × height in pixels, as embedded), page by page. */
+export function pdfImagesByPage(pdf: Buffer): { width: number; height: number }[][] {
+  const doc = mupdf.Document.openDocument(pdf, 'application/pdf');
+  return Array.from({ length: doc.countPages() }, (_, i) => {
+    const images: { width: number; height: number }[] = [];
+    doc
+      .loadPage(i)
+      .toStructuredText('preserve-images')
+      .walk({ onImageBlock: (_bbox, _transform, image) => images.push({ width: image.getWidth(), height: image.getHeight() }) });
+    return images;
+  });
+}

@@ -1,4 +1,4 @@
-import { Link, useParams } from 'react-router-dom';
+import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { buttonClasses } from '../../components/button';
 import { ArrowLeftIcon, DownloadIcon } from '../../components/icons';
 import { LoadingPanel } from '../../components/loading-panel';
@@ -7,18 +7,29 @@ import { PageHeader } from '../../components/page-header';
 import { assetRecordPdfUrl, useAssetRecord } from '../../features/fleet/api/get-asset-record';
 import { EquipmentRecordSections } from '../../features/fleet/components/equipment-record-sections';
 import { EquipmentRecordTable } from '../../features/fleet/components/equipment-record-table';
+import { RecordPeriodPicker } from '../../features/fleet/components/record-period-picker';
 import { formatCalendarDate, useDateFormat } from '../../lib/format';
 
 export default function AssetRecordRoute() {
   const { id = '' } = useParams();
-  const record = useAssetRecord(id);
+  // The period lives in the address (?from=&to=), so a chosen period survives a reload and can be shared.
+  const [params, setParams] = useSearchParams();
+  const isDay = (v: string | null) => (v && /^\d{4}-\d{2}-\d{2}$/.test(v) ? v : undefined);
+  const chosen = { from: isDay(params.get('from')), to: isDay(params.get('to')) };
+  const backwards = !!chosen.from && !!chosen.to && chosen.to < chosen.from;
+  const period = backwards ? {} : { ...(chosen.from ? { from: chosen.from } : {}), ...(chosen.to ? { to: chosen.to } : {}) };
+  const choose = (next: { from?: string; to?: string }) =>
+    setParams({ ...(next.from ? { from: next.from } : {}), ...(next.to ? { to: next.to } : {}) }, { replace: true });
+  const record = useAssetRecord(id, period);
   const { dateTime } = useDateFormat();
+  const picker = <RecordPeriodPicker period={chosen} onChange={choose} />;
 
   if (record.isPending) return <LoadingPanel label="Putting the record together…" />;
   if (record.isError) {
     return (
       <>
         <PageHeader title="Equipment record" />
+        {picker}
         <Notice tone="error" title="The record could not be loaded">
           {record.error.message}
         </Notice>
@@ -40,12 +51,13 @@ export default function AssetRecordRoute() {
           </>
         }
         actions={
-          <a href={assetRecordPdfUrl(asset.id)} className={buttonClasses('primary')} target="_blank" rel="noopener">
+          <a href={assetRecordPdfUrl(asset.id, period)} className={buttonClasses('primary')} target="_blank" rel="noopener">
             <DownloadIcon size={16} />
             Download PDF
           </a>
         }
       />
+      {picker}
       <p className="mb-3 text-sm text-ink-700">
         Record of {formatCalendarDate(recordDate)}. Content SHA-256 <span className="break-all font-mono">{contentHash}</span>: a reprint of the same content
         shows the same hash. The PDF prints it on every page and annexes each readable certificate.

@@ -19,12 +19,18 @@ export interface AssetListParams extends AssetFilter {
   offset: number;
 }
 
+/** The equipment record's period, both days included; an end left out is open (all time when both are). */
+export interface RecordPeriodChoice {
+  from?: string;
+  to?: string;
+}
+
 export const fleetKeys = {
   all: fleetQueryRoot,
   lists: () => [...fleetKeys.all, 'list'] as const,
   list: (params: AssetListParams | AssetFilter) => [...fleetKeys.lists(), params] as const,
   one: (id: string) => [...fleetKeys.all, 'one', id] as const,
   history: (id: string) => [...fleetKeys.one(id), 'history'] as const,
-  record: (id: string) => [...fleetKeys.one(id), 'record'] as const,
+  record: (id: string, period: RecordPeriodChoice = {}) => [...fleetKeys.one(id), 'record', period] as const,
   lookup: (code: string) => [...fleetKeys.all, 'lookup', code] as const,
 };

@@ -46,9 +46,15 @@ describe('lab trips share the booking path', () => {
     expect(replies.map((r) => r.status).sort()).toEqual([201, 409, 409, 409, 409, 409]);
     const winner = replies.find((r) => r.status === 201)!;
     const winningBooking = winner.body.bookingId ?? winner.body.id;
+    const winningTrip = winner.body.bookingId ? winner.body.id : undefined;
     for (const lost of replies.filter((r) => r.status === 409)) {
       expect(lost.body.error.code).toBe('conflict');
-      expect(lost.body.error.details.conflicts).toEqual([expect.objectContaining({ assetId: a.id, assetTag: a.assetTag, bookingId: winningBooking })]);
+      // A trip that comes after a trip won is told of that trip; anything else, of the booking that holds the days.
+      if (lost.body.error.details.trips) {
+        expect(lost.body.error.details.trips).toEqual([expect.objectContaining({ id: winningTrip, assetId: a.id, assetTag: a.assetTag })]);
+      } else {
+        expect(lost.body.error.details.conflicts).toEqual([expect.objectContaining({ assetId: a.id, assetTag: a.assetTag, bookingId: winningBooking })]);
+      }
     }
     const [{ n }] = await t.db.query(`SELECT count(*)::int AS n FROM booking_items WHERE asset_id = $1 AND active`, [a.id]);
     expect(n).toBe(1);

@@ -1,5 +1,4 @@
 import type { RequestHandler } from 'express';
-import type { DatabaseWatch } from '../db/reachability';
 import { AppError } from './errors';
 
 /** Seconds a caller should wait before trying again while the database is away. */
@@ -68,7 +67,14 @@ function fromSqlState(code: string, detail: string): AppError | null {
  * While the database is known to be away, a request waits for the one probe under way instead of a pool connection of
  * its own, and is answered 503 at once if the database is still away. A 503 for an unreachable database makes the watch look.
  */
-export function databaseGate(watch: DatabaseWatch): RequestHandler {
+/** What the gate needs of db/reachability's DatabaseWatch (declared here so http/ stays below db/). */
+export interface DatabaseReachability {
+  readonly reachable: boolean;
+  suspect(): void;
+  check(): Promise<boolean>;
+}
+
+export function databaseGate(watch: DatabaseReachability): RequestHandler {
   return (_req, res, next) => {
     res.once('finish', () => {
       if (res.locals.errorCode === 'unavailable') watch.suspect();

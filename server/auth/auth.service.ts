@@ -98,8 +98,8 @@ export class AuthService {
       const user = await findPerson(tx, actor.userId);
       if (!user) throw notFound('Your account');
       const firm = await loadOrgContext(tx);
-      const { id, name, timeZone, currency } = firm;
-      return { user, organization: { id, name, timeZone, currency }, secondStep: await this.secondStep.state(tx, user, firm.secondStepRequired) };
+      const { id, name, locale, timeZone, currency } = firm;
+      return { user, organization: { id, name, locale, timeZone, currency }, secondStep: await this.secondStep.state(tx, user, firm.secondStepRequired) };
     });
   }
 

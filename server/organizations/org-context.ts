@@ -1,3 +1,4 @@
+import { DEFAULT_LOCALE } from '../../shared/formatting/firm-format';
 import { DEFAULT_DUE_SOON_DAYS, todayIn } from '../../shared/calibration/due-date';
 import { DEFAULT_TRIAGE_RATIO } from '../../shared/calibration/triage';
 import { defaultIntervalPolicy, type IntervalPolicy } from '../../shared/calibration/interval-review';
@@ -12,7 +13,9 @@ import type { Organization } from './organization.entity';
 export type OrgContext = {
   id: string;
   name: string;
+  locale: string;
   timeZone: string;
+  mailReplyTo: string;
   currency: string;
   dueSoonDays: number;
   checkoutOpensDaysBefore: number;
@@ -34,6 +37,12 @@ export const DEFAULT_TURNAROUND_DAYS = 14;
 /** Checkout opens the day before a booking starts unless the firm sets otherwise (common practice: pack the evening before). */
 export const DEFAULT_CHECKOUT_OPENS_DAYS_BEFORE = 1;
 
+/** Days' credit on an invoice when the firm has not set its own (common practice). */
+export const DEFAULT_PAYMENT_DAYS = 30;
+
+/** The firm's voice for formatting (shared/formatting). */
+export const voiceOf = (ctx: Pick<OrgContext, 'locale' | 'timeZone' | 'currency'>) => ({ locale: ctx.locale, timeZone: ctx.timeZone, currency: ctx.currency });
+
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
   const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(
     `SELECT name, time_zone, currency, settings FROM organizations WHERE id = $1`,
@@ -41,7 +50,9 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
   return {
     id: tx.organizationId,
     name: org.name,
+    locale: org.settings.locale ?? DEFAULT_LOCALE,
     timeZone: org.time_zone,
+    mailReplyTo: org.settings.mailReplyTo ?? '',
     currency: org.currency,
     dueSoonDays: org.settings.dueSoonDays ?? DEFAULT_DUE_SOON_DAYS,
     checkoutOpensDaysBefore: org.settings.checkoutOpensDaysBefore ?? DEFAULT_CHECKOUT_OPENS_DAYS_BEFORE,
@@ -54,7 +65,8 @@ export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promis
     taxRateBasisPoints: org.settings.taxRateBasisPoints ?? 0,
     // Common practice starting point: a tenth of the replacement value, within sensible bounds.
     depositPolicy: org.settings.depositPolicy ?? { percent: 10, minMinor: 50_000, maxMinor: 2_500_000 },
-    issuer: org.settings.issuer ?? { address: '', taxNumber: '', paymentTerms: '' },
+    // Common practice: 30 days' credit when a firm has not said otherwise.
+    issuer: { address: '', taxNumber: '', paymentTerms: '', paymentDays: DEFAULT_PAYMENT_DAYS, bankDetails: '', ...org.settings.issuer },
     secondStepRequired: org.settings.secondStepRequired ?? false,
   };
 }

@@ -7,6 +7,10 @@ import type { CalibrationProvider, DepositPolicy, InvoiceIssuer } from '../../sh
 import type { CheckKind } from '../../shared/schemas/checks';
 
 export type OrganizationSettings = {
+  /** BCP 47 locale for dates, numbers and money (shared/formatting). */
+  locale: string;
+  /** Reply-To of the firm's mails. */
+  mailReplyTo: string;
   dueSoonDays: number;
   checkoutOpensDaysBefore: number;
   decisionRule: DecisionRule;
@@ -21,7 +25,7 @@ export type OrganizationSettings = {
   taxRateBasisPoints: number;
   depositPolicy: DepositPolicy;
   /** The firm as it must appear on its invoices: address, tax number, how to pay. */
-  issuer: InvoiceIssuer;
+  issuer: Partial<InvoiceIssuer>;
   /** Owners and billing clerks must sign in with a second step; auth's per-request check reads this key too. */
   secondStepRequired: boolean;
 };

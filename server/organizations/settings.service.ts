@@ -9,7 +9,9 @@ import { Organization } from './organization.entity';
 
 const view = (ctx: Awaited<ReturnType<typeof loadOrgContext>>): OrganizationSettingsView => ({
   name: ctx.name,
+  locale: ctx.locale,
   timeZone: ctx.timeZone,
+  mailReplyTo: ctx.mailReplyTo,
   currency: ctx.currency,
   dueSoonDays: ctx.dueSoonDays,
   checkoutOpensDaysBefore: ctx.checkoutOpensDaysBefore,
@@ -39,7 +41,9 @@ export function updateSettings(db: DataSource, actor: Actor, patch: z.infer<type
     if (patch.depositPolicy) org.settings = { ...org.settings, depositPolicy: patch.depositPolicy };
     if (patch.providers) org.settings = { ...org.settings, providers: patch.providers };
     if (patch.intervalPolicy) org.settings = { ...org.settings, intervalPolicy: patch.intervalPolicy };
-    if (patch.issuer) org.settings = { ...org.settings, issuer: patch.issuer };
+    if (patch.issuer) org.settings = { ...org.settings, issuer: { ...org.settings.issuer, ...patch.issuer } };
+    if (patch.locale) org.settings = { ...org.settings, locale: patch.locale };
+    if (patch.mailReplyTo !== undefined) org.settings = { ...org.settings, mailReplyTo: patch.mailReplyTo };
     if (patch.secondStepRequired !== undefined) org.settings = { ...org.settings, secondStepRequired: patch.secondStepRequired };
     if (patch.tolerances) org.settings = { ...org.settings, tolerances: { ...org.settings.tolerances, ...patch.tolerances } };
     await tx.manager.save(Organization, org);

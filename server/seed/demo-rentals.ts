@@ -49,6 +49,8 @@ const issuer = {
   address: 'Forge Lane 12, 41877 Wrenhallow',
   taxNumber: 'WH-7781-0042',
   paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.',
+  paymentDays: 14,
+  bankDetails: 'Brackenmoor Dimensional Works · Wrenhallow Mutual Bank · IBAN XX00 0000 0000 0000 0000 00 (invented)',
 };
 
 /** Day, week (7 days), month (28 days) and late fee per day, in cents (invented prices). */

@@ -9,7 +9,7 @@ export type SecondStepState = { on: boolean; requiredForRole: boolean; owed: boo
 /** `GET /api/auth/me`: who is signed in, and the firm whose time zone and currency the screens use. */
 export type SessionView = {
   user: UserView;
-  organization: { id: string; name: string; timeZone: string; currency: string };
+  organization: { id: string; name: string; locale: string; timeZone: string; currency: string };
   secondStep: SecondStepState;
 };
 

@@ -11,13 +11,27 @@ export type CalibrationProvider = { name: string; turnaroundDays: number };
 export type DepositPolicy = { percent: number; minMinor: number; maxMinor: number };
 
 /** What every invoice must say about who issues it; kept on each invoice as it was on the day of issue. */
-export type InvoiceIssuer = { address: string; taxNumber: string; paymentTerms: string };
+export type InvoiceIssuer = {
+  address: string;
+  taxNumber: string;
+  /** The words printed under "How to pay". */
+  paymentTerms: string;
+  /** Days from the invoice date to its due date (0 = due on receipt). */
+  paymentDays: number;
+  /** Bank details printed on every invoice (account holder, IBAN, BIC or the local equivalent). */
+  bankDetails: string;
+};
 
 /** `GET /api/settings`: the firm's settings, each with its default filled in. */
 export type OrganizationSettingsView = {
   name: string;
+  /** The firm's locale (dates, numbers, money on screens, mails, PDFs). */
+  locale: string;
+  /** IANA time zone; the firm's calendar and clock. */
   timeZone: string;
   currency: string;
+  /** Where replies to the firm's mails go (Reply-To); empty means the sending address. */
+  mailReplyTo: string;
   /** Days before the due date an item counts as "due soon". */
   dueSoonDays: number;
   /** How many days before a booking starts its checkout opens; earlier needs a reason (default 1). */

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { calibrationStates } from '../calibration/due-date';
-import { calendarDate, text } from './common';
+import { calendarDate, emailAddress, text } from './common';
+import { firmLocales, isTimeZoneName } from '../formatting/firm-format';
 import { checkKinds, tolerancePayload } from './check-kinds';
 import { assetSortFields, assetStatuses, assetTypes, tipPositions, typesWithFirmware, type AssetType } from '../assets/vocabulary';
 
@@ -155,20 +156,17 @@ export const organizationSettingsPayload = z
       address: text(400),
       taxNumber: text(40),
       paymentTerms: text(600),
+      paymentDays: z.number().int('must be whole days').min(0, 'must be 0 or more days').max(365, 'must be at most 365 days').optional(),
+      bankDetails: text(600).optional(),
     }),
+    locale: z.enum(firmLocales, { message: `must be one of ${firmLocales.join(', ')}` }),
+    mailReplyTo: z.union([z.literal(''), emailAddress]),
     triageRatio: z.number({ message: 'must be a number' }).min(1, 'must be at least 1 (1:1)').max(20, 'must be at most 20 (20:1)'),
     dueSoonDays: z.number().int().min(1, 'must be at least 1 day').max(365, 'must be at most 365 days'),
     /** Owners and billing clerks must sign in with a second step (TOTP). */
     secondStepRequired: z.boolean(),
     checkoutOpensDaysBefore: z.number().int('must be whole days').min(0, 'must be 0 or more days').max(365, 'must be at most 365 days'),
-    timeZone: text(64).refine((tz) => {
-      try {
-        new Intl.DateTimeFormat('en', { timeZone: tz });
-        return true;
-      } catch {
-        return false;
-      }
-    }, 'is not a time zone name like Europe/Berlin'),
+    timeZone: text(64).refine(isTimeZoneName, 'is not a time zone from the IANA list, like Europe/Berlin or America/Chicago'),
   })
   .partial()
   .strict();

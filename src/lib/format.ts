@@ -1,69 +1,48 @@
-import { createContext, useContext, useMemo } from 'react';
+import { createContext, useContext } from 'react';
+import { DEFAULT_LOCALE, firmFormat, type FirmFormat, type FirmVoice } from '../../shared/formatting/firm-format';
+import { formatMoney as formatMoneyIn } from '../../shared/billing/money';
 
 /**
- * Dates and times are shown in the organization's time zone (DESIGN.md §5).
- * The shell provides it from the signed-in session; formatting is Intl only.
+ * Every screen formats dates, times, money and numbers in the firm's locale and time zone (settings), through the same
+ * shared module the server uses for mails and PDFs. The signed-in shell (or a public page that knows its firm) provides
+ * the firm's voice; the plain functions below read the voice last provided, so code outside components agrees too.
  */
-export const TimeZoneContext = createContext<string | undefined>(undefined);
+const viewerTimeZone = Intl.DateTimeFormat().resolvedOptions().timeZone;
+const beforeSignIn: FirmVoice = { locale: DEFAULT_LOCALE, timeZone: viewerTimeZone, currency: 'EUR' };
 
-const locale = undefined; // the browser's own locale
+let current: FirmFormat = firmFormat(beforeSignIn, viewerTimeZone);
+export const FirmFormatContext = createContext<FirmFormat>(current);
 
-function toDate(value: string | number | Date): Date {
-  return value instanceof Date ? value : new Date(value);
+/** The firm's format for a voice; also makes it the one the plain functions use. */
+export function adoptFirmVoice(voice: FirmVoice): FirmFormat {
+  if (current.locale !== voice.locale || current.timeZone !== voice.timeZone || current.currency !== voice.currency) {
+    current = firmFormat(voice, viewerTimeZone);
+  }
+  return current;
 }
 
-export function formatDateTime(value: string | number | Date | null | undefined, timeZone?: string): string {
-  if (value === null || value === undefined || value === '') return '—';
-  const date = toDate(value);
-  if (Number.isNaN(date.getTime())) return String(value);
-  return new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeStyle: 'short', timeZone }).format(date);
-}
+/** The firm's formatters inside a component. */
+export const useFirmFormat = () => useContext(FirmFormatContext);
 
-export function formatDate(value: string | number | Date | null | undefined, timeZone?: string): string {
-  if (value === null || value === undefined || value === '') return '—';
-  const date = toDate(value);
-  if (Number.isNaN(date.getTime())) return String(value);
-  return new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeZone }).format(date);
-}
+type Value = string | number | Date | null | undefined;
+export const formatDateTime = (value: Value) => current.dateTime(value);
+export const formatDate = (value: Value) => current.date(value);
+/** A calendar date `YYYY-MM-DD` (already the firm's date: no shift). */
+export const formatCalendarDate = (value: string | null | undefined) => current.date(value);
+export const formatCount = (value: number) => current.count(value);
+/** A plain number with at most `digits` decimals, in the firm's locale. */
+export const formatNumber = (value: number, digits = 1) => current.number(value, digits);
+/** Integer minor units in a currency, in the firm's locale. */
+export const formatMoney = (minor: number | null | undefined, currency: string) => formatMoneyIn(minor, currency, current.locale);
 
 /** ISO timestamp for machine-readable `<time dateTime>` attributes and CSV. */
 export function isoTimestamp(value: string | number | Date): string {
-  const date = toDate(value);
+  const date = value instanceof Date ? value : new Date(value);
   return Number.isNaN(date.getTime()) ? String(value) : date.toISOString();
 }
 
-export function formatCount(value: number): string {
-  return new Intl.NumberFormat(locale).format(value);
-}
-
-/** Formatters bound to the organization's time zone. */
-export function useDateFormat() {
-  const timeZone = useContext(TimeZoneContext);
-  return useMemo(
-    () => ({
-      timeZone,
-      dateTime: (value: string | number | Date | null | undefined) => formatDateTime(value, timeZone),
-      date: (value: string | number | Date | null | undefined) => formatDate(value, timeZone),
-    }),
-    [timeZone],
-  );
-}
-
 /** Money helpers live in shared/ so invoices and screens print amounts alike. */
-export { currencyExponent as currencyDigits, formatMoney } from '../../shared/billing/money';
-
-/** A plain number with at most `digits` decimals, in the browser's locale. */
-export function formatNumber(value: number, digits = 1): string {
-  return new Intl.NumberFormat(locale, { maximumFractionDigits: digits }).format(value);
-}
-
-/** A calendar date `YYYY-MM-DD` (no time zone shift: it already is the organization's date). */
-export function formatCalendarDate(value: string | null | undefined): string {
-  if (!value) return '—';
-  const [y, m, d] = value.split('-').map(Number);
-  if (!y || !m || !d) return value;
-  return new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)));
-}
+export { currencyExponent as currencyDigits } from '../../shared/billing/money';
 
 /** A file size people read: "840 KB", "2.4 MB". */
 export const formatFileSize = (bytes: number) =>

@@ -137,6 +137,8 @@ function invoice(over: Partial<InvoiceView> = {}): InvoiceView {
       address: 'Forge Lane 12, Wrenhallow',
       taxNumber: 'WH-7781-0042',
       paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.',
+      paymentDays: 14,
+      bankDetails: '',
     },
     issuedOn: '2025-03-14',
     issuedAt: '2025-03-14T10:00:00Z',

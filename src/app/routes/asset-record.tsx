@@ -8,7 +8,7 @@ import { assetRecordPdfUrl, useAssetRecord } from '../../features/fleet/api/get-
 import { EquipmentRecordSections } from '../../features/fleet/components/equipment-record-sections';
 import { EquipmentRecordTable } from '../../features/fleet/components/equipment-record-table';
 import { RecordPeriodPicker } from '../../features/fleet/components/record-period-picker';
-import { formatCalendarDate, useDateFormat } from '../../lib/format';
+import { formatCalendarDate, useFirmFormat } from '../../lib/format';
 
 export default function AssetRecordRoute() {
   const { id = '' } = useParams();
@@ -21,7 +21,7 @@ export default function AssetRecordRoute() {
   const choose = (next: { from?: string; to?: string }) =>
     setParams({ ...(next.from ? { from: next.from } : {}), ...(next.to ? { to: next.to } : {}) }, { replace: true });
   const record = useAssetRecord(id, period);
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const picker = <RecordPeriodPicker period={chosen} onChange={choose} />;
 
   if (record.isPending) return <LoadingPanel label="Putting the record together…" />;

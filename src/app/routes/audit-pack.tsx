@@ -4,11 +4,11 @@ import { PageHeader } from '../../components/page-header';
 import { Panel } from '../../components/panel';
 import { useKits } from '../../features/kits/api/get-kits';
 import { AuditPackForm } from '../../features/records/components/audit-pack-form';
-import { useDateFormat } from '../../lib/format';
+import { useFirmFormat } from '../../lib/format';
 
 export default function AuditPackRoute() {
   const kits = useKits();
-  const { timeZone } = useDateFormat();
+  const { timeZone } = useFirmFormat();
   return (
     <>
       <PageHeader

@@ -7,14 +7,14 @@ import { useCheck } from '../../features/checks/api/get-check';
 import { CheckResult } from '../../features/checks/components/check-result';
 import { checkKindWords } from '../../features/checks/components/check-words';
 import { useAsset } from '../../features/fleet/api/get-asset';
-import { useDateFormat } from '../../lib/format';
+import { useFirmFormat } from '../../lib/format';
 
 /** One stored field check, with the server's numbers. */
 export default function CheckRoute() {
   const { id = '' } = useParams();
   const check = useCheck(id);
   const asset = useAsset(check.data?.assetId ?? '');
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   if (check.isPending) return <LoadingPanel label="Loading the check…" />;
   if (check.isError) return <LoadFailure error={check.error} thing="check" notFound="No field check in your firm has this address." />;
   const c = check.data;

@@ -15,7 +15,7 @@ import { ChargesEditor } from '../../features/rentals/components/charges-editor'
 import { HandoverReadiness } from '../../features/rentals/components/handover-readiness';
 import { RenterCautions, RentalItems } from '../../features/rentals/components/rental-items';
 import { RentalStateChip } from '../../features/rentals/components/rental-words';
-import { formatCalendarDate, useDateFormat } from '../../lib/format';
+import { formatCalendarDate, useFirmFormat } from '../../lib/format';
 import { can } from '../../lib/roles';
 import type { RentalView } from '../../../shared/billing/views';
 
@@ -27,7 +27,7 @@ const renterAtWork = (r: RentalView) =>
 export default function RentalRoute() {
   const { id = '' } = useParams();
   const { user } = useSession();
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const rental = useRental(id, renterAtWork);
 
   if (rental.isPending) return <LoadingPanel label="Loading the rental…" />;

@@ -3,9 +3,10 @@ import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import { isApiError } from '../../../lib/api-client';
 import { readCopy } from '../../../lib/field/field-store';
-import { TimeZoneContext } from '../../../lib/format';
+import { adoptFirmVoice, FirmFormatContext } from '../../../lib/format';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
+import { DEFAULT_LOCALE } from '../../../../shared/formatting/firm-format';
 import { useMe } from '../api/get-me';
 import { authKeys } from '../api/keys';
 import { SecondStepOwed } from './second-step-owed';
@@ -16,6 +17,11 @@ import { SessionContext } from './session-context';
  * their firm requires sets it up first (the server answers them nothing else meanwhile). Without signal, the session kept
  * with the phone's field copy stands in until the server answers again (it ends at sign-out, which erases the copy).
  */
+type Firm = { locale?: string; timeZone: string; currency: string };
+// A phone's field copy kept from before firms had a locale carries none: the default stands in.
+const voiceOf = (firm: Firm) => ({ locale: firm.locale ?? DEFAULT_LOCALE, timeZone: firm.timeZone, currency: firm.currency });
+const voiceKey = (firm: Firm) => Object.values(voiceOf(firm)).join('|');
+
 export function RequireSession({ children }: { children: ReactNode }) {
   const me = useMe();
   const location = useLocation();
@@ -32,7 +38,10 @@ export function RequireSession({ children }: { children: ReactNode }) {
   if (session) {
     return (
       <SessionContext value={session}>
-        <TimeZoneContext value={session.organization.timeZone}>{session.secondStep?.owed ? <SecondStepOwed /> : children}</TimeZoneContext>
+        {/* Keyed by the voice: a change of locale or zone redraws every screen in it, memoized ones included. */}
+        <FirmFormatContext key={voiceKey(session.organization)} value={adoptFirmVoice(voiceOf(session.organization))}>
+          {session.secondStep?.owed ? <SecondStepOwed /> : children}
+        </FirmFormatContext>
       </SessionContext>
     );
   }

@@ -3,7 +3,7 @@ import { Button } from '../../../components/button';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { StatusChip } from '../../../components/status-chip';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { useEndSession, useSessions, useSignOutEverywhere } from '../api/sessions';
 
 /** A browser's User-Agent in a few words a person recognises. */
@@ -38,7 +38,7 @@ export function SessionsPanel() {
   const end = useEndSession();
   const navigate = useNavigate();
   const everywhere = useSignOutEverywhere({ onSignedOut: () => navigate('/sign-in', { replace: true }) });
-  const fmt = useDateFormat();
+  const fmt = useFirmFormat();
 
   if (sessions.isPending) return <LoadingPanel />;
   if (sessions.isError) return <Notice tone="error">{sessions.error.message}</Notice>;

@@ -8,7 +8,7 @@ import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
 import { TableHead } from '../../../components/table-head';
 import { isApiError } from '../../../lib/api-client';
-import { formatMoney, useDateFormat } from '../../../lib/format';
+import { formatMoney, useFirmFormat } from '../../../lib/format';
 import { usePaymentMode } from '../api/get-payment-mode';
 import { useTakeDeposit } from '../api/take-deposit';
 import { DepositRequest } from './deposit-request';
@@ -21,7 +21,7 @@ const card = (hold: DepositAuthorizationView | null) => (hold?.cardLast4 ? `${br
 
 /** The rental's deposit: the hold on the renter's card, taking it, and settling it at return (`charges`: the rental's damage and loss charges, set before settling). */
 export function DepositPanel({ rental, canManage, charges }: { rental: RentalView; canManage: boolean; charges: ReactNode }) {
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const { state, authorization: hold, authorizations: holds } = rental.deposit;
   const money = (minor: number) => formatMoney(minor, rental.currency);
   const stillOut = rental.state === 'reserved' || rental.state === 'out';

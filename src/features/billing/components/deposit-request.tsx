@@ -6,7 +6,7 @@ import { MailIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
 import { FactList } from '../../../components/panel';
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { useRequestDeposit } from '../api/request-deposit';
 import { paymentProblem } from './payment-problem';
 
@@ -38,7 +38,7 @@ function LinkCode({ url }: { url: string }) {
  * payment provider's page; the state follows the provider's signed events.
  */
 export function DepositRequest({ rentalId, request, sentTo }: { rentalId: string; request: DepositRequestView | null; sentTo: string }) {
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const send = useRequestDeposit();
   const [sent, setSent] = useState<DepositRequestReply>();
   const [problem, setProblem] = useState<string>();

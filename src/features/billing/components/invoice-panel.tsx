@@ -5,7 +5,7 @@ import { MoneyLines } from '../../../components/money-lines';
 import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
 import { todayIn } from '../../../lib/calibration';
-import { formatCalendarDate, formatMoney, useDateFormat } from '../../../lib/format';
+import { formatCalendarDate, formatMoney, useFirmFormat } from '../../../lib/format';
 import { invoiceDocumentUrl, rentalInvoiceUrl } from '../api/get-invoices';
 import { useIssueInvoice } from '../api/issue-invoice';
 import type { InvoiceLine, InvoiceSummary, RentalView } from '../../../../shared/billing/views';
@@ -24,7 +24,7 @@ function notReady(rental: RentalView): string | null {
 /** What the rental comes to, the invoice, what was received against it and its credit notes (`charges`: the damage and loss charges, shown while settling). */
 export function InvoicePanel({ rental, canCharge, charges }: { rental: RentalView; canCharge: boolean; charges: ReactNode }) {
   const issue = useIssueInvoice();
-  const { timeZone } = useDateFormat();
+  const { timeZone } = useFirmFormat();
   const [creditOpen, setCreditOpen] = useState(false);
   const [paymentOpen, setPaymentOpen] = useState(false);
   const { settlement, currency } = rental;

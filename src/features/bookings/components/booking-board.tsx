@@ -6,7 +6,7 @@ import { StatusChip } from '../../../components/status-chip';
 import type { AssetView } from '../../../../shared/assets/views';
 import { assetTypeTitles } from '../../../lib/assets';
 import { addDays, calendarDayIn } from '../../../lib/bookings';
-import { TimeZoneContext } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import type { BookingView } from '../../../../shared/bookings/views';
 import './booking-board.css';
 import { bookingStateWords, bookingTitle, dayRange, shortDay } from './booking-words';
@@ -385,7 +385,7 @@ const BoardRow = memo(function BoardRow({
   bookHref,
 }: BoardRowProps) {
   const rowAssets = useMemo(() => (row.kind === 'kit' ? row.members : [row.asset]), [row]);
-  const timeZone = useContext(TimeZoneContext) ?? 'UTC';
+  const timeZone = useFirmFormat().timeZone;
   const { bars, lanes } = useMemo(() => layoutBars(bookings, from, days, today, rowAssets, timeZone), [bookings, from, days, today, rowAssets, timeZone]);
   const height = lanes * LANE_PX + ROW_PAD_PX * 2;
   const last = addDays(from, days - 1);

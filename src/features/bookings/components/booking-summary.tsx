@@ -68,11 +68,11 @@ export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booki
           },
           { term: 'Note', value: booking.note },
           ...(booking.checkedOutAt
-            ? [{ term: 'Checked out', value: `${formatDateTime(booking.checkedOutAt, timeZone)}, taken by ${booking.takenBy ?? '—'}` }]
+            ? [{ term: 'Checked out', value: `${formatDateTime(booking.checkedOutAt)}, taken by ${booking.takenBy ?? '—'}` }]
             : []),
           ...(booking.checkoutNote ? [{ term: 'Checkout note', value: booking.checkoutNote }] : []),
           ...(booking.returnedAt
-            ? [{ term: 'Returned', value: `${formatDateTime(booking.returnedAt, timeZone)}, brought back by ${booking.broughtBackBy ?? '—'}` }]
+            ? [{ term: 'Returned', value: `${formatDateTime(booking.returnedAt)}, brought back by ${booking.broughtBackBy ?? '—'}` }]
             : []),
         ]}
       />

@@ -8,7 +8,7 @@ import { useCounterDay } from '../api/get-counter-day';
 import { useMyKit } from '../api/get-my-kit';
 import type { BookingView } from '../../../../shared/bookings/views';
 import { blockReasonText, todayIn } from '../../../lib/bookings';
-import { TimeZoneContext } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { BookingStateChip, bookingContents, bookingTitle, dayRange } from './booking-words';
 
 const lateWords = (days: number) => `${days} ${days === 1 ? 'day' : 'days'} late`;
@@ -94,7 +94,7 @@ export function TodayAtCounter() {
 /** Technician's "Kit I carry now" and "Next". */
 export function MyKitPanels() {
   const mine = useMyKit();
-  const today = todayIn(useContext(TimeZoneContext) ?? 'UTC');
+  const today = todayIn(useFirmFormat().timeZone);
   if (mine.isPending) return <LoadingPanel label="Looking for your kit…" />;
   if (mine.isError) return <Notice tone="error">{mine.error.message}</Notice>;
   return (

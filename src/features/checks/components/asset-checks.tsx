@@ -3,7 +3,7 @@ import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
 import type { AssetView } from '../../../../shared/assets/views';
-import { formatCount, useDateFormat } from '../../../lib/format';
+import { formatCount, useFirmFormat } from '../../../lib/format';
 import { useChecks } from '../api/get-checks';
 import { useTipValidation } from '../api/get-tip-validation';
 import { useTipForecast } from '../api/get-tip-forecast';
@@ -18,7 +18,7 @@ export const judgedUm = (c: CheckView) => (c.kind === 'tip_validation' ? c.resul
 
 /** The asset page's field checks: state per position and trend for tips, then every check, newest first. */
 export function AssetChecks({ asset, className = '' }: { asset: AssetView; className?: string }) {
-  const { dateTime, timeZone } = useDateFormat();
+  const { dateTime, timeZone } = useFirmFormat();
   const isTip = asset.type === 'tip';
   const checks = useChecks({ assetId: asset.id, limit: 100, offset: 0 });
   const tipStatus = useTipValidation(asset.id, { enabled: isTip });

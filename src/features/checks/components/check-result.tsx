@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/notice';
 import { FactList } from '../../../components/panel';
-import { formatNumber, useDateFormat } from '../../../lib/format';
+import { formatNumber, useFirmFormat } from '../../../lib/format';
 import type { CheckView } from '../../../../shared/checks/views';
 import { checkKindWords, decisionRuleWords, positionWords, toleranceText, um } from './check-words';
 import { DecisionMark } from './decision-mark';
@@ -12,7 +12,7 @@ const pointText = (p: { x: number; y: number; z: number }) => `${formatNumber(p.
 
 /** A stored check: the server's own numbers and decision, word plus mark. */
 export function CheckResult({ check, assetTag, heldNotice = true }: { check: CheckView; assetTag?: string; heldNotice?: boolean }) {
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const r = check.result;
   let facts: { term: string; value: ReactNode; mono?: boolean }[] = [];
   if (check.kind === 'tip_validation') {

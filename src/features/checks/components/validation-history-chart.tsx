@@ -50,7 +50,7 @@ export function ValidationHistoryChart({ checks, timeZone, forecasts = [] }: { c
   const summary = `Largest deviation per tip validation: ${points
     .map(
       (c) =>
-        `${formatDate(c.performedAt, timeZone)} ${c.position} ${formatNumber(c.result.maxDeviationUm)} µm of ${formatNumber(c.result.toleranceUm)} µm (${c.result.decision})`,
+        `${formatDate(c.performedAt)} ${c.position} ${formatNumber(c.result.maxDeviationUm)} µm of ${formatNumber(c.result.toleranceUm)} µm (${c.result.decision})`,
     )
     .join('; ')}.`;
 
@@ -119,10 +119,10 @@ export function ValidationHistoryChart({ checks, timeZone, forecasts = [] }: { c
           );
         })}
         <text x={L} y={H - 10} fontSize={11} fill="#3a4660">
-          {formatDate(points[0].performedAt, timeZone)}
+          {formatDate(points[0].performedAt)}
         </text>
         <text x={W - R} y={H - 10} textAnchor="end" fontSize={11} fill="#3a4660">
-          {formatDate(t1, timeZone)}
+          {formatDate(t1)}
         </text>
       </svg>
       <figcaption className="flex flex-wrap gap-x-4 text-sm text-ink-700">

@@ -6,14 +6,14 @@ import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../compone
 import type { AssetView } from '../../../../shared/assets/views';
 import { assetTypeTitles, typesWithFirmware } from '../../../lib/assets';
 import { formatWattHours, shippingClass, shippingClassText, wattHours } from '../../../lib/batteries';
-import { formatCalendarDate, formatCount, formatMoney, formatNumber, useDateFormat } from '../../../lib/format';
+import { formatCalendarDate, formatCount, formatMoney, formatNumber, useFirmFormat } from '../../../lib/format';
 
 export { FactList, Panel } from '../../../components/panel';
 
 const num = (v: unknown) => (typeof v === 'number' ? v : null);
 
 export function AssetIdentity({ asset }: { asset: AssetView }) {
-  const { date } = useDateFormat();
+  const { date } = useFirmFormat();
   return (
     <Panel title="Identity">
       <FactList

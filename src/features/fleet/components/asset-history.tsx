@@ -1,13 +1,13 @@
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { useAssetHistory } from '../api/get-asset-history';
 import { Panel } from './asset-facts';
 
 /** Changes to the record and hand-overs, newest first. */
 export function AssetHistory({ assetId }: { assetId: string }) {
   const history = useAssetHistory(assetId);
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   return (
     <Panel title="History">
       {history.isPending ? <LoadingPanel label="Loading the history…" /> : null}

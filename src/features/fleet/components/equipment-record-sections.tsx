@@ -3,7 +3,7 @@ import type { EquipmentRecordView } from '../../../../shared/records/views';
 import { Panel } from '../../../components/panel';
 import { apiUrl } from '../../../lib/api-client';
 import { checkKindTitles } from '../../../../shared/checks/vocabulary';
-import { formatCalendarDate, useDateFormat } from '../../../lib/format';
+import { formatCalendarDate, useFirmFormat } from '../../../lib/format';
 
 const words = (v: string) => v.replace(/_/g, ' ');
 const someone = (name: string | null) => name ?? 'someone no longer on record';
@@ -35,7 +35,7 @@ function Entry({ heading, lines }: { heading: ReactNode; lines: (ReactNode | nul
 
 /** Every event the record holds, dated and signed, section by section as the PDF prints them. */
 export function EquipmentRecordSections({ record }: { record: EquipmentRecordView }) {
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   return (
     <div className="flex flex-col gap-4">
       <Section title="Calibrations and certificates" count={record.calibrations.length} empty="No calibration is on record for this item in the period.">

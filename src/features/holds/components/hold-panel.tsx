@@ -5,7 +5,7 @@ import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
 import { StatusChip } from '../../../components/status-chip';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { useHolds } from '../api/get-holds';
 import { missingEvidence, useReleaseAsset } from '../api/release-asset';
 import { holdReasonWords } from './hold-words';
@@ -17,7 +17,7 @@ import { holdReasonWords } from './hold-words';
 export function HoldPanel({ assetId, assetTag, canRelease, className = '' }: { assetId: string; assetTag: string; canRelease: boolean; className?: string }) {
   const holds = useHolds(assetId);
   const release = useReleaseAsset();
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const [note, setNote] = useState('');
   const noteId = useId();
   const current = holds.data?.items.find((h) => !h.releasedAt);

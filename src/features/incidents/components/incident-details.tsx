@@ -3,12 +3,12 @@ import { AssetStatusChip } from '../../../components/asset-status';
 import { DownloadIcon } from '../../../components/icons';
 import { FactList, Panel } from '../../../components/panel';
 import { assetTypeTitles } from '../../../lib/assets';
-import { formatFileSize, formatMoney, useDateFormat } from '../../../lib/format';
+import { formatFileSize, formatMoney, useFirmFormat } from '../../../lib/format';
 import type { IncidentView } from '../../../../shared/incidents/views';
 import { IncidentStateChip, incidentKindWords } from './incident-words';
 
 export function IncidentFacts({ incident, currency }: { incident: IncidentView; currency: string }) {
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   return (
     <Panel title="Report">
       <FactList

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
-import { formatCount, useDateFormat } from '../../../lib/format';
+import { formatCount, useFirmFormat } from '../../../lib/format';
 import { useIncidents } from '../api/get-incidents';
 import type { IncidentListParams } from '../api/keys';
 import { IncidentStateChip, incidentKindWords } from './incident-words';
@@ -19,7 +19,7 @@ export function IncidentList({
   moreLink?: { to: string; label: (total: number) => string };
 }) {
   const incidents = useIncidents(params);
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   if (incidents.isPending) return <LoadingPanel label="Loading incidents…" />;
   if (incidents.isError) return <Notice tone="error">{incidents.error.message}</Notice>;
   const { items, total } = incidents.data;

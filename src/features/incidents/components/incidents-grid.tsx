@@ -3,14 +3,14 @@ import { useMemo } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { DataGrid } from '../../../components/data-grid';
 import { assetTypeTitles } from '../../../lib/assets';
-import { isoTimestamp, useDateFormat } from '../../../lib/format';
+import { isoTimestamp, useFirmFormat } from '../../../lib/format';
 import type { IncidentView } from '../../../../shared/incidents/views';
 import { IncidentStateChip, incidentKindWords, incidentStateWords } from './incident-words';
 
 /** Every incident as a table: sort, filter, export; a click opens it. */
 export function IncidentsGrid({ rows, loading }: { rows: IncidentView[] | undefined; loading?: boolean }) {
   const navigate = useNavigate();
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const columns = useMemo<ColDef<IncidentView>[]>(
     () => [
       {

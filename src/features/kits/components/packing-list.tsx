@@ -1,10 +1,10 @@
 import { assetTypeTitles } from '../../../lib/assets';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import type { KitWithMembersView } from '../../../../shared/assets/views';
 
 /** The printable packing list: hidden on screen, the only thing printed from the kit page. */
 export function PackingList({ kit, organizationName }: { kit: KitWithMembersView; organizationName: string }) {
-  const { date } = useDateFormat();
+  const { date } = useFirmFormat();
   const tick = <span aria-hidden="true" className="inline-block size-5 border-2 border-ink-900" />;
   return (
     <section aria-label="Packing list (printed)" className="hidden text-black print:block">

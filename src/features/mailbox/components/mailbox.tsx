@@ -4,7 +4,7 @@ import { EmptyState } from '../../../components/empty-state';
 import { MailIcon, RefreshIcon } from '../../../components/icons';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
-import { formatCount, useDateFormat } from '../../../lib/format';
+import { formatCount, useFirmFormat } from '../../../lib/format';
 import { useMessages } from '../api/get-messages';
 import { MessageReader } from './message-reader';
 
@@ -15,7 +15,7 @@ export function Mailbox() {
   const [offset, setOffset] = useState(0);
   const [selectedId, setSelectedId] = useState<string>();
   const messages = useMessages({ limit: pageSize, offset });
-  const fmt = useDateFormat();
+  const fmt = useFirmFormat();
 
   if (messages.isPending) return <LoadingPanel label="Loading messages…" />;
   if (messages.isError) {

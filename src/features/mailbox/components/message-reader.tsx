@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Button } from '../../../components/button';
 import { ArrowLeftIcon } from '../../../components/icons';
-import { formatFileSize, useDateFormat } from '../../../lib/format';
+import { formatFileSize, useFirmFormat } from '../../../lib/format';
 import type { MailMessageView } from '../../../../shared/notifications/views';
 
 const webAddress = /(https?:\/\/[^\s<>"]+)/;
@@ -25,7 +25,7 @@ function withLinks(text: string) {
  * no same-origin access, no navigation).
  */
 export function MessageReader({ message, onBack }: { message: MailMessageView; onBack?: () => void }) {
-  const fmt = useDateFormat();
+  const fmt = useFirmFormat();
   const hasText = Boolean(message.text?.trim());
   const hasHtml = Boolean(message.html?.trim());
   const [showHtml, setShowHtml] = useState(!hasText && hasHtml);

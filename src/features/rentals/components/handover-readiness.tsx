@@ -6,7 +6,7 @@ import { Field } from '../../../components/field';
 import { FactList, Panel } from '../../../components/panel';
 import { StatusChip } from '../../../components/status-chip';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { useOverrideHandover } from '../api/override-handover';
 
 /**
@@ -15,7 +15,7 @@ import { useOverrideHandover } from '../api/override-handover';
  * owner's override with a reason.
  */
 export function HandoverReadiness({ rental, canOverride }: { rental: RentalView; canOverride: boolean }) {
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const accepted = rental.agreement;
   const override = rental.handoverOverride;
   const open = rental.state === 'reserved';

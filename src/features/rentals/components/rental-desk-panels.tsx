@@ -4,7 +4,7 @@ import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import type { RentalSummary } from '../../../../shared/billing/views';
 import { DepositStateChip, AuthorizationLapse, lapsesSoon } from '../../../components/deposit-state';
-import { formatMoney, useDateFormat } from '../../../lib/format';
+import { formatMoney, useFirmFormat } from '../../../lib/format';
 import { useRentals } from '../api/get-rentals';
 import type { RentalListView } from '../api/keys';
 import { RentalStateChip } from './rental-words';
@@ -54,7 +54,7 @@ function RentalsPanel({
 
 /** The billing clerk's home, as to rentals: holds near lapse, deposits to settle, rentals to invoice. */
 export function RentalDeskPanels() {
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   return (
     <>
       <RentalsPanel

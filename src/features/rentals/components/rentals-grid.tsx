@@ -2,7 +2,7 @@ import type { ColDef, ICellRendererParams } from 'ag-grid-community';
 import { useMemo } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { DataGrid } from '../../../components/data-grid';
-import { formatCalendarDate, formatMoney, isoTimestamp, useDateFormat } from '../../../lib/format';
+import { formatCalendarDate, formatMoney, isoTimestamp, useFirmFormat } from '../../../lib/format';
 import type { RentalSummary } from '../../../../shared/billing/views';
 import { DepositStateChip, depositStateWord, AuthorizationLapse } from '../../../components/deposit-state';
 import { RentalStateChip, rentalStateWord } from './rental-words';
@@ -22,7 +22,7 @@ export function RentalsGrid({
   exportFileName: string;
 }) {
   const navigate = useNavigate();
-  const { dateTime } = useDateFormat();
+  const { dateTime } = useFirmFormat();
   const columns = useMemo<ColDef<RentalSummary>[]>(
     () => [
       {

@@ -4,7 +4,7 @@ import { EmptyState } from '../../../components/empty-state';
 import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { useRoutines } from '../api/get-routines';
 import { useRunRoutine } from '../api/run-routine';
 import type { RoutineRunView, RoutineView } from '../../../../shared/routines/views';
@@ -17,7 +17,7 @@ export function RoutinesTable() {
   const routines = useRoutines();
   const runRoutine = useRunRoutine();
   const [outcomes, setOutcomes] = useState<Record<string, RunOutcome>>({});
-  const fmt = useDateFormat();
+  const fmt = useFirmFormat();
 
   if (routines.isPending) return <LoadingPanel label="Loading routines…" />;
   if (routines.isError) {

@@ -24,7 +24,7 @@ export function InvoiceIssuerForm({ settings }: { settings: OrganizationSettings
       validationSchema={schema}
       enableReinitialize
       onSubmit={(values, helpers) =>
-        save({ issuer: { address: values.address.trim(), taxNumber: values.taxNumber.trim(), paymentTerms: values.paymentTerms.trim() } }, helpers, {
+        save({ issuer: { ...values, address: values.address.trim(), taxNumber: values.taxNumber.trim(), paymentTerms: values.paymentTerms.trim() } }, helpers, {
           fields,
           aliases: Object.fromEntries(fields.map((f) => [`issuer.${f}`, f])),
         })

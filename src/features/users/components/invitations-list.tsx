@@ -3,7 +3,7 @@ import { Button } from '../../../components/button';
 import { Notice } from '../../../components/notice';
 import { StatusChip } from '../../../components/status-chip';
 import { isApiError } from '../../../lib/api-client';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { roleTitles } from '../../../lib/roles';
 import { useInvitations, useResendInvitation, useWithdrawInvitation } from '../api/invitations';
 
@@ -12,7 +12,7 @@ export function InvitationsList() {
   const invitations = useInvitations();
   const resend = useResendInvitation();
   const withdraw = useWithdrawInvitation();
-  const fmt = useDateFormat();
+  const fmt = useFirmFormat();
   const [outcome, setOutcome] = useState<{ tone: 'success' | 'error'; text: string }>();
   const report = (text: string) => ({
     onSuccess: () => setOutcome({ tone: 'success', text }),

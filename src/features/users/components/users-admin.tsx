@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
-import { useDateFormat } from '../../../lib/format';
+import { useFirmFormat } from '../../../lib/format';
 import { useClearSecondStep } from '../api/clear-second-step';
 import { useUpdateUser } from '../api/update-user';
 import { useUsers } from '../api/get-users';
@@ -19,7 +19,7 @@ export function UsersAdmin({ currentUserId, firmName }: { currentUserId: string;
   const users = useUsers();
   const update = useUpdateUser();
   const clearSecondStep = useClearSecondStep();
-  const { timeZone } = useDateFormat();
+  const { timeZone } = useFirmFormat();
   const [roleFor, setRoleFor] = useState<UserView | null>(null);
   const [passwordFor, setPasswordFor] = useState<UserView | null>(null);
   const [outcome, setOutcome] = useState<Outcome>(null);

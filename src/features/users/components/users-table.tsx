@@ -80,7 +80,7 @@ export function UsersTable({
         field: 'createdAt',
         minWidth: 110,
         maxWidth: 150,
-        valueFormatter: (p) => formatDate(p.value as string, timeZone),
+        valueFormatter: (p) => formatDate(p.value as string),
         // CSV gets the exact timestamp, the screen a readable date.
         useValueFormatterForExport: false,
         comparator: (a: string, b: string) => isoTimestamp(a).localeCompare(isoTimestamp(b)),

@@ -1,11 +1,13 @@
-// `npm run bench:fleet` / `npm run bench:bookings` / `npm run bench:accounts`: load measurements on a throwaway
-// cluster with the benchmark firm (20,000 assets; for bookings also 200,000
-// bookings; for calibration 100,000 assets and 1,000,000 bookings; for the audit pack also a year of certificates). Each suite is one or more scripts in
-// tests/bench/ run in turn against a live server; timings are printed here, never asserted in `npm test`.
+// `npm run bench:<suite>`: load measurements on a throwaway cluster with the benchmark firm (20,000 assets by default;
+// for bookings and calibration ten bookings per asset; for the audit pack a year of certificates). Each suite is one or
+// more scripts in tests/bench/ run in turn against a live server; timings are printed here, never asserted in `npm test`.
+//
+// Scale: BENCH_ASSETS (assets) and BENCH_BOOKINGS_PER_ASSET (1–50, default 10). BENCH_DATA_DIR keeps the cluster in
+// that folder instead of a throwaway one, so several suites can run on one seeded firm (the seeds skip what is there).
 const suites = {
   fleet: { seed: [], run: ['tests/bench/fleet-load.ts'] },
   bookings: { seed: ['server/seed/seed-bench-bookings.ts'], run: ['tests/bench/bookings-load.ts', 'tests/bench/board-drawing.ts'] },
-  calibration: { assets: 100_000, seed: ['server/seed/seed-bench-bookings.ts'], run: ['tests/bench/calibration-load.ts'] },
+  calibration: { seed: ['server/seed/seed-bench-bookings.ts'], run: ['tests/bench/calibration-load.ts'] },
   // The reset limits are lifted so the rounds measure the answer, not the 429.
   accounts: {
     assets: 100,
@@ -38,13 +40,15 @@ const freePort = () =>
     });
   });
 
-const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'nestkeeper-bench-'));
+const keptDir = process.env.BENCH_DATA_DIR ? path.resolve(process.env.BENCH_DATA_DIR) : null;
+if (keptDir) fs.mkdirSync(keptDir, { recursive: true });
+const dataDir = keptDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'nestkeeper-bench-'));
 fs.chmodSync(dataDir, 0o755);
 let server;
 const cleanUp = () => {
   server?.kill('SIGTERM');
   stopCluster(dataDir);
-  fs.rmSync(dataDir, { recursive: true, force: true });
+  if (!keptDir) fs.rmSync(dataDir, { recursive: true, force: true });
 };
 
 try {

@@ -6,12 +6,11 @@ export async function countBookings(client: pg.ClientBase, organizationId: strin
 }
 
 /**
- * Ten bookings per asset of the firm, spread over the past two years and the
- * coming year (200,000 for 20,000 assets); past ones returned, the rest
- * reserved. Every asset's bookings leave days 54–99 from today free.
+ * `perAsset` bookings per asset of the firm, one every hundred days from two years ago (ten reach a year ahead);
+ * past ones returned, the rest reserved. Every asset's bookings leave days 54–99 from today free.
  * Set-based SQL inside the caller's transaction: a few statements, not a query per row.
  */
-export async function seedBenchBookings(client: pg.ClientBase, organizationId: string, createdBy: string) {
+export async function seedBenchBookings(client: pg.ClientBase, organizationId: string, createdBy: string, perAsset = 10) {
   await client.query(
     `
     CREATE TEMP TABLE plan ON COMMIT DROP AS
@@ -19,8 +18,8 @@ export async function seedBenchBookings(client: pg.ClientBase, organizationId: s
            current_date - 700 + g.k * 100 + (a.rn % 30)::int AS starts_on,
            current_date - 700 + g.k * 100 + (a.rn % 30)::int + 4 + ((a.rn + g.k) % 20)::int AS ends_on
       FROM (SELECT id, row_number() OVER (ORDER BY asset_tag) AS rn FROM assets WHERE organization_id = $1) a
-      CROSS JOIN generate_series(0, 9) AS g(k)`,
-    [organizationId],
+      CROSS JOIN generate_series(0, $2::int - 1) AS g(k)`,
+    [organizationId, perAsset],
   );
   await client.query(
     `

@@ -82,6 +82,8 @@ export class Asset extends OrgOwned {
   lastCalibratedOn: string | null;
 
   /** Kept with the plan (and later set by calibration events) so lists can filter and sort by it. */
+  // The calibration review's partial index on (organization, due date with undated first, tag); made by CalibrationDueIndex.
+  @Index('assets_calibration_due', { synchronize: false })
   @Column({ name: 'due_on', type: 'date', nullable: true })
   dueOn: string | null;
 

@@ -1,4 +1,4 @@
-import { backToBack, describeLoad, oneAtATime, peoplePaced, percentile } from './load';
+import { backToBack, benchScale, describeLoad, oneAtATime, peoplePaced, percentile } from './load';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 
 /**
@@ -15,6 +15,8 @@ const login = await fetch(`${base}/api/auth/login`, {
 const { token } = (await login.json()) as { token: string };
 const headers = { authorization: `Bearer ${token}`, 'content-type': 'application/json' };
 const today = todayIn('Europe/Berlin');
+const scale = await benchScale();
+console.log(`\nBenchmark firm: ${scale}`);
 
 const availability = `${base}/api/availability?type=smr&startsOn=${addDays(today, 40)}&endsOn=${addDays(today, 53)}&limit=100`;
 const first = (await (await fetch(availability, { headers })).json()) as { items: unknown[] };
@@ -46,5 +48,5 @@ for (let i = 0; i < 20; i += 1) {
 }
 review.sort((a, b) => a - b);
 console.log(
-  `GET /api/calibration/review at 20,000 assets, 20 sequential requests: p50 ${percentile(review, 50).toFixed(1)} ms, p95 ${percentile(review, 95).toFixed(1)} ms`,
+  `GET /api/calibration/review at ${scale}, 20 sequential requests: p50 ${percentile(review, 50).toFixed(1)} ms, p95 ${percentile(review, 95).toFixed(1)} ms`,
 );

@@ -1,4 +1,4 @@
-import { backToBack, describeLoad, peoplePaced } from './load';
+import { backToBack, benchScale, describeLoad, peoplePaced } from './load';
 import { launchChromium } from '../support/chromium';
 
 /**
@@ -21,7 +21,7 @@ async function load(name: string, pathAndQuery: string, paced = false) {
   console.log(`${name.padEnd(44)} ${describeLoad(result)}`);
 }
 
-console.log('\nGET /api/assets, 20 connections, 15 s each, 20,000 assets');
+console.log(`\nGET /api/assets, 20 connections, 15 s each, ${await benchScale()}`);
 await load('type filter + search "0001" (narrow)', '/api/assets?type=tracker,probe&q=0001&limit=50');
 await load('type filter + search "shelf" (1 in 3 rows)', '/api/assets?type=tip,smr,battery&q=shelf&limit=50');
 await load('calibration overdue + search "orrin"', '/api/assets?calibration=overdue&q=orrin&sort=dueOn&limit=50');

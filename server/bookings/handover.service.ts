@@ -9,7 +9,7 @@ import { assetsByIds, lockAssets, moveAssets, noteCustody, type AssetRecord } fr
 import { AppError, notFound, ruleBroken } from '../http/errors';
 import { isUuid } from '../http/ids';
 import { openIncident, preparePhoto, type UploadedPhoto } from '../incidents/incidents.service';
-import { loadOrgContext } from '../organizations';
+import { firmVoice, loadOrgContext } from '../organizations';
 import { findPerson } from '../users';
 import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
 import type { BookingView } from './booking-view';
@@ -171,19 +171,16 @@ export class HandoverService {
         : rental
           ? `Rental ${rental.number}, ${rental.customerCompany}`
           : `${booking.purpose} booking`;
-      return handoverSheetPdf(
-        { name: ctx.name, timeZone: ctx.timeZone },
-        {
-          title,
-          startsOn: booking.startsOn,
-          endsOn: booking.endsOn,
-          kitName: booking.kit?.name ?? null,
-          takenBy: booking.takenBy,
-          checkedOutAt: booking.checkedOutAt,
-          items,
-          checklist: booking.checkoutChecklist,
-        },
-      );
+      return handoverSheetPdf(firmVoice(ctx), {
+        title,
+        startsOn: booking.startsOn,
+        endsOn: booking.endsOn,
+        kitName: booking.kit?.name ?? null,
+        takenBy: booking.takenBy,
+        checkedOutAt: booking.checkedOutAt,
+        items,
+        checklist: booking.checkoutChecklist,
+      });
     });
   }
 

@@ -1,4 +1,4 @@
-import { DEFAULT_LOCALE } from '../../shared/formatting/firm-format';
+import { DEFAULT_LOCALE, firmFormat } from '../../shared/formatting/firm-format';
 import { DEFAULT_DUE_SOON_DAYS, todayIn } from '../../shared/calibration/due-date';
 import { DEFAULT_TRIAGE_RATIO } from '../../shared/calibration/triage';
 import { defaultIntervalPolicy, type IntervalPolicy } from '../../shared/calibration/interval-review';
@@ -42,6 +42,12 @@ export const DEFAULT_PAYMENT_DAYS = 30;
 
 /** The firm's voice for formatting (shared/formatting). */
 export const voiceOf = (ctx: Pick<OrgContext, 'locale' | 'timeZone' | 'currency'>) => ({ locale: ctx.locale, timeZone: ctx.timeZone, currency: ctx.currency });
+
+/**
+ * The firm as it speaks on paper and in its messages: its name and its format. No reader's zone is known, so times
+ * name the firm's zone.
+ */
+export const firmVoice = (ctx: OrgContext) => ({ name: ctx.name, format: firmFormat(voiceOf(ctx)) });
 
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
   const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(

@@ -110,6 +110,7 @@ export class HandoverService {
             ? `Rental ${booking.rental.number}, ${booking.rental.customerCompany}`
             : ctx.name);
       const customerName = booking.job?.customerName ?? booking.rental?.customerCompany ?? null;
+      const days = firmVoice(ctx).format.dateRange(booking.startsOn, booking.endsOn);
       const incidents: { assetId: string; incidentId: string }[] = [];
       for (const line of input.checklist) {
         const asset = assets.find((a) => a.id === line.assetId)!;
@@ -120,11 +121,7 @@ export class HandoverService {
             asset,
             {
               kind: line.present ? 'impact' : 'missing',
-              description:
-                line.note ||
-                (line.present
-                  ? `Came back damaged from booking ${booking.startsOn}–${booking.endsOn}.`
-                  : `Not returned with booking ${booking.startsOn}–${booking.endsOn}.`),
+              description: line.note || (line.present ? `Came back damaged from the booking of ${days}.` : `Not returned with the booking of ${days}.`),
               occurredAt: now.toISOString(),
               location: place,
               bookingId: id,

@@ -49,6 +49,9 @@ export const voiceOf = (ctx: Pick<OrgContext, 'locale' | 'timeZone' | 'currency'
  */
 export const firmVoice = (ctx: OrgContext) => ({ name: ctx.name, format: firmFormat(voiceOf(ctx)) });
 
+/** The firm's format for a refusal or notice, read in the caller's transaction (times name the firm's zone). */
+export const loadFirmFormat = async (tx: Scoped) => firmVoice(await loadOrgContext(tx)).format;
+
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
   const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(
     `SELECT name, time_zone, currency, settings FROM organizations WHERE id = $1`,

@@ -57,6 +57,7 @@ export async function packPreview(tx: Scoped, ids: string[], period: RecordPerio
   };
 }
 
+/** index.csv, for an auditor's tools: plain values (sizes in bytes, hex SHA-256), the unit in the column's name. */
 const indexColumns = [
   'item',
   'type',

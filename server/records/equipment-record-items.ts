@@ -1,6 +1,7 @@
 import type { AssetView, EquipmentRecordItem } from '../../shared/assets/views';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
 import type { EquipmentRecordView } from '../../shared/records/views';
+import type { MeasureWords } from '../../shared/records/check-lines';
 import { assetTypeTitles, typesWithFirmware } from '../../shared/schemas/assets';
 
 const text = (...parts: (string | null | undefined)[]) => parts.filter(Boolean).join(' · ') || null;
@@ -10,10 +11,10 @@ const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? on
 type Sections = Pick<EquipmentRecordView, 'calibrations' | 'checks' | 'holds' | 'incidents' | 'impactReviews' | 'intervalChanges' | 'reference'>;
 
 /**
- * How a record's sentences write a date (a calendar date or a moment's day) and a certified decimal: in the firm's
- * format for the reader, and in one fixed form (ISO dates, plain decimals) for the content hash (record-assembly.ts).
+ * How a record's sentences write a date (a calendar date or a moment's day) and its measures: in the firm's format for
+ * the reader, and in one fixed form (ISO dates, numbers as stored) for the content hash (record-assembly.ts).
  */
-export type RecordWords = { date: (value: string) => string; decimal: (value: unknown) => string };
+export type RecordWords = MeasureWords & { date: (value: string) => string };
 
 /**
  * The equipment record an auditor asks for: one entry per item of ISO/IEC 17025:2017 §6.4.13 a)–h) (the items'

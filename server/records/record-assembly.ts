@@ -2,7 +2,7 @@ import type { AssetView } from '../../shared/assets/views';
 import type { AsFound } from '../../shared/calibration/interval-review';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
 import { firmFormat } from '../../shared/formatting/firm-format';
-import { checkInputLines, checkResultLines } from '../../shared/records/check-lines';
+import { checkInputLines, checkResultLines, storedWords } from '../../shared/records/check-lines';
 import type { EquipmentRecordView, RecordCalibration, RecordHold, RecordIntervalChange, RecordPeriod, ReferenceArtefact } from '../../shared/records/views';
 import { assetAuditLines, type AuditLine } from '../audit/audit.service';
 import { calibrationsForRecord, certificateBytes, impactReviewsForRecord, type CalibrationEntry } from '../calibration';
@@ -92,11 +92,11 @@ function referenceArtefact(asset: AssetView, calibrations: RecordCalibration[], 
   const s = asset.specs;
   const values =
     asset.type === 'reference_sphere' || asset.type === 'smr'
-      ? [{ label: 'Diameter', value: `${say.decimal(s.diameterMm)} mm` }]
+      ? [{ label: 'Diameter', value: `${say.number(s.diameterMm)} mm` }]
       : asset.type === 'scale_bar'
         ? [
-            { label: 'Certified length at 20 °C (ISO 1)', value: `${say.decimal(s.certifiedLengthMm)} mm` },
-            { label: 'Thermal expansion coefficient', value: `${say.decimal(s.expansionPpmPerK)} µm/(m·K)` },
+            { label: 'Certified length at 20 °C (ISO 1)', value: `${say.number(s.certifiedLengthMm)} mm` },
+            { label: 'Thermal expansion coefficient', value: `${say.number(s.expansionPpmPerK)} µm/(m·K)` },
           ]
         : null;
   if (!values) return null;
@@ -116,13 +116,24 @@ async function certificateFile(tx: Scoped, c: CalibrationEntry) {
   return { bytes, file: { fileName: c.fileName ?? 'certificate.pdf', sizeBytes: bytes.length, sha256: sha256(bytes), readable: inspection.kind === 'pdf' } };
 }
 
-/** Dates and decimals as the record's hash reads them: the same text the record carried before it spoke the firm's format. */
-const fixedWords: RecordWords = { date: (value) => value.slice(0, 10), decimal: (value) => String(value) };
+/** Dates and measures as the record's hash reads them: the same text the record carried before it spoke the firm's format. */
+const fixedWords: RecordWords = { ...storedWords, date: (value) => value.slice(0, 10) };
 
-/** The firm's dates (a moment's day in the firm's zone) and certified decimals in full, without grouping. */
+const decimalsOf = (value: number) => (String(value).split('.')[1] ?? '').length;
+
+/**
+ * The firm's dates (a moment's day in the firm's zone) and measures with every stored decimal and no grouping; lists
+ * part with semicolons and points name each axis, so a decimal comma is never read as a separator.
+ */
 function firmWords(ctx: OrgContext): RecordWords {
   const f = firmFormat(voiceOf(ctx));
-  return { date: f.date, decimal: (value) => (typeof value === 'number' ? f.number(value, 6, false) : String(value)) };
+  const number = (value: unknown) => (typeof value === 'number' ? f.number(value, 6, false) : String(value));
+  return {
+    date: f.date,
+    number,
+    list: (values) => values.map(number).join('; '),
+    point: (x, y, z) => f.coordinate([x, y, z], Math.min(6, Math.max(3, decimalsOf(x), decimalsOf(y), decimalsOf(z)))),
+  };
 }
 
 /**
@@ -192,6 +203,27 @@ export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: str
         recordedAt: iso(c.createdAt)!,
       });
     }
+    const checksIn = (words: RecordWords) =>
+      (byCheck.get(asset.id) ?? []).map((check) => {
+        return {
+          id: check.id,
+          kind: check.kind,
+          performedAt: iso(check.performedAt)!,
+          performedBy: who(check.performedById),
+          position: check.position,
+          relatedAssetTag: check.relatedAssetTag,
+          inputs: check.inputs,
+          result: check.result,
+          inputLines: checkInputLines(check.kind, check.inputs, words),
+          resultLines: checkResultLines(check.kind, check.result, words),
+          toleranceUm: check.toleranceUm,
+          expandedUncertaintyUm: check.expandedUncertaintyUm,
+          guardBandUm: check.guardBandUm,
+          decisionRule: check.decisionRule,
+          decision: check.decision,
+          note: check.note,
+        };
+      });
     const holdsIn = (words: RecordWords) =>
       (byHold.get(asset.id) ?? []).map((hold): RecordHold => ({
         id: hold.id,
@@ -206,26 +238,7 @@ export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: str
       }));
     const sections = {
       calibrations: calibrationViews,
-      checks: (byCheck.get(asset.id) ?? []).map((check) => {
-        return {
-          id: check.id,
-          kind: check.kind,
-          performedAt: iso(check.performedAt)!,
-          performedBy: who(check.performedById),
-          position: check.position,
-          relatedAssetTag: check.relatedAssetTag,
-          inputs: check.inputs,
-          result: check.result,
-          inputLines: checkInputLines(check.kind, check.inputs),
-          resultLines: checkResultLines(check.kind, check.result),
-          toleranceUm: check.toleranceUm,
-          expandedUncertaintyUm: check.expandedUncertaintyUm,
-          guardBandUm: check.guardBandUm,
-          decisionRule: check.decisionRule,
-          decision: check.decision,
-          note: check.note,
-        };
-      }),
+      checks: checksIn(say),
       holds: holdsIn(say),
       incidents: (byIncident.get(asset.id) ?? []).map((incident) => {
         return {
@@ -295,7 +308,7 @@ export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: str
       generatedAt: new Date().toISOString(),
     };
     // The hash reads the record's sentences with fixed dates and decimals: a new locale in the settings is no new content.
-    const fixed = { ...sections, holds: holdsIn(fixedWords), reference: referenceArtefact(asset, calibrationViews, fixedWords) };
+    const fixed = { ...sections, checks: checksIn(fixedWords), holds: holdsIn(fixedWords), reference: referenceArtefact(asset, calibrationViews, fixedWords) };
     const contentHash = recordContentHash({ ...base, ...fixed, items: equipmentRecordItems(asset, fixed, fixedWords) });
     records.push({ view: { ...base, contentHash }, certificates, thumbnails });
   }

@@ -6,7 +6,7 @@ export type Pdf = PDFKit.PDFDocument;
 
 /** What pdfkit's built-in fonts (PDF's standard 14, WinAnsi encoding) draw beyond Latin-1. */
 const WIN_ANSI_EXTRA = new Set('€‚ƒ„…†‡ˆ‰Š‹ŒŽ‘’“”•–—˜™š›œžŸ');
-/** Intl's thin and narrow no-break spaces (dates, times, grouping), minus signs and arrows, in drawable look-alikes. */
+/** Intl's thin and narrow no-break spaces (dates, times, grouping), minus signs, arrows and stroked letters, in drawable look-alikes. */
 const STAND_INS: Record<string, string> = {
   '\u2009': ' ',
   '\u202f': '\u00a0',
@@ -15,6 +15,12 @@ const STAND_INS: Record<string, string> = {
   '\u2010': '-',
   '\u2011': '-',
   '\u2192': '->',
+  // Letters with a stroke have no base letter to fall back on.
+  Ł: 'L',
+  ł: 'l',
+  Đ: 'D',
+  đ: 'd',
+  ı: 'i',
 };
 const drawable = (c: string) => c.charCodeAt(0) < 0x100 || WIN_ANSI_EXTRA.has(c);
 

@@ -14,7 +14,7 @@ import { toCsv } from '../documents/csv';
 import { invoicePdf } from '../documents/invoice-pdf';
 import { conflict, ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications';
-import { firmVoice, loadOrgContext } from '../organizations';
+import { documentFirm, loadOrgContext } from '../organizations';
 import { getCustomer, getRental, loadRentalView, lockRental, type CustomerRecord } from '../rentals';
 import { invoiceSummaries } from './invoice-summaries';
 import { Invoice, InvoicePayment } from './invoice.entity';
@@ -306,6 +306,6 @@ export class InvoicesService {
 
   private async render(tx: Scoped, invoice: InvoiceView) {
     const ctx = await loadOrgContext(tx);
-    return { pdf: await invoicePdf({ firm: firmVoice(ctx), invoice }), number: invoice.number, kind: invoice.kind };
+    return { pdf: await invoicePdf({ firm: documentFirm(ctx), invoice }), number: invoice.number, kind: invoice.kind };
   }
 }

@@ -9,7 +9,7 @@ import { assetsByIds, lockAssets, moveAssets, noteCustody, type AssetRecord } fr
 import { AppError, notFound, ruleBroken } from '../http/errors';
 import { isUuid } from '../http/ids';
 import { openIncident, preparePhoto, type UploadedPhoto } from '../incidents/incidents.service';
-import { firmVoice, loadOrgContext } from '../organizations';
+import { documentFirm, formatOf, loadOrgContext } from '../organizations';
 import { findPerson } from '../users';
 import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
 import type { BookingView } from './booking-view';
@@ -110,7 +110,7 @@ export class HandoverService {
             ? `Rental ${booking.rental.number}, ${booking.rental.customerCompany}`
             : ctx.name);
       const customerName = booking.job?.customerName ?? booking.rental?.customerCompany ?? null;
-      const days = firmVoice(ctx).format.dateRange(booking.startsOn, booking.endsOn);
+      const days = formatOf(ctx).dateRange(booking.startsOn, booking.endsOn);
       const incidents: { assetId: string; incidentId: string }[] = [];
       for (const line of input.checklist) {
         const asset = assets.find((a) => a.id === line.assetId)!;
@@ -168,7 +168,7 @@ export class HandoverService {
         : rental
           ? `Rental ${rental.number}, ${rental.customerCompany}`
           : `${booking.purpose} booking`;
-      return handoverSheetPdf(firmVoice(ctx), {
+      return handoverSheetPdf(documentFirm(ctx), {
         title,
         startsOn: booking.startsOn,
         endsOn: booking.endsOn,

@@ -5,7 +5,7 @@ import type { Scoped } from '../db/scoped';
 import type { Actor } from '../db/transaction';
 import { getAssets, getKit, kitMembers } from '../fleet';
 import { conflict, forbidden, ruleBroken } from '../http/errors';
-import { firmVoice, loadFirmFormat, loadOrgContext } from '../organizations';
+import { formatOf, loadFirmFormat, loadOrgContext } from '../organizations';
 import { availableAssets, conflictingItems, itemFacts } from './booking-queries';
 import { blockedError, refusals, refusedItems } from './booking-rule';
 import { bookingViews, type BookingView } from './booking-view';
@@ -54,7 +54,7 @@ export async function book(tx: Scoped, actor: Actor, request: BookingRequest): P
   const { today } = ctx;
   if (request.history) return recordHistory(tx, actor, request, assetIds, purpose, today);
   if (request.endsOn < today) {
-    const f = firmVoice(ctx).format;
+    const f = formatOf(ctx);
     throw ruleBroken(
       'dates_past',
       `Every day of this booking (${f.dateRange(request.startsOn, request.endsOn)}) is before today (${f.date(today)}). Pick days from today on; the owner can record past use as history.`,
@@ -226,7 +226,7 @@ export async function checkOut(tx: Scoped, actor: Actor, id: string, to: Checkou
   const booking = await lockedIn(tx, id, ['reserved', 'not_collected'], 'Only a reserved or not collected booking can be checked out');
   const ctx = await loadOrgContext(tx);
   const { today, checkoutOpensDaysBefore } = ctx;
-  const f = firmVoice(ctx).format;
+  const f = formatOf(ctx);
   const assetIds = await itemsOf(tx, id);
   let note: string | null = null;
   if (booking.state === 'not_collected' || (booking.purpose !== 'lab' && booking.endsOn < today)) {

@@ -11,7 +11,7 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { getAssets, moveAssets } from '../fleet';
 import { conflict, ruleBroken } from '../http/errors';
-import { DEFAULT_TURNAROUND_DAYS, firmVoice, loadFirmFormat, loadOrgContext, type OrgContext } from '../organizations';
+import { DEFAULT_TURNAROUND_DAYS, formatOf, loadFirmFormat, loadOrgContext, type OrgContext } from '../organizations';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
 import { listReply } from '../http/list-reply';
 
@@ -96,7 +96,7 @@ export class LabService {
       const assets = await this.assets(tx, input.assetIds);
       const already = await openTrips(tx, input.assetIds);
       if (already.length) {
-        const f = firmVoice(ctx).format;
+        const f = formatOf(ctx);
         throw conflict(
           `Already on a lab trip: ${already.map((t) => `${t.assetTag} (${t.provider}, ${t.state === 'planned' ? `planned for ${f.date(t.sentOn)}` : 'at the lab'})`).join('; ')}.`,
           { trips: already },

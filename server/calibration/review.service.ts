@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { addDays } from '../../shared/calibration/due-date';
 import type { CalibrationReviewView, DueRow } from '../../shared/calibration/views';
 import { readInOrganization, type Actor } from '../db/transaction';
-import { firmVoice, loadOrgContext } from '../organizations';
+import { documentFirm, loadOrgContext } from '../organizations';
 
 /**
  * Items overdue or due within `withinDays`, most urgent first, each with the
@@ -49,7 +49,7 @@ export class ReviewService {
   dueWithinWindow(actor: Actor) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      return { firm: firmVoice(ctx), today: ctx.today, items: await dueItems(tx, ctx.today, ctx.dueSoonDays) };
+      return { firm: documentFirm(ctx), today: ctx.today, items: await dueItems(tx, ctx.today, ctx.dueSoonDays) };
     });
   }
 

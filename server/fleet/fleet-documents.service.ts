@@ -5,7 +5,7 @@ import type { AssetListQuery } from '../../shared/schemas/assets';
 import { inOrganization, type Actor } from '../db/transaction';
 import { assetLabelPdf, kitLabelSheetPdf } from '../documents/asset-label';
 import { shippingSheetPdf } from '../documents/shipping-sheet-pdf';
-import { firmVoice, loadOrgContext } from '../organizations';
+import { documentFirm, loadOrgContext } from '../organizations';
 import type { DocumentFirm } from '../documents/document-layout';
 import { Asset } from './asset.entity';
 import { assetsToCsv } from './asset-csv';
@@ -26,7 +26,7 @@ export class FleetDocumentsService {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const asset = await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } });
-      return work(toAssetView(asset, ctx, this.publicUrl), firmVoice(ctx));
+      return work(toAssetView(asset, ctx, this.publicUrl), documentFirm(ctx));
     });
   }
 
@@ -50,7 +50,7 @@ export class FleetDocumentsService {
       return work(
         kit,
         members.map((m) => toAssetView(Object.assign(m, { kit }), ctx, this.publicUrl)),
-        firmVoice(ctx),
+        documentFirm(ctx),
       );
     });
   }

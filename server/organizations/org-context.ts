@@ -43,14 +43,14 @@ export const DEFAULT_PAYMENT_DAYS = 30;
 /** The firm's voice for formatting (shared/formatting). */
 export const voiceOf = (ctx: Pick<OrgContext, 'locale' | 'timeZone' | 'currency'>) => ({ locale: ctx.locale, timeZone: ctx.timeZone, currency: ctx.currency });
 
-/**
- * The firm as it speaks on paper and in its messages: its name and its format. No reader's zone is known, so times
- * name the firm's zone.
- */
-export const firmVoice = (ctx: OrgContext) => ({ name: ctx.name, format: firmFormat(voiceOf(ctx)) });
+/** The firm's format for what the server writes (documents, refusals): no reader's zone is known, so times name the firm's zone. */
+export const formatOf = (ctx: Pick<OrgContext, 'locale' | 'timeZone' | 'currency'>) => firmFormat(voiceOf(ctx));
 
-/** The firm's format for a refusal or notice, read in the caller's transaction (times name the firm's zone). */
-export const loadFirmFormat = async (tx: Scoped) => firmVoice(await loadOrgContext(tx)).format;
+/** The firm as its documents name it: its name and its format (documents/document-layout.ts `DocumentFirm`). */
+export const documentFirm = (ctx: OrgContext) => ({ name: ctx.name, format: formatOf(ctx) });
+
+/** The firm's format for a refusal or notice, read in the caller's transaction. */
+export const loadFirmFormat = async (tx: Scoped) => formatOf(await loadOrgContext(tx));
 
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
   const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(

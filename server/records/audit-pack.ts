@@ -15,7 +15,7 @@ import { auditSummaryPdf, type AuditSummary } from '../documents/audit-summary-p
 import { equipmentRecordPdf } from '../documents/equipment-record-pdf';
 import { assetIdsSelected, getKit, inTagOrder } from '../fleet';
 import { heldAssetIds } from '../holds';
-import { firmVoice, type OrgContext } from '../organizations';
+import { documentFirm, type OrgContext } from '../organizations';
 import { sha256 } from './content-hash';
 import { assembleRecords, type AssembledRecord } from './record-assembly';
 
@@ -149,7 +149,7 @@ export async function writeAuditPack(out: Writable, ids: string[], query: AuditP
   const period = { from: query.from, to: query.to };
   const zip = zipStream(out);
   const index = await indexFile();
-  const firm = firmVoice(ctx);
+  const firm = documentFirm(ctx);
   const summary: AuditSummary = {
     firm,
     period,

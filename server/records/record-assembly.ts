@@ -1,7 +1,6 @@
 import type { AssetView } from '../../shared/assets/views';
 import type { AsFound } from '../../shared/calibration/interval-review';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
-import { firmFormat } from '../../shared/formatting/firm-format';
 import { checkInputLines, checkResultLines, storedWords } from '../../shared/records/check-lines';
 import type { EquipmentRecordView, RecordCalibration, RecordHold, RecordIntervalChange, RecordPeriod, ReferenceArtefact } from '../../shared/records/views';
 import { assetAuditLines, type AuditLine } from '../audit/audit.service';
@@ -12,7 +11,7 @@ import { inspectPdf } from '../documents/pdf-inspection';
 import { assetViewsByIds, custodyForRecord } from '../fleet';
 import { holdsForRecord, type HoldEntry } from '../holds';
 import { incidentsForRecord, photoThumbnails } from '../incidents';
-import { voiceOf, type OrgContext } from '../organizations';
+import { formatOf, type OrgContext } from '../organizations';
 import { peopleNames } from '../users';
 import { recordContentHash, sha256 } from './content-hash';
 import { equipmentRecordItems, type RecordWords } from './equipment-record-items';
@@ -126,7 +125,7 @@ const decimalsOf = (value: number) => (String(value).split('.')[1] ?? '').length
  * part with semicolons and points name each axis, so a decimal comma is never read as a separator.
  */
 function firmWords(ctx: OrgContext): RecordWords {
-  const f = firmFormat(voiceOf(ctx));
+  const f = formatOf(ctx);
   const number = (value: unknown) => (typeof value === 'number' ? f.number(value, 6, false) : String(value));
   return {
     date: f.date,

@@ -6,7 +6,7 @@ import type { AuditPackQuery } from '../../shared/schemas/records';
 import { readInOrganization, type Actor } from '../db/transaction';
 import { equipmentRecordPdf } from '../documents/equipment-record-pdf';
 import { getAsset, getKit } from '../fleet';
-import { firmVoice, loadOrgContext } from '../organizations';
+import { formatOf, loadOrgContext } from '../organizations';
 import { packItems, packPreview, writeAuditPack } from './audit-pack';
 import { assembleRecords } from './record-assembly';
 
@@ -37,7 +37,7 @@ export class RecordsService {
     const { record, ctx } = await this.one(actor, id, period);
     const pdf = await equipmentRecordPdf({
       ...record,
-      format: firmVoice(ctx).format,
+      format: formatOf(ctx),
       publicUrl: this.publicUrl,
       printedAt: new Date(),
       placement: { annex: true },

@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { taxMinor } from '../../shared/billing/quote';
 import { formatMoney } from '../../shared/billing/money';
 import type { InvoiceSummary, InvoiceView } from '../../shared/billing/views';
+import { columnHeading, plainAmount } from '../../shared/formatting/csv-columns';
 import type { Page } from '../../shared/lists/page';
 import type { creditNotePayload, invoiceListQuery, invoicePaymentPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
@@ -13,7 +14,7 @@ import { toCsv } from '../documents/csv';
 import { invoicePdf } from '../documents/invoice-pdf';
 import { conflict, ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications';
-import { loadOrgContext } from '../organizations';
+import { documentFirm, loadOrgContext } from '../organizations';
 import { getCustomer, getRental, loadRentalView, lockRental, type CustomerRecord } from '../rentals';
 import { invoiceSummaries } from './invoice-summaries';
 import { Invoice, InvoicePayment } from './invoice.entity';
@@ -158,26 +159,31 @@ export class InvoicesService {
     });
   }
 
-  /** Every invoice and credit note as CSV, amounts in minor units. */
+  /** Every invoice and credit note as CSV (shared/formatting/csv-columns.ts): amounts as plain decimals, the currency in the headings. */
   async csv(actor: Actor) {
     const { items } = await this.list(actor, { limit: 100_000, offset: 0 } as z.infer<typeof invoiceListQuery>);
+    const currencies = new Set(items.map((i) => i.currency));
+    // A firm bills in its one currency; should the list ever hold two, each row's Currency column says which.
+    const unit =
+      currencies.size > 1 ? 'see Currency' : (items[0]?.currency ?? (await readInOrganization(this.db, actor.organizationId, loadOrgContext)).currency);
+    const amount = (label: string) => columnHeading(label, unit);
     return toCsv(
       [
-        'number',
-        'kind',
-        'issued_on',
-        'customer',
-        'corrects',
-        'currency',
-        'subtotal_minor',
-        'tax_minor',
-        'total_minor',
-        'deposit_captured_minor',
-        'card_charged_minor',
-        'balance_minor',
-        'credited_minor',
-        'received_minor',
-        'outstanding_minor',
+        'Number',
+        'Kind',
+        'Issued on',
+        'Customer',
+        'Corrects',
+        'Currency',
+        amount('Subtotal'),
+        amount('Tax'),
+        amount('Total'),
+        amount('Deposit captured'),
+        amount('Charged to card'),
+        amount('Balance'),
+        amount('Credited'),
+        amount('Received'),
+        amount('Outstanding'),
       ],
       items.map((i) => [
         i.number,
@@ -186,15 +192,17 @@ export class InvoicesService {
         i.customerCompany,
         i.correctsNumber ?? '',
         i.currency,
-        i.subtotalMinor,
-        i.taxMinor,
-        i.totalMinor,
-        i.depositCapturedMinor,
-        i.cardChargedMinor,
-        i.balanceMinor,
-        i.creditedMinor,
-        i.receivedMinor,
-        i.outstandingMinor,
+        ...[
+          i.subtotalMinor,
+          i.taxMinor,
+          i.totalMinor,
+          i.depositCapturedMinor,
+          i.cardChargedMinor,
+          i.balanceMinor,
+          i.creditedMinor,
+          i.receivedMinor,
+          i.outstandingMinor,
+        ].map((minor) => plainAmount(minor, i.currency)),
       ]),
     );
   }
@@ -298,6 +306,6 @@ export class InvoicesService {
 
   private async render(tx: Scoped, invoice: InvoiceView) {
     const ctx = await loadOrgContext(tx);
-    return { pdf: await invoicePdf({ firm: { name: ctx.name, timeZone: ctx.timeZone }, invoice }), number: invoice.number, kind: invoice.kind };
+    return { pdf: await invoicePdf({ firm: documentFirm(ctx), invoice }), number: invoice.number, kind: invoice.kind };
   }
 }

@@ -9,7 +9,7 @@ import { assetsByIds, lockAssets, moveAssets, noteCustody, type AssetRecord } fr
 import { AppError, notFound, ruleBroken } from '../http/errors';
 import { isUuid } from '../http/ids';
 import { openIncident, preparePhoto, type UploadedPhoto } from '../incidents/incidents.service';
-import { loadOrgContext } from '../organizations';
+import { documentFirm, formatOf, loadOrgContext } from '../organizations';
 import { findPerson } from '../users';
 import type { ChecklistLine, ReturnView } from '../../shared/bookings/views';
 import type { BookingView } from './booking-view';
@@ -110,6 +110,7 @@ export class HandoverService {
             ? `Rental ${booking.rental.number}, ${booking.rental.customerCompany}`
             : ctx.name);
       const customerName = booking.job?.customerName ?? booking.rental?.customerCompany ?? null;
+      const days = formatOf(ctx).dateRange(booking.startsOn, booking.endsOn);
       const incidents: { assetId: string; incidentId: string }[] = [];
       for (const line of input.checklist) {
         const asset = assets.find((a) => a.id === line.assetId)!;
@@ -120,11 +121,7 @@ export class HandoverService {
             asset,
             {
               kind: line.present ? 'impact' : 'missing',
-              description:
-                line.note ||
-                (line.present
-                  ? `Came back damaged from booking ${booking.startsOn}–${booking.endsOn}.`
-                  : `Not returned with booking ${booking.startsOn}–${booking.endsOn}.`),
+              description: line.note || (line.present ? `Came back damaged from the booking of ${days}.` : `Not returned with the booking of ${days}.`),
               occurredAt: now.toISOString(),
               location: place,
               bookingId: id,
@@ -171,19 +168,16 @@ export class HandoverService {
         : rental
           ? `Rental ${rental.number}, ${rental.customerCompany}`
           : `${booking.purpose} booking`;
-      return handoverSheetPdf(
-        { name: ctx.name, timeZone: ctx.timeZone },
-        {
-          title,
-          startsOn: booking.startsOn,
-          endsOn: booking.endsOn,
-          kitName: booking.kit?.name ?? null,
-          takenBy: booking.takenBy,
-          checkedOutAt: booking.checkedOutAt,
-          items,
-          checklist: booking.checkoutChecklist,
-        },
-      );
+      return handoverSheetPdf(documentFirm(ctx), {
+        title,
+        startsOn: booking.startsOn,
+        endsOn: booking.endsOn,
+        kitName: booking.kit?.name ?? null,
+        takenBy: booking.takenBy,
+        checkedOutAt: booking.checkedOutAt,
+        items,
+        checklist: booking.checkoutChecklist,
+      });
     });
   }
 

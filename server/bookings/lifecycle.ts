@@ -5,7 +5,7 @@ import type { Scoped } from '../db/scoped';
 import type { Actor } from '../db/transaction';
 import { getAssets, getKit, kitMembers } from '../fleet';
 import { conflict, forbidden, ruleBroken } from '../http/errors';
-import { loadOrgContext } from '../organizations';
+import { formatOf, loadFirmFormat, loadOrgContext } from '../organizations';
 import { availableAssets, conflictingItems, itemFacts } from './booking-queries';
 import { blockedError, refusals, refusedItems } from './booking-rule';
 import { bookingViews, type BookingView } from './booking-view';
@@ -50,13 +50,16 @@ export async function book(tx: Scoped, actor: Actor, request: BookingRequest): P
   const window: Window = { startsOn: request.startsOn, endsOn: request.endsOn, purpose, exceptBookingId: null };
   // Every id first: one that is not found is 404 before any booking rule answers.
   if (request.jobId) await tx.get(Job, { id: request.jobId }, 'That job');
-  const { today } = await loadOrgContext(tx);
+  const ctx = await loadOrgContext(tx);
+  const { today } = ctx;
   if (request.history) return recordHistory(tx, actor, request, assetIds, purpose, today);
-  if (request.endsOn < today)
+  if (request.endsOn < today) {
+    const f = formatOf(ctx);
     throw ruleBroken(
       'dates_past',
-      `Every day of this booking (${request.startsOn} to ${request.endsOn}) is before today (${today}). Pick days from today on; the owner can record past use as history.`,
+      `Every day of this booking (${f.dateRange(request.startsOn, request.endsOn)}) is before today (${f.date(today)}). Pick days from today on; the owner can record past use as history.`,
     );
+  }
   await assertBookable(tx, assetIds, window);
   const booking = await tx.insert(Booking, {
     startsOn: request.startsOn,
@@ -91,7 +94,8 @@ export async function book(tx: Scoped, actor: Actor, request: BookingRequest): P
  */
 async function recordHistory(tx: Scoped, actor: Actor, request: BookingRequest, assetIds: string[], purpose: BookingPurpose, today: string) {
   if (actor.role !== 'owner') throw forbidden('Only the owner records past use as history.');
-  if (request.endsOn >= today) throw ruleBroken('history_not_past', `History ends before today (${today}); book days from today on as usual.`);
+  if (request.endsOn >= today)
+    throw ruleBroken('history_not_past', `History ends before today (${(await loadFirmFormat(tx)).date(today)}); book days from today on as usual.`);
   const booking = await tx.insert(Booking, {
     startsOn: request.startsOn,
     endsOn: request.endsOn,
@@ -220,27 +224,33 @@ export type CheckoutRequest = {
  */
 export async function checkOut(tx: Scoped, actor: Actor, id: string, to: CheckoutRequest): Promise<BookingView> {
   const booking = await lockedIn(tx, id, ['reserved', 'not_collected'], 'Only a reserved or not collected booking can be checked out');
-  const { today, checkoutOpensDaysBefore } = await loadOrgContext(tx);
+  const ctx = await loadOrgContext(tx);
+  const { today, checkoutOpensDaysBefore } = ctx;
+  const f = formatOf(ctx);
   const assetIds = await itemsOf(tx, id);
   let note: string | null = null;
   if (booking.state === 'not_collected' || (booking.purpose !== 'lab' && booking.endsOn < today)) {
     if (!to.late)
-      throw ruleBroken('checkout_late', `This reservation ended ${booking.endsOn} and was not collected: give a note and a new last day to check it out late.`);
-    if (to.late.endsOn < today) throw ruleBroken('dates_past', `The new last day must be today (${today}) or later.`);
+      throw ruleBroken(
+        'checkout_late',
+        `This reservation ended ${f.date(booking.endsOn)} and was not collected: give a note and a new last day to check it out late.`,
+      );
+    if (to.late.endsOn < today) throw ruleBroken('dates_past', `The new last day must be today (${f.date(today)}) or later.`);
     await setDays(tx, booking, assetIds, today, to.late.endsOn);
     note = to.late.note;
   } else if (booking.purpose !== 'lab' && booking.startsOn > addDays(today, checkoutOpensDaysBefore)) {
+    const opensOn = addDays(booking.startsOn, -checkoutOpensDaysBefore);
     if (!to.earlyReason)
       throw ruleBroken(
         'checkout_early',
-        `Checkout opens ${addDays(booking.startsOn, -checkoutOpensDaysBefore)}, ${checkoutOpensDaysBefore} day${checkoutOpensDaysBefore === 1 ? '' : 's'} before the start (${booking.startsOn}). Confirm with a reason to hand over earlier.`,
-        { opensOn: addDays(booking.startsOn, -checkoutOpensDaysBefore) },
+        `Checkout opens ${f.date(opensOn)}, ${checkoutOpensDaysBefore} day${checkoutOpensDaysBefore === 1 ? '' : 's'} before the start (${f.date(booking.startsOn)}). Confirm with a reason to hand over earlier.`,
+        { opensOn },
       );
     await setDays(tx, booking, assetIds, today, booking.endsOn);
     note = to.earlyReason;
   }
   const refused = await refusals(tx, assetIds, booking.endsOn, booking.purpose);
-  if (refused.length) throw blockedError('Cannot hand over', refused);
+  if (refused.length) throw blockedError('Cannot hand over', refused, f);
   Object.assign(booking, {
     checkoutNote: note,
     state: 'out',
@@ -331,8 +341,10 @@ async function assertBookable(tx: Scoped, assetIds: string[], w: Window) {
       );
     }
   }
-  if (refused.length) throw blockedError('Cannot book', refused, { alternatives });
-  throw conflict(`Already booked: ${conflicts.map((c) => `${c.assetTag} (${c.startsOn} to ${c.endsOn})`).join('; ')}.`, {
+  // The firm's format is read only for a refusal: an accepted booking costs no extra query.
+  const f = await loadFirmFormat(tx);
+  if (refused.length) throw blockedError('Cannot book', refused, f, { alternatives });
+  throw conflict(`Already booked: ${conflicts.map((c) => `${c.assetTag} (booked ${f.dateRange(c.startsOn, c.endsOn)})`).join('; ')}.`, {
     conflicts,
     alternatives,
   } satisfies BookingRefusalDetails);

@@ -11,7 +11,7 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
 import { getAssets, moveAssets } from '../fleet';
 import { conflict, ruleBroken } from '../http/errors';
-import { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from '../organizations';
+import { DEFAULT_TURNAROUND_DAYS, formatOf, loadFirmFormat, loadOrgContext, type OrgContext } from '../organizations';
 import { LabTrip, LabTripItem } from './lab-trip.entity';
 import { listReply } from '../http/list-reply';
 
@@ -95,11 +95,13 @@ export class LabService {
       const ctx = await loadOrgContext(tx);
       const assets = await this.assets(tx, input.assetIds);
       const already = await openTrips(tx, input.assetIds);
-      if (already.length)
+      if (already.length) {
+        const f = formatOf(ctx);
         throw conflict(
-          `Already on a lab trip: ${already.map((t) => `${t.assetTag} (${t.provider}, ${t.state === 'planned' ? `planned for ${t.sentOn}` : 'at the lab'})`).join('; ')}.`,
+          `Already on a lab trip: ${already.map((t) => `${t.assetTag} (${t.provider}, ${t.state === 'planned' ? `planned for ${f.date(t.sentOn)}` : 'at the lab'})`).join('; ')}.`,
           { trips: already },
         );
+      }
       const expectedBackOn = input.expectedBackOn ?? addDays(input.sentOn, turnaround(ctx, input.provider) - 1);
       const booking = await book(tx, actor, {
         assetIds: assets.map((a) => a.id),
@@ -137,13 +139,14 @@ export class LabService {
       const trip = await tx.get(LabTrip, { id: tripId }, 'That lab trip');
       if (trip.state !== 'planned') throw ruleBroken('lab_trip_state', `This trip is already ${trip.state === 'at_lab' ? 'at the lab' : 'back'}.`);
       const items = await tx.find(LabTripItem, { where: { labTripId: tripId } });
+      const f = await loadFirmFormat(tx);
       // Only what is in the shop (ready or held) may leave for the lab: custody.ts refuses the rest.
       const moved = await moveAssets(
         tx,
         actor,
         items.map((i) => i.assetId),
         'at_lab',
-        { why: `Expected back ${trip.expectedBackOn}`, bookingId: trip.bookingId, where: trip.provider, counterpart: trip.provider },
+        { why: `Expected back ${f.date(trip.expectedBackOn)}`, bookingId: trip.bookingId, where: trip.provider, counterpart: trip.provider },
       );
       trip.state = 'at_lab';
       await tx.save(LabTrip, trip);

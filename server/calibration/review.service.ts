@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { addDays } from '../../shared/calibration/due-date';
 import type { CalibrationReviewView, DueRow } from '../../shared/calibration/views';
 import { readInOrganization, type Actor } from '../db/transaction';
-import { loadOrgContext } from '../organizations';
+import { documentFirm, loadOrgContext } from '../organizations';
 
 /**
  * An item's place in the due order, undated first: the key of the partial index `assets_calibration_due` (items that
@@ -56,7 +56,7 @@ export class ReviewService {
   dueWithinWindow(actor: Actor) {
     return readInOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
-      return { firm: ctx.name, today: ctx.today, items: await dueItems(tx, ctx.today, ctx.dueSoonDays) };
+      return { firm: documentFirm(ctx), today: ctx.today, items: await dueItems(tx, ctx.today, ctx.dueSoonDays) };
     });
   }
 

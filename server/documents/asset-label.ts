@@ -1,5 +1,6 @@
 import type { AssetView } from '../../shared/assets/views';
 import { assetTypeTitles } from '../../shared/schemas/assets';
+import type { DocumentFirm } from './document-layout';
 import { drawQr, INK, MM, MUTED, renderPdf, type Pdf } from './pdf';
 
 /** Label size: 70 × 36 mm, a common roll-label format. */
@@ -7,13 +8,13 @@ const LABEL_W = 70 * MM;
 const LABEL_H = 36 * MM;
 
 /** The calibration status line (ISO/IEC 17025:2017 §6.4.8: equipment labelled with its calibration status or validity period). */
-function calibrationLine(a: AssetView) {
+function calibrationLine(a: AssetView, firm: DocumentFirm) {
   if (!a.calibration.required) return 'Calibration: not required';
   if (!a.calibration.dueOn) return 'Calibration: none on record';
-  return `Calibration due ${a.calibration.dueOn}`;
+  return `Calibration due ${firm.format.date(a.calibration.dueOn)}`;
 }
 
-function drawLabel(doc: Pdf, a: AssetView, firm: string, x: number, y: number, w: number, h: number) {
+function drawLabel(doc: Pdf, a: AssetView, firm: DocumentFirm, x: number, y: number, w: number, h: number) {
   const pad = 2 * MM;
   const qr = h - 2 * pad;
   doc.save().lineWidth(0.5).strokeColor('#c9c2b3').rect(x, y, w, h).stroke().restore();
@@ -31,19 +32,19 @@ function drawLabel(doc: Pdf, a: AssetView, firm: string, x: number, y: number, w
     .font('Courier')
     .fontSize(size * 0.95)
     .text(`S/N ${a.serialNumber}`, { width: tw, lineBreak: false, ellipsis: true });
-  doc.moveDown(0.3).font('Helvetica-Bold').fontSize(size).text(calibrationLine(a), { width: tw });
+  doc.moveDown(0.3).font('Helvetica-Bold').fontSize(size).text(calibrationLine(a, firm), { width: tw });
   doc
     .font('Helvetica')
     .fontSize(size * 0.8)
     .fillColor(MUTED)
-    .text(firm, tx, y + h - pad - size, { width: tw, height: size, ellipsis: true });
+    .text(firm.name, tx, y + h - pad - size, { width: tw, height: size, ellipsis: true });
 }
 
-export const assetLabelPdf = (a: AssetView, firm: string) =>
+export const assetLabelPdf = (a: AssetView, firm: DocumentFirm) =>
   renderPdf({ size: [LABEL_W, LABEL_H], margin: 0, info: { Title: `Label ${a.assetTag}` } }, (doc) => drawLabel(doc, a, firm, 0, 0, LABEL_W, LABEL_H));
 
 /** Every member's label on one A4 page: three across, rows shrink to fit. */
-export const kitLabelSheetPdf = (kitName: string, members: AssetView[], firm: string) =>
+export const kitLabelSheetPdf = (kitName: string, members: AssetView[], firm: DocumentFirm) =>
   renderPdf({ size: 'A4', margin: 10 * MM, info: { Title: `Labels for ${kitName}` } }, (doc) => {
     const left = 10 * MM;
     const top = 18 * MM;

@@ -1,15 +1,16 @@
 import type { RecordPeriod } from '../../shared/records/views';
-import { calendarDate, facts, heading, section, table } from './document-layout';
+import { facts, heading, section, table, type DocumentFirm } from './document-layout';
 import { MM, MUTED, renderPdf, type Pdf } from './pdf';
 
 /** What an audit pack's summary page reports, gathered while the pack's records are written. */
 export type AuditSummary = {
-  firm: string;
+  firm: DocumentFirm;
   period: RecordPeriod;
   scope: string;
   items: number;
   calibrations: number;
   certificates: number;
+  /** Dates as calendar dates or moments: the summary prints each as the firm's date. */
   findings: { assetTag: string; foundOn: string; how: string; review: string }[];
   holds: { assetTag: string; startedAt: string; releasedAt: string | null; summary: string; evidence: string }[];
   overdue: { assetTag: string; days: number }[];
@@ -20,18 +21,20 @@ export type AuditSummary = {
 const none = (doc: Pdf, sentence: string) => doc.font('Helvetica-Oblique').fontSize(9).fillColor(MUTED).text(sentence).font('Helvetica');
 
 /** The period at a glance: out-of-tolerance findings and their reviews, holds, days past due, certificates missing. */
-export const auditSummaryPdf = (s: AuditSummary) =>
-  renderPdf({ size: 'A4', margin: 16 * MM, info: { Title: `Audit pack summary ${s.period.from} to ${s.period.to}` } }, (doc) => {
-    heading(doc, s.firm, 'Audit pack — summary of the period', [
-      `${s.period.from ? calendarDate(s.period.from) : ''} to ${s.period.to ? calendarDate(s.period.to) : ''}, both days included · ${s.scope}`,
+export function auditSummaryPdf(s: AuditSummary) {
+  const f = s.firm.format;
+  const period = s.period.from && s.period.to ? f.dateRange(s.period.from, s.period.to) : `${f.date(s.period.from)} to ${f.date(s.period.to)}`;
+  return renderPdf({ size: 'A4', margin: 16 * MM, info: { Title: `Audit pack summary ${period}` } }, (doc) => {
+    heading(doc, s.firm.name, 'Audit pack — summary of the period', [
+      `${period}, both days included · ${s.scope}`,
       'Each item has its own equipment record in records/; certificates are in certificates/ as stored; index.csv lists every file with its SHA-256.',
     ]);
     facts(doc, [
-      ['Items', String(s.items)],
-      ['Calibrations', `${s.calibrations} (${s.certificates} certificate files in the pack)`],
-      ['Out-of-tolerance findings', String(s.findings.length)],
-      ['Holds', String(s.holds.length)],
-      ['Items past their due date', `${s.overdue.length} (${s.overdue.reduce((sum, o) => sum + o.days, 0)} item-days in all)`],
+      ['Items', f.count(s.items)],
+      ['Calibrations', `${f.count(s.calibrations)} (${f.count(s.certificates)} certificate files in the pack)`],
+      ['Out-of-tolerance findings', f.count(s.findings.length)],
+      ['Holds', f.count(s.holds.length)],
+      ['Items past their due date', `${f.count(s.overdue.length)} (${f.count(s.overdue.reduce((sum, o) => sum + o.days, 0))} item-days in all)`],
     ]);
     section(doc, 'Out-of-tolerance findings and their impact reviews');
     if (!s.findings.length) none(doc, 'No item was found out of tolerance in the period.');
@@ -44,7 +47,7 @@ export const auditSummaryPdf = (s: AuditSummary) =>
           { header: 'How', share: 0.33 },
           { header: 'Review', share: 0.4 },
         ],
-        s.findings.map((f) => [f.assetTag, f.foundOn, f.how, f.review]),
+        s.findings.map((x) => [x.assetTag, f.date(x.foundOn), x.how, x.review]),
         8,
       );
     section(doc, 'Holds in force during the period');
@@ -59,7 +62,7 @@ export const auditSummaryPdf = (s: AuditSummary) =>
           { header: 'Why', share: 0.3 },
           { header: 'Released on evidence', share: 0.3 },
         ],
-        s.holds.map((h) => [h.assetTag, h.startedAt.slice(0, 10), h.releasedAt?.slice(0, 10) ?? 'still held', h.summary, h.evidence || '—']),
+        s.holds.map((h) => [h.assetTag, f.date(h.startedAt), h.releasedAt ? f.date(h.releasedAt) : 'still held', h.summary, h.evidence || '—']),
         8,
       );
     section(doc, 'Days past the calibration due date');
@@ -71,7 +74,7 @@ export const auditSummaryPdf = (s: AuditSummary) =>
           { header: 'Item', share: 0.3, mono: true },
           { header: 'Days past due in the period', share: 0.7 },
         ],
-        s.overdue.map((o) => [o.assetTag, String(o.days)]),
+        s.overdue.map((o) => [o.assetTag, f.count(o.days)]),
         8,
       );
     section(doc, 'Certificates missing or unreadable');
@@ -85,7 +88,8 @@ export const auditSummaryPdf = (s: AuditSummary) =>
           { header: 'Calibrated on', share: 0.2 },
           { header: 'Problem', share: 0.4 },
         ],
-        s.gaps.map((g) => [g.assetTag, g.certificateNumber, g.performedOn, g.problem]),
+        s.gaps.map((g) => [g.assetTag, g.certificateNumber, f.date(g.performedOn), g.problem]),
         8,
       );
   });
+}

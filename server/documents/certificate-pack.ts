@@ -1,5 +1,5 @@
 import { PDFDocument, type PDFPage } from 'pdf-lib';
-import { calendarDate, heading, table, typeTitle } from './document-layout';
+import { daysIncluded, heading, table, typeTitle, type DocumentFirm } from './document-layout';
 import { MM, renderPdf } from './pdf';
 import { inspectPdf, keepDrawingOnly } from './pdf-inspection';
 
@@ -15,7 +15,7 @@ export type CertificateEntry = {
   pdf: Buffer | null;
 };
 
-type PackInput = { firm: { name: string }; rentalNumber: string; customerCompany: string; startsOn: string; endsOn: string; entries: CertificateEntry[] };
+type PackInput = { firm: DocumentFirm; rentalNumber: string; customerCompany: string; startsOn: string; endsOn: string; entries: CertificateEntry[] };
 
 export type CertificatePages = { pages: PDFPage[]; contentOnly: boolean };
 
@@ -47,12 +47,12 @@ export const certificateStatusText = {
 } as const;
 const foundText = (found: Found) =>
   typeof found === 'string' ? certificateStatusText[found] : found.contentOnly ? 'pages attached; scripts and files removed' : 'certificate attached';
-const dateOrDash = (d: string | null) => (d ? calendarDate(d) : '—');
 
 function coverPdf(input: PackInput, found: Found[]) {
+  const f = input.firm.format;
   return renderPdf({ size: 'A4', margin: 18 * MM }, (doc) => {
     heading(doc, input.firm.name, `Certificate pack — rental ${input.rentalNumber}`, [
-      `${input.customerCompany} · ${calendarDate(input.startsOn)} to ${calendarDate(input.endsOn)}, both days included`,
+      `${input.customerCompany} · ${daysIncluded(f, input.startsOn, input.endsOn)}`,
       input.entries.length
         ? 'This pack lets you show your own auditors that the rented kit was in calibration for the rental. The certificates follow this page in the order listed.'
         : 'None of the rented items needs calibration (batteries, nests, cases and the like), so there are no certificates to include.',
@@ -77,8 +77,8 @@ function coverPdf(input: PackInput, found: Found[]) {
           [typeTitle(e.type), e.model].filter(Boolean).join(' '),
           e.serialNumber,
           e.certificateNumber ?? '—',
-          dateOrDash(e.performedOn),
-          dateOrDash(e.dueOn),
+          f.date(e.performedOn),
+          f.date(e.dueOn),
           e.provider ?? '—',
           foundText(pages),
         ];
@@ -97,7 +97,7 @@ export async function certificatePackPdf(input: PackInput): Promise<Buffer> {
   for (const page of await pack.copyPages(cover, cover.getPageIndices())) pack.addPage(page);
   for (const f of found) if (typeof f !== 'string') f.pages.forEach((p) => pack.addPage(p));
   pack.setTitle(`Certificate pack ${input.rentalNumber}`);
-  pack.setSubject(`${input.customerCompany}, ${input.startsOn} to ${input.endsOn}`);
+  pack.setSubject(`${input.customerCompany}, ${input.firm.format.dateRange(input.startsOn, input.endsOn)}`);
   pack.setProducer('Nestkeeper');
   pack.setCreator('Nestkeeper');
   return Buffer.from(await pack.save());

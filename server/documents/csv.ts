@@ -4,7 +4,8 @@ import { neutraliseFormula } from '../../shared/csv/formula-guard';
 const options = { newline: '\r\n', quotes: (cell: unknown) => typeof cell === 'string' && cell.startsWith("'") };
 
 /**
- * A CSV download (RFC 4180 by papaparse, CRLF line ends). Each cell passes
+ * A CSV download (RFC 4180 by papaparse, CRLF line ends). Programs read it, so cells stay machine-readable in any
+ * locale (ISO 8601 dates, plain decimals, codes) and headings name units and currency (shared/formatting/csv-columns.ts). Each cell passes
  * through the shared formula guard, and a guarded cell is always enclosed in
  * double quotes, as OWASP's CSV Injection page writes it.
  * (papaparse's own `escapeFormulae: true` is not used: in 5.7 its pattern

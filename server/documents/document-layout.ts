@@ -3,40 +3,24 @@
  * pack cover): heading, sections, a paginating table and a totals block, in the
  * house style of the other Nestkeeper PDFs.
  */
-import { formatMoney } from '../../shared/billing/money';
+import type { FirmFormat } from '../../shared/formatting/firm-format';
 import { assetTypeTitles, type AssetType } from '../../shared/assets/vocabulary';
 import { BRASS, INK, MM, MUTED, type Pdf } from './pdf';
 import { batteryCautions } from './shipping-sheet-pdf';
 
-/** Printed documents use one locale so a customer's copy reads the same whoever prints it. */
-const LOCALE = 'en-GB';
 const BODY = 9;
 
-export const money = (minor: number, currency: string) => formatMoney(minor, currency, LOCALE);
-
-/** 1 900 basis points → "19 %". */
-export const taxRateText = (basisPoints: number) => `${new Intl.NumberFormat(LOCALE, { maximumFractionDigits: 2 }).format(basisPoints / 100)} %`;
-
 /**
- * One formatter per time zone, made once: each new Intl.DateTimeFormat holds ICU memory outside the JavaScript heap
- * that the collector does not see, so making one per date printed grew an audit pack's server by hundreds of MB.
+ * Who prints a document and in whose voice: every date, time, amount and length on paper goes through the firm's
+ * format (shared/formatting), made without a reader's zone so times always name the firm's zone.
  */
-const dateTimeFormats = new Map<string, Intl.DateTimeFormat>();
-const dateTimeFormat = (timeZone: string) => {
-  let format = dateTimeFormats.get(timeZone);
-  if (!format) {
-    format = new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeStyle: 'short', timeZone });
-    dateTimeFormats.set(timeZone, format);
-  }
-  return format;
-};
-const calendarDateFormat = new Intl.DateTimeFormat(LOCALE, { dateStyle: 'medium', timeZone: 'UTC' });
+export type DocumentFirm = { name: string; format: FirmFormat };
 
-/** A calendar date `YYYY-MM-DD` is already the firm's date: format it in UTC so it does not shift. */
-export const calendarDate = (isoDate: string) => calendarDateFormat.format(new Date(`${isoDate}T00:00:00Z`));
+/** 1 900 basis points → "19 %" in the firm's numbers ("19,5 %" for a decimal comma). */
+export const taxRateText = (basisPoints: number, f: FirmFormat) => `${f.number(basisPoints / 100, 2)} %`;
 
-/** A moment (ISO timestamp) as the firm's wall-clock date and time. */
-export const firmDateTime = (iso: string, timeZone: string) => dateTimeFormat(timeZone).format(new Date(iso));
+/** Two calendar dates as a period a person signs for: "3–12 Mar 2025, both days included". */
+export const daysIncluded = (f: FirmFormat, first: string, last: string) => `${f.dateRange(first, last)}, both days included`;
 
 export const typeTitle = (type: string) => assetTypeTitles[type as AssetType] ?? type;
 

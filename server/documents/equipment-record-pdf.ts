@@ -2,8 +2,9 @@ import { PDFDocument, rgb, StandardFonts } from 'pdf-lib';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
 import type { EquipmentRecordView } from '../../shared/records/views';
 import { certificatePages, certificateStatusText } from './certificate-pack';
-import { calendarDate, contentWidth, facts, firmDateTime, keepTogether, section, table, typeTitle } from './document-layout';
-import { BRASS, INK, MM, MUTED, renderPdf, type Pdf } from './pdf';
+import type { FirmFormat } from '../../shared/formatting/firm-format';
+import { contentWidth, facts, keepTogether, section, table, typeTitle } from './document-layout';
+import { BRASS, forStandardFonts, INK, MM, MUTED, renderPdf, type Pdf } from './pdf';
 
 /** Where the record's certificates are: appended to this PDF, or beside it in an audit pack (by calibration id). */
 export type CertificatePlacement = { annex: true } | { annex: false; packFile: (calibrationId: string) => string };
@@ -12,7 +13,8 @@ export type RecordPdfInput = {
   view: EquipmentRecordView;
   certificates: Map<string, Buffer | null>;
   thumbnails: Map<string, Buffer>;
-  timeZone: string;
+  /** The firm's format (no reader's zone: times name the firm's zone). */
+  format: FirmFormat;
   publicUrl: string;
   printedAt: Date;
   placement: CertificatePlacement;
@@ -26,10 +28,11 @@ const FOOTER = 10 * MM;
 
 type Annexed = { calibrationId: string; certificateNumber: string; firstPage: number; pageCount: number };
 
-function periodText(view: EquipmentRecordView) {
+function periodText(view: EquipmentRecordView, f: FirmFormat) {
   const { from, to } = view.period;
   if (!from && !to) return 'Everything on record for this item.';
-  return `Period ${from ? calendarDate(from) : 'from the first record'} to ${to ? calendarDate(to) : 'today'}, both days included; the certificate that covered the period's first day is listed too.`;
+  const period = from && to ? f.dateRange(from, to) : `${from ? f.date(from) : 'from the first record'} to ${to ? f.date(to) : 'today'}`;
+  return `Period ${period}, both days included; the certificate that covered the period's first day is listed too.`;
 }
 
 /** "nothing of this kind in the period", said in a sentence instead of an empty table. */
@@ -52,7 +55,7 @@ function certificateWhere(view: EquipmentRecordView, id: string, input: RecordPd
   const c = view.calibrations.find((x) => x.id === id)!;
   if (!c.certificate) return 'No certificate file is on record for this calibration.';
   if (!c.certificate.readable) return `${certificateStatusText.unreadable}: the stored file "${c.certificate.fileName}" does not open as a PDF.`;
-  const fileLine = `"${c.certificate.fileName}", ${c.certificate.sizeBytes} bytes, SHA-256 ${c.certificate.sha256}`;
+  const fileLine = `"${c.certificate.fileName}", ${input.format.count(c.certificate.sizeBytes)} bytes, SHA-256 ${c.certificate.sha256}`;
   if (!input.placement.annex) return `In this pack as ${input.placement.packFile(id)} (${fileLine}).`;
   const a = annexed.find((x) => x.calibrationId === id);
   return a
@@ -61,7 +64,7 @@ function certificateWhere(view: EquipmentRecordView, id: string, input: RecordPd
 }
 
 function calibrationsSection(doc: Pdf, input: RecordPdfInput, annexed: Annexed[]) {
-  const { view, timeZone } = input;
+  const { view, format: f } = input;
   if (!view.calibrations.length) return none(doc, 'No calibration is on record for this item in the period, so there is no certificate to show.');
   for (const c of view.calibrations) {
     keepTogether(doc, 110);
@@ -69,24 +72,24 @@ function calibrationsSection(doc: Pdf, input: RecordPdfInput, annexed: Annexed[]
       .font('Helvetica-Bold')
       .fontSize(10)
       .fillColor(INK)
-      .text(`${calendarDate(c.performedOn)} · ${c.provider} · certificate `, { continued: true });
+      .text(`${f.date(c.performedOn)} · ${c.provider} · certificate `, { continued: true });
     doc.fillColor(BRASS).text(c.certificateNumber, { link: `${input.publicUrl.replace(/\/$/, '')}${c.certificateUrl}`, underline: true });
     doc.fillColor(INK).font('Helvetica').fontSize(9);
     facts(doc, [
       ['As found', words(c.asFound)],
       ['As left', words(c.asLeft)],
       ['Adjustment', c.adjustment],
-      ['Interval and due date set', `${c.intervalMonths} months, due ${calendarDate(c.dueOn)}`],
+      ['Interval and due date set', `${c.intervalMonths} months, due ${f.date(c.dueOn)}`],
       ['Certificate file', certificateWhere(view, c.id, input, annexed)],
       ['Note', c.note],
-      ['Recorded', `${firmDateTime(c.recordedAt, timeZone)} by ${c.recordedBy ?? 'someone no longer on record'}`],
+      ['Recorded', `${f.dateTime(c.recordedAt)} by ${c.recordedBy ?? 'someone no longer on record'}`],
     ]);
     doc.moveDown(0.6);
   }
 }
 
 function checksSection(doc: Pdf, input: RecordPdfInput) {
-  const { view, timeZone } = input;
+  const { view, format: f } = input;
   if (!view.checks.length) return none(doc, 'No field check is on record for this item in the period.');
   for (const c of view.checks) {
     keepTogether(doc, 120);
@@ -94,16 +97,14 @@ function checksSection(doc: Pdf, input: RecordPdfInput) {
       .font('Helvetica-Bold')
       .fontSize(10)
       .fillColor(INK)
-      .text(
-        `${checkKindTitles[c.kind]}${c.position ? ` (${c.position})` : ''} · ${firmDateTime(c.performedAt, timeZone)} · ${c.decision === 'pass' ? 'PASS' : 'FAIL'}`,
-      );
+      .text(`${checkKindTitles[c.kind]}${c.position ? ` (${c.position})` : ''} · ${f.dateTime(c.performedAt)} · ${c.decision === 'pass' ? 'PASS' : 'FAIL'}`);
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['With', c.relatedAssetTag],
       ['Inputs', c.inputLines.join('\n') || 'Not stored.'],
       ['Result', c.resultLines.join('\n') || 'Not stored.'],
-      ['Tolerance', `${c.toleranceUm} µm`],
-      ['Uncertainty', `U = ${c.expandedUncertaintyUm} µm (k = 2); guard band ${c.guardBandUm} µm`],
+      ['Tolerance', f.um(c.toleranceUm)],
+      ['Uncertainty', `U = ${f.um(c.expandedUncertaintyUm)} (k = 2); guard band ${f.um(c.guardBandUm)}`],
       ['Decision rule', `${ruleWords[c.decisionRule]} (ILAC-G8)`],
       ['Decision', c.decision],
       ['Note', c.note],
@@ -114,7 +115,7 @@ function checksSection(doc: Pdf, input: RecordPdfInput) {
 }
 
 function holdsSection(doc: Pdf, input: RecordPdfInput) {
-  const { view, timeZone } = input;
+  const { view, format: f } = input;
   if (!view.holds.length) return none(doc, 'The item was not on hold in the period.');
   for (const h of view.holds) {
     keepTogether(doc, 80);
@@ -125,11 +126,8 @@ function holdsSection(doc: Pdf, input: RecordPdfInput) {
       .text(`${words(h.reason)} hold · ${h.summary}`);
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
-      ['Held', `${firmDateTime(h.startedAt, timeZone)} by ${h.startedBy ?? 'someone no longer on record'}`],
-      [
-        'Released',
-        h.releasedAt ? `${firmDateTime(h.releasedAt, timeZone)} by ${h.releasedBy ?? 'someone no longer on record'}` : 'Not released: still on hold',
-      ],
+      ['Held', `${f.dateTime(h.startedAt)} by ${h.startedBy ?? 'someone no longer on record'}`],
+      ['Released', h.releasedAt ? `${f.dateTime(h.releasedAt)} by ${h.releasedBy ?? 'someone no longer on record'}` : 'Not released: still on hold'],
       ['Evidence', h.releasedAt ? h.releaseEvidence.join('\n') || 'No evidence is on record for this release.' : null],
       ['Release note', h.releaseNote],
     ]);
@@ -141,7 +139,7 @@ const THUMB_W = 38 * MM;
 const THUMB_H = 28 * MM;
 
 function incidentsSection(doc: Pdf, input: RecordPdfInput) {
-  const { view, timeZone } = input;
+  const { view, format: f } = input;
   if (!view.incidents.length) return none(doc, 'No damage, loss or malfunction was reported for this item in the period.');
   for (const i of view.incidents) {
     // The first row of thumbnails stays on the page of the words that describe them.
@@ -150,7 +148,7 @@ function incidentsSection(doc: Pdf, input: RecordPdfInput) {
       .font('Helvetica-Bold')
       .fontSize(10)
       .fillColor(INK)
-      .text(`${words(i.kind)} · ${firmDateTime(i.occurredAt, timeZone)} · ${words(i.state)}`);
+      .text(`${words(i.kind)} · ${f.dateTime(i.occurredAt)} · ${words(i.state)}`);
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['Description', i.description],
@@ -183,7 +181,7 @@ function incidentsSection(doc: Pdf, input: RecordPdfInput) {
 }
 
 function reviewsSection(doc: Pdf, input: RecordPdfInput) {
-  const { view, timeZone } = input;
+  const { view, format: f } = input;
   if (!view.impactReviews.length) return none(doc, 'No impact review concerns this item in the period.');
   for (const r of view.impactReviews) {
     keepTogether(doc, 90);
@@ -191,12 +189,12 @@ function reviewsSection(doc: Pdf, input: RecordPdfInput) {
       .font('Helvetica-Bold')
       .fontSize(10)
       .fillColor(INK)
-      .text(`Found ${r.trigger === 'calibration' ? 'out of tolerance as found' : 'failing a field check'} on ${calendarDate(r.foundOn)} · review ${r.state}`);
+      .text(`Found ${r.trigger === 'calibration' ? 'out of tolerance as found' : 'failing a field check'} on ${f.date(r.foundOn)} · review ${r.state}`);
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
-      ['Last passing evidence', r.since ? calendarDate(r.since) : 'none on record: every earlier use is in question'],
-      ['Opened', firmDateTime(r.openedAt, timeZone)],
-      ['Closed', r.closedAt ? firmDateTime(r.closedAt, timeZone) : null],
+      ['Last passing evidence', r.since ? f.date(r.since) : 'none on record: every earlier use is in question'],
+      ['Opened', f.dateTime(r.openedAt)],
+      ['Closed', r.closedAt ? f.dateTime(r.closedAt) : null],
     ]);
     if (!r.bookings.length) none(doc, 'No booking used the item between its last passing evidence and the finding.');
     else
@@ -212,11 +210,11 @@ function reviewsSection(doc: Pdf, input: RecordPdfInput) {
         r.bookings.map((b) => [
           b.jobReference ?? 'booking',
           b.customerName ?? '—',
-          `${b.startsOn} to ${b.endsOn}`,
+          f.dateRange(b.startsOn, b.endsOn),
           b.assessment
-            ? `${assessmentWords[b.assessment]}${b.note ? `: ${b.note}` : ''} (${b.assessedBy ?? '?'}, ${b.assessedAt ? firmDateTime(b.assessedAt, timeZone) : '?'})`
+            ? `${assessmentWords[b.assessment]}${b.note ? `: ${b.note}` : ''} (${b.assessedBy ?? '?'}, ${b.assessedAt ? f.dateTime(b.assessedAt) : '?'})`
             : 'not assessed yet',
-          b.noticeQueuedAt ? `sent to ${b.noticeTo ?? 'the customer'} ${firmDateTime(b.noticeQueuedAt, timeZone)}` : 'no notice sent',
+          b.noticeQueuedAt ? `sent to ${b.noticeTo ?? 'the customer'} ${f.dateTime(b.noticeQueuedAt)}` : 'no notice sent',
         ]),
         8,
       );
@@ -225,7 +223,7 @@ function reviewsSection(doc: Pdf, input: RecordPdfInput) {
 }
 
 function intervalsSection(doc: Pdf, input: RecordPdfInput) {
-  const { view, timeZone } = input;
+  const { view, format: f } = input;
   if (!view.intervalChanges.length) return none(doc, 'The calibration interval did not change in the period.');
   table(
     doc,
@@ -235,23 +233,23 @@ function intervalsSection(doc: Pdf, input: RecordPdfInput) {
       { header: 'Reason', share: 0.48 },
       { header: 'By', share: 0.18 },
     ],
-    view.intervalChanges.map((c) => [firmDateTime(c.at, timeZone), `${c.fromMonths ?? '—'} → ${c.toMonths ?? '—'} months`, c.reason, c.by ?? '—']),
+    view.intervalChanges.map((c) => [f.dateTime(c.at), `${c.fromMonths ?? '—'} → ${c.toMonths ?? '—'} months`, c.reason, c.by ?? '—']),
     8,
   );
 }
 
-function referenceSection(doc: Pdf, view: EquipmentRecordView) {
+function referenceSection(doc: Pdf, view: EquipmentRecordView, f: FirmFormat) {
   const r = view.reference;
   if (!r) return none(doc, `A ${typeTitle(view.asset.type).toLowerCase()} is not a reference artefact: it carries no certified values.`);
   facts(doc, [
     ...r.values.map((v): [string, string] => [v.label, v.value]),
     ['Certificate', r.certificateNumber ?? 'No certificate on record for these values.'],
-    ['Valid', r.validThrough ? `${r.validFrom ? calendarDate(r.validFrom) : '?'} to ${calendarDate(r.validThrough)}` : 'No validity on record.'],
+    ['Valid', r.validThrough ? `${r.validFrom ? f.date(r.validFrom) : '?'} to ${f.date(r.validThrough)}` : 'No validity on record.'],
   ]);
 }
 
 function custodySection(doc: Pdf, input: RecordPdfInput) {
-  const { view, timeZone } = input;
+  const { view, format: f } = input;
   if (!view.custody.length) return none(doc, 'No hand-over, lab shipment, return, hold or release is on record in the period.');
   table(
     doc,
@@ -263,7 +261,7 @@ function custodySection(doc: Pdf, input: RecordPdfInput) {
       { header: 'Note', share: 0.16 },
       { header: 'By', share: 0.14 },
     ],
-    view.custody.map((c) => [firmDateTime(c.at, timeZone), words(c.kind), c.holder ?? '—', c.location ?? '—', c.note ?? '', c.by ?? '—']),
+    view.custody.map((c) => [f.dateTime(c.at), words(c.kind), c.holder ?? '—', c.location ?? '—', c.note ?? '', c.by ?? '—']),
     7.5,
   );
 }
@@ -276,12 +274,15 @@ const sections: { title: string; draw: (doc: Pdf, input: RecordPdfInput, annexed
   { title: 'Incidents', draw: incidentsSection },
   { title: 'Impact reviews', draw: reviewsSection },
   { title: 'Calibration interval changes', draw: intervalsSection },
-  { title: 'Reference artefact (§6.4.13 f)', draw: (doc, input) => referenceSection(doc, input.view) },
+  { title: 'Reference artefact (§6.4.13 f)', draw: (doc, input) => referenceSection(doc, input.view, input.format) },
   { title: 'Chain of custody', draw: custodySection },
 ];
 
-const footerText = (view: EquipmentRecordView, page: number, total: number) =>
-  `${view.asset.assetTag} · record of ${view.recordDate} · content SHA-256 ${view.contentHash} · page ${page} of ${total}`;
+/** Drawn by pdfkit and, on annexed pages, by pdf-lib: its standard font also draws WinAnsi only. */
+const footerText = (input: RecordPdfInput, page: number, total: number) =>
+  forStandardFonts(
+    `${input.view.asset.assetTag} · record of ${input.format.date(input.view.recordDate)} · content SHA-256 ${input.view.contentHash} · page ${page} of ${total}`,
+  );
 
 /** The record's pages (pdfkit): heading, contents, the sections, and the footer with the hash on every page. */
 function recordPages(input: RecordPdfInput, annexed: Annexed[], annexPages: number) {
@@ -301,9 +302,9 @@ function recordPages(input: RecordPdfInput, annexed: Annexed[], annexPages: numb
         .fontSize(9)
         .fillColor(MUTED)
         .text(
-          `${typeTitle(view.asset.type)} · ${[view.asset.manufacturer, view.asset.model].filter(Boolean).join(' ')} · S/N ${view.asset.serialNumber}. ${periodText(view)}`,
+          `${typeTitle(view.asset.type)} · ${[view.asset.manufacturer, view.asset.model].filter(Boolean).join(' ')} · S/N ${view.asset.serialNumber}. ${periodText(view, input.format)}`,
         )
-        .text(`Record of ${calendarDate(view.recordDate)}; printed ${firmDateTime(input.printedAt.toISOString(), input.timeZone)} by Nestkeeper.`)
+        .text(`Record of ${input.format.date(view.recordDate)}; printed ${input.format.dateTime(input.printedAt)} by Nestkeeper.`)
         .text(`Content SHA-256 ${view.contentHash}: a reprint of the same content shows the same hash.`);
       doc.moveDown(0.8);
       doc.font('Helvetica-Bold').fontSize(11).fillColor(INK).text('Contents');
@@ -343,7 +344,7 @@ function recordPages(input: RecordPdfInput, annexed: Annexed[], annexPages: numb
           .font('Courier')
           .fontSize(6.5)
           .fillColor(MUTED)
-          .text(footerText(view, p + 1, total), left, doc.page.height - MARGIN - 4, { width, lineBreak: false });
+          .text(footerText(input, p + 1, total), left, doc.page.height - MARGIN - 4, { width, lineBreak: false });
         doc.page.margins.bottom = bottom;
       }
     },
@@ -381,7 +382,7 @@ export async function equipmentRecordPdf(input: RecordPdfInput): Promise<Buffer>
     out.addPage(page);
     const { width } = page.getSize();
     page.drawRectangle({ x: 0, y: 0, width, height: 16, color: rgb(1, 1, 1) });
-    page.drawText(footerText(input.view, recordPageCount + i + 1, total), { x: 12, y: 5, size: 6, font, color: rgb(0.36, 0.39, 0.46) });
+    page.drawText(footerText(input, recordPageCount + i + 1, total), { x: 12, y: 5, size: 6, font, color: rgb(0.36, 0.39, 0.46) });
   });
   return Buffer.from(await out.save());
 }

@@ -1,5 +1,5 @@
 import type { ChecklistLine } from '../../shared/bookings/views';
-import { bullets, calendarDate, facts, firmDateTime, heading, rentalCautions, section, signatureLines, table, typeTitle } from './document-layout';
+import { bullets, daysIncluded, facts, heading, rentalCautions, section, signatureLines, table, typeTitle, type DocumentFirm } from './document-layout';
 import { MM, renderPdf } from './pdf';
 
 export type HandoverSheet = {
@@ -20,12 +20,13 @@ const conditionWords: Record<ChecklistLine['condition'], string> = { good: 'good
  * handed over once the kit is out, lines to fill in by hand before), a column
  * for the return, the cautions and two signature lines.
  */
-export function handoverSheetPdf(firm: { name: string; timeZone: string }, sheet: HandoverSheet): Promise<Buffer> {
+export function handoverSheetPdf(firm: DocumentFirm, sheet: HandoverSheet): Promise<Buffer> {
+  const f = firm.format;
   return renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: `Hand-over sheet ${sheet.title}` } }, (doc) => {
-    heading(doc, firm.name, 'Hand-over sheet', [sheet.checkedOutAt ? `Handed over ${firmDateTime(sheet.checkedOutAt, firm.timeZone)}` : 'To be handed over']);
+    heading(doc, firm.name, 'Hand-over sheet', [sheet.checkedOutAt ? `Handed over ${f.dateTime(sheet.checkedOutAt)}` : 'To be handed over']);
     facts(doc, [
       ['For', sheet.title],
-      ['Dates', `${calendarDate(sheet.startsOn)} to ${calendarDate(sheet.endsOn)}, both days included`],
+      ['Dates', daysIncluded(f, sheet.startsOn, sheet.endsOn)],
       ['Kit', sheet.kitName],
       ['Taken by', sheet.takenBy],
     ]);

@@ -1,4 +1,5 @@
 import { formatWattHours, shippingClassText, type shippingSheet } from '../../shared/batteries/shipping-class';
+import type { DocumentFirm } from './document-layout';
 import { BRASS, INK, MM, MUTED, renderPdf } from './pdf';
 
 /** DESIGN.md §6 cautions, as printed on the sheet that travels with the kit. */
@@ -9,10 +10,10 @@ export const batteryCautions = [
   "These lines summarise common rules; the carrier's current rules, local codes and the instrument maker's instructions come first.",
 ];
 
-export const shippingSheetPdf = (kitName: string, firm: string, sheet: ReturnType<typeof shippingSheet>) =>
+export const shippingSheetPdf = (kitName: string, firm: DocumentFirm, sheet: ReturnType<typeof shippingSheet>) =>
   renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: `Battery shipping sheet ${kitName}` } }, (doc) => {
     const left = doc.page.margins.left;
-    doc.font('Helvetica').fontSize(9).fillColor(MUTED).text(firm);
+    doc.font('Helvetica').fontSize(9).fillColor(MUTED).text(firm.name);
     doc.font('Helvetica-Bold').fontSize(16).fillColor(INK).text(`Battery shipping sheet — ${kitName}`);
     doc
       .font('Helvetica')
@@ -30,9 +31,9 @@ export const shippingSheetPdf = (kitName: string, firm: string, sheet: ReturnTyp
     for (const line of sheet.lines) {
       const cells = [
         line.assetTag,
-        String(line.nominalVoltageV),
-        String(line.ratedCapacityAh),
-        formatWattHours(line.wattHours, 'en-GB'),
+        firm.format.number(line.nominalVoltageV, 2),
+        firm.format.number(line.ratedCapacityAh, 2),
+        formatWattHours(line.wattHours, firm.format.locale),
         shippingClassText[line.class],
       ];
       cells.forEach((c, i) => doc.font(i === 0 ? 'Courier' : 'Helvetica').text(c, cols[i], y, { width: i === 4 ? 70 * MM : 30 * MM }));
@@ -42,7 +43,9 @@ export const shippingSheetPdf = (kitName: string, firm: string, sheet: ReturnTyp
       doc.text('This kit has no batteries.', left, y);
       y += 14;
     }
-    doc.font('Helvetica-Bold').text(`Total: ${sheet.count} batteries, ${formatWattHours(sheet.totalWattHours, 'en-GB')}`, left, y + 6);
+    doc
+      .font('Helvetica-Bold')
+      .text(`Total: ${firm.format.count(sheet.count)} batteries, ${formatWattHours(sheet.totalWattHours, firm.format.locale)}`, left, y + 6);
     doc.moveDown(2);
     doc
       .save()

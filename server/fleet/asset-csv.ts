@@ -8,7 +8,9 @@ import { toCsv } from '../documents/csv';
 /**
  * The fleet's CSV file (RFC 4180, parsed and written by papaparse): one row
  * per asset, type-specific facts as `spec.<name>` columns. The export adds
- * read-only columns the import ignores.
+ * read-only columns the import ignores. Export and import share these column
+ * keys, so each key carries its unit (`lengthMm`, `replacementValueMinor`) and
+ * cells stay as programs read them: ISO dates, plain numbers, codes.
  */
 type SpecKind = 'number' | 'list' | 'boolean' | 'text';
 export const specColumns: Record<string, SpecKind> = {

@@ -5,7 +5,8 @@ import type { AssetListQuery } from '../../shared/schemas/assets';
 import { inOrganization, type Actor } from '../db/transaction';
 import { assetLabelPdf, kitLabelSheetPdf } from '../documents/asset-label';
 import { shippingSheetPdf } from '../documents/shipping-sheet-pdf';
-import { loadOrgContext } from '../organizations';
+import { documentFirm, loadOrgContext } from '../organizations';
+import type { DocumentFirm } from '../documents/document-layout';
 import { Asset } from './asset.entity';
 import { assetsToCsv } from './asset-csv';
 import { findAssets } from './asset-list';
@@ -21,11 +22,11 @@ export class FleetDocumentsService {
     private readonly publicUrl: string,
   ) {}
 
-  private withAsset<T>(actor: Actor, id: string, work: (view: AssetView, firm: string) => Promise<T> | T) {
+  private withAsset<T>(actor: Actor, id: string, work: (view: AssetView, firm: DocumentFirm) => Promise<T> | T) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const asset = await tx.get(Asset, { id }, 'That asset', { relations: { kit: true } });
-      return work(toAssetView(asset, ctx, this.publicUrl), ctx.name);
+      return work(toAssetView(asset, ctx, this.publicUrl), documentFirm(ctx));
     });
   }
 
@@ -41,7 +42,7 @@ export class FleetDocumentsService {
     });
   }
 
-  private withKit<T>(actor: Actor, id: string, work: (kit: Kit, members: AssetView[], firm: string) => Promise<T> | T) {
+  private withKit<T>(actor: Actor, id: string, work: (kit: Kit, members: AssetView[], firm: DocumentFirm) => Promise<T> | T) {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const ctx = await loadOrgContext(tx);
       const kit = await tx.get(Kit, { id }, 'That kit');
@@ -49,7 +50,7 @@ export class FleetDocumentsService {
       return work(
         kit,
         members.map((m) => toAssetView(Object.assign(m, { kit }), ctx, this.publicUrl)),
-        ctx.name,
+        documentFirm(ctx),
       );
     });
   }

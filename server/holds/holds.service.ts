@@ -8,7 +8,7 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { ruleBroken } from '../http/errors';
 import { calendarDayIn } from '../../shared/calibration/due-date';
 import { getAsset, lockAssets, moveAssets, noteCustody, type AssetRecord } from '../fleet';
-import { loadOrgContext } from '../organizations';
+import { formatOf, loadOrgContext } from '../organizations';
 import { Hold } from './hold.entity';
 import { listReply } from '../http/list-reply';
 
@@ -89,10 +89,11 @@ export class HoldsService {
       const asset = await getAsset(tx, assetId);
       const hold = await openHoldFor(tx, assetId);
       if (!hold) throw ruleBroken('not_held', `${asset.assetTag} is not on hold.`);
-      const { timeZone } = await loadOrgContext(tx);
-      const { evidence, missing } = await this.evidenceSince(tx, asset, hold.startedAt, timeZone);
+      const ctx = await loadOrgContext(tx);
+      const { evidence, missing } = await this.evidenceSince(tx, asset, hold.startedAt, ctx.timeZone);
       if (missing.length) {
-        throw ruleBroken('release_needs_evidence', `${asset.assetTag} stays on hold: ${missing.join('; ')}.`, {
+        const since = formatOf(ctx).dateTime(hold.startedAt);
+        throw ruleBroken('release_needs_evidence', `${asset.assetTag} stays on hold (held since ${since}): ${missing.join('; ')}.`, {
           missing,
           holdStartedAt: hold.startedAt.toISOString(),
         });

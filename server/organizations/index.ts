@@ -3,3 +3,4 @@ import { Organization } from './organization.entity';
 
 export const organizationEntities = [Organization];
 export { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from './org-context';
+export { documentFirm, formatOf, loadFirmFormat, voiceOf } from './org-context';

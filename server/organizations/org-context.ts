@@ -1,4 +1,4 @@
-import { DEFAULT_LOCALE } from '../../shared/formatting/firm-format';
+import { DEFAULT_LOCALE, firmFormat } from '../../shared/formatting/firm-format';
 import { DEFAULT_DUE_SOON_DAYS, todayIn } from '../../shared/calibration/due-date';
 import { DEFAULT_TRIAGE_RATIO } from '../../shared/calibration/triage';
 import { defaultIntervalPolicy, type IntervalPolicy } from '../../shared/calibration/interval-review';
@@ -42,6 +42,15 @@ export const DEFAULT_PAYMENT_DAYS = 30;
 
 /** The firm's voice for formatting (shared/formatting). */
 export const voiceOf = (ctx: Pick<OrgContext, 'locale' | 'timeZone' | 'currency'>) => ({ locale: ctx.locale, timeZone: ctx.timeZone, currency: ctx.currency });
+
+/** The firm's format for what the server writes (documents, refusals): no reader's zone is known, so times name the firm's zone. */
+export const formatOf = (ctx: Pick<OrgContext, 'locale' | 'timeZone' | 'currency'>) => firmFormat(voiceOf(ctx));
+
+/** The firm as its documents name it: its name and its format (documents/document-layout.ts `DocumentFirm`). */
+export const documentFirm = (ctx: OrgContext) => ({ name: ctx.name, format: formatOf(ctx) });
+
+/** The firm's format for a refusal or notice, read in the caller's transaction. */
+export const loadFirmFormat = async (tx: Scoped) => formatOf(await loadOrgContext(tx));
 
 export async function loadOrgContext(tx: Scoped, now: Date = new Date()): Promise<OrgContext> {
   const [org] = await tx.sql<Pick<Organization, 'name' | 'currency' | 'settings'> & { time_zone: string }>(

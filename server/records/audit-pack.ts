@@ -15,7 +15,7 @@ import { auditSummaryPdf, type AuditSummary } from '../documents/audit-summary-p
 import { equipmentRecordPdf } from '../documents/equipment-record-pdf';
 import { assetIdsSelected, getKit, inTagOrder } from '../fleet';
 import { heldAssetIds } from '../holds';
-import type { OrgContext } from '../organizations';
+import { documentFirm, type OrgContext } from '../organizations';
 import { sha256 } from './content-hash';
 import { assembleRecords, type AssembledRecord } from './record-assembly';
 
@@ -57,6 +57,7 @@ export async function packPreview(tx: Scoped, ids: string[], period: RecordPerio
   };
 }
 
+/** index.csv, for an auditor's tools: plain values (sizes in bytes, hex SHA-256), the unit in the column's name. */
 const indexColumns = [
   'item',
   'type',
@@ -148,8 +149,9 @@ export async function writeAuditPack(out: Writable, ids: string[], query: AuditP
   const period = { from: query.from, to: query.to };
   const zip = zipStream(out);
   const index = await indexFile();
+  const firm = documentFirm(ctx);
   const summary: AuditSummary = {
-    firm: ctx.name,
+    firm,
     period,
     scope: sources.scopeText,
     items: ids.length,
@@ -226,7 +228,7 @@ async function addItem(
     view,
     certificates,
     thumbnails,
-    timeZone: sources.ctx.timeZone,
+    format: summary.firm.format,
     publicUrl: sources.publicUrl,
     printedAt: new Date(view.generatedAt),
     placement: { annex: false, packFile: (id) => certificatePath(view, id) },
@@ -252,7 +254,7 @@ function collectSummary(summary: AuditSummary, view: EquipmentRecordView, today:
       });
   for (const c of view.checks)
     if (c.decision === 'fail')
-      summary.findings.push({ assetTag: tag, foundOn: c.performedAt.slice(0, 10), how: `failed ${c.kind.replace(/_/g, ' ')}`, review: reviewText(view, c.id) });
+      summary.findings.push({ assetTag: tag, foundOn: c.performedAt, how: `failed ${c.kind.replace(/_/g, ' ')}`, review: reviewText(view, c.id) });
   for (const h of view.holds)
     summary.holds.push({ assetTag: tag, startedAt: h.startedAt, releasedAt: h.releasedAt, summary: h.summary, evidence: h.releaseEvidence.join('; ') });
   if (view.asset.calibration.required) {

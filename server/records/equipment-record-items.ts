@@ -1,6 +1,7 @@
 import type { AssetView, EquipmentRecordItem } from '../../shared/assets/views';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
 import type { EquipmentRecordView } from '../../shared/records/views';
+import type { MeasureWords } from '../../shared/records/check-lines';
 import { assetTypeTitles, typesWithFirmware } from '../../shared/schemas/assets';
 
 const text = (...parts: (string | null | undefined)[]) => parts.filter(Boolean).join(' · ') || null;
@@ -10,11 +11,17 @@ const count = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? on
 type Sections = Pick<EquipmentRecordView, 'calibrations' | 'checks' | 'holds' | 'incidents' | 'impactReviews' | 'intervalChanges' | 'reference'>;
 
 /**
+ * How a record's sentences write a date (a calendar date or a moment's day) and its measures: in the firm's format for
+ * the reader, and in one fixed form (ISO dates, numbers as stored) for the content hash (record-assembly.ts).
+ */
+export type RecordWords = MeasureWords & { date: (value: string) => string };
+
+/**
  * The equipment record an auditor asks for: one entry per item of ISO/IEC 17025:2017 §6.4.13 a)–h) (the items'
  * wording paraphrased from memory of the standard), each saying in a line what Nestkeeper holds for it; the
  * record's sections below it carry every event.
  */
-export function equipmentRecordItems(a: AssetView, s: Sections): EquipmentRecordItem[] {
+export function equipmentRecordItems(a: AssetView, s: Sections, say: RecordWords): EquipmentRecordItem[] {
   const cal = a.calibration;
   const specs = a.specs as Record<string, unknown>;
   const latest = s.calibrations.at(-1);
@@ -40,10 +47,10 @@ export function equipmentRecordItems(a: AssetView, s: Sections): EquipmentRecord
       requirement: 'Evidence of verification that the equipment conforms with specified requirements',
       value: text(
         latest
-          ? `${count(s.calibrations.length, 'calibration')}; latest ${latest.performedOn}, certificate ${latest.certificateNumber} from ${latest.provider}, as found ${words(latest.asFound)}, as left ${words(latest.asLeft)}`
+          ? `${count(s.calibrations.length, 'calibration')}; latest ${say.date(latest.performedOn)}, certificate ${latest.certificateNumber} from ${latest.provider}, as found ${words(latest.asFound)}, as left ${words(latest.asLeft)}`
           : null,
         lastCheck
-          ? `${count(s.checks.length, 'field check')}; latest ${checkKindTitles[lastCheck.kind].toLowerCase()} on ${lastCheck.performedAt.slice(0, 10)}: ${lastCheck.decision}`
+          ? `${count(s.checks.length, 'field check')}; latest ${checkKindTitles[lastCheck.kind].toLowerCase()} on ${say.date(lastCheck.performedAt)}: ${lastCheck.decision}`
           : null,
       ),
       ...(latest || lastCheck ? {} : { note: 'No calibration certificate or field check is on record for this period.' }),
@@ -58,9 +65,9 @@ export function equipmentRecordItems(a: AssetView, s: Sections): EquipmentRecord
       requirement: 'Calibration dates, results, adjustments, acceptance criteria, and the due date of the next calibration or the calibration interval',
       value: cal.required
         ? text(
-            cal.lastCalibratedOn ? `last ${cal.lastCalibratedOn}` : 'no calibration on record',
+            cal.lastCalibratedOn ? `last ${say.date(cal.lastCalibratedOn)}` : 'no calibration on record',
             cal.intervalMonths ? `interval ${cal.intervalMonths} months` : null,
-            cal.dueOn ? `due ${cal.dueOn}` : null,
+            cal.dueOn ? `due ${say.date(cal.dueOn)}` : null,
             s.intervalChanges.length ? count(s.intervalChanges.length, 'interval decision') : null,
           )
         : 'Calibration not required for this item',
@@ -73,7 +80,7 @@ export function equipmentRecordItems(a: AssetView, s: Sections): EquipmentRecord
         ? text(
             ...s.reference.values.map((v) => `${v.label} ${v.value}`),
             s.reference.certificateNumber ? `certificate ${s.reference.certificateNumber}` : null,
-            s.reference.validThrough ? `valid ${s.reference.validFrom ?? '?'} to ${s.reference.validThrough}` : null,
+            s.reference.validThrough ? `valid ${s.reference.validFrom ? say.date(s.reference.validFrom) : '?'} to ${say.date(s.reference.validThrough)}` : null,
           )
         : null,
       ...(s.reference

@@ -1,7 +1,7 @@
 import type { AssetView } from '../../shared/assets/views';
 import type { AsFound } from '../../shared/calibration/interval-review';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
-import { checkInputLines, checkResultLines } from '../../shared/records/check-lines';
+import { checkInputLines, checkResultLines, storedWords } from '../../shared/records/check-lines';
 import type { EquipmentRecordView, RecordCalibration, RecordHold, RecordIntervalChange, RecordPeriod, ReferenceArtefact } from '../../shared/records/views';
 import { assetAuditLines, type AuditLine } from '../audit/audit.service';
 import { calibrationsForRecord, certificateBytes, impactReviewsForRecord, type CalibrationEntry } from '../calibration';
@@ -11,10 +11,10 @@ import { inspectPdf } from '../documents/pdf-inspection';
 import { assetViewsByIds, custodyForRecord } from '../fleet';
 import { holdsForRecord, type HoldEntry } from '../holds';
 import { incidentsForRecord, photoThumbnails } from '../incidents';
-import type { OrgContext } from '../organizations';
+import { formatOf, type OrgContext } from '../organizations';
 import { peopleNames } from '../users';
 import { recordContentHash, sha256 } from './content-hash';
-import { equipmentRecordItems } from './equipment-record-items';
+import { equipmentRecordItems, type RecordWords } from './equipment-record-items';
 
 /** A record with the files its PDF shows: certificates by calibration id (null: not stored), thumbnails by photo id. */
 export type AssembledRecord = { view: EquipmentRecordView; certificates: Map<string, Buffer | null>; thumbnails: Map<string, Buffer> };
@@ -74,28 +74,28 @@ function intervalChanges(calibrations: CalibrationEntry[], audit: AuditLine[], n
   return changes.sort((a, b) => a.at.localeCompare(b.at));
 }
 
-function evidenceWords(hold: HoldEntry, calibrations: CalibrationEntry[]): string[] {
+function evidenceWords(hold: HoldEntry, calibrations: CalibrationEntry[], say: RecordWords): string[] {
   return (hold.releaseEvidence?.evidence ?? []).map((e) => {
     if (e.kind === 'calibration') {
       const c = calibrations.find((x) => x.id === e.id);
       return c
-        ? `Calibration of ${c.performedOn}, certificate ${c.certificateNumber} (as left ${c.asLeft.replace(/_/g, ' ')})`
-        : `Calibration of ${e.performedAt.slice(0, 10)}`;
+        ? `Calibration of ${say.date(c.performedOn)}, certificate ${c.certificateNumber} (as left ${c.asLeft.replace(/_/g, ' ')})`
+        : `Calibration of ${say.date(e.performedAt)}`;
     }
     const title = checkKindTitles[e.kind as keyof typeof checkKindTitles] ?? e.kind;
-    return `Passing ${title.toLowerCase()} of ${e.performedAt.slice(0, 10)}${e.position ? ` (${e.position})` : ''}`;
+    return `Passing ${title.toLowerCase()} of ${say.date(e.performedAt)}${e.position ? ` (${e.position})` : ''}`;
   });
 }
 
-function referenceArtefact(asset: AssetView, calibrations: RecordCalibration[]): ReferenceArtefact | null {
+function referenceArtefact(asset: AssetView, calibrations: RecordCalibration[], say: RecordWords): ReferenceArtefact | null {
   const s = asset.specs;
   const values =
     asset.type === 'reference_sphere' || asset.type === 'smr'
-      ? [{ label: 'Diameter', value: `${s.diameterMm} mm` }]
+      ? [{ label: 'Diameter', value: `${say.number(s.diameterMm)} mm` }]
       : asset.type === 'scale_bar'
         ? [
-            { label: 'Certified length at 20 °C (ISO 1)', value: `${s.certifiedLengthMm} mm` },
-            { label: 'Thermal expansion coefficient', value: `${s.expansionPpmPerK} µm/(m·K)` },
+            { label: 'Certified length at 20 °C (ISO 1)', value: `${say.number(s.certifiedLengthMm)} mm` },
+            { label: 'Thermal expansion coefficient', value: `${say.number(s.expansionPpmPerK)} µm/(m·K)` },
           ]
         : null;
   if (!values) return null;
@@ -115,12 +115,33 @@ async function certificateFile(tx: Scoped, c: CalibrationEntry) {
   return { bytes, file: { fileName: c.fileName ?? 'certificate.pdf', sizeBytes: bytes.length, sha256: sha256(bytes), readable: inspection.kind === 'pdf' } };
 }
 
+/** Dates and measures as the record's hash reads them: the same text the record carried before it spoke the firm's format. */
+const fixedWords: RecordWords = { ...storedWords, date: (value) => value.slice(0, 10) };
+
+const decimalsOf = (value: number) => (String(value).split('.')[1] ?? '').length;
+
+/**
+ * The firm's dates (a moment's day in the firm's zone) and measures with every stored decimal and no grouping; lists
+ * part with semicolons and points name each axis, so a decimal comma is never read as a separator.
+ */
+function firmWords(ctx: OrgContext): RecordWords {
+  const f = formatOf(ctx);
+  const number = (value: unknown) => (typeof value === 'number' ? f.number(value, 6, false) : String(value));
+  return {
+    date: f.date,
+    number,
+    list: (values) => values.map(number).join('; '),
+    point: (x, y, z) => f.coordinate([x, y, z], Math.min(6, Math.max(3, decimalsOf(x), decimalsOf(y), decimalsOf(z)))),
+  };
+}
+
 /**
  * Each item's equipment record for the period, asking each component that owns a part for it (a batch of items at
  * a time: one query per part, not per item). Certificates and thumbnails come along for the PDF.
  */
 export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: string[], period: RecordPeriod, publicUrl: string): Promise<AssembledRecord[]> {
   const tz = ctx.timeZone;
+  const say = firmWords(ctx);
   const [assets, calibrations, checks, holds, incidents, reviews, custody, audit] = await Promise.all([
     assetViewsByIds(tx, ctx, assetIds, publicUrl),
     calibrationsForRecord(tx, assetIds, period),
@@ -181,9 +202,8 @@ export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: str
         recordedAt: iso(c.createdAt)!,
       });
     }
-    const sections = {
-      calibrations: calibrationViews,
-      checks: (byCheck.get(asset.id) ?? []).map((check) => {
+    const checksIn = (words: RecordWords) =>
+      (byCheck.get(asset.id) ?? []).map((check) => {
         return {
           id: check.id,
           kind: check.kind,
@@ -193,8 +213,8 @@ export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: str
           relatedAssetTag: check.relatedAssetTag,
           inputs: check.inputs,
           result: check.result,
-          inputLines: checkInputLines(check.kind, check.inputs),
-          resultLines: checkResultLines(check.kind, check.result),
+          inputLines: checkInputLines(check.kind, check.inputs, words),
+          resultLines: checkResultLines(check.kind, check.result, words),
           toleranceUm: check.toleranceUm,
           expandedUncertaintyUm: check.expandedUncertaintyUm,
           guardBandUm: check.guardBandUm,
@@ -202,20 +222,23 @@ export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: str
           decision: check.decision,
           note: check.note,
         };
-      }),
-      holds: (byHold.get(asset.id) ?? []).map((hold): RecordHold => {
-        return {
-          id: hold.id,
-          reason: hold.reason,
-          summary: hold.summary,
-          startedAt: iso(hold.startedAt)!,
-          startedBy: who(hold.startedById),
-          releasedAt: iso(hold.releasedAt),
-          releasedBy: who(hold.releasedById),
-          releaseEvidence: evidenceWords(hold, cals),
-          releaseNote: hold.releaseEvidence?.note ?? null,
-        };
-      }),
+      });
+    const holdsIn = (words: RecordWords) =>
+      (byHold.get(asset.id) ?? []).map((hold): RecordHold => ({
+        id: hold.id,
+        reason: hold.reason,
+        summary: hold.summary,
+        startedAt: iso(hold.startedAt)!,
+        startedBy: who(hold.startedById),
+        releasedAt: iso(hold.releasedAt),
+        releasedBy: who(hold.releasedById),
+        releaseEvidence: evidenceWords(hold, cals, words),
+        releaseNote: hold.releaseEvidence?.note ?? null,
+      }));
+    const sections = {
+      calibrations: calibrationViews,
+      checks: checksIn(say),
+      holds: holdsIn(say),
       incidents: (byIncident.get(asset.id) ?? []).map((incident) => {
         return {
           id: incident.id,
@@ -272,18 +295,21 @@ export async function assembleRecords(tx: Scoped, ctx: OrgContext, assetIds: str
         };
       }),
       intervalChanges: intervalChanges(cals, byAudit.get(asset.id) ?? [], names),
-      reference: referenceArtefact(asset, calibrationViews),
+      reference: referenceArtefact(asset, calibrationViews, say),
     };
     const base = {
       asset,
       organization: { name: ctx.name },
       period,
-      items: equipmentRecordItems(asset, sections),
+      items: equipmentRecordItems(asset, sections, say),
       ...sections,
       recordDate: ctx.today,
       generatedAt: new Date().toISOString(),
     };
-    records.push({ view: { ...base, contentHash: recordContentHash(base) }, certificates, thumbnails });
+    // The hash reads the record's sentences with fixed dates and decimals: a new locale in the settings is no new content.
+    const fixed = { ...sections, checks: checksIn(fixedWords), holds: holdsIn(fixedWords), reference: referenceArtefact(asset, calibrationViews, fixedWords) };
+    const contentHash = recordContentHash({ ...base, ...fixed, items: equipmentRecordItems(asset, fixed, fixedWords) });
+    records.push({ view: { ...base, contentHash }, certificates, thumbnails });
   }
   return records;
 }

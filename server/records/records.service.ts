@@ -6,7 +6,7 @@ import type { AuditPackQuery } from '../../shared/schemas/records';
 import { readInOrganization, type Actor } from '../db/transaction';
 import { equipmentRecordPdf } from '../documents/equipment-record-pdf';
 import { getAsset, getKit } from '../fleet';
-import { loadOrgContext } from '../organizations';
+import { formatOf, loadOrgContext } from '../organizations';
 import { packItems, packPreview, writeAuditPack } from './audit-pack';
 import { assembleRecords } from './record-assembly';
 
@@ -35,7 +35,13 @@ export class RecordsService {
   /** The record as PDF, with each readable certificate annexed. */
   async recordPdf(actor: Actor, id: string, period: { from?: string; to?: string }) {
     const { record, ctx } = await this.one(actor, id, period);
-    const pdf = await equipmentRecordPdf({ ...record, timeZone: ctx.timeZone, publicUrl: this.publicUrl, printedAt: new Date(), placement: { annex: true } });
+    const pdf = await equipmentRecordPdf({
+      ...record,
+      format: formatOf(ctx),
+      publicUrl: this.publicUrl,
+      printedAt: new Date(),
+      placement: { annex: true },
+    });
     return { pdf, assetTag: record.view.asset.assetTag };
   }
 

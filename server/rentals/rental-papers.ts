@@ -2,12 +2,12 @@ import type { RentalView } from '../../shared/billing/views';
 import type { Scoped } from '../db/scoped';
 import { certificatePackPdf, type CertificateEntry } from '../documents/certificate-pack';
 import { rentalAgreementPdf } from '../documents/rental-agreement-pdf';
-import { loadOrgContext } from '../organizations';
+import { documentFirm, loadOrgContext } from '../organizations';
 
 /** The rental agreement as a PDF. */
 export async function agreementFor(tx: Scoped, rental: RentalView): Promise<Buffer> {
   const ctx = await loadOrgContext(tx);
-  return rentalAgreementPdf({ firm: { name: ctx.name, timeZone: ctx.timeZone }, rental });
+  return rentalAgreementPdf({ firm: documentFirm(ctx), rental });
 }
 
 /**
@@ -52,7 +52,7 @@ export async function certificatePackFor(tx: Scoped, rental: RentalView): Promis
     ];
   });
   return certificatePackPdf({
-    firm: { name: ctx.name },
+    firm: documentFirm(ctx),
     rentalNumber: rental.number,
     customerCompany: rental.customer.company,
     startsOn: rental.startsOn,

@@ -1,7 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { formatMoney } from '../../shared/billing/money';
 import type { rentalPayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
 import { book, type BookingView, type HandoverGates } from '../bookings';
@@ -11,6 +10,7 @@ import { inOrganization, readInOrganization, type Actor } from '../db/transactio
 import { ruleBroken } from '../http/errors';
 import { setIncidentCharge } from '../incidents/incidents.service';
 import { enqueueMail } from '../notifications';
+import { loadFirmFormat } from '../organizations';
 import { priceRental } from './pricing';
 import type { RentalMoney } from './rental-money';
 import { latestAcceptance } from './agreement-acceptance';
@@ -112,9 +112,10 @@ export class RentalsService {
       if (rental.depositMinor <= 0 || rental.handoverOverrideReason) return;
       const state = await this.money.depositState(tx, rental.id);
       if (state !== 'authorized') {
+        const f = await loadFirmFormat(tx);
         throw ruleBroken(
           'deposit_required',
-          `Rental ${rental.number} needs its deposit of ${formatMoney(rental.depositMinor, rental.currency, 'en-GB')} authorized on the customer's card before the kit is handed over${state === 'declined' ? ' (the last card was declined)' : ''}. The billing clerk sends the renter the link on the rental's page.`,
+          `Rental ${rental.number} needs its deposit of ${f.money(rental.depositMinor, rental.currency)} authorized on the customer's card before the kit is handed over${state === 'declined' ? ' (the last card was declined)' : ''}. The billing clerk sends the renter the link on the rental's page.`,
         );
       }
       if (!(await latestAcceptance(tx, rental.id)))

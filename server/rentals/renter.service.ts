@@ -8,7 +8,7 @@ import { inOrganization } from '../db/transaction';
 import { agreementTerms } from '../documents/rental-agreement-pdf';
 import { assetsByIds } from '../fleet';
 import { conflict, ruleBroken } from '../http/errors';
-import { loadOrgContext } from '../organizations';
+import { formatOf, loadOrgContext } from '../organizations';
 import { latestAcceptance } from './agreement-acceptance';
 import type { RentalMoney } from './rental-money';
 import { agreementFor, certificatePackFor } from './rental-papers';
@@ -72,7 +72,7 @@ export class RenterService {
         quote: rental.quote,
         currency: rental.currency,
         depositMinor: rental.depositMinor,
-        terms: agreementTerms(rental, rental.currency),
+        terms: agreementTerms(rental, formatOf(ctx)),
         agreement: {
           sha256: sha256(await agreementFor(tx, rental)),
           accepted: accepted ? { fullName: accepted.fullName, acceptedAt: accepted.acceptedAt } : null,

@@ -272,7 +272,7 @@ describe('a rental from quote to invoice', () => {
     });
     await expect(t.db.query(`DELETE FROM invoice_payments`)).rejects.toThrow();
     const csv = await t.api.get('/api/invoices/export.csv').set(bearer(billing));
-    expect(csv.text.split('\r\n')[0]).toContain('number,kind,issued_on');
+    expect(csv.text.split('\r\n')[0]).toContain('Number,Kind,Issued on,Customer,Corrects,Currency,Subtotal (EUR),Tax (EUR),Total (EUR)');
     expect(csv.text).toContain(creditNo);
   });
 });

@@ -212,7 +212,8 @@ describe('labels and records', () => {
     const text = pdfText(res.body);
     expect(text).toContain('TIP-Q01');
     expect(text).toContain('S/N SN-TIP-Q01');
-    expect(text).toContain('Calibration due 2027-01-31');
+    // The demo firm writes dates in en-GB: day, short month, year.
+    expect(text).toContain('Calibration due 31 Jan 2027');
   });
 
   it("puts a kit's labels on one page, each QR code readable", async () => {

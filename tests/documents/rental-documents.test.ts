@@ -1,6 +1,7 @@
 import * as mupdf from 'mupdf';
 import { describe, expect, it } from 'vitest';
 import type { InvoiceView, QuoteLine, RentalItem, RentalView } from '../../shared/billing/views';
+import { firmFormat } from '../../shared/formatting/firm-format';
 import { certificatePackPdf, type CertificateEntry } from '../../server/documents/certificate-pack';
 import { invoicePdf } from '../../server/documents/invoice-pdf';
 import { renderPdf } from '../../server/documents/pdf';
@@ -10,7 +11,7 @@ import { pdfPageCount, pdfText } from '../support/pdf';
 import { activeChanges, activeNamesSeenByMuPdf, certificateWith } from '../support/pdf-fixtures';
 
 // Invented firm, customer, makers and tags (DESIGN.md §9).
-const firm = { name: 'Brackenmoor Dimensional Works', timeZone: 'Europe/Berlin' };
+const firm = { name: 'Brackenmoor Dimensional Works', format: firmFormat({ locale: 'en-GB', timeZone: 'Europe/Berlin', currency: 'EUR' }) };
 const customer = { id: 'c1', company: 'Larkspur Aero Structures', billingContact: 'Accounts desk, Hangar 3', billingEmail: 'accounts@larkspur-aero.example' };
 
 const item = (assetTag: string, type: string, serialNumber: string): RentalItem => ({

@@ -1,36 +1,60 @@
 import type { InvoiceView } from '../../shared/billing/views';
-import { bullets, calendarDate, facts, heading, money, section, table, taxRateText, totals } from './document-layout';
+import { firmFormat, type FirmFormat, type FirmVoice } from '../../shared/formatting/firm-format';
+import { bullets, facts, heading, section, table, totals, typeTitle } from './document-layout';
 import { MM, renderPdf } from './pdf';
 
 /** What was paid and what is left, after the invoice totals; a credit note only states what it gives back. */
-function settlementRows(invoice: InvoiceView) {
-  const { currency } = invoice;
-  if (invoice.kind === 'credit_note') return [{ label: 'Total credited', value: money(Math.abs(invoice.totalMinor), currency), strong: true }];
+function settlementRows(invoice: InvoiceView, f: FirmFormat) {
+  const money = (minor: number) => f.money(minor, invoice.currency);
+  if (invoice.kind === 'credit_note') return [{ label: 'Total credited', value: money(Math.abs(invoice.totalMinor)), strong: true }];
   return [
-    { label: 'Deposit captured', value: money(invoice.depositCapturedMinor, currency) },
-    { label: 'Charged to card', value: money(invoice.cardChargedMinor, currency) },
-    { label: 'Balance due', value: invoice.balanceMinor > 0 ? money(invoice.balanceMinor, currency) : 'Nothing left to pay', strong: true },
+    { label: 'Deposit captured', value: money(invoice.depositCapturedMinor) },
+    { label: 'Charged to card', value: money(invoice.cardChargedMinor) },
+    { label: 'Balance due', value: invoice.balanceMinor > 0 ? money(invoice.balanceMinor) : 'Nothing left to pay', strong: true },
   ];
 }
 
-export function invoicePdf(input: { firm: { name: string; timeZone: string }; invoice: InvoiceView }): Promise<Buffer> {
+/**
+ * ICU puts thin and narrow no-break spaces in ranges and times ("3 – 12 Mar 2025"); the PDF's standard fonts have no
+ * glyph for them, so they print as the no-break space those fonts do have.
+ */
+const printable = (text: string) => text.replace(/[\u2009\u202f]/g, '\u00a0');
+
+/** "Laser tracker, Halvard QF-9" — the item as an accounts clerk can match it to the delivery. */
+const itemWords = (i: InvoiceView['rental']['items'][number]) =>
+  [typeTitle(i.type), [i.manufacturer, i.model].filter(Boolean).join(' ')].filter(Boolean).join(', ');
+
+/**
+ * An invoice or credit note as an accounts department files it: who issued it (as on the day of issue), the rental it
+ * bills with its period and items, the lines, the tax line, the due date and how to pay; a credit note names the
+ * invoice it corrects. Dates and money in the firm's voice.
+ */
+export function invoicePdf(input: { firm: { name: string; voice: FirmVoice }; invoice: InvoiceView }): Promise<Buffer> {
   const { firm, invoice } = input;
-  const { currency, customer } = invoice;
+  const f = firmFormat(firm.voice);
+  const money = (minor: number) => f.money(minor, invoice.currency);
+  const { customer, rental } = invoice;
   const credit = invoice.kind === 'credit_note';
   const title = `${credit ? 'Credit note' : 'Invoice'} ${invoice.number}`;
   return renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: title } }, (doc) => {
+    // Kept as issued; invoices from before payment days and bank details were kept print what they have.
     const issuer = invoice.issuer;
     heading(doc, firm.name, title, [
       ...(issuer?.address ? [issuer.address] : []),
       ...(issuer?.taxNumber ? [`Tax number ${issuer.taxNumber}`] : []),
-      `Issue date ${calendarDate(invoice.issuedOn)}`,
+      `Issue date ${f.date(invoice.issuedOn)}`,
+      ...(invoice.dueOn ? [`Due date ${f.date(invoice.dueOn)}`] : []),
     ]);
-    if (credit) {
-      facts(doc, [
-        ['Corrects invoice', invoice.correctsNumber],
-        ['Reason', invoice.reason],
-      ]);
-    }
+    facts(doc, [
+      ['Rental', rental.number],
+      ['Rental period', printable(f.dateRange(rental.startsOn, rental.endsOn))],
+      ...(credit
+        ? ([
+            ['Corrects invoice', invoice.corrects ? `${invoice.corrects.number} of ${f.date(invoice.corrects.issuedOn)}` : invoice.correctsNumber],
+            ['Reason', invoice.reason],
+          ] as [string, string | null][])
+        : []),
+    ]);
 
     section(doc, 'Customer');
     facts(doc, [
@@ -41,6 +65,19 @@ export function invoicePdf(input: { firm: { name: string; timeZone: string }; in
       ['E-mail', customer.billingEmail],
     ]);
 
+    if (rental.items.length) {
+      section(doc, 'Items rented');
+      table(
+        doc,
+        [
+          { header: 'Tag', share: 0.2, mono: true },
+          { header: 'Item', share: 0.5 },
+          { header: 'Serial number', share: 0.3, mono: true },
+        ],
+        rental.items.map((i) => [i.assetTag, itemWords(i), i.serialNumber]),
+      );
+    }
+
     section(doc, credit ? 'Credited' : 'Charges');
     table(
       doc,
@@ -50,17 +87,23 @@ export function invoicePdf(input: { firm: { name: string; timeZone: string }; in
         { header: 'Unit', share: 0.2, right: true },
         { header: 'Amount', share: 0.22, right: true },
       ],
-      invoice.lines.map((l) => [l.description, String(l.quantity), money(l.unitMinor, currency), money(l.amountMinor, currency)]),
+      invoice.lines.map((l) => [l.description, f.count(l.quantity), money(l.unitMinor), money(l.amountMinor)]),
     );
     totals(doc, [
-      { label: 'Subtotal', value: money(invoice.subtotalMinor, currency) },
-      { label: `Tax ${taxRateText(invoice.taxRateBasisPoints)}`, value: money(invoice.taxMinor, currency) },
-      { label: 'Total', value: money(invoice.totalMinor, currency), strong: true },
-      ...settlementRows(invoice),
+      { label: 'Subtotal', value: money(invoice.subtotalMinor) },
+      { label: `Tax ${f.number(invoice.taxRateBasisPoints / 100, 2)} %`, value: money(invoice.taxMinor) },
+      { label: 'Total', value: money(invoice.totalMinor), strong: true },
+      ...settlementRows(invoice, f),
     ]);
-    if (issuer?.paymentTerms && !credit) {
-      section(doc, 'Payment');
-      bullets(doc, [issuer.paymentTerms]);
+    if (!credit && (issuer?.paymentTerms || issuer?.bankDetails || invoice.dueOn)) {
+      section(doc, 'How to pay');
+      bullets(doc, [
+        ...(invoice.dueOn && invoice.balanceMinor > 0
+          ? [`Please pay ${money(invoice.balanceMinor)} by ${f.date(invoice.dueOn)}, quoting ${invoice.number}.`]
+          : []),
+        ...(issuer?.paymentTerms ? [issuer.paymentTerms] : []),
+        ...(issuer?.bankDetails ? [`Bank details: ${issuer.bankDetails}`] : []),
+      ]);
     }
   });
 }

@@ -76,7 +76,7 @@ export class DepositsService {
       throw new AppError(
         422,
         'card_declined',
-        `The card was declined: ${result.declined} Checkout stays blocked until the deposit is authorized; try another card.`,
+        `The card was declined (“${result.declined.replace(/\.$/, '')}”). Checkout stays blocked until the deposit is authorized; try another card.`,
         { rental: result.view },
       );
     return result.view;

@@ -181,10 +181,11 @@ export class InvoicesService {
         'total_minor',
         'deposit_captured_minor',
         'card_charged_minor',
-        'balance_minor',
+        // What the invoice left to pay on the day it was issued; balance_minor is what is still owed today.
+        'due_at_issue_minor',
         'credited_minor',
         'received_minor',
-        'outstanding_minor',
+        'balance_minor',
       ],
       items.map((i) => [
         i.number,

@@ -74,6 +74,12 @@ describe('the billing desk in a real browser', () => {
     // Repair 180.00 + 19 % = 214.20 from the 500.00 hold (worked by hand); the rest is released.
     await eventually(() => page.getByLabel('Amount to capture (EUR)').inputValue()).toMatch(/^214\.20?$/);
     await page.getByRole('button', { name: 'Capture and release the rest' }).click();
+    // Asked once, with the figures and the mail's recipient: 214.20 captured of the 500.00 authorization, 285.80 released (worked by hand).
+    const finance = rental.customer.billingEmail as string;
+    const confirm = page.getByRole('dialog', { name: 'Capture from the card authorization' });
+    await eventually(() => confirm.innerText()).toContain(`€214.20 captured, €285.80 released; the customer is told by mail at ${finance}.`);
+    expect(await rig.db.query(`SELECT 1 FROM deposit_authorizations WHERE rental_id = $1 AND state = 'captured'`, [rentalId])).toHaveLength(0);
+    await confirm.getByRole('button', { name: 'Capture €214.20' }).click();
     await eventually(
       async () =>
         (
@@ -83,8 +89,23 @@ describe('the billing desk in a real browser', () => {
           )
         )[0],
     ).toEqual({ state: 'captured', captured_minor: 21_420 });
+    // The page says what happened; the mail waits for the outbox, then says when it went.
+    const told = page.getByRole('list', { name: 'What the customer was told' }).first();
+    const to = finance.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+    await eventually(() => told.innerText()).toMatch(new RegExp(`€214\\.20 captured, €285\\.80 released on .+; mail to ${to} waiting to send`));
+    await rig.deliverMail();
+    await eventually(() => told.innerText()).toMatch(new RegExp(`€214\\.20 captured, €285\\.80 released on .+; mailed to ${to} at \\d`));
+    const [receipt] = await rig.db.query(`SELECT subject, text_body FROM mail_sink_messages WHERE $1 = ANY(recipients) AND subject LIKE '%taken'`, [finance]);
+    expect(receipt.subject).toContain('€214.20 taken');
+    expect(receipt.text_body).toMatch(/taken €214\.20 from the card authorization[\s\S]*The other €285\.80 is released/);
 
     await page.getByRole('button', { name: 'Issue invoice' }).click();
+    const issue = page.getByRole('dialog', { name: 'Issue the invoice' });
+    // 392.70 with tax, 214.20 from the deposit, 178.50 to pay (worked by hand below).
+    await eventually(() => issue.innerText()).toContain(
+      `An invoice of €392.70 is issued: €214.20 paid from the deposit, €178.50 balance to pay; the invoice is mailed with its PDF to ${finance}.`,
+    );
+    await issue.getByRole('button', { name: 'Issue invoice' }).click();
     const download = page.getByRole('link', { name: 'Download invoice (PDF)' });
     await download.waitFor();
     const pdf = await context.request.get(new URL((await download.getAttribute('href'))!, rig.baseUrl).toString());

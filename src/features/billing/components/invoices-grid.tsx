@@ -9,21 +9,22 @@ import type { InvoiceSummary } from '../../../../shared/billing/views';
 type Cell = ICellRendererParams<InvoiceSummary>;
 const kindWords: Record<InvoiceSummary['kind'], string> = { invoice: 'Invoice', credit_note: 'Credit note' };
 
-/** Invoices and credit notes: sort, filter, export; the number opens the rental, the PDF link the document. */
+/** Invoices and credit notes: sort and filter (the page's one CSV download has every row); the number opens the rental, the PDF link the document. */
 export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undefined; toolbar?: ReactNode }) {
   const columns = useMemo<ColDef<InvoiceSummary>[]>(() => {
     const money = (field: keyof InvoiceSummary & `${string}Minor`, headerName: string): ColDef<InvoiceSummary> => ({
       headerName,
       field,
       type: 'numericColumn',
-      minWidth: 120,
+      minWidth: 104,
+      flex: 1,
       valueFormatter: (p: ValueFormatterParams<InvoiceSummary>) => (p.data ? formatMoney(p.value as number, p.data.currency) : ''),
     });
     return [
       {
         headerName: 'Number',
         field: 'number',
-        minWidth: 130,
+        minWidth: 112,
         cellClass: 'font-mono font-semibold',
         cellRenderer: (p: Cell) =>
           p.data ? (
@@ -35,7 +36,7 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
       {
         colId: 'kind',
         headerName: 'Kind',
-        minWidth: 200,
+        minWidth: 150,
         valueGetter: (p) => (p.data ? kindWords[p.data.kind] : ''),
         cellRenderer: (p: Cell) =>
           p.data ? (
@@ -50,21 +51,25 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
             </span>
           ) : null,
       },
-      { headerName: 'Issued on', field: 'issuedOn', minWidth: 120, sort: 'desc', valueFormatter: (p) => formatCalendarDate(p.value as string) },
-      { headerName: 'Customer', field: 'customerCompany', minWidth: 170, flex: 2 },
+      { headerName: 'Issued on', field: 'issuedOn', minWidth: 112, sort: 'desc', valueFormatter: (p) => formatCalendarDate(p.value as string) },
+      { headerName: 'Customer', field: 'customerCompany', minWidth: 150, flex: 2 },
       money('totalMinor', 'Total'),
-      money('depositCapturedMinor', 'From deposit'),
-      money('cardChargedMinor', 'Charged to card'),
-      money('balanceMinor', 'Balance'),
+      {
+        ...money('depositCapturedMinor', 'Paid at return'),
+        colId: 'paidAtReturn',
+        headerTooltip: 'Taken from the deposit and charged to the saved card',
+        valueGetter: (p) => (p.data ? p.data.depositCapturedMinor + p.data.cardChargedMinor : 0),
+      },
       money('creditedMinor', 'Credited'),
       money('receivedMinor', 'Received'),
-      money('outstandingMinor', 'Outstanding'),
+      // Balance is what is still owed: after what was paid at return, credit notes and payments received.
+      { ...money('outstandingMinor', 'Balance'), headerTooltip: 'What the customer still owes' },
       {
         colId: 'pdf',
         headerName: 'Document',
         type: actionsColumnType,
-        minWidth: 110,
-        maxWidth: 130,
+        minWidth: 80,
+        maxWidth: 100,
         cellRenderer: (p: Cell) =>
           p.data ? (
             <a
@@ -86,7 +91,6 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
       rows={rows}
       columns={columns}
       rowId={(r) => r.id}
-      exportFileName="nestkeeper-invoices.csv"
       emptyMessage="No invoices yet. An invoice is issued from its rental once the kit is back and the deposit is settled."
       toolbar={toolbar}
     />

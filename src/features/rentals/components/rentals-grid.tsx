@@ -64,11 +64,14 @@ export function RentalsGrid({
       {
         colId: 'deposit',
         headerName: 'Deposit',
-        minWidth: 200,
+        // The state chip and the amount side by side need this much; narrower they wrap rather than being cut off.
+        minWidth: 250,
+        wrapText: true,
+        autoHeight: true,
         valueGetter: (p) => (p.data ? `${depositStateWord(p.data.depositState)} ${formatMoney(p.data.depositMinor, p.data.currency)}` : ''),
         cellRenderer: (p: Cell) =>
           p.data ? (
-            <span className="inline-flex items-center gap-2">
+            <span className="inline-flex flex-wrap items-center gap-x-2 gap-y-1 py-1 leading-tight">
               <DepositStateChip state={p.data.depositState} />
               <span className="tabular-nums">{formatMoney(p.data.depositMinor, p.data.currency)}</span>
             </span>

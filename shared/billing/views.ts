@@ -259,7 +259,8 @@ export type RenterItem = {
 
 /** The renter's own page (no sign-in; reached by the link in the mail). */
 export type RenterRentalView = {
-  firm: { name: string };
+  /** The firm's name and voice: the renter's page shows dates and money as the firm writes them. */
+  firm: { name: string; locale: string; timeZone: string; currency: string };
   number: string;
   state: RentalState;
   customer: { company: string; billingContact: string | null };

@@ -170,11 +170,13 @@ describe('the billing desk in a real browser', () => {
     const form = page.getByRole('form', { name: 'Rental terms' });
     await form.getByLabel('Tax on rentals (%)').fill('7,5');
     await form.getByLabel('Deposit (% of replacement value)').fill('15');
-    await form.getByLabel('Deposit at least (EUR)').fill('200');
-    await form.getByLabel('Deposit at most (EUR)').fill('100');
+    // Money settings read as money: the demo firm's minimum is 500.00 EUR.
+    expect(await form.getByLabel('Deposit at least').inputValue()).toBe('€500.00');
+    await form.getByLabel('Deposit at least').fill('€200.00');
+    await form.getByLabel('Deposit at most').fill('100');
     await form.getByRole('button', { name: 'Save rental terms' }).click();
     await form.getByText('The maximum must be at least the minimum.').waitFor();
-    await form.getByLabel('Deposit at most (EUR)').fill('3000');
+    await form.getByLabel('Deposit at most').fill('€3,000.00');
     await form.getByRole('button', { name: 'Save rental terms' }).click();
     await form.getByText(/^Saved\./).waitFor();
     const details = page.getByRole('form', { name: 'Invoice details' });
@@ -182,10 +184,20 @@ describe('the billing desk in a real browser', () => {
     await details.getByRole('button', { name: 'Save invoice details' }).click();
     await details.getByText('Invoices must say where the firm is.').waitFor();
     await details.getByLabel('Address on invoices').fill('Mill Yard 3, 41877 Wrenhallow');
+    await details.getByLabel('Days to pay').fill('400');
+    await details.getByRole('button', { name: 'Save invoice details' }).click();
+    await details.getByText('Enter whole days from 0 to 365.').waitFor();
+    await details.getByLabel('Days to pay').fill('14');
+    await details.getByLabel('Bank details').fill('Wrenhallow Mutual, IBAN XX00 1234 5678 9012 3456 78');
     await details.getByRole('button', { name: 'Save invoice details' }).click();
     await details.getByText(/^Saved\./).waitFor();
     const api = await rig.apiAs('owner@demo.test');
-    expect((await api('/settings')).body.issuer).toMatchObject({ address: 'Mill Yard 3, 41877 Wrenhallow', taxNumber: 'WH-7781-0042' });
+    expect((await api('/settings')).body.issuer).toMatchObject({
+      address: 'Mill Yard 3, 41877 Wrenhallow',
+      taxNumber: 'WH-7781-0042',
+      paymentDays: 14,
+      bankDetails: 'Wrenhallow Mutual, IBAN XX00 1234 5678 9012 3456 78',
+    });
     const [smr] = (await api('/assets?type=smr&limit=1')).body.items;
     const today = todayIn('Europe/Berlin');
     const quote = (await api(`/quotes?assetIds=${smr.id}&startsOn=${addDays(today, 60)}&endsOn=${addDays(today, 60)}`)).body;

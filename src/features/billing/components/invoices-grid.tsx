@@ -16,15 +16,17 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
       headerName,
       field,
       type: 'numericColumn',
-      minWidth: 104,
+      minWidth: 96,
       flex: 1,
+      wrapHeaderText: true,
+      autoHeaderHeight: true,
       valueFormatter: (p: ValueFormatterParams<InvoiceSummary>) => (p.data ? formatMoney(p.value as number, p.data.currency) : ''),
     });
     return [
       {
         headerName: 'Number',
         field: 'number',
-        minWidth: 112,
+        minWidth: 140,
         cellClass: 'font-mono font-semibold',
         cellRenderer: (p: Cell) =>
           p.data ? (
@@ -36,7 +38,11 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
       {
         colId: 'kind',
         headerName: 'Kind',
-        minWidth: 150,
+        minWidth: 130,
+        // "Credit note to 2026-0003" wraps onto two lines rather than pushing the money off screen.
+        wrapText: true,
+        autoHeight: true,
+        cellStyle: { lineHeight: '1.35', paddingTop: '9px', paddingBottom: '9px' },
         valueGetter: (p) => (p.data ? kindWords[p.data.kind] : ''),
         cellRenderer: (p: Cell) =>
           p.data ? (
@@ -51,25 +57,32 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
             </span>
           ) : null,
       },
-      { headerName: 'Issued on', field: 'issuedOn', minWidth: 112, sort: 'desc', valueFormatter: (p) => formatCalendarDate(p.value as string) },
-      { headerName: 'Customer', field: 'customerCompany', minWidth: 150, flex: 2 },
+      { headerName: 'Issued on', field: 'issuedOn', minWidth: 124, sort: 'desc', valueFormatter: (p) => formatCalendarDate(p.value as string) },
+      {
+        headerName: 'Customer',
+        field: 'customerCompany',
+        minWidth: 140,
+        flex: 2,
+        wrapText: true,
+        autoHeight: true,
+        cellStyle: { lineHeight: '1.35', paddingTop: '9px', paddingBottom: '9px' },
+      },
       money('totalMinor', 'Total'),
       {
         ...money('depositCapturedMinor', 'Paid at return'),
         colId: 'paidAtReturn',
-        headerTooltip: 'Taken from the deposit and charged to the saved card',
         valueGetter: (p) => (p.data ? p.data.depositCapturedMinor + p.data.cardChargedMinor : 0),
       },
       money('creditedMinor', 'Credited'),
       money('receivedMinor', 'Received'),
       // Balance is what is still owed: after what was paid at return, credit notes and payments received.
-      { ...money('outstandingMinor', 'Balance'), headerTooltip: 'What the customer still owes' },
+      money('outstandingMinor', 'Balance'),
       {
         colId: 'pdf',
         headerName: 'Document',
         type: actionsColumnType,
-        minWidth: 80,
-        maxWidth: 100,
+        minWidth: 96,
+        maxWidth: 110,
         cellRenderer: (p: Cell) =>
           p.data ? (
             <a

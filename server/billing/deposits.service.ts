@@ -1,6 +1,5 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { formatMoney } from '../../shared/billing/money';
 import { captureSplit } from '../../shared/billing/settlement';
 import { firmFormat } from '../../shared/formatting/firm-format';
 import type { capturePayload } from '../../shared/schemas/rentals';
@@ -19,7 +18,11 @@ import { Invoice } from './invoice.entity';
 import type { IntentOutcome, PaymentGateway } from './payment-gateway';
 import { rentalMoney } from './rental-money';
 
-const money = (rental: RentalRecord, minor: number) => formatMoney(minor, rental.currency, 'en-GB');
+/** An amount of the rental's money as the firm writes it (refusals speak as the screens do). */
+async function moneyOf(tx: Scoped, rental: RentalRecord) {
+  const ctx = await loadOrgContext(tx);
+  return (minor: number) => firmFormat(voiceOf(ctx)).money(minor, rental.currency);
+}
 
 /**
  * Deposits as card authorizations through the provider: authorize at
@@ -45,7 +48,7 @@ export class DepositsService {
         throw ruleBroken('booking_state', `The deposit is taken before handing over; this rental is ${booking.state}.`);
       if (rental.depositMinor <= 0) throw ruleBroken('no_deposit', 'This rental has no deposit to authorize (the firm’s deposit policy gave nothing).');
       const rows = await tx.find(DepositAuthorization, { where: { rentalId } });
-      if (depositState(rows).state === 'authorized') throw conflict(`The card is already authorized for ${money(rental, rental.depositMinor)}.`);
+      if (depositState(rows).state === 'authorized') throw conflict(`The card is already authorized for ${(await moneyOf(tx, rental))(rental.depositMinor)}.`);
       const customer = await providerCustomer(tx, this.gateway, rental.customerId);
       const key = `rental:${rental.id}:hold:${rows.length + 1}`;
       const card = await this.gateway.saveCard(paymentMethod, customer, `${key}:card`);
@@ -95,7 +98,9 @@ export class DepositsService {
       const { state, authorization } = depositState(await tx.find(DepositAuthorization, { where: { rentalId } }));
       // Once captured, a repeat (a double click, a retry after an error page) must not reach the card.
       if (state === 'captured')
-        throw conflict(`The deposit was already captured (${money(rental, authorization!.capturedMinor)}); anything further goes on the invoice.`);
+        throw conflict(
+          `The deposit was already captured (${(await moneyOf(tx, rental))(authorization!.capturedMinor)}); anything further goes on the invoice.`,
+        );
       const live = state === 'authorized' && authorization?.paymentIntentId ? authorization : null;
       // The same split the clerk's confirmation showed (shared/billing/settlement.ts).
       const split = captureSplit(input.amountMinor, live?.amountMinor ?? 0);
@@ -114,15 +119,15 @@ export class DepositsService {
       if (fromAuthorization || charged)
         await this.mailSettlement(tx, rental, { capturedMinor: fromAuthorization, releasedMinor: released, chargedMinor: charged }, input.reason);
       const declined = charge && charge.state === 'declined' ? { amountMinor: above, message: charge.failureMessage ?? '' } : null;
-      return { view: await loadRentalView(tx, rental, rentalMoney), declined, capturedMinor: fromAuthorization, rental };
+      return { view: await loadRentalView(tx, rental, rentalMoney), declined, capturedMinor: fromAuthorization, money: await moneyOf(tx, rental) };
     });
     // What was captured stays captured (committed above); the clerk is told once that the card refused the rest.
     if (result.declined)
       throw new AppError(
         422,
         'card_declined',
-        `The saved card declined the charge of ${money(result.rental, result.declined.amountMinor)}: ${result.declined.message}${
-          result.capturedMinor ? ` ${money(result.rental, result.capturedMinor)} was captured from the authorization.` : ''
+        `The saved card declined the charge of ${result.money(result.declined.amountMinor)}: ${result.declined.message}${
+          result.capturedMinor ? ` ${result.money(result.capturedMinor)} was captured from the authorization.` : ''
         } Put the rest on the invoice.`,
         { rental: result.view },
       );
@@ -152,9 +157,8 @@ export class DepositsService {
     told: { capturedMinor: number; releasedMinor: number; chargedMinor: number },
     reason: string | null,
   ) {
-    const ctx = await loadOrgContext(tx);
     const customer = await getCustomer(tx, rental.customerId);
-    const amount = (minor: number) => firmFormat(voiceOf(ctx)).money(minor, rental.currency);
+    const amount = await moneyOf(tx, rental);
     const taken = told.capturedMinor + told.chargedMinor;
     const paragraphs = [
       `${customer.billingContact ? `Dear ${customer.billingContact},` : 'Hello,'} the kit of rental ${rental.number} is back with us and its deposit is settled.`,
@@ -250,7 +254,7 @@ export class DepositsService {
   /** Charges the saved card at once (merchant-initiated); a decline is recorded and reported. */
   private async chargeCard(tx: Scoped, rental: RentalRecord, amountMinor: number, reason: string, authorization: DepositAuthorization | null) {
     if (!rental.paymentMethodId)
-      throw ruleBroken('no_card', `No card is saved for rental ${rental.number}: put ${money(rental, amountMinor)} on the invoice instead.`);
+      throw ruleBroken('no_card', `No card is saved for rental ${rental.number}: put ${(await moneyOf(tx, rental))(amountMinor)} on the invoice instead.`);
     const charges = await tx.count(DepositAuthorization, { rentalId: rental.id, kind: 'charge' });
     const key = `rental:${rental.id}:charge:${authorization?.id ?? 'card'}:${charges + 1}`;
     const outcome = await this.gateway.confirmIntent({

@@ -88,8 +88,8 @@ export function RentalTermsForm({ settings }: { settings: OrganizationSettingsVi
             <Field name="depositMax" label="Deposit at most" inputMode="decimal" autoComplete="off" />
           </div>
           <p className="text-sm text-ink-700">
-            The deposit is authorized on the renter&rsquo;s card at checkout: the share of the rented items&rsquo; replacement value, but never less than the minimum
-            or more than the maximum (now {formatMoney(policy.minMinor, currency)} to {formatMoney(policy.maxMinor, currency)}).
+            The deposit is authorized on the renter&rsquo;s card at checkout: the share of the rented items&rsquo; replacement value, but never less than the
+            minimum or more than the maximum (now {formatMoney(policy.minMinor, currency)} to {formatMoney(policy.maxMinor, currency)}).
           </p>
           <div>
             <Button type="submit" variant="primary" busy={isSubmitting} disabled={!dirty}>

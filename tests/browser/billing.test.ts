@@ -123,6 +123,19 @@ describe('the billing desk in a real browser', () => {
     await dialog.getByLabel('Reference').fill('Transfer OMD-20931');
     await dialog.getByRole('button', { name: 'Record payment' }).click();
     await eventually(() => page.locator('main').innerText()).toMatch(/nothing outstanding/);
+
+    // A credit note: the form, then one question with the figures (10.00 + 19 % = 11.90, worked by hand) and the recipient.
+    await page.getByRole('button', { name: 'Credit note' }).click();
+    const creditDialog = page.getByRole('dialog', { name: 'Credit note' });
+    await creditDialog.getByLabel('Reason').fill('Goodwill for a late collection');
+    await creditDialog.getByLabel('Amount, net of tax (EUR)').fill('10.00');
+    await creditDialog.getByRole('button', { name: 'Review the credit note' }).click();
+    await eventually(() => creditDialog.innerText()).toContain(
+      `A credit note of €11.90 (€10.00 + €1.90 tax) against invoice ${number} is issued; it is mailed with its PDF to ${finance}.`,
+    );
+    expect((await rig.db.query(`SELECT 1 FROM invoices WHERE rental_id = $1 AND kind = 'credit_note'`, [rentalId])).length).toBe(0);
+    await creditDialog.getByRole('button', { name: 'Issue credit note of €11.90' }).click();
+    await eventually(() => page.locator('main').innerText()).toMatch(/Credit note CN-\d{4}-\d{4} \(€11\.90\) issued on .+; mail to .+ waiting to send/);
     await context.close();
   }, 120_000);
 

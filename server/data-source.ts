@@ -3,6 +3,7 @@ import { authEntities } from './auth';
 import { DepositAuthorization } from './billing/deposit-authorization.entity';
 import { DepositRequest } from './billing/deposit-request.entity';
 import { Invoice, InvoicePayment } from './billing/invoice.entity';
+import { MoneyMail } from './billing/money-mail.entity';
 import { PaymentEvent } from './billing/payment-event.entity';
 import { bookingEntities } from './bookings';
 import { calibrationEntities } from './calibration';
@@ -44,6 +45,7 @@ export const entities = [
   DepositRequest,
   Invoice,
   InvoicePayment,
+  MoneyMail,
   DocumentCounter,
   PaymentEvent,
 ];

@@ -1,13 +1,16 @@
 import type { DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { formatMoney } from '../../shared/billing/money';
+import { captureSplit } from '../../shared/billing/settlement';
+import { firmFormat } from '../../shared/formatting/firm-format';
 import type { capturePayload } from '../../shared/schemas/rentals';
 import { recordAudit } from '../audit/audit.service';
 import { loadBooking, type BookingView } from '../bookings';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
-import { loadRentalView, lockRental, rememberRentalCard, type RentalRecord } from '../rentals';
+import { loadOrgContext, voiceOf } from '../organizations';
+import { getCustomer, loadRentalView, lockRental, rememberRentalCard, type RentalRecord } from '../rentals';
+import { mailCustomerAbout } from './money-mails';
 import { providerCustomer } from './provider-customer';
 import { DepositAuthorization } from './deposit-authorization.entity';
 import { depositState } from './deposit-state';
@@ -15,7 +18,11 @@ import { Invoice } from './invoice.entity';
 import type { IntentOutcome, PaymentGateway } from './payment-gateway';
 import { rentalMoney } from './rental-money';
 
-const money = (rental: RentalRecord, minor: number) => formatMoney(minor, rental.currency, 'en-GB');
+/** An amount of the rental's money as the firm writes it (refusals speak as the screens do). */
+async function moneyOf(tx: Scoped, rental: RentalRecord) {
+  const ctx = await loadOrgContext(tx);
+  return (minor: number) => firmFormat(voiceOf(ctx)).money(minor, rental.currency);
+}
 
 /**
  * Deposits as card authorizations through the provider: authorize at
@@ -41,7 +48,7 @@ export class DepositsService {
         throw ruleBroken('booking_state', `The deposit is taken before handing over; this rental is ${booking.state}.`);
       if (rental.depositMinor <= 0) throw ruleBroken('no_deposit', 'This rental has no deposit to authorize (the firm’s deposit policy gave nothing).');
       const rows = await tx.find(DepositAuthorization, { where: { rentalId } });
-      if (depositState(rows).state === 'authorized') throw conflict(`The card is already authorized for ${money(rental, rental.depositMinor)}.`);
+      if (depositState(rows).state === 'authorized') throw conflict(`The card is already authorized for ${(await moneyOf(tx, rental))(rental.depositMinor)}.`);
       const customer = await providerCustomer(tx, this.gateway, rental.customerId);
       const key = `rental:${rental.id}:hold:${rows.length + 1}`;
       const card = await this.gateway.saveCard(paymentMethod, customer, `${key}:card`);
@@ -72,7 +79,7 @@ export class DepositsService {
       throw new AppError(
         422,
         'card_declined',
-        `The card was declined: ${result.declined} Checkout stays blocked until the deposit is authorized; try another card.`,
+        `The card was declined (“${result.declined.replace(/\.$/, '')}”). Checkout stays blocked until the deposit is authorized; try another card.`,
         { rental: result.view },
       );
     return result.view;
@@ -84,34 +91,47 @@ export class DepositsService {
    * Without a live authorization (it lapsed or was released) the whole amount
    * goes on the card.
    */
-  capture(actor: Actor, rentalId: string, input: z.infer<typeof capturePayload>) {
-    return inOrganization(this.db, actor.organizationId, async (tx) => {
+  async capture(actor: Actor, rentalId: string, input: z.infer<typeof capturePayload>) {
+    const result = await inOrganization(this.db, actor.organizationId, async (tx) => {
       const rental = await lockRental(tx, rentalId);
       await this.assertSettleable(tx, rental);
       const { state, authorization } = depositState(await tx.find(DepositAuthorization, { where: { rentalId } }));
       // Once captured, a repeat (a double click, a retry after an error page) must not reach the card.
       if (state === 'captured')
-        throw conflict(`The deposit was already captured (${money(rental, authorization!.capturedMinor)}); anything further goes on the invoice.`);
-      let fromAuthorization = 0;
-      if (state === 'authorized' && authorization?.paymentIntentId)
-        fromAuthorization = await this.captureAuthorization(
-          tx,
-          authorization,
-          rental.currency,
-          Math.min(input.amountMinor, authorization.amountMinor),
-          input.reason,
+        throw conflict(
+          `The deposit was already captured (${(await moneyOf(tx, rental))(authorization!.capturedMinor)}); anything further goes on the invoice.`,
         );
+      const live = state === 'authorized' && authorization?.paymentIntentId ? authorization : null;
+      // The same split the clerk's confirmation showed (shared/billing/settlement.ts).
+      const split = captureSplit(input.amountMinor, live?.amountMinor ?? 0);
+      const fromAuthorization = live ? await this.captureAuthorization(tx, live, rental.currency, split.fromAuthorizationMinor, input.reason) : 0;
+      const released = fromAuthorization ? split.releasedMinor : 0;
       const above = input.amountMinor - fromAuthorization;
-      if (above > 0) await this.chargeCard(tx, rental, above, input.reason, authorization);
+      const charge = above > 0 ? await this.chargeCard(tx, rental, above, input.reason, authorization) : null;
+      const charged = charge?.state === 'captured' ? charge.capturedMinor : 0;
       await recordAudit(
         tx,
         actor,
         'deposit.captured',
         { type: 'rental', id: rentalId },
-        { amountMinor: input.amountMinor, fromAuthorizationMinor: fromAuthorization, chargedMinor: above, reason: input.reason },
+        { amountMinor: input.amountMinor, fromAuthorizationMinor: fromAuthorization, chargedMinor: charged, reason: input.reason },
       );
-      return loadRentalView(tx, rental, rentalMoney);
+      if (fromAuthorization || charged)
+        await this.mailSettlement(tx, rental, { capturedMinor: fromAuthorization, releasedMinor: released, chargedMinor: charged }, input.reason);
+      const declined = charge && charge.state === 'declined' ? { amountMinor: above, message: charge.failureMessage ?? '' } : null;
+      return { view: await loadRentalView(tx, rental, rentalMoney), declined, capturedMinor: fromAuthorization, money: await moneyOf(tx, rental) };
     });
+    // What was captured stays captured (committed above); the clerk is told once that the card refused the rest.
+    if (result.declined)
+      throw new AppError(
+        422,
+        'card_declined',
+        `The saved card declined the charge of ${result.money(result.declined.amountMinor)}: ${result.declined.message}${
+          result.capturedMinor ? ` ${result.money(result.capturedMinor)} was captured from the authorization.` : ''
+        } Put the rest on the invoice.`,
+        { rental: result.view },
+      );
+    return result.view;
   }
 
   release(actor: Actor, rentalId: string) {
@@ -125,7 +145,38 @@ export class DepositsService {
       Object.assign(authorization, { state: 'released', settledAt: new Date() });
       await tx.save(DepositAuthorization, authorization);
       await recordAudit(tx, actor, 'deposit.released', { type: 'rental', id: rentalId }, { amountMinor: authorization.amountMinor });
+      await this.mailSettlement(tx, rental, { capturedMinor: 0, releasedMinor: authorization.amountMinor, chargedMinor: 0 }, null);
       return loadRentalView(tx, rental, rentalMoney);
+    });
+  }
+
+  /** Tells the customer's billing contact what was taken from their card and what was let go. */
+  private async mailSettlement(
+    tx: Scoped,
+    rental: RentalRecord,
+    told: { capturedMinor: number; releasedMinor: number; chargedMinor: number },
+    reason: string | null,
+  ) {
+    const customer = await getCustomer(tx, rental.customerId);
+    const amount = await moneyOf(tx, rental);
+    const taken = told.capturedMinor + told.chargedMinor;
+    const paragraphs = [
+      `${customer.billingContact ? `Dear ${customer.billingContact},` : 'Hello,'} the kit of rental ${rental.number} is back with us and its deposit is settled.`,
+      ...(told.capturedMinor ? [`We have taken ${amount(told.capturedMinor)} from the card authorization${reason ? ` for: ${reason}` : ''}.`] : []),
+      ...(told.chargedMinor
+        ? [`A further ${amount(told.chargedMinor)} was charged to the card you saved with us${reason && !told.capturedMinor ? ` for: ${reason}` : ''}.`]
+        : []),
+      ...(told.releasedMinor
+        ? [
+            `${taken ? 'The other' : 'The whole authorization of'} ${amount(told.releasedMinor)} is released; your card issuer decides how soon it shows on your statement.`,
+          ]
+        : []),
+      'The invoice follows in a separate mail and shows these amounts as paid.',
+    ];
+    await mailCustomerAbout(tx, rental.id, taken ? 'deposit_captured' : 'deposit_released', told, customer.billingEmail, {
+      subject: `Rental ${rental.number}: deposit ${taken ? `${amount(taken)} taken` : 'released'}`,
+      heading: `Deposit for rental ${rental.number}`,
+      paragraphs,
     });
   }
 
@@ -203,7 +254,7 @@ export class DepositsService {
   /** Charges the saved card at once (merchant-initiated); a decline is recorded and reported. */
   private async chargeCard(tx: Scoped, rental: RentalRecord, amountMinor: number, reason: string, authorization: DepositAuthorization | null) {
     if (!rental.paymentMethodId)
-      throw ruleBroken('no_card', `No card is saved for rental ${rental.number}: put ${money(rental, amountMinor)} on the invoice instead.`);
+      throw ruleBroken('no_card', `No card is saved for rental ${rental.number}: put ${(await moneyOf(tx, rental))(amountMinor)} on the invoice instead.`);
     const charges = await tx.count(DepositAuthorization, { rentalId: rental.id, kind: 'charge' });
     const key = `rental:${rental.id}:charge:${authorization?.id ?? 'card'}:${charges + 1}`;
     const outcome = await this.gateway.confirmIntent({
@@ -217,7 +268,7 @@ export class DepositsService {
       metadata: { rentalId: rental.id, organizationId: tx.organizationId, purpose: 'charge' },
       key,
     });
-    await this.record(tx, rental, { kind: 'charge', key, amountMinor, initiatedBy: 'merchant', outcome, reason });
+    return this.record(tx, rental, { kind: 'charge', key, amountMinor, initiatedBy: 'merchant', outcome, reason });
   }
 
   private async record(

@@ -35,6 +35,7 @@ export function invoiceSummaries(
       receivedMinor,
       outstandingMinor: i.kind === 'invoice' ? i.balanceMinor - credits.reduce((s, c) => s + c.totalMinor, 0) - receivedMinor : 0,
       reason: i.reason,
+      taxRateBasisPoints: i.taxRateBasisPoints,
     };
   });
 }

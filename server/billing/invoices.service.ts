@@ -1,7 +1,7 @@
 import { In, type DataSource } from 'typeorm';
 import type { z } from 'zod';
-import { taxMinor } from '../../shared/billing/quote';
-import { formatMoney } from '../../shared/billing/money';
+import { creditNoteAmounts, paymentDueOn } from '../../shared/billing/settlement';
+import { firmFormat } from '../../shared/formatting/firm-format';
 import type { InvoiceSummary, InvoiceView } from '../../shared/billing/views';
 import { columnHeading, plainAmount } from '../../shared/formatting/csv-columns';
 import type { Page } from '../../shared/lists/page';
@@ -13,11 +13,11 @@ import { inOrganization, readInOrganization, type Actor } from '../db/transactio
 import { toCsv } from '../documents/csv';
 import { invoicePdf } from '../documents/invoice-pdf';
 import { conflict, ruleBroken } from '../http/errors';
-import { enqueueMail } from '../notifications';
-import { documentFirm, loadOrgContext } from '../organizations';
+import { documentFirm, loadOrgContext, voiceOf } from '../organizations';
 import { getCustomer, getRental, loadRentalView, lockRental, type CustomerRecord } from '../rentals';
 import { invoiceSummaries } from './invoice-summaries';
 import { Invoice, InvoicePayment } from './invoice.entity';
+import { mailCustomerAbout } from './money-mails';
 import { rentalMoney } from './rental-money';
 import { nextNumber, padded } from '../db/numbering';
 
@@ -69,14 +69,21 @@ export class InvoicesService {
       const invoice = await tx.get(Invoice, { id: invoiceId, kind: 'invoice' }, 'That invoice');
       await lockRental(tx, invoice.rentalId);
       const credited = (await tx.find(Invoice, { where: { correctsInvoiceId: invoice.id } })).reduce((s, c) => s + c.subtotalMinor, 0);
-      const left = invoice.subtotalMinor - credited;
-      const amount = input.amountMinor ?? left;
-      if (amount <= 0 || amount > left) {
-        throw ruleBroken('credit_too_large', `At most ${formatMoney(left, invoice.currency, 'en-GB')} (net) of invoice ${invoice.number} is left to credit.`, {
-          leftMinor: left,
-        });
+      // The same amounts the clerk's confirmation showed (shared/billing/settlement.ts).
+      const credit = creditNoteAmounts(
+        { subtotalMinor: invoice.subtotalMinor, creditedMinor: credited, taxRateBasisPoints: invoice.taxRateBasisPoints },
+        input.amountMinor,
+      );
+      if (credit.netMinor === null) {
+        throw ruleBroken(
+          'credit_too_large',
+          `At most ${await this.money(tx, credit.leftMinor, invoice.currency)} (net) of invoice ${invoice.number} is left to credit.`,
+          {
+            leftMinor: credit.leftMinor,
+          },
+        );
       }
-      const tax = taxMinor(amount, invoice.taxRateBasisPoints);
+      const amount = credit.netMinor;
       const customer = await getCustomer(tx, invoice.customerId);
       return this.write(tx, actor, {
         kind: 'credit_note',
@@ -90,11 +97,11 @@ export class InvoicesService {
         ],
         subtotalMinor: amount,
         taxRateBasisPoints: invoice.taxRateBasisPoints,
-        taxMinor: tax,
-        totalMinor: amount + tax,
+        taxMinor: credit.taxMinor,
+        totalMinor: credit.totalMinor,
         depositCapturedMinor: 0,
         cardChargedMinor: 0,
-        balanceMinor: -(amount + tax),
+        balanceMinor: -credit.totalMinor,
         reason: input.reason,
       });
     });
@@ -109,7 +116,7 @@ export class InvoicesService {
       if (input.amountMinor > outstandingMinor) {
         throw ruleBroken(
           'overpaid',
-          `Invoice ${invoice.number} has ${formatMoney(outstandingMinor, invoice.currency, 'en-GB')} outstanding; record at most that.`,
+          `Invoice ${invoice.number} has ${await this.money(tx, outstandingMinor, invoice.currency)} outstanding; record at most that.`,
           { outstandingMinor },
         );
       }
@@ -180,10 +187,11 @@ export class InvoicesService {
         amount('Total'),
         amount('Deposit captured'),
         amount('Charged to card'),
-        amount('Balance'),
+        // What the invoice left to pay on the day it was issued; Balance is what is still owed today.
+        amount('Due at issue'),
         amount('Credited'),
         amount('Received'),
-        amount('Outstanding'),
+        amount('Balance'),
       ],
       items.map((i) => [
         i.number,
@@ -243,20 +251,24 @@ export class InvoicesService {
       { number: invoice.number, totalMinor: invoice.totalMinor, rentalId: invoice.rentalId },
     );
     const view = await this.view(tx, invoice);
+    const money = (minor: number) => firmFormat(voiceOf(ctx)).money(minor, view.currency);
     const title = v.kind === 'invoice' ? `Invoice ${view.number}` : `Credit note ${view.number}`;
-    await enqueueMail(
+    await mailCustomerAbout(
       tx,
-      [customer.billingEmail],
+      view.rentalId,
+      v.kind === 'invoice' ? 'invoice_issued' : 'credit_note_issued',
+      { documentNumber: view.number, totalMinor: view.totalMinor },
+      customer.billingEmail,
       {
         subject: `${title} from ${ctx.name}`,
         heading: title,
         paragraphs: [
-          `${customer.billingContact ? `Dear ${customer.billingContact}, please` : 'Please'} find ${v.kind === 'invoice' ? 'our invoice' : 'our credit note'} ${view.number} attached (${formatMoney(view.totalMinor, view.currency, 'en-GB')}).`,
+          `${customer.billingContact ? `Dear ${customer.billingContact}, please` : 'Please'} find ${v.kind === 'invoice' ? 'our invoice' : 'our credit note'} ${view.number} for rental ${view.rental.number} attached (${money(Math.abs(view.totalMinor))}).`,
           v.kind === 'invoice'
             ? view.balanceMinor > 0
-              ? `Balance due: ${formatMoney(view.balanceMinor, view.currency, 'en-GB')}.`
+              ? `Balance due: ${money(view.balanceMinor)}${view.dueOn ? `, by ${firmFormat(voiceOf(ctx)).date(view.dueOn)}` : ''}.`
               : 'Nothing is left to pay.'
-            : `It corrects invoice ${view.correctsNumber}: ${view.reason}`,
+            : `It corrects invoice ${view.corrects?.number} of ${firmFormat(voiceOf(ctx)).date(view.corrects?.issuedOn)}: ${view.reason}`,
         ],
       },
       [
@@ -286,6 +298,7 @@ export class InvoicesService {
 
   private async view(tx: Scoped, invoice: Invoice): Promise<InvoiceView> {
     const [summary] = await this.summaries(tx, [invoice]);
+    const corrected = invoice.correctsInvoiceId ? await tx.findOne(Invoice, { id: invoice.correctsInvoiceId }) : null;
     const payments = await tx.find(InvoicePayment, { where: { invoiceId: invoice.id }, order: { receivedOn: 'ASC', createdAt: 'ASC' } });
     return {
       ...summary,
@@ -301,7 +314,25 @@ export class InvoicesService {
       taxRateBasisPoints: invoice.taxRateBasisPoints,
       customer: invoice.customer,
       issuedAt: invoice.issuedAt.toISOString(),
+      dueOn: invoice.kind === 'invoice' && invoice.issuer?.paymentDays !== undefined ? paymentDueOn(invoice.issuedOn, invoice.issuer.paymentDays) : null,
+      rental: await this.rentalFacts(tx, invoice.rentalId),
+      corrects: corrected ? { number: corrected.number, issuedOn: corrected.issuedOn } : null,
     };
+  }
+
+  /** The rental an invoice bills: its number, period and items (they do not change once the kit is back). */
+  private async rentalFacts(tx: Scoped, rentalId: string): Promise<InvoiceView['rental']> {
+    const view = await loadRentalView(tx, await getRental(tx, rentalId), rentalMoney);
+    return {
+      number: view.number,
+      startsOn: view.startsOn,
+      endsOn: view.endsOn,
+      items: view.items.map((i) => ({ assetTag: i.assetTag, type: i.type, serialNumber: i.serialNumber, manufacturer: i.manufacturer, model: i.model })),
+    };
+  }
+
+  private async money(tx: Scoped, minor: number, currency: string) {
+    return firmFormat(voiceOf(await loadOrgContext(tx))).money(minor, currency);
   }
 
   private async render(tx: Scoped, invoice: InvoiceView) {

@@ -5,6 +5,7 @@ import { currentDepositRequest, depositRequestView } from './deposit-request-vie
 import { authorizationView, depositState } from './deposit-state';
 import { invoiceSummaries } from './invoice-summaries';
 import { Invoice, InvoicePayment } from './invoice.entity';
+import { moneyMailViews } from './money-mails';
 
 /** Billing's answer to what rentals ask of a rental's money (handed to rentals by app.ts). */
 export const rentalMoney: RentalMoney = {
@@ -33,6 +34,7 @@ export const rentalMoney: RentalMoney = {
       depositCapturedMinor: sum('authorization'),
       cardChargedMinor: sum('charge'),
       invoices: invoiceSummaries(invoices, rental.customerCompany, payments),
+      moneyMails: await moneyMailViews(tx, rental.id),
     };
   },
 };

@@ -1,6 +1,6 @@
 import type { InvoiceView } from '../../shared/billing/views';
 import type { FirmFormat } from '../../shared/formatting/firm-format';
-import { bullets, facts, heading, section, table, taxRateText, totals, type DocumentFirm } from './document-layout';
+import { bullets, facts, heading, section, table, taxRateText, totals, typeTitle, type DocumentFirm } from './document-layout';
 import { MM, renderPdf } from './pdf';
 
 /** What was paid and what is left, after the invoice totals; a credit note only states what it gives back. */
@@ -14,26 +14,41 @@ function settlementRows(invoice: InvoiceView, f: FirmFormat) {
   ];
 }
 
+/** "Laser tracker, Halvard QF-9" — the item as an accounts clerk can match it to the delivery. */
+const itemWords = (i: InvoiceView['rental']['items'][number]) =>
+  [typeTitle(i.type), [i.manufacturer, i.model].filter(Boolean).join(' ')].filter(Boolean).join(', ');
+
+/**
+ * An invoice or credit note as an accounts department files it: who issued it (as on the day of issue), the rental it
+ * bills with its period and items, the lines, the tax line, the due date and how to pay; a credit note names the
+ * invoice it corrects. Dates and money in the firm's voice.
+ */
 export function invoicePdf(input: { firm: DocumentFirm; invoice: InvoiceView }): Promise<Buffer> {
   const { firm, invoice } = input;
-  const { currency, customer } = invoice;
   const f = firm.format;
-  const money = (minor: number) => f.money(minor);
+  const money = (minor: number) => f.money(minor, invoice.currency);
+  const { customer, rental } = invoice;
   const credit = invoice.kind === 'credit_note';
   const title = `${credit ? 'Credit note' : 'Invoice'} ${invoice.number}`;
   return renderPdf({ size: 'A4', margin: 18 * MM, info: { Title: title } }, (doc) => {
+    // Kept as issued; invoices from before payment days and bank details were kept print what they have.
     const issuer = invoice.issuer;
     heading(doc, firm.name, title, [
       ...(issuer?.address ? [issuer.address] : []),
       ...(issuer?.taxNumber ? [`Tax number ${issuer.taxNumber}`] : []),
       `Issue date ${f.date(invoice.issuedOn)}`,
+      ...(invoice.dueOn ? [`Due date ${f.date(invoice.dueOn)}`] : []),
     ]);
-    if (credit) {
-      facts(doc, [
-        ['Corrects invoice', invoice.correctsNumber],
-        ['Reason', invoice.reason],
-      ]);
-    }
+    facts(doc, [
+      ['Rental', rental.number],
+      ['Rental period', f.dateRange(rental.startsOn, rental.endsOn)],
+      ...(credit
+        ? ([
+            ['Corrects invoice', invoice.corrects ? `${invoice.corrects.number} of ${f.date(invoice.corrects.issuedOn)}` : invoice.correctsNumber],
+            ['Reason', invoice.reason],
+          ] as [string, string | null][])
+        : []),
+    ]);
 
     section(doc, 'Customer');
     facts(doc, [
@@ -43,6 +58,19 @@ export function invoicePdf(input: { firm: DocumentFirm; invoice: InvoiceView }):
       ['Tax number', customer.taxNumber],
       ['E-mail', customer.billingEmail],
     ]);
+
+    if (rental.items.length) {
+      section(doc, 'Items rented');
+      table(
+        doc,
+        [
+          { header: 'Tag', share: 0.2, mono: true },
+          { header: 'Item', share: 0.5 },
+          { header: 'Serial number', share: 0.3, mono: true },
+        ],
+        rental.items.map((i) => [i.assetTag, itemWords(i), i.serialNumber]),
+      );
+    }
 
     section(doc, credit ? 'Credited' : 'Charges');
     table(
@@ -61,9 +89,15 @@ export function invoicePdf(input: { firm: DocumentFirm; invoice: InvoiceView }):
       { label: 'Total', value: money(invoice.totalMinor), strong: true },
       ...settlementRows(invoice, f),
     ]);
-    if (issuer?.paymentTerms && !credit) {
-      section(doc, 'Payment');
-      bullets(doc, [issuer.paymentTerms]);
+    if (!credit && (issuer?.paymentTerms || issuer?.bankDetails || invoice.dueOn)) {
+      section(doc, 'How to pay');
+      bullets(doc, [
+        ...(invoice.dueOn && invoice.balanceMinor > 0
+          ? [`Please pay ${money(invoice.balanceMinor)} by ${f.date(invoice.dueOn)}, quoting ${invoice.number}.`]
+          : []),
+        ...(issuer?.paymentTerms ? [issuer.paymentTerms] : []),
+        ...(issuer?.bankDetails ? [`Bank details: ${issuer.bankDetails}`] : []),
+      ]);
     }
   });
 }

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import type { DataSource } from 'typeorm';
+import { In, type DataSource } from 'typeorm';
 import type { Scoped } from '../db/scoped';
 import { renderMail, type MailContent } from './mail-template';
 import { OutboxAttachment } from './outbox-attachment.entity';
@@ -35,4 +35,11 @@ export async function outboxBacklog(db: DataSource): Promise<{ waiting: number; 
     `SELECT count(*) AS waiting, extract(epoch FROM now() - min(created_at))::float8 AS oldest FROM outbox_messages WHERE status = 'pending'`,
   );
   return { waiting: Number(row.waiting), oldestAgeSeconds: row.oldest ?? 0 };
+}
+
+/** Where queued messages stand: their recipients, and when each was sent (null while waiting). */
+export async function mailDeliveries(tx: Scoped, messageIds: string[]) {
+  if (!messageIds.length) return [];
+  const rows = await tx.find(OutboxMessage, { where: { id: In(messageIds) } });
+  return rows.map((m) => ({ id: m.id, recipients: m.recipients, status: m.status, sentAt: m.sentAt }));
 }

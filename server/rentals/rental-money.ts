@@ -2,7 +2,7 @@ import type { DepositState, RentalView } from '../../shared/billing/views';
 import type { Scoped } from '../db/scoped';
 
 /** A rental's money as billing keeps it, in plain values: its deposit (card authorizations and charges) and invoices. */
-export type RentalMoneyFacts = Pick<RentalView, 'deposit' | 'invoices'> & {
+export type RentalMoneyFacts = Pick<RentalView, 'deposit' | 'invoices' | 'moneyMails'> & {
   /** Taken from the deposit's card authorization. */
   depositCapturedMinor: number;
   /** Charged to the saved card above the authorization. */

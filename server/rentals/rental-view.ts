@@ -20,7 +20,7 @@ export async function loadRentalView(tx: Scoped, rental: RentalRecord, money: Re
   const customer = await getCustomer(tx, rental.customerId);
   const assets = await assetsByIds(tx, booking.assetIds, { packingOrder: true });
   const incidents = await bookingIncidents(tx, booking.id);
-  const { deposit, invoices, depositCapturedMinor, cardChargedMinor } = await money.facts(tx, { id: rental.id, customerCompany: customer.company });
+  const { deposit, invoices, moneyMails, depositCapturedMinor, cardChargedMinor } = await money.facts(tx, { id: rental.id, customerCompany: customer.company });
   const returnedOn = booking.returnedAt ? calendarDayIn(new Date(booking.returnedAt), ctx.timeZone) : null;
   const lateDays = booking.state === 'returned' || booking.state === 'out' ? lateDaysBetween(booking.endsOn, returnedOn ?? ctx.today) : 0;
   const charges = incidents.map((i) => ({
@@ -75,6 +75,7 @@ export async function loadRentalView(tx: Scoped, rental: RentalRecord, money: Re
       cardChargedMinor,
     }),
     invoices,
+    moneyMails,
     createdAt: rental.createdAt.toISOString(),
   };
 }

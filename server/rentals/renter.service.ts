@@ -8,7 +8,7 @@ import { inOrganization } from '../db/transaction';
 import { agreementTerms } from '../documents/rental-agreement-pdf';
 import { assetsByIds } from '../fleet';
 import { conflict, ruleBroken } from '../http/errors';
-import { formatOf, loadOrgContext } from '../organizations';
+import { formatOf, loadOrgContext, voiceOf } from '../organizations';
 import { latestAcceptance } from './agreement-acceptance';
 import type { RentalMoney } from './rental-money';
 import { agreementFor, certificatePackFor } from './rental-papers';
@@ -53,7 +53,7 @@ export class RenterService {
       );
       const accepted = await latestAcceptance(tx, rental.id);
       return {
-        firm: { name: ctx.name },
+        firm: { name: ctx.name, ...voiceOf(ctx) },
         number: rental.number,
         state: rental.state,
         customer: { company: rental.customer.company, billingContact: rental.customer.billingContact },

@@ -1,3 +1,4 @@
+import { addDays } from '../calibration/due-date';
 import { lateChargeMinor, periodWords, taxMinor } from './quote';
 import type { InvoiceLine, Quote, Settlement } from './views';
 
@@ -22,7 +23,8 @@ export function settle(input: {
   const { quote, lateDays } = input;
   const lines: InvoiceLine[] = quote.lines.map((l) => ({
     kind: 'rental',
-    description: `${l.description} — ${periodWords(l.periods)} (${quote.startsOn} to ${quote.endsOn})`,
+    // The period itself is printed beside the lines in the firm's date format, never as ISO dates inside the text.
+    description: `${l.description} — ${periodWords(l.periods)}`,
     quantity: l.quantity,
     unitMinor: l.unitMinor,
     amountMinor: l.amountMinor,
@@ -58,3 +60,31 @@ export function settle(input: {
     balanceMinor: totalMinor - input.depositCapturedMinor - input.cardChargedMinor,
   };
 }
+
+/**
+ * How a capture at return splits (DepositsService.capture does exactly this): what comes from the card authorization,
+ * what of it is released to the renter's card, and what goes on the saved card as a charge above it. Without a live
+ * authorization (`authorizedMinor` 0) the whole amount is a charge.
+ */
+export function captureSplit(amountMinor: number, authorizedMinor: number): { fromAuthorizationMinor: number; releasedMinor: number; chargedMinor: number } {
+  const fromAuthorizationMinor = Math.min(amountMinor, authorizedMinor);
+  return { fromAuthorizationMinor, releasedMinor: authorizedMinor - fromAuthorizationMinor, chargedMinor: amountMinor - fromAuthorizationMinor };
+}
+
+/**
+ * A credit note against an invoice: `amountMinor` net (all that is left when omitted), its tax at the invoice's rate,
+ * and what is left to credit before it. `null` net when the amount is more than is left or nothing.
+ */
+export function creditNoteAmounts(
+  invoice: { subtotalMinor: number; creditedMinor: number; taxRateBasisPoints: number },
+  amountMinor?: number,
+): { leftMinor: number; netMinor: number | null; taxMinor: number; totalMinor: number } {
+  const leftMinor = invoice.subtotalMinor - invoice.creditedMinor;
+  const net = amountMinor ?? leftMinor;
+  if (net <= 0 || net > leftMinor) return { leftMinor, netMinor: null, taxMinor: 0, totalMinor: 0 };
+  const tax = taxMinor(net, invoice.taxRateBasisPoints);
+  return { leftMinor, netMinor: net, taxMinor: tax, totalMinor: net + tax };
+}
+
+/** The day an invoice issued on `issuedOn` falls due: `paymentDays` calendar days later (0: due on the day of issue). */
+export const paymentDueOn = (issuedOn: string, paymentDays: number): string => addDays(issuedOn, paymentDays);

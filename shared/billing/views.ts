@@ -132,6 +132,7 @@ export type InvoiceSummary = {
   /** What the customer still owes: the balance less credit notes (with their tax) and payments received. */
   outstandingMinor: number;
   reason: string | null;
+  taxRateBasisPoints: number;
 };
 
 export type InvoicePaymentView = { id: string; amountMinor: number; receivedOn: string; reference: string; createdAt: string };
@@ -144,6 +145,34 @@ export type InvoiceView = InvoiceSummary & {
   taxRateBasisPoints: number;
   customer: { company: string; billingContact: string | null; billingEmail: string; address: string | null; taxNumber: string | null };
   issuedAt: string;
+  /** An invoice's due date: the issue date plus the payment days it was issued with (null for credit notes and invoices from before payment days were kept). */
+  dueOn: string | null;
+  /** The rental it bills: its number, period and items (with tags and serials). */
+  rental: { number: string; startsOn: string; endsOn: string; items: Pick<RentalItem, 'assetTag' | 'type' | 'serialNumber' | 'manufacturer' | 'model'>[] };
+  /** For a credit note, the invoice it corrects. */
+  corrects: { number: string; issuedOn: string } | null;
+};
+
+/** A money event the customer was mailed about. */
+export type MoneyMailEvent = 'deposit_captured' | 'deposit_released' | 'invoice_issued' | 'credit_note_issued';
+
+/** What happened to the customer's money and the mail that told them: queued with the change, sent by the outbox. */
+export type MoneyMailView = {
+  id: string;
+  event: MoneyMailEvent;
+  /** When the change was made. */
+  at: string;
+  /** Captured from the card authorization, released from it, charged to the saved card (capture and release). */
+  capturedMinor: number;
+  releasedMinor: number;
+  chargedMinor: number;
+  /** The invoice or credit note (with its total) the mail carried. */
+  documentNumber: string | null;
+  totalMinor: number | null;
+  sentTo: string[];
+  /** `waiting` until the outbox has delivered it; `failed` once it gave up. */
+  mail: 'waiting' | 'sent' | 'failed';
+  sentAt: string | null;
 };
 
 export type RentalItem = {
@@ -186,6 +215,8 @@ export type RentalView = {
   charges: RentalChargeView[];
   settlement: Settlement;
   invoices: InvoiceSummary[];
+  /** Captures, releases, invoices and credit notes the customer was mailed about, oldest first. */
+  moneyMails: MoneyMailView[];
   createdAt: string;
 };
 
@@ -228,7 +259,8 @@ export type RenterItem = {
 
 /** The renter's own page (no sign-in; reached by the link in the mail). */
 export type RenterRentalView = {
-  firm: { name: string };
+  /** The firm's name and voice: the renter's page shows dates and money as the firm writes them. */
+  firm: { name: string; locale: string; timeZone: string; currency: string };
   number: string;
   state: RentalState;
   customer: { company: string; billingContact: string | null };

@@ -3,7 +3,7 @@ import { ClockIcon } from './icons';
 import { StatusChip, type StatusTone } from './status-chip';
 
 const holdStates: Record<AuthorizationState, [string, StatusTone]> = {
-  authorized: ['Held on card', 'info'],
+  authorized: ['Authorized', 'info'],
   captured: ['Captured', 'ok'],
   released: ['Released', 'ok'],
   lapsed: ['Lapsed', 'warn'],

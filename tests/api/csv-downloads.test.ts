@@ -67,10 +67,10 @@ describe('every CSV download writes user text that looks like a formula as text'
     const res = await t.api.get('/api/invoices/export.csv').set(bearer(billing));
     expect(res.status).toBe(200);
     // Amounts as plain decimals with the currency in the heading (toFixed is an independent check of the digits).
-    const balance = (credit.body.balanceMinor / 100).toFixed(2);
+    const dueAtIssue = (credit.body.balanceMinor / 100).toFixed(2);
     const row = records(res.text).find((r) => r.Number === credit.body.number);
-    expect(row).toMatchObject({ Customer: `'${formula}`, Corrects: invoice.number, 'Balance (EUR)': balance });
+    expect(row).toMatchObject({ Customer: `'${formula}`, Corrects: invoice.number, 'Due at issue (EUR)': dueAtIssue, 'Balance (EUR)': '0.00' });
     expect(credit.body.balanceMinor).toBeLessThan(0);
-    expect(res.text).toContain(`,${balance},`);
+    expect(res.text).toContain(`,${dueAtIssue},`);
   });
 });

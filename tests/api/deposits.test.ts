@@ -1,5 +1,6 @@
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { DateTime } from 'luxon';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createPaymentClient } from '../../server/billing/payment-client';
 import { startPaymentFake, type PaymentFake } from '../../server/fakes/payment-fake';
@@ -394,6 +395,81 @@ describe('when the provider misbehaves', () => {
     const res = await t.api.post(`/api/rentals/${r.id}/deposit/release`).set(bearer(billing));
     expect(res.body.deposit.state).toBe('released');
     expect((await stripe.paymentIntents.retrieve(await intentOf(r))).status).toBe('canceled');
+  });
+});
+
+describe('what the customer is told, and the invoice their accounts department files', () => {
+  it('a release is mailed to the billing contact and kept with its outbox mail; the invoice PDF names the rental, items, period, due date and bank', async () => {
+    await t.api
+      .patch('/api/settings')
+      .set(bearer(owner))
+      .send({
+        issuer: {
+          address: 'Mill Yard 3, Wrenhallow',
+          taxNumber: 'WH-7781-0042',
+          paymentTerms: 'Please quote the invoice number.',
+          paymentDays: 21,
+          bankDetails: 'Wrenhallow Mutual, IBAN XX00 1111 2222 3333 4444 55',
+        },
+      });
+    const r = await newRental(3);
+    expect((await takeDeposit(r)).status).toBe(200);
+    expect((await checkout(r)).status).toBe(200);
+    expect((await giveBack(r)).status).toBe(200);
+    const released = await t.api.post(`/api/rentals/${r.id}/deposit/release`).set(bearer(billing));
+    expect(released.status).toBe(200);
+    expect((released.body as RentalView).moneyMails).toEqual([
+      expect.objectContaining({
+        event: 'deposit_released',
+        releasedMinor: r.depositMinor,
+        capturedMinor: 0,
+        sentTo: ['accounts@quillon.test'],
+        mail: 'waiting',
+        sentAt: null,
+      }),
+    ]);
+    const [told] = await t.db.query(
+      `SELECT subject, text_body FROM outbox_messages WHERE id = (SELECT outbox_message_id FROM money_mails WHERE rental_id = $1)`,
+      [r.id],
+    );
+    expect(told.subject).toBe(`Rental ${r.number}: deposit released`);
+    expect(told.text_body).toContain('The whole authorization of €500.00 is released');
+
+    const issued = await t.api.post(`/api/rentals/${r.id}/invoice`).set(bearer(billing));
+    expect(issued.status, JSON.stringify(issued.body)).toBe(201);
+    // The due date: issue date + 21 days, checked with luxon (an independent date library).
+    const dueOn = DateTime.fromISO(issued.body.issuedOn, { zone: 'utc' }).plus({ days: 21 }).toISODate()!;
+    expect(issued.body.dueOn).toBe(dueOn);
+    const day = (iso: string) => DateTime.fromISO(iso, { zone: 'utc' }).setLocale('en-GB').toFormat('d LLL yyyy');
+    const pdf = await t.api.get(`/api/invoices/${issued.body.id}/document.pdf`).set(bearer(billing)).buffer(true).parse(binaryBody);
+    const text = pdfText(pdf.body as Buffer).replace(/\u00a0/g, ' ');
+    for (const part of [
+      `Rental ${r.number}`,
+      ...r.items.flatMap((i) => [i.assetTag, i.serialNumber]),
+      `Due date ${day(dueOn)}`,
+      `Issue date ${day(issued.body.issuedOn)}`,
+      'Bank details: Wrenhallow Mutual, IBAN XX00 1111 2222 3333 4444 55',
+      'Please quote the invoice number.',
+      'Tax 19 %',
+    ])
+      expect(text).toContain(part);
+    // The period: both dates of the rental with their year, however the range is written.
+    expect(text).toMatch(new RegExp(`Rental period .*${DateTime.fromISO(r.endsOn).toFormat('yyyy')}`));
+    expect(issued.body.rental).toMatchObject({ number: r.number, startsOn: r.startsOn, endsOn: r.endsOn });
+
+    const credit = await t.api.post(`/api/invoices/${issued.body.id}/credit-note`).set(bearer(billing)).send({ reason: 'One day waived', amountMinor: 1500 });
+    expect(credit.status).toBe(201);
+    expect(credit.body).toMatchObject({ corrects: { number: issued.body.number, issuedOn: issued.body.issuedOn }, dueOn: null });
+    const creditPdf = await t.api.get(`/api/invoices/${credit.body.id}/document.pdf`).set(bearer(billing)).buffer(true).parse(binaryBody);
+    const creditText = pdfText(creditPdf.body as Buffer);
+    expect(creditText).toContain(`Corrects invoice ${issued.body.number} of ${day(issued.body.issuedOn)}`);
+    expect(creditText).toContain(`Rental ${r.number}`);
+    const mails = (await t.api.get(`/api/rentals/${r.id}`).set(bearer(billing))).body.moneyMails as { event: string; documentNumber: string | null }[];
+    expect(mails.map((m) => [m.event, m.documentNumber])).toEqual([
+      ['deposit_released', null],
+      ['invoice_issued', issued.body.number],
+      ['credit_note_issued', credit.body.number],
+    ]);
   });
 });
 

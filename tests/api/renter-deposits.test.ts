@@ -123,7 +123,12 @@ describe('the renter places the deposit on the provider’s hosted page', () => 
 
   it('the renter’s page shows the firm, the rental, its terms, each item’s calibration against the last day and the papers, without sign-in', async () => {
     const page = await renterPage(token);
-    expect(page).toMatchObject({ firm: { name: expect.any(String) }, number: rental.number, endsOn: rental.endsOn, depositMinor: rental.depositMinor });
+    expect(page).toMatchObject({
+      firm: { name: expect.any(String), locale: 'en-GB', timeZone: 'Europe/Berlin', currency: 'EUR' },
+      number: rental.number,
+      endsOn: rental.endsOn,
+      depositMinor: rental.depositMinor,
+    });
     expect(page.terms.join(' ')).toMatch(/Late return/);
     expect(page.items).toHaveLength(1);
     const item = page.items[0]!;

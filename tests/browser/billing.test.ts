@@ -74,6 +74,12 @@ describe('the billing desk in a real browser', () => {
     // Repair 180.00 + 19 % = 214.20 from the 500.00 hold (worked by hand); the rest is released.
     await eventually(() => page.getByLabel('Amount to capture (EUR)').inputValue()).toMatch(/^214\.20?$/);
     await page.getByRole('button', { name: 'Capture and release the rest' }).click();
+    // Asked once, with the figures and the mail's recipient: 214.20 captured of the 500.00 authorization, 285.80 released (worked by hand).
+    const finance = rental.customer.billingEmail as string;
+    const confirm = page.getByRole('dialog', { name: 'Capture from the card authorization' });
+    await eventually(() => confirm.innerText()).toContain(`€214.20 captured, €285.80 released; the customer is told by mail at ${finance}.`);
+    expect(await rig.db.query(`SELECT 1 FROM deposit_authorizations WHERE rental_id = $1 AND state = 'captured'`, [rentalId])).toHaveLength(0);
+    await confirm.getByRole('button', { name: 'Capture €214.20' }).click();
     await eventually(
       async () =>
         (
@@ -83,8 +89,23 @@ describe('the billing desk in a real browser', () => {
           )
         )[0],
     ).toEqual({ state: 'captured', captured_minor: 21_420 });
+    // The page says what happened; the mail waits for the outbox, then says when it went.
+    const told = page.getByRole('list', { name: 'What the customer was told' }).first();
+    const to = finance.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+    await eventually(() => told.innerText()).toMatch(new RegExp(`€214\\.20 captured, €285\\.80 released on .+; mail to ${to} waiting to send`));
+    await rig.deliverMail();
+    await eventually(() => told.innerText()).toMatch(new RegExp(`€214\\.20 captured, €285\\.80 released on .+; mailed to ${to} at \\d`));
+    const [receipt] = await rig.db.query(`SELECT subject, text_body FROM mail_sink_messages WHERE $1 = ANY(recipients) AND subject LIKE '%taken'`, [finance]);
+    expect(receipt.subject).toContain('€214.20 taken');
+    expect(receipt.text_body).toMatch(/taken €214\.20 from the card authorization[\s\S]*The other €285\.80 is released/);
 
     await page.getByRole('button', { name: 'Issue invoice' }).click();
+    const issue = page.getByRole('dialog', { name: 'Issue the invoice' });
+    // 392.70 with tax, 214.20 from the deposit, 178.50 to pay (worked by hand below).
+    await eventually(() => issue.innerText()).toContain(
+      `An invoice of €392.70 is issued: €214.20 paid from the deposit, €178.50 balance to pay; the invoice is mailed with its PDF to ${finance}.`,
+    );
+    await issue.getByRole('button', { name: 'Issue invoice' }).click();
     const download = page.getByRole('link', { name: 'Download invoice (PDF)' });
     await download.waitFor();
     const pdf = await context.request.get(new URL((await download.getAttribute('href'))!, rig.baseUrl).toString());
@@ -102,6 +123,19 @@ describe('the billing desk in a real browser', () => {
     await dialog.getByLabel('Reference').fill('Transfer OMD-20931');
     await dialog.getByRole('button', { name: 'Record payment' }).click();
     await eventually(() => page.locator('main').innerText()).toMatch(/nothing outstanding/);
+
+    // A credit note: the form, then one question with the figures (10.00 + 19 % = 11.90, worked by hand) and the recipient.
+    await page.getByRole('button', { name: 'Credit note' }).click();
+    const creditDialog = page.getByRole('dialog', { name: 'Credit note' });
+    await creditDialog.getByLabel('Reason').fill('Goodwill for a late collection');
+    await creditDialog.getByLabel('Amount, net of tax (EUR)').fill('10.00');
+    await creditDialog.getByRole('button', { name: 'Review the credit note' }).click();
+    await eventually(() => creditDialog.innerText()).toContain(
+      `A credit note of €11.90 (€10.00 + €1.90 tax) against invoice ${number} is issued; it is mailed with its PDF to ${finance}.`,
+    );
+    expect((await rig.db.query(`SELECT 1 FROM invoices WHERE rental_id = $1 AND kind = 'credit_note'`, [rentalId])).length).toBe(0);
+    await creditDialog.getByRole('button', { name: 'Issue credit note of €11.90' }).click();
+    await eventually(() => page.locator('main').innerText()).toMatch(/Credit note CN-\d{4}-\d{4} \(€11\.90\) issued on .+; mail to .+ waiting to send/);
     await context.close();
   }, 120_000);
 
@@ -149,11 +183,13 @@ describe('the billing desk in a real browser', () => {
     const form = page.getByRole('form', { name: 'Rental terms' });
     await form.getByLabel('Tax on rentals (%)').fill('7,5');
     await form.getByLabel('Deposit (% of replacement value)').fill('15');
-    await form.getByLabel('Deposit at least (EUR)').fill('200');
-    await form.getByLabel('Deposit at most (EUR)').fill('100');
+    // Money settings read as money: the demo firm's minimum is 500.00 EUR.
+    expect(await form.getByLabel('Deposit at least').inputValue()).toBe('€500.00');
+    await form.getByLabel('Deposit at least').fill('€200.00');
+    await form.getByLabel('Deposit at most').fill('100');
     await form.getByRole('button', { name: 'Save rental terms' }).click();
     await form.getByText('The maximum must be at least the minimum.').waitFor();
-    await form.getByLabel('Deposit at most (EUR)').fill('3000');
+    await form.getByLabel('Deposit at most').fill('€3,000.00');
     await form.getByRole('button', { name: 'Save rental terms' }).click();
     await form.getByText(/^Saved\./).waitFor();
     const details = page.getByRole('form', { name: 'Invoice details' });
@@ -161,10 +197,20 @@ describe('the billing desk in a real browser', () => {
     await details.getByRole('button', { name: 'Save invoice details' }).click();
     await details.getByText('Invoices must say where the firm is.').waitFor();
     await details.getByLabel('Address on invoices').fill('Mill Yard 3, 41877 Wrenhallow');
+    await details.getByLabel('Days to pay').fill('400');
+    await details.getByRole('button', { name: 'Save invoice details' }).click();
+    await details.getByText('Enter whole days from 0 to 365.').waitFor();
+    await details.getByLabel('Days to pay').fill('14');
+    await details.getByLabel('Bank details').fill('Wrenhallow Mutual, IBAN XX00 1234 5678 9012 3456 78');
     await details.getByRole('button', { name: 'Save invoice details' }).click();
     await details.getByText(/^Saved\./).waitFor();
     const api = await rig.apiAs('owner@demo.test');
-    expect((await api('/settings')).body.issuer).toMatchObject({ address: 'Mill Yard 3, 41877 Wrenhallow', taxNumber: 'WH-7781-0042' });
+    expect((await api('/settings')).body.issuer).toMatchObject({
+      address: 'Mill Yard 3, 41877 Wrenhallow',
+      taxNumber: 'WH-7781-0042',
+      paymentDays: 14,
+      bankDetails: 'Wrenhallow Mutual, IBAN XX00 1234 5678 9012 3456 78',
+    });
     const [smr] = (await api('/assets?type=smr&limit=1')).body.items;
     const today = todayIn('Europe/Berlin');
     const quote = (await api(`/quotes?assetIds=${smr.id}&startsOn=${addDays(today, 60)}&endsOn=${addDays(today, 60)}`)).body;

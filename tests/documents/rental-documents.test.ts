@@ -85,6 +85,7 @@ function rental(items: RentalItem[]): RentalView {
     charges: [],
     settlement: none,
     invoices: [],
+    moneyMails: [],
     createdAt: '2025-02-20T09:30:00Z',
   };
 }
@@ -139,9 +140,18 @@ function invoice(over: Partial<InvoiceView> = {}): InvoiceView {
       taxNumber: 'WH-7781-0042',
       paymentTerms: 'Payment within 14 days of the invoice date, quoting the invoice number.',
       paymentDays: 14,
-      bankDetails: '',
+      bankDetails: 'Wrenhallow Mutual Bank, IBAN XX00 1234 5678 9012 3456 78, BIC WRNHXX00',
     },
     issuedOn: '2025-03-14',
+    // 14 March 2025 + 14 days = 28 March 2025 (worked by hand; the service computes it with paymentDueOn).
+    dueOn: '2025-03-28',
+    rental: {
+      number: 'R-2025-031',
+      startsOn: '2025-03-03',
+      endsOn: '2025-03-12',
+      items: threeItems.map(({ assetTag, type, serialNumber, manufacturer, model }) => ({ assetTag, type, serialNumber, manufacturer, model })),
+    },
+    corrects: null,
     issuedAt: '2025-03-14T10:00:00Z',
     rentalId: 'r1',
     customerId: 'c1',
@@ -195,6 +205,40 @@ describe('invoice PDF', () => {
     ]);
   });
 
+  it('names the rental, its period, each item with tag and serial, the due date and the bank details', async () => {
+    const text = pdfText(await invoicePdf({ firm, invoice: invoice() }));
+    expectAll(text, [
+      'Rental R-2025-031',
+      // en-GB short-month dates, the year once for a range within one month (from memory of British usage: "3 – 12 Mar 2025").
+      'Rental period 3 – 12 Mar 2025',
+      ...threeItems.flatMap((i) => [i.assetTag, i.serialNumber]),
+      'Issue date 14 Mar 2025',
+      'Due date 28 Mar 2025',
+      'Please pay €546.00 by 28 Mar 2025, quoting INV-2025-0042',
+      'IBAN XX00 1234 5678 9012 3456 78',
+      'Tax 19 % €646.00',
+    ]);
+  });
+
+  it('speaks the firm’s voice: en-US dates and money', async () => {
+    const text = pdfText(
+      await invoicePdf({ firm: { ...firm, format: firmFormat({ locale: 'en-US', timeZone: 'America/Chicago', currency: 'EUR' }) }, invoice: invoice() }),
+    );
+    // US order, month first (from memory of US business letters): "Mar 28, 2025".
+    expectAll(text, ['Due date Mar 28, 2025', 'Issue date Mar 14, 2025', 'Rental period Mar 3 – 12, 2025']);
+    expect(text).not.toContain('28 Mar 2025');
+  });
+
+  it('prints what an invoice from before payment days and bank details were kept has', async () => {
+    const old = invoice({
+      issuer: { address: 'Forge Lane 12, Wrenhallow', taxNumber: 'WH-7781-0042', paymentTerms: 'Payment within 30 days.' } as never,
+      dueOn: null,
+    });
+    const text = pdfText(await invoicePdf({ firm, invoice: old }));
+    expectAll(text, ['Forge Lane 12, Wrenhallow', 'Payment within 30 days.']);
+    expect(text).not.toMatch(/Due date|Bank details/);
+  });
+
   it('says nothing is left to pay once the balance is settled', async () => {
     const text = pdfText(await invoicePdf({ firm, invoice: invoice({ cardChargedMinor: 254_600, balanceMinor: 0 }) }));
     expect(text).toContain('Nothing left to pay');
@@ -206,6 +250,8 @@ describe('invoice PDF', () => {
       number: 'CN-2025-0003',
       correctsInvoiceId: 'i1',
       correctsNumber: 'INV-2025-0042',
+      corrects: { number: 'INV-2025-0042', issuedOn: '2025-03-14' },
+      dueOn: null,
       reason: 'Late days waived: the carrier delayed the return',
       lines: [{ kind: 'credit', description: 'Late days, laser tracker', quantity: 2, unitMinor: 30_000, amountMinor: 60_000 }],
       // Worked by hand: 600.00 + 19 % (114.00) = 714.00.
@@ -214,8 +260,14 @@ describe('invoice PDF', () => {
       totalMinor: 71_400,
     });
     const text = pdfText(await invoicePdf({ firm, invoice: credit }));
-    expectAll(text, ['Credit note CN-2025-0003', 'Corrects invoice INV-2025-0042', 'the carrier delayed the return', 'Total credited €714.00']);
-    expect(text).not.toContain('Balance due');
+    expectAll(text, [
+      'Credit note CN-2025-0003',
+      'Corrects invoice INV-2025-0042 of 14 Mar 2025',
+      'Rental R-2025-031',
+      'the carrier delayed the return',
+      'Total credited €714.00',
+    ]);
+    expect(text).not.toMatch(/Balance due|How to pay/);
   });
 });
 

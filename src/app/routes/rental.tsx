@@ -19,9 +19,10 @@ import { formatCalendarDate, useFirmFormat } from '../../lib/format';
 import { can } from '../../lib/roles';
 import type { RentalView } from '../../../shared/billing/views';
 
-/** The renter has a live link: their acceptance and the provider's event can arrive any moment. */
+/** The renter has a live link (their acceptance and the provider's event can arrive any moment), or a mail to the customer waits to go. */
 const renterAtWork = (r: RentalView) =>
-  r.state === 'reserved' && (r.deposit.request?.state === 'waiting' || r.deposit.request?.state === 'declined' || (!!r.deposit.request && !r.agreement));
+  (r.state === 'reserved' && (r.deposit.request?.state === 'waiting' || r.deposit.request?.state === 'declined' || (!!r.deposit.request && !r.agreement))) ||
+  r.moneyMails.some((m) => m.mail === 'waiting');
 
 /** One rental: what went out, its price, the agreement, the deposit's card authorization and the invoice. */
 export default function RentalRoute() {
@@ -63,7 +64,8 @@ export default function RentalRoute() {
         description={`${r.customer.company}, ${formatCalendarDate(r.startsOn)} – ${formatCalendarDate(r.endsOn)}`}
         actions={[pdf('agreement', 'Rental agreement (PDF)'), pdf('certificate-pack', 'Certificate pack (PDF)')]}
       />
-      <ArrivalNotice />
+      {/* "Rental … is reserved" holds only while it is: the words came with the navigation and outlive a reload. */}
+      {r.state === 'reserved' ? <ArrivalNotice /> : null}
       <div className="grid gap-4 lg:grid-cols-2">
         <Panel title="Rental">
           <FactList

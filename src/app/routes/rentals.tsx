@@ -19,7 +19,7 @@ const views: { value: RentalListView; label: string; empty: string }[] = [
   { value: 'all', label: 'All rentals', empty: 'No rentals yet.' },
 ];
 
-/** The billing desk's rentals: open ones with their deposit holds, and returns waiting to be settled. */
+/** The billing desk's rentals: open ones with their deposits' card authorizations, and returns waiting to be settled. */
 export default function RentalsRoute() {
   const { user } = useSession();
   const [params, setParams] = useSearchParams();
@@ -29,7 +29,7 @@ export default function RentalsRoute() {
     <>
       <PageHeader
         title="Rentals"
-        description="Kit rented to customers: the price, the deposit hold on the renter's card and what is left to settle."
+        description="Kit rented to customers: the price, the deposit's card authorization and what is left to settle."
         actions={
           <>
             {can(user.role, 'rentals.write') ? (

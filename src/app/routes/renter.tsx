@@ -3,6 +3,7 @@ import { LoadFailure } from '../../components/load-failure';
 import { LoadingPanel } from '../../components/loading-panel';
 import { useRenterRental } from '../../features/rentals/api/get-renter-rental';
 import { RenterPage } from '../../features/rentals/components/renter-page';
+import { adoptFirmVoice, FirmFormatContext } from '../../lib/format';
 import { RenterFrame } from '../shell/renter-frame';
 
 /** The renter's own page, opened from the link in their e-mail (no sign-in). */
@@ -21,9 +22,13 @@ export default function RenterRoute() {
         <LoadFailure error={view.error} thing="rental" notFound="This link does not open a rental. Check that the whole link from the e-mail was used." />
       </RenterFrame>
     );
+  // Outside the signed-in shell: the page takes the firm's voice from the rental itself.
+  const { name, ...voice } = view.data.firm;
   return (
-    <RenterFrame firm={view.data.firm.name} title={`Rental ${view.data.number}`}>
-      <RenterPage view={view.data} token={token} />
-    </RenterFrame>
+    <FirmFormatContext.Provider value={adoptFirmVoice(voice)}>
+      <RenterFrame firm={name} title={`Rental ${view.data.number}`}>
+        <RenterPage view={view.data} token={token} />
+      </RenterFrame>
+    </FirmFormatContext.Provider>
   );
 }

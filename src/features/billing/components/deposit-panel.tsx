@@ -7,19 +7,19 @@ import { SelectField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
 import { TableHead } from '../../../components/table-head';
-import { isApiError } from '../../../lib/api-client';
 import { formatMoney, useFirmFormat } from '../../../lib/format';
 import { usePaymentMode } from '../api/get-payment-mode';
 import { useTakeDeposit } from '../api/take-deposit';
 import { DepositRequest } from './deposit-request';
 import { testCards, type DepositAuthorizationView, type RentalView } from '../../../../shared/billing/views';
 import { paymentProblem } from './payment-problem';
+import { MoneyMails } from './money-mails';
 import { SettleDeposit } from './settle-deposit';
 
 const brand = (name: string | null) => (name ? name[0].toUpperCase() + name.slice(1) : 'Card');
 const card = (hold: DepositAuthorizationView | null) => (hold?.cardLast4 ? `${brand(hold.cardBrand)} ending ${hold.cardLast4}` : null);
 
-/** The rental's deposit: the hold on the renter's card, taking it, and settling it at return (`charges`: the rental's damage and loss charges, set before settling). */
+/** The rental's deposit: the card authorization on the renter's card, taking it, and settling it at return (`charges`: the rental's damage and loss charges, set before settling). */
 export function DepositPanel({ rental, canManage, charges }: { rental: RentalView; canManage: boolean; charges: ReactNode }) {
   const { dateTime } = useFirmFormat();
   const { state, authorization: hold, authorizations: holds } = rental.deposit;
@@ -44,7 +44,6 @@ export function DepositPanel({ rental, canManage, charges }: { rental: RentalVie
                     { term: 'Lapses at', value: <AuthorizationLapse at={hold.captureBefore} dateTime={dateTime} /> },
                   ]
                 : []),
-              ...(state === 'declined' && hold?.failureMessage ? [{ term: 'Declined', value: hold.failureMessage }] : []),
               ...(hold && hold.capturedMinor > 0
                 ? [{ term: 'Captured', value: `${money(hold.capturedMinor)}${hold.captureReason ? ` — ${hold.captureReason}` : ''}` }]
                 : []),
@@ -58,6 +57,7 @@ export function DepositPanel({ rental, canManage, charges }: { rental: RentalVie
             </p>
           ) : null}
           {authorized && rental.returnedAt && canManage ? <SettleDeposit rental={rental} hold={hold} charges={charges} /> : null}
+          <MoneyMails mails={rental.moneyMails} events={['deposit_captured', 'deposit_released']} currency={rental.currency} />
         </div>
         {holds.length ? <AuthorizationHistory holds={holds} currency={rental.currency} dateTime={dateTime} /> : null}
       </div>
@@ -77,11 +77,8 @@ function TakeDeposit({ rentalId, amount }: { rentalId: string; amount: string })
         try {
           await take.mutateAsync({ rentalId, paymentMethod });
         } catch (error) {
-          const declined = isApiError(error) && error.code === 'card_declined';
-          setProblem({
-            title: declined ? 'The card was declined' : 'No deposit was taken',
-            text: declined ? `${error.message} Try another card.` : paymentProblem(error),
-          });
+          // The server's words already say the card was declined and what to do: said once.
+          setProblem({ title: 'No deposit was taken', text: paymentProblem(error) });
         }
       }}
     >
@@ -120,7 +117,7 @@ function AuthorizationHistory({ holds, currency, dateTime }: { holds: DepositAut
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm">
         <caption className="mb-1 text-left font-semibold text-ink-900">Authorization history</caption>
-        <TableHead columns={['Taken', 'How', 'Card', 'Held#', 'State', 'Captured#', 'Note']} />
+        <TableHead columns={['Tried', 'How', 'Card', 'Amount#', 'State', 'Captured#', 'Note']} />
         <tbody className="divide-y divide-paper-line">
           {holds.map((h) => (
             <tr key={h.id}>

@@ -2,7 +2,6 @@ import { useState, type ReactNode } from 'react';
 import { Button, buttonClasses } from '../../../components/button';
 import { DownloadIcon } from '../../../components/icons';
 import { MoneyLines } from '../../../components/money-lines';
-import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
 import { todayIn } from '../../../lib/calibration';
 import { formatCalendarDate, formatMoney, useFirmFormat } from '../../../lib/format';
@@ -10,6 +9,8 @@ import { invoiceDocumentUrl, rentalInvoiceUrl } from '../api/get-invoices';
 import { useIssueInvoice } from '../api/issue-invoice';
 import type { InvoiceLine, InvoiceSummary, RentalView } from '../../../../shared/billing/views';
 import { CreditNoteDialog } from './credit-note-dialog';
+import { MoneyConfirmation } from './money-confirmation';
+import { MoneyMails } from './money-mails';
 import { PaymentDialog } from './payment-dialog';
 
 const lineKindWords: Record<InvoiceLine['kind'], string> = { rental: 'Rental', late: 'Late days', damage: 'Damage or loss', credit: 'Credit' };
@@ -27,6 +28,7 @@ export function InvoicePanel({ rental, canCharge, charges }: { rental: RentalVie
   const { timeZone } = useFirmFormat();
   const [creditOpen, setCreditOpen] = useState(false);
   const [paymentOpen, setPaymentOpen] = useState(false);
+  const [issuing, setIssuing] = useState(false);
   const { settlement, currency } = rental;
   const invoice = rental.invoices.find((i) => i.kind === 'invoice');
   const creditNotes = rental.invoices.filter((i) => i.kind === 'credit_note');
@@ -53,7 +55,16 @@ export function InvoicePanel({ rental, canCharge, charges }: { rental: RentalVie
             { label: 'Total', minor: settlement.totalMinor, strong: true },
             { label: 'Paid from the deposit', minor: settlement.depositCapturedMinor },
             { label: 'Charged to the saved card', minor: settlement.cardChargedMinor },
-            { label: 'Balance due', minor: settlement.balanceMinor, strong: true },
+            // Balance is what is still owed: once invoiced, less credit notes and payments received.
+            ...(invoice
+              ? [
+                  ...(invoice.creditedMinor
+                    ? [{ label: 'Credited (with tax)', minor: invoice.balanceMinor - invoice.outstandingMinor - invoice.receivedMinor }]
+                    : []),
+                  ...(invoice.receivedMinor ? [{ label: 'Received', minor: invoice.receivedMinor }] : []),
+                  { label: 'Balance', minor: invoice.outstandingMinor, strong: true },
+                ]
+              : [{ label: 'Balance', minor: settlement.balanceMinor, strong: true }]),
           ]}
         />
         {invoice ? (
@@ -80,26 +91,41 @@ export function InvoicePanel({ rental, canCharge, charges }: { rental: RentalVie
             ) : null}
           </div>
         ) : canCharge ? (
-          <div className="flex flex-col gap-2">
-            {issue.isError ? (
-              <Notice tone="error" title="The invoice was not issued">
-                {issue.error.message}
-              </Notice>
-            ) : null}
-            <div className="flex flex-wrap items-center gap-3">
-              <Button variant="primary" busy={issue.isPending} disabled={!!blocker} onClick={() => issue.mutate(rental.id)}>
-                Issue invoice
-              </Button>
-              {blocker ? <span className="text-sm text-ink-700">{blocker}</span> : null}
-            </div>
+          <div className="flex flex-wrap items-center gap-3">
+            <Button variant="primary" disabled={!!blocker} onClick={() => setIssuing(true)}>
+              Issue invoice
+            </Button>
+            {blocker ? <span className="text-sm text-ink-700">{blocker}</span> : null}
           </div>
         ) : null}
+        <MoneyMails mails={rental.moneyMails} events={['invoice_issued', 'credit_note_issued']} currency={currency} />
         {creditNotes.length ? <CreditNotes notes={creditNotes} /> : null}
       </div>
-      {invoice ? <CreditNoteDialog invoice={invoice} open={creditOpen} onClose={() => setCreditOpen(false)} /> : null}
+      {issuing ? (
+        <MoneyConfirmation
+          open
+          onClose={() => setIssuing(false)}
+          title="Issue the invoice"
+          what={issueWords(settlement, formatMoney, currency)}
+          mailTo={`the invoice is mailed with its PDF to ${rental.customer.billingEmail}`}
+          confirmLabel="Issue invoice"
+          onConfirm={() => issue.mutateAsync(rental.id)}
+        />
+      ) : null}
+      {invoice ? <CreditNoteDialog invoice={invoice} mailTo={rental.customer.billingEmail} open={creditOpen} onClose={() => setCreditOpen(false)} /> : null}
       {invoice ? <PaymentDialog invoice={invoice} today={todayIn(timeZone ?? 'UTC')} open={paymentOpen} onClose={() => setPaymentOpen(false)} /> : null}
     </Panel>
   );
+}
+
+/** "An invoice of €392.70 is issued: €214.20 paid from the deposit, €178.50 balance" — the rental's settlement, which the invoice copies. */
+function issueWords(s: RentalView['settlement'], format: typeof formatMoney, currency: string): string {
+  const money = (minor: number) => format(minor, currency);
+  const paid = [
+    s.depositCapturedMinor ? `${money(s.depositCapturedMinor)} paid from the deposit` : '',
+    s.cardChargedMinor ? `${money(s.cardChargedMinor)} charged to the saved card` : '',
+  ].filter(Boolean);
+  return `An invoice of ${money(s.totalMinor)} is issued${paid.length ? `: ${paid.join(', ')}` : ''}, ${s.balanceMinor > 0 ? `${money(s.balanceMinor)} balance to pay` : 'nothing left to pay'}`;
 }
 
 function CreditNotes({ notes }: { notes: InvoiceSummary[] }) {

@@ -9,21 +9,24 @@ import type { InvoiceSummary } from '../../../../shared/billing/views';
 type Cell = ICellRendererParams<InvoiceSummary>;
 const kindWords: Record<InvoiceSummary['kind'], string> = { invoice: 'Invoice', credit_note: 'Credit note' };
 
-/** Invoices and credit notes: sort, filter, export; the number opens the rental, the PDF link the document. */
+/** Invoices and credit notes: sort and filter (the page's one CSV download has every row); the number opens the rental, the PDF link the document. */
 export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undefined; toolbar?: ReactNode }) {
   const columns = useMemo<ColDef<InvoiceSummary>[]>(() => {
     const money = (field: keyof InvoiceSummary & `${string}Minor`, headerName: string): ColDef<InvoiceSummary> => ({
       headerName,
       field,
       type: 'numericColumn',
-      minWidth: 120,
+      minWidth: 96,
+      flex: 1,
+      wrapHeaderText: true,
+      autoHeaderHeight: true,
       valueFormatter: (p: ValueFormatterParams<InvoiceSummary>) => (p.data ? formatMoney(p.value as number, p.data.currency) : ''),
     });
     return [
       {
         headerName: 'Number',
         field: 'number',
-        minWidth: 130,
+        minWidth: 140,
         cellClass: 'font-mono font-semibold',
         cellRenderer: (p: Cell) =>
           p.data ? (
@@ -35,7 +38,11 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
       {
         colId: 'kind',
         headerName: 'Kind',
-        minWidth: 200,
+        minWidth: 130,
+        // "Credit note to 2026-0003" wraps onto two lines rather than pushing the money off screen.
+        wrapText: true,
+        autoHeight: true,
+        cellStyle: { lineHeight: '1.35', paddingTop: '9px', paddingBottom: '9px' },
         valueGetter: (p) => (p.data ? kindWords[p.data.kind] : ''),
         cellRenderer: (p: Cell) =>
           p.data ? (
@@ -50,21 +57,32 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
             </span>
           ) : null,
       },
-      { headerName: 'Issued on', field: 'issuedOn', minWidth: 120, sort: 'desc', valueFormatter: (p) => formatCalendarDate(p.value as string) },
-      { headerName: 'Customer', field: 'customerCompany', minWidth: 170, flex: 2 },
+      { headerName: 'Issued on', field: 'issuedOn', minWidth: 124, sort: 'desc', valueFormatter: (p) => formatCalendarDate(p.value as string) },
+      {
+        headerName: 'Customer',
+        field: 'customerCompany',
+        minWidth: 140,
+        flex: 2,
+        wrapText: true,
+        autoHeight: true,
+        cellStyle: { lineHeight: '1.35', paddingTop: '9px', paddingBottom: '9px' },
+      },
       money('totalMinor', 'Total'),
-      money('depositCapturedMinor', 'From deposit'),
-      money('cardChargedMinor', 'Charged to card'),
-      money('balanceMinor', 'Balance'),
+      {
+        ...money('depositCapturedMinor', 'Paid at return'),
+        colId: 'paidAtReturn',
+        valueGetter: (p) => (p.data ? p.data.depositCapturedMinor + p.data.cardChargedMinor : 0),
+      },
       money('creditedMinor', 'Credited'),
       money('receivedMinor', 'Received'),
-      money('outstandingMinor', 'Outstanding'),
+      // Balance is what is still owed: after what was paid at return, credit notes and payments received.
+      money('outstandingMinor', 'Balance'),
       {
         colId: 'pdf',
         headerName: 'Document',
         type: actionsColumnType,
-        minWidth: 110,
-        maxWidth: 130,
+        minWidth: 96,
+        maxWidth: 110,
         cellRenderer: (p: Cell) =>
           p.data ? (
             <a
@@ -86,7 +104,6 @@ export function InvoicesGrid({ rows, toolbar }: { rows: InvoiceSummary[] | undef
       rows={rows}
       columns={columns}
       rowId={(r) => r.id}
-      exportFileName="nestkeeper-invoices.csv"
       emptyMessage="No invoices yet. An invoice is issued from its rental once the kit is back and the deposit is settled."
       toolbar={toolbar}
     />

@@ -12,8 +12,7 @@ export function monthsBetween(from: string, to: string): string[] {
   return months;
 }
 
-/** "Mar 25" on an axis, "March 2025" in a table header. */
-export const monthShort = (month: string) => format(first(month), 'MMM yy');
+/** "March 2025" in a heading. */
 export const monthLong = (month: string) => format(first(month), 'MMMM yyyy');
 
 /** The first and the last day of a month range, for reports that take dates. */

@@ -1,6 +1,6 @@
-import { currencyDigits, formatMoney } from '../../../lib/format';
+import { currencyDigits, formatMoney, useFirmFormat } from '../../../lib/format';
 import type { RevenueRow } from '../../../../shared/billing/views';
-import { monthLong, monthShort, monthsBetween } from './months';
+import { monthsBetween } from './months';
 
 const W = 760;
 const H = 260;
@@ -35,11 +35,37 @@ function Patterns() {
   );
 }
 
-/** A round step for about four grid lines up to `max`. */
-function tickStep(max: number): number {
-  const rough = max / 4;
+/** A round step for about four grid lines over `span`. */
+function tickStep(span: number): number {
+  const rough = span / 4;
   const pow = 10 ** Math.floor(Math.log10(rough));
   return [1, 2, 2.5, 5, 10].map((f) => f * pow).find((s) => s >= rough) ?? rough;
+}
+
+/**
+ * The value axis for stacked bars that may go below zero (a month whose credit notes outweigh its invoices): each month
+ * stacks its positive parts up from zero and its negative parts down from it, and the axis spans the lowest and highest
+ * stack on round steps, zero included.
+ */
+export function valueAxis(stacks: number[][]): { bottom: number; top: number; ticks: number[] } {
+  const highest = Math.max(0, ...stacks.map((parts) => parts.filter((v) => v > 0).reduce((a, b) => a + b, 0)));
+  const lowest = Math.min(0, ...stacks.map((parts) => parts.filter((v) => v < 0).reduce((a, b) => a + b, 0)));
+  const step = tickStep(Math.max(1, highest - lowest));
+  const top = step * Math.max(1, Math.ceil(highest / step));
+  const bottom = step * Math.floor(lowest / step);
+  return { bottom, top, ticks: Array.from({ length: Math.round((top - bottom) / step) + 1 }, (_, i) => bottom + i * step) };
+}
+
+/** Each part's span on the axis: positives stacked up from zero, negatives down from it, in the order given. */
+export function stackSpans(parts: number[]): { from: number; to: number }[] {
+  let up = 0;
+  let down = 0;
+  return parts.map((v) => {
+    const from = v >= 0 ? up : down;
+    if (v >= 0) up += v;
+    else down += v;
+    return { from, to: from + v };
+  });
 }
 
 interface Series {
@@ -65,17 +91,16 @@ function seriesOf(rows: RevenueRow[]): Series[] {
 export function RevenueChart({ rows, from, to, currency }: { rows: RevenueRow[]; from: string; to: string; currency: string }) {
   const months = monthsBetween(from, to);
   const series = seriesOf(rows);
+  const f = useFirmFormat();
   const monthTotal = (m: string) => series.reduce((sum, s) => sum + (s.byMonth.get(m) ?? 0), 0);
-  const step = tickStep(Math.max(1, ...months.map(monthTotal)));
-  const top = step * Math.ceil(Math.max(1, ...months.map(monthTotal)) / step);
-  const ticks = Array.from({ length: Math.round(top / step) + 1 }, (_, i) => i * step);
+  const { bottom, top, ticks } = valueAxis(months.map((m) => series.map((s) => s.byMonth.get(m) ?? 0)));
   const band = (W - L - R) / Math.max(1, months.length);
-  const y = (v: number) => T + (1 - v / top) * (H - T - B);
+  const y = (v: number) => T + ((top - v) / (top - bottom)) * (H - T - B);
   const money = (minor: number) => formatMoney(minor, currency);
-  const axisFormat = new Intl.NumberFormat(undefined, { style: 'currency', currency, maximumFractionDigits: 0 });
+  const axisFormat = new Intl.NumberFormat(f.locale, { style: 'currency', currency, maximumFractionDigits: 0 });
   const axisMoney = (minor: number) => axisFormat.format(minor / 10 ** currencyDigits(currency));
   const fillOf = (i: number) => fills[i % fills.length];
-  const summary = `Revenue per kit per month, ${monthLong(from)} to ${monthLong(to)}: ${months.map((m) => `${monthShort(m)} ${money(monthTotal(m))}`).join('; ')}.`;
+  const summary = `Revenue per kit per month, ${f.month(from)} to ${f.month(to)}: ${months.map((m) => `${f.month(m)} ${money(monthTotal(m))}`).join('; ')}.`;
 
   return (
     <figure className="flex flex-col gap-3">
@@ -90,38 +115,38 @@ export function RevenueChart({ rows, from, to, currency }: { rows: RevenueRow[];
           </g>
         ))}
         <line x1={L} x2={L} y1={T} y2={H - B} stroke="#a7afbd" />
-        <line x1={L} x2={W - R} y1={H - B} y2={H - B} stroke="#a7afbd" />
         {months.map((m, i) => {
           const x = L + i * band + band * 0.18;
-          let base = 0;
+          const spans = stackSpans(series.map((s) => s.byMonth.get(m) ?? 0));
           return (
             <g key={m}>
               {series.map((s, si) => {
                 const v = s.byMonth.get(m) ?? 0;
                 if (!v) return null;
-                const rect = (
+                const { from: a, to: b } = spans[si];
+                return (
                   <rect
                     key={s.key}
                     x={x}
                     width={band * 0.64}
-                    y={y(base + v)}
-                    height={y(base) - y(base + v)}
+                    y={y(Math.max(a, b))}
+                    height={Math.abs(y(a) - y(b))}
                     fill={fillOf(si)}
                     stroke="#1c2536"
                     strokeWidth={0.8}
                   >
-                    <title>{`${s.name}, ${monthLong(m)}: ${money(v)}`}</title>
+                    <title>{`${s.name}, ${f.month(m)}: ${money(v)}`}</title>
                   </rect>
                 );
-                base += v;
-                return rect;
               })}
               <text x={L + i * band + band / 2} y={H - B + 16} textAnchor="middle" fontSize={11} fill="#3a4660">
-                {monthShort(m)}
+                {f.month(m)}
               </text>
             </g>
           );
         })}
+        {/* The zero line over the bars: credits hang below it. */}
+        <line x1={L} x2={W - R} y1={y(0)} y2={y(0)} stroke="#1c2536" strokeWidth={1.2} />
       </svg>
       <figcaption>
         <ul className="flex flex-wrap gap-x-5 gap-y-1 text-sm text-ink-800" aria-label="Legend">
@@ -135,7 +160,7 @@ export function RevenueChart({ rows, from, to, currency }: { rows: RevenueRow[];
           ))}
         </ul>
       </figcaption>
-      <RevenueTable series={series} months={months} money={money} monthTotal={monthTotal} />
+      <RevenueTable series={series} months={months} money={money} monthTotal={monthTotal} month={f.month} />
     </figure>
   );
 }
@@ -145,11 +170,13 @@ function RevenueTable({
   months,
   money,
   monthTotal,
+  month,
 }: {
   series: Series[];
   months: string[];
   money: (minor: number) => string;
   monthTotal: (m: string) => number;
+  month: (isoMonth: string) => string;
 }) {
   const cell = 'px-2 py-1 text-right tabular-nums whitespace-nowrap';
   return (
@@ -163,9 +190,7 @@ function RevenueTable({
             </th>
             {months.map((m) => (
               <th key={m} scope="col" className={cell}>
-                <abbr title={monthLong(m)} className="no-underline">
-                  {monthShort(m)}
-                </abbr>
+                {month(m)}
               </th>
             ))}
             <th scope="col" className={cell}>

@@ -3,15 +3,14 @@ import { useState, type ReactNode } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
-import { Notice } from '../../../components/notice';
 import { FactList } from '../../../components/panel';
-import { applyServerErrors } from '../../../lib/form-errors';
 import { currencyDigits, formatMoney } from '../../../lib/format';
 import { amountText, parseAmount } from '../../../lib/money';
 import { useCaptureDeposit } from '../api/capture-deposit';
 import { useReleaseDeposit } from '../api/release-deposit';
+import { captureSplit } from '../../../../shared/billing/settlement';
 import type { DepositAuthorizationView, RentalView } from '../../../../shared/billing/views';
-import { paymentProblem } from './payment-problem';
+import { MoneyConfirmation } from './money-confirmation';
 
 /** What the hold is there to cover, in words, as the reason the clerk starts from. */
 function suggestedReason(rental: RentalView): string {
@@ -27,7 +26,7 @@ function suggestedReason(rental: RentalView): string {
 export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; hold: DepositAuthorizationView; charges: ReactNode }) {
   const capture = useCaptureDeposit();
   const release = useReleaseDeposit();
-  const [problem, setProblem] = useState<string>();
+  const [asking, setAsking] = useState<{ amountMinor: number; reason: string } | 'release' | null>(null);
   const { currency, settlement } = rental;
   const digits = currencyDigits(currency);
   const money = (minor: number) => formatMoney(minor, currency);
@@ -40,15 +39,7 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
     reason: Yup.string().trim().required('Say what the amount is for; the renter sees it.').max(500, 'Keep the reason to 500 characters.'),
   });
 
-  async function releaseAll() {
-    setProblem(undefined);
-    try {
-      await release.mutateAsync(rental.id);
-    } catch (error) {
-      setProblem(paymentProblem(error));
-    }
-  }
-
+  const mailTo = `the customer is told by mail at ${rental.customer.billingEmail}`;
   return (
     <section aria-labelledby="settle-heading" className="flex flex-col gap-3 rounded-md border border-brass-deep/40 bg-brass-wash/40 p-3">
       <h3 id="settle-heading" className="font-semibold text-ink-900">
@@ -66,25 +57,13 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
         initialValues={{ amount: amountText(suggested, digits), reason: suggestedReason(rental) }}
         enableReinitialize
         validationSchema={schema}
-        onSubmit={async (values, helpers) => {
-          setProblem(undefined);
-          try {
-            await capture.mutateAsync({ rentalId: rental.id, amountMinor: parseAmount(values.amount, digits) ?? 0, reason: values.reason.trim() });
-          } catch (error) {
-            const unplaced = applyServerErrors(error, helpers, { fields: ['amount', 'reason'], aliases: { amountMinor: 'amount' } });
-            setProblem(unplaced === undefined ? undefined : paymentProblem(error));
-          }
-        }}
+        // The form only asks; the confirmation says what will happen and acts.
+        onSubmit={(values) => setAsking({ amountMinor: parseAmount(values.amount, digits) ?? 0, reason: values.reason.trim() })}
       >
-        {({ isSubmitting, values }) => {
+        {({ values }) => {
           const amount = parseAmount(values.amount, digits);
           return (
             <Form noValidate className="flex flex-col gap-3" aria-label="Settle the deposit">
-              {problem ? (
-                <Notice tone="error" title="The deposit is not settled yet">
-                  {problem}
-                </Notice>
-              ) : null}
               <div className="grid gap-3 sm:grid-cols-2">
                 <Field
                   name="amount"
@@ -96,10 +75,10 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
                 <Field name="reason" label="Reason" autoComplete="off" />
               </div>
               <div className="flex flex-wrap gap-2">
-                <Button type="submit" variant="primary" busy={isSubmitting} disabled={release.isPending}>
+                <Button type="submit" variant="primary">
                   Capture and release the rest
                 </Button>
-                <Button variant="secondary" busy={release.isPending} disabled={isSubmitting} onClick={() => void releaseAll()}>
+                <Button variant="secondary" onClick={() => setAsking('release')}>
                   Release the whole authorization
                 </Button>
               </div>
@@ -107,12 +86,44 @@ export function SettleDeposit({ rental, hold, charges }: { rental: RentalView; h
           );
         }}
       </Formik>
+      {asking === 'release' ? (
+        <MoneyConfirmation
+          open
+          onClose={() => setAsking(null)}
+          title="Release the card authorization"
+          what={`${money(hold.amountMinor)} released, nothing captured`}
+          mailTo={mailTo}
+          confirmLabel={`Release ${money(hold.amountMinor)}`}
+          onConfirm={() => release.mutateAsync(rental.id)}
+        />
+      ) : asking ? (
+        <MoneyConfirmation
+          open
+          onClose={() => setAsking(null)}
+          title="Capture from the card authorization"
+          what={captureWords(asking.amountMinor, hold.amountMinor, money)}
+          mailTo={mailTo}
+          confirmLabel={`Capture ${money(asking.amountMinor)}`}
+          onConfirm={() => capture.mutateAsync({ rentalId: rental.id, ...asking })}
+        />
+      ) : null}
     </section>
   );
 }
 
+/** "€214.20 captured, €285.80 released" (and what goes on the saved card above the authorization): the split the server makes. */
+function captureWords(amountMinor: number, authorizedMinor: number, money: (minor: number) => string): string {
+  const split = captureSplit(amountMinor, authorizedMinor);
+  return [
+    `${money(split.fromAuthorizationMinor)} captured`,
+    split.chargedMinor ? `${money(split.chargedMinor)} charged to the saved card` : '',
+    `${money(split.releasedMinor)} released`,
+  ]
+    .filter(Boolean)
+    .join(', ');
+}
+
 function captureHint(amount: number | null, heldMinor: number, money: (minor: number) => string): string | undefined {
   if (amount === null || amount === 0) return undefined;
-  if (amount > heldMinor) return `The authorization covers ${money(heldMinor)}; the other ${money(amount - heldMinor)} is charged to the saved card.`;
-  return `${money(amount)} is captured; the other ${money(heldMinor - amount)} is released to the renter's card.`;
+  return `${captureWords(amount, heldMinor, money)}.`;
 }

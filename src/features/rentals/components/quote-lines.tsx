@@ -25,7 +25,7 @@ export function QuoteLines({ quote }: { quote: Quote }) {
         ]}
       />
       <p className="text-sm text-ink-800">
-        <span className="font-semibold">Deposit to hold on the renter&rsquo;s card: </span>
+        <span className="font-semibold">Deposit, authorized on the renter&rsquo;s card: </span>
         {formatMoney(quote.depositMinor, quote.currency)}
       </p>
     </div>

@@ -10,7 +10,7 @@ import { FactList, Panel } from '../../../components/panel';
 import { StatusChip } from '../../../components/status-chip';
 import { assetTypeTitles, type AssetType } from '../../../lib/assets';
 import { isApiError } from '../../../lib/api-client';
-import { formatCalendarDate, formatDateTime, formatMoney } from '../../../lib/format';
+import { formatCalendarDate, formatDateTime, formatMoney, useFirmFormat } from '../../../lib/format';
 import { useAcceptAgreement } from '../api/accept-agreement';
 import { renterDocumentUrl } from '../api/get-renter-rental';
 import { QuoteLines } from './quote-lines';
@@ -165,6 +165,7 @@ function Deposit({ view, token }: { view: RenterRentalView; token: string }) {
 
 /** The renter's own page: the rental, its price and terms, the agreement to accept, the items' calibration, the deposit. */
 export function RenterPage({ view, token }: { view: RenterRentalView; token: string }) {
+  const { dateRange } = useFirmFormat();
   return (
     <div className="flex flex-col gap-4">
       <Panel title="Your rental">
@@ -172,7 +173,7 @@ export function RenterPage({ view, token }: { view: RenterRentalView; token: str
           items={[
             { term: 'Rental', value: view.number, mono: true },
             { term: 'For', value: `${view.customer.company}${view.customer.billingContact ? `, ${view.customer.billingContact}` : ''}` },
-            { term: 'Dates', value: `${formatCalendarDate(view.startsOn)} – ${formatCalendarDate(view.endsOn)} (${view.quote.days} days, both included)` },
+            { term: 'Dates', value: `${dateRange(view.startsOn, view.endsOn)} (${view.quote.days} days, both included)` },
             { term: 'Deposit', value: formatMoney(view.depositMinor, view.currency) },
           ]}
         />

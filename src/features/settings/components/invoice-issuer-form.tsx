@@ -6,12 +6,19 @@ import { Notice } from '../../../components/notice';
 import type { InvoiceIssuer, OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
 
-const fields = ['address', 'taxNumber', 'paymentTerms'] as const;
+const fields = ['address', 'taxNumber', 'paymentTerms', 'paymentDays', 'bankDetails'] as const;
+type Values = Omit<InvoiceIssuer, 'paymentDays'> & { paymentDays: string };
 
 const schema = Yup.object({
   address: Yup.string().trim().required('Invoices must say where the firm is.').max(400, 'Keep it under 400 characters.'),
   taxNumber: Yup.string().trim().max(40, 'Keep it under 40 characters.'),
   paymentTerms: Yup.string().trim().max(600, 'Keep it under 600 characters.'),
+  paymentDays: Yup.string()
+    .trim()
+    .required('Give the days allowed; 0 means due on receipt.')
+    .matches(/^\d{1,3}$/, 'Enter whole days from 0 to 365.')
+    .test('range', 'Enter whole days from 0 to 365.', (v) => Number(v) <= 365),
+  bankDetails: Yup.string().trim().max(600, 'Keep it under 600 characters.'),
 });
 
 /** The firm as its invoices and credit notes name it (owner only); each invoice keeps the details it was issued with. */
@@ -19,15 +26,27 @@ export function InvoiceIssuerForm({ settings }: { settings: OrganizationSettings
   const { save, saved, problem } = useSettingsSave();
   if (!settings.issuer) return <Notice tone="info">This server does not offer invoice details yet.</Notice>;
   return (
-    <Formik<InvoiceIssuer>
-      initialValues={settings.issuer}
+    <Formik<Values>
+      initialValues={{ ...settings.issuer, paymentDays: String(settings.issuer.paymentDays ?? 30), bankDetails: settings.issuer.bankDetails ?? '' }}
       validationSchema={schema}
       enableReinitialize
       onSubmit={(values, helpers) =>
-        save({ issuer: { ...values, address: values.address.trim(), taxNumber: values.taxNumber.trim(), paymentTerms: values.paymentTerms.trim() } }, helpers, {
-          fields,
-          aliases: Object.fromEntries(fields.map((f) => [`issuer.${f}`, f])),
-        })
+        save(
+          {
+            issuer: {
+              address: values.address.trim(),
+              taxNumber: values.taxNumber.trim(),
+              paymentTerms: values.paymentTerms.trim(),
+              paymentDays: Number(values.paymentDays.trim()),
+              bankDetails: values.bankDetails.trim(),
+            },
+          },
+          helpers,
+          {
+            fields,
+            aliases: Object.fromEntries(fields.map((f) => [`issuer.${f}`, f])),
+          },
+        )
       }
     >
       {({ isSubmitting, dirty }) => (
@@ -44,7 +63,21 @@ export function InvoiceIssuerForm({ settings }: { settings: OrganizationSettings
             name="paymentTerms"
             label="Payment terms"
             autoComplete="off"
-            hint="How and by when to pay the balance, e.g. the days allowed and your bank details."
+            hint="Any further words on paying, printed under “How to pay” (the due date and bank details are printed from the fields below)."
+          />
+          <Field
+            name="paymentDays"
+            label="Days to pay"
+            inputMode="numeric"
+            autoComplete="off"
+            className="sm:max-w-xs"
+            hint="Each invoice's due date is its issue date plus these days; 0 means due on receipt."
+          />
+          <Field
+            name="bankDetails"
+            label="Bank details"
+            autoComplete="off"
+            hint="Account holder, IBAN and BIC (or your country's equivalent), printed on every invoice."
           />
           <div>
             <Button type="submit" variant="primary" busy={isSubmitting} disabled={!dirty}>

@@ -3,8 +3,8 @@ import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
-import { currencyDigits, formatMoney } from '../../../lib/format';
-import { amountText, parseAmount } from '../../../lib/money';
+import { currencyDigits, formatMoney, useFirmFormat } from '../../../lib/format';
+import { parseMoneyText } from '../../../lib/money';
 import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
 
@@ -18,12 +18,15 @@ const percent = (v: string | undefined) => (v && /^\d{1,3}([.,]\d{1,2})?$/.test(
 export function RentalTermsForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
   const { currency } = settings;
+  const { locale } = useFirmFormat();
   const digits = currencyDigits(currency);
+  // Money settings are shown and typed as money: "€25,000.00".
+  const parseAmount = (text: string, places: number) => parseMoneyText(text, places, locale);
   const policy = settings.depositPolicy;
   if (!policy || settings.taxRateBasisPoints === undefined) return <Notice tone="info">This server does not offer rental terms yet.</Notice>;
   const money = Yup.string().test(
     'amount',
-    `Enter an amount in ${currency}, e.g. ${amountText(50_000, digits)}.`,
+    `Enter an amount in ${currency}, e.g. ${formatMoney(50_000, currency)}.`,
     (v) => parseAmount(v ?? '', digits) !== null,
   );
   const schema = Yup.object({
@@ -40,8 +43,8 @@ export function RentalTermsForm({ settings }: { settings: OrganizationSettingsVi
       initialValues={{
         taxPercent: String(settings.taxRateBasisPoints / 100),
         depositPercent: String(policy.percent),
-        depositMin: amountText(policy.minMinor, digits),
-        depositMax: amountText(policy.maxMinor, digits),
+        depositMin: formatMoney(policy.minMinor, currency),
+        depositMax: formatMoney(policy.maxMinor, currency),
       }}
       validationSchema={schema}
       enableReinitialize
@@ -81,12 +84,12 @@ export function RentalTermsForm({ settings }: { settings: OrganizationSettingsVi
           <Field name="taxPercent" label="Tax on rentals (%)" inputMode="decimal" autoComplete="off" className="sm:max-w-xs" />
           <div className="grid gap-4 sm:grid-cols-3">
             <Field name="depositPercent" label="Deposit (% of replacement value)" inputMode="decimal" autoComplete="off" />
-            <Field name="depositMin" label={`Deposit at least (${currency})`} inputMode="decimal" autoComplete="off" />
-            <Field name="depositMax" label={`Deposit at most (${currency})`} inputMode="decimal" autoComplete="off" />
+            <Field name="depositMin" label="Deposit at least" inputMode="decimal" autoComplete="off" />
+            <Field name="depositMax" label="Deposit at most" inputMode="decimal" autoComplete="off" />
           </div>
           <p className="text-sm text-ink-700">
-            The deposit is held on the renter&rsquo;s card at checkout: the share of the rented items&rsquo; replacement value, but never less than the minimum
-            or more than the maximum (now {formatMoney(policy.minMinor, currency)} to {formatMoney(policy.maxMinor, currency)}).
+            The deposit is authorized on the renter&rsquo;s card at checkout: the share of the rented items&rsquo; replacement value, but never less than the
+            minimum or more than the maximum (now {formatMoney(policy.minMinor, currency)} to {formatMoney(policy.maxMinor, currency)}).
           </p>
           <div>
             <Button type="submit" variant="primary" busy={isSubmitting} disabled={!dirty}>

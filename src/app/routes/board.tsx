@@ -3,6 +3,7 @@ import { useCallback, useId, useMemo } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { AssetTypeSelect } from '../../components/asset-type-select';
 import { Button, buttonClasses } from '../../components/button';
+import { DateInput } from '../../components/date-field';
 import { ClockIcon, PlusIcon } from '../../components/icons';
 import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
@@ -107,13 +108,7 @@ export default function BoardRoute() {
           <label htmlFor={jumpId} className="text-sm font-semibold text-ink-800">
             Jump to week
           </label>
-          <input
-            id={jumpId}
-            type="date"
-            value={from}
-            onChange={(e) => (isDate(e.target.value) ? setParam({ from: mondayOf(e.target.value) }) : undefined)}
-            className="min-h-10 rounded-md border border-paper-line bg-card px-2"
-          />
+          <DateInput id={jumpId} value={from} onValueChange={(value) => (isDate(value) ? setParam({ from: mondayOf(value) }) : undefined)} />
         </div>
         <div className="flex flex-col gap-1">
           <label htmlFor={weeksId} className="text-sm font-semibold text-ink-800">

@@ -3,6 +3,7 @@ import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import * as Yup from 'yup';
 import { Button, buttonClasses } from '../../../components/button';
+import { DateField } from '../../../components/date-field';
 import { Field } from '../../../components/field';
 import { PrintIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
@@ -197,7 +198,7 @@ export function HandoverForm({
                   item is free and in calibration for those days.
                 </p>
                 <Field name="lateNote" label="Why it goes late" autoComplete="off" />
-                <Field name="lateEndsOn" label="New last day" type="date" min={today} />
+                <DateField name="lateEndsOn" label="New last day" min={today} />
               </section>
             ) : null}
 

@@ -1,11 +1,13 @@
 import { useId, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/button';
+import { DateInput } from '../../../components/date-field';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
 import { formatCalendarDate } from '../../../lib/format';
 import { usePlanLabTrip } from '../api/plan-lab-trip';
 import type { LabTripView, LabWindowsView } from '../../../../shared/calibration/views';
+import { isCalendarDate } from '../../../../shared/dates/calendar-date';
 import { dateRange, days } from './calibration-words';
 
 const purposeWords: Record<string, string> = { job: 'Site job', rental: 'Rental', lab: 'Lab trip', internal: 'In-house use' };
@@ -36,6 +38,10 @@ export function LabWindowFinder({ windows, onPlanned, canPlan }: { windows: LabW
   const providerId = useId();
   const [planning, setPlanning] = useState<string | null>(null);
   const [own, setOwn] = useState({ sentOn: '', expectedBackOn: '' });
+  const sentOnId = useId();
+  const backOnId = useId();
+  const ownSentOk = own.sentOn === '' || isCalendarDate(own.sentOn);
+  const ownBackOk = own.expectedBackOn === '' || (isCalendarDate(own.expectedBackOn) && (!isCalendarDate(own.sentOn) || own.expectedBackOn >= own.sentOn));
   const assetIds = windows.assets.map((a) => a.id);
   const tags = windows.assets.map((a) => a.assetTag).join(', ');
   const several = windows.assets.length > 1;
@@ -156,27 +162,29 @@ export function LabWindowFinder({ windows, onPlanned, canPlan }: { windows: LabW
             }}
           >
             <h3 className="w-full font-semibold">Or pick your own dates</h3>
-            <label className="flex flex-col gap-1 text-sm font-semibold text-ink-800">
-              Goes to the lab on
-              <input
-                type="date"
-                required
-                value={own.sentOn}
-                onChange={(e) => setOwn({ ...own, sentOn: e.target.value })}
-                className="min-h-10 rounded-md border border-paper-line bg-card px-2 text-base font-normal"
-              />
-            </label>
-            <label className="flex flex-col gap-1 text-sm font-semibold text-ink-800">
-              Expected back (optional)
-              <input
-                type="date"
-                min={own.sentOn || undefined}
+            <div className="flex flex-col gap-1">
+              <label htmlFor={sentOnId} className="text-sm font-semibold text-ink-800">
+                Goes to the lab on
+              </label>
+              <DateInput id={sentOnId} required value={own.sentOn} onValueChange={(sentOn) => setOwn({ ...own, sentOn })} invalid={!ownSentOk} />
+            </div>
+            <div className="flex flex-col gap-1">
+              <label htmlFor={backOnId} className="text-sm font-semibold text-ink-800">
+                Expected back (optional)
+              </label>
+              <DateInput
+                id={backOnId}
+                min={ownSentOk ? own.sentOn : undefined}
                 value={own.expectedBackOn}
-                onChange={(e) => setOwn({ ...own, expectedBackOn: e.target.value })}
-                className="min-h-10 rounded-md border border-paper-line bg-card px-2 text-base font-normal"
+                onValueChange={(expectedBackOn) => setOwn({ ...own, expectedBackOn })}
+                invalid={!ownBackOk}
               />
-            </label>
-            <Button type="submit" disabled={!provider.trim() || !own.sentOn || plan.isPending} busy={plan.isPending && planning === 'own'}>
+            </div>
+            <Button
+              type="submit"
+              disabled={!provider.trim() || !ownSentOk || !own.sentOn || !ownBackOk || plan.isPending}
+              busy={plan.isPending && planning === 'own'}
+            >
               Plan for these dates
             </Button>
           </form>

@@ -1,3 +1,4 @@
+import { formatDateRange } from '../../lib/format';
 import { format, parseISO, startOfWeek } from 'date-fns';
 import { useCallback, useId, useMemo } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
@@ -13,7 +14,6 @@ import { useBookings } from '../../features/bookings/api/get-bookings';
 import { BookingBoard, type BoardTarget } from '../../features/bookings/components/booking-board';
 import { bookFormHref } from '../../features/bookings/components/book-href';
 import { BookingsList } from '../../features/bookings/components/bookings-list';
-import { dayRange } from '../../features/bookings/components/booking-words';
 import { CalendarFeed } from '../../features/bookings/components/calendar-feed';
 import { useAssets } from '../../features/fleet/api/get-assets';
 import { assetTypes, type AssetStatus, type AssetType } from '../../lib/assets';
@@ -139,7 +139,7 @@ export default function BoardRoute() {
       </div>
 
       <p className="mb-2 text-sm font-semibold text-ink-800" aria-live="polite">
-        {dayRange(from, to)}
+        {formatDateRange(from, to)}
         {windowBookings.data ? ` · ${shownBookings?.length ?? 0} ${shownBookings?.length === 1 ? 'booking' : 'bookings'}` : ''}
       </p>
 

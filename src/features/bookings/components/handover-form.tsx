@@ -1,3 +1,4 @@
+import { formatCalendarDate } from '../../../lib/format';
 import { Form, Formik, useField, useFormikContext, type FormikHelpers } from 'formik';
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
@@ -14,7 +15,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useCheckOutBooking } from '../api/check-out-booking';
 import { useReturnBooking, type ReturnPhoto } from '../api/return-booking';
 import type { BookingView, ItemCondition, ReturnView } from '../../../../shared/bookings/views';
-import { conditionWords, shortDay } from './booking-words';
+import { conditionWords } from './booking-words';
 
 export type HandoverMode = 'checkout' | 'return';
 
@@ -194,8 +195,8 @@ export function HandoverForm({
                   Not collected: check out late
                 </h2>
                 <p className="text-sm text-ink-700">
-                  This reservation&rsquo;s days ended on {shortDay(booking.endsOn, true)} without checkout. It goes out from today to a new last day, if every
-                  item is free and in calibration for those days.
+                  This reservation&rsquo;s days ended on {formatCalendarDate(booking.endsOn)} without checkout. It goes out from today to a new last day, if
+                  every item is free and in calibration for those days.
                 </p>
                 <Field name="lateNote" label="Why it goes late" autoComplete="off" />
                 <DateField name="lateEndsOn" label="New last day" min={today} />

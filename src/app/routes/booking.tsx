@@ -19,7 +19,7 @@ import { can } from '../../lib/roles';
 
 export default function BookingRoute() {
   const { id = '' } = useParams();
-  const { user, organization } = useSession();
+  const { user } = useSession();
   const booking = useBooking(id);
   const job = useSiteJob(booking.data?.jobId);
 

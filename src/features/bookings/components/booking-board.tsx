@@ -113,12 +113,14 @@ function layoutBars(
   return { bars, lanes: Math.max(1, laneEnds.length) };
 }
 
+/** The bar's accessible name starts with exactly what the bar shows (its title, then "Late"), so a person can say what they see (WCAG 2.5.3). */
 function barName(bar: BarModel): string {
   const { booking } = bar;
   const due = bar.dueTags.length ? `, falls due during this booking (${bar.dueTags.map((d) => `${d.tag} due ${formatCalendarDate(d.dueOn)}`).join(', ')})` : '';
-  const late = bar.late ? `, late: was due back ${formatCalendarDate(booking.endsOn)}` : '';
+  const late = bar.late ? `, was due back ${formatCalendarDate(booking.endsOn)}` : '';
   const early = bar.returnedEarlyOn ? `, back early on ${formatCalendarDate(bar.returnedEarlyOn)}` : '';
-  return `${bookingTitle(booking)}, ${formatDateRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${early}${late}${due}`;
+  const shown = `${bookingTitle(booking)}${bar.late ? ' Late' : ''}`;
+  return `${shown}, ${formatDateRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${early}${late}${due}`;
 }
 
 interface Pick {
@@ -475,7 +477,10 @@ const BoardRow = memo(function BoardRow({
           </>
         ) : (
           <div className={`flex min-w-0 flex-1 items-center gap-1.5 ${row.inKit ? 'pl-4' : ''}`}>
-            <Link to={`/fleet/${row.asset.id}`} className="shrink-0 font-mono text-sm font-semibold text-ink-900 underline-offset-2 hover:underline">
+            <Link
+              to={`/fleet/${row.asset.id}`}
+              className="shrink-0 font-mono text-sm font-semibold text-ink-900 underline-offset-2 hover:underline whitespace-nowrap"
+            >
               {row.asset.assetTag}
             </Link>
             <span className="min-w-0 truncate text-xs text-ink-700">{assetTypeTitles[row.asset.type]}</span>
@@ -568,6 +573,7 @@ function Bar({ bar, from, days, dayPx }: { bar: BarModel; from: string; days: nu
         {startsBefore ? <span aria-hidden="true">◂</span> : null}
         {bar.dueTags.length ? <AlertIcon size={12} className="shrink-0" /> : null}
         <span className="truncate">{bookingTitle(booking)}</span>
+        {bar.late ? ' ' : null}
         {bar.late ? <span className="ml-1 shrink-0 rounded-sm bg-bad px-1 text-[10px] tracking-wide text-card uppercase">Late</span> : null}
         {endsAfter ? (
           <span aria-hidden="true" className="ml-auto">

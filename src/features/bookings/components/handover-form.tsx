@@ -332,7 +332,7 @@ function ChecklistRow({ index, assetTag, type }: { index: number; assetTag: stri
   return (
     <li className="grid items-center gap-2 py-2 sm:grid-cols-[minmax(10rem,1fr)_auto_10rem_minmax(10rem,1.5fr)]">
       <span className="min-w-0">
-        <span className="font-mono font-semibold text-ink-900">{assetTag}</span>
+        <span className="font-mono font-semibold text-ink-900 whitespace-nowrap">{assetTag}</span>
         <span className="ml-2 text-sm text-ink-700">{type}</span>
       </span>
       <label htmlFor={`${base}-present`} className="flex min-h-10 items-center gap-2">

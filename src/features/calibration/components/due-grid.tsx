@@ -75,7 +75,7 @@ export function DueGrid({
         valueGetter: (p) => p.data?.assetTag ?? '',
         cellRenderer: (p: ICellRendererParams<DueRow>) =>
           p.data ? (
-            <Link to={`/fleet/${p.data.id}`} className="font-mono font-semibold text-ink-900 underline decoration-brass-deep">
+            <Link to={`/fleet/${p.data.id}`} className="font-mono font-semibold text-ink-900 underline decoration-brass-deep whitespace-nowrap">
               {p.data.assetTag}
             </Link>
           ) : null,

@@ -31,7 +31,7 @@ function ItemLine({ item }: { item: AssetView }) {
   return (
     <li>
       <Link to={`/fleet/${item.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-1 px-1 py-1.5 hover:bg-brass-wash">
-        <span className="font-mono font-semibold text-ink-900">{item.assetTag}</span>
+        <span className="font-mono font-semibold text-ink-900 whitespace-nowrap">{item.assetTag}</span>
         <span className="text-sm text-ink-700">{assetTypeTitles[item.type]}</span>
         {item.rfidTag ? <span className="font-mono text-sm text-ink-700">RFID {item.rfidTag}</span> : null}
         <span className="ml-auto flex flex-wrap gap-1">
@@ -92,7 +92,7 @@ export function FieldKitPanels({ stored }: { stored: StoredCopy }) {
                 to={`/checks/new?assetId=${tip.id}&kind=tip_validation`}
                 className="flex min-h-11 flex-wrap items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash"
               >
-                <span className="font-mono font-semibold">{tip.assetTag}</span>
+                <span className="font-mono font-semibold whitespace-nowrap">{tip.assetTag}</span>
                 <span className="text-sm">{position}</span>
                 <span className="ml-auto">{last ? <StatusChip tone="bad" label="Failed last time" /> : <StatusChip tone="warn" label="Not validated" />}</span>
               </Link>

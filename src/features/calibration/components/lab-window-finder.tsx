@@ -4,18 +4,18 @@ import { Button } from '../../../components/button';
 import { DateInput } from '../../../components/date-field';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
-import { formatCalendarDate } from '../../../lib/format';
+import { formatCalendarDate, formatDateRange } from '../../../lib/format';
 import { usePlanLabTrip } from '../api/plan-lab-trip';
 import type { LabTripView, LabWindowsView } from '../../../../shared/calibration/views';
 import { isCalendarDate } from '../../../../shared/dates/calendar-date';
-import { dateRange, days } from './calibration-words';
+import { days } from './calibration-words';
 
 const purposeWords: Record<string, string> = { job: 'Site job', rental: 'Rental', lab: 'Lab trip', internal: 'In-house use' };
 
 /** "Free 12 Jan – 2 Feb (22 days) — back by 25 Jan", or open-ended when no booking follows. */
 export function gapText(gap: LabWindowsView['gaps'][number]): string {
   const free = gap.endsOn
-    ? `Free ${dateRange(gap.startsOn, gap.endsOn)} (${days(gap.freeDays ?? 0)})`
+    ? `Free ${formatDateRange(gap.startsOn, gap.endsOn)} (${days(gap.freeDays ?? 0)})`
     : `Free from ${formatCalendarDate(gap.startsOn)} on, nothing booked after`;
   return `${free} — back by ${formatCalendarDate(gap.returnBy)}`;
 }
@@ -66,7 +66,7 @@ export function LabWindowFinder({ windows, onPlanned, canPlan }: { windows: LabW
                   {b.jobReference ?? purposeWords[b.purpose] ?? 'Booking'}
                 </Link>
                 <span className="text-sm text-ink-700">
-                  {purposeWords[b.purpose] ?? b.purpose} · {dateRange(b.startsOn, b.endsOn)}
+                  {purposeWords[b.purpose] ?? b.purpose} · {formatDateRange(b.startsOn, b.endsOn)}
                 </span>
               </li>
             ))}

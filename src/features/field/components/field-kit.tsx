@@ -4,7 +4,7 @@ import { CountedSection } from '../../../components/counted-section';
 import { StatusChip } from '../../../components/status-chip';
 import { assetTypeTitles } from '../../../lib/assets';
 import type { StoredCopy } from '../../../lib/field/field-store';
-import { formatCalendarDate, formatDateTime } from '../../../lib/format';
+import { formatCalendarDate, formatDateTime, formatUm } from '../../../lib/format';
 import type { AssetView } from '../../../../shared/assets/views';
 import type { BookingView } from '../../../../shared/bookings/views';
 import type { FieldCopyView } from '../../../../shared/field/views';
@@ -123,7 +123,7 @@ export function FieldTipValidations({ copy, tip }: { copy: FieldCopyView; tip: A
                   <StatusChip tone={last.decision === 'pass' ? 'ok' : 'bad'} label={last.decision === 'pass' ? 'Passed' : 'Failed'} />
                   <span className="text-sm text-ink-700">
                     {formatDateTime(last.performedAt)}
-                    {last.maxDeviationUm !== null ? ` · ${last.maxDeviationUm.toFixed(1)} µm of ${last.toleranceUm.toFixed(1)} µm` : ''}
+                    {last.maxDeviationUm !== null ? ` · ${formatUm(last.maxDeviationUm)} of ${formatUm(last.toleranceUm)}` : ''}
                   </span>
                 </>
               ) : (

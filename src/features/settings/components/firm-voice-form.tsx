@@ -1,5 +1,5 @@
 import { Form, Formik, useFormikContext } from 'formik';
-import { useId, useMemo } from 'react';
+import { useId, useMemo, useState } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field, SelectField } from '../../../components/field';
@@ -39,9 +39,17 @@ function VoicePreview({ currency, savedZone }: { currency: string; savedZone: st
   );
 }
 
+/** A new voice redraws every screen (the session's format is keyed on it), this form too: its "saved" survives that. */
+let savedBeforeRedraw = false;
+
 /** How the firm writes dates, numbers and money, and the zone its days and times are worked out in (owner only). */
 export function FirmVoiceForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
+  const [redrawnAfterSave] = useState(() => {
+    const was = savedBeforeRedraw;
+    savedBeforeRedraw = false;
+    return was;
+  });
   const zonesId = useId();
   const zones = useMemo(() => timeZoneNames(), []);
   return (
@@ -49,17 +57,20 @@ export function FirmVoiceForm({ settings }: { settings: OrganizationSettingsView
       initialValues={{ locale: settings.locale, timeZone: settings.timeZone }}
       validationSchema={schema}
       enableReinitialize
-      onSubmit={(values, helpers) =>
-        save({ locale: values.locale, timeZone: values.timeZone.trim() }, helpers, {
+      onSubmit={async (values, helpers) => {
+        // The redraw may come before or after the save settles; a saved change of voice always brings one.
+        savedBeforeRedraw = true;
+        const ok = await save({ locale: values.locale, timeZone: values.timeZone.trim() }, helpers, {
           fields: ['locale', 'timeZone'],
           labels: { locale: 'The locale', timeZone: 'The time zone' },
-        })
-      }
+        });
+        if (!ok) savedBeforeRedraw = false;
+      }}
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Locale and time zone" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
           <ReportUnsaved section="Locale and time zone" />
-          {saved ? <Notice tone="success">Saved. Screens, e-mails and PDFs now write dates, times and money this way.</Notice> : null}
+          {saved || redrawnAfterSave ? <Notice tone="success">Saved. Screens, e-mails and PDFs now write dates, times and money this way.</Notice> : null}
           {problem ? (
             <Notice tone="error" title="Not saved">
               {problem}

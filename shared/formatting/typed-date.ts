@@ -84,10 +84,3 @@ export function parseTypedDate(typed: string, locale: string): string | null {
   }
   return null;
 }
-
-/** The locale's numeric style, to show as an example of what may be typed: "dd/MM/yyyy", "MM/dd/yyyy", "dd.MM.yyyy". */
-export const numericDatePattern = (locale: string) => dateLocaleOf(locale).formatLong?.date({ width: 'short' }) ?? 'yyyy-MM-dd';
-
-/** An ISO calendar date in the locale's numeric style ("03/12/2026"), as a fallback a person can edit. */
-export const numericDate = (isoDate: string, locale: string) =>
-  isCalendarDate(isoDate) ? format(parse(isoDate, 'yyyy-MM-dd', REFERENCE), 'P', { locale: dateLocaleOf(locale) }) : isoDate;

@@ -1,6 +1,6 @@
 import { addYears, format, parse } from 'date-fns';
 import { useField } from 'formik';
-import { useEffect, useId, useRef, useState, type InputHTMLAttributes, type ReactNode } from 'react';
+import { useEffect, useId, useRef, useState, type CSSProperties, type InputHTMLAttributes, type ReactNode } from 'react';
 import { DayPicker, type Matcher } from 'react-day-picker';
 import 'react-day-picker/style.css';
 import { todayIn } from '../../shared/calibration/due-date';
@@ -13,6 +13,17 @@ import { CalendarIcon } from './icons';
 /** A calendar date as the day picker's local-midnight Date, and back. */
 const asLocalDay = (isoDate: string) => parse(isoDate, 'yyyy-MM-dd', new Date(2000, 0, 1));
 const asIsoDate = (day: Date) => format(day, 'yyyy-MM-dd');
+
+/** The calendar in Nestkeeper's brass and ink; days large enough to tap. */
+const calendarLook = {
+  '--rdp-accent-color': 'var(--color-brass-deep)',
+  '--rdp-accent-background-color': 'var(--color-brass-wash)',
+  '--rdp-today-color': 'var(--color-brass-deep)',
+  '--rdp-day-height': '2.5rem',
+  '--rdp-day-width': '2.5rem',
+  '--rdp-day_button-height': '2.4rem',
+  '--rdp-day_button-width': '2.4rem',
+} as CSSProperties;
 
 export interface DateInputProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 'value' | 'onChange' | 'type' | 'min' | 'max' | 'id'> {
   id: string;
@@ -110,7 +121,7 @@ export function DateInput({ id, value, onValueChange, min, max, invalid = false,
             event.stopPropagation();
             close();
           }}
-          className="absolute top-full right-0 z-30 mt-1 max-w-[calc(100vw-1.5rem)] rounded-md border border-paper-line bg-card p-2 text-ink-900 shadow-lg [--rdp-accent-background-color:var(--color-brass-soft)] [--rdp-accent-color:var(--color-brass-deep)] [--rdp-day-height:2.5rem] [--rdp-day-width:2.5rem] [--rdp-day_button-height:2.4rem] [--rdp-day_button-width:2.4rem]"
+          className="absolute top-full right-0 z-30 mt-1 max-w-[calc(100vw-1.5rem)] rounded-md border border-paper-line bg-card p-2 text-ink-900 shadow-lg"
         >
           <DayPicker
             mode="single"
@@ -124,6 +135,7 @@ export function DateInput({ id, value, onValueChange, min, max, invalid = false,
             startMonth={addYears(today, -40)}
             endMonth={addYears(today, 15)}
             disabled={disabledDays}
+            style={calendarLook}
             onSelect={(day) => {
               const iso = asIsoDate(day);
               setText(firm.date(iso));

@@ -54,6 +54,7 @@ describe("the firm's locale and time zone, set on the settings page", () => {
       new RegExp(`${chicago.toFormat('LLL d, yyyy, h:mm')}[\\s\u202f]${chicago.toFormat('a')} C[SD]T`),
     );
     expect(await page.locator('main').innerText()).toContain(luxonDay(booking.starts_on).toFormat('LLL d'));
+    expect(await page.locator('main').innerText()).toContain('All times in America/Chicago, the firm’s time zone.');
 
     // A job typed with US dates: "Mar 1, 2027" in the shown style, "3/2/2027" in the numeric one (month first).
     const firstDay = luxonDay(addDays(todayIn('America/Chicago'), 90));

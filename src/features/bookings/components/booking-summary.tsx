@@ -11,7 +11,7 @@ import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
 import { assetTypeTitles } from '../../../lib/assets';
 import { bookingDays } from '../../../lib/bookings';
-import { formatDateTime, formatDateRange } from '../../../lib/format';
+import { formatDateRange, formatDateTime, useFirmFormat } from '../../../lib/format';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCancelBooking } from '../api/cancel-booking';
 import { useMoveBooking } from '../api/move-booking';
@@ -21,6 +21,9 @@ import { BookingStateChip, conditionWords, dayCount, purposeWords } from './book
 /** Dates, job, state and who handed what over. */
 /** `rentalLinks`: whether the reader may open rental pages (the billing desk); others see the number only. */
 export function BookingFacts({ booking, rentalLinks = false }: { booking: BookingView; rentalLinks?: boolean }) {
+  // Times are the firm's clock; a reader elsewhere is told which clock that is.
+  const { zoneNote } = useFirmFormat();
+  const timed = Boolean(booking.checkedOutAt || booking.returnedAt);
   return (
     <Panel title="Booking">
       <FactList
@@ -72,6 +75,7 @@ export function BookingFacts({ booking, rentalLinks = false }: { booking: Bookin
           ...(booking.returnedAt
             ? [{ term: 'Returned', value: `${formatDateTime(booking.returnedAt)}, brought back by ${booking.broughtBackBy ?? '—'}` }]
             : []),
+          ...(timed && zoneNote ? [{ term: 'Clock', value: `All ${zoneNote}, the firm’s time zone.` }] : []),
         ]}
       />
     </Panel>

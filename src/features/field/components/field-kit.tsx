@@ -4,13 +4,13 @@ import { CountedSection } from '../../../components/counted-section';
 import { StatusChip } from '../../../components/status-chip';
 import { assetTypeTitles } from '../../../lib/assets';
 import type { StoredCopy } from '../../../lib/field/field-store';
-import { formatCalendarDate, formatDateTime, formatUm } from '../../../lib/format';
+import { formatCalendarDate, formatDateRange, formatDateTime, formatUm } from '../../../lib/format';
 import type { AssetView } from '../../../../shared/assets/views';
 import type { BookingView } from '../../../../shared/bookings/views';
 import type { FieldCopyView } from '../../../../shared/field/views';
 
 const bookingName = (b: BookingView) => b.kit?.name ?? b.job?.reference ?? b.rental?.number ?? 'Booked items';
-const days = (b: BookingView) => `${formatCalendarDate(b.startsOn)} – ${formatCalendarDate(b.endsOn)}`;
+const days = (b: BookingView) => formatDateRange(b.startsOn, b.endsOn);
 
 /** Tip positions whose latest validation on this phone's copy did not pass (or never happened): what the booking rules would refuse. */
 export function tipsToValidate(copy: FieldCopyView) {

@@ -4,7 +4,7 @@ import { Link } from 'react-router-dom';
 export function AssetRowHeader({ id, tag }: { id: string; tag: string }) {
   return (
     <th scope="row" className="py-1.5 pr-2">
-      <Link to={`/fleet/${id}`} className="font-mono font-semibold text-ink-900 underline-offset-2 hover:underline">
+      <Link to={`/fleet/${id}`} className="font-mono font-semibold text-ink-900 underline-offset-2 hover:underline whitespace-nowrap">
         {tag}
       </Link>
     </th>

@@ -1,6 +1,6 @@
-import { format, parseISO } from 'date-fns';
 import { Link } from 'react-router-dom';
 import { isApiError } from '../lib/api-client';
+import { formatCalendarDate, formatDateRange } from '../lib/format';
 import type { AlternativeItem, BookingRefusalDetails } from '../../shared/bookings/views';
 import { blockReasonText } from '../lib/bookings';
 import { Button } from './button';
@@ -12,11 +12,8 @@ export interface BookingRefusal {
   items: { assetId: string; why: string; bookingId?: string; alternatives: AlternativeItem[] }[];
 }
 
-const day = (date: string) => format(parseISO(date), 'd MMM yyyy');
-const fullRange = (startsOn: string, endsOn: string) => `${day(startsOn)} – ${day(endsOn)}`;
-
 /** The refusal in an API error, or null when the error is something else; `range` words the dates of the booking in the way. */
-export function bookingRefusalFrom(error: unknown, range = fullRange): BookingRefusal | null {
+export function bookingRefusalFrom(error: unknown, range = formatDateRange): BookingRefusal | null {
   if (!isApiError(error) || (error.code !== 'conflict' && error.code !== 'booking_blocked')) return null;
   const details = (error.details ?? {}) as BookingRefusalDetails;
   const offered = (assetId: string) => details.alternatives?.[assetId] ?? [];
@@ -63,7 +60,7 @@ export function BookingRefusalPanel({ refusal, onSwap }: { refusal: BookingRefus
                     key={alt.id}
                     size="sm"
                     onClick={() => onSwap(item.assetId, alt)}
-                    title={[alt.model, alt.dueOn ? `calibration due ${day(alt.dueOn)}` : null].filter(Boolean).join(', ') || undefined}
+                    title={[alt.model, alt.dueOn ? `calibration due ${formatCalendarDate(alt.dueOn)}` : null].filter(Boolean).join(', ') || undefined}
                   >
                     Use {alt.assetTag} instead
                   </Button>

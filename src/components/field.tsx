@@ -12,7 +12,7 @@ interface FieldFrameProps {
   className?: string;
 }
 
-function FieldFrame({ id, label, hint, error, children, className = '' }: FieldFrameProps) {
+export function FieldFrame({ id, label, hint, error, children, className = '' }: FieldFrameProps) {
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
       <label htmlFor={id} className="text-sm font-semibold text-ink-800">
@@ -34,12 +34,12 @@ function FieldFrame({ id, label, hint, error, children, className = '' }: FieldF
   );
 }
 
-const controlClasses =
+export const controlClasses =
   'w-full min-h-10 rounded-md border bg-card px-3 py-1.5 text-base text-ink-900 ' +
   'placeholder:text-ink-500 focus:border-brass-deep focus:outline-2 focus:outline-offset-0 focus:outline-brass-deep';
 
 /** Show an error once the person has touched or changed the field (so forms validate as you type). */
-function useVisibleError(name: string): string | undefined {
+export function useVisibleError(name: string): string | undefined {
   const [, meta] = useField(name);
   const changed = meta.value !== meta.initialValue;
   return (meta.touched || changed) && meta.error ? meta.error : undefined;

@@ -15,7 +15,7 @@ export function ItemMatches({
     <ul className="flex flex-col divide-y divide-paper-line rounded-md border border-paper-line">
       {items.map((item) => (
         <li key={item.id} className="flex items-center gap-2 px-2 py-1">
-          <span className="font-mono text-sm font-semibold">{item.tag}</span>
+          <span className="font-mono text-sm font-semibold whitespace-nowrap">{item.tag}</span>
           <span className="min-w-0 flex-1 truncate text-sm text-ink-700">
             {item.detail}
             {item.kitName ? ` · in ${item.kitName}` : ''}

@@ -14,9 +14,9 @@ export function RemovableTags({
   return (
     <ul aria-label={label} className="flex flex-wrap gap-2">
       {items.map((item) => (
-        <li key={item.id} className="inline-flex items-center gap-1 rounded-full border border-paper-line bg-paper px-2 py-0.5 text-sm">
-          <span className="font-mono font-semibold">{item.tag}</span>
-          <span className="text-ink-700">{item.detail}</span>
+        <li key={item.id} className="inline-flex max-w-full items-center gap-1 rounded-full border border-paper-line bg-paper px-2 py-0.5 text-sm">
+          <span className="font-mono font-semibold whitespace-nowrap">{item.tag}</span>
+          <span className="min-w-0 text-ink-700">{item.detail}</span>
           <button type="button" aria-label={`Remove ${item.tag}`} onClick={() => onRemove(item.id)} className="rounded p-0.5 text-ink-700 hover:bg-paper-deep">
             <CrossIcon size={14} />
           </button>

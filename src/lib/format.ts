@@ -29,7 +29,11 @@ export const formatDateTime = (value: Value) => current.dateTime(value);
 export const formatDate = (value: Value) => current.date(value);
 /** A calendar date `YYYY-MM-DD` (already the firm's date: no shift). */
 export const formatCalendarDate = (value: string | null | undefined) => current.date(value);
+/** Two calendar dates, both days included, the year always shown: "7–11 Dec 2026". */
+export const formatDateRange = (first: string, last: string) => current.dateRange(first, last);
 export const formatCount = (value: number) => current.count(value);
+/** A small length in micrometres with one decimal: "4.2 µm" ("4,2 µm" in de-DE). */
+export const formatUm = (value: number | null | undefined) => current.um(value);
 /** A plain number with at most `digits` decimals, in the firm's locale. */
 export const formatNumber = (value: number, digits = 1) => current.number(value, digits);
 /** Integer minor units in a currency, in the firm's locale. */

@@ -1,3 +1,4 @@
+import { DateTime } from 'luxon';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { startBrowserRig, type BrowserRig } from '../support/browser';
@@ -39,8 +40,9 @@ describe('booking board in a real browser', () => {
     await page.getByRole('heading', { level: 1, name: 'Bookings' }).waitFor();
     await page.getByRole('link', { name: 'Book Kit Alder' }).click();
     await page.getByRole('heading', { level: 1, name: 'Book kit' }).waitFor();
-    await page.getByLabel('Starts on').fill(startsOn);
-    await page.getByLabel('Ends on').fill(endsOn);
+    // Typed the way a person in the firm writes dates (en-GB, month in words), as the fields show them.
+    await page.getByLabel('Starts on').fill(DateTime.fromISO(startsOn).toFormat('d LLLL yyyy'));
+    await page.getByLabel('Ends on').fill(DateTime.fromISO(endsOn).toFormat('d LLLL yyyy'));
     await eventually(() => page.locator('main').innerText()).toMatch(/TRK-001/);
     await eventually(() => page.locator('main').innerText()).toMatch(/TRK-001 falls due on .*, during this booking/);
     await page.getByRole('button', { name: 'Book', exact: true }).click();

@@ -4,6 +4,7 @@ import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { signedIn } from '../support/browser-session';
 import { eventually } from '../support/eventually';
+import { parseTypedDate } from '../../shared/formatting/typed-date';
 
 let rig: BrowserRig;
 beforeAll(async () => {
@@ -69,8 +70,10 @@ describe("the shop manager's week, told truly", () => {
     await page.getByText('J-WEEK-1').first().click();
     await page.getByRole('link', { name: 'Book kit for this job' }).click();
     await page.getByRole('heading', { level: 1, name: 'Book kit' }).waitFor();
-    await eventually(() => page.getByLabel('Starts on').inputValue()).toBe(job.startsOn);
-    expect(await page.getByLabel('Ends on').inputValue()).toBe(job.endsOn);
+    // The fields show the job's days the firm's way (never ISO), and that text reads back as those days.
+    await eventually(async () => parseTypedDate(await page.getByLabel('Starts on').inputValue(), 'en-GB')).toBe(job.startsOn);
+    expect(await page.getByLabel('Starts on').inputValue()).not.toMatch(/^\d{4}-/);
+    expect(parseTypedDate(await page.getByLabel('Ends on').inputValue(), 'en-GB')).toBe(job.endsOn);
     await page.getByLabel('Add separate items').fill('TRK-W01');
     await page.getByRole('button', { name: 'Add TRK-W01' }).click();
     await page.getByRole('button', { name: 'Book', exact: true }).click();

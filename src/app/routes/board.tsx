@@ -1,8 +1,10 @@
+import { formatDateRange } from '../../lib/format';
 import { format, parseISO, startOfWeek } from 'date-fns';
 import { useCallback, useId, useMemo } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { AssetTypeSelect } from '../../components/asset-type-select';
 import { Button, buttonClasses } from '../../components/button';
+import { DateInput } from '../../components/date-field';
 import { ClockIcon, PlusIcon } from '../../components/icons';
 import { LoadingPanel } from '../../components/loading-panel';
 import { Notice } from '../../components/notice';
@@ -12,7 +14,6 @@ import { useBookings } from '../../features/bookings/api/get-bookings';
 import { BookingBoard, type BoardTarget } from '../../features/bookings/components/booking-board';
 import { bookFormHref } from '../../features/bookings/components/book-href';
 import { BookingsList } from '../../features/bookings/components/bookings-list';
-import { dayRange } from '../../features/bookings/components/booking-words';
 import { CalendarFeed } from '../../features/bookings/components/calendar-feed';
 import { useAssets } from '../../features/fleet/api/get-assets';
 import { assetTypes, type AssetStatus, type AssetType } from '../../lib/assets';
@@ -107,13 +108,7 @@ export default function BoardRoute() {
           <label htmlFor={jumpId} className="text-sm font-semibold text-ink-800">
             Jump to week
           </label>
-          <input
-            id={jumpId}
-            type="date"
-            value={from}
-            onChange={(e) => (isDate(e.target.value) ? setParam({ from: mondayOf(e.target.value) }) : undefined)}
-            className="min-h-10 rounded-md border border-paper-line bg-card px-2"
-          />
+          <DateInput id={jumpId} value={from} onValueChange={(value) => (isDate(value) ? setParam({ from: mondayOf(value) }) : undefined)} />
         </div>
         <div className="flex flex-col gap-1">
           <label htmlFor={weeksId} className="text-sm font-semibold text-ink-800">
@@ -144,7 +139,7 @@ export default function BoardRoute() {
       </div>
 
       <p className="mb-2 text-sm font-semibold text-ink-800" aria-live="polite">
-        {dayRange(from, to)}
+        {formatDateRange(from, to)}
         {windowBookings.data ? ` · ${shownBookings?.length ?? 0} ${shownBookings?.length === 1 ? 'booking' : 'bookings'}` : ''}
       </p>
 

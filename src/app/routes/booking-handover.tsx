@@ -1,3 +1,4 @@
+import { formatDateRange } from '../../lib/format';
 import { useState } from 'react';
 import { Link, useLocation, useNavigate, useParams } from 'react-router-dom';
 import { buttonClasses } from '../../components/button';
@@ -8,7 +9,7 @@ import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { useBooking } from '../../features/bookings/api/get-booking';
 import type { ReturnView } from '../../../shared/bookings/views';
-import { bookingStateWords, bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
+import { bookingStateWords, bookingTitle } from '../../features/bookings/components/booking-words';
 import { HandoverForm, ReturnOutcome, type CounterpartSuggestion } from '../../features/bookings/components/handover-form';
 import { PhotoPicker } from '../../features/incidents/components/photo-picker';
 import { photoProblem } from '../../features/incidents/components/photo-rules';
@@ -51,7 +52,7 @@ export default function BookingHandoverRoute() {
     return (
       <>
         {back}
-        <PageHeader title={`Taken back: ${bookingTitle(b)}`} description={dayRange(b.startsOn, b.endsOn)} />
+        <PageHeader title={`Taken back: ${bookingTitle(b)}`} description={formatDateRange(b.startsOn, b.endsOn)} />
         <ReturnOutcome result={returned} />
         <Link to={`/bookings/${b.id}`} className={`${buttonClasses('secondary')} mt-4`}>
           See the booking
@@ -97,7 +98,7 @@ export default function BookingHandoverRoute() {
       {back}
       <PageHeader
         title={title}
-        description={`${dayRange(b.startsOn, b.endsOn)}${b.kit ? ` · ${b.kit.name}` : ''}. ${mode === 'checkout' ? 'Walk the packing list with the person taking the kit.' : 'Walk the packing list as the kit comes back.'}`}
+        description={`${formatDateRange(b.startsOn, b.endsOn)}${b.kit ? ` · ${b.kit.name}` : ''}. ${mode === 'checkout' ? 'Walk the packing list with the person taking the kit.' : 'Walk the packing list as the kit comes back.'}`}
       />
       <HandoverForm
         booking={b}

@@ -1,3 +1,4 @@
+import { formatDateRange } from '../../lib/format';
 import { Link, useParams } from 'react-router-dom';
 import { ArrivalNotice } from '../../components/arrival-notice';
 import { buttonClasses } from '../../components/button';
@@ -10,7 +11,7 @@ import { PageHeader } from '../../components/page-header';
 import { useSession } from '../../features/auth/components/session-context';
 import { useBooking } from '../../features/bookings/api/get-booking';
 import { BookingFacts, CancelBookingButton, MoveDatesButton, PackingList } from '../../features/bookings/components/booking-summary';
-import { bookingTitle, dayRange } from '../../features/bookings/components/booking-words';
+import { bookingTitle } from '../../features/bookings/components/booking-words';
 import { ChangeItemsButton } from '../../features/bookings/components/change-items';
 import { assetsQueryOptions } from '../../features/fleet/api/get-assets';
 import { useSiteJob } from '../../features/site-jobs/api/get-site-job';
@@ -18,7 +19,7 @@ import { can } from '../../lib/roles';
 
 export default function BookingRoute() {
   const { id = '' } = useParams();
-  const { user, organization } = useSession();
+  const { user } = useSession();
   const booking = useBooking(id);
   const job = useSiteJob(booking.data?.jobId);
 
@@ -64,7 +65,7 @@ export default function BookingRoute() {
         <ArrowLeftIcon size={14} />
         Booking board
       </Link>
-      <PageHeader title={bookingTitle(b)} description={dayRange(b.startsOn, b.endsOn)} actions={actions.length ? actions : undefined} />
+      <PageHeader title={bookingTitle(b)} description={formatDateRange(b.startsOn, b.endsOn)} actions={actions.length ? actions : undefined} />
       <ArrivalNotice />
       {b.state === 'not_collected' ? (
         <Notice tone="caution" className="mb-3" title="Not collected">
@@ -78,7 +79,7 @@ export default function BookingRoute() {
         </Notice>
       ) : null}
       <div className="grid gap-4 lg:grid-cols-2">
-        <BookingFacts booking={b} timeZone={organization.timeZone} rentalLinks={can(user.role, 'reports.read')} />
+        <BookingFacts booking={b} rentalLinks={can(user.role, 'reports.read')} />
         {job.data ? (
           <Panel title="Job">
             <FactList
@@ -87,7 +88,7 @@ export default function BookingRoute() {
                 { term: 'Customer', value: job.data.customerName },
                 { term: 'Site', value: job.data.siteAddress },
                 { term: 'Contact', value: [job.data.contactName, job.data.contactEmail].filter(Boolean).join(', ') },
-                { term: 'On site', value: dayRange(job.data.startsOn, job.data.endsOn) },
+                { term: 'On site', value: formatDateRange(job.data.startsOn, job.data.endsOn) },
               ]}
             />
           </Panel>

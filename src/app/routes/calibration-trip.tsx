@@ -72,7 +72,7 @@ export default function CalibrationTripRoute() {
           <ul className="mb-3 flex flex-col gap-1" aria-label="Items on this trip">
             {w.assets.map((a) => (
               <li key={a.id} className="flex min-h-9 items-center justify-between gap-2">
-                <Link to={`/fleet/${a.id}`} className="font-mono font-semibold underline decoration-brass-deep">
+                <Link to={`/fleet/${a.id}`} className="font-mono font-semibold underline decoration-brass-deep whitespace-nowrap">
                   {a.assetTag}
                 </Link>
                 {w.assets.length > 1 && !trip ? (

@@ -12,7 +12,7 @@ import type { SiteJobView } from '../../../shared/bookings/views';
 import { JobForm } from '../../features/site-jobs/components/job-form';
 import { useStaff } from '../../features/users/api/get-staff';
 import { SiteJobsTable } from '../../features/site-jobs/components/site-jobs-table';
-import { formatCalendarDate } from '../../lib/format';
+import { formatDateRange } from '../../lib/format';
 import { can } from '../../lib/roles';
 
 /** Customer site jobs: the list, and adding or changing one (owner and manager). */
@@ -75,7 +75,7 @@ export default function SiteJobsRoute() {
               { term: 'Contact', value: editing.contactName },
               { term: 'E-mail', value: editing.contactEmail, mono: true },
               { term: 'Site address', value: editing.siteAddress },
-              { term: 'On site', value: `${formatCalendarDate(editing.startsOn)} – ${formatCalendarDate(editing.endsOn)}` },
+              { term: 'On site', value: formatDateRange(editing.startsOn, editing.endsOn) },
               {
                 term: 'Lead technician',
                 value:

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Dialog } from '../../../components/dialog';
+import { DateField } from '../../../components/date-field';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
@@ -67,7 +68,7 @@ export function PaymentDialog({ invoice, today, open, onClose }: { invoice: Invo
               </Notice>
             ) : null}
             <Field name="amount" label={`Amount received (${currency})`} inputMode="decimal" autoComplete="off" />
-            <Field name="receivedOn" label="Received on" type="date" />
+            <DateField name="receivedOn" label="Received on" />
             <Field name="reference" label="Reference" autoComplete="off" hint="The payer's reference or the bank statement line." />
             <div className="flex flex-wrap justify-end gap-2">
               <Button onClick={close}>Cancel</Button>

@@ -1,3 +1,4 @@
+import { formatDateRange } from '../../../lib/format';
 import { Link } from 'react-router-dom';
 import { buttonClasses } from '../../../components/button';
 import { LoadingPanel } from '../../../components/loading-panel';
@@ -5,7 +6,7 @@ import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
 import { addDays } from '../../../lib/bookings';
 import { useBookings } from '../api/get-bookings';
-import { BookingStateChip, bookingTitle, dayRange } from './booking-words';
+import { BookingStateChip, bookingTitle } from './booking-words';
 
 /** An asset's bookings from 90 days back onwards, and "Book this item" for those who may book. */
 export function AssetBookings({ assetId, today, canBook, className }: { assetId: string; today: string; canBook: boolean; className?: string }) {
@@ -31,7 +32,7 @@ export function AssetBookings({ assetId, today, canBook, className }: { assetId:
           {items.map((b) => (
             <li key={b.id}>
               <Link to={`/bookings/${b.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash">
-                <span className="text-sm text-ink-700">{dayRange(b.startsOn, b.endsOn)}</span>
+                <span className="text-sm text-ink-700">{formatDateRange(b.startsOn, b.endsOn)}</span>
                 <span className="font-semibold text-ink-900">{bookingTitle(b)}</span>
                 <span className="ml-auto">
                   <BookingStateChip state={b.state} />

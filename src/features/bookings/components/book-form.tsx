@@ -1,3 +1,4 @@
+import { formatDateRange } from '../../../lib/format';
 import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
@@ -21,7 +22,6 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useCreateBooking } from '../api/create-booking';
 import { useBookings } from '../api/get-bookings';
 import { bookingProblems } from './booking-problems';
-import { dayRange } from './booking-words';
 
 export interface BookValues {
   kitId: string;
@@ -95,7 +95,7 @@ export function BookForm({ kits, fleet, jobs, initial, renderNewJob, onBooked }:
     try {
       onBooked(await create.mutateAsync(input));
     } catch (error) {
-      const t = bookingRefusalFrom(error, dayRange);
+      const t = bookingRefusalFrom(error, formatDateRange);
       if (t) setTrouble(t);
       else setFormError(applyServerErrors(error, helpers, { fields, labels, aliases }));
     }
@@ -153,7 +153,7 @@ function BookFormBody({
     { value: '', label: 'No job (the firm’s own use)' },
     ...[...jobs]
       .sort((a, b) => (a.startsOn < b.startsOn ? 1 : -1))
-      .map((j) => ({ value: j.id, label: `${j.reference} · ${j.customerName} (${dayRange(j.startsOn, j.endsOn)})` })),
+      .map((j) => ({ value: j.id, label: `${j.reference} · ${j.customerName} (${formatDateRange(j.startsOn, j.endsOn)})` })),
   ];
 
   function swap(troubledId: string, alternative: AlternativeItem) {
@@ -179,7 +179,7 @@ function BookFormBody({
           <DayRangeFields />
           <p className="text-sm text-ink-700" aria-live="polite">
             {datesValid
-              ? `${bookingDays(values.startsOn, values.endsOn)} ${bookingDays(values.startsOn, values.endsOn) === 1 ? 'day' : 'days'}, ${dayRange(values.startsOn, values.endsOn)}, both days included.`
+              ? `${bookingDays(values.startsOn, values.endsOn)} ${bookingDays(values.startsOn, values.endsOn) === 1 ? 'day' : 'days'}, ${formatDateRange(values.startsOn, values.endsOn)}, both days included.`
               : 'Whole days; the first and the last day are both included.'}
           </p>
         </FormSection>

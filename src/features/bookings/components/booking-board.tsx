@@ -6,10 +6,10 @@ import { StatusChip } from '../../../components/status-chip';
 import type { AssetView } from '../../../../shared/assets/views';
 import { assetTypeTitles } from '../../../lib/assets';
 import { addDays, calendarDayIn } from '../../../lib/bookings';
-import { useFirmFormat } from '../../../lib/format';
+import { useFirmFormat, formatCalendarDate, formatDateRange } from '../../../lib/format';
 import type { BookingView } from '../../../../shared/bookings/views';
 import './booking-board.css';
-import { bookingStateWords, bookingTitle, dayRange, shortDay } from './booking-words';
+import { bookingStateWords, bookingTitle } from './booking-words';
 
 /** What a stretch picked on the board books: a whole kit or one asset. */
 export type BoardTarget = { kitId: string; assetId?: undefined } | { assetId: string; kitId?: undefined };
@@ -113,12 +113,14 @@ function layoutBars(
   return { bars, lanes: Math.max(1, laneEnds.length) };
 }
 
+/** The bar's accessible name starts with exactly what the bar shows (its title, then "Late"), so a person can say what they see (WCAG 2.5.3). */
 function barName(bar: BarModel): string {
   const { booking } = bar;
-  const due = bar.dueTags.length ? `, falls due during this booking (${bar.dueTags.map((d) => `${d.tag} due ${shortDay(d.dueOn)}`).join(', ')})` : '';
-  const late = bar.late ? `, late: was due back ${shortDay(booking.endsOn)}` : '';
-  const early = bar.returnedEarlyOn ? `, back early on ${shortDay(bar.returnedEarlyOn)}` : '';
-  return `${bookingTitle(booking)}, ${dayRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${early}${late}${due}`;
+  const due = bar.dueTags.length ? `, falls due during this booking (${bar.dueTags.map((d) => `${d.tag} due ${formatCalendarDate(d.dueOn)}`).join(', ')})` : '';
+  const late = bar.late ? `, was due back ${formatCalendarDate(booking.endsOn)}` : '';
+  const early = bar.returnedEarlyOn ? `, back early on ${formatCalendarDate(bar.returnedEarlyOn)}` : '';
+  const shown = `${bookingTitle(booking)}${bar.late ? ' Late' : ''}`;
+  return `${shown}, ${formatDateRange(booking.startsOn, booking.endsOn)}, ${bookingStateWords[booking.state].toLowerCase()}${early}${late}${due}`;
 }
 
 interface Pick {
@@ -249,7 +251,7 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
     >
       <div
         role="table"
-        aria-label={`Booking board, ${dayRange(from, last)}`}
+        aria-label={`Booking board, ${formatDateRange(from, last)}`}
         aria-rowcount={rows.length + 1}
         style={{ width: HEAD_PX + spanPx }}
         className="relative"
@@ -263,11 +265,11 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
             >
               Kit or item
             </div>
-            <div role="columnheader" aria-label={`Days ${dayRange(from, last)}`} className="shrink-0" style={{ width: spanPx }}>
+            <div role="columnheader" aria-label={`Days ${formatDateRange(from, last)}`} className="shrink-0" style={{ width: spanPx }}>
               <div aria-hidden="true" className="flex">
                 {Array.from({ length: weeks }, (_, w) => (
                   <div key={w} className="truncate border-l border-ink-300 px-1.5 pt-1 text-xs font-semibold text-ink-800" style={{ width: 7 * dayPx }}>
-                    Week of {shortDay(addDays(from, w * 7), w === 0)}
+                    Week of {formatCalendarDate(addDays(from, w * 7))}
                   </div>
                 ))}
               </div>
@@ -294,7 +296,7 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
           {todayIndex >= 0 && todayIndex < days ? (
             <div
               aria-hidden="true"
-              title={`Today, ${shortDay(today, true)}`}
+              title={`Today, ${formatCalendarDate(today)}`}
               className="pointer-events-none absolute top-0 bottom-0 z-[1] border-x-2 border-brass/70 bg-brass/10"
               style={{ left: HEAD_PX + todayIndex * dayPx, width: dayPx }}
             />
@@ -327,7 +329,7 @@ export function BookingBoard({ assets, bookings, from, days, today, canBook, onP
       ) : null}
       {pick && !pick.dragging ? (
         <p role="status" className="sticky bottom-0 left-0 z-20 border-t border-brass-deep bg-brass-wash px-3 py-1.5 text-sm font-semibold text-ink-900">
-          From {shortDay(addDays(from, pick.anchor))}: click the last day of the booking (the same day again for one day). Escape lets go.
+          From {formatCalendarDate(addDays(from, pick.anchor))}: click the last day of the booking (the same day again for one day). Escape lets go.
         </p>
       ) : null}
     </div>
@@ -475,7 +477,10 @@ const BoardRow = memo(function BoardRow({
           </>
         ) : (
           <div className={`flex min-w-0 flex-1 items-center gap-1.5 ${row.inKit ? 'pl-4' : ''}`}>
-            <Link to={`/fleet/${row.asset.id}`} className="shrink-0 font-mono text-sm font-semibold text-ink-900 underline-offset-2 hover:underline">
+            <Link
+              to={`/fleet/${row.asset.id}`}
+              className="shrink-0 font-mono text-sm font-semibold text-ink-900 underline-offset-2 hover:underline whitespace-nowrap"
+            >
               {row.asset.assetTag}
             </Link>
             <span className="min-w-0 truncate text-xs text-ink-700">{assetTypeTitles[row.asset.type]}</span>
@@ -514,7 +519,7 @@ const BoardRow = memo(function BoardRow({
         ))}
         {dueMarks.map(([dueOn, tags]) => {
           const d = differenceInCalendarDays(parseISO(dueOn), parseISO(from));
-          const words = `${tags.join(', ')} calibration due ${shortDay(dueOn, true)}`;
+          const words = `${tags.join(', ')} calibration due ${formatCalendarDate(dueOn)}`;
           return (
             <span
               key={dueOn}
@@ -543,7 +548,7 @@ function Bar({ bar, from, days, dayPx }: { bar: BarModel; from: string; days: nu
     <span
       aria-hidden="true"
       data-planned-remainder=""
-      title={`Planned until ${shortDay(booking.endsOn)}, back early on ${shortDay(bar.returnedEarlyOn ?? booking.endsOn)}`}
+      title={`Planned until ${formatCalendarDate(booking.endsOn)}, back early on ${formatCalendarDate(bar.returnedEarlyOn ?? booking.endsOn)}`}
       className="nk-bar-remainder pointer-events-none absolute z-[1] rounded-r-md"
       style={{
         left: bar.remainder.first * dayPx + 1,
@@ -568,6 +573,7 @@ function Bar({ bar, from, days, dayPx }: { bar: BarModel; from: string; days: nu
         {startsBefore ? <span aria-hidden="true">◂</span> : null}
         {bar.dueTags.length ? <AlertIcon size={12} className="shrink-0" /> : null}
         <span className="truncate">{bookingTitle(booking)}</span>
+        {bar.late ? ' ' : null}
         {bar.late ? <span className="ml-1 shrink-0 rounded-sm bg-bad px-1 text-[10px] tracking-wide text-card uppercase">Late</span> : null}
         {endsAfter ? (
           <span aria-hidden="true" className="ml-auto">

@@ -1,7 +1,8 @@
+import { formatCalendarDate, formatDateRange } from '../../../lib/format';
 import type { AssetView } from '../../../../shared/assets/views';
 import { blockReason, blockReasonText, rangesOverlap } from '../../../lib/bookings';
 import type { BookingView } from '../../../../shared/bookings/views';
-import { bookingStateWords, bookingTitle, dayRange, shortDay } from './booking-words';
+import { bookingStateWords, bookingTitle } from './booking-words';
 
 export interface BookingProblem {
   key: string;
@@ -45,7 +46,7 @@ export function bookingProblems(items: AssetView[], startsOn: string, endsOn: st
       assetTags: tags,
       kind: 'conflict',
       bookingId: other.id,
-      sentence: `${who} already booked ${dayRange(other.startsOn, other.endsOn)} for ${bookingTitle(other)} (${bookingStateWords[other.state].toLowerCase()}).`,
+      sentence: `${who} already booked ${formatDateRange(other.startsOn, other.endsOn)} for ${bookingTitle(other)} (${bookingStateWords[other.state].toLowerCase()}).`,
     });
   }
   return problems;
@@ -55,8 +56,8 @@ function blockedSentence(item: AssetView, reason: ReturnType<typeof blockReason>
   if (reason === 'calibration_expires') {
     const dueOn = item.calibration.dueOn;
     if (!dueOn) return `${item.assetTag} has no calibration on record, so it cannot go out.`;
-    if (dueOn < startsOn) return `${item.assetTag} is due for calibration on ${shortDay(dueOn, true)}, before this booking starts.`;
-    return `${item.assetTag} falls due on ${shortDay(dueOn)}, during this booking (ends ${shortDay(endsOn)}).`;
+    if (dueOn < startsOn) return `${item.assetTag} is due for calibration on ${formatCalendarDate(dueOn)}, before this booking starts.`;
+    return `${item.assetTag} falls due on ${formatCalendarDate(dueOn)}, during this booking (ends ${formatCalendarDate(endsOn)}).`;
   }
   return `${item.assetTag} cannot go: ${blockReasonText[reason]}.`;
 }

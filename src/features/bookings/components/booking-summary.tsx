@@ -11,16 +11,19 @@ import { Notice } from '../../../components/notice';
 import { FactList, Panel } from '../../../components/panel';
 import { assetTypeTitles } from '../../../lib/assets';
 import { bookingDays } from '../../../lib/bookings';
-import { formatDateTime } from '../../../lib/format';
+import { formatDateRange, formatDateTime, useFirmFormat } from '../../../lib/format';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCancelBooking } from '../api/cancel-booking';
 import { useMoveBooking } from '../api/move-booking';
 import type { BookingView, ChecklistLine } from '../../../../shared/bookings/views';
-import { BookingStateChip, conditionWords, dayCount, dayRange, purposeWords } from './booking-words';
+import { BookingStateChip, conditionWords, dayCount, purposeWords } from './booking-words';
 
 /** Dates, job, state and who handed what over. */
 /** `rentalLinks`: whether the reader may open rental pages (the billing desk); others see the number only. */
-export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booking: BookingView; timeZone?: string; rentalLinks?: boolean }) {
+export function BookingFacts({ booking, rentalLinks = false }: { booking: BookingView; rentalLinks?: boolean }) {
+  // Times are the firm's clock; a reader elsewhere is told which clock that is.
+  const { zoneNote } = useFirmFormat();
+  const timed = Boolean(booking.checkedOutAt || booking.returnedAt);
   return (
     <Panel title="Booking">
       <FactList
@@ -34,7 +37,7 @@ export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booki
               </span>
             ),
           },
-          { term: 'Dates', value: `${dayRange(booking.startsOn, booking.endsOn)} (${dayCount(booking.startsOn, booking.endsOn)}, both included)` },
+          { term: 'Dates', value: `${formatDateRange(booking.startsOn, booking.endsOn)} (${dayCount(booking.startsOn, booking.endsOn)}, both included)` },
           {
             term: 'For',
             value: booking.job ? (
@@ -72,6 +75,7 @@ export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booki
           ...(booking.returnedAt
             ? [{ term: 'Returned', value: `${formatDateTime(booking.returnedAt)}, brought back by ${booking.broughtBackBy ?? '—'}` }]
             : []),
+          ...(timed && zoneNote ? [{ term: 'Clock', value: `All ${zoneNote}, the firm’s time zone.` }] : []),
         ]}
       />
     </Panel>

@@ -1,4 +1,3 @@
-import { format, parseISO } from 'date-fns';
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
 import { bookingDays } from '../../../lib/bookings';
 import type { BookingPurpose, BookingState } from '../../../lib/bookings';
@@ -43,18 +42,6 @@ export function bookingTitle(booking: Pick<BookingView, 'job' | 'purpose'> & { r
   if (booking.job) return `${booking.job.reference} ${booking.job.customerName}`;
   if (booking.rental) return `${booking.rental.number} ${booking.rental.customerCompany}`;
   return purposeWords[booking.purpose];
-}
-
-/** A short day, "2 Dec" (with the year when asked). */
-export function shortDay(date: string, withYear = false): string {
-  return format(parseISO(date), withYear ? 'd MMM yyyy' : 'd MMM');
-}
-
-/** "2 Dec – 8 Dec"; the year is added when the range crosses one or lies outside this year. */
-export function dayRange(startsOn: string, endsOn: string): string {
-  const thisYear = String(new Date().getFullYear());
-  const withYear = startsOn.slice(0, 4) !== endsOn.slice(0, 4) || startsOn.slice(0, 4) !== thisYear;
-  return `${shortDay(startsOn, withYear)} – ${shortDay(endsOn, withYear)}`;
 }
 
 export function dayCount(startsOn: string, endsOn: string): string {

@@ -1,10 +1,11 @@
+import { formatDateRange } from '../../../lib/format';
 import type { ColDef } from 'ag-grid-community';
 import type { CustomCellRendererProps } from 'ag-grid-react';
 import { useMemo } from 'react';
 import { DataGrid } from '../../../components/data-grid';
 import { bookingDays } from '../../../lib/bookings';
 import type { BookingView } from '../../../../shared/bookings/views';
-import { BookingStateChip, bookingContents, bookingStateWords, bookingTitle, dayRange } from './booking-words';
+import { BookingStateChip, bookingContents, bookingStateWords, bookingTitle } from './booking-words';
 
 /** The board's bookings as a table (sort, filter, CSV). */
 export function BookingsList({
@@ -24,7 +25,7 @@ export function BookingsList({
         minWidth: 170,
         // Sorts by the first day; reads and exports as the range.
         valueGetter: (p) => (p.data ? `${p.data.startsOn} – ${p.data.endsOn}` : ''),
-        valueFormatter: (p) => (p.data ? dayRange(p.data.startsOn, p.data.endsOn) : ''),
+        valueFormatter: (p) => (p.data ? formatDateRange(p.data.startsOn, p.data.endsOn) : ''),
         sort: 'asc',
       },
       {

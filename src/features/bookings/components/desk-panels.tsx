@@ -8,8 +8,8 @@ import { useCounterDay } from '../api/get-counter-day';
 import { useMyKit } from '../api/get-my-kit';
 import type { BookingView } from '../../../../shared/bookings/views';
 import { blockReasonText, todayIn } from '../../../lib/bookings';
-import { useFirmFormat } from '../../../lib/format';
-import { BookingStateChip, bookingContents, bookingTitle, dayRange } from './booking-words';
+import { useFirmFormat, formatDateRange } from '../../../lib/format';
+import { BookingStateChip, bookingContents, bookingTitle } from './booking-words';
 
 const lateWords = (days: number) => `${days} ${days === 1 ? 'day' : 'days'} late`;
 
@@ -19,7 +19,7 @@ function BookingLine({ booking, extra }: { booking: BookingView; extra?: ReactNo
       <Link to={`/bookings/${booking.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-0.5 px-1 py-1.5 hover:bg-brass-wash">
         <span className="font-semibold text-ink-900">{bookingTitle(booking)}</span>
         <span className="text-sm text-ink-700">
-          {dayRange(booking.startsOn, booking.endsOn)} · {bookingContents(booking)}
+          {formatDateRange(booking.startsOn, booking.endsOn)} · {bookingContents(booking)}
         </span>
         {extra ? <span className="ml-auto text-sm">{extra}</span> : null}
       </Link>

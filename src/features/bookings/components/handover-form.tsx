@@ -1,8 +1,10 @@
+import { formatCalendarDate } from '../../../lib/format';
 import { Form, Formik, useField, useFormikContext, type FormikHelpers } from 'formik';
 import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import * as Yup from 'yup';
 import { Button, buttonClasses } from '../../../components/button';
+import { DateField } from '../../../components/date-field';
 import { Field } from '../../../components/field';
 import { PrintIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
@@ -13,7 +15,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useCheckOutBooking } from '../api/check-out-booking';
 import { useReturnBooking, type ReturnPhoto } from '../api/return-booking';
 import type { BookingView, ItemCondition, ReturnView } from '../../../../shared/bookings/views';
-import { conditionWords, shortDay } from './booking-words';
+import { conditionWords } from './booking-words';
 
 export type HandoverMode = 'checkout' | 'return';
 
@@ -193,11 +195,11 @@ export function HandoverForm({
                   Not collected: check out late
                 </h2>
                 <p className="text-sm text-ink-700">
-                  This reservation&rsquo;s days ended on {shortDay(booking.endsOn, true)} without checkout. It goes out from today to a new last day, if every
-                  item is free and in calibration for those days.
+                  This reservation&rsquo;s days ended on {formatCalendarDate(booking.endsOn)} without checkout. It goes out from today to a new last day, if
+                  every item is free and in calibration for those days.
                 </p>
                 <Field name="lateNote" label="Why it goes late" autoComplete="off" />
-                <Field name="lateEndsOn" label="New last day" type="date" min={today} />
+                <DateField name="lateEndsOn" label="New last day" min={today} />
               </section>
             ) : null}
 
@@ -330,7 +332,7 @@ function ChecklistRow({ index, assetTag, type }: { index: number; assetTag: stri
   return (
     <li className="grid items-center gap-2 py-2 sm:grid-cols-[minmax(10rem,1fr)_auto_10rem_minmax(10rem,1.5fr)]">
       <span className="min-w-0">
-        <span className="font-mono font-semibold text-ink-900">{assetTag}</span>
+        <span className="font-mono font-semibold text-ink-900 whitespace-nowrap">{assetTag}</span>
         <span className="ml-2 text-sm text-ink-700">{type}</span>
       </span>
       <label htmlFor={`${base}-present`} className="flex min-h-10 items-center gap-2">

@@ -3,7 +3,7 @@ import { LoadingPanel } from '../../../components/loading-panel';
 import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
 import { StatusChip } from '../../../components/status-chip';
-import { formatCalendarDate } from '../../../lib/format';
+import { formatCalendarDate, formatUm } from '../../../lib/format';
 import { useAssetImpact } from '../api/get-asset-impact';
 import { useCalibrations } from '../api/get-calibrations';
 import { effectiveDueOn, months, ResultChip } from './calibration-words';
@@ -33,7 +33,7 @@ export function CalibrationHistory({ assetId, className = '' }: { assetId: strin
               <div className="flex flex-wrap items-center gap-2">
                 <ResultChip stage="As found" result={e.asFound} />
                 <ResultChip stage="As left" result={e.asLeft} />
-                {e.asFoundErrorUm !== null ? <span className="font-mono text-sm">as-found error {e.asFoundErrorUm.toFixed(1)} µm</span> : null}
+                {e.asFoundErrorUm !== null ? <span className="font-mono text-sm">as-found error {formatUm(e.asFoundErrorUm)}</span> : null}
               </div>
               <p className="text-sm text-ink-700">
                 Interval {months(e.intervalMonths)} · due {formatCalendarDate(effectiveDueOn(e))}

@@ -24,7 +24,7 @@ export function AtLabList({ rows, canRecord }: { rows: AtLabRow[]; canRecord: bo
             <ul className="mt-1 flex flex-wrap gap-x-4 gap-y-1">
               {items.map((item) => (
                 <li key={item.assetId} className="flex items-center gap-2">
-                  <Link to={`/fleet/${item.assetId}`} className="font-mono font-semibold underline decoration-brass-deep">
+                  <Link to={`/fleet/${item.assetId}`} className="font-mono font-semibold underline decoration-brass-deep whitespace-nowrap">
                     {item.assetTag}
                   </Link>
                   {canRecord ? (

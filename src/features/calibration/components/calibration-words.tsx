@@ -37,11 +37,6 @@ export function LateChip() {
   return <StatusChip tone="bad" label="Late" title="Past the day it was expected back" />;
 }
 
-/** "12 Jan 2027 – 2 Feb 2027", both days included. */
-export function dateRange(startsOn: string, endsOn: string): string {
-  return startsOn === endsOn ? formatCalendarDate(startsOn) : `${formatCalendarDate(startsOn)} – ${formatCalendarDate(endsOn)}`;
-}
-
 export const months = (n: number) => `${n} ${n === 1 ? 'month' : 'months'}`;
 export const days = (n: number) => `${n} ${n === 1 ? 'day' : 'days'}`;
 

@@ -5,16 +5,15 @@ import { AssetStatusChip, assetStatusWords, CalibrationChip, calibrationWords } 
 import { buttonClasses } from '../../../components/button';
 import { actionsColumnType, DataGrid } from '../../../components/data-grid';
 import { assetTypeTitles, type AssetStatus, type AssetType } from '../../../lib/assets';
-import { formatCalendarDate } from '../../../lib/format';
+import { formatCalendarDate, formatDateRange } from '../../../lib/format';
 import type { DueRow } from '../../../../shared/calibration/views';
-import { dateRange } from './calibration-words';
 import { ChooseForTrip } from './due-selection';
 
 const typeTitle = (type: string) => assetTypeTitles[type as AssetType] ?? type;
 
 /** Threatened bookings as one line of text each (also what the CSV export carries). */
 const threatText = (row: DueRow) =>
-  row.threatened.map((t) => [t.jobReference ?? 'Booking', t.customerName, dateRange(t.startsOn, t.endsOn)].filter(Boolean).join(' · ')).join('; ');
+  row.threatened.map((t) => [t.jobReference ?? 'Booking', t.customerName, formatDateRange(t.startsOn, t.endsOn)].filter(Boolean).join(' · ')).join('; ');
 
 function Threats({ row }: { row: DueRow }) {
   if (!row.threatened.length) return <span className="text-ink-500">None</span>;
@@ -26,7 +25,7 @@ function Threats({ row }: { row: DueRow }) {
             {t.jobReference ?? 'Booking'}
           </Link>
           {t.customerName ? <span> · {t.customerName}</span> : null}
-          <span className="block text-sm text-ink-700">{dateRange(t.startsOn, t.endsOn)}</span>
+          <span className="block text-sm text-ink-700">{formatDateRange(t.startsOn, t.endsOn)}</span>
         </li>
       ))}
     </ul>
@@ -75,7 +74,7 @@ export function DueGrid({
         valueGetter: (p) => p.data?.assetTag ?? '',
         cellRenderer: (p: ICellRendererParams<DueRow>) =>
           p.data ? (
-            <Link to={`/fleet/${p.data.id}`} className="font-mono font-semibold text-ink-900 underline decoration-brass-deep">
+            <Link to={`/fleet/${p.data.id}`} className="font-mono font-semibold text-ink-900 underline decoration-brass-deep whitespace-nowrap">
               {p.data.assetTag}
             </Link>
           ) : null,

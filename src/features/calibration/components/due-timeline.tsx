@@ -1,5 +1,5 @@
 import { addDays } from '../../../lib/calibration';
-import { formatCalendarDate, formatCount } from '../../../lib/format';
+import { formatCalendarDate, formatCount, useFirmFormat } from '../../../lib/format';
 
 const W = 760;
 const H = 190;
@@ -8,8 +8,6 @@ const R = 8;
 const T = 14;
 const B = 36;
 
-const monthLabel = new Intl.DateTimeFormat(undefined, { month: 'short', timeZone: 'UTC' });
-const yearLabel = new Intl.DateTimeFormat(undefined, { year: 'numeric', timeZone: 'UTC' });
 const utc = (d: string) => new Date(`${d}T00:00:00Z`);
 
 /**
@@ -18,6 +16,7 @@ const utc = (d: string) => new Date(`${d}T00:00:00Z`);
  * end of the firm's due-soon window. The same numbers sit in a table below.
  */
 export function DueTimeline({ weeks, today, dueSoonDays }: { weeks: { weekStart: string; count: number }[]; today: string; dueSoonDays: number }) {
+  const { month } = useFirmFormat();
   if (!weeks.length) return null;
   const max = Math.max(1, ...weeks.map((w) => w.count));
   const top = max <= 4 ? max : Math.ceil(max / 2) * 2;
@@ -76,13 +75,8 @@ export function DueTimeline({ weeks, today, dueSoonDays }: { weeks: { weekStart:
           <g key={i}>
             <line x1={x(i)} x2={x(i)} y1={H - B} y2={H - B + 6} stroke="#a7afbd" />
             <text x={x(i) + 2} y={H - B + 18} fontSize={11} fill="#3a4660">
-              {monthLabel.format(d)}
+              {month(d.toISOString().slice(0, 7))}
             </text>
-            {i === monthStarts[0].i || d.getUTCMonth() === 0 ? (
-              <text x={x(i) + 2} y={H - B + 31} fontSize={10} fill="#5b6474">
-                {yearLabel.format(d)}
-              </text>
-            ) : null}
           </g>
         ))}
       </svg>

@@ -4,14 +4,14 @@ import { Button } from '../../../components/button';
 import { Notice } from '../../../components/notice';
 import { Panel } from '../../../components/panel';
 import { StatusChip } from '../../../components/status-chip';
-import { formatCalendarDate, formatDateTime } from '../../../lib/format';
+import { formatCalendarDate, formatDateRange, formatDateTime, formatUm } from '../../../lib/format';
 import { useAssessImpactBooking } from '../api/assess-impact-booking';
 import { useCloseImpactReview } from '../api/close-impact-review';
 import { useCreateImpactNotices } from '../api/create-impact-notices';
 import type { ImpactAssessment, ImpactBookingView, ImpactNoticesView, ImpactReviewView } from '../../../../shared/calibration/views';
 import { assessmentForSuggestion, allowanceWords, type TriageFacts } from '../../../../shared/calibration/triage';
 import { useAcceptImpactSuggestions } from '../api/accept-impact-suggestions';
-import { assessmentChoices, assessmentWords, dateRange, noticeGroupWords, SuggestionChip } from './calibration-words';
+import { assessmentChoices, assessmentWords, noticeGroupWords, SuggestionChip } from './calibration-words';
 
 /** "Every job that used TRK-001 between its last passing evidence on … and the finding on …" */
 export function impactScope(review: ImpactReviewView, tag: string): string {
@@ -46,7 +46,7 @@ function BookingAssessment({ review, booking, canAssess }: { review: ImpactRevie
   const noteId = useId();
   const [note, setNote] = useState(booking.note ?? '');
   useEffect(() => setNote(booking.note ?? ''), [booking.note]);
-  const ref = booking.jobReference ?? dateRange(booking.startsOn, booking.endsOn);
+  const ref = booking.jobReference ?? formatDateRange(booking.startsOn, booking.endsOn);
   const save = (assessment: ImpactAssessment, nextNote: string) =>
     assess.mutate({ reviewId: review.id, bookingId: booking.bookingId, assessment, note: nextNote.trim() || undefined });
   const editable = canAssess && review.state === 'open';
@@ -61,7 +61,7 @@ function BookingAssessment({ review, booking, canAssess }: { review: ImpactRevie
           {booking.assessment ? <StatusChip tone="ok" label="Assessed" /> : <StatusChip tone="warn" label="To assess" />}
         </p>
         <p>{booking.customerName ?? (booking.rentalId ? 'Rental customer' : 'In-house')}</p>
-        <p className="text-sm text-ink-700">{dateRange(booking.startsOn, booking.endsOn)}</p>
+        <p className="text-sm text-ink-700">{formatDateRange(booking.startsOn, booking.endsOn)}</p>
         <Triage booking={booking} />
         <p className="text-sm text-ink-700">
           {booking.contactEmail ? `Contact: ${booking.contactEmail}` : 'No contact e-mail on the job: tell the customer another way.'}
@@ -139,7 +139,7 @@ function TriageRule({ review }: { review: ImpactReviewView }) {
     <div className="mb-3 rounded-md border border-paper-line bg-paper p-3 text-sm">
       <p>
         <span className="font-semibold">As-found error: </span>
-        {errorUm === null ? `not recorded (${from} is missing), so no booking can be judged from the records.` : `${errorUm.toFixed(1)} µm, from ${from}.`}
+        {errorUm === null ? `not recorded (${from} is missing), so no booking can be judged from the records.` : `${formatUm(errorUm)}, from ${from}.`}
       </p>
       <p>
         <span className="font-semibold">Rule: </span>

@@ -32,7 +32,7 @@ export function LabTripCard({ trip, today, canSend, headingLevel = 3 }: { trip: 
       <ul className="flex flex-wrap gap-x-4 gap-y-1">
         {trip.items.map((item) => (
           <li key={item.assetId} className="flex items-center gap-2">
-            <Link to={`/fleet/${item.assetId}`} className="font-mono font-semibold underline decoration-brass-deep">
+            <Link to={`/fleet/${item.assetId}`} className="font-mono font-semibold underline decoration-brass-deep whitespace-nowrap">
               {item.assetTag}
             </Link>
             {item.receivedOn ? (

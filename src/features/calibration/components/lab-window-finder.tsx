@@ -1,19 +1,21 @@
 import { useId, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/button';
+import { DateInput } from '../../../components/date-field';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
-import { formatCalendarDate } from '../../../lib/format';
+import { formatCalendarDate, formatDateRange } from '../../../lib/format';
 import { usePlanLabTrip } from '../api/plan-lab-trip';
 import type { LabTripView, LabWindowsView } from '../../../../shared/calibration/views';
-import { dateRange, days } from './calibration-words';
+import { isCalendarDate } from '../../../../shared/dates/calendar-date';
+import { days } from './calibration-words';
 
 const purposeWords: Record<string, string> = { job: 'Site job', rental: 'Rental', lab: 'Lab trip', internal: 'In-house use' };
 
 /** "Free 12 Jan – 2 Feb (22 days) — back by 25 Jan", or open-ended when no booking follows. */
 export function gapText(gap: LabWindowsView['gaps'][number]): string {
   const free = gap.endsOn
-    ? `Free ${dateRange(gap.startsOn, gap.endsOn)} (${days(gap.freeDays ?? 0)})`
+    ? `Free ${formatDateRange(gap.startsOn, gap.endsOn)} (${days(gap.freeDays ?? 0)})`
     : `Free from ${formatCalendarDate(gap.startsOn)} on, nothing booked after`;
   return `${free} — back by ${formatCalendarDate(gap.returnBy)}`;
 }
@@ -36,6 +38,10 @@ export function LabWindowFinder({ windows, onPlanned, canPlan }: { windows: LabW
   const providerId = useId();
   const [planning, setPlanning] = useState<string | null>(null);
   const [own, setOwn] = useState({ sentOn: '', expectedBackOn: '' });
+  const sentOnId = useId();
+  const backOnId = useId();
+  const ownSentOk = own.sentOn === '' || isCalendarDate(own.sentOn);
+  const ownBackOk = own.expectedBackOn === '' || (isCalendarDate(own.expectedBackOn) && (!isCalendarDate(own.sentOn) || own.expectedBackOn >= own.sentOn));
   const assetIds = windows.assets.map((a) => a.id);
   const tags = windows.assets.map((a) => a.assetTag).join(', ');
   const several = windows.assets.length > 1;
@@ -60,7 +66,7 @@ export function LabWindowFinder({ windows, onPlanned, canPlan }: { windows: LabW
                   {b.jobReference ?? purposeWords[b.purpose] ?? 'Booking'}
                 </Link>
                 <span className="text-sm text-ink-700">
-                  {purposeWords[b.purpose] ?? b.purpose} · {dateRange(b.startsOn, b.endsOn)}
+                  {purposeWords[b.purpose] ?? b.purpose} · {formatDateRange(b.startsOn, b.endsOn)}
                 </span>
               </li>
             ))}
@@ -156,27 +162,29 @@ export function LabWindowFinder({ windows, onPlanned, canPlan }: { windows: LabW
             }}
           >
             <h3 className="w-full font-semibold">Or pick your own dates</h3>
-            <label className="flex flex-col gap-1 text-sm font-semibold text-ink-800">
-              Goes to the lab on
-              <input
-                type="date"
-                required
-                value={own.sentOn}
-                onChange={(e) => setOwn({ ...own, sentOn: e.target.value })}
-                className="min-h-10 rounded-md border border-paper-line bg-card px-2 text-base font-normal"
-              />
-            </label>
-            <label className="flex flex-col gap-1 text-sm font-semibold text-ink-800">
-              Expected back (optional)
-              <input
-                type="date"
-                min={own.sentOn || undefined}
+            <div className="flex flex-col gap-1">
+              <label htmlFor={sentOnId} className="text-sm font-semibold text-ink-800">
+                Goes to the lab on
+              </label>
+              <DateInput id={sentOnId} required value={own.sentOn} onValueChange={(sentOn) => setOwn({ ...own, sentOn })} invalid={!ownSentOk} />
+            </div>
+            <div className="flex flex-col gap-1">
+              <label htmlFor={backOnId} className="text-sm font-semibold text-ink-800">
+                Expected back (optional)
+              </label>
+              <DateInput
+                id={backOnId}
+                min={ownSentOk ? own.sentOn : undefined}
                 value={own.expectedBackOn}
-                onChange={(e) => setOwn({ ...own, expectedBackOn: e.target.value })}
-                className="min-h-10 rounded-md border border-paper-line bg-card px-2 text-base font-normal"
+                onValueChange={(expectedBackOn) => setOwn({ ...own, expectedBackOn })}
+                invalid={!ownBackOk}
               />
-            </label>
-            <Button type="submit" disabled={!provider.trim() || !own.sentOn || plan.isPending} busy={plan.isPending && planning === 'own'}>
+            </div>
+            <Button
+              type="submit"
+              disabled={!provider.trim() || !ownSentOk || !own.sentOn || !ownBackOk || plan.isPending}
+              busy={plan.isPending && planning === 'own'}
+            >
               Plan for these dates
             </Button>
           </form>

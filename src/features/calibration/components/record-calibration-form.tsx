@@ -2,6 +2,7 @@ import { Form, Formik, useField, useFormikContext } from 'formik';
 import { useId, useState } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
+import { DateField } from '../../../components/date-field';
 import { Field, SelectField } from '../../../components/field';
 import { AlertIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
@@ -186,7 +187,7 @@ export function RecordCalibrationForm({ asset, today, onSaved }: { asset: AssetV
             </Notice>
           ) : null}
           <div className="grid gap-4 sm:grid-cols-2">
-            <Field name="performedOn" label="Performed on" type="date" max={today} hint="The calibration date on the certificate." />
+            <DateField name="performedOn" label="Performed on" max={today} hint="The calibration date on the certificate." />
             <Field name="provider" label="Provider" hint="The lab that calibrated it." />
             <Field name="certificateNumber" label="Certificate number" mono />
             <Field name="intervalMonths" label="Interval (months)" inputMode="numeric" hint={`The plan says ${planMonths} months.`} />

@@ -18,7 +18,7 @@ export const judgedUm = (c: CheckView) => (c.kind === 'tip_validation' ? c.resul
 
 /** The asset page's field checks: state per position and trend for tips, then every check, newest first. */
 export function AssetChecks({ asset, className = '' }: { asset: AssetView; className?: string }) {
-  const { dateTime, timeZone } = useFirmFormat();
+  const { dateTime } = useFirmFormat();
   const isTip = asset.type === 'tip';
   const checks = useChecks({ assetId: asset.id, limit: 100, offset: 0 });
   const tipStatus = useTipValidation(asset.id, { enabled: isTip });
@@ -33,7 +33,7 @@ export function AssetChecks({ asset, className = '' }: { asset: AssetView; class
           {tipStatus.data ? <TipValidationStates status={tipStatus.data} dateTime={(v) => dateTime(v)} /> : null}
           {tipStatus.isError ? <Notice tone="error">{tipStatus.error.message}</Notice> : null}
           <h3 className="font-semibold">Largest deviation over time</h3>
-          {checks.data ? <ValidationHistoryChart checks={tipChecks} timeZone={timeZone} forecasts={forecast.data?.items} /> : null}
+          {checks.data ? <ValidationHistoryChart checks={tipChecks} forecasts={forecast.data?.items} /> : null}
           {forecast.data ? <TipForecastNotes forecasts={forecast.data.items} /> : null}
           {forecast.isError ? <Notice tone="error">{forecast.error.message}</Notice> : null}
         </div>

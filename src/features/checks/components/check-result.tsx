@@ -7,18 +7,18 @@ import { checkKindWords, decisionRuleWords, positionWords, toleranceText, um } f
 import { DecisionMark } from './decision-mark';
 import { ReadingsSketch } from './readings-sketch';
 
-const mm = (v: number) => `${formatNumber(v, 4)} mm`;
-const pointText = (p: { x: number; y: number; z: number }) => `${formatNumber(p.x, 4)}, ${formatNumber(p.y, 4)}, ${formatNumber(p.z, 4)}`;
-
 /** A stored check: the server's own numbers and decision, word plus mark. */
 export function CheckResult({ check, assetTag, heldNotice = true }: { check: CheckView; assetTag?: string; heldNotice?: boolean }) {
-  const { dateTime } = useFirmFormat();
+  // Coordinates named and without grouping, so "1,250" never reads as two of them; inputs are kept to 4 decimals.
+  const { dateTime, coordinate, mm: millimetres } = useFirmFormat();
+  const pointText = (p: { x: number; y: number; z: number }) => coordinate(p, 4);
+  const mm = (v: number) => millimetres(v, 4);
   const r = check.result;
   let facts: { term: string; value: ReactNode; mono?: boolean }[] = [];
   if (check.kind === 'tip_validation') {
     facts = [
       { term: 'Position', value: positionWords[check.position] },
-      { term: 'Reference point R (mm)', value: pointText(check.inputs.reference), mono: true },
+      { term: 'Reference point R', value: pointText(check.inputs.reference), mono: true },
       ...check.result.deviationsUm.map((d, i) => ({ term: `Reading ${i + 1}: distance from R`, value: um(d), mono: true })),
       { term: "Mean point's offset", value: um(check.result.meanOffsetUm), mono: true },
       { term: 'Spread', value: um(check.result.spreadUm), mono: true },
@@ -26,8 +26,8 @@ export function CheckResult({ check, assetTag, heldNotice = true }: { check: Che
     ];
   } else if (check.kind === 'two_face') {
     facts = [
-      { term: 'Front face (mm)', value: pointText(check.inputs.front), mono: true },
-      { term: 'Back face (mm)', value: pointText(check.inputs.back), mono: true },
+      { term: 'Front face', value: pointText(check.inputs.front), mono: true },
+      { term: 'Back face', value: pointText(check.inputs.back), mono: true },
       { term: 'Two-face error (judged)', value: um(check.result.errorUm), mono: true },
     ];
   } else {

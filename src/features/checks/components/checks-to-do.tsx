@@ -24,7 +24,7 @@ export function ChecksToDo() {
             to={`/checks/new?assetId=${c.assetId}&kind=tip_validation`}
             className="flex min-h-11 flex-wrap items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash"
           >
-            <span className="font-mono font-semibold text-ink-900">{c.assetTag}</span>
+            <span className="font-mono font-semibold text-ink-900 whitespace-nowrap">{c.assetTag}</span>
             <span className="text-sm text-ink-700">{c.position} position</span>
             <span className="ml-auto shrink-0">
               {c.reason === 'forecast' ? (

@@ -65,7 +65,7 @@ export function TipsForecastToFail({ level = 2 }: { level?: 2 | 3 }) {
       {items.map((f) => (
         <li key={`${f.assetId}-${f.position}`}>
           <Link to={`/fleet/${f.assetId}`} className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-1 px-1 py-1.5 hover:bg-brass-wash">
-            <span className="font-mono font-semibold text-ink-900">{f.assetTag}</span>
+            <span className="font-mono font-semibold text-ink-900 whitespace-nowrap">{f.assetTag}</span>
             <span className="text-sm text-ink-700">{positionWords[f.position].toLowerCase()} position</span>
             <span className="ml-auto shrink-0">
               {f.forecast.state === 'forecast' ? (

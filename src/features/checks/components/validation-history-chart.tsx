@@ -29,7 +29,7 @@ function Marker({ x, y, position, fail }: { x: number; y: number; position: TipP
  * fitted trend runs on (dotted) to the day it meets its limit (◆), with the
  * likely window drawn as a bar on the limit.
  */
-export function ValidationHistoryChart({ checks, timeZone, forecasts = [] }: { checks: TipCheck[]; timeZone?: string; forecasts?: TipForecastView[] }) {
+export function ValidationHistoryChart({ checks, forecasts = [] }: { checks: TipCheck[]; forecasts?: TipForecastView[] }) {
   const points = [...checks].sort((a, b) => a.performedAt.localeCompare(b.performedAt));
   if (points.length < 2) {
     return <p className="text-sm text-ink-700">The trend appears once the tip has two validations or more.</p>;

@@ -4,13 +4,13 @@ import { CountedSection } from '../../../components/counted-section';
 import { StatusChip } from '../../../components/status-chip';
 import { assetTypeTitles } from '../../../lib/assets';
 import type { StoredCopy } from '../../../lib/field/field-store';
-import { formatCalendarDate, formatDateTime } from '../../../lib/format';
+import { formatCalendarDate, formatDateRange, formatDateTime, formatUm } from '../../../lib/format';
 import type { AssetView } from '../../../../shared/assets/views';
 import type { BookingView } from '../../../../shared/bookings/views';
 import type { FieldCopyView } from '../../../../shared/field/views';
 
 const bookingName = (b: BookingView) => b.kit?.name ?? b.job?.reference ?? b.rental?.number ?? 'Booked items';
-const days = (b: BookingView) => `${formatCalendarDate(b.startsOn)} – ${formatCalendarDate(b.endsOn)}`;
+const days = (b: BookingView) => formatDateRange(b.startsOn, b.endsOn);
 
 /** Tip positions whose latest validation on this phone's copy did not pass (or never happened): what the booking rules would refuse. */
 export function tipsToValidate(copy: FieldCopyView) {
@@ -31,7 +31,7 @@ function ItemLine({ item }: { item: AssetView }) {
   return (
     <li>
       <Link to={`/fleet/${item.id}`} className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-1 px-1 py-1.5 hover:bg-brass-wash">
-        <span className="font-mono font-semibold text-ink-900">{item.assetTag}</span>
+        <span className="font-mono font-semibold text-ink-900 whitespace-nowrap">{item.assetTag}</span>
         <span className="text-sm text-ink-700">{assetTypeTitles[item.type]}</span>
         {item.rfidTag ? <span className="font-mono text-sm text-ink-700">RFID {item.rfidTag}</span> : null}
         <span className="ml-auto flex flex-wrap gap-1">
@@ -92,7 +92,7 @@ export function FieldKitPanels({ stored }: { stored: StoredCopy }) {
                 to={`/checks/new?assetId=${tip.id}&kind=tip_validation`}
                 className="flex min-h-11 flex-wrap items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash"
               >
-                <span className="font-mono font-semibold">{tip.assetTag}</span>
+                <span className="font-mono font-semibold whitespace-nowrap">{tip.assetTag}</span>
                 <span className="text-sm">{position}</span>
                 <span className="ml-auto">{last ? <StatusChip tone="bad" label="Failed last time" /> : <StatusChip tone="warn" label="Not validated" />}</span>
               </Link>
@@ -123,7 +123,7 @@ export function FieldTipValidations({ copy, tip }: { copy: FieldCopyView; tip: A
                   <StatusChip tone={last.decision === 'pass' ? 'ok' : 'bad'} label={last.decision === 'pass' ? 'Passed' : 'Failed'} />
                   <span className="text-sm text-ink-700">
                     {formatDateTime(last.performedAt)}
-                    {last.maxDeviationUm !== null ? ` · ${last.maxDeviationUm.toFixed(1)} µm of ${last.toleranceUm.toFixed(1)} µm` : ''}
+                    {last.maxDeviationUm !== null ? ` · ${formatUm(last.maxDeviationUm)} of ${formatUm(last.toleranceUm)}` : ''}
                   </span>
                 </>
               ) : (

@@ -3,6 +3,7 @@ import { useMemo, useState, type ReactNode } from 'react';
 import * as Yup from 'yup';
 import { CalibrationChip } from '../../../components/asset-status';
 import { Button } from '../../../components/button';
+import { DateField } from '../../../components/date-field';
 import { CheckboxField, CheckboxGroup, Field, SelectField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../components/safety-cautions';
@@ -212,7 +213,7 @@ export function AssetForm({ mode, asset, timeZone, currency, dueSoonDays, onSave
                 disabled={!values.calibration.required}
               />
               <Field name="calibration.provider" label="Calibration provider" autoComplete="off" />
-              <Field name="calibration.lastCalibratedOn" label="Last calibrated on" type="date" />
+              <DateField name="calibration.lastCalibratedOn" label="Last calibrated on" />
               <DuePreview timeZone={timeZone} dueSoonDays={dueSoonDays} />
             </Section>
 

@@ -35,7 +35,7 @@ export function RecalibrationsDue({ footer }: { footer?: ReactNode } = {}) {
             {due.data.items.map((asset) => (
               <li key={asset.id}>
                 <Link to={`/fleet/${asset.id}`} className="flex min-h-11 items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash">
-                  <span className="font-mono font-semibold text-ink-900">{asset.assetTag}</span>
+                  <span className="font-mono font-semibold text-ink-900 whitespace-nowrap">{asset.assetTag}</span>
                   <span className="min-w-0 truncate text-sm text-ink-700">{assetTypeTitles[asset.type]}</span>
                   <span className="ml-auto flex shrink-0 items-center gap-2">
                     <span className="text-sm text-ink-700">{asset.calibration.dueOn ? formatCalendarDate(asset.calibration.dueOn) : 'never calibrated'}</span>

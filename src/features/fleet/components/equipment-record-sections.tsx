@@ -3,7 +3,7 @@ import type { EquipmentRecordView } from '../../../../shared/records/views';
 import { Panel } from '../../../components/panel';
 import { apiUrl } from '../../../lib/api-client';
 import { checkKindTitles } from '../../../../shared/checks/vocabulary';
-import { formatCalendarDate, useFirmFormat } from '../../../lib/format';
+import { formatCalendarDate, formatDateRange, useFirmFormat } from '../../../lib/format';
 
 const words = (v: string) => v.replace(/_/g, ' ');
 const someone = (name: string | null) => name ?? 'someone no longer on record';
@@ -130,7 +130,7 @@ export function EquipmentRecordSections({ record }: { record: EquipmentRecordVie
               ...(r.bookings.length
                 ? r.bookings.map(
                     (b) =>
-                      `${b.jobReference ?? 'Booking'} (${b.customerName ?? 'no customer'}, ${b.startsOn} to ${b.endsOn}): ${
+                      `${b.jobReference ?? 'Booking'} (${b.customerName ?? 'no customer'}, ${formatDateRange(b.startsOn, b.endsOn)}): ${
                         b.assessment ? `${assessmentWords[b.assessment]}${b.note ? `: ${b.note}` : ''} — ${someone(b.assessedBy)}` : 'not assessed yet'
                       }${b.noticeQueuedAt ? ` · notice sent to ${b.noticeTo} ${dateTime(b.noticeQueuedAt)}` : ''}`,
                   )

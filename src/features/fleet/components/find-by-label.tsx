@@ -89,7 +89,7 @@ export function FindByLabel({
             <span className="mt-2 flex flex-wrap items-center gap-2">
               <span>Did you mean</span>
               {suggestions.map((s) => (
-                <Link key={s.id} to={`/fleet/${s.id}`} className="font-mono font-semibold text-brass-deep underline">
+                <Link key={s.id} to={`/fleet/${s.id}`} className="font-mono font-semibold text-brass-deep underline whitespace-nowrap">
                   {s.assetTag}
                 </Link>
               ))}

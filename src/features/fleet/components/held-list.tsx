@@ -30,7 +30,7 @@ export function HeldItems() {
             {held.data.items.map((asset) => (
               <li key={asset.id}>
                 <Link to={`/fleet/${asset.id}`} className="flex min-h-11 items-center gap-x-3 px-1 py-1.5 hover:bg-brass-wash">
-                  <span className="font-mono font-semibold text-ink-900">{asset.assetTag}</span>
+                  <span className="font-mono font-semibold text-ink-900 whitespace-nowrap">{asset.assetTag}</span>
                   <span className="min-w-0 truncate text-sm text-ink-700">{assetTypeTitles[asset.type]}</span>
                   <span className="ml-auto shrink-0">
                     <AssetStatusChip status={asset.status} />

@@ -74,7 +74,7 @@ function PreviewTable({ result }: { result: AssetImportResult }) {
             <tr key={r.row} className="border-t border-paper-line">
               <td className="px-2 py-1 font-mono">{r.row}</td>
               <td className="px-2 py-1">{r.type}</td>
-              <td className="px-2 py-1 font-mono">{r.assetTag}</td>
+              <td className="px-2 py-1 font-mono whitespace-nowrap">{r.assetTag}</td>
               <td className="px-2 py-1 font-mono">{r.serialNumber}</td>
               <td className="px-2 py-1">{r.manufacturer ?? '—'}</td>
               <td className="px-2 py-1">{r.model ?? '—'}</td>

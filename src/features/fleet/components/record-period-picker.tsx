@@ -1,15 +1,16 @@
 import { useId } from 'react';
 import { Button } from '../../../components/button';
+import { DateInput } from '../../../components/date-field';
+import { isCalendarDate } from '../../../../shared/dates/calendar-date';
 import type { RecordPeriodChoice } from '../api/keys';
-
-const inputClasses = 'min-h-10 rounded-md border border-paper-line bg-card px-2';
 
 /** The record's period: first and last day (both included), each optional; "All time" clears both. */
 export function RecordPeriodPicker({ period, onChange }: { period: RecordPeriodChoice; onChange: (period: RecordPeriodChoice) => void }) {
   const fromId = useId();
   const toId = useId();
   const backwards = !!period.from && !!period.to && period.to < period.from;
-  const set = (end: 'from' | 'to', value: string) => onChange({ ...period, [end]: value || undefined });
+  // Text that is not a date yet keeps the period as it was until it is one.
+  const set = (end: 'from' | 'to', value: string) => (value === '' || isCalendarDate(value) ? onChange({ ...period, [end]: value || undefined }) : undefined);
   return (
     <fieldset className="mb-4 flex flex-wrap items-end gap-3 rounded-md border border-paper-line bg-card p-3">
       <legend className="px-1 text-sm font-semibold text-ink-800">Period</legend>
@@ -17,21 +18,13 @@ export function RecordPeriodPicker({ period, onChange }: { period: RecordPeriodC
         <label htmlFor={fromId} className="text-sm font-semibold text-ink-800">
           First day
         </label>
-        <input id={fromId} type="date" value={period.from ?? ''} max={period.to} onChange={(e) => set('from', e.target.value)} className={inputClasses} />
+        <DateInput id={fromId} value={period.from ?? ''} max={period.to} onValueChange={(value) => set('from', value)} />
       </div>
       <div className="flex flex-col gap-1">
         <label htmlFor={toId} className="text-sm font-semibold text-ink-800">
           Last day
         </label>
-        <input
-          id={toId}
-          type="date"
-          value={period.to ?? ''}
-          min={period.from}
-          onChange={(e) => set('to', e.target.value)}
-          className={inputClasses}
-          aria-invalid={backwards || undefined}
-        />
+        <DateInput id={toId} value={period.to ?? ''} min={period.from} onValueChange={(value) => set('to', value)} invalid={backwards} />
       </div>
       <Button onClick={() => onChange({})} disabled={!period.from && !period.to}>
         All time

@@ -17,7 +17,7 @@ export function IncidentFacts({ incident, currency }: { incident: IncidentView; 
             term: 'Item',
             value: incident.asset ? (
               <span className="flex flex-wrap items-center gap-2">
-                <Link to={`/fleet/${incident.assetId}`} className="font-mono font-semibold text-brass-deep underline">
+                <Link to={`/fleet/${incident.assetId}`} className="font-mono font-semibold text-brass-deep underline whitespace-nowrap">
                   {incident.asset.assetTag}
                 </Link>
                 <span>{assetTypeTitles[incident.asset.type]}</span>

@@ -153,8 +153,8 @@ export function ReportIncidentForm({
           Report sent
         </h2>
         <p>
-          <strong className="font-mono">{asset.assetTag}</strong> is now on hold: it cannot be booked or sent out until it has been checked or recalibrated and
-          released.
+          <strong className="font-mono whitespace-nowrap">{asset.assetTag}</strong> is now on hold: it cannot be booked or sent out until it has been checked or
+          recalibrated and released.
         </p>
         <p>
           The shop manager and the owner have been told by e-mail
@@ -182,7 +182,8 @@ export function ReportIncidentForm({
         </h2>
         <p>
           The report{photos.length ? ` and its ${photos.length} photo${photos.length === 1 ? '' : 's'}` : ''} stay on this phone and are sent by themselves when
-          there is signal. Then <strong className="font-mono">{asset.assetTag}</strong> goes on hold and the shop manager and the owner are e-mailed.
+          there is signal. Then <strong className="font-mono whitespace-nowrap">{asset.assetTag}</strong> goes on hold and the shop manager and the owner are
+          e-mailed.
         </p>
         {asset.type === 'battery' ? <BatteryCaution /> : null}
         <p className="text-base text-ink-700">Until then, keep the item apart and do not use it.</p>
@@ -233,7 +234,7 @@ export function ReportIncidentForm({
       {({ isSubmitting }) => (
         <Form noValidate aria-label="Report damage" className="flex flex-col gap-5">
           <section aria-label="The item" className="flex flex-wrap items-center gap-x-3 gap-y-1 rounded-lg border-2 border-ink-900 bg-card px-4 py-3">
-            <span className="font-mono text-2xl font-bold">{asset.assetTag}</span>
+            <span className="font-mono text-2xl font-bold whitespace-nowrap">{asset.assetTag}</span>
             <span className="text-lg">{assetTypeTitles[asset.type]}</span>
             <AssetStatusChip status={asset.status} />
             {asset.model || asset.manufacturer ? (

@@ -19,7 +19,7 @@ function MemberCard({ asset, onRemove, busy }: { asset: AssetView; onRemove?: ()
     <li className="flex flex-col gap-2 rounded-lg border border-paper-line bg-card p-3">
       <div className="flex items-start justify-between gap-2">
         <div className="min-w-0">
-          <Link to={`/fleet/${asset.id}`} className="font-mono text-base font-semibold text-ink-900 underline decoration-brass">
+          <Link to={`/fleet/${asset.id}`} className="font-mono text-base font-semibold text-ink-900 underline decoration-brass whitespace-nowrap">
             {asset.assetTag}
           </Link>
           <p className="truncate text-sm text-ink-700">
@@ -61,7 +61,7 @@ function AddMembers({ onAdd, busy }: { onAdd: (asset: AssetView) => void; busy: 
             {candidates.data.items.map((asset) => (
               <li key={asset.id} className="flex items-center gap-3 py-1.5">
                 <span className="min-w-0 flex-1">
-                  <span className="font-mono font-semibold">{asset.assetTag}</span>{' '}
+                  <span className="font-mono font-semibold whitespace-nowrap">{asset.assetTag}</span>{' '}
                   <span className="text-sm text-ink-700">
                     {assetTypeTitles[asset.type]}
                     {asset.model ? ` · ${asset.model}` : ''}

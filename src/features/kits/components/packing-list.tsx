@@ -26,7 +26,7 @@ export function PackingList({ kit, organizationName }: { kit: KitWithMembersView
         <tbody>
           {kit.members.map((m) => (
             <tr key={m.id} className="break-inside-avoid border-b border-black/40">
-              <td className="py-2 pr-2 font-mono font-semibold">{m.assetTag}</td>
+              <td className="py-2 pr-2 font-mono font-semibold whitespace-nowrap">{m.assetTag}</td>
               <td className="py-2 pr-2">{assetTypeTitles[m.type]}</td>
               <td className="py-2 pr-2 font-mono">{m.serialNumber}</td>
               <td className="py-2 pr-2">{m.model ?? ''}</td>

@@ -71,7 +71,7 @@ export function ShippingSheetPanel({ kitId }: { kitId: string }) {
                 <tbody>
                   {sheet.data.lines.map((line) => (
                     <tr key={line.assetId} className="border-t border-paper-line">
-                      <td className="px-2 py-1.5 font-mono font-semibold">{line.assetTag}</td>
+                      <td className="px-2 py-1.5 font-mono font-semibold whitespace-nowrap">{line.assetTag}</td>
                       <td className="px-2 py-1.5 text-right">{formatNumber(line.nominalVoltageV, 2)} V</td>
                       <td className="px-2 py-1.5 text-right">{formatNumber(line.ratedCapacityAh, 3)} Ah</td>
                       <td className="px-2 py-1.5 text-right font-semibold">{formatWattHours(line.wattHours)}</td>

@@ -2,7 +2,8 @@ import { Form, Formik, useFormikContext } from 'formik';
 import * as Yup from 'yup';
 import type { AuditPackScope } from '../../../../shared/schemas/records';
 import { Button } from '../../../components/button';
-import { Field, SelectField } from '../../../components/field';
+import { DateField } from '../../../components/date-field';
+import { SelectField } from '../../../components/field';
 import { DownloadIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
 import { UploadProgress } from '../../../components/upload-progress';
@@ -106,8 +107,8 @@ export function AuditPackForm({ kits, today }: { kits: { id: string; name: strin
       {({ values }) => (
         <Form className="flex flex-col gap-4" noValidate>
           <div className="grid gap-3 sm:grid-cols-2">
-            <Field name="from" label="First day" type="date" />
-            <Field name="to" label="Last day" type="date" />
+            <DateField name="from" label="First day" />
+            <DateField name="to" label="Last day" />
           </div>
           <SelectField name="scope" label="Items" options={scopeOptions} />
           {values.scope === 'kit' ? (

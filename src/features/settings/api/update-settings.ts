@@ -10,6 +10,8 @@ export interface UpdateSettingsInput {
   /** Days before a booking starts that its checkout opens. */
   checkoutOpensDaysBefore?: number;
   timeZone?: string;
+  /** One of firmLocales: how dates, numbers and money are written everywhere. */
+  locale?: string;
   decisionRule?: DecisionRule;
   /** Impact triage ratio n (n:1), 1 to 20. */
   triageRatio?: number;

@@ -8,7 +8,7 @@ type ErrorPlacement = Parameters<typeof applyServerErrors>[2];
 /**
  * The save step every settings form shares: send one part of the settings,
  * then say it was saved, or put the server's complaints on the fields and
- * keep the rest as a message.
+ * keep the rest as a message. Resolves to whether it was saved.
  */
 export function useSettingsSave() {
   const update = useUpdateSettings();
@@ -20,8 +20,10 @@ export function useSettingsSave() {
     try {
       await update.mutateAsync(input);
       setSaved(true);
+      return true;
     } catch (error) {
       setProblem(applyServerErrors(error, helpers, placement));
+      return false;
     }
   }
   return { save, saved, problem };

@@ -6,6 +6,7 @@ import { Notice } from '../../../components/notice';
 import { checkKindWords, type CheckKind, type DecisionRule, type Tolerance } from '../../../lib/checks';
 import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
+import { ReportUnsaved } from './unsaved-changes';
 
 const kinds = Object.keys(checkKindWords) as CheckKind[];
 
@@ -118,6 +119,7 @@ export function CheckRulesForm({ settings }: { settings: OrganizationSettingsVie
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Field checks" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
+          <ReportUnsaved section="Field checks" />
           {saved ? <Notice tone="success">Saved. New field checks are judged this way.</Notice> : null}
           {problem ? (
             <Notice tone="error" title="Not saved">

@@ -7,6 +7,7 @@ import { formatNumber } from '../../../lib/format';
 import type { IntervalPolicy } from '../../../../shared/calibration/interval-review';
 import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
+import { ReportUnsaved } from './unsaved-changes';
 
 type Values = { lengthenAfter: number | ''; lengthenFactor: string; shortenFactor: string; minMonths: number | ''; maxMonths: number | '' };
 
@@ -85,6 +86,7 @@ export function IntervalPolicyForm({ settings }: { settings: OrganizationSetting
     >
       {({ isSubmitting, dirty, values }) => (
         <Form noValidate aria-label="Interval review" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
+          <ReportUnsaved section="Interval review" />
           {saved ? <Notice tone="success">Saved. Calibrations recorded from now on are reviewed with these rules.</Notice> : null}
           {problem ? (
             <Notice tone="error" title="Not saved">

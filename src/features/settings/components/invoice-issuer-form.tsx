@@ -5,6 +5,7 @@ import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import type { InvoiceIssuer, OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
+import { ReportUnsaved } from './unsaved-changes';
 
 const fields = ['address', 'taxNumber', 'paymentTerms', 'paymentDays', 'bankDetails'] as const;
 type Values = Omit<InvoiceIssuer, 'paymentDays'> & { paymentDays: string };
@@ -51,6 +52,7 @@ export function InvoiceIssuerForm({ settings }: { settings: OrganizationSettings
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Invoice details" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
+          <ReportUnsaved section="Invoice details" />
           {saved ? <Notice tone="success">Saved. Invoices issued from now on carry these details; issued ones keep theirs.</Notice> : null}
           {problem ? (
             <Notice tone="error" title="Not saved">

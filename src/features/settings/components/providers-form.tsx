@@ -6,6 +6,7 @@ import { AlertIcon, PlusIcon } from '../../../components/icons';
 import { Notice } from '../../../components/notice';
 import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
+import { ReportUnsaved } from './unsaved-changes';
 
 /** What the server allows (shared/schemas/assets.ts, organizationSettingsPayload.providers). */
 const MAX_PROVIDERS = 50;
@@ -142,6 +143,7 @@ export function ProvidersForm({ settings }: { settings: OrganizationSettingsView
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Calibration providers" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
+          <ReportUnsaved section="Calibration providers" />
           {saved ? <Notice tone="success">Saved. Lab trips are now planned with these turnarounds.</Notice> : null}
           {problem ? (
             <Notice tone="error" title="Not saved">

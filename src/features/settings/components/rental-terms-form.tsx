@@ -7,6 +7,7 @@ import { currencyDigits, formatMoney, useFirmFormat } from '../../../lib/format'
 import { parseMoneyText } from '../../../lib/money';
 import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
+import { ReportUnsaved } from './unsaved-changes';
 
 type Values = { taxPercent: string; depositPercent: string; depositMin: string; depositMax: string };
 const fields = ['taxPercent', 'depositPercent', 'depositMin', 'depositMax'] as const;
@@ -73,6 +74,7 @@ export function RentalTermsForm({ settings }: { settings: OrganizationSettingsVi
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Rental terms" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
+          <ReportUnsaved section="Rental terms" />
           {saved ? (
             <Notice tone="success">Saved. Quotes and new rentals use these terms; rentals already made keep the prices they were made at.</Notice>
           ) : null}

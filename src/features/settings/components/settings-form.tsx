@@ -1,21 +1,11 @@
 import { Form, Formik } from 'formik';
-import { useId, useMemo } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
-
-function isTimeZone(value: string | undefined): boolean {
-  if (!value) return false;
-  try {
-    new Intl.DateTimeFormat('en', { timeZone: value });
-    return true;
-  } catch {
-    return false;
-  }
-}
+import { ReportUnsaved } from './unsaved-changes';
 
 const schema = Yup.object({
   dueSoonDays: Yup.number()
@@ -30,38 +20,30 @@ const schema = Yup.object({
     .integer('Use whole days.')
     .min(0, 'Use 0 or more days.')
     .max(365, 'Use at most 365 days.'),
-  timeZone: Yup.string().trim().required('Enter a time zone.').test('tz', 'Use a time zone name such as Europe/Berlin.', isTimeZone),
 });
 
-type Values = { dueSoonDays: number | ''; checkoutOpensDaysBefore: number | ''; timeZone: string };
+type Values = { dueSoonDays: number | ''; checkoutOpensDaysBefore: number | '' };
 
+/** When items count as due soon and how early kit may be handed over. */
 export function SettingsForm({ settings }: { settings: OrganizationSettingsView }) {
   const { save, saved, problem } = useSettingsSave();
-  const listId = useId();
-  const zones = useMemo(() => {
-    const intl = Intl as unknown as { supportedValuesOf?: (key: string) => string[] };
-    return intl.supportedValuesOf?.('timeZone') ?? [];
-  }, []);
 
   return (
     <Formik<Values>
-      initialValues={{ dueSoonDays: settings.dueSoonDays, checkoutOpensDaysBefore: settings.checkoutOpensDaysBefore, timeZone: settings.timeZone }}
+      initialValues={{ dueSoonDays: settings.dueSoonDays, checkoutOpensDaysBefore: settings.checkoutOpensDaysBefore }}
       validationSchema={schema}
       enableReinitialize
       onSubmit={(values, helpers) =>
-        save(
-          { dueSoonDays: Number(values.dueSoonDays), checkoutOpensDaysBefore: Number(values.checkoutOpensDaysBefore), timeZone: values.timeZone.trim() },
-          helpers,
-          {
-            fields: ['dueSoonDays', 'checkoutOpensDaysBefore', 'timeZone'],
-            labels: { dueSoonDays: 'The due-soon window', checkoutOpensDaysBefore: 'Checkout opens', timeZone: 'The time zone' },
-          },
-        )
+        save({ dueSoonDays: Number(values.dueSoonDays), checkoutOpensDaysBefore: Number(values.checkoutOpensDaysBefore) }, helpers, {
+          fields: ['dueSoonDays', 'checkoutOpensDaysBefore'],
+          labels: { dueSoonDays: 'The due-soon window', checkoutOpensDaysBefore: 'Checkout opens' },
+        })
       }
     >
       {({ isSubmitting, dirty }) => (
-        <Form noValidate aria-label="Settings" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
-          {saved ? <Notice tone="success">Settings saved. Due states everywhere now use them.</Notice> : null}
+        <Form noValidate aria-label="Due dates and checkout" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
+          <ReportUnsaved section="Due dates and checkout" />
+          {saved ? <Notice tone="success">Saved. Due states everywhere now use them.</Notice> : null}
           {problem ? (
             <Notice tone="error" title="Not saved">
               {problem}
@@ -87,16 +69,9 @@ export function SettingsForm({ settings }: { settings: OrganizationSettingsView 
             step={1}
             hint="Kit can be handed over this many days before its booking starts. Earlier needs a reason, which the booking keeps."
           />
-          <Field name="timeZone" label="Time zone" list={listId} autoComplete="off" hint="Dates, due dates and “today” are worked out in this zone." />
-          <datalist id={listId}>
-            {zones.map((z) => (
-              <option key={z} value={z} />
-            ))}
-          </datalist>
-          <p className="text-sm text-ink-700">Currency: {settings.currency} (set when the firm was created).</p>
           <div>
             <Button type="submit" variant="primary" busy={isSubmitting} disabled={!dirty}>
-              Save settings
+              Save due dates and checkout
             </Button>
           </div>
         </Form>

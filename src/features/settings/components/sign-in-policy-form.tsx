@@ -4,6 +4,7 @@ import { CheckboxField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import type { OrganizationSettingsView } from '../../../../shared/organizations/views';
 import { useSettingsSave } from '../api/use-settings-save';
+import { ReportUnsaved } from './unsaved-changes';
 
 /** Whether the roles that move money must sign in with a second step. */
 export function SignInPolicyForm({ settings }: { settings: OrganizationSettingsView }) {
@@ -16,6 +17,7 @@ export function SignInPolicyForm({ settings }: { settings: OrganizationSettingsV
     >
       {({ isSubmitting, dirty }) => (
         <Form noValidate aria-label="Sign-in rules" className="flex max-w-xl flex-col gap-4 rounded-lg border border-paper-line bg-card p-4">
+          <ReportUnsaved section="Sign-in rules" />
           {saved ? <Notice tone="success">Saved.</Notice> : null}
           {problem ? (
             <Notice tone="error" title="Not saved">

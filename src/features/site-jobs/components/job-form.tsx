@@ -2,6 +2,7 @@ import { Form, Formik, type FormikHelpers } from 'formik';
 import { useState } from 'react';
 import * as Yup from 'yup';
 import { Button } from '../../../components/button';
+import { DateField } from '../../../components/date-field';
 import { Field, SelectField } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
@@ -201,8 +202,8 @@ export function JobForm({
             <Field name="contactName" label="Contact" autoComplete="off" />
             <Field name="contactEmail" label="E-mail" type="email" autoComplete="off" />
             <Field name="siteAddress" label="Site address" className="sm:col-span-2" autoComplete="off" />
-            <Field name="startsOn" label="First day on site" type="date" />
-            <Field name="endsOn" label="Last day on site" type="date" />
+            <DateField name="startsOn" label="First day on site" />
+            <DateField name="endsOn" label="Last day on site" />
             <SelectField name="leadTechnicianId" label="Lead technician" options={leadOptions} />
             <Field name="notes" label="Notes" className="sm:col-span-2" autoComplete="off" />
           </div>

@@ -1,7 +1,6 @@
 import { useMemo, useState } from 'react';
 import { Notice } from '../../../components/notice';
 import { isApiError } from '../../../lib/api-client';
-import { useFirmFormat } from '../../../lib/format';
 import { useClearSecondStep } from '../api/clear-second-step';
 import { useUpdateUser } from '../api/update-user';
 import { useUsers } from '../api/get-users';
@@ -19,7 +18,6 @@ export function UsersAdmin({ currentUserId, firmName }: { currentUserId: string;
   const users = useUsers();
   const update = useUpdateUser();
   const clearSecondStep = useClearSecondStep();
-  const { timeZone } = useFirmFormat();
   const [roleFor, setRoleFor] = useState<UserView | null>(null);
   const [passwordFor, setPasswordFor] = useState<UserView | null>(null);
   const [outcome, setOutcome] = useState<Outcome>(null);
@@ -85,7 +83,7 @@ export function UsersAdmin({ currentUserId, firmName }: { currentUserId: string;
             {users.error.message}
           </Notice>
         ) : (
-          <UsersTable users={users.data?.items} currentUserId={currentUserId} timeZone={timeZone} actions={actions} />
+          <UsersTable users={users.data?.items} currentUserId={currentUserId} actions={actions} />
         )}
       </section>
 

@@ -19,17 +19,7 @@ export interface UserRowActions {
 
 const statusWord = (user: UserView) => (user.disabled ? 'Disabled' : 'Active');
 
-export function UsersTable({
-  users,
-  currentUserId,
-  timeZone,
-  actions,
-}: {
-  users: UserView[] | undefined;
-  currentUserId: string;
-  timeZone?: string;
-  actions: UserRowActions;
-}) {
+export function UsersTable({ users, currentUserId, actions }: { users: UserView[] | undefined; currentUserId: string; actions: UserRowActions }) {
   const columns = useMemo<ColDef<UserView>[]>(
     () => [
       {
@@ -123,7 +113,7 @@ export function UsersTable({
         },
       },
     ],
-    [currentUserId, timeZone, actions],
+    [currentUserId, actions],
   );
 
   return (

@@ -1,5 +1,8 @@
 import { PDFDocument, rgb, StandardFonts } from 'pdf-lib';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
+import { custodyWord } from '../../shared/assets/record-words';
+import { holdReasonWords } from '../../shared/holds/release-rule';
+import { incidentKindTitles, incidentStateTitles, type IncidentKind, type IncidentState } from '../../shared/incidents/vocabulary';
 import type { EquipmentRecordView } from '../../shared/records/views';
 import { certificatePages, certificateStatusText } from './certificate-pack';
 import { calendarDate, contentWidth, facts, firmDateTime, keepTogether, section, table, typeTitle } from './document-layout';
@@ -118,11 +121,7 @@ function holdsSection(doc: Pdf, input: RecordPdfInput) {
   if (!view.holds.length) return none(doc, 'The item was not on hold in the period.');
   for (const h of view.holds) {
     keepTogether(doc, 80);
-    doc
-      .font('Helvetica-Bold')
-      .fontSize(10)
-      .fillColor(INK)
-      .text(`${words(h.reason)} hold · ${h.summary}`);
+    doc.font('Helvetica-Bold').fontSize(10).fillColor(INK).text(`${holdReasonWords[h.reason]} · ${h.summary}`);
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['Held', `${firmDateTime(h.startedAt, timeZone)} by ${h.startedBy ?? 'someone no longer on record'}`],
@@ -150,7 +149,9 @@ function incidentsSection(doc: Pdf, input: RecordPdfInput) {
       .font('Helvetica-Bold')
       .fontSize(10)
       .fillColor(INK)
-      .text(`${words(i.kind)} · ${firmDateTime(i.occurredAt, timeZone)} · ${words(i.state)}`);
+      .text(
+        `${incidentKindTitles[i.kind as IncidentKind] ?? 'Damage or loss'} · ${firmDateTime(i.occurredAt, timeZone)} · ${incidentStateTitles[i.state as IncidentState] ?? 'Reported'}`,
+      );
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['Description', i.description],
@@ -263,7 +264,7 @@ function custodySection(doc: Pdf, input: RecordPdfInput) {
       { header: 'Note', share: 0.16 },
       { header: 'By', share: 0.14 },
     ],
-    view.custody.map((c) => [firmDateTime(c.at, timeZone), words(c.kind), c.holder ?? '—', c.location ?? '—', c.note ?? '', c.by ?? '—']),
+    view.custody.map((c) => [firmDateTime(c.at, timeZone), custodyWord(c.kind), c.holder ?? '—', c.location ?? '—', c.note ?? '', c.by ?? '—']),
     7.5,
   );
 }

@@ -15,6 +15,7 @@ import { DepositRequest } from './deposit-request';
 import { testCards, type DepositAuthorizationView, type RentalView } from '../../../../shared/billing/views';
 import { paymentProblem } from './payment-problem';
 import { SettleDeposit } from './settle-deposit';
+import { ScrollBox } from '../../../components/scroll-box';
 
 const brand = (name: string | null) => (name ? name[0].toUpperCase() + name.slice(1) : 'Card');
 const card = (hold: DepositAuthorizationView | null) => (hold?.cardLast4 ? `${brand(hold.cardBrand)} ending ${hold.cardLast4}` : null);
@@ -117,7 +118,7 @@ const howTaken = (h: DepositAuthorizationView) =>
 
 function AuthorizationHistory({ holds, currency, dateTime }: { holds: DepositAuthorizationView[]; currency: string; dateTime: (value: string) => string }) {
   return (
-    <div className="overflow-x-auto">
+    <ScrollBox label="Authorization history">
       <table className="w-full text-left text-sm">
         <caption className="mb-1 text-left font-semibold text-ink-900">Authorization history</caption>
         <TableHead columns={['Taken', 'How', 'Card', 'Held#', 'State', 'Captured#', 'Note']} />
@@ -137,6 +138,6 @@ function AuthorizationHistory({ holds, currency, dateTime }: { holds: DepositAut
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

@@ -193,6 +193,9 @@ describe('moves as people see them', () => {
     expect((await recordOf(a.id)).find((i) => i.clause === '6.4.13 d)')?.value).toContain('status: on hold');
     const pdf = await t.api.get(`/api/assets/${a.id}/record.pdf`).set(bearer(manager)).buffer(true).parse(binaryBody);
     expect(pdfText(pdf.body as Buffer)).toContain('status: on hold');
+    // The chain of custody in the PDF names each event in words, as the screen does.
+    expect(pdfText(pdf.body as Buffer)).toMatch(/Handed out[\s\S]*Returned[\s\S]*Put on hold/);
+    expect(pdfText(pdf.body as Buffer)).not.toMatch(/checked out|checked_out|\bheld\b/);
   });
 
   it('keeps an item held when it comes back from the lab without the evidence that ends its hold', async () => {

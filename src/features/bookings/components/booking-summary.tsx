@@ -67,9 +67,7 @@ export function BookingFacts({ booking, timeZone, rentalLinks = false }: { booki
             ),
           },
           { term: 'Note', value: booking.note },
-          ...(booking.checkedOutAt
-            ? [{ term: 'Checked out', value: `${formatDateTime(booking.checkedOutAt)}, taken by ${booking.takenBy ?? '—'}` }]
-            : []),
+          ...(booking.checkedOutAt ? [{ term: 'Checked out', value: `${formatDateTime(booking.checkedOutAt)}, taken by ${booking.takenBy ?? '—'}` }] : []),
           ...(booking.checkoutNote ? [{ term: 'Checkout note', value: booking.checkoutNote }] : []),
           ...(booking.returnedAt
             ? [{ term: 'Returned', value: `${formatDateTime(booking.returnedAt)}, brought back by ${booking.broughtBackBy ?? '—'}` }]

@@ -1,7 +1,7 @@
 import { Router, type Request } from 'express';
 import { ipKeyGenerator, rateLimit, type Store } from 'express-rate-limit';
 import jwt from 'jsonwebtoken';
-import type { ResetRequestedView } from '../../shared/auth/views';
+import type { ResetRequestedView, SessionProbeView } from '../../shared/auth/views';
 import {
   changeOwnPasswordPayload,
   completePasswordResetPayload,
@@ -111,6 +111,16 @@ export function authRoutes(auth: AuthService, links: AccountLinksService, opts: 
   );
   endpoint(router, at, { method: 'get', path: '/me', summary: 'The signed-in user, their organization and second step', access: 'account' }, ({ actor }) =>
     auth.me(actor),
+  );
+  // How a page starts: who is signed in, if anyone. Signed out is an answer here, not an error (no 401 in the browser's console).
+  endpoint(
+    router,
+    at,
+    { method: 'get', path: '/session', summary: 'The session if someone is signed in, else `{ session: null }`', access: 'if-signed-in' },
+    async ({ req }): Promise<SessionProbeView> => {
+      const caller = req.user as Actor | undefined;
+      return { session: caller ? await auth.me(caller) : null };
+    },
   );
   endpoint(
     router,

@@ -1,5 +1,8 @@
 import { PDFDocument, rgb, StandardFonts } from 'pdf-lib';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
+import { custodyWord } from '../../shared/assets/record-words';
+import { holdReasonWords } from '../../shared/holds/release-rule';
+import { incidentKindTitles, incidentStateTitles, type IncidentKind, type IncidentState } from '../../shared/incidents/vocabulary';
 import type { EquipmentRecordView } from '../../shared/records/views';
 import { certificatePages, certificateStatusText } from './certificate-pack';
 import type { FirmFormat } from '../../shared/formatting/firm-format';
@@ -119,11 +122,7 @@ function holdsSection(doc: Pdf, input: RecordPdfInput) {
   if (!view.holds.length) return none(doc, 'The item was not on hold in the period.');
   for (const h of view.holds) {
     keepTogether(doc, 80);
-    doc
-      .font('Helvetica-Bold')
-      .fontSize(10)
-      .fillColor(INK)
-      .text(`${words(h.reason)} hold · ${h.summary}`);
+    doc.font('Helvetica-Bold').fontSize(10).fillColor(INK).text(`${holdReasonWords[h.reason]} · ${h.summary}`);
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['Held', `${f.dateTime(h.startedAt)} by ${h.startedBy ?? 'someone no longer on record'}`],
@@ -148,7 +147,9 @@ function incidentsSection(doc: Pdf, input: RecordPdfInput) {
       .font('Helvetica-Bold')
       .fontSize(10)
       .fillColor(INK)
-      .text(`${words(i.kind)} · ${f.dateTime(i.occurredAt)} · ${words(i.state)}`);
+      .text(
+        `${incidentKindTitles[i.kind as IncidentKind] ?? 'Damage or loss'} · ${f.dateTime(i.occurredAt)} · ${incidentStateTitles[i.state as IncidentState] ?? 'Reported'}`,
+      );
     doc.font('Helvetica').fontSize(9);
     facts(doc, [
       ['Description', i.description],
@@ -261,7 +262,7 @@ function custodySection(doc: Pdf, input: RecordPdfInput) {
       { header: 'Note', share: 0.16 },
       { header: 'By', share: 0.14 },
     ],
-    view.custody.map((c) => [f.dateTime(c.at), words(c.kind), c.holder ?? '—', c.location ?? '—', c.note ?? '', c.by ?? '—']),
+    view.custody.map((c) => [f.dateTime(c.at), custodyWord(c.kind), c.holder ?? '—', c.location ?? '—', c.note ?? '', c.by ?? '—']),
     7.5,
   );
 }

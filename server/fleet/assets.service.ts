@@ -1,14 +1,7 @@
 import { In, type DataSource } from 'typeorm';
 import type { AssetHistoryEntry, AssetView } from '../../shared/assets/views';
 import { dueOnForPlan } from '../../shared/calibration/due-date';
-import {
-  specsByType,
-  type AssetStatus,
-  typesWithFirmware,
-  type AssetListQuery,
-  type CreateAssetPayload,
-  type UpdateAssetPayload,
-} from '../../shared/schemas/assets';
+import { specsByType, typesWithFirmware, type AssetListQuery, type CreateAssetPayload, type UpdateAssetPayload } from '../../shared/schemas/assets';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, readInOrganization, type Actor } from '../db/transaction';
@@ -18,8 +11,9 @@ import { loadOrgContext } from '../organizations';
 import { Asset } from './asset.entity';
 import { findAssets, nearMisses } from './asset-list';
 import { searchKey } from '../../shared/assets/search-key';
+import { historyLine, repeatsCustody } from '../../shared/assets/record-words';
 import { toAssetView } from './asset-view';
-import { moveAssets, noteCustody, statusWords } from './custody';
+import { moveAssets, noteCustody } from './custody';
 import { listReply } from '../http/list-reply';
 import type { Page } from '../../shared/lists/page';
 
@@ -220,7 +214,9 @@ export class AssetsService {
          ORDER BY at DESC LIMIT 500`,
         [id],
       );
-      return listReply(rows.map((r) => ({ ...r, at: r.at.toISOString(), summary: describeHistory(r.action, r.details) })));
+      // Each event once: an audit line that repeats a custody event (a status move, the registration) is left out.
+      const entries = rows.filter((r) => !(r.source === 'audit' && repeatsCustody(r.action)));
+      return listReply(entries.map((r) => ({ ...r, at: r.at.toISOString(), summary: historyLine(r.source, r.action, r.details) })));
     });
   }
 
@@ -272,28 +268,5 @@ export class AssetsService {
       if (isUniqueViolation(err)) throw conflict('Another asset took that asset tag or RFID tag a moment ago.');
       throw err;
     }
-  }
-}
-
-function describeHistory(action: string, details: Record<string, unknown>): string {
-  switch (action) {
-    case 'asset.created':
-      return 'Registered in the fleet';
-    case 'asset.updated':
-      return `Changed ${Object.keys((details.changes as object) ?? {}).join(', ')}`;
-    case 'asset.retired':
-      return `Retired: ${details.reason}`;
-    case 'registered':
-      return `Taken into the fleet${details.location ? ` at ${details.location}` : ''}`;
-    case 'moved':
-      return `Moved to ${details.location ?? 'no recorded location'}`;
-    case 'retired':
-      return 'Taken out of service for good';
-    default:
-      // A status move (custody.ts audits each one with its from and to).
-      if (action.startsWith('asset.') && typeof details.from === 'string' && typeof details.to === 'string') {
-        return `Status ${statusWords[details.from as AssetStatus]} → ${statusWords[details.to as AssetStatus]}${details.note ? `: ${details.note}` : ''}`;
-      }
-      return action.replace(/[._]/g, ' ');
   }
 }

@@ -1,8 +1,9 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { AssetBound } from './asset-bound';
 
-export type CustodyKind =
-  'registered' | 'checked_out' | 'returned' | 'sent_to_lab' | 'back_from_lab' | 'held' | 'released' | 'retired' | 'moved' | 'calibrated';
+import type { CustodyKind } from '../../shared/assets/record-words';
+
+export type { CustodyKind };
 
 /** Append-only chain of custody: who had an item, where, from when (DESIGN.md §3).
  * The database refuses UPDATE and DELETE on this table. */

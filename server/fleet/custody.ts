@@ -1,5 +1,6 @@
 import { In } from 'typeorm';
 import type { AssetStatus } from '../../shared/schemas/assets';
+import { assetStatusWords } from '../../shared/assets/record-words';
 import { recordAudits } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import type { Actor } from '../db/transaction';
@@ -31,7 +32,7 @@ export type CustodyNote = 'registered' | 'moved' | 'calibrated' | 'returned' | '
 const movesFrom = (from: AssetStatus): Partial<Record<AssetStatus, CustodyKind>> => assetMoves[from];
 export const moveKind = (from: AssetStatus, to: AssetStatus): CustodyKind | undefined => movesFrom(from)[to];
 
-export const statusWords: Record<AssetStatus, string> = { ready: 'ready', out: 'out', at_lab: 'at the lab', held: 'on hold', retired: 'retired' };
+const statusWords = assetStatusWords;
 const moveWords: Record<AssetStatus, string> = { ready: 'made ready', out: 'handed out', at_lab: 'sent to the lab', held: 'put on hold', retired: 'retired' };
 
 /** How a move reads in the chain of custody: why, on which booking, where the item is and who has it after it.

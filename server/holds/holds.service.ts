@@ -1,7 +1,8 @@
 import { IsNull, type DataSource } from 'typeorm';
 import type { HoldReason, HoldView } from '../../shared/holds/views';
 import type { Page } from '../../shared/lists/page';
-import { assetTypeTitles, type TipPosition } from '../../shared/schemas/assets';
+import { type TipPosition } from '../../shared/schemas/assets';
+import { aType } from '../../shared/holds/release-rule';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
@@ -133,7 +134,7 @@ export class HoldsService {
       const check = passing.find((c) => c.kind === 'two_face' || c.kind === 'length_check');
       return check ? { evidence: [check], missing: [] } : { evidence: [], missing: ['no passing two-face or length check since the hold began'] };
     }
-    return { evidence: [], missing: [`a ${assetTypeTitles[asset.type].toLowerCase()} needs a calibration recorded after the hold began`] };
+    return { evidence: [], missing: [`no field check applies to ${aType(asset.type)}: it needs a calibration recorded after the hold began`] };
   }
 
   private view(h: Hold): HoldView {

@@ -1,4 +1,5 @@
 import type { AssetView, EquipmentRecordItem } from '../../shared/assets/views';
+import { assetStatusWords } from '../../shared/assets/record-words';
 import { checkKindTitles } from '../../shared/checks/vocabulary';
 import type { EquipmentRecordView } from '../../shared/records/views';
 import type { MeasureWords } from '../../shared/records/check-lines';
@@ -58,7 +59,7 @@ export function equipmentRecordItems(a: AssetView, s: Sections, say: RecordWords
     {
       clause: '6.4.13 d)',
       requirement: 'Current location',
-      value: text(a.location, `status: ${words(a.status)}`, a.kit ? `kit ${a.kit.name}` : null),
+      value: text(a.location, `status: ${assetStatusWords[a.status]}`, a.kit ? `kit ${a.kit.name}` : null),
     },
     {
       clause: '6.4.13 e)',

@@ -13,6 +13,9 @@ export type SessionView = {
   secondStep: SecondStepState;
 };
 
+/** `GET /api/auth/session`: how the client starts; `null` when nobody is signed in (or the session has ended). */
+export type SessionProbeView = { session: SessionView | null };
+
 /** `POST /api/auth/login` and the code step: a session (the cookie is set too), or — for a person with a second step —
  * a short-lived ticket to send back with the code. */
 export type SignInView = { token: string; user: UserView } | { secondStep: { ticket: string; expiresAt: string } };

@@ -11,6 +11,7 @@ export const incidentKindTitles: Record<IncidentKind, string> = {
 
 export const incidentStates = ['reported', 'reviewing', 'resolved'] as const;
 export type IncidentState = (typeof incidentStates)[number];
+export const incidentStateTitles: Record<IncidentState, string> = { reported: 'Reported', reviewing: 'Under review', resolved: 'Resolved' };
 
 export const MAX_INCIDENT_PHOTOS = 6;
 export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;

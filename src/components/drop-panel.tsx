@@ -45,7 +45,10 @@ export function DropPanel({
       >
         {summary}
       </summary>
-      <div className={`absolute z-20 mt-1 rounded-md border border-paper-line bg-card p-2 shadow-lg ${align === 'right' ? 'right-0' : 'left-0'}`}>
+      {/* On a phone the panel spans the screen less a margin (a fixed box with no top stays where it would be), so it never sticks out. */}
+      <div
+        className={`absolute z-20 mt-1 rounded-md border border-paper-line bg-card p-2 shadow-lg ${align === 'right' ? 'right-0' : 'left-0'} max-sm:fixed max-sm:inset-x-3`}
+      >
         {children}
       </div>
     </details>

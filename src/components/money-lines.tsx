@@ -1,5 +1,6 @@
 import { formatMoney } from '../lib/format';
 import { TableHead } from './table-head';
+import { ScrollBox } from './scroll-box';
 
 export interface MoneyLine {
   key: string;
@@ -25,7 +26,7 @@ export function MoneyLines({
 }) {
   const money = (minor: number) => formatMoney(minor, currency);
   return (
-    <div className="overflow-x-auto">
+    <ScrollBox label={caption}>
       <table className="w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <TableHead columns={['Line', 'Qty#', 'Each#', 'Amount#']} />
@@ -53,6 +54,6 @@ export function MoneyLines({
           ))}
         </tfoot>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

@@ -138,6 +138,26 @@ describe('sign-in', () => {
   });
 });
 
+describe('the session probe', () => {
+  it('answers 200 with no session to a caller signed out, tampered or ended, and the session to one signed in', async () => {
+    const anonymous = await t.api.get('/api/auth/session');
+    expect(anonymous.status).toBe(200);
+    expect(anonymous.body).toEqual({ session: null });
+    const token = await t.tokenFor('tech@demo.test');
+    const [h, p] = token.split('.');
+    expect((await t.api.get('/api/auth/session').set(bearer(`${h}.${p}.forged-signature`))).body).toEqual({ session: null });
+    const signedIn = await t.api.get('/api/auth/session').set(bearer(token));
+    // The same answer as /api/auth/me, wrapped.
+    expect(signedIn.body.session).toEqual((await t.api.get('/api/auth/me').set(bearer(token))).body);
+    expect(signedIn.body.session.user).toMatchObject({ email: 'tech@demo.test', role: 'technician' });
+    await t.api.post('/api/auth/logout').set(bearer(token));
+    const ended = await t.api.get('/api/auth/session').set(bearer(token));
+    expect([ended.status, ended.body]).toEqual([200, { session: null }]);
+    // /api/auth/me keeps its contract for other callers.
+    expect((await t.api.get('/api/auth/me').set(bearer(token))).status).toBe(401);
+  });
+});
+
 describe('sign-out', () => {
   it('ends the bearer token as well as the cookie', async () => {
     const token = await t.tokenFor('owner@demo.test');

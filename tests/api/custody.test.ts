@@ -164,7 +164,9 @@ describe('moves as people see them', () => {
       bookingId: booking.id,
       note: 'good',
     });
-    expect(out.find((i) => i.action === 'asset.checked_out')?.summary).toBe('Status ready → out: good');
+    // Each event once, in words: the custody event says it; the audit line of the same move is not listed again.
+    expect(out.find((i) => i.action === 'checked_out')?.summary).toBe('Handed out to Tamsin Quillfeather: good');
+    expect(out.filter((i) => i.action.startsWith('asset.'))).toEqual([]);
     expect((await recordOf(a.id)).find((i) => i.clause === '6.4.13 d)')?.value).toContain('status: out');
     expect((await t.api.post(`/api/assets/${a.id}/retire`).set(bearer(manager)).send({ reason: 'Worn out' })).body.error).toMatchObject({
       code: 'asset_move_refused',
@@ -186,10 +188,14 @@ describe('moves as people see them', () => {
         .map((i) => i.action)
         .sort(),
     ).toEqual(['checked_out', 'held', 'registered', 'returned']);
-    expect(back.find((i) => i.action === 'asset.held')?.summary).toMatch(/^Status out → on hold: /);
-    expect((await recordOf(a.id)).find((i) => i.clause === '6.4.13 d)')?.value).toContain('status: held');
+    expect(back.find((i) => i.action === 'held')?.summary).toMatch(/^Put on hold: /);
+    expect(back.map((i) => i.summary).join(' | ')).not.toMatch(/\bheld\b|checked out|_/);
+    expect((await recordOf(a.id)).find((i) => i.clause === '6.4.13 d)')?.value).toContain('status: on hold');
     const pdf = await t.api.get(`/api/assets/${a.id}/record.pdf`).set(bearer(manager)).buffer(true).parse(binaryBody);
-    expect(pdfText(pdf.body as Buffer)).toContain('status: held');
+    expect(pdfText(pdf.body as Buffer)).toContain('status: on hold');
+    // The chain of custody in the PDF names each event in words, as the screen does.
+    for (const words of ['Handed out', 'Returned', 'Put on hold']) expect(pdfText(pdf.body as Buffer)).toContain(words);
+    expect(pdfText(pdf.body as Buffer)).not.toMatch(/checked out|checked_out|\bheld\b/);
   });
 
   it('keeps an item held when it comes back from the lab without the evidence that ends its hold', async () => {

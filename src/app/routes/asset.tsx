@@ -128,23 +128,24 @@ function ServerAsset({ id }: { id: string }) {
         </Notice>
       ) : null}
 
-      {/* Phones: the actions sit at the bottom, above the menu bar, under the thumb. */}
-      <div
-        aria-label="Asset actions"
-        role="group"
-        className="fixed inset-x-0 bottom-14 z-20 flex gap-2 overflow-x-auto border-t border-paper-line bg-card/95 px-3 py-2 backdrop-blur sm:static sm:mb-5 sm:flex-wrap sm:overflow-visible sm:border-0 sm:bg-transparent sm:p-0"
-      >
-        {canCheck ? (
-          <Link to={`/checks/new?assetId=${encodeURIComponent(a.id)}`} className={buttonClasses('primary', 'md', big)}>
-            <PlusIcon size={18} />
-            Record a check
-          </Link>
-        ) : null}
-        {canReport ? (
-          <Link to={`/incidents/new?assetId=${encodeURIComponent(a.id)}`} className={buttonClasses('danger', 'md', big)}>
-            <AlertIcon size={18} />
-            Report damage
-          </Link>
+      <div aria-label="Asset actions" role="group" className="mb-5 flex flex-wrap gap-2">
+        {/* Phones: the field actions sit at the bottom, above the menu bar, under the thumb, sharing its width (none cut off at
+            the edge); the rest wrap in the page. */}
+        {canCheck || canReport ? (
+          <div className="fixed inset-x-0 bottom-14 z-20 flex gap-2 border-t border-paper-line bg-card/95 px-3 py-2 backdrop-blur sm:contents">
+            {canCheck ? (
+              <Link to={`/checks/new?assetId=${encodeURIComponent(a.id)}`} className={buttonClasses('primary', 'md', `${big} flex-1 sm:flex-none`)}>
+                <PlusIcon size={18} />
+                Record a check
+              </Link>
+            ) : null}
+            {canReport ? (
+              <Link to={`/incidents/new?assetId=${encodeURIComponent(a.id)}`} className={buttonClasses('danger', 'md', `${big} flex-1 sm:flex-none`)}>
+                <AlertIcon size={18} />
+                Report damage
+              </Link>
+            ) : null}
+          </div>
         ) : null}
         {canCalibrate ? (
           <Link to={`/fleet/${a.id}/calibrate`} className={buttonClasses('secondary', 'md', 'min-h-11 shrink-0 sm:min-h-10')}>
@@ -156,7 +157,7 @@ function ServerAsset({ id }: { id: string }) {
             Plan lab trip
           </Link>
         ) : null}
-        {canHold && live && a.status !== 'held' ? <PutOnHoldButton assetId={a.id} assetTag={a.assetTag} className="min-h-11 shrink-0 sm:min-h-10" /> : null}
+        {canHold && live && a.status !== 'held' ? <PutOnHoldButton asset={a} className="min-h-11 shrink-0 sm:min-h-10" /> : null}
         {canWrite ? (
           <Button variant="primary" className="min-h-11 shrink-0 sm:min-h-10" onClick={() => navigate(`/fleet/${a.id}/edit`)}>
             Edit
@@ -177,7 +178,7 @@ function ServerAsset({ id }: { id: string }) {
       </div>
 
       <div className="grid gap-4 pb-20 sm:pb-0 lg:grid-cols-2">
-        {a.status === 'held' ? <HoldPanel assetId={a.id} assetTag={a.assetTag} canRelease={canHold} className="lg:col-span-2" /> : null}
+        {a.status === 'held' ? <HoldPanel asset={a} canRelease={canHold} className="lg:col-span-2" /> : null}
         <AssetImpactPanel assetId={a.id} assetTag={a.assetTag} className="lg:col-span-2" />
         <AssetIdentity asset={a} />
         <div className="flex flex-col gap-4">

@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient } from '../../../lib/api-client';
 import { authKeys } from './keys';
-import type { SessionView } from '../../../../shared/auth/views';
+import type { SessionProbeView, SessionView } from '../../../../shared/auth/views';
 
-export function getMe(signal?: AbortSignal): Promise<SessionView> {
-  return apiClient.get<SessionView>('/auth/me', { signal });
+/** Who is signed in, or `null`: the session probe answers 200 either way, so a signed-out start logs no error. */
+export async function getMe(signal?: AbortSignal): Promise<SessionView | null> {
+  return (await apiClient.get<SessionProbeView>('/auth/session', { signal })).session;
 }
 
 export const meQueryOptions = () =>

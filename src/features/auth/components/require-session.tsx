@@ -54,6 +54,6 @@ export function RequireSession({ children }: { children: ReactNode }) {
     );
   }
   if (me.isPending || noSignal) return <LoadingPanel label="Opening Nestkeeper…" className="justify-center py-24" />;
-  if (isApiError(me.error) && me.error.status === 401) return <Navigate to="/sign-in" replace state={{ from: location.pathname }} />;
+  if (me.data === null) return <Navigate to="/sign-in" replace state={{ from: location.pathname }} />;
   throw me.error;
 }

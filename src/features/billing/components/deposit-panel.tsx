@@ -15,6 +15,7 @@ import { testCards, type DepositAuthorizationView, type RentalView } from '../..
 import { paymentProblem } from './payment-problem';
 import { MoneyMails } from './money-mails';
 import { SettleDeposit } from './settle-deposit';
+import { ScrollBox } from '../../../components/scroll-box';
 
 const brand = (name: string | null) => (name ? name[0].toUpperCase() + name.slice(1) : 'Card');
 const card = (hold: DepositAuthorizationView | null) => (hold?.cardLast4 ? `${brand(hold.cardBrand)} ending ${hold.cardLast4}` : null);
@@ -114,7 +115,7 @@ const howTaken = (h: DepositAuthorizationView) =>
 
 function AuthorizationHistory({ holds, currency, dateTime }: { holds: DepositAuthorizationView[]; currency: string; dateTime: (value: string) => string }) {
   return (
-    <div className="overflow-x-auto">
+    <ScrollBox label="Authorization history">
       <table className="w-full text-left text-sm">
         <caption className="mb-1 text-left font-semibold text-ink-900">Authorization history</caption>
         <TableHead columns={['Tried', 'How', 'Card', 'Amount#', 'State', 'Captured#', 'Note']} />
@@ -134,6 +135,6 @@ function AuthorizationHistory({ holds, currency, dateTime }: { holds: DepositAut
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

@@ -1,6 +1,7 @@
 import { currencyDigits, formatMoney, useFirmFormat } from '../../../lib/format';
 import type { RevenueRow } from '../../../../shared/billing/views';
 import { monthsBetween } from './months';
+import { ScrollBox } from '../../../components/scroll-box';
 
 const W = 760;
 const H = 260;
@@ -180,7 +181,7 @@ function RevenueTable({
 }) {
   const cell = 'px-2 py-1 text-right tabular-nums whitespace-nowrap';
   return (
-    <div className="overflow-x-auto">
+    <ScrollBox label="Revenue per kit per month">
       <table className="w-full text-left text-sm">
         <caption className="mb-1 text-left font-semibold text-ink-900">Revenue per kit per month</caption>
         <thead className="bg-paper-deep">
@@ -227,6 +228,6 @@ function RevenueTable({
           </tr>
         </tfoot>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

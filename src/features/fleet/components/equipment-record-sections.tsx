@@ -3,6 +3,9 @@ import type { EquipmentRecordView } from '../../../../shared/records/views';
 import { Panel } from '../../../components/panel';
 import { apiUrl } from '../../../lib/api-client';
 import { checkKindTitles } from '../../../../shared/checks/vocabulary';
+import { custodyWord } from '../../../../shared/assets/record-words';
+import { holdReasonWords } from '../../../../shared/holds/release-rule';
+import { incidentKindTitles, incidentStateTitles, type IncidentKind, type IncidentState } from '../../../../shared/incidents/vocabulary';
 import { formatCalendarDate, formatDateRange, useFirmFormat } from '../../../lib/format';
 
 const words = (v: string) => v.replace(/_/g, ' ');
@@ -85,7 +88,7 @@ export function EquipmentRecordSections({ record }: { record: EquipmentRecordVie
         {record.holds.map((h) => (
           <Entry
             key={h.id}
-            heading={`${words(h.reason)} hold · ${h.summary}`}
+            heading={`${holdReasonWords[h.reason]} · ${h.summary}`}
             lines={[
               `Held ${dateTime(h.startedAt)} by ${someone(h.startedBy)}`,
               h.releasedAt ? `Released ${dateTime(h.releasedAt)} by ${someone(h.releasedBy)}` : 'Still on hold',
@@ -103,7 +106,7 @@ export function EquipmentRecordSections({ record }: { record: EquipmentRecordVie
         {record.incidents.map((i) => (
           <li key={i.id} className="py-2">
             <Entry
-              heading={`${words(i.kind)} · ${dateTime(i.occurredAt)} · ${words(i.state)}`}
+              heading={`${incidentKindTitles[i.kind as IncidentKind] ?? 'Damage or loss'} · ${dateTime(i.occurredAt)} · ${incidentStateTitles[i.state as IncidentState] ?? 'Reported'}`}
               lines={[i.description, i.location, i.resolution, `Reported by ${someone(i.reportedBy)}`, i.photos.length ? null : 'No photos were taken.']}
             />
             <div className="flex flex-wrap gap-2">
@@ -148,7 +151,7 @@ export function EquipmentRecordSections({ record }: { record: EquipmentRecordVie
         {record.custody.map((c, i) => (
           <Entry
             key={i}
-            heading={`${words(c.kind)} · ${dateTime(c.at)}`}
+            heading={`${custodyWord(c.kind)} · ${dateTime(c.at)}`}
             lines={[c.holder ? `Holder ${c.holder}` : null, c.location, c.note, c.by ? `By ${c.by}` : null]}
           />
         ))}

@@ -1,9 +1,10 @@
 import type { EquipmentRecordItem } from '../../../../shared/assets/views';
+import { ScrollBox } from '../../../components/scroll-box';
 
 /** The §6.4.13 items beside what Nestkeeper holds for each; gaps are said plainly. */
 export function EquipmentRecordTable({ items }: { items: EquipmentRecordItem[] }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-paper-line bg-card">
+    <ScrollBox label="Equipment record items" className="rounded-lg border border-paper-line bg-card">
       <table className="w-full text-left">
         <caption className="sr-only">Equipment record items and what Nestkeeper holds</caption>
         <thead className="bg-paper-deep">
@@ -31,6 +32,6 @@ export function EquipmentRecordTable({ items }: { items: EquipmentRecordItem[] }
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

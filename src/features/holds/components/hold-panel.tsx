@@ -8,13 +8,14 @@ import { StatusChip } from '../../../components/status-chip';
 import { useFirmFormat } from '../../../lib/format';
 import { useHolds } from '../api/get-holds';
 import { missingEvidence, useReleaseAsset } from '../api/release-asset';
-import { holdReasonWords } from './hold-words';
+import { holdReasonWords, releaseRule, tipPositionsOf, type HeldAsset } from './hold-words';
 
 /**
  * An item on hold: why, since when, and — for those who may — the release,
  * which the server grants only on evidence recorded since the hold began.
  */
-export function HoldPanel({ assetId, assetTag, canRelease, className = '' }: { assetId: string; assetTag: string; canRelease: boolean; className?: string }) {
+export function HoldPanel({ asset, canRelease, className = '' }: { asset: HeldAsset; canRelease: boolean; className?: string }) {
+  const { id: assetId, assetTag } = asset;
   const holds = useHolds(assetId);
   const release = useReleaseAsset();
   const { dateTime } = useFirmFormat();
@@ -62,7 +63,7 @@ export function HoldPanel({ assetId, assetTag, canRelease, className = '' }: { a
             ]}
           />
           <p className="text-sm text-ink-700">
-            {assetTag} cannot be booked or sent out. It can be released once it passes a field check or is recalibrated after {dateTime(current.startedAt)}.
+            {assetTag} cannot be booked or sent out. {releaseRule(asset.type, tipPositionsOf(asset.specs))}
           </p>
           {canRelease ? (
             <div className="flex flex-col gap-2">

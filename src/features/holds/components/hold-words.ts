@@ -1,7 +1,6 @@
-import type { HoldReason } from '../../../../shared/holds/views';
+import type { AssetType } from '../../../../shared/assets/vocabulary';
 
-export const holdReasonWords: Record<HoldReason, string> = {
-  incident: 'Damage or loss reported',
-  failed_check: 'Failed a field check',
-  manual: 'Taken out of service by hand',
-};
+export { holdReasonWords, releaseRule, tipPositionsOf } from '../../../../shared/holds/release-rule';
+
+/** What the hold screens need of the item: its rule of release depends on its type (and a tip's positions). */
+export type HeldAsset = { id: string; assetTag: string; type: AssetType; specs: { positions?: unknown } };

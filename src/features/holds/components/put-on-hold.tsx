@@ -7,13 +7,15 @@ import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useHoldAsset } from '../api/hold-asset';
+import { releaseRule, tipPositionsOf, type HeldAsset } from './hold-words';
 
 const schema = Yup.object({
   summary: Yup.string().trim().required('Say why the item is held.').min(3, 'Say why — a few words at least.').max(500, 'Keep it under 500 characters.'),
 });
 
 /** "Put on hold": a button and its dialog asking for the reason. */
-export function PutOnHoldButton({ assetId, assetTag, className = '' }: { assetId: string; assetTag: string; className?: string }) {
+export function PutOnHoldButton({ asset, className = '' }: { asset: HeldAsset; className?: string }) {
+  const { id: assetId, assetTag } = asset;
   const [open, setOpen] = useState(false);
   const [problem, setProblem] = useState<string>();
   const hold = useHoldAsset();
@@ -30,7 +32,7 @@ export function PutOnHoldButton({ assetId, assetTag, className = '' }: { assetId
         open={open}
         onClose={close}
         title={`Put ${assetTag} on hold`}
-        description="A held item cannot be booked or sent out. It is released once it passes a field check or is recalibrated."
+        description={`A held item cannot be booked or sent out. ${releaseRule(asset.type, tipPositionsOf(asset.specs))}`}
       >
         <Formik
           initialValues={{ summary: '' }}

@@ -1,5 +1,5 @@
 import { StatusChip, type StatusTone } from '../../../components/status-chip';
-import type { IncidentKind, IncidentState } from '../../../../shared/incidents/vocabulary';
+import { incidentStateTitles, type IncidentKind, type IncidentState } from '../../../../shared/incidents/vocabulary';
 
 /** What people pick when they report; the order is the order of the choices. */
 export const incidentKindWords: Record<IncidentKind, string> = {
@@ -11,11 +11,7 @@ export const incidentKindWords: Record<IncidentKind, string> = {
 };
 export const incidentKindChoices = Object.keys(incidentKindWords) as IncidentKind[];
 
-export const incidentStateWords: Record<IncidentState, string> = {
-  reported: 'Reported',
-  reviewing: 'Under review',
-  resolved: 'Resolved',
-};
+export const incidentStateWords: Record<IncidentState, string> = incidentStateTitles;
 const tones: Record<IncidentState, StatusTone> = { reported: 'warn', reviewing: 'info', resolved: 'ok' };
 export const incidentStateChoices = Object.keys(incidentStateWords) as IncidentState[];
 

@@ -7,6 +7,7 @@ import { StatusChip, type StatusTone } from '../../../components/status-chip';
 import { formatWattHours, shippingClassText, type ShippingClass } from '../../../lib/batteries';
 import { formatNumber } from '../../../lib/format';
 import { shippingSheetPdfUrl, useShippingSheet } from '../api/get-shipping-sheet';
+import { ScrollBox } from '../../../components/scroll-box';
 
 const classTone: Record<ShippingClass, StatusTone> = {
   up_to_100_wh: 'ok',
@@ -46,7 +47,7 @@ export function ShippingSheetPanel({ kitId }: { kitId: string }) {
           <p className="text-ink-700">This kit has no batteries.</p>
         ) : (
           <>
-            <div className="overflow-x-auto">
+            <ScrollBox label="Batteries in the kit">
               <table className="w-full text-left">
                 <caption className="sr-only">Batteries in the kit with their energy and shipping class</caption>
                 <thead className="bg-paper-deep text-sm">
@@ -91,7 +92,7 @@ export function ShippingSheetPanel({ kitId }: { kitId: string }) {
                   </tr>
                 </tfoot>
               </table>
-            </div>
+            </ScrollBox>
             {sheet.data.strictest ? (
               <p>
                 <span className="font-semibold">Strictest class in the kit:</span> {shippingClassText[sheet.data.strictest]}

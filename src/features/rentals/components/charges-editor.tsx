@@ -2,6 +2,7 @@ import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import * as Yup from 'yup';
 import type { RentalChargeView, RentalView } from '../../../../shared/billing/views';
+import { incidentKindTitles, type IncidentKind } from '../../../../shared/incidents/vocabulary';
 import { Button } from '../../../components/button';
 import { Field } from '../../../components/field';
 import { Notice } from '../../../components/notice';
@@ -22,7 +23,8 @@ export function ChargesEditor({ rental, canCharge }: { rental: RentalView; canCh
         {rental.charges.map((charge) => (
           <li key={charge.incidentId} className="rounded-md border border-paper-line bg-card p-3">
             <p className="text-sm">
-              <span className="font-mono font-semibold">{charge.assetTag}</span> <span className="text-ink-700">({charge.kind})</span> {charge.description}
+              <span className="font-mono font-semibold">{charge.assetTag}</span>{' '}
+              <span className="text-ink-700">({incidentKindTitles[charge.kind as IncidentKind] ?? 'damage or loss'})</span> {charge.description}
             </p>
             {canCharge && rental.state !== 'invoiced' ? (
               <ChargeForm rentalId={rental.id} charge={charge} currency={rental.currency} />

@@ -4,12 +4,13 @@ import { BatteryCaution, HeavyCaseCaution, LaserCaution } from '../../../compone
 import { assetTypeTitles, type AssetType } from '../../../lib/assets';
 import type { RentalItem } from '../../../../shared/billing/views';
 import { TableHead } from '../../../components/table-head';
+import { ScrollBox } from '../../../components/scroll-box';
 
 /** What the renter takes: tag, type, serial and model of every item. */
 export function RentalItems({ items }: { items: RentalItem[] }) {
   return (
     <Panel title={`Items (${items.length})`}>
-      <div className="overflow-x-auto">
+      <ScrollBox label="Rented items">
         <table className="w-full text-left text-sm">
           <TableHead columns={['Tag', 'Type', 'Serial', 'Model']} />
           <tbody className="divide-y divide-paper-line">
@@ -23,7 +24,7 @@ export function RentalItems({ items }: { items: RentalItem[] }) {
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollBox>
     </Panel>
   );
 }

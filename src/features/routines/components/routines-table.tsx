@@ -9,6 +9,7 @@ import { useRoutines } from '../api/get-routines';
 import { useRunRoutine } from '../api/run-routine';
 import type { RoutineRunView, RoutineView } from '../../../../shared/routines/views';
 import { RoutineRunStatus } from './routine-run-status';
+import { ScrollBox } from '../../../components/scroll-box';
 
 type RunOutcome = { run?: RoutineRunView; error?: string };
 
@@ -44,7 +45,7 @@ export function RoutinesTable() {
   };
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-paper-line bg-card">
+    <ScrollBox label="Routines" className="rounded-lg border border-paper-line bg-card">
       <table className="w-full min-w-[40rem] border-collapse text-left">
         <caption className="sr-only">Routines and their last run</caption>
         <thead className="bg-paper-deep text-sm">
@@ -113,7 +114,7 @@ export function RoutinesTable() {
           })}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }
 

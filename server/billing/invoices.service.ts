@@ -13,6 +13,7 @@ import { toCsv } from '../documents/csv';
 import { invoicePdf } from '../documents/invoice-pdf';
 import { conflict, ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications';
+import { invoiceMail } from './billing-mail';
 import { loadOrgContext } from '../organizations';
 import { getCustomer, getRental, loadRentalView, lockRental, type CustomerRecord } from '../rentals';
 import { invoiceSummaries } from './invoice-summaries';
@@ -235,22 +236,11 @@ export class InvoicesService {
       { number: invoice.number, totalMinor: invoice.totalMinor, rentalId: invoice.rentalId },
     );
     const view = await this.view(tx, invoice);
-    const title = v.kind === 'invoice' ? `Invoice ${view.number}` : `Credit note ${view.number}`;
     await enqueueMail(
       tx,
       [customer.billingEmail],
-      {
-        subject: `${title} from ${ctx.name}`,
-        heading: title,
-        paragraphs: [
-          `${customer.billingContact ? `Dear ${customer.billingContact}, please` : 'Please'} find ${v.kind === 'invoice' ? 'our invoice' : 'our credit note'} ${view.number} attached (${formatMoney(view.totalMinor, view.currency, 'en-GB')}).`,
-          v.kind === 'invoice'
-            ? view.balanceMinor > 0
-              ? `Balance due: ${formatMoney(view.balanceMinor, view.currency, 'en-GB')}.`
-              : 'Nothing is left to pay.'
-            : `It corrects invoice ${view.correctsNumber}: ${view.reason}`,
-        ],
-      },
+      invoiceMail,
+      { invoice: view, isInvoice: v.kind === 'invoice', firm: ctx.name, paymentTerms: ctx.issuer.paymentTerms },
       [
         {
           fileName: `${v.kind === 'invoice' ? 'invoice' : 'credit-note'}-${view.number}.pdf`,

@@ -4,6 +4,6 @@ import { OutboxMessage } from './outbox-message.entity';
 import { SinkMessage } from './sink-message.entity';
 
 export const notificationEntities = [OutboxMessage, OutboxAttachment, SinkMessage];
-export { enqueueMail, outboxBacklog, type MailAttachment } from './outbox';
-export type { MailContent } from './mail-template';
+export { deliveryTimes, draftLetter, enqueueMail, firmSignature, outboxBacklog, type MailAttachment } from './outbox';
+export { letterTemplate, mailTemplate, type MailTemplate } from './mail-template';
 export { staffAddresses } from './staff';

@@ -2,4 +2,4 @@
 import { Organization } from './organization.entity';
 
 export const organizationEntities = [Organization];
-export { DEFAULT_TURNAROUND_DAYS, loadOrgContext, type OrgContext } from './org-context';
+export { DEFAULT_TURNAROUND_DAYS, loadOrgContext, voiceOf, type OrgContext } from './org-context';

@@ -37,7 +37,7 @@ export const impactOpenedMail = mailTemplate<{
 }>('impact-opened', {
   subject: 'Impact review opened for {{asset.assetTag}}: {{count bookings "booking"}} to assess',
   heading: '{{asset.assetTag}} was found out of tolerance',
-  body: `<p>{{item asset}} was found out of tolerance on {{date foundOn}} ({{#if byCalibration}}as-found calibration result{{else}}failed field check{{/if}}).
+  body: `<p>On {{date foundOn}}, {{item asset}} was found out of tolerance ({{#if byCalibration}}as-found calibration result{{else}}failed field check{{/if}}).
 Its last passing evidence is {{#if since}}from {{date since}}{{else}}not on record{{/if}}.</p>
 <p>{{count bookings "booking"}} used it in between. Assess each one and tell the customers concerned (ISO 9001:2015 §7.1.5.2).</p>`,
 });

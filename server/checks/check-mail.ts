@@ -12,6 +12,6 @@ export const failedCheckMail = mailTemplate<{
   heading: '{{asset.assetTag}} failed a field check and is on hold',
   body: `<p>{{what}}.</p>
 {{#if arrivedAt}}<p>The check was done at {{dateTime performedAt}} and reached Nestkeeper at {{dateTime arrivedAt}} (recorded without signal).</p>{{/if}}
-<p>{{item asset}} cannot be booked or checked out until it is recalibrated or passes the check again and someone releases it.
+<p>Until it is recalibrated or passes the check again and someone releases it, {{item asset}} cannot be booked or checked out.
 Jobs it measured since its last good check may need a look.</p>`,
 });

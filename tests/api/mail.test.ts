@@ -31,7 +31,9 @@ const settings = (patch: object) => t.api.patch('/api/settings').set(bearer(owne
 
 /** A damage report on a ready demo item (trackers first) at a fixed moment, so its mail's date and time are known; its tag. */
 async function reportDamage(): Promise<string> {
-  const [asset] = await t.db.query(`SELECT id, asset_tag AS tag FROM assets WHERE status = 'ready' AND type <> 'battery' AND asset_tag <> 'TRK-001' ORDER BY type = 'tracker' DESC, asset_tag LIMIT 1`);
+  const [asset] = await t.db.query(
+    `SELECT id, asset_tag AS tag FROM assets WHERE status = 'ready' AND type <> 'battery' AND asset_tag <> 'TRK-001' ORDER BY type = 'tracker' DESC, asset_tag LIMIT 1`,
+  );
   const res = await t.api
     .post('/api/incidents')
     .set(bearer(tech))

@@ -23,10 +23,13 @@ const layout = Handlebars.create().compile<{ lang: string; heading: string; body
 </div></body></html>`,
 );
 
-/** The plain-text part is the HTML's own words (html-to-text), so the two never say different things. */
-export const textOf = (html: string, wordwrap: number | false = 78) =>
+/**
+ * The plain-text part is the HTML's own words (html-to-text), so the two never say different things. Paragraphs stay
+ * one line each: mail programs wrap them to the window (and quoted-printable keeps the lines short on the wire).
+ */
+export const textOf = (html: string) =>
   convert(html, {
-    wordwrap,
+    wordwrap: false,
     selectors: [
       { selector: 'h1', options: { uppercase: false } },
       { selector: 'title', format: 'skip' },

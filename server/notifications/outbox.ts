@@ -18,7 +18,7 @@ export async function firmSignature(tx: Scoped): Promise<FirmSignature> {
 /** A letter's subject and words as plain text, for a person to read and edit before it goes out as `letterTemplate`. */
 export async function draftLetter<Data>(tx: Scoped, template: MailTemplate<Data>, data: Data): Promise<{ subject: string; text: string }> {
   const { subject, body } = template.render(data, (await firmSignature(tx)).voice);
-  return { subject, text: textOf(body, false) };
+  return { subject, text: textOf(body) };
 }
 
 /**

@@ -59,8 +59,8 @@ const impactNotice = mailTemplate<NoticeData>('impact-notice', {
   subject: 'Measurements taken with our {{typeName asset.type}} {{asset.assetTag}} ({{references}}): {{words.subject}}',
   heading: 'A note about your measurements',
   body: `<p>{{greeting}}</p>
-<p>On {{date foundOn}} {{#if byCalibration}}the calibration laboratory found{{else}}one of our own field checks found{{/if}} {{item asset}}
-out of tolerance{{#if errorUm}}, with an error of {{um errorUm}}{{/if}}. We used it on your {{plural jobs.length "job"}}:</p>
+<p>On {{date foundOn}} {{#if byCalibration}}the calibration laboratory found{{else}}one of our own field checks found{{/if}} that {{item asset}},
+was out of tolerance{{#if errorUm}}, with an error of {{um errorUm}}{{/if}}. We used it on your {{plural jobs.length "job"}}:</p>
 <ul>{{#each jobs}}<li>{{reference}}, {{dateRange startsOn endsOn}}</li>{{/each}}</ul>
 {{#if pending}}<p>{{words.finding}}</p>{{else}}<p>{{words.finding}}</p><ul>{{#each jobs}}<li>{{> comparison}}</li>{{/each}}</ul>{{/if}}
 <p>{{words.proposal}}</p>

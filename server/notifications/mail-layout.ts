@@ -35,6 +35,7 @@ export const textOf = (html: string) =>
       { selector: 'title', format: 'skip' },
       { selector: 'a', options: { hideLinkHrefIfSameAsText: true } },
       { selector: 'hr', options: { length: 2 } },
+      { selector: 'ul', options: { itemPrefix: '• ' } },
     ],
   });
 

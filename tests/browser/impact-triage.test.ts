@@ -49,7 +49,9 @@ describe("the owner's impact triage in a real browser", () => {
     // Draft, read and edit the notice to Quarrington Rail, then send both after one confirmation.
     await page.getByRole('button', { name: 'Draft notices' }).click();
     const text = page.getByLabel('Text of the notice to works@quarrington-rail.test');
-    expect(await text.inputValue()).toMatch(/^Dear .+,\n\nOn \d{1,2} [A-Z][a-z]{2} \d{4} the calibration laboratory found the laser tracker TRK-001, serial /);
+    expect(await text.inputValue()).toMatch(
+      /^Dear .+,\n\nOn \d{1,2} [A-Z][a-z]{2} \d{4} the calibration laboratory found that the laser tracker TRK-001, serial \S+, was out of tolerance/,
+    );
     await text.fill(`${await text.inputValue()}\n\nOur engineer Tamsin Vell will ring you this week to go through the figures.`);
     await page.getByLabel('Subject of the notice to works@quarrington-rail.test').fill('TRK-001 and your job J-2620: no effect on your results is likely');
     await page.getByRole('button', { name: 'Send 2 notices…' }).click();

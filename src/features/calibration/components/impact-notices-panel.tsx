@@ -163,7 +163,7 @@ export function ImpactNoticesPanel({ review }: { review: ImpactReviewView }) {
             title={`Send ${noticesWord(drafts.length)}?`}
             description={
               <p>
-                {noticesWord(drafts.length)} go to {listWords(drafts.map((d) => d.to))}; sent from {result!.sender.name}
+                {noticesWord(drafts.length)} {drafts.length === 1 ? 'goes' : 'go'} to {listWords(drafts.map((d) => d.to))}; sent from {result!.sender.name}
                 {result!.sender.replyTo
                   ? ` with replies to ${result!.sender.replyTo}.`
                   : '. No reply address is set (Settings → Mail), so replies reach the sending address.'}

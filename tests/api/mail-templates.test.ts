@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { RentalView } from '../../shared/billing/views';
-import { handoverMail } from '../rentals/rental-mail';
-import { renderMail, type FirmSignature } from './mail-layout';
-import { letterTemplate } from './mail-template';
+import { handoverMail } from '../../server/rentals/rental-mail';
+import { renderMail, type FirmSignature } from '../../server/notifications/mail-layout';
+import { letterTemplate } from '../../server/notifications/mail-template';
 
 const firm: FirmSignature = {
   name: 'Harrowgate Survey & Sons',

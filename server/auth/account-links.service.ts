@@ -126,7 +126,7 @@ export class AccountLinksService {
       const { token, tokenHash } = newLinkToken();
       const expiresAt = new Date(Date.now() + RESET_HOURS * HOUR_MS);
       const link = await tx.insert(AccountLink, { purpose: 'password_reset', email, userId: account.user.id, tokenHash, expiresAt, sentAt: new Date() });
-      await enqueueMail(tx, [email], resetMail({ firm: firm.name, email, url: `${this.publicUrl}/reset-password#${token}`, expiresAt }));
+      await enqueueMail(tx, [email], resetMail, { firm: firm.name, email, url: `${this.publicUrl}/reset-password#${token}`, expiresAt });
       await recordAudit(tx, null, 'user.password_reset_requested', { type: 'user', id: account.user.id }, { linkId: link.id });
     });
   }
@@ -148,7 +148,7 @@ export class AccountLinksService {
       await endEverySession(tx, person.id);
       await replacePasswordHash(tx, person.id, passwordHash);
       const firm = await loadOrgContext(tx);
-      await enqueueMail(tx, [person.email], passwordChangedMail({ firm: firm.name, email: person.email }));
+      await enqueueMail(tx, [person.email], passwordChangedMail, { firm: firm.name, email: person.email });
       await recordAudit(tx, { userId: person.id }, 'user.password_reset', { type: 'user', id: person.id }, { linkId: link.id });
     });
   }
@@ -168,11 +168,13 @@ export class AccountLinksService {
   private async mailInvitation(tx: Scoped, actor: Actor, link: AccountLink, token: string) {
     const [firm, inviter] = await Promise.all([loadOrgContext(tx), findPerson(tx, actor.userId)]);
     const url = `${this.publicUrl}/join#${token}`;
-    await enqueueMail(
-      tx,
-      [link.email],
-      invitationMail({ firm: firm.name, inviter: inviter!.name, roleTitle: roleTitles[link.role!], url, expiresAt: link.expiresAt }),
-    );
+    await enqueueMail(tx, [link.email], invitationMail, {
+      firm: firm.name,
+      inviter: inviter!.name,
+      roleTitle: roleTitles[link.role!].toLowerCase(),
+      url,
+      expiresAt: link.expiresAt,
+    });
   }
 
   private async invitationView(tx: Scoped, link: AccountLink): Promise<InvitationView> {

@@ -1,8 +1,8 @@
-import { formatMoney } from '../../shared/billing/money';
 import { todayIn } from '../../shared/calibration/due-date';
 import { Scoped } from '../db/scoped';
 import type { Routine } from '../routines';
 import { enqueueMail, staffAddresses } from '../notifications';
+import { renewalRefusedMail } from './billing-mail';
 import { lockRental } from '../rentals';
 import { DepositAuthorization } from './deposit-authorization.entity';
 import type { DepositsService } from './deposits.service';
@@ -50,13 +50,11 @@ export const depositRenewalsRoutine = (deposits: DepositsService): Routine => ({
             return;
           }
           refused += 1;
-          await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), {
-            subject: `Deposit authorization not renewed: rental ${rental.number}`,
-            heading: `The card refused to renew the deposit authorization for rental ${rental.number}`,
-            paragraphs: [
-              `The authorization of ${formatMoney(authorization.amountMinor, rental.currency, 'en-GB')} lapses at ${authorization.captureBefore?.toISOString() ?? 'an unknown time'}; renewing it on the saved card failed: ${result.message}`,
-              'Ask the customer for another card, or settle the rental before the authorization lapses.',
-            ],
+          await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), renewalRefusedMail, {
+            rental,
+            amountMinor: authorization.amountMinor,
+            lapsesAt: authorization.captureBefore,
+            message: result.message,
           });
         })
         .catch((err: Error) => {

@@ -7,6 +7,7 @@ import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
 import { enqueueMail } from '../notifications';
+import { depositRequestMail } from './billing-mail';
 import { getCustomer, issueRenterLink, loadRentalView, lockRental, RENTER_LINK_DAYS, type RentalRecord } from '../rentals';
 import { DepositAuthorization } from './deposit-authorization.entity';
 import { DepositRequest } from './deposit-request.entity';
@@ -74,14 +75,11 @@ export class DepositRequestsService {
         requestedBy: actor.userId,
       });
       const view = await loadRentalView(tx, rental, rentalMoney);
-      await enqueueMail(tx, [customer.billingEmail], {
-        subject: `Rental ${rental.number}: your agreement and deposit`,
-        heading: `Rental ${rental.number}, ${view.startsOn} to ${view.endsOn}`,
-        paragraphs: [
-          `${customer.billingContact ? `Dear ${customer.billingContact}, before` : 'Before'} the kit is handed over, please read and accept the rental agreement and place the deposit of ${money(rental, rental.depositMinor)} on your card. It is an authorization, not a charge.`,
-          `Your rental's page (no sign-in needed; valid ${RENTER_LINK_DAYS} days): ${renterUrl}`,
-          'The card is typed on the payment provider’s own page; its details never reach us. The page also lists every item with its calibration valid-through date and the certificate pack.',
-        ],
+      await enqueueMail(tx, [customer.billingEmail], depositRequestMail, {
+        rental: { number: rental.number, currency: rental.currency, startsOn: view.startsOn, endsOn: view.endsOn, depositMinor: rental.depositMinor },
+        customer,
+        renterUrl,
+        linkDays: RENTER_LINK_DAYS,
       });
       await recordAudit(
         tx,

@@ -10,6 +10,7 @@ import { inOrganization, type Actor } from '../db/transaction';
 import { AppError, conflict, ruleBroken } from '../http/errors';
 import { loadOrgContext, voiceOf } from '../organizations';
 import { getCustomer, loadRentalView, lockRental, rememberRentalCard, type RentalRecord } from '../rentals';
+import { depositSettledMail } from './billing-mail';
 import { mailCustomerAbout } from './money-mails';
 import { providerCustomer } from './provider-customer';
 import { DepositAuthorization } from './deposit-authorization.entity';
@@ -158,25 +159,13 @@ export class DepositsService {
     reason: string | null,
   ) {
     const customer = await getCustomer(tx, rental.customerId);
-    const amount = await moneyOf(tx, rental);
-    const taken = told.capturedMinor + told.chargedMinor;
-    const paragraphs = [
-      `${customer.billingContact ? `Dear ${customer.billingContact},` : 'Hello,'} the kit of rental ${rental.number} is back with us and its deposit is settled.`,
-      ...(told.capturedMinor ? [`We have taken ${amount(told.capturedMinor)} from the card authorization${reason ? ` for: ${reason}` : ''}.`] : []),
-      ...(told.chargedMinor
-        ? [`A further ${amount(told.chargedMinor)} was charged to the card you saved with us${reason && !told.capturedMinor ? ` for: ${reason}` : ''}.`]
-        : []),
-      ...(told.releasedMinor
-        ? [
-            `${taken ? 'The other' : 'The whole authorization of'} ${amount(told.releasedMinor)} is released; your card issuer decides how soon it shows on your statement.`,
-          ]
-        : []),
-      'The invoice follows in a separate mail and shows these amounts as paid.',
-    ];
-    await mailCustomerAbout(tx, rental.id, taken ? 'deposit_captured' : 'deposit_released', told, customer.billingEmail, {
-      subject: `Rental ${rental.number}: deposit ${taken ? `${amount(taken)} taken` : 'released'}`,
-      heading: `Deposit for rental ${rental.number}`,
-      paragraphs,
+    const takenMinor = told.capturedMinor + told.chargedMinor;
+    await mailCustomerAbout(tx, rental.id, takenMinor ? 'deposit_captured' : 'deposit_released', told, customer.billingEmail, depositSettledMail, {
+      rental,
+      customer,
+      ...told,
+      takenMinor,
+      reason,
     });
   }
 

@@ -14,6 +14,7 @@ import { toCsv } from '../documents/csv';
 import { invoicePdf } from '../documents/invoice-pdf';
 import { conflict, ruleBroken } from '../http/errors';
 import { documentFirm, loadOrgContext, voiceOf } from '../organizations';
+import { invoiceMail } from './billing-mail';
 import { getCustomer, getRental, loadRentalView, lockRental, type CustomerRecord } from '../rentals';
 import { invoiceSummaries } from './invoice-summaries';
 import { Invoice, InvoicePayment } from './invoice.entity';
@@ -251,26 +252,14 @@ export class InvoicesService {
       { number: invoice.number, totalMinor: invoice.totalMinor, rentalId: invoice.rentalId },
     );
     const view = await this.view(tx, invoice);
-    const money = (minor: number) => firmFormat(voiceOf(ctx)).money(minor, view.currency);
-    const title = v.kind === 'invoice' ? `Invoice ${view.number}` : `Credit note ${view.number}`;
     await mailCustomerAbout(
       tx,
       view.rentalId,
       v.kind === 'invoice' ? 'invoice_issued' : 'credit_note_issued',
       { documentNumber: view.number, totalMinor: view.totalMinor },
       customer.billingEmail,
-      {
-        subject: `${title} from ${ctx.name}`,
-        heading: title,
-        paragraphs: [
-          `${customer.billingContact ? `Dear ${customer.billingContact}, please` : 'Please'} find ${v.kind === 'invoice' ? 'our invoice' : 'our credit note'} ${view.number} for rental ${view.rental.number} attached (${money(Math.abs(view.totalMinor))}).`,
-          v.kind === 'invoice'
-            ? view.balanceMinor > 0
-              ? `Balance due: ${money(view.balanceMinor)}${view.dueOn ? `, by ${firmFormat(voiceOf(ctx)).date(view.dueOn)}` : ''}.`
-              : 'Nothing is left to pay.'
-            : `It corrects invoice ${view.corrects?.number} of ${firmFormat(voiceOf(ctx)).date(view.corrects?.issuedOn)}: ${view.reason}`,
-        ],
-      },
+      invoiceMail,
+      { invoice: view, isInvoice: v.kind === 'invoice', firm: ctx.name, paymentTerms: ctx.issuer.paymentTerms },
       [
         {
           fileName: `${v.kind === 'invoice' ? 'invoice' : 'credit-note'}-${view.number}.pdf`,

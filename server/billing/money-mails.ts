@@ -1,21 +1,22 @@
 import type { MoneyMailEvent, MoneyMailView } from '../../shared/billing/views';
 import type { Scoped } from '../db/scoped';
-import { enqueueMail, mailDeliveries, type MailAttachment, type MailContent } from '../notifications';
+import { enqueueMail, mailDeliveries, type MailAttachment, type MailTemplate } from '../notifications';
 import { MoneyMail } from './money-mail.entity';
 
 type Told = { capturedMinor?: number; releasedMinor?: number; chargedMinor?: number; documentNumber?: string; totalMinor?: number };
 
 /** Queues the customer's mail about a change to their money and keeps what it told, in the change's transaction. */
-export async function mailCustomerAbout(
+export async function mailCustomerAbout<Data>(
   tx: Scoped,
   rentalId: string,
   event: MoneyMailEvent,
   told: Told,
   to: string,
-  content: MailContent,
+  template: MailTemplate<Data>,
+  data: Data,
   attachments: MailAttachment[] = [],
 ) {
-  const message = await enqueueMail(tx, [to], content, attachments);
+  const message = await enqueueMail(tx, [to], template, data, attachments);
   await tx.insert(MoneyMail, {
     rentalId,
     event,

@@ -6,6 +6,7 @@ import { Scoped } from '../db/scoped';
 import { documentedEndpoints } from '../http/endpoint';
 import { AppError } from '../http/errors';
 import { enqueueMail, staffAddresses } from '../notifications';
+import { authorizationLapsedMail } from './billing-mail';
 import { getRental } from '../rentals';
 import { DepositAuthorization } from './deposit-authorization.entity';
 import { applyRequestEvent, requestOf } from './deposit-request-events';
@@ -60,14 +61,7 @@ async function apply(
   if (claim === 'canceled') {
     Object.assign(authorization, { state: 'lapsed', settledAt: new Date() });
     await tx.save(DepositAuthorization, authorization);
-    await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), {
-      subject: `Deposit authorization lapsed: rental ${rental.number}`,
-      heading: `The card authorization for rental ${rental.number} has lapsed`,
-      paragraphs: [
-        `The provider released the authorization (${current.cancellation_reason ?? 'no reason given'}). Nothing is secured on the card any more.`,
-        'Charges at return can still go on the saved card, or on the invoice.',
-      ],
-    });
+    await enqueueMail(tx, await staffAddresses(tx, ['billing', 'owner']), authorizationLapsedMail, { rental, reason: current.cancellation_reason ?? null });
     return { organizationId: authorization.organizationId, outcome: `authorization ${authorization.id} lapsed` };
   }
   if (authorization.kind === 'authorization') {

@@ -2,6 +2,7 @@ import { Scoped } from '../db/scoped';
 import { enqueueMail, staffAddresses } from '../notifications';
 import type { Routine } from '../routines';
 import { todayIn } from '../../shared/calibration/due-date';
+import { lateReturnsMail } from './late-returns-mail';
 import { markNotCollected } from './lifecycle';
 
 type LateRow = {
@@ -45,13 +46,9 @@ export const lateReturnsRoutine = (): Routine => ({
       await db.transaction(async (manager) => {
         const tx = new Scoped(manager, organizationId);
         const today = todayIn(late[0].time_zone, now);
-        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
-          subject: `${late.length} late return${late.length === 1 ? '' : 's'} on ${today}`,
-          heading: 'Kit that should be back by now',
-          paragraphs: late.map(
-            (r) =>
-              `${r.reference ? `Job ${r.reference}` : 'Booking'} ${r.starts_on} to ${r.ends_on}${r.taken_by ? `, taken by ${r.taken_by}` : ''}: ${r.tags}.`,
-          ),
+        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), lateReturnsMail, {
+          today,
+          late: late.map((r) => ({ reference: r.reference, startsOn: r.starts_on, endsOn: r.ends_on, takenBy: r.taken_by, tags: r.tags })),
         });
       });
     }

@@ -199,8 +199,14 @@ export function calibrationRoutes({ calibration, impact, lab, review }: Services
   endpoint(
     router,
     at,
-    { method: 'post', path: '/impact-reviews/:id/notices', summary: 'Draft (or send) one notice per customer', access: 'impact.review', body: noticePayload },
-    ({ actor, params, body }) => impact.notices(actor, params.id, body.send),
+    {
+      method: 'post',
+      path: '/impact-reviews/:id/notices',
+      summary: 'Draft (or send, as edited) one notice per customer',
+      access: 'impact.review',
+      body: noticePayload,
+    },
+    ({ actor, params, body }) => impact.notices(actor, params.id, body.send, body.notices),
   );
   endpoint(
     router,

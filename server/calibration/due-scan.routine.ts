@@ -2,6 +2,7 @@ import { addDays, todayIn } from '../../shared/calibration/due-date';
 import { Scoped } from '../db/scoped';
 import { enqueueMail, staffAddresses } from '../notifications';
 import type { Routine } from '../routines';
+import { dueDigestMail } from './calibration-mail';
 import { dueItems } from './review.service';
 
 type Changed = { organization_id: string; asset_tag: string; state: string };
@@ -48,22 +49,19 @@ export const dueScanRoutine = (): Routine => ({
         const details = (await dueItems(tx, today, org.due_soon ?? 30)).filter((d) => tags.has(d.assetTag));
         // A long list helps nobody in a mail: the first hundred, then a pointer to the review page.
         const DIGEST_LINES = 100;
-        const line = (d: (typeof details)[number]) =>
-          `${d.assetTag} (${d.type.replace('_', ' ')}) — ${d.state === 'overdue' ? 'OVERDUE' : 'due'} ${d.dueOn ?? '(no calibration on record)'}${d.threatened.length ? `; threatens ${d.threatened.map((t) => `${t.jobReference ?? 'a booking'} ${t.startsOn}–${t.endsOn}`).join(', ')}` : ''}`;
         const overdue = details.filter((d) => d.state === 'overdue');
         const soon = details.filter((d) => d.state === 'due_soon');
-        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
-          subject: `Calibration: ${overdue.length} newly overdue, ${soon.length} newly due soon (${today})`,
-          heading: 'Calibration changes since the last scan',
-          paragraphs: [
-            ...(overdue.length ? ['Overdue now:', ...overdue.slice(0, DIGEST_LINES).map(line)] : []),
-            ...(overdue.length > DIGEST_LINES ? [`…and ${overdue.length - DIGEST_LINES} more overdue.`] : []),
-            ...(soon.length
-              ? [`Due within ${org.due_soon ?? 30} days (by ${addDays(today, org.due_soon ?? 30)}):`, ...soon.slice(0, DIGEST_LINES).map(line)]
-              : []),
-            ...(soon.length > DIGEST_LINES ? [`…and ${soon.length - DIGEST_LINES} more due soon.`] : []),
-            'Plan lab trips from the review page; the window finder shows when each item can go without breaking a booking.',
-          ],
+        const withinDays = org.due_soon ?? 30;
+        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), dueDigestMail, {
+          today,
+          overdue: overdue.slice(0, DIGEST_LINES),
+          overdueMore: Math.max(0, overdue.length - DIGEST_LINES),
+          overdueCount: overdue.length,
+          soon: soon.slice(0, DIGEST_LINES),
+          soonMore: Math.max(0, soon.length - DIGEST_LINES),
+          soonCount: soon.length,
+          withinDays,
+          soonBy: addDays(today, withinDays),
         });
         digests += 1;
       });

@@ -1,38 +1,51 @@
 import { allowanceWords, type TriageFacts } from '../../shared/calibration/triage';
 import type { ImpactBookingView, ImpactReviewView, NoticeGroup } from '../../shared/calibration/views';
+import { mailTemplate } from '../notifications';
 
-type Row = ImpactBookingView & { jobReference: string };
+/** One of the customer's jobs in the notice, with the triage figures that judge it. */
+type NoticeJob = {
+  reference: string;
+  startsOn: string;
+  endsOn: string;
+  toleranceNote: string | null;
+  judged: boolean;
+  errorUm: number | null;
+  toleranceUm: number | null;
+  allowanceUm: number | null;
+  distanceM: number | null;
+  share: string;
+  reason: string;
+};
 
-const um = (v: number) => `${v.toFixed(1)} µm`;
-const triageOf = (b: ImpactBookingView): TriageFacts => b.triage ?? b.suggestion;
-
-/** "J-2611 (bore position ±25 µm): 9.5 µm found, up to 6.2 µm would be a quarter of 25.0 µm" */
-function comparison(b: Row): string {
-  const t = triageOf(b);
-  const what = t.toleranceNote ? `${b.jobReference} (${t.toleranceNote})` : b.jobReference;
-  if (t.toleranceUm === null || t.allowanceUm === null || t.asFoundErrorUm === null) return `${what}: ${t.reason}`;
-  const at = t.distanceM !== null && t.tolerance?.kind === 'range' ? ` at ${t.distanceM} m` : '';
-  return `${what}: an error of ${um(t.asFoundErrorUm)} against your tolerance of ${um(t.toleranceUm)}${at}; up to ${um(t.allowanceUm)} would be ${allowanceWords(t.ratio)} of it.`;
-}
+type NoticeData = {
+  greeting: string;
+  asset: { type: string; assetTag: string; serialNumber: string };
+  foundOn: string;
+  byCalibration: boolean;
+  errorUm: number | null;
+  jobs: NoticeJob[];
+  references: string;
+  pending: boolean;
+  words: { subject: string; finding: string; proposal: string };
+};
 
 const proposals: Record<NoticeGroup, { subject: string; finding: string; proposal: string }> = {
   no_effect: {
     subject: 'no effect on your results is likely',
     finding: 'We compared that error with the tightest tolerance on record for your work, and it uses only a small share of it:',
-    proposal:
-      'What we propose: we believe your results stand and no re-measurement is needed. If you would like the figures in more detail, reply to this e-mail.',
+    proposal: 'We believe your results stand and no re-measurement is needed. If you would like the figures in more detail, reply to this e-mail.',
   },
   remeasure_offered: {
     subject: 'we propose a re-measurement',
     finding: 'We compared that error with the tightest tolerance on record for your work, and it uses more of it than we accept:',
     proposal:
-      'What we propose: to re-measure the affected features at no cost to you. Reply with days that suit you and we will book the work; until then, treat the affected results with caution.',
+      'We propose to re-measure the affected features at no cost to you. Please reply with days that suit you and we will book the work; until then, treat the affected results with caution.',
   },
   customer_notified: {
     subject: 'we need your tolerance to judge the effect',
     finding: 'From our records we cannot judge whether this affects your results:',
     proposal:
-      'What we propose: tell us the tightest tolerance you needed on that work and we will assess it and write to you again. If you prefer, we will re-measure the affected features.',
+      'Please tell us the tightest tolerance you needed on that work and we will assess it and write to you again. If you prefer, we will re-measure the affected features.',
   },
   pending: {
     subject: 'we are reviewing your measurements',
@@ -41,19 +54,57 @@ const proposals: Record<NoticeGroup, { subject: string; finding: string; proposa
   },
 };
 
-/** The notice for one customer and one group, in plain words: what was found and what the firm proposes. */
-export function noticeFor(review: ImpactReviewView, tag: string, group: NoticeGroup, rows: Row[]) {
-  const p = proposals[group];
-  const jobs = rows.map((r) => `${r.jobReference} (${r.startsOn} to ${r.endsOn})`).join(', ');
-  const how = review.trigger === 'calibration' ? 'the calibration laboratory found' : 'one of our own field checks found';
-  const error = review.asFound.errorUm === null ? '' : `, with an error of ${um(review.asFound.errorUm)}`;
+/** The customer notice as a letter: what was found, on which of their jobs, what it means and what the firm will do. */
+const impactNotice = mailTemplate<NoticeData>('impact-notice', {
+  subject: 'Measurements taken with our {{typeName asset.type}} {{asset.assetTag}} ({{references}}): {{words.subject}}',
+  heading: 'A note about your measurements',
+  body: `<p>{{greeting}}</p>
+<p>On {{date foundOn}} {{#if byCalibration}}the calibration laboratory found{{else}}one of our own field checks found{{/if}} that {{item asset}},
+was out of tolerance{{#if errorUm}}, with an error of {{um errorUm}}{{/if}}. We used it on your {{plural jobs.length "job"}}:</p>
+<ul>{{#each jobs}}<li>{{reference}}, {{dateRange startsOn endsOn}}</li>{{/each}}</ul>
+{{#if pending}}<p>{{words.finding}}</p>{{else}}<p>{{words.finding}}</p><ul>{{#each jobs}}<li>{{> comparison}}</li>{{/each}}</ul>{{/if}}
+<p>{{words.proposal}}</p>
+<p>We are sorry for the trouble.</p>
+<p>Kind regards,</p>`,
+  partials: {
+    comparison: `{{reference}}{{#if toleranceNote}} ({{toleranceNote}}){{/if}}: {{#if judged}}an error of {{um errorUm}} against your tolerance of
+{{um toleranceUm}}{{#if distanceM}} at {{distanceM}} m{{/if}}; up to {{um allowanceUm}} would be {{share}} of it.{{else}}{{reason}}{{/if}}`,
+  },
+});
+
+type Row = ImpactBookingView & { jobReference: string };
+const triageOf = (b: ImpactBookingView): TriageFacts => b.triage ?? b.suggestion;
+
+function noticeJob(b: Row): NoticeJob {
+  const t = triageOf(b);
   return {
-    subject: `About measurements taken with our ${tag} (${rows.map((r) => r.jobReference).join(', ')}): ${p.subject}`,
-    heading: `A note about your measurements, ${rows[0].customerName}`,
-    paragraphs: [
-      `On ${review.foundOn} ${how} our ${tag} out of tolerance${error}. We used it on your work ${jobs}.`,
-      group === 'pending' ? p.finding : [p.finding, ...rows.map((r) => `• ${comparison(r)}`)].join('\n'),
-      p.proposal,
-    ],
+    reference: b.jobReference,
+    startsOn: b.startsOn,
+    endsOn: b.endsOn,
+    toleranceNote: t.toleranceNote,
+    judged: t.toleranceUm !== null && t.allowanceUm !== null && t.asFoundErrorUm !== null,
+    errorUm: t.asFoundErrorUm,
+    toleranceUm: t.toleranceUm,
+    allowanceUm: t.allowanceUm,
+    distanceM: t.tolerance?.kind === 'range' ? t.distanceM : null,
+    share: allowanceWords(t.ratio),
+    reason: t.reason,
   };
+}
+
+/** The template and data of the notice for one customer and one group. */
+export function noticeFor(review: ImpactReviewView, asset: NoticeData['asset'], group: NoticeGroup, rows: Row[]) {
+  const who = rows[0].contactName ?? rows[0].customerName;
+  const data: NoticeData = {
+    greeting: who ? `Dear ${who},` : 'Dear customer,',
+    asset,
+    foundOn: review.foundOn,
+    byCalibration: review.trigger === 'calibration',
+    errorUm: review.asFound.errorUm,
+    jobs: rows.map(noticeJob),
+    references: new Intl.ListFormat('en', { type: 'conjunction' }).format(rows.map((r) => r.jobReference)),
+    pending: group === 'pending',
+    words: proposals[group],
+  };
+  return { template: impactNotice, data };
 }

@@ -73,4 +73,8 @@ export class ImpactReviewItem extends OrgOwned {
 
   @Column({ name: 'notice_queued_at', type: 'timestamptz', nullable: true })
   noticeQueuedAt: Date | null;
+
+  /** The outbox message of the notice this booking's customer was sent (its delivery time answers "when did it go"). */
+  @Column({ name: 'notice_message_id', type: 'uuid', nullable: true })
+  noticeMessageId: string | null;
 }

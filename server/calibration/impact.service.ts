@@ -1,16 +1,18 @@
 import type { DataSource } from 'typeorm';
 import { assessmentForSuggestion, triage, type AsFoundErrorSource, type JobTolerance, type TriageFacts } from '../../shared/calibration/triage';
+import type { NoticeEdit } from '../../shared/schemas/calibration';
 import type { AssetImpactView, ImpactAssessment, ImpactNoticesView, ImpactReviewView, NoticeGroup } from '../../shared/calibration/views';
 import type { Page } from '../../shared/lists/page';
 import { recordAudit } from '../audit/audit.service';
 import type { Scoped } from '../db/scoped';
 import { inOrganization, type Actor } from '../db/transaction';
 import { getAsset, type AssetRecord } from '../fleet';
-import { ruleBroken } from '../http/errors';
-import { enqueueMail, staffAddresses } from '../notifications';
+import { conflict, ruleBroken } from '../http/errors';
+import { mailDeliveries, draftLetter, enqueueMail, firmSignature, letterTemplate, staffAddresses } from '../notifications';
 import { ImpactReview, ImpactReviewItem } from './impact-review.entity';
 import { listReply } from '../http/list-reply';
 import { loadOrgContext } from '../organizations';
+import { impactOpenedMail } from './calibration-mail';
 import { noticeFor } from './impact-notices';
 
 /** Day of the item's last passing evidence before `foundOn`: an in-tolerance calibration or a passing field check (on the firm's calendar). */
@@ -35,7 +37,7 @@ async function lastPassingEvidence(tx: Scoped, assetId: string, foundOn: string,
 export async function openImpactReview(
   tx: Scoped,
   actor: Actor,
-  asset: Pick<AssetRecord, 'id' | 'assetTag'>,
+  asset: Pick<AssetRecord, 'id' | 'assetTag' | 'type' | 'serialNumber'>,
   found: { trigger: 'calibration' | 'check'; triggerId: string; foundOn: string },
 ) {
   const since = await lastPassingEvidence(tx, asset.id, found.foundOn, found.trigger === 'check' ? found.triggerId : undefined);
@@ -73,13 +75,12 @@ export async function openImpactReview(
     { type: 'asset', id: asset.id },
     { reviewId: review.id, since, foundOn: found.foundOn, bookings: bookings.length },
   );
-  await enqueueMail(tx, await staffAddresses(tx, ['owner']), {
-    subject: `Impact review opened for ${asset.assetTag}: ${bookings.length} booking(s) to assess`,
-    heading: `${asset.assetTag} was found out of tolerance`,
-    paragraphs: [
-      `Found on ${found.foundOn} (${found.trigger === 'calibration' ? 'as-found calibration result' : 'failed field check'}). Its last passing evidence is ${since ?? 'not on record'}.`,
-      `${bookings.length} booking(s) used it in between. Assess each one and tell the customers concerned (ISO 9001:2015 §7.1.5.2).`,
-    ],
+  await enqueueMail(tx, await staffAddresses(tx, ['owner']), impactOpenedMail, {
+    asset,
+    foundOn: found.foundOn,
+    byCalibration: found.trigger === 'calibration',
+    since,
+    bookings: bookings.length,
   });
   return review;
 }
@@ -89,6 +90,7 @@ type ReviewRow = {
   jobId: string | null;
   jobReference: string | null;
   customerName: string | null;
+  contactName: string | null;
   contactEmail: string | null;
   rentalId: string | null;
   startsOn: string;
@@ -96,6 +98,7 @@ type ReviewRow = {
   assessment: ImpactAssessment | null;
   note: string | null;
   noticeQueuedAt: Date | null;
+  noticeMessageId: string | null;
   tightestTolerance: JobTolerance | null;
   triage: TriageFacts | null;
 };
@@ -119,19 +122,28 @@ export class ImpactService {
 
   private async view(tx: Scoped, review: ImpactReview): Promise<ImpactReviewView> {
     const bookings = await tx.sql<ReviewRow>(
-      `SELECT i.booking_id AS "bookingId", b.job_id AS "jobId", j.reference AS "jobReference", j.customer_name AS "customerName", j.contact_email AS "contactEmail",
+      `SELECT i.booking_id AS "bookingId", b.job_id AS "jobId", j.reference AS "jobReference", j.customer_name AS "customerName", j.contact_name AS "contactName", j.contact_email AS "contactEmail",
               b.rental_id AS "rentalId", to_char(b.starts_on, 'YYYY-MM-DD') AS "startsOn", to_char(b.ends_on, 'YYYY-MM-DD') AS "endsOn",
-              i.assessment, i.note, i.notice_queued_at AS "noticeQueuedAt", j.tightest_tolerance AS "tightestTolerance", i.triage
+              i.assessment, i.note, i.notice_queued_at AS "noticeQueuedAt", i.notice_message_id AS "noticeMessageId", j.tightest_tolerance AS "tightestTolerance", i.triage
          FROM impact_review_items i JOIN bookings b ON b.id = i.booking_id LEFT JOIN jobs j ON j.id = b.job_id
         WHERE i.organization_id = $1 AND i.review_id = $2 ORDER BY b.starts_on`,
       [review.id],
     );
     const asFound = await asFoundError(tx, review);
     const { triageRatio } = await loadOrgContext(tx);
-    const rows = bookings.map(({ tightestTolerance, ...b }) => ({
+    const delivered = new Map(
+      (
+        await mailDeliveries(
+          tx,
+          bookings.flatMap((b) => (b.noticeMessageId ? [b.noticeMessageId] : [])),
+        )
+      ).map((d) => [d.id, d.sentAt]),
+    );
+    const rows = bookings.map(({ tightestTolerance, noticeMessageId, ...b }) => ({
       ...b,
       customerId: null,
       noticeQueuedAt: b.noticeQueuedAt?.toISOString() ?? null,
+      noticeSentAt: (noticeMessageId && delivered.get(noticeMessageId)?.toISOString()) || null,
       toleranceNote: tightestTolerance?.note ?? null,
       suggestion: triage({ asFoundErrorUm: asFound.errorUm, errorSource: asFound.source, job: tightestTolerance, ratio: triageRatio }),
     }));
@@ -240,52 +252,61 @@ export class ImpactService {
     });
   }
 
-  /** One notice per customer and group (the booking's assessment, or pending) with an e-mail address; `send` queues them in the outbox. */
-  notices(actor: Actor, reviewId: string, send: boolean): Promise<ImpactNoticesView> {
+  /**
+   * One notice per customer and group (the booking's assessment, or pending) with an e-mail address. `send` queues them,
+   * each with the subject and text the person edited (`edits`, matched by address and group) or else as drafted; the
+   * words sent are kept in the audit trail, and each booking remembers its notice's outbox message.
+   */
+  notices(actor: Actor, reviewId: string, send: boolean, edits: NoticeEdit[] = []): Promise<ImpactNoticesView> {
     return inOrganization(this.db, actor.organizationId, async (tx) => {
       const review = await tx.get(ImpactReview, { id: reviewId }, 'That impact review', { relations: { asset: true } });
       const view = await this.view(tx, review);
-      const tag = review.asset!.assetTag;
-      const groups = new Map<string, { to: string; group: NoticeGroup; rows: (ImpactReviewView['bookings'][number] & { jobReference: string })[] }>();
+      type Group = { to: string; group: NoticeGroup; rows: (ImpactReviewView['bookings'][number] & { jobReference: string })[] };
+      const groups = new Map<string, Group>();
       for (const b of view.bookings) {
         if (!b.contactEmail) continue;
         const group: NoticeGroup = b.assessment ?? 'pending';
         const key = `${b.contactEmail}\u0000${group}`;
         const entry = groups.get(key) ?? { to: b.contactEmail, group, rows: [] };
-        entry.rows.push({ ...b, jobReference: b.jobReference ?? `booking of ${b.startsOn}` });
+        entry.rows.push({ ...b, jobReference: b.jobReference ?? `the booking of ${b.startsOn}` });
         groups.set(key, entry);
       }
-      const drafts = [...groups.values()].map(({ to, group, rows }) => ({
-        to,
-        group,
-        rows,
-        customerName: rows[0].customerName,
-        ...noticeFor(view, tag, group, rows),
-      }));
-      if (send) {
-        for (const d of drafts) await enqueueMail(tx, [d.to], d);
-        await tx.sql(`UPDATE impact_review_items SET notice_queued_at = now() WHERE organization_id = $1 AND review_id = $2 AND booking_id = ANY($3)`, [
-          reviewId,
-          view.bookings.filter((b) => b.contactEmail).map((b) => b.bookingId),
-        ]);
-        await recordAudit(
-          tx,
-          actor,
-          'impact_review.notices_sent',
-          { type: 'asset', id: review.assetId },
-          { reviewId, notices: drafts.map((d) => ({ to: d.to, group: d.group, bookings: d.rows.map((r) => r.bookingId) })) },
-        );
+      const drafts: (Group & { customerName: string | null; subject: string; text: string })[] = [];
+      for (const { to, group, rows } of groups.values()) {
+        const { template, data } = noticeFor(view, review.asset!, group, rows);
+        drafts.push({ to, group, rows, customerName: rows[0].customerName, ...(await draftLetter(tx, template, data)) });
       }
+      if (send) {
+        const stale = edits.find((e) => !drafts.some((d) => d.to === e.to && d.group === e.group));
+        if (stale)
+          throw conflict(`The notices changed since you opened them (nothing for ${stale.to} in that group now): reopen them, check the text and send again.`);
+        const sent = [];
+        for (const d of drafts) {
+          const edit = edits.find((e) => e.to === d.to && e.group === d.group);
+          const words = { subject: edit?.subject ?? d.subject, text: edit?.text ?? d.text };
+          const message = await enqueueMail(tx, [d.to], letterTemplate, words);
+          await tx.sql(
+            `UPDATE impact_review_items SET notice_queued_at = now(), notice_message_id = $4 WHERE organization_id = $1 AND review_id = $2 AND booking_id = ANY($3)`,
+            [reviewId, d.rows.map((r) => r.bookingId), message.id],
+          );
+          Object.assign(d, words);
+          sent.push({ to: d.to, group: d.group, bookings: d.rows.map((r) => r.bookingId), ...words, edited: !!edit, messageId: message.id });
+        }
+        await recordAudit(tx, actor, 'impact_review.notices_sent', { type: 'asset', id: review.assetId }, { reviewId, notices: sent });
+      }
+      const firm = await firmSignature(tx);
       return {
         drafts: drafts.map((d) => ({
           to: d.to,
           customerName: d.customerName,
           group: d.group,
           jobReferences: d.rows.map((r) => r.jobReference),
+          bookingIds: d.rows.map((r) => r.bookingId),
           subject: d.subject,
-          text: d.paragraphs.join('\n\n'),
+          text: d.text,
         })),
         sent: send,
+        sender: { name: firm.name, replyTo: firm.replyTo, address: firm.address },
       };
     });
   }

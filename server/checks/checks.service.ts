@@ -21,12 +21,12 @@ import { placeHold } from '../holds/holds.service';
 import { openImpactReview } from '../calibration/impact.service';
 import { calendarDayIn } from '../../shared/calibration/due-date';
 import { enqueueMail, staffAddresses } from '../notifications';
+import { failedCheckMail } from './check-mail';
 import { loadOrgContext } from '../organizations';
 import { FieldCheck } from './field-check.entity';
 import { tipForecasts } from './tip-forecasts';
 import { addDays } from '../../shared/calibration/due-date';
 
-const utcMinute = (d: Date) => d.toISOString().slice(0, 16).replace('T', ' ');
 /** A record that waited on a phone for a while: worth saying when the work was done. */
 const arrivedLate = (doneAt: Date, arrivedAt: Date) => arrivedAt.getTime() - doneAt.getTime() > 10 * 60_000;
 
@@ -153,18 +153,12 @@ export class ChecksService {
         const what = `${checkKindTitles[input.kind]}${check.position ? ` (${check.position})` : ''} failed: ${decided.resultUm.toFixed(1)} µm against ${decided.acceptanceLimitUm.toFixed(1)} µm${decided.guardBandUm > 0 ? ` (tolerance ${decided.toleranceUm.toFixed(1)} µm less a guard band of ${decided.guardBandUm.toFixed(1)} µm)` : ''}`;
         await placeHold(tx, actor, subject, { reason: 'failed_check', summary: what, checkId: check.id });
         await openImpactReview(tx, actor, subject, { trigger: 'check', triggerId: check.id, foundOn: calendarDayIn(check.performedAt, ctx.timeZone) });
-        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
-          subject: `${subject.assetTag} is on hold: ${checkKindTitles[input.kind].toLowerCase()} failed`,
-          heading: `${subject.assetTag} failed a field check and is on hold`,
-          paragraphs: [
-            what + '.',
-            ...(arrivedLate(check.performedAt, check.createdAt)
-              ? [
-                  `The check was done at ${utcMinute(check.performedAt)} UTC and reached Nestkeeper at ${utcMinute(check.createdAt)} UTC (recorded without signal).`,
-                ]
-              : []),
-            'It cannot be booked or checked out until it is recalibrated or passes the check again and someone releases it. Jobs it measured since its last good check may need a look.',
-          ],
+        await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), failedCheckMail, {
+          asset: subject,
+          kind: checkKindTitles[input.kind].toLowerCase(),
+          what,
+          performedAt: check.performedAt,
+          arrivedAt: arrivedLate(check.performedAt, check.createdAt) ? check.createdAt : null,
         });
       }
       return { check: checkView(check), replayed: false };

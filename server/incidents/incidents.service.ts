@@ -17,6 +17,7 @@ import { findAsset, getAsset, markDamaged, type AssetRecord } from '../fleet';
 import { AppError, notFound, ruleBroken } from '../http/errors';
 import { placeHold } from '../holds/holds.service';
 import { enqueueMail, staffAddresses } from '../notifications';
+import { incidentMail } from './incident-mail';
 import { Incident, IncidentPhoto } from './incident.entity';
 import { preparePhoto, type PreparedPhoto, type UploadedPhoto } from './photos';
 
@@ -100,18 +101,14 @@ export async function openIncident(tx: Scoped, actor: Actor, asset: AssetRecord,
     { type: 'asset', id: asset.id },
     { incidentId: incident.id, kind: input.kind, photos: saved.length, batteryFlaggedDamaged: flagBattery },
   );
-  await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), {
-    subject: `${asset.assetTag} reported ${incidentKindTitles[input.kind].toLowerCase()} — now on hold`,
-    heading: `${asset.assetTag}: ${incidentKindTitles[input.kind].toLowerCase()}`,
-    paragraphs: [
-      input.description,
-      `Reported for ${input.occurredAt.slice(0, 16).replace('T', ' ')} UTC${input.location ? ` at ${input.location}` : ''}, with ${saved.length} photo(s). The item is on hold and cannot be booked until it is checked or recalibrated and released.`,
-      ...(flagBattery
-        ? [
-            "This is a lithium-ion battery: treat it as damaged. Do not charge it and do not ship it by air; keep it apart in a fire-safe place and follow local rules and the maker's instructions for disposal.",
-          ]
-        : []),
-    ],
+  await enqueueMail(tx, await staffAddresses(tx, ['owner', 'manager']), incidentMail, {
+    asset,
+    kind: incidentKindTitles[input.kind].toLowerCase(),
+    description: input.description,
+    occurredAt: input.occurredAt,
+    location: input.location ?? null,
+    photos: saved.length,
+    damagedBattery: flagBattery,
   });
   return { incident, photos: saved };
 }

@@ -4,6 +4,6 @@ import { OutboxMessage } from './outbox-message.entity';
 import { SinkMessage } from './sink-message.entity';
 
 export const notificationEntities = [OutboxMessage, OutboxAttachment, SinkMessage];
-export { enqueueMail, mailDeliveries, outboxBacklog, type MailAttachment } from './outbox';
-export type { MailContent } from './mail-template';
+export { draftLetter, enqueueMail, firmSignature, mailDeliveries, outboxBacklog, type MailAttachment } from './outbox';
+export { letterTemplate, mailTemplate, type MailTemplate } from './mail-template';
 export { staffAddresses } from './staff';

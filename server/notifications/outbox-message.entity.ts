@@ -19,6 +19,14 @@ export class OutboxMessage extends OrgOwned {
   @Column({ type: 'text', array: true })
   recipients: string[];
 
+  /** The firm's name as the From display name, as it was when the mail was queued ('' before the firm spoke for itself). */
+  @Column({ name: 'from_name', type: 'text', default: '' })
+  fromName: string;
+
+  /** The firm's contact for replies when the mail was queued (null: none set). */
+  @Column({ name: 'reply_to', type: 'text', nullable: true })
+  replyTo: string | null;
+
   @Column({ type: 'text' })
   subject: string;
 

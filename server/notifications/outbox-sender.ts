@@ -1,4 +1,5 @@
 import type { Transporter } from 'nodemailer';
+import addressparser from 'nodemailer/lib/addressparser';
 import type { DataSource } from 'typeorm';
 import { OutboxAttachment } from './outbox-attachment.entity';
 import { OutboxMessage } from './outbox-message.entity';
@@ -17,6 +18,8 @@ export const backoffSeconds = (attempts: number) => Math.min(30 * 2 ** Math.max(
  */
 /** `organizationId` limits the run to one firm's messages (an owner's "run now"). */
 export async function deliverOutbox(db: DataSource, transport: Transporter, from: string, organizationId: string | null = null) {
+  // The installation's sending address; the firm's name is the display name (a mail queued before that keeps `from` whole).
+  const [sender] = addressparser(from, { flatten: true });
   let sent = 0;
   let deferred = 0;
   for (;;) {
@@ -36,7 +39,8 @@ export async function deliverOutbox(db: DataSource, transport: Transporter, from
           const attachments = await manager.find(OutboxAttachment, { where: { messageId: message.id }, order: { fileName: 'ASC' } });
           await transport.sendMail({
             attachments: attachments.map((a) => ({ filename: a.fileName, contentType: a.contentType, content: a.content })),
-            from,
+            from: message.fromName && sender?.address ? { name: message.fromName, address: sender.address } : from,
+            ...(message.replyTo ? { replyTo: message.replyTo } : {}),
             to: message.recipients,
             subject: message.subject,
             text: message.textBody,

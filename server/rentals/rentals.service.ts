@@ -11,6 +11,7 @@ import { ruleBroken } from '../http/errors';
 import { setIncidentCharge } from '../incidents/incidents.service';
 import { enqueueMail } from '../notifications';
 import { loadFirmFormat } from '../organizations';
+import { handoverMail } from './rental-mail';
 import { priceRental } from './pricing';
 import type { RentalMoney } from './rental-money';
 import { latestAcceptance } from './agreement-acceptance';
@@ -128,23 +129,10 @@ export class RentalsService {
       if (!booking.rentalId) return;
       const rental = await loadRentalView(tx, await getRental(tx, booking.rentalId), this.money);
       const [agreement, pack] = [await agreementFor(tx, rental), await certificatePackFor(tx, rental)];
-      await enqueueMail(
-        tx,
-        [rental.customer.billingEmail],
-        {
-          subject: `Rental ${rental.number}: agreement and calibration certificates`,
-          heading: `Your rental ${rental.number}, ${rental.startsOn} to ${rental.endsOn}`,
-          paragraphs: [
-            `${rental.customer.billingContact ? `Dear ${rental.customer.billingContact}, the` : 'The'} kit for rental ${rental.number} was handed over today. Attached are the rental agreement and a certificate pack with the current calibration certificate of every rented item that needs one, for your own auditors.`,
-            `Items: ${rental.items.map((i) => i.assetTag).join(', ')}. Please bring everything back by ${rental.endsOn}.`,
-            "Laser trackers emit a laser beam: do not stare into it. Damaged lithium-ion batteries are a fire risk: do not charge or fly them. Cases are heavy. Follow local codes, the carrier's rules and the instrument maker's instructions.",
-          ],
-        },
-        [
-          { fileName: `agreement-${rental.number}.pdf`, contentType: 'application/pdf', content: agreement },
-          { fileName: `certificates-${rental.number}.pdf`, contentType: 'application/pdf', content: pack },
-        ],
-      );
+      await enqueueMail(tx, [rental.customer.billingEmail], handoverMail, { rental }, [
+        { fileName: `agreement-${rental.number}.pdf`, contentType: 'application/pdf', content: agreement },
+        { fileName: `certificates-${rental.number}.pdf`, contentType: 'application/pdf', content: pack },
+      ]);
     },
   };
 }

@@ -1,7 +1,7 @@
 import bcrypt from 'bcrypt';
 import type { DataSource } from 'typeorm';
 import { Scoped } from '../db/scoped';
-import { enqueueMail } from '../notifications';
+import { enqueueMail, mailTemplate } from '../notifications';
 import { Organization } from '../organizations/organization.entity';
 import { User } from '../users/user.entity';
 import { DEMO_PASSWORD, demoFirm, otherFirm } from './demo-people';
@@ -27,15 +27,18 @@ export async function seedDemoIfEmpty(db: DataSource, bcryptCost = 12): Promise<
         await seedDemoRentals(tx, firm.timeZone);
       }
       const owner = firm.people.find((p) => p.role === 'owner')!;
-      await enqueueMail(tx, [owner.email], {
-        subject: `Welcome to Nestkeeper, ${firm.name}`,
-        heading: `${firm.name} is set up`,
-        paragraphs: [
-          `Your firm's Nestkeeper is ready. Invite colleagues under Users: each gets a mail to choose their own name and password. Anyone can change their password and turn on a second sign-in step under "My account".`,
-          `This mailbox shows every e-mail Nestkeeper sends for ${firm.name}, so you can see what your team and customers receive.`,
-        ],
-      });
+      await enqueueMail(tx, [owner.email], welcomeMail, { firm: firm.name });
     }
   });
   return true;
 }
+
+/** The first mail a new firm's owner gets. */
+const welcomeMail = mailTemplate<{ firm: string }>('welcome', {
+  subject: 'Welcome to Nestkeeper, {{firm}}',
+  heading: '{{firm}} is set up',
+  body: `<p>Your firm's Nestkeeper is ready. Invite colleagues under Users: each gets a mail to choose their own name and password.
+Anyone can change their password and turn on a second sign-in step under "My account".</p>
+<p>This mailbox shows every e-mail Nestkeeper sends for {{firm}}, so you can see what your team and customers receive.
+Under Settings → Mail, name the address replies to these mails should go to.</p>`,
+});

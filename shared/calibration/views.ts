@@ -124,6 +124,10 @@ export type ImpactBookingView = {
   assessment: ImpactAssessment | null;
   note: string | null;
   noticeQueuedAt: string | null;
+  /** When the notice reached the mail server (null: not sent, or still waiting to send). */
+  noticeSentAt: string | null;
+  /** The job's contact person, whom a notice greets. */
+  contactName: string | null;
   /** The job's tightest tolerance as recorded now (null: none, or a rental). */
   toleranceNote: string | null;
   /** Triage from today's records: a suggestion a person accepts or changes. */
@@ -160,6 +164,8 @@ export type NoticeGroup = ImpactAssessment | 'pending';
 
 /** `POST /api/impact-reviews/:id/notices`: one draft per customer and group with an e-mail address; `sent` when they were queued. */
 export type ImpactNoticesView = {
-  drafts: { to: string; customerName: string | null; group: NoticeGroup; jobReferences: string[]; subject: string; text: string }[];
+  drafts: { to: string; customerName: string | null; group: NoticeGroup; jobReferences: string[]; bookingIds: string[]; subject: string; text: string }[];
   sent: boolean;
+  /** Who the notices come from: the firm's name (From), its Reply-To ('' for none) and the address that signs them. */
+  sender: { name: string; replyTo: string; address: string };
 };

@@ -43,4 +43,12 @@ export const impactAssessmentPayload = z.object({
   assessment: z.enum(impactAssessments, { message: `must be one of ${impactAssessments.join(', ')}` }),
   note: text(2000).optional(),
 });
-export const noticePayload = z.object({ send: z.boolean().default(false) });
+/** A notice as the person edited it before sending; matched to its draft by address and group. */
+const editedNotice = z.object({
+  to: z.string().max(254),
+  group: z.enum([...impactAssessments, 'pending'], { message: 'must be a notice group' }),
+  subject: text(200).min(1, 'a notice needs a subject'),
+  text: text(20_000).min(1, 'a notice needs its text'),
+});
+export const noticePayload = z.object({ send: z.boolean().default(false), notices: z.array(editedNotice).max(200).optional() });
+export type NoticeEdit = z.infer<typeof editedNotice>;

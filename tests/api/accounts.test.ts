@@ -41,7 +41,7 @@ describe('invitations', () => {
 
     const mail = await mailedLink('ilse.farrow@demo.test', 'join');
     expect(mail.subject).toMatch(/Brackenmoor Dimensional Works/);
-    expect(mail.text_body).toMatch(/on behalf of Brackenmoor Dimensional Works/);
+    expect(mail.text_body).toMatch(/Sent with Nestkeeper for Brackenmoor Dimensional Works/);
     expect(mail.text_body).toMatch(/Did not expect this\? Ignore this mail/);
     // Only the SHA-256 of the secret is stored.
     const [stored] = await t.db.query(`SELECT token_hash FROM account_links WHERE email = 'ilse.farrow@demo.test'`);

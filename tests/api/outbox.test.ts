@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Scoped } from '../../server/db/scoped';
 import { pgSinkStore, startSmtpSink, type SmtpSink } from '../../server/fakes/smtp-sink';
 import { backoffSeconds, deliverOutbox } from '../../server/notifications/outbox-sender';
+import { letterTemplate } from '../../server/notifications/mail-template';
 import { enqueueMail } from '../../server/notifications/outbox';
 import { Organization } from '../../server/organizations/organization.entity';
 import { bearer, createTestApp, type TestApp } from '../support/test-app';
@@ -28,9 +29,7 @@ afterAll(async () => {
 
 async function queueOne(subject: string) {
   const org = await t.db.getRepository(Organization).findOneByOrFail({ name: 'Brackenmoor Dimensional Works' });
-  return t.db.transaction((m) =>
-    enqueueMail(new Scoped(m, org.id), ['manager@demo.test'], { subject, heading: subject, paragraphs: ['A check of the outbox.'] }),
-  );
+  return t.db.transaction((m) => enqueueMail(new Scoped(m, org.id), ['manager@demo.test'], letterTemplate, { subject, text: 'A check of the outbox.' }));
 }
 
 const sinkCount = async (messageId: string) =>

@@ -1,10 +1,7 @@
-import nodemailer from 'nodemailer';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startSmtpSink, type SinkMessage } from '../../server/fakes/smtp-sink';
-import { deliverOutbox } from '../../server/notifications/outbox-sender';
 import { startBrowserRig, type BrowserRig } from '../support/browser';
 import { signedIn } from '../support/browser-session';
-import { eventually } from '../support/eventually';
+import { eventually, waitUntil } from '../support/eventually';
 
 let rig: BrowserRig;
 beforeAll(async () => {
@@ -13,7 +10,7 @@ beforeAll(async () => {
 afterAll(() => rig?.close());
 
 describe("the owner's impact triage in a real browser", () => {
-  it('opens the review from home, accepts the suggested triage, and sends two different notices that reach the SMTP sink', async () => {
+  it('opens the review from home, accepts the suggested triage, and edits one of the two notices, sends both after one confirmation, and finds the edited words in the SMTP sink', async () => {
     // Arrange: the demo's TRK-001 review (9.5 µm as found) lists job J-2611 (±25 µm). Add a use on J-2620 (±100 µm) inside its window.
     const [review] = await rig.db.query(
       `SELECT r.id, r.asset_id, to_char(r.found_on - 20, 'YYYY-MM-DD') AS starts, to_char(r.found_on - 16, 'YYYY-MM-DD') AS ends
@@ -49,29 +46,41 @@ describe("the owner's impact triage in a real browser", () => {
     expect(await page.getByLabel('Assessment: J-2611').inputValue()).toBe('remeasure_offered');
     expect(await page.getByLabel('Assessment: J-2620').inputValue()).toBe('no_effect');
 
-    await page.getByRole('button', { name: 'Send notices' }).click();
-    await page.getByText('2 notices queued').waitFor();
+    // Draft, read and edit the notice to Quarrington Rail, then send both after one confirmation.
+    await page.getByRole('button', { name: 'Draft notices' }).click();
+    const text = page.getByLabel('Text of the notice to works@quarrington-rail.test');
+    expect(await text.inputValue()).toMatch(
+      /^Dear .+,\n\nOn \d{1,2} [A-Z][a-z]{2} \d{4} the calibration laboratory found that the laser tracker TRK-001, serial \S+, was out of tolerance/,
+    );
+    await text.fill(`${await text.inputValue()}\n\nOur engineer Tamsin Vell will ring you this week to go through the figures.`);
+    await page.getByLabel('Subject of the notice to works@quarrington-rail.test').fill('TRK-001 and your job J-2620: no effect on your results is likely');
+    await page.getByRole('button', { name: 'Send 2 notices…' }).click();
+    const confirm = page.getByRole('dialog', { name: 'Send 2 notices?' });
+    await confirm.getByText(/2 notices go to quality@larkspur-aero\.test and works@quarrington-rail\.test; sent from Brackenmoor Dimensional Works/).waitFor();
+    await confirm.getByRole('button', { name: 'Send now' }).click();
+    await page.getByText(/^2 notices queued at /).waitFor();
+    await page.getByText('works@quarrington-rail.test: waiting to send').waitFor();
 
-    const received: SinkMessage[] = [];
-    const sink = await startSmtpSink({ port: 0, store: async (m) => void received.push(m) });
-    try {
-      const transport = nodemailer.createTransport({ host: '127.0.0.1', port: sink.port, secure: false, ignoreTLS: true });
-      await eventually(async () => {
-        await deliverOutbox(rig.db, transport, 'Brackenmoor Dimensional Works <no-reply@nestkeeper.test>');
-        return received.length;
-      }).toBe(2);
-    } finally {
-      await sink.close();
-    }
-    const to = (address: string) => received.find((m) => m.to.includes(address))!;
+    await rig.deliverMail();
+    type Received = { recipients: string[]; subject: string; text: string; headers: Record<string, string> };
+    const rows = await waitUntil('both notices in the SMTP sink', async () => {
+      const found: Received[] = await rig.db.query(
+        `SELECT recipients, subject, text_body AS text, headers FROM mail_sink_messages WHERE subject LIKE '%TRK-001%'`,
+      );
+      return found.length === 2 ? found : null;
+    });
+    const to = (address: string) => rows.find((m) => m.recipients.includes(address))!;
     const remeasure = to('quality@larkspur-aero.test');
     const noEffect = to('works@quarrington-rail.test');
+    expect(remeasure.headers.from).toMatch(/Brackenmoor Dimensional Works"? <no-reply@/);
     expect(remeasure.subject).toMatch(/J-2611\): we propose a re-measurement/);
-    expect(remeasure.text).toMatch(/9\.5 µm against your tolerance of 25\.0 µm; up to 6\.2 µm would be a quarter of it/);
-    expect(remeasure.text).toMatch(/re-measure the affected features at no cost to you/);
-    expect(noEffect.subject).toMatch(/J-2620\): no effect on your results is likely/);
-    expect(noEffect.text).toMatch(/9\.5 µm against your tolerance of 100\.0 µm; up to 25\.0 µm would be a quarter of it/);
-    expect(noEffect.text).toMatch(/we believe your results stand/);
+    const flat = (s: string) => s.replace(/\s+/g, ' ');
+    expect(flat(remeasure.text)).toMatch(/9\.5 µm against your tolerance of 25\.0 µm; up to 6\.2 µm would be a quarter of it/);
+    expect(flat(remeasure.text)).toMatch(/re-measure the affected features at no cost to you/);
+    expect(noEffect.subject).toBe('TRK-001 and your job J-2620: no effect on your results is likely');
+    expect(flat(noEffect.text)).toMatch(/9\.5 µm against your tolerance of 100\.0 µm; up to 25\.0 µm would be a quarter of it/);
+    expect(flat(noEffect.text)).toMatch(/Our engineer Tamsin Vell will ring you this week to go through the figures\./);
+    await page.getByText(/^works@quarrington-rail\.test: sent \d/).waitFor();
     const kept = await rig.db.query(`SELECT triage->>'suggestion' AS s, triage->>'ratio' AS ratio FROM impact_review_items WHERE review_id = $1 ORDER BY 1`, [
       review.id,
     ]);

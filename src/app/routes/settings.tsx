@@ -8,6 +8,7 @@ import { FirmVoiceForm } from '../../features/settings/components/firm-voice-for
 import { IntervalPolicyForm } from '../../features/settings/components/interval-policy-form';
 import { ProvidersForm } from '../../features/settings/components/providers-form';
 import { InvoiceIssuerForm } from '../../features/settings/components/invoice-issuer-form';
+import { MailForm } from '../../features/settings/components/mail-form';
 import { RentalTermsForm } from '../../features/settings/components/rental-terms-form';
 import { SettingsForm } from '../../features/settings/components/settings-form';
 import { SignInPolicyForm } from '../../features/settings/components/sign-in-policy-form';
@@ -50,6 +51,9 @@ export default function SettingsRoute() {
             </SettingsSection>
             <SettingsSection title="Invoice details">
               <InvoiceIssuerForm settings={settings.data} />
+            </SettingsSection>
+            <SettingsSection title="Mail">
+              <MailForm settings={settings.data} />
             </SettingsSection>
             <SettingsSection title="Signing in">
               <SignInPolicyForm settings={settings.data} />

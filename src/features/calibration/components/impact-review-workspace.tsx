@@ -7,11 +7,11 @@ import { StatusChip } from '../../../components/status-chip';
 import { formatCalendarDate, formatDateRange, formatDateTime, formatUm } from '../../../lib/format';
 import { useAssessImpactBooking } from '../api/assess-impact-booking';
 import { useCloseImpactReview } from '../api/close-impact-review';
-import { useCreateImpactNotices } from '../api/create-impact-notices';
-import type { ImpactAssessment, ImpactBookingView, ImpactNoticesView, ImpactReviewView } from '../../../../shared/calibration/views';
+import type { ImpactAssessment, ImpactBookingView, ImpactReviewView } from '../../../../shared/calibration/views';
 import { assessmentForSuggestion, allowanceWords, type TriageFacts } from '../../../../shared/calibration/triage';
 import { useAcceptImpactSuggestions } from '../api/accept-impact-suggestions';
 import { assessmentChoices, assessmentWords, noticeGroupWords, SuggestionChip } from './calibration-words';
+import { ImpactNoticesPanel } from './impact-notices-panel';
 
 /** "Every job that used TRK-001 between its last passing evidence on … and the finding on …" */
 export function impactScope(review: ImpactReviewView, tag: string): string {
@@ -65,7 +65,11 @@ function BookingAssessment({ review, booking, canAssess }: { review: ImpactRevie
         <Triage booking={booking} />
         <p className="text-sm text-ink-700">
           {booking.contactEmail ? `Contact: ${booking.contactEmail}` : 'No contact e-mail on the job: tell the customer another way.'}
-          {booking.noticeQueuedAt ? ` · Notice queued ${formatDateTime(booking.noticeQueuedAt)}` : ''}
+          {booking.noticeSentAt
+            ? ` · Notice sent ${formatDateTime(booking.noticeSentAt)}`
+            : booking.noticeQueuedAt
+              ? ` · Notice queued ${formatDateTime(booking.noticeQueuedAt)}, waiting to send`
+              : ''}
         </p>
       </div>
       <div className="flex flex-col gap-1">
@@ -110,27 +114,6 @@ function BookingAssessment({ review, booking, canAssess }: { review: ImpactRevie
   );
 }
 
-function Drafts({ drafts }: { drafts: ImpactNoticesView['drafts'] }) {
-  return (
-    <ul className="flex flex-col gap-3">
-      {drafts.map((d) => (
-        <li key={`${d.to}-${d.group}`} className="rounded-md border border-paper-line p-3">
-          <p className="text-sm">
-            <span className="font-semibold">To:</span> {d.customerName ? `${d.customerName} <${d.to}>` : d.to}
-          </p>
-          <p className="text-sm">
-            <span className="font-semibold">Notice:</span> {noticeGroupWords[d.group]} ({d.jobReferences.join(', ')})
-          </p>
-          <p className="text-sm">
-            <span className="font-semibold">Subject:</span> {d.subject}
-          </p>
-          <p className="mt-2 whitespace-pre-line text-sm">{d.text}</p>
-        </li>
-      ))}
-    </ul>
-  );
-}
-
 /** What the triage weighs and by which rule, so the owner (and later an auditor) reads why each suggestion was made. */
 function TriageRule({ review }: { review: ImpactReviewView }) {
   const { errorUm, source } = review.asFound;
@@ -158,14 +141,12 @@ function TriageRule({ review }: { review: ImpactReviewView }) {
 
 /** Work through an impact review: assess each booking, draft and send the customer notices, close. */
 export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: ImpactReviewView; tag: string; canAssess: boolean }) {
-  const notices = useCreateImpactNotices(review.assetId);
   const close = useCloseImpactReview();
   const accept = useAcceptImpactSuggestions();
   const unassessed = review.bookings.filter((b) => !b.assessment).length;
   const total = review.bookings.length;
   const done = review.assessedCount;
   const open = review.state === 'open';
-  const result = notices.data;
 
   return (
     <div className="flex flex-col gap-4">
@@ -204,55 +185,7 @@ export function ImpactReviewWorkspace({ review, tag, canAssess }: { review: Impa
         </ul>
       </Panel>
 
-      {canAssess ? (
-        <Panel title="Customer notices">
-          <p className="mb-3 text-sm text-ink-700">
-            One notice per customer and assessment, for customers with a contact e-mail: it says what was found and what we propose. Draft them to read first;
-            sending queues them in the outbox.
-          </p>
-          <div className="mb-3 flex flex-wrap gap-2">
-            <Button
-              busy={notices.isPending && notices.variables?.send === false}
-              disabled={notices.isPending}
-              onClick={() => notices.mutate({ reviewId: review.id, send: false })}
-            >
-              Draft notices
-            </Button>
-            <Button
-              variant="primary"
-              busy={notices.isPending && notices.variables?.send === true}
-              disabled={notices.isPending || !open}
-              onClick={() => notices.mutate({ reviewId: review.id, send: true })}
-            >
-              Send notices
-            </Button>
-          </div>
-          {notices.isError ? <Notice tone="error">{notices.error.message}</Notice> : null}
-          {result ? (
-            result.drafts.length === 0 ? (
-              <Notice tone="info" title="No notice to send">
-                None of these bookings has a customer contact e-mail. Tell the customers another way and note it on each booking.
-              </Notice>
-            ) : (
-              <div className="flex flex-col gap-2">
-                {result.sent ? (
-                  <Notice tone="success" title={`${result.drafts.length} ${result.drafts.length === 1 ? 'notice' : 'notices'} queued`}>
-                    They leave with the next outbox run.{' '}
-                    <Link to="/mailbox" className="font-semibold underline">
-                      See the mailbox
-                    </Link>
-                  </Notice>
-                ) : (
-                  <p className="font-semibold">
-                    {result.drafts.length} {result.drafts.length === 1 ? 'draft' : 'drafts'} — nothing has been sent yet.
-                  </p>
-                )}
-                <Drafts drafts={result.drafts} />
-              </div>
-            )
-          ) : null}
-        </Panel>
-      ) : null}
+      {canAssess ? <ImpactNoticesPanel review={review} /> : null}
 
       {canAssess && open ? (
         <div className="flex flex-wrap items-center gap-3">

@@ -26,6 +26,8 @@ export interface UpdateSettingsInput {
   issuer?: InvoiceIssuer;
   /** Owners and billing clerks must sign in with a second step. */
   secondStepRequired?: boolean;
+  /** Where replies to the firm's mail go ('' for none). */
+  mailReplyTo?: string;
 }
 
 export function updateSettings(input: UpdateSettingsInput): Promise<OrganizationSettingsView> {

@@ -12,7 +12,8 @@ import { SESSION_COOKIE, TOKEN_LIFETIME_SECONDS, type TokenClaims } from './toke
 type SessionCheck = { role: Actor['role']; disabled: boolean; token_version: number; ended: boolean; stale: boolean; owed: boolean };
 
 /** One row per request: the person, their sign-in's row (`jti`), and whether the firm requires a second step they lack. */
-const SESSION_CHECK = `
+/** The per-request sign-in check (exported for the prepared-statement benchmark). */
+export const SESSION_CHECK = `
   SELECT u.role, u.disabled, u.token_version, s.ended_at IS NOT NULL AS ended, s.last_seen_at < now() - interval '1 minute' AS stale,
          (u.totp_enabled_at IS NULL AND u.role = ANY($4::text[]) AND coalesce((o.settings->>'secondStepRequired')::boolean, false)) AS owed
     FROM users u

@@ -44,6 +44,19 @@ export function conflictingItems(tx: Scoped, assetIds: string[], startsOn: strin
   );
 }
 
+/** The availability statement (exported for the prepared-statement benchmark); $1 is the organization. */
+export const AVAILABLE_ASSETS = `SELECT a.id, a.asset_tag AS "assetTag", a.type, a.model, to_char(a.due_on, 'YYYY-MM-DD') AS "dueOn", k.name AS "kitName"
+       FROM assets a LEFT JOIN kits k ON k.id = a.kit_id
+      WHERE a.organization_id = $1 AND ($2::text IS NULL OR a.type = $2)
+        AND a.status NOT IN ('retired', 'held', 'at_lab')
+        AND (NOT a.calibration_required OR a.due_on >= $4::date)
+        AND NOT (a.id = ANY($5))
+        AND NOT EXISTS (SELECT 1 FROM booking_items bi
+                         WHERE bi.asset_id = a.id AND bi.active AND bi.ends_on >= $3::date AND bi.starts_on <= $4::date)
+        AND NOT ${TIP_NOT_VALIDATED('a')}
+      ORDER BY a.kit_id IS NOT NULL, a.asset_tag
+      LIMIT $6`;
+
 /**
  * Assets of a type that are free and valid for the whole window (GET /api/availability,
  * and the alternatives a refusal offers). The booking rule written as a filter, so
@@ -56,17 +69,7 @@ export function conflictingItems(tx: Scoped, assetIds: string[], startsOn: strin
 export function availableAssets(tx: Scoped, opts: { type?: string; startsOn: string; endsOn: string; exclude?: string[]; limit: number }) {
   return tx.prepared<{ id: string; assetTag: string; type: string; model: string | null; dueOn: string | null; kitName: string | null }>(
     'available_assets',
-    `SELECT a.id, a.asset_tag AS "assetTag", a.type, a.model, to_char(a.due_on, 'YYYY-MM-DD') AS "dueOn", k.name AS "kitName"
-       FROM assets a LEFT JOIN kits k ON k.id = a.kit_id
-      WHERE a.organization_id = $1 AND ($2::text IS NULL OR a.type = $2)
-        AND a.status NOT IN ('retired', 'held', 'at_lab')
-        AND (NOT a.calibration_required OR a.due_on >= $4::date)
-        AND NOT (a.id = ANY($5))
-        AND NOT EXISTS (SELECT 1 FROM booking_items bi
-                         WHERE bi.asset_id = a.id AND bi.active AND bi.ends_on >= $3::date AND bi.starts_on <= $4::date)
-        AND NOT ${TIP_NOT_VALIDATED('a')}
-      ORDER BY a.kit_id IS NOT NULL, a.asset_tag
-      LIMIT $6`,
+    AVAILABLE_ASSETS,
     [opts.type ?? null, opts.startsOn, opts.endsOn, opts.exclude ?? [], opts.limit],
   );
 }

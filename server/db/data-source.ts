@@ -19,7 +19,14 @@ export function createDataSource(url: string, entities: DataSourceOptions['entit
     // Tests provoke constraint violations on purpose; elsewhere a failed query is worth a log line.
     logging: process.env.NODE_ENV === 'test' ? false : ['error'],
     // A request waits at most this long for a connection; then it is answered 503 rather than left hanging.
-    extra: { max: poolSize, connectionTimeoutMillis: 10_000 },
+    extra: {
+      max: poolSize,
+      connectionTimeoutMillis: 10_000,
+      // Decided by `npm run bench:calibration` at 100,000 assets / 1,000,000 bookings (DEVELOPERS.md, performance):
+      // the app's statements are short, and JIT compiling the larger ones (review CSV, audit pack) cost more than it saved;
+      // parallel workers on a small machine take the cores other requests need (review CSV 965 → 605 ms with both off).
+      options: '-c jit=off -c max_parallel_workers_per_gather=0',
+    },
   });
 }
 

@@ -6,7 +6,10 @@
 // that folder instead of a throwaway one, so several suites can run on one seeded firm (the seeds skip what is there).
 const suites = {
   fleet: { seed: [], run: ['tests/bench/fleet-load.ts'] },
-  bookings: { seed: ['server/seed/seed-bench-bookings.ts'], run: ['tests/bench/bookings-load.ts', 'tests/bench/prepared-statements.ts', 'tests/bench/board-drawing.ts'] },
+  bookings: {
+    seed: ['server/seed/seed-bench-bookings.ts'],
+    run: ['tests/bench/bookings-load.ts', 'tests/bench/prepared-statements.ts', 'tests/bench/board-drawing.ts'],
+  },
   calibration: { seed: ['server/seed/seed-bench-bookings.ts'], run: ['tests/bench/calibration-load.ts'] },
   // The reset limits are lifted so the rounds measure the answer, not the 429.
   accounts: {
